@@ -1,0 +1,41 @@
+export { EXACT_FACTORS } from './exact-factors';
+export {
+  MEASURE_UNITS,
+  convertValue,
+  findUnit,
+  findUnitByText,
+  parseUnitFromHeader,
+  type MeasureDimension,
+  type MeasureUnit,
+  type ParsedHeader,
+} from './units';
+export { plotSurfaceAreaM2, type PlotGeometry } from './plot-geometry';
+export {
+  RATE_UNITS,
+  findRateUnit,
+  type MassRateUnit,
+  type RateUnit,
+  type RateUnitDefinition,
+  type VolumeRateUnit,
+} from './rate-units';
+export { RATE_PLAUSIBILITY_LIMITS, rateWarnings, type MaterialKind } from './rate-plausibility';
+export {
+  computeDose,
+  trialTotal,
+  type DoseBasis,
+  type DoseInput,
+  type DoseResult,
+  type TrialTotal,
+  type TrialTotalInput,
+} from './rates';
+export { infiltrationRate, type InfiltrationInput, type InfiltrationRate } from './infiltration';
+export {
+  TRIAL_DESIGNS,
+  plotLabelPrefix,
+  randomizeSite,
+  seedFromText,
+  type PlotAssignment,
+  type SiteRandomizationInput,
+  type TrialDesign,
+} from './randomize';
+export { DESIGN_MINIMUMS, designWarnings, type DesignCheckInput } from './design-checks';
