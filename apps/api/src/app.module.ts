@@ -1,0 +1,44 @@
+import { Module } from '@nestjs/common';
+import { ConfigModule, type ConfigType } from '@nestjs/config';
+import { APP_FILTER, APP_GUARD } from '@nestjs/core';
+import { SequelizeModule } from '@nestjs/sequelize';
+import { resolve } from 'node:path';
+import { AuthModule } from './auth/auth.module';
+import { AccessGuard } from './auth/guards/access.guard';
+import { JwtAuthGuard } from './auth/guards/jwt-auth.guard';
+import { ProblemFilter } from './common/filters/problem.filter';
+import { appConfig } from './config/app.config';
+import { authConfig } from './config/auth.config';
+import { databaseConfig } from './config/database.config';
+import { sequelizeOptions } from './database/sequelize-options';
+import { HealthModule } from './health/health.module';
+import { TrialsModule } from './trials/trials.module';
+import { UsersModule } from './users/users.module';
+
+@Module({
+  imports: [
+    ConfigModule.forRoot({
+      isGlobal: true,
+      envFilePath: [resolve(__dirname, '../../../.env')],
+      load: [appConfig, databaseConfig, authConfig],
+    }),
+    SequelizeModule.forRootAsync({
+      inject: [databaseConfig.KEY],
+      useFactory: (config: ConfigType<typeof databaseConfig>) => ({
+        ...sequelizeOptions(config),
+        autoLoadModels: true,
+        synchronize: false,
+      }),
+    }),
+    AuthModule,
+    UsersModule,
+    TrialsModule,
+    HealthModule,
+  ],
+  providers: [
+    { provide: APP_GUARD, useClass: JwtAuthGuard },
+    { provide: APP_GUARD, useClass: AccessGuard },
+    { provide: APP_FILTER, useClass: ProblemFilter },
+  ],
+})
+export class AppModule {}

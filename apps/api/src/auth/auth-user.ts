@@ -1,0 +1,24 @@
+import type { Request } from 'express';
+import type { TrialRole } from '../trials/models/trial-membership.model';
+
+/** The signed-in person attached to each request by the JWT strategy. */
+export interface AuthUser {
+  id: number;
+  email: string;
+  name: string;
+  isAdmin: boolean;
+}
+
+export interface TrialAccessContext {
+  trialId: number;
+  roles: TrialRole[];
+  /** Sites a collaborator is assigned to (empty for other roles). */
+  siteIds: number[];
+  /** True when the caller is an administrator without a role on the trial (read-only). */
+  adminReadOnly: boolean;
+}
+
+export interface AuthenticatedRequest extends Request {
+  user: AuthUser;
+  trialAccess?: TrialAccessContext;
+}

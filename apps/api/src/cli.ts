@@ -1,0 +1,48 @@
+import 'reflect-metadata';
+import { Sequelize } from 'sequelize-typescript';
+import { readDatabaseConfig } from './config/database.config';
+import { allModels } from './database/models';
+import { createMigrator } from './database/migrator';
+import { sequelizeOptions } from './database/sequelize-options';
+import { loadDemoScenario } from './demo/demo-scenario';
+
+const usage = `usage: node dist/cli.js migrate up|down|down-all|status
+       node dist/cli.js demo load`;
+
+async function main(args: string[]): Promise<void> {
+  const sequelize = new Sequelize({ ...sequelizeOptions(readDatabaseConfig()), models: allModels });
+  try {
+    const [area, action] = args;
+    if (area === 'migrate') {
+      const migrator = createMigrator(sequelize, { info: () => undefined, warn: console.warn, error: console.error });
+      if (action === 'up') {
+        const done = await migrator.up();
+        console.log(done.length ? `applied ${done.length} migration(s): ${done.map((m) => m.name).join(', ')}` : 'schema is up to date');
+      } else if (action === 'down') {
+        const done = await migrator.down();
+        console.log(`reverted ${done.map((m) => m.name).join(', ') || 'nothing'}`);
+      } else if (action === 'down-all') {
+        const done = await migrator.down({ to: 0 });
+        console.log(`reverted ${done.length} migration(s)`);
+      } else if (action === 'status') {
+        const pending = await migrator.pending();
+        const executed = await migrator.executed();
+        console.log(`executed: ${executed.length}, pending: ${pending.map((m) => m.name).join(', ') || 'none'}`);
+      } else {
+        throw new Error(usage);
+      }
+    } else if (area === 'demo' && action === 'load') {
+      const { created } = await loadDemoScenario(sequelize, process.env.DEMO_PASSWORD || 'friable-demo');
+      console.log(created ? `demo scenario loaded (${created} new records)` : 'demo scenario already loaded');
+    } else {
+      throw new Error(usage);
+    }
+  } finally {
+    await sequelize.close();
+  }
+}
+
+main(process.argv.slice(2)).catch((error: unknown) => {
+  process.stderr.write(`${error instanceof Error ? error.message : String(error)}\n`);
+  process.exit(1);
+});

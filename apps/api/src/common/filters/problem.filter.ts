@@ -1,0 +1,64 @@
+import { ArgumentsHost, Catch, HttpException, HttpStatus, Logger, type ExceptionFilter } from '@nestjs/common';
+import type { Response } from 'express';
+import { UniqueConstraintError, ValidationError as SequelizeValidationError } from 'sequelize';
+import type { ProblemBody } from '@friable/contracts';
+
+const reasonPhrases: Record<number, string> = {
+  400: 'Bad Request',
+  401: 'Unauthorized',
+  403: 'Forbidden',
+  404: 'Not Found',
+  409: 'Conflict',
+  413: 'Payload Too Large',
+  422: 'Unprocessable Entity',
+  429: 'Too Many Requests',
+  500: 'Internal Server Error',
+  503: 'Service Unavailable',
+};
+
+function problem(statusCode: number, message: string, extra: Partial<ProblemBody> = {}): ProblemBody {
+  return { statusCode, error: reasonPhrases[statusCode] ?? 'Error', message, ...extra };
+}
+
+/** Turns every error into a plain answer: no stack trace, SQL text or internal path reaches a client. */
+export function toProblem(exception: unknown): ProblemBody {
+  if (exception instanceof HttpException) {
+    const status = exception.getStatus();
+    const body = exception.getResponse();
+    if (typeof body === 'string') return problem(status, body);
+    const { message, errors } = body as { message?: unknown; errors?: ProblemBody['errors'] };
+    const text = Array.isArray(message) ? message.join('; ') : typeof message === 'string' ? message : exception.message;
+    return problem(status, text, errors ? { errors } : {});
+  }
+  if (exception instanceof UniqueConstraintError) {
+    const fields = Object.keys(exception.fields ?? {}).filter((f) => !/^(PRIMARY|.*_unique.*)$/.test(f));
+    const field = fields[0];
+    return problem(409, field ? `Another record already uses this ${field}.` : 'That record already exists.', {
+      errors: field ? [{ field, message: `${field} is already taken` }] : undefined,
+    });
+  }
+  if (exception instanceof SequelizeValidationError) {
+    return problem(422, 'Please correct the highlighted fields.', {
+      errors: exception.errors.map((e) => ({ field: e.path ?? undefined, message: e.message })),
+    });
+  }
+  const type = (exception as { type?: string } | null)?.type;
+  if (type === 'entity.parse.failed') return problem(400, 'The request body is not valid JSON.');
+  if (type === 'entity.too.large') return problem(413, 'The request body is too large.');
+  return problem(500, 'Something went wrong on the server. The error was logged; please try again.');
+}
+
+@Catch()
+export class ProblemFilter implements ExceptionFilter {
+  private readonly logger = new Logger('Errors');
+
+  catch(exception: unknown, host: ArgumentsHost): void {
+    const response = host.switchToHttp().getResponse<Response>();
+    const body = toProblem(exception);
+    if (body.statusCode >= HttpStatus.INTERNAL_SERVER_ERROR) {
+      this.logger.error(exception instanceof Error ? (exception.stack ?? exception.message) : String(exception));
+    }
+    if (response.headersSent) return;
+    response.status(body.statusCode).json(body);
+  }
+}

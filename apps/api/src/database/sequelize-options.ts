@@ -1,0 +1,22 @@
+import * as mariadb from 'mariadb';
+import type { SequelizeOptions } from 'sequelize-typescript';
+import type { DatabaseConfig } from '../config/database.config';
+
+/** Connection options shared by the Nest module, the command line and the tests. */
+export function sequelizeOptions(config: DatabaseConfig): SequelizeOptions {
+  return {
+    dialect: 'mariadb',
+    // Handed over explicitly so Sequelize uses the driver version this package pins.
+    dialectModule: mariadb,
+    host: config.host,
+    port: config.port,
+    database: config.database,
+    username: config.username,
+    password: config.password,
+    logging: false,
+    pool: { max: config.poolMax, min: 0, idle: 10_000 },
+    define: { underscored: true, timestamps: true },
+    dialectOptions: { connectTimeout: 5_000 },
+    timezone: '+00:00',
+  };
+}

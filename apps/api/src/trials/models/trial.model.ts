@@ -1,0 +1,37 @@
+import { TRIAL_DESIGNS, TRIAL_STATUSES, type TrialDesign, type TrialStatus } from '@friable/contracts';
+import { BelongsTo, Column, DataType, ForeignKey, HasMany, Model, Table } from 'sequelize-typescript';
+import { User } from '../../users/models/user.model';
+import { TrialMembership } from './trial-membership.model';
+
+export { TRIAL_DESIGNS, TRIAL_STATUSES, type TrialDesign, type TrialStatus };
+
+@Table({ tableName: 'trials' })
+export class Trial extends Model {
+  @Column({ type: DataType.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true })
+  declare id: number;
+
+  @Column({ type: DataType.STRING(20), allowNull: false, unique: true })
+  declare code: string;
+
+  @Column({ type: DataType.STRING(200), allowNull: false })
+  declare title: string;
+
+  @Column({ type: DataType.STRING(20), allowNull: false, defaultValue: 'rcbd' })
+  declare design: TrialDesign;
+
+  @Column({ type: DataType.STRING(12), allowNull: false, defaultValue: 'draft' })
+  declare status: TrialStatus;
+
+  @ForeignKey(() => User)
+  @Column({ type: DataType.INTEGER.UNSIGNED, allowNull: true, field: 'created_by' })
+  declare createdBy: number | null;
+
+  @BelongsTo(() => User, 'created_by')
+  declare creator?: User;
+
+  @HasMany(() => TrialMembership)
+  declare memberships?: TrialMembership[];
+
+  declare createdAt: Date;
+  declare updatedAt: Date;
+}

@@ -1,0 +1,30 @@
+import { Injectable } from '@nestjs/common';
+import { InjectModel } from '@nestjs/sequelize';
+import type { AuthUser, TrialAccessContext } from '../auth/auth-user';
+import { Trial } from './models/trial.model';
+import { TrialMembership } from './models/trial-membership.model';
+
+@Injectable()
+export class TrialMembershipsService {
+  constructor(
+    @InjectModel(TrialMembership) private readonly memberships: typeof TrialMembership,
+    @InjectModel(Trial) private readonly trials: typeof Trial,
+  ) {}
+
+  /** The caller's roles on a trial; null when the trial does not exist or the caller may not see it. */
+  async accessFor(user: AuthUser, trialId: number): Promise<TrialAccessContext | null> {
+    const rows = await this.memberships.findAll({ where: { trialId, userId: user.id } });
+    if (rows.length) {
+      return {
+        trialId,
+        roles: [...new Set(rows.map((r) => r.role))],
+        siteIds: rows.filter((r) => r.role === 'collaborator' && r.siteId !== null).map((r) => r.siteId as number),
+        adminReadOnly: false,
+      };
+    }
+    if (user.isAdmin && (await this.trials.count({ where: { id: trialId } })) > 0) {
+      return { trialId, roles: [], siteIds: [], adminReadOnly: true };
+    }
+    return null;
+  }
+}

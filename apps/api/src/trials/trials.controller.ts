@@ -1,0 +1,39 @@
+import { Body, Controller, Get, Patch, Post } from '@nestjs/common';
+import { ApiConflictResponse, ApiTags } from '@nestjs/swagger';
+import type { AuthUser, TrialAccessContext } from '../auth/auth-user';
+import { AnyTrialMember, SignedIn, TrialAccess } from '../common/decorators/access.decorator';
+import { CurrentTrialAccess, CurrentUser } from '../common/decorators/current-user.decorator';
+import { CreateTrialDto } from './dto/create-trial.dto';
+import { UpdateTrialDto } from './dto/update-trial.dto';
+import { TrialsService } from './trials.service';
+
+@ApiTags('trials')
+@Controller('trials')
+export class TrialsController {
+  constructor(private readonly trials: TrialsService) {}
+
+  @Get()
+  @SignedIn()
+  list(@CurrentUser() user: AuthUser) {
+    return this.trials.listFor(user);
+  }
+
+  @Post()
+  @SignedIn()
+  @ApiConflictResponse({ description: 'The code is already used by another trial.' })
+  create(@Body() body: CreateTrialDto, @CurrentUser() user: AuthUser) {
+    return this.trials.create(body, user);
+  }
+
+  @Get(':trialId')
+  @AnyTrialMember()
+  get(@CurrentTrialAccess() access: TrialAccessContext) {
+    return this.trials.get(access);
+  }
+
+  @Patch(':trialId')
+  @TrialAccess('investigator')
+  update(@CurrentTrialAccess() access: TrialAccessContext, @Body() body: UpdateTrialDto) {
+    return this.trials.update(access, body);
+  }
+}
