@@ -33,7 +33,8 @@ function format(value: number): string {
  * meant (a tenfold overdose) before anyone weighs out amendment.
  * Reference: `RATE_PLAUSIBILITY_LIMITS` (common practice); DOMAIN.md, gypsum rates.
  * Throws: nothing.
- * Example: `rateWarnings(findRateUnit('lb/100ft2')!, 40, 'gypsum')` → one sentence about gypsum
+ * Example: `rateWarnings(findRateUnit('lb/100ft2')!, 40, 'gypsum')` → two sentences: 400 lb/1,000 ft²
+ * of gypsum is far above 20–50 lb/1,000 ft², and a reminder to check the per-100 ft² unit
  */
 export function rateWarnings(
   unit: RateUnitDefinition,

@@ -29,7 +29,7 @@ function rateUnit(id: RateUnit, label: string, kind: 'mass' | 'volume', perSquar
  * metric tonne, `ton` the US short ton (2,000 lb). A depth of 1 cm over 1 m² is 10 L.
  * Reference: NIST SP 811 (2008), Appendix B, via `EXACT_FACTORS`; DOMAIN.md derived factors.
  * Throws: nothing (constant list).
- * Example: `RATE_UNITS.find((u) => u.id === 'lb/1000ft2')?.perSquareMetre` → 4.882427636383051
+ * Example: `RATE_UNITS.find((u) => u.id === 'lb/1000ft2')?.perSquareMetre` → 4.88242763638305
  */
 export const RATE_UNITS: readonly RateUnitDefinition[] = Object.freeze([
   rateUnit('lb/100ft2', 'pounds per 100 square feet', 'mass', gramsPerPound / (100 * squareMetresPerSquareFoot)),

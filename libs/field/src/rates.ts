@@ -156,7 +156,7 @@ export interface TrialTotal {
  * Reference: arithmetic; pound NIST SP 811.
  * Throws: RangeError naming the field for a negative dose, fewer than 1 plot (or a
  * fractional count) or a negative margin.
- * Example: `trialTotal({ dosePerPlotGrams: 13.8, plots: 12, marginPercent: 10 }).grams` → 182.16
+ * Example: `trialTotal({ dosePerPlotGrams: 13.8, plots: 12, marginPercent: 10 }).grams` → 182.16 (rounded)
  */
 export function trialTotal(input: TrialTotalInput): TrialTotal {
   const dose = requireNonNegative('trialTotal', 'dosePerPlotGrams', input.dosePerPlotGrams);

@@ -184,7 +184,7 @@ export function findUnitByText(text: string): MeasureUnit | undefined {
  * Reference: factors from NIST SP 811, Appendix B (see `MEASURE_UNITS`).
  * Throws: RangeError when the value is not finite, a unit id is unknown, or the two units
  * measure different dimensions.
- * Example: `convertValue(300, 'psi', 'MPa')` → 2.068427187950508
+ * Example: `convertValue(300, 'psi', 'MPa')` → 2.0684271879505083
  */
 export function convertValue(value: number, fromUnitId: string, toUnitId: string): number {
   if (typeof value !== 'number' || !Number.isFinite(value)) {
