@@ -1,0 +1,23 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { createTestApp, type TestApp } from '../support/test-app';
+
+describe('health', () => {
+  let t: TestApp;
+  beforeAll(async () => {
+    t = await createTestApp();
+  });
+  afterAll(() => t.close());
+
+  it('reports the API and the database as up, without a token', async () => {
+    const response = await t.http.get('/api/health');
+    expect(response.status).toBe(200);
+    expect(response.body).toEqual({ status: 'ok', database: 'up' });
+  });
+
+  it('answers 503 naming the database when it cannot be reached', async () => {
+    await t.sequelize.close();
+    const response = await t.http.get('/api/health');
+    expect(response.status).toBe(503);
+    expect(response.body).toMatchObject({ status: 'unavailable', database: 'down' });
+  });
+});

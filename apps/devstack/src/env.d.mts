@@ -1,0 +1,2 @@
+export declare const repoRoot: string;
+export declare function loadEnvironment(): Record<string, string>;
