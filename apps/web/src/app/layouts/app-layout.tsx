@@ -1,0 +1,49 @@
+import { Alignment, Button, Navbar, NavbarDivider, NavbarGroup, NavbarHeading } from '@blueprintjs/core';
+import { Link, NavLink, Outlet, useNavigate } from 'react-router-dom';
+import { paths } from '../../config/paths';
+import { useAuth } from '../../features/auth/hooks/auth-context';
+
+/** The frame of every signed-in page: Friable's name, the person, sign-out. */
+export function AppLayout() {
+  const { user, signOut } = useAuth();
+  const navigate = useNavigate();
+  return (
+    <div className="fr-app">
+      <Navbar className="fr-topbar">
+        <NavbarGroup align={Alignment.START}>
+          <NavbarHeading>
+            <Link to={paths.home.href()} className="fr-brand" aria-label="Friable, home">
+              <img src="/friable.svg" alt="" width={24} height={24} />
+              <span>Friable</span>
+            </Link>
+          </NavbarHeading>
+          <NavbarDivider />
+          <NavLink to={paths.trials.href()} className="fr-nav-link">
+            Trials
+          </NavLink>
+        </NavbarGroup>
+        <NavbarGroup align={Alignment.END}>
+          <span className="fr-person" aria-label="Signed in as">
+            <span className="fr-person__name">{user?.name}</span>
+            <span className="fr-person__email">{user?.email}</span>
+          </span>
+          <Button
+            variant="minimal"
+            icon="log-out"
+            text="Sign out"
+            onClick={() => {
+              signOut();
+              navigate(paths.signIn.href());
+            }}
+          />
+        </NavbarGroup>
+      </Navbar>
+      <main className="fr-main">
+        <Outlet />
+      </main>
+      <footer className="fr-footer">
+        Friable gives decision support, not advice. Follow product labels, local rules and your soil-testing laboratory.
+      </footer>
+    </div>
+  );
+}

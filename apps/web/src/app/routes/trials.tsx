@@ -1,0 +1,5 @@
+import { TrialsList } from '../../features/trials/components/trials-list';
+
+export function TrialsRoute() {
+  return <TrialsList />;
+}
