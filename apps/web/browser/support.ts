@@ -1,0 +1,37 @@
+import { mkdirSync } from 'node:fs';
+import { resolve } from 'node:path';
+import { chromium, type Browser, type Page } from 'playwright-core';
+import { repoRoot } from '../../devstack/src/env.mjs';
+
+export const baseUrl = () => process.env.FRIABLE_BROWSER_BASE_URL ?? 'http://127.0.0.1:3999';
+export const demoPassword = 'friable-demo';
+export const screenshotDir = resolve(repoRoot, 'apps/web/screenshots');
+
+/** Debian's Chromium, never a downloaded browser; flags that keep it off the closed network. */
+export function launchBrowser(): Promise<Browser> {
+  return chromium.launch({
+    executablePath: '/usr/bin/chromium',
+    headless: true,
+    args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
+  });
+}
+
+export async function screenshot(page: Page, name: string): Promise<void> {
+  mkdirSync(screenshotDir, { recursive: true });
+  await page.screenshot({ path: resolve(screenshotDir, `${name}.png`), fullPage: true });
+}
+
+export async function signIn(page: Page, email: string, password = demoPassword): Promise<void> {
+  await page.goto(`${baseUrl()}/sign-in`);
+  await page.getByLabel('E-mail').fill(email);
+  await page.getByLabel('Password').fill(password);
+  await page.getByRole('button', { name: 'Sign in' }).click();
+}
+
+/** Fails the test on any request to a host other than the app's own (no CDN, fonts or analytics). */
+export function forbidOutsideRequests(page: Page, seen: string[]): void {
+  page.on('request', (request) => {
+    const url = new URL(request.url());
+    if (!['127.0.0.1', 'localhost'].includes(url.hostname) && url.protocol !== 'data:' && url.protocol !== 'blob:') seen.push(request.url());
+  });
+}
