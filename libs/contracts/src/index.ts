@@ -56,3 +56,6 @@ export interface HealthReport {
   database: 'up' | 'down';
   message?: string;
 }
+
+export * from './protocol';
+export * from './team';

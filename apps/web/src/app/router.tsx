@@ -1,14 +1,19 @@
 import { createBrowserRouter, Navigate, type RouteObject } from 'react-router-dom';
 import { paths } from '../config/paths';
 import { RequireAuth } from '../features/auth/components/require-auth';
+import { OutboxPage } from '../features/outbox/components/outbox-page';
+import { RateCalculatorPage } from '../features/rates/components/rate-calculator-page';
 import { AppLayout } from './layouts/app-layout';
+import { TrialLayout } from './layouts/trial-layout';
 import { NotFoundRoute } from './routes/not-found';
 import { SignInRoute } from './routes/sign-in';
-import { TrialRoute } from './routes/trial';
+import { AcceptInvitationRoute, PlotPlanRoute, ProtocolRoute, SitesRoute, TeamRoute } from './routes/trial-sections';
 import { TrialsRoute } from './routes/trials';
 
 export const routes: RouteObject[] = [
   { path: paths.signIn.path, element: <SignInRoute /> },
+  // Opened from an e-mail by someone who may not have an account yet.
+  { path: paths.acceptInvitation.path, element: <AcceptInvitationRoute /> },
   {
     path: paths.home.path,
     element: (
@@ -19,7 +24,19 @@ export const routes: RouteObject[] = [
     children: [
       { index: true, element: <Navigate to={paths.trials.href()} replace /> },
       { path: paths.trials.path, element: <TrialsRoute /> },
-      { path: paths.trial.path, element: <TrialRoute /> },
+      {
+        path: paths.trial.path,
+        element: <TrialLayout />,
+        children: [
+          { index: true, element: <Navigate to="protocol" replace /> },
+          { path: paths.trialProtocol.path, element: <ProtocolRoute /> },
+          { path: paths.trialSites.path, element: <SitesRoute /> },
+          { path: paths.trialPlotPlan.path, element: <PlotPlanRoute /> },
+          { path: paths.trialTeam.path, element: <TeamRoute /> },
+        ],
+      },
+      { path: paths.rateCalculator.path, element: <RateCalculatorPage /> },
+      { path: paths.outbox.path, element: <OutboxPage /> },
       { path: '*', element: <NotFoundRoute /> },
     ],
   },

@@ -21,6 +21,9 @@ export function AppLayout() {
           <NavLink to={paths.trials.href()} className="fr-nav-link">
             Trials
           </NavLink>
+          <NavLink to={paths.rateCalculator.href()} className="fr-nav-link">
+            Rate calculator
+          </NavLink>
         </NavbarGroup>
         <NavbarGroup align={Alignment.END}>
           <span className="fr-person" aria-label="Signed in as">

@@ -4,7 +4,7 @@ import { EmptyState, ErrorState, LoadingState } from '../../../components/states
 import { paths } from '../../../config/paths';
 import { designLabels, formatDate, roleLabels } from '../../../lib/format';
 import { useTrials } from '../api/get-trials';
-import { TrialStatusTag } from './trial-status-tag';
+import { TrialStatusTag } from '../../../components/trial-status-tag';
 
 export function TrialsList() {
   const trials = useTrials();

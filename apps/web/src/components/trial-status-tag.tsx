@@ -1,6 +1,6 @@
 import { Tag, type Intent } from '@blueprintjs/core';
 import type { TrialStatus } from '@friable/contracts';
-import { statusLabels } from '../../../lib/format';
+import { statusLabels } from '../lib/format';
 
 const intents: Record<TrialStatus, Intent> = { draft: 'none', active: 'success', locked: 'warning', archived: 'none' };
 

@@ -1,0 +1,57 @@
+import type { TrialDetail } from '@friable/contracts';
+import { H2 } from '@blueprintjs/core';
+import { NavLink, Outlet, useOutletContext, useParams } from 'react-router-dom';
+import { ErrorState, LoadingState } from '../../components/states';
+import { TrialStatusTag } from '../../components/trial-status-tag';
+import { paths } from '../../config/paths';
+import { designLabels, roleLabels } from '../../lib/format';
+import { useTrial } from '../../features/protocol/api/get-trial';
+
+export interface TrialOutletContext {
+  trial: TrialDetail;
+}
+
+/** The trial's pages read the loaded protocol from here. */
+export function useTrialOutlet(): TrialOutletContext {
+  return useOutletContext<TrialOutletContext>();
+}
+
+const sections = [
+  { label: 'Protocol', href: paths.trialProtocol.href },
+  { label: 'Sites', href: paths.trialSites.href },
+  { label: 'Plot plan', href: (id: number) => paths.trialPlotPlan.href(id) },
+  { label: 'Team', href: paths.trialTeam.href },
+];
+
+/** A trial's header and section tabs around its pages. */
+export function TrialLayout() {
+  const trialId = Number(useParams().trialId);
+  const trial = useTrial(trialId);
+  if (!Number.isInteger(trialId) || trialId < 1) return <ErrorState title="No such trial" error={new Error('The address does not name a trial.')} />;
+  if (trial.isPending) return <LoadingState what="the trial" />;
+  if (trial.isError) return <ErrorState title="This trial could not be opened" error={trial.error} onRetry={() => trial.refetch()} />;
+  const t = trial.data;
+  return (
+    <div className="fr-trial">
+      <header className="fr-trial__header">
+        <H2 className="fr-trial__title">{t.title}</H2>
+        <div className="fr-trial__meta">
+          <span className="fr-code">{t.code}</span>
+          <TrialStatusTag status={t.status} />
+          <span>{designLabels[t.design] ?? t.design}</span>
+          <span className="fr-muted">
+            You: {t.myRoles.length ? t.myRoles.map((r) => roleLabels[r]).join(', ') : 'Administrator (read only)'}
+          </span>
+        </div>
+      </header>
+      <nav className="fr-tabs" aria-label="Trial sections">
+        {sections.map((section) => (
+          <NavLink key={section.label} to={section.href(t.id)} className="fr-tab">
+            {section.label}
+          </NavLink>
+        ))}
+      </nav>
+      <Outlet context={{ trial: t } satisfies TrialOutletContext} />
+    </div>
+  );
+}
