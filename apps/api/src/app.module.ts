@@ -3,6 +3,7 @@ import { ConfigModule, type ConfigType } from '@nestjs/config';
 import { APP_FILTER, APP_GUARD } from '@nestjs/core';
 import { SequelizeModule } from '@nestjs/sequelize';
 import { resolve } from 'node:path';
+import { ActivityModule } from './activity/activity.module';
 import { AuthModule } from './auth/auth.module';
 import { AccessGuard } from './auth/guards/access.guard';
 import { JwtAuthGuard } from './auth/guards/jwt-auth.guard';
@@ -34,6 +35,7 @@ import { UsersModule } from './users/users.module';
     UsersModule,
     TrialsModule,
     HealthModule,
+    ActivityModule,
   ],
   providers: [
     { provide: APP_GUARD, useClass: JwtAuthGuard },
