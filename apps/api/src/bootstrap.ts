@@ -15,6 +15,8 @@ export function configureApp(app: NestExpressApplication): NestExpressApplicatio
   app.useGlobalPipes(createValidationPipe());
   app.set('trust proxy', 'loopback');
   app.disable('x-powered-by');
+  // Analysis requests carry whole data sets; everything else stays small.
+  app.use('/api/stats', express.json({ limit: '25mb' }));
   app.use(express.json({ limit: '2mb' }));
   // Body-parser failures are answered here, in the API's own words, before they reach a route.
   app.use((error: unknown, _request: Request, response: Response, next: NextFunction) => {
