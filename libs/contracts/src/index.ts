@@ -59,3 +59,4 @@ export interface HealthReport {
 
 export * from './protocol';
 export * from './team';
+export * from './intake';
