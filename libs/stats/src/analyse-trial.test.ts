@@ -259,7 +259,9 @@ describe('analyseTrial: RCBD worked examples', () => {
 
   const gomez728 = readReferenceCsv('data/agridat_gomez.heteroskedastic.csv');
   it.skipIf(!gomez728)('Gomez & Gomez Table 7.28, 35 genotypes × 3 reps (agridat Rd "Match Gomez table 7.28")', () => {
-    const result = analyseTrial({ design: 'rcbd', observations: gomez728!.map((r) => ({ treatment: r.gen!, block: r.rep!, value: r.yield! })) });
+    // STATISTICS.md B.8: the table is reproduced after setting G17/R2 to 7.58 (as on Gomez p. 311); the file has 5.58.
+    const fixed = gomez728!.map((r) => (r.gen === 'G17' && r.rep === 'R2' ? { ...r, yield: '7.58' } : r));
+    const result = analyseTrial({ design: 'rcbd', observations: fixed.map((r) => ({ treatment: r.gen!, block: r.rep!, value: r.yield! })) });
     close(row(result, 'block').ss, 3.306079, 7); // R 4.2.2; table 3.306
     close(row(result, 'block').f, 5.6164, 5);
     close(row(result, 'treatment').ss, 40.01987, 7);

@@ -1,0 +1,350 @@
+import { bartlettFromVariances } from './bartlett';
+import { brownForsythe } from './brown-forsythe';
+import { fitTrialDesign, type DesignFit, type TrialDesign, type TrialLayout } from './design-fit';
+import { fUpperTailProbability } from './distributions';
+import { StatsInputError } from './errors';
+import { separateMeans, type MeanSeparation, type MeanSeparationMethod } from './mean-separation';
+import { shapiroWilk } from './shapiro-wilk';
+import { prepareTrialLayout, type TrialObservation } from './trial-layout';
+import { backTransform, transformValues } from './transforms';
+
+/** Transforms applied to the values before the analysis. */
+export type TrialTransform = 'none' | 'log' | 'sqrt' | 'arcsine-sqrt';
+
+/** What `analyseTrial` is asked to do. */
+export interface TrialAnalysisRequest {
+  readonly design: TrialDesign;
+  /** Significance level, 0 < alpha < 1; default 0.05. */
+  readonly alpha?: number;
+  /** Multisite only: random (default) tests treatment against site × treatment; fixed tests all against error. */
+  readonly sitesAre?: 'random' | 'fixed';
+  /** Control treatment label (needed for Dunnett). */
+  readonly control?: string;
+  readonly transform?: TrialTransform;
+  /** Default ['tukey']. */
+  readonly meanSeparation?: readonly MeanSeparationMethod[];
+  /** Compute Fisher's LSD even when the treatment F test is not significant. */
+  readonly forceLsd?: boolean;
+  /** The two factor names of a factorial (default: the keys of the first observation's factors). */
+  readonly factorNames?: readonly [string, string];
+  readonly observations: readonly TrialObservation[];
+}
+
+/** One row of the ANOVA table; f and p are null where the term is not tested. */
+export interface AnovaRow {
+  readonly term: string;
+  readonly df: number;
+  readonly ss: number;
+  readonly ms: number | null;
+  readonly f: number | null;
+  readonly p: number | null;
+}
+
+/** A treatment (or factor level) least-squares mean. */
+export interface TreatmentMean {
+  readonly treatment: string;
+  readonly n: number;
+  readonly mean: number;
+  readonly se: number;
+  /** Present when a transform was applied: the mean on the original scale. */
+  readonly backTransformedMean?: number;
+}
+
+export interface ResidualDiagnostic {
+  /** Index of the observation in the request. */
+  readonly index: number;
+  readonly fitted: number;
+  readonly residual: number;
+  /** residual / √(MSE·(1 − leverage)), as R's rstandard. */
+  readonly standardized: number;
+  /** |standardized| > 3. */
+  readonly flagged: boolean;
+}
+
+/** The complete analysis of one measure. */
+export interface TrialAnalysis {
+  readonly anova: readonly AnovaRow[];
+  readonly summary: { readonly n: number; readonly grandMean: number; readonly cv: number; readonly rootMse: number; readonly errorDf: number };
+  readonly means: readonly TreatmentMean[];
+  /** Factorial only: least-squares means of each factor's levels, by factor name. */
+  readonly factorMeans?: Readonly<Record<string, readonly TreatmentMean[]>>;
+  readonly comparisons: MeanSeparation['comparisons'];
+  readonly letters: MeanSeparation['letters'];
+  readonly diagnostics: {
+    /** Null when n is outside 3..5000 (the range of Royston's approximation). */
+    readonly shapiroWilk: { readonly w: number; readonly p: number } | null;
+    /** Brown–Forsythe on the residuals grouped by treatment; null when a treatment has a single plot. */
+    readonly brownForsythe: { readonly f: number; readonly p: number } | null;
+    /** Multisite only: Bartlett's test of the per-site error variances. */
+    readonly bartlett?: { readonly statistic: number; readonly p: number };
+    readonly residuals: readonly ResidualDiagnostic[];
+  };
+  readonly warnings: readonly string[];
+}
+
+const METHODS: readonly MeanSeparationMethod[] = ['lsd', 'tukey', 'dunnett', 'bonferroni', 'holm'];
+const SMALL_ERROR_DF = 12;
+
+function formatP(p: number): string {
+  return p < 0.0001 ? p.toExponential(2) : p.toPrecision(3);
+}
+
+function transformedValues(request: TrialAnalysisRequest): { values: readonly (number | string)[]; offset: number; note: string | null } {
+  const kind = request.transform ?? 'none';
+  if (kind === 'none') return { values: request.observations.map((o) => o.value), offset: 0, note: null };
+  const numbers = request.observations.map((o, index) => {
+    const value = typeof o.value === 'string' ? Number(o.value.trim()) : o.value;
+    if (typeof value !== 'number' || !Number.isFinite(value) || (typeof o.value === 'string' && o.value.trim() === '')) {
+      throw new StatsInputError('non-finite value', `observation ${index} is ${JSON.stringify(o.value)}`);
+    }
+    return value;
+  });
+  const result = transformValues(numbers, kind);
+  return { values: Array.from(result.values), offset: result.offset, note: result.note };
+}
+
+/** Which mean square tests each term: the error, or another term (random sites). */
+function denominatorOf(term: string, request: TrialAnalysisRequest): string {
+  if (request.design !== 'multisite-rcbd' || request.sitesAre === 'fixed') return 'error';
+  if (term === 'site') return 'block:site';
+  if (term === 'treatment') return 'site:treatment';
+  return 'error';
+}
+
+function anovaTable(fit: DesignFit, y: Float64Array, request: TrialAnalysisRequest): AnovaRow[] {
+  const errorMs = fit.residualDf > 0 ? fit.residualSs / fit.residualDf : null;
+  const meanSquares = new Map<string, { ms: number | null; df: number }>(
+    fit.rows.map((row) => [row.term, { ms: row.df > 0 ? row.ss / row.df : null, df: row.df }]),
+  );
+  meanSquares.set('error', { ms: errorMs, df: fit.residualDf });
+  const rows: AnovaRow[] = fit.rows.map((row) => {
+    const ms = meanSquares.get(row.term)!.ms;
+    const denominator = meanSquares.get(denominatorOf(row.term, request))!;
+    const testable = ms !== null && denominator.ms !== null && denominator.ms > 0 && denominator.df > 0;
+    const f = testable ? ms / denominator.ms! : null;
+    const p = f === null ? null : fUpperTailProbability(f, row.df, denominator.df);
+    return Object.freeze({ term: row.term, df: row.df, ss: row.ss, ms, f, p });
+  });
+  let mean = 0;
+  for (const value of y) mean += value;
+  mean /= y.length;
+  let totalSs = 0;
+  for (const value of y) totalSs += (value - mean) ** 2;
+  rows.push(Object.freeze({ term: 'error', df: fit.residualDf, ss: fit.residualSs, ms: errorMs, f: null, p: null }));
+  rows.push(Object.freeze({ term: 'total', df: y.length - 1, ss: totalSs, ms: null, f: null, p: null }));
+  return rows;
+}
+
+/** The F test of treatments that protects the LSD: the treatment row, or all factorial terms pooled. */
+function treatmentTest(rows: readonly AnovaRow[], fit: DesignFit, request: TrialAnalysisRequest): { f: number; p: number } | null {
+  if (request.design !== 'factorial-rcbd') {
+    const row = rows.find((r) => r.term === 'treatment');
+    return row && row.f !== null && row.p !== null ? { f: row.f, p: row.p } : null;
+  }
+  const treatmentRows = fit.rows.slice(1);
+  const df = treatmentRows.reduce((sum, row) => sum + row.df, 0);
+  const ss = treatmentRows.reduce((sum, row) => sum + row.ss, 0);
+  if (fit.residualDf === 0 || fit.residualSs <= 0 || df === 0) return null;
+  const f = ss / df / (fit.residualSs / fit.residualDf);
+  return { f, p: fUpperTailProbability(f, df, fit.residualDf) };
+}
+
+function siteBartlett(layout: TrialLayout): { statistic: number; p: number } | null {
+  const site = layout.site!;
+  const variances: number[] = [];
+  const dfs: number[] = [];
+  for (let s = 0; s < site.levels.length; s++) {
+    const rowsAtSite: number[] = [];
+    site.codes.forEach((code, i) => {
+      if (code === s) rowsAtSite.push(i);
+    });
+    const pick = <T extends { name: string; levels: readonly string[]; codes: Int32Array }>(factor: T) => {
+      const labels = rowsAtSite.map((i) => factor.levels[factor.codes[i]!]!);
+      const levels = [...new Set(labels)];
+      return { name: factor.name, levels, codes: Int32Array.from(labels.map((label) => levels.indexOf(label))) };
+    };
+    const siteFit = fitTrialDesign({
+      design: 'rcbd',
+      y: Float64Array.from(rowsAtSite, (i) => layout.y[i]!),
+      treatment: pick(layout.treatment),
+      block: pick(layout.block!),
+    });
+    if (siteFit.residualDf === 0) return null;
+    variances.push(siteFit.residualSs / siteFit.residualDf);
+    dfs.push(siteFit.residualDf);
+  }
+  const result = bartlettFromVariances(variances, dfs);
+  return { statistic: result.statistic, p: result.p };
+}
+
+function residualDiagnostics(fit: DesignFit, mse: number, centre: number): ResidualDiagnostic[] {
+  const out = new Array<ResidualDiagnostic>(fit.residuals.length);
+  for (let i = 0; i < fit.residuals.length; i++) {
+    const scale = Math.sqrt(mse * (1 - fit.leverage[i]!));
+    const residual = fit.residuals[i]!;
+    const standardized = scale > 0 && 1 - fit.leverage[i]! > 1e-10 ? residual / scale : 0;
+    out[i] = Object.freeze({ index: i, fitted: fit.fitted[i]! + centre, residual, standardized, flagged: Math.abs(standardized) > 3 });
+  }
+  return out;
+}
+
+function residualGroups(fit: DesignFit, layout: TrialLayout): number[][] {
+  const groups: number[][] = layout.treatment.levels.map(() => []);
+  layout.treatment.codes.forEach((code, i) => groups[code]!.push(fit.residuals[i]!));
+  return groups;
+}
+
+function validateRequest(request: TrialAnalysisRequest): { alpha: number; methods: MeanSeparationMethod[] } {
+  if (request === null || typeof request !== 'object') throw new StatsInputError('invalid request', 'the analysis request must be an object');
+  const alpha = request.alpha ?? 0.05;
+  if (!(alpha > 0 && alpha < 1)) throw new StatsInputError('invalid alpha', `alpha must lie strictly between 0 and 1, got ${alpha}`);
+  const methods = [...(request.meanSeparation ?? ['tukey'])];
+  for (const method of methods) {
+    if (!METHODS.includes(method)) throw new StatsInputError('unknown method', `mean separation must be among ${METHODS.join(', ')}, got ${JSON.stringify(method)}`);
+  }
+  if (request.sitesAre !== undefined && request.sitesAre !== 'random' && request.sitesAre !== 'fixed') {
+    throw new StatsInputError('invalid sites', `sitesAre must be "random" or "fixed", got ${JSON.stringify(request.sitesAre)}`);
+  }
+  if (methods.includes('dunnett') && request.control === undefined) {
+    throw new StatsInputError('unknown control', "Dunnett's test needs a control treatment");
+  }
+  return { alpha, methods };
+}
+
+function meanEntries(
+  labels: readonly string[],
+  counts: readonly number[],
+  means: Float64Array,
+  variances: readonly number[],
+  centre: number,
+  back: ((mean: number) => number) | null,
+): TreatmentMean[] {
+  return labels.map((treatment, j) => {
+    const mean = means[j]! + centre;
+    return Object.freeze({
+      treatment,
+      n: counts[j]!,
+      mean,
+      se: Math.sqrt(variances[j]!),
+      ...(back ? { backTransformedMean: back(mean) } : {}),
+    });
+  });
+}
+
+/**
+ * Trial analysis: the ANOVA, least-squares means, mean separation, letters and diagnostics of one measure.
+ *
+ * Designs and their sequential terms: crd (treatment), rcbd (block, treatment), factorial-rcbd (block, A, B,
+ * A:B with the real factor names) and multisite-rcbd (site, block:site, treatment, site:treatment). With
+ * random sites (default) treatment is tested against site × treatment and site against blocks within sites;
+ * treatment means, their standard errors and all comparisons then use the site × treatment mean square and
+ * its degrees of freedom. Fixed sites test everything against the pooled error. Bartlett's test of the
+ * per-site error variances runs before pooling. See docs/statistical-methods.md for every formula.
+ * Reference: Gomez & Gomez (1984), Statistical Procedures for Agricultural Research, 2nd ed. (Wiley), ch. 2–5 and 8;
+ * McIntosh (1983), Analysis of combined experiments, Agron. J. 75:153.
+ * @throws StatsInputError (a RangeError) for fewer than two treatments, a treatment or combination with no
+ *   data, a block with a single plot, no residual degrees of freedom, a non-finite value (naming its index),
+ *   a control that is not a treatment, a missing block/site/factor level, or an invalid option.
+ * @example
+ *   analyseTrial({ design: 'rcbd', observations: [{ treatment: '1', block: '1', value: 9.3 }, ...] }).anova[1];
+ *   // { term: 'treatment', df: 3, ss: 0.385, ms: 0.128333, f: 14.4375, p: 0.000871 }
+ */
+export function analyseTrial(request: TrialAnalysisRequest): TrialAnalysis {
+  const { alpha, methods } = validateRequest(request);
+  const transformed = transformedValues(request);
+  const prepared = prepareTrialLayout(request.design, request.observations, transformed.values, request.factorNames);
+  const { layout, centreValue } = prepared;
+  const labels = layout.treatment.levels;
+  if (request.control !== undefined && !labels.includes(request.control)) {
+    throw new StatsInputError('unknown control', `control ${JSON.stringify(request.control)} is not among the treatments ${labels.join(', ')}`);
+  }
+  const fit = fitTrialDesign(layout);
+  if (fit.residualDf <= 0) {
+    throw new StatsInputError('no residual degrees of freedom', `the ${request.design} model uses all ${layout.y.length} observations, leaving none to estimate error`);
+  }
+  const warnings: string[] = [];
+  const anova = anovaTable(fit, layout.y, request);
+  const mse = fit.residualSs / fit.residualDf;
+  const n = layout.y.length;
+  let centredMean = 0;
+  for (const value of layout.y) centredMean += value;
+  const grandMean = centreValue + centredMean / n;
+  const rootMse = Math.sqrt(mse);
+
+  // Random sites: treatment means and comparisons use the site × treatment mean square.
+  const randomSites = request.design === 'multisite-rcbd' && request.sitesAre !== 'fixed';
+  const interaction = randomSites ? anova.find((row) => row.term === 'site:treatment') : undefined;
+  const comparisonMs = interaction && interaction.ms !== null ? interaction.ms : mse;
+  const comparisonDf = interaction && interaction.ms !== null ? interaction.df : fit.residualDf;
+  const k = labels.length;
+  const covariance = fit.meanCovariance.map((value) => value * comparisonMs);
+  const back = transformed.note === null ? null : (mean: number): number => backTransform(mean, request.transform!, transformed.offset);
+  const means = meanEntries(labels, fit.treatmentCounts, fit.treatmentMeans, labels.map((_, j) => covariance[j * k + j]!), centreValue, back);
+  let factorMeans: Record<string, readonly TreatmentMean[]> | undefined;
+  if (fit.factorMeans) {
+    factorMeans = {};
+    for (const entry of fit.factorMeans) {
+      const variances = Array.from(entry.varianceFactors, (value) => value * comparisonMs);
+      factorMeans[entry.factor] = Object.freeze(meanEntries(entry.levels, entry.counts, entry.means, variances, centreValue, back));
+    }
+  }
+
+  const test = treatmentTest(anova, fit, request);
+  const treatmentSignificant = test !== null && test.p < alpha;
+  const requested = methods.filter((method) => method !== 'lsd' || treatmentSignificant || request.forceLsd === true);
+  if (methods.includes('lsd') && !requested.includes('lsd')) {
+    warnings.push(
+      `Fisher's LSD was not computed because the treatment F test is not significant at α = ${alpha}${test ? ` (p = ${formatP(test.p)})` : ''}; set forceLsd to compute it anyway.`,
+    );
+  }
+  if (!treatmentSignificant && requested.some((method) => method !== 'dunnett')) {
+    warnings.push(`The treatment F test is not significant at α = ${alpha}${test ? ` (p = ${formatP(test.p)})` : ''}, so the letters are shown for reference only.`);
+  }
+  const separation = separateMeans({
+    treatments: labels,
+    means: means.map((entry) => entry.mean),
+    covariance,
+    df: comparisonDf,
+    alpha,
+    methods: requested,
+    ...(request.control !== undefined ? { control: request.control } : {}),
+  });
+
+  if (fit.residualDf < SMALL_ERROR_DF) {
+    warnings.push(`The error has only ${fit.residualDf} degrees of freedom (fewer than ${SMALL_ERROR_DF}), so the tests have little power; more blocks would help.`);
+  }
+  fit.treatmentCounts.forEach((count, j) => {
+    if (count < 2) warnings.push(`Treatment ${labels[j]} has fewer than two plots, so its mean rests on a single plot.`);
+  });
+  let bartlett: { statistic: number; p: number } | null = null;
+  if (request.design === 'multisite-rcbd') {
+    bartlett = siteBartlett(layout);
+    if (bartlett && bartlett.p < 0.05) {
+      warnings.push(
+        `Error variances differ across sites (Bartlett's K² = ${bartlett.statistic.toPrecision(4)}, p = ${formatP(bartlett.p)}), so pooling the error across sites may mislead; look at each site's analysis too.`,
+      );
+    }
+  }
+  if (transformed.note) warnings.push(transformed.note);
+
+  const shapiro = n >= 3 && n <= 5000 ? shapiroWilk(Array.from(fit.residuals)) : null;
+  if (!shapiro) warnings.push(`The Shapiro–Wilk test was skipped: it covers 3 to 5000 residuals and there are ${n}.`);
+  const groups = residualGroups(fit, layout);
+  const spread = groups.every((group) => group.length >= 2) ? brownForsythe(groups) : null;
+
+  return Object.freeze({
+    anova: Object.freeze(anova),
+    summary: Object.freeze({ n, grandMean, cv: (100 * rootMse) / grandMean, rootMse, errorDf: fit.residualDf }),
+    means: Object.freeze(means),
+    ...(factorMeans ? { factorMeans: Object.freeze(factorMeans) } : {}),
+    comparisons: separation.comparisons,
+    letters: separation.letters,
+    diagnostics: Object.freeze({
+      shapiroWilk: shapiro ? Object.freeze({ w: shapiro.w, p: shapiro.p }) : null,
+      brownForsythe: spread ? Object.freeze({ f: spread.f, p: spread.p }) : null,
+      ...(bartlett ? { bartlett: Object.freeze(bartlett) } : {}),
+      residuals: Object.freeze(residualDiagnostics(fit, mse, centreValue)),
+    }),
+    warnings: Object.freeze(warnings),
+  });
+}
