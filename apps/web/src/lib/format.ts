@@ -23,3 +23,96 @@ const dateFormat = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'sh
 export function formatDate(iso: string): string {
   return dateFormat.format(new Date(iso));
 }
+
+const numberFormats = new Map<string, Intl.NumberFormat>();
+
+/** A number for people: grouped thousands, at most `maxDecimals` decimals (trailing zeros dropped). */
+export function formatNumber(value: number, maxDecimals = 2, minDecimals = 0): string {
+  const key = `${minDecimals}:${maxDecimals}`;
+  let format = numberFormats.get(key);
+  if (!format) {
+    format = new Intl.NumberFormat('en-US', { minimumFractionDigits: minDecimals, maximumFractionDigits: maxDecimals });
+    numberFormats.set(key, format);
+  }
+  return format.format(value);
+}
+
+/** Decimals that keep about three significant digits for amounts people weigh out (13.8 g, 290 g, 0.64 lb). */
+export function amountDecimals(value: number): number {
+  const size = Math.abs(value);
+  if (size === 0 || size >= 100) return 0;
+  if (size >= 10) return 1;
+  if (size >= 1) return 2;
+  return 3;
+}
+
+/** An amount with its unit and three significant digits: "13.8 g", "1,290 g", "0.645 lb". */
+export function formatAmount(value: number | null | undefined, unit: string): string {
+  if (value === null || value === undefined || !Number.isFinite(value)) return '—';
+  return `${formatNumber(value, amountDecimals(value))} ${unit}`;
+}
+
+/** A surface area in square metres, with ft² beside it: "1.44 m² (15.5 ft²)". */
+export function formatArea(areaM2: number | null | undefined): string {
+  if (areaM2 === null || areaM2 === undefined || !Number.isFinite(areaM2)) return '—';
+  const squareFeet = areaM2 / 0.09290304;
+  return `${formatNumber(areaM2, amountDecimals(areaM2))} m² (${formatNumber(squareFeet, amountDecimals(squareFeet))} ft²)`;
+}
+
+/** Rate units as people write them. */
+export const rateUnitLabels: Record<string, string> = {
+  'lb/100ft2': 'lb / 100 ft²',
+  'lb/1000ft2': 'lb / 1,000 ft²',
+  'lb/acre': 'lb / acre',
+  'g/m2': 'g / m²',
+  'kg/m2': 'kg / m²',
+  'kg/ha': 'kg / ha',
+  't/ha': 't / ha (tonnes)',
+  'ton/acre': 'short tons / acre',
+  in: 'in deep (layer)',
+  cm: 'cm deep (layer)',
+  'yd3/1000ft2': 'yd³ / 1,000 ft²',
+};
+
+/** A rate with its unit: "40 lb / 1,000 ft²". */
+export function formatRate(value: number | null, unit: string | null): string {
+  if (value === null || unit === null) return 'none';
+  return `${formatNumber(value, 3)} ${rateUnitLabels[unit] ?? unit}`;
+}
+
+/** True for a depth or volume rate (a layer of compost), which is measured out in litres. */
+export function isVolumeRateUnit(unit: string | null): boolean {
+  return unit === 'in' || unit === 'cm' || unit === 'yd3/1000ft2';
+}
+
+export const measureKindLabels: Record<string, string> = {
+  continuous: 'Continuous',
+  count: 'Count',
+  score: 'Score',
+  'time-with-cutoff': 'Time with cut-off',
+};
+
+/**
+ * What a person typed into a number box: null when left empty, NaN when it is not a number
+ * (commas as thousands separators and spaces are allowed: "1,200" → 1200).
+ */
+export function parseNumberInput(text: string): number | null {
+  const cleaned = text.replace(/[\s,]/g, '');
+  if (cleaned === '') return null;
+  const value = Number(cleaned);
+  return Number.isFinite(value) ? value : Number.NaN;
+}
+
+/** The text a number box starts with. */
+export function numberInputText(value: number | null | undefined): string {
+  return value === null || value === undefined ? '' : String(value);
+}
+
+/** The amount for one plot in both unit systems: "290 g (10.2 oz)", or "24.5 L (6.47 gal)" for a layer. */
+export function formatDoseShort(dose: { grams: number | null; ounces: number | null; litres: number | null; gallons: number | null } | null): string {
+  if (!dose) return 'nothing to apply';
+  const parts: string[] = [];
+  if (dose.grams !== null) parts.push(`${formatAmount(dose.grams, 'g')} (${formatAmount(dose.ounces, 'oz')})`);
+  if (dose.litres !== null) parts.push(`${formatAmount(dose.litres, 'L')} (${formatAmount(dose.gallons, 'gal')})`);
+  return parts.length ? parts.join(' · ') : 'nothing to apply';
+}

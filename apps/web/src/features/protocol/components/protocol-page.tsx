@@ -1,6 +1,25 @@
 import type { TrialDetail } from '@friable/contracts';
+import { ActivationPanel } from './activation-panel';
+import { FactorsSection } from './factors-section';
+import { MeasuresSection } from './measures-section';
+import { protocolAccess } from './protocol-access';
+import { ReadOnlyNotice } from './read-only-notice';
+import { RoundsSection } from './rounds-section';
+import { TreatmentsSection } from './treatments-section';
+import { TrialFieldsSection } from './trial-fields-section';
 
-/** Placeholder until this page is built: the protocol (treatments, measures, rounds). */
+/** Protocol: the trial's fields, treatments (or factors), measures and assessment rounds, and activation. */
 export function ProtocolPage({ trial }: { trial: TrialDetail }) {
-  return <p className="fr-muted">This page will show {trial.title}: the protocol (treatments, measures, rounds).</p>;
+  const access = protocolAccess(trial);
+  return (
+    <div className="fr-protocol">
+      <ReadOnlyNotice access={access} locked={trial.status === 'locked'} />
+      <ActivationPanel trial={trial} canEdit={access.canEdit} />
+      <TrialFieldsSection trial={trial} canEdit={access.canEdit} />
+      {trial.design === 'factorial-rcbd' && <FactorsSection trial={trial} canEdit={access.canEdit} />}
+      <TreatmentsSection trial={trial} canEdit={access.canEdit} />
+      <MeasuresSection trial={trial} canEdit={access.canEdit} />
+      <RoundsSection trial={trial} canEdit={access.canEdit} />
+    </div>
+  );
 }

@@ -1,6 +1,131 @@
-import type { TrialDetail } from '@friable/contracts';
+import { Button, Callout, Card, H3 } from '@blueprintjs/core';
+import type { Site, TrialDetail } from '@friable/contracts';
+import { useState } from 'react';
+import { Link } from 'react-router-dom';
+import { ConfirmButton } from '../../../components/confirm-button';
+import { EmptyState } from '../../../components/states';
+import { paths } from '../../../config/paths';
+import { formatArea, formatDate, formatNumber } from '../../../lib/format';
+import { useDeleteProtocolItem } from '../api/delete-protocol-item';
+import { protocolAccess } from './protocol-access';
+import { RandomizeDialog } from './randomize-dialog';
+import { ReadOnlyNotice } from './read-only-notice';
+import { SiteDialog } from './site-dialog';
+import { describeGeometry } from './site-geometry';
 
-/** Placeholder until this page is built: the sites. */
+/** Sites: the gardens taking part, each plot's size, the blocks, the lead, and each site's randomization. */
 export function SitesPage({ trial }: { trial: TrialDetail }) {
-  return <p className="fr-muted">This page will show {trial.title}: the sites.</p>;
+  const access = protocolAccess(trial);
+  const [editing, setEditing] = useState<Site | 'new' | null>(null);
+  const [randomizing, setRandomizing] = useState<Site | null>(null);
+  const remove = useDeleteProtocolItem(trial.id, 'sites');
+  return (
+    <div className="fr-sites">
+      <ReadOnlyNotice access={access} locked={trial.status === 'locked'} />
+      <div className="fr-page-head">
+        <H3>Sites</H3>
+        {access.canEdit && <Button icon="add" intent="primary" text="Add site" onClick={() => setEditing('new')} />}
+      </div>
+      {trial.sites.length === 0 ? (
+        <EmptyState title="No sites yet" description="Add each garden or farm that runs the trial, with its plot size and number of blocks." />
+      ) : (
+        <ul className="fr-card-list">
+          {trial.sites.map((site) => (
+            <li key={site.id}>
+              <SiteCard
+                trial={trial}
+                site={site}
+                canEdit={access.canEdit}
+                onEdit={() => setEditing(site)}
+                onRandomize={() => setRandomizing(site)}
+                onRemove={() => remove.mutate(site.id)}
+              />
+            </li>
+          ))}
+        </ul>
+      )}
+      {remove.error && <p className="fr-error-line">{remove.error.message}</p>}
+      {editing && <SiteDialog trial={trial} site={editing === 'new' ? null : editing} onClose={() => setEditing(null)} />}
+      {randomizing && <RandomizeDialog trial={trial} site={randomizing} onClose={() => setRandomizing(null)} />}
+    </div>
+  );
+}
+
+function SiteCard({
+  trial,
+  site,
+  canEdit,
+  onEdit,
+  onRandomize,
+  onRemove,
+}: {
+  trial: TrialDetail;
+  site: Site;
+  canEdit: boolean;
+  onEdit: () => void;
+  onRandomize: () => void;
+  onRemove: () => void;
+}) {
+  const mine = trial.mySiteIds.includes(site.id);
+  return (
+    <Card elevation={0} className="fr-site-card" aria-label={`Site ${site.name}`}>
+      <div className="fr-site-card__head">
+        <H3 className="fr-site-card__title">
+          {site.name} <span className="fr-code fr-small">{site.labelPrefix}</span>
+          {mine && <span className="fr-mine"> · your site</span>}
+        </H3>
+        <div className="fr-site-card__actions">
+          <Link to={paths.trialPlotPlan.href(trial.id, site.id)}>Plot plan</Link>
+          {canEdit && <Button size="small" icon="edit" text="Edit" aria-label={`Edit ${site.name}`} onClick={onEdit} />}
+          {canEdit && (
+            <Button
+              size="small"
+              icon="random"
+              text={site.randomizedAt ? 'Randomize again' : 'Randomize'}
+              aria-label={`${site.randomizedAt ? 'Randomize again' : 'Randomize'} ${site.name}`}
+              disabled={site.hasObservations}
+              onClick={onRandomize}
+            />
+          )}
+          {canEdit && !site.hasObservations && (
+            <ConfirmButton text="Remove" ariaLabel={`Remove ${site.name}`} confirmText="Remove site" question={`Remove the site ${site.name} and its plot plan?`} onConfirm={onRemove} />
+          )}
+        </div>
+      </div>
+      <dl className="fr-facts-list">
+        <dt>Location</dt>
+        <dd>{site.location || <span className="fr-muted">not given</span>}</dd>
+        <dt>Soil</dt>
+        <dd>{site.soilDescription || <span className="fr-muted">not described</span>}</dd>
+        <dt>Each plot</dt>
+        <dd>{describeGeometry(site)}</dd>
+        <dt>Surface area</dt>
+        <dd>{formatArea(site.areaM2)} per plot</dd>
+        <dt>Blocks</dt>
+        <dd>{formatNumber(site.blocks, 0)}</dd>
+        <dt>Site lead</dt>
+        <dd>{site.leadName ?? <span className="fr-muted">nobody yet</span>}</dd>
+        <dt>Plot plan</dt>
+        <dd>
+          {site.randomizedAt ? (
+            <>
+              {formatNumber(site.plotCount, 0)} plots, randomized {formatDate(site.randomizedAt)} with seed <span className="fr-code">{site.randomizationSeed}</span>
+            </>
+          ) : (
+            <span className="fr-muted">not randomized yet</span>
+          )}
+        </dd>
+      </dl>
+      {site.hasObservations && canEdit && <p className="fr-muted fr-small">Data have been recorded here, so the plot plan can no longer be randomized again.</p>}
+      {site.warnings.length > 0 && (
+        <Callout intent="warning" icon="warning-sign" compact className="fr-site-warnings" title="Worth a second look">
+          <ul>
+            {site.warnings.map((warning) => (
+              <li key={warning}>{warning}</li>
+            ))}
+          </ul>
+        </Callout>
+      )}
+    </Card>
+  );
 }

@@ -1,18 +1,25 @@
-import { Card, H2, H3, Tag } from '@blueprintjs/core';
+import { Button, Card, H2, H3, Tag } from '@blueprintjs/core';
+import { useState } from 'react';
 import { Link } from 'react-router-dom';
 import { EmptyState, ErrorState, LoadingState } from '../../../components/states';
 import { paths } from '../../../config/paths';
 import { designLabels, formatDate, roleLabels } from '../../../lib/format';
 import { useTrials } from '../api/get-trials';
 import { TrialStatusTag } from '../../../components/trial-status-tag';
+import { NewTrialDialog } from './new-trial-dialog';
 
 export function TrialsList() {
   const trials = useTrials();
+  const [creating, setCreating] = useState(false);
   if (trials.isPending) return <LoadingState what="your trials" />;
   if (trials.isError) return <ErrorState title="Your trials could not be loaded" error={trials.error} onRetry={() => trials.refetch()} />;
   return (
     <section aria-labelledby="trials-heading">
-      <H2 id="trials-heading">Trials</H2>
+      <div className="fr-page-head">
+        <H2 id="trials-heading">Trials</H2>
+        <Button icon="add" intent="primary" text="New trial" onClick={() => setCreating(true)} />
+      </div>
+      <NewTrialDialog isOpen={creating} onClose={() => setCreating(false)} />
       {trials.data.length === 0 ? (
         <EmptyState
           title="No trials yet"

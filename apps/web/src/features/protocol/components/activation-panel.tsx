@@ -1,0 +1,41 @@
+import { Button, Callout } from '@blueprintjs/core';
+import type { TrialDetail } from '@friable/contracts';
+import { ApiError } from '../../../lib/api-client';
+import { useUpdateTrial } from '../api/update-trial';
+
+/**
+ * Activation: a draft trial becomes active (collaborators may record data) once every check passes.
+ * The checks come with the trial; a refusal from the server lists its own problems too.
+ */
+export function ActivationPanel({ trial, canEdit }: { trial: TrialDetail; canEdit: boolean }) {
+  const update = useUpdateTrial(trial.id);
+  if (trial.status !== 'draft') return null;
+  const refusal = update.error instanceof ApiError ? update.error : null;
+  const problems = refusal?.details?.length ? refusal.details.map((d) => d.message) : trial.activation.problems;
+  const ready = trial.activation.ready && !refusal;
+  return (
+    <Callout intent={ready ? 'success' : 'primary'} icon={ready ? 'tick-circle' : 'clipboard'} className="fr-activation" title={ready ? 'Ready to activate' : 'Draft: not ready to activate yet'}>
+      {ready ? (
+        <p>Every check passes. Activating lets collaborators record data at their sites.</p>
+      ) : (
+        <>
+          <p>{refusal ? refusal.message : 'Before the trial can start, these need attention:'}</p>
+          <ul className="fr-activation__problems" aria-label="What stops activation">
+            {problems.map((problem) => (
+              <li key={problem}>{problem}</li>
+            ))}
+          </ul>
+        </>
+      )}
+      {canEdit && (
+        <Button
+          intent={ready ? 'success' : 'none'}
+          icon="play"
+          text="Activate trial"
+          loading={update.isPending}
+          onClick={() => update.mutate({ status: 'active' })}
+        />
+      )}
+    </Callout>
+  );
+}

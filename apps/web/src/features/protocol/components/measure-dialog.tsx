@@ -1,0 +1,144 @@
+import { Checkbox, HTMLSelect, InputGroup } from '@blueprintjs/core';
+import { MEASURE_KINDS, type Measure, type MeasureInput, type MeasureKind, type TrialDetail } from '@friable/contracts';
+import { useState } from 'react';
+import { Field, parseNumberFields } from '../../../components/field-errors';
+import { FormDialog } from '../../../components/form-dialog';
+import { NumberText } from '../../../components/number-text';
+import { measureKindLabels, numberInputText } from '../../../lib/format';
+import { useSaveMeasure } from '../api/save-measure';
+import { measureUnitGroups, unitSymbol } from './measure-units';
+
+const shownFields = ['code', 'name', 'unit', 'kind', 'scaleMin', 'scaleMax', 'cutoff', 'plausibleMin', 'plausibleMax', 'hardMin', 'hardMax', 'decimals', 'higherIsBetter'];
+const labels = {
+  scaleMin: 'Lowest score',
+  scaleMax: 'Highest score',
+  cutoff: 'Cut-off',
+  plausibleMin: 'Plausible minimum',
+  plausibleMax: 'Plausible maximum',
+  hardMin: 'Hard minimum',
+  hardMax: 'Hard maximum',
+  decimals: 'Decimals',
+};
+
+/** Add or change a measure: its unit from the fixed list, its kind, and the ranges that catch typing slips. */
+export function MeasureDialog({ trial, measure, onClose }: { trial: TrialDetail; measure: Measure | null; onClose: () => void }) {
+  const save = useSaveMeasure(trial.id);
+  const [localError, setLocalError] = useState<Error | null>(null);
+  const [code, setCode] = useState(measure?.code ?? '');
+  const [name, setName] = useState(measure?.name ?? '');
+  const [unit, setUnit] = useState(measure?.unit ?? 's');
+  const [kind, setKind] = useState<MeasureKind>(measure?.kind ?? 'continuous');
+  const [texts, setTexts] = useState({
+    scaleMin: numberInputText(measure?.scaleMin),
+    scaleMax: numberInputText(measure?.scaleMax),
+    cutoff: numberInputText(measure?.cutoff),
+    plausibleMin: numberInputText(measure?.plausibleMin),
+    plausibleMax: numberInputText(measure?.plausibleMax),
+    hardMin: numberInputText(measure?.hardMin),
+    hardMax: numberInputText(measure?.hardMax),
+    decimals: numberInputText(measure?.decimals ?? 1),
+  });
+  const [higherIsBetter, setHigherIsBetter] = useState(measure?.higherIsBetter ?? true);
+  const error = localError ?? save.error;
+  const symbol = unitSymbol(unit);
+  const text = (field: keyof typeof texts) => ({ value: texts[field], onChange: (value: string) => setTexts((all) => ({ ...all, [field]: value })) });
+
+  function submit() {
+    const parsed = parseNumberFields(texts, labels);
+    setLocalError(parsed.error);
+    if (parsed.error) return;
+    const v = parsed.values;
+    const input: MeasureInput = {
+      code: code.trim(),
+      name: name.trim(),
+      unit,
+      kind,
+      scaleMin: kind === 'score' ? v.scaleMin : null,
+      scaleMax: kind === 'score' ? v.scaleMax : null,
+      cutoff: kind === 'time-with-cutoff' ? v.cutoff : null,
+      plausibleMin: v.plausibleMin,
+      plausibleMax: v.plausibleMax,
+      hardMin: v.hardMin,
+      hardMax: v.hardMax,
+      decimals: v.decimals ?? 0,
+      higherIsBetter,
+    };
+    save.mutate({ measureId: measure?.id, input }, { onSuccess: onClose });
+  }
+
+  return (
+    <FormDialog title={measure ? `Edit measure ${measure.code}` : 'Add measure'} icon="timeline-line-chart" wide onClose={onClose} onSubmit={submit} submitText={measure ? 'Save measure' : 'Add measure'} pending={save.isPending} error={error} shownFields={shownFields}>
+          <div className="fr-form-row">
+            <Field label="Code" field="code" error={error} help="Short, heads the CSV column, e.g. DRAIN.">
+              <InputGroup id="fr-field-code" value={code} onChange={(e) => setCode(e.target.value)} autoFocus />
+            </Field>
+            <Field label="Name" field="name" error={error}>
+              <InputGroup id="fr-field-name" value={name} onChange={(e) => setName(e.target.value)} />
+            </Field>
+          </div>
+          <div className="fr-form-row">
+            <Field label="Unit" field="unit" error={error}>
+              <HTMLSelect id="fr-field-unit" value={unit} onChange={(e) => setUnit(e.target.value)} fill>
+                {measureUnitGroups.map((group) => (
+                  <optgroup key={group.dimension} label={group.dimension}>
+                    {group.units.map((u) => (
+                      <option key={u.id} value={u.id}>
+                        {u.symbol} — {u.label}
+                      </option>
+                    ))}
+                  </optgroup>
+                ))}
+              </HTMLSelect>
+            </Field>
+            <Field label="Kind" field="kind" error={error}>
+              <HTMLSelect id="fr-field-kind" value={kind} onChange={(e) => setKind(e.target.value as MeasureKind)} fill>
+                {MEASURE_KINDS.map((k) => (
+                  <option key={k} value={k}>
+                    {measureKindLabels[k]}
+                  </option>
+                ))}
+              </HTMLSelect>
+            </Field>
+          </div>
+          {kind === 'score' && (
+            <div className="fr-form-row">
+              <Field label="Lowest score" field="scaleMin" error={error}>
+                <NumberText id="fr-field-scaleMin" {...text('scaleMin')} />
+              </Field>
+              <Field label="Highest score" field="scaleMax" error={error}>
+                <NumberText id="fr-field-scaleMax" {...text('scaleMax')} />
+              </Field>
+            </div>
+          )}
+          {kind === 'time-with-cutoff' && (
+            <Field label="Cut-off" field="cutoff" error={error} help="A plot not finished by then is recorded as “not by the cut-off”, never as the cut-off itself.">
+              <NumberText id="fr-field-cutoff" {...text('cutoff')} unit={symbol} />
+            </Field>
+          )}
+          <div className="fr-form-row">
+            <Field label="Plausible minimum" field="plausibleMin" error={error} help="Outside the plausible range: a warning.">
+              <NumberText id="fr-field-plausibleMin" {...text('plausibleMin')} unit={symbol} />
+            </Field>
+            <Field label="Plausible maximum" field="plausibleMax" error={error}>
+              <NumberText id="fr-field-plausibleMax" {...text('plausibleMax')} unit={symbol} />
+            </Field>
+          </div>
+          <div className="fr-form-row">
+            <Field label="Hard minimum" field="hardMin" error={error} help="Outside the hard limits: refused.">
+              <NumberText id="fr-field-hardMin" {...text('hardMin')} unit={symbol} />
+            </Field>
+            <Field label="Hard maximum" field="hardMax" error={error}>
+              <NumberText id="fr-field-hardMax" {...text('hardMax')} unit={symbol} />
+            </Field>
+          </div>
+          <div className="fr-form-row">
+            <Field label="Decimals" field="decimals" error={error} help="How readings are shown.">
+              <NumberText id="fr-field-decimals" {...text('decimals')} />
+            </Field>
+            <Field label="Which way is better" field="higherIsBetter" error={error}>
+              <Checkbox id="fr-field-higherIsBetter" checked={higherIsBetter} onChange={(e) => setHigherIsBetter(e.currentTarget.checked)} label="Higher is better" />
+            </Field>
+          </div>
+    </FormDialog>
+  );
+}

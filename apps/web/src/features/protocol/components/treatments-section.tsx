@@ -1,0 +1,137 @@
+import { Button, HTMLTable, Section, SectionCard, Tag } from '@blueprintjs/core';
+import type { PlotAmount, Treatment, TrialDetail } from '@friable/contracts';
+import { useState } from 'react';
+import { ConfirmButton } from '../../../components/confirm-button';
+import { EmptyState } from '../../../components/states';
+import { formatDoseShort, formatNumber, formatRate } from '../../../lib/format';
+import { useDeleteProtocolItem } from '../api/delete-protocol-item';
+import { useAmounts } from '../api/get-amounts';
+import { TreatmentDialog } from './treatment-dialog';
+
+/** The treatments, each with its rate and how much goes on one plot at every site. */
+export function TreatmentsSection({ trial, canEdit }: { trial: TrialDetail; canEdit: boolean }) {
+  const [editing, setEditing] = useState<Treatment | 'new' | null>(null);
+  const remove = useDeleteProtocolItem(trial.id, 'treatments');
+  const amounts = useAmounts(trial.id);
+  const factorial = trial.design === 'factorial-rcbd';
+  const hasControl = trial.treatments.some((t) => t.isControl);
+
+  return (
+    <Section
+      title="Treatments"
+      subtitle={factorial ? 'Every combination of the two factors' : undefined}
+      icon="lab-test"
+      className="fr-section"
+      rightElement={canEdit && !factorial ? <Button icon="add" text="Add treatment" size="small" onClick={() => setEditing('new')} /> : undefined}
+    >
+      <SectionCard padded={trial.treatments.length === 0}>
+        {trial.treatments.length === 0 ? (
+          <EmptyState
+            title="No treatments yet"
+            description={factorial ? 'Name the two factors and their levels above; the treatments follow.' : 'Add an untreated control and the amendments to compare, each with its rate.'}
+          />
+        ) : (
+          <div className="fr-table-scroll">
+            <HTMLTable compact striped className="fr-table fr-treatments">
+              <thead>
+                <tr>
+                  <th>Code</th>
+                  <th>Treatment</th>
+                  <th>Rate</th>
+                  <th>Amount per plot</th>
+                  {canEdit && <th aria-label="Actions" />}
+                </tr>
+              </thead>
+              <tbody>
+                {trial.treatments.map((treatment) => (
+                  <tr key={treatment.id}>
+                    <td className="fr-code">{treatment.code}</td>
+                    <td>
+                      <div>
+                        {treatment.name}{' '}
+                        {treatment.isControl && (
+                          <Tag minimal intent="success" className="fr-control-tag">
+                            control
+                          </Tag>
+                        )}
+                      </div>
+                      {treatment.product && <div className="fr-muted fr-small">{productLine(treatment)}</div>}
+                      {treatment.description && <div className="fr-muted fr-small">{treatment.description}</div>}
+                    </td>
+                    <td>
+                      {treatment.rateValue === null ? <span className="fr-muted">none</span> : formatRate(treatment.rateValue, treatment.rateUnit)}
+                      {treatment.rateValue !== null && treatment.rateBasis === 'concentration' && (
+                        <div className="fr-muted fr-small">mixed through {formatNumber(treatment.incorporationDepthCm ?? 0, 1)} cm of soil</div>
+                      )}
+                    </td>
+                    <td>
+                      <PerSiteAmounts trial={trial} treatment={treatment} amounts={amounts.data} pending={amounts.isPending} failed={amounts.isError} />
+                    </td>
+                    {canEdit && (
+                      <td className="fr-actions">
+                        <Button variant="minimal" size="small" icon="edit" text="Edit" aria-label={`Edit ${treatment.code}`} onClick={() => setEditing(treatment)} />
+                        {!factorial && (
+                          <ConfirmButton
+                            text="Remove"
+                            ariaLabel={`Remove ${treatment.code}`}
+                            confirmText="Remove treatment"
+                            question={`Remove treatment ${treatment.code} (${treatment.name}) from the protocol?`}
+                            loading={remove.isPending && remove.variables === treatment.id}
+                            onConfirm={() => remove.mutate(treatment.id)}
+                          />
+                        )}
+                      </td>
+                    )}
+                  </tr>
+                ))}
+              </tbody>
+            </HTMLTable>
+          </div>
+        )}
+        {trial.treatments.length > 0 && !hasControl && (
+          <p className="fr-warning-line">There is no untreated control: an effect can only be claimed against one.</p>
+        )}
+        {remove.error && <p className="fr-error-line">{remove.error.message}</p>}
+      </SectionCard>
+      {editing && <TreatmentDialog trial={trial} treatment={editing === 'new' ? null : editing} onClose={() => setEditing(null)} />}
+    </Section>
+  );
+}
+
+function productLine(treatment: Treatment): string {
+  const parts = [treatment.product ?? ''];
+  if (treatment.purity !== null) parts.push(`${formatNumber(treatment.purity * 100, 1)}% active`);
+  if (treatment.moistureBasis === 'dry') parts.push(`rate on a dry basis${treatment.moistureFraction !== null ? `, ${formatNumber(treatment.moistureFraction * 100, 1)}% water as sold` : ''}`);
+  return parts.join(' · ');
+}
+
+function PerSiteAmounts({
+  trial,
+  treatment,
+  amounts,
+  pending,
+  failed,
+}: {
+  trial: TrialDetail;
+  treatment: Treatment;
+  amounts: PlotAmount[] | undefined;
+  pending: boolean;
+  failed: boolean;
+}) {
+  if (treatment.rateValue === null || treatment.rateValue === 0) return <span className="fr-muted">nothing to apply</span>;
+  if (trial.sites.length === 0) return <span className="fr-muted">add a site to see it</span>;
+  if (pending) return <span className="fr-muted">working it out…</span>;
+  if (failed || !amounts) return <span className="fr-muted">could not be worked out</span>;
+  return (
+    <ul className="fr-site-amounts">
+      {trial.sites.map((site) => {
+        const amount = amounts.find((a) => a.siteId === site.id && a.treatmentId === treatment.id);
+        return (
+          <li key={site.id}>
+            <span className="fr-muted">{site.name}:</span> {amount ? formatDoseShort(amount.perPlot) : '—'}
+          </li>
+        );
+      })}
+    </ul>
+  );
+}

@@ -1,0 +1,17 @@
+import type { TrialCreateInput, TrialDetail } from '@friable/contracts';
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { apiRequest } from '../../../lib/api-client';
+import { trialsQueryOptions } from './get-trials';
+
+/** POST /api/trials — a new draft trial; the caller becomes its investigator. */
+export function createTrial(input: TrialCreateInput): Promise<TrialDetail> {
+  return apiRequest<TrialDetail>('/trials', { method: 'POST', json: input });
+}
+
+export function useCreateTrial() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: createTrial,
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: trialsQueryOptions().queryKey, exact: true }),
+  });
+}
