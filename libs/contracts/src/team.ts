@@ -1,5 +1,5 @@
 // The Team part of the API: members, invitations by e-mail, the development Outbox.
-import type { TrialRole } from './index';
+import type { LoginResponse, TrialRole } from './index';
 
 export interface Member {
   membershipId: number;
@@ -46,10 +46,19 @@ export interface InvitationPreview {
   expiresAt: string;
 }
 
-/** POST /api/invitations/:token/accept: new account (name + password) or existing account (password). */
+/**
+ * POST /api/invitations/:token/accept: new account (name + password) or existing account (password).
+ * The password may be left out when the caller sends the bearer token of the invited person.
+ */
 export interface InvitationAcceptInput {
   name?: string;
-  password: string;
+  password?: string;
+}
+
+/** The answer to accepting: the person is signed in (201 for a new account, 200 for an existing one). */
+export interface InvitationAcceptResponse extends LoginResponse {
+  /** The trial just joined, so the app can open it. */
+  trialId: number;
 }
 
 export interface OutboxMessage {
