@@ -1,5 +1,5 @@
 import type { DoseAnswer, DoseRequest } from '@friable/contracts';
-import { useMutation } from '@tanstack/react-query';
+import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
 
 /** POST /api/rates/dose — the server's Rate calculator (the same arithmetic as @friable/field). */
@@ -7,6 +7,10 @@ export function computeDoseOnServer(request: DoseRequest): Promise<DoseAnswer> {
   return apiRequest<DoseAnswer>('/rates/dose', { method: 'POST', json: request });
 }
 
-export function useComputeDose() {
-  return useMutation({ mutationFn: computeDoseOnServer });
+/** Asking twice with the same numbers gives the same answer, so the answer is cached like a read. */
+export const doseQueryOptions = (request: DoseRequest) =>
+  queryOptions({ queryKey: ['rates', 'dose', request], queryFn: () => computeDoseOnServer(request), staleTime: Infinity, retry: false });
+
+export function useServerDose(request: DoseRequest | null) {
+  return useQuery({ ...doseQueryOptions(request ?? ({} as DoseRequest)), enabled: request !== null, placeholderData: keepPreviousData });
 }

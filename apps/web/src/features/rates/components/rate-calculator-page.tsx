@@ -1,4 +1,201 @@
-/** Placeholder until the Rate calculator is built. */
+import { Callout, Card, H2, H3, HTMLSelect, Radio, RadioGroup } from '@blueprintjs/core';
+import { RATE_UNIT_IDS, type RateBasis, type RateUnitId } from '@friable/contracts';
+import { useMemo, useState } from 'react';
+import { Field } from '../../../components/field-errors';
+import { NumberText } from '../../../components/number-text';
+import { SafetyCautions } from '../../../components/safety-cautions';
+import { formatAmount, formatArea, formatNumber, isVolumeRateUnit, parseNumberInput, rateUnitLabels } from '../../../lib/format';
+import { useServerDose } from '../api/compute-dose';
+import { useDebouncedValue } from '../hooks/use-debounced-value';
+import { doseRequestFrom, initialDoseForm, localDose, type DoseFormState, type GeometryMode } from './dose-form-state';
+
+/** Rate calculator: a rate as printed on a bag or in a protocol becomes the amount to weigh out for each plot. */
 export function RateCalculatorPage() {
-  return <p className="fr-muted">The Rate calculator will be here.</p>;
+  const [form, setForm] = useState<DoseFormState>(initialDoseForm);
+  const set = <K extends keyof DoseFormState>(key: K) => (value: DoseFormState[K]) => setForm((all) => ({ ...all, [key]: value }));
+  const { request, missing } = useMemo(() => doseRequestFrom(form), [form]);
+  const settled = useDebouncedValue(request);
+  const server = useServerDose(settled);
+  const local = useMemo(() => (request ? localDose(request) : null), [request]);
+  const serverIsCurrent = server.data !== undefined && !server.isPlaceholderData && JSON.stringify(settled) === JSON.stringify(request);
+  const volume = isVolumeRateUnit(form.unit);
+  const plots = parseNumberInput(form.plots);
+  const margin = parseNumberInput(form.marginPercent) ?? 0;
+
+  const answer = serverIsCurrent ? server.data : local && !('error' in local) ? local : null;
+  const localTotal = answer && plots !== null && plots >= 1 ? (amount: number | null) => (amount === null ? null : amount * plots * (1 + margin / 100)) : null;
+  const total = serverIsCurrent && server.data?.total ? server.data.total : localTotal && answer ? { grams: localTotal(answer.grams), kilograms: localTotal(answer.kilograms), pounds: localTotal(answer.pounds), litres: localTotal(answer.litres), gallons: localTotal(answer.gallons) } : null;
+  const error = server.isError && JSON.stringify(settled) === JSON.stringify(request) ? server.error : null;
+  const problem = missing ?? (local && 'error' in local ? (error?.message ?? local.error) : null);
+
+  return (
+    <section className="fr-rates" aria-labelledby="rates-heading">
+      <H2 id="rates-heading">Rate calculator</H2>
+      <p className="fr-muted">A per-area rate becomes a quantity for one plot or container, in metric and US units. Nothing here is saved.</p>
+      <div className="fr-rates__layout">
+        <Card elevation={0} className="fr-rates__form">
+          <H3>Rate</H3>
+          <div className="fr-form-row">
+            <Field label="Rate" field="rate" error={error}>
+              <NumberText id="fr-field-rate" value={form.rate} onChange={set('rate')} />
+            </Field>
+            <Field label="Unit" field="unit" error={error}>
+              <HTMLSelect id="fr-field-unit" value={form.unit} onChange={(e) => set('unit')(e.target.value as RateUnitId)} fill>
+                {RATE_UNIT_IDS.map((unit) => (
+                  <option key={unit} value={unit}>
+                    {rateUnitLabels[unit]}
+                  </option>
+                ))}
+              </HTMLSelect>
+            </Field>
+          </div>
+          <Field label="Material" field="materialKind" error={error} help="Gypsum rates are compared with common garden rates.">
+            <HTMLSelect id="fr-field-materialKind" value={form.materialKind} onChange={(e) => set('materialKind')(e.target.value as 'gypsum' | 'other')} fill>
+              <option value="gypsum">Gypsum</option>
+              <option value="other">Other material</option>
+            </HTMLSelect>
+          </Field>
+          <Field label="Basis" field="basis" error={error}>
+            <RadioGroup selectedValue={form.basis} onChange={(e) => set('basis')(e.currentTarget.value as RateBasis)}>
+              <Radio value="area" label="Per area: spread over the surface" />
+              <Radio value="concentration" label="Concentration: mixed through a container, matching a field rate worked in to a depth" />
+            </RadioGroup>
+          </Field>
+          {form.basis === 'concentration' && (
+            <div className="fr-form-row">
+              <Field label="Incorporation depth" field="depthCm" error={error} help="How deep the field rate is mixed in.">
+                <NumberText id="fr-field-depthCm" value={form.depthCm} onChange={set('depthCm')} unit="cm" />
+              </Field>
+              <Field label="Soil volume" field="soilVolumeL" error={error} help="Soil in one container.">
+                <NumberText id="fr-field-soilVolumeL" value={form.soilVolumeL} onChange={set('soilVolumeL')} unit="L" />
+              </Field>
+            </div>
+          )}
+          <H3>Plot or container</H3>
+          <Field label="Size given as" field="geometry" error={error}>
+            <RadioGroup inline selectedValue={form.geometry} onChange={(e) => set('geometry')(e.currentTarget.value as GeometryMode)}>
+              <Radio value="rectangle" label="Length × width" />
+              <Radio value="round" label="Inside diameter" />
+              <Radio value="area" label="Area" />
+            </RadioGroup>
+          </Field>
+          {form.geometry === 'rectangle' && (
+            <div className="fr-form-row">
+              <Field label="Length" field="lengthM" error={error}>
+                <NumberText id="fr-field-lengthM" value={form.lengthM} onChange={set('lengthM')} unit="m" />
+              </Field>
+              <Field label="Width" field="widthM" error={error}>
+                <NumberText id="fr-field-widthM" value={form.widthM} onChange={set('widthM')} unit="m" />
+              </Field>
+            </div>
+          )}
+          {form.geometry === 'round' && (
+            <Field label="Inside diameter" field="diameterCm" error={error} help="Inside the pot, at the soil surface.">
+              <NumberText id="fr-field-diameterCm" value={form.diameterCm} onChange={set('diameterCm')} unit="cm" />
+            </Field>
+          )}
+          {form.geometry === 'area' && (
+            <Field label="Surface area" field="areaM2" error={error}>
+              <NumberText id="fr-field-areaM2" value={form.areaM2} onChange={set('areaM2')} unit="m²" />
+            </Field>
+          )}
+          {!volume && (
+            <>
+              <H3>Product</H3>
+              <div className="fr-form-row">
+                <Field label="Purity (optional)" field="purity" error={error} help="When the rate is for the active material only.">
+                  <NumberText id="fr-field-purity" value={form.purityPercent} onChange={set('purityPercent')} unit="% active" />
+                </Field>
+                <Field label="Water share (optional)" field="moistureFraction" error={error} help="When the rate is for dry matter.">
+                  <NumberText id="fr-field-moistureFraction" value={form.moisturePercent} onChange={set('moisturePercent')} unit="% water" />
+                </Field>
+              </div>
+            </>
+          )}
+          <H3>How many</H3>
+          <div className="fr-form-row">
+            <Field label="Plots" field="plots" error={error}>
+              <NumberText id="fr-field-plots" value={form.plots} onChange={set('plots')} />
+            </Field>
+            <Field label="Margin" field="marginPercent" error={error} help="Extra for spills and weighing.">
+              <NumberText id="fr-field-marginPercent" value={form.marginPercent} onChange={set('marginPercent')} unit="%" />
+            </Field>
+          </div>
+        </Card>
+
+        <div className="fr-rates__result" aria-live="polite">
+          <Card elevation={1} className="fr-result-card">
+            <H3>Amount per plot</H3>
+            {problem || !answer ? (
+              <p className="fr-muted">{problem ?? 'Working it out…'}</p>
+            ) : (
+              <>
+                <p className="fr-result-card__area">
+                  For {formatArea(answer.areaM2)} of surface{form.basis === 'concentration' ? ', mixed through the soil' : ''}
+                </p>
+                <dl className="fr-result">
+                  {answer.grams !== null && (
+                    <>
+                      <div>
+                        <dt>grams</dt>
+                        <dd>{formatAmount(answer.grams, 'g')}</dd>
+                      </div>
+                      <div>
+                        <dt>kilograms</dt>
+                        <dd>{formatAmount(answer.kilograms, 'kg')}</dd>
+                      </div>
+                      <div>
+                        <dt>ounces</dt>
+                        <dd>{formatAmount(answer.ounces, 'oz')}</dd>
+                      </div>
+                      <div>
+                        <dt>pounds</dt>
+                        <dd>{formatAmount(answer.pounds, 'lb')}</dd>
+                      </div>
+                    </>
+                  )}
+                  {answer.litres !== null && (
+                    <>
+                      <div>
+                        <dt>litres</dt>
+                        <dd>{formatAmount(answer.litres, 'L')}</dd>
+                      </div>
+                      <div>
+                        <dt>US gallons</dt>
+                        <dd>{formatAmount(answer.gallons, 'gal')}</dd>
+                      </div>
+                    </>
+                  )}
+                </dl>
+                {total && plots !== null && (
+                  <p className="fr-result-card__total">
+                    For all {formatNumber(plots, 0)} plots{margin ? ` with ${formatNumber(margin, 1)}% extra` : ''}:{' '}
+                    <strong>
+                      {[
+                        total.grams !== null ? `${formatAmount(total.kilograms, 'kg')} (${formatAmount(total.pounds, 'lb')})` : null,
+                        total.litres !== null ? `${formatAmount(total.litres, 'L')} (${formatAmount(total.gallons, 'gal')})` : null,
+                      ]
+                        .filter(Boolean)
+                        .join(' · ')}
+                    </strong>
+                  </p>
+                )}
+                {answer.warnings.length > 0 && (
+                  <Callout intent="warning" icon="warning-sign" compact title="Check this rate" className="fr-gap">
+                    <ul>
+                      {answer.warnings.map((w) => (
+                        <li key={w}>{w}</li>
+                      ))}
+                    </ul>
+                  </Callout>
+                )}
+                <p className="fr-muted fr-small">{serverIsCurrent ? 'Checked with Friable’s server.' : 'Worked out in your browser; checking with the server…'}</p>
+              </>
+            )}
+          </Card>
+          <SafetyCautions />
+        </div>
+      </div>
+    </section>
+  );
 }
