@@ -2,11 +2,14 @@ import { Alignment, Button, Navbar, NavbarDivider, NavbarGroup, NavbarHeading } 
 import { Link, NavLink, Outlet, useNavigate } from 'react-router-dom';
 import { paths } from '../../config/paths';
 import { useAuth } from '../../features/auth/hooks/auth-context';
+import { useOutboxAvailable } from '../../features/outbox/api/get-outbox';
 
 /** The frame of every signed-in page: Friable's name, the person, sign-out. */
 export function AppLayout() {
   const { user, signOut } = useAuth();
   const navigate = useNavigate();
+  // The API answers the Outbox only outside production; the link appears when it does.
+  const outbox = useOutboxAvailable(Boolean(user));
   return (
     <div className="fr-app">
       <Navbar className="fr-topbar">
@@ -24,6 +27,11 @@ export function AppLayout() {
           <NavLink to={paths.rateCalculator.href()} className="fr-nav-link">
             Rate calculator
           </NavLink>
+          {outbox && (
+            <NavLink to={paths.outbox.href()} className="fr-nav-link">
+              Outbox
+            </NavLink>
+          )}
         </NavbarGroup>
         <NavbarGroup align={Alignment.END}>
           <span className="fr-person" aria-label="Signed in as">

@@ -1,0 +1,20 @@
+import type { OutboxMessage } from '@friable/contracts';
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { apiRequest } from '../../../lib/api-client';
+
+/** GET /api/dev/outbox — e-mails the local SMTP sink caught, newest first (404 in production). */
+export function getOutbox(): Promise<OutboxMessage[]> {
+  return apiRequest<OutboxMessage[]>('/dev/outbox');
+}
+
+export const outboxQueryOptions = () => queryOptions({ queryKey: ['dev', 'outbox'], queryFn: getOutbox, retry: false });
+
+export function useOutbox() {
+  return useQuery({ ...outboxQueryOptions(), refetchInterval: 5_000 });
+}
+
+/** True when this server has an Outbox (development and test), so the top bar can offer the link. */
+export function useOutboxAvailable(enabled: boolean): boolean {
+  const query = useQuery({ ...outboxQueryOptions(), enabled, staleTime: Infinity });
+  return query.isSuccess;
+}
