@@ -5,6 +5,15 @@ import { SequelizeModule } from '@nestjs/sequelize';
 import { resolve } from 'node:path';
 import { ActivityModule } from './activity/activity.module';
 import { AuthModule } from './auth/auth.module';
+import { ProtocolSupportModule } from './common/protocol/protocol-support.module';
+import { DemoModule } from './demo/demo.module';
+import { FactorsModule } from './factors/factors.module';
+import { MeasuresModule } from './measures/measures.module';
+import { PlotsModule } from './plots/plots.module';
+import { RatesModule } from './rates/rates.module';
+import { RoundsModule } from './rounds/rounds.module';
+import { SitesModule } from './sites/sites.module';
+import { TreatmentsModule } from './treatments/treatments.module';
 import { AccessGuard } from './auth/guards/access.guard';
 import { JwtAuthGuard } from './auth/guards/jwt-auth.guard';
 import { ProblemFilter } from './common/filters/problem.filter';
@@ -36,6 +45,15 @@ import { UsersModule } from './users/users.module';
     TrialsModule,
     HealthModule,
     ActivityModule,
+    ProtocolSupportModule,
+    FactorsModule,
+    TreatmentsModule,
+    MeasuresModule,
+    RoundsModule,
+    SitesModule,
+    PlotsModule,
+    RatesModule,
+    DemoModule,
   ],
   providers: [
     { provide: APP_GUARD, useClass: JwtAuthGuard },

@@ -4,7 +4,9 @@ import { readDatabaseConfig } from './config/database.config';
 import { allModels } from './database/models';
 import { createMigrator } from './database/migrator';
 import { sequelizeOptions } from './database/sequelize-options';
-import { loadDemoScenario } from './demo/demo-scenario';
+import { NestFactory } from '@nestjs/core';
+import { AppModule } from './app.module';
+import { DemoLoaderService } from './demo/demo-loader.service';
 
 const usage = `usage: node dist/cli.js migrate up|down|down-all|status
        node dist/cli.js demo load`;
@@ -32,8 +34,18 @@ async function main(args: string[]): Promise<void> {
         throw new Error(usage);
       }
     } else if (area === 'demo' && action === 'load') {
-      const { created } = await loadDemoScenario(sequelize, process.env.DEMO_PASSWORD || 'friable-demo');
-      console.log(created ? `demo scenario loaded (${created} new records)` : 'demo scenario already loaded');
+      // Through the API's own services, so the demo passes the same checks and fills the activity log.
+      const app = await NestFactory.createApplicationContext(AppModule, { logger: ['error', 'warn'] });
+      try {
+        const { created, protocols } = await app.get(DemoLoaderService).load(process.env.DEMO_PASSWORD || 'friable-demo');
+        console.log(
+          created || protocols.length
+            ? `demo scenario loaded (${created} new records; protocols: ${protocols.join(', ') || 'none'})`
+            : 'demo scenario already loaded',
+        );
+      } finally {
+        await app.close();
+      }
     } else {
       throw new Error(usage);
     }

@@ -1,7 +1,28 @@
 import { ActivityEntryRow } from '../activity/models/activity-entry.model';
+import { FactorLevel } from '../factors/models/factor-level.model';
+import { TrialFactor } from '../factors/models/trial-factor.model';
+import { MeasureRow } from '../measures/models/measure.model';
+import { PlotRow } from '../plots/models/plot.model';
+import { AssessmentRoundRow } from '../rounds/models/assessment-round.model';
+import { RoundMeasure } from '../rounds/models/round-measure.model';
+import { SiteRow } from '../sites/models/site.model';
+import { TreatmentRow } from '../treatments/models/treatment.model';
 import { Trial } from '../trials/models/trial.model';
 import { TrialMembership } from '../trials/models/trial-membership.model';
 import { User } from '../users/models/user.model';
 
 /** Every model, for connections made outside Nest (command line, tests). */
-export const allModels = [User, Trial, TrialMembership, ActivityEntryRow];
+export const allModels = [
+  User,
+  Trial,
+  TrialMembership,
+  ActivityEntryRow,
+  TrialFactor,
+  FactorLevel,
+  TreatmentRow,
+  MeasureRow,
+  AssessmentRoundRow,
+  RoundMeasure,
+  SiteRow,
+  PlotRow,
+];

@@ -18,8 +18,8 @@ export function readDemoScenario(): DemoScenario {
 }
 
 /**
- * Loads the invented demo scenario once: people and trials that already exist are left as they are,
- * so running it again changes nothing.
+ * Loads the invented demo people and trials once: people and trials that already exist are left as
+ * they are, so running it again changes nothing. The protocols come next, from DemoLoaderService.
  */
 export async function loadDemoScenario(sequelize: Sequelize, password: string): Promise<{ created: number }> {
   const scenario = readDemoScenario();
@@ -39,7 +39,8 @@ export async function loadDemoScenario(sequelize: Sequelize, password: string): 
     for (const plan of scenario.trials) {
       const [trial, isNew] = await Trial.findOrCreate({
         where: { code: plan.code },
-        defaults: { code: plan.code, title: plan.title, design: plan.design, status: plan.status, createdBy: ids.get(plan.members[0].email) },
+        // New trials start as drafts: the protocol loader activates them through the same checks as the API.
+        defaults: { code: plan.code, title: plan.title, design: plan.design, status: 'draft', seed: 'friable', createdBy: ids.get(plan.members[0].email) },
         transaction,
       });
       if (!isNew) continue;

@@ -1,5 +1,5 @@
 import { Body, Controller, Get, Patch, Post } from '@nestjs/common';
-import { ApiConflictResponse, ApiTags } from '@nestjs/swagger';
+import { ApiConflictResponse, ApiOkResponse, ApiTags, ApiUnprocessableEntityResponse } from '@nestjs/swagger';
 import type { AuthUser, TrialAccessContext } from '../auth/auth-user';
 import { AnyTrialMember, SignedIn, TrialAccess } from '../common/decorators/access.decorator';
 import { CurrentTrialAccess, CurrentUser } from '../common/decorators/current-user.decorator';
@@ -27,13 +27,17 @@ export class TrialsController {
 
   @Get(':trialId')
   @AnyTrialMember()
+  @ApiOkResponse({ description: 'TrialDetail: the whole protocol with its activation checks.' })
   get(@CurrentTrialAccess() access: TrialAccessContext) {
     return this.trials.get(access);
   }
 
   @Patch(':trialId')
   @TrialAccess('investigator')
-  update(@CurrentTrialAccess() access: TrialAccessContext, @Body() body: UpdateTrialDto) {
-    return this.trials.update(access, body);
+  @ApiOkResponse({ description: 'TrialDetail after the change.' })
+  @ApiUnprocessableEntityResponse({ description: 'A field is wrong, or (status active) the activation checks fail: errors lists each problem.' })
+  @ApiConflictResponse({ description: 'The trial is locked, or the status change is not allowed.' })
+  update(@CurrentTrialAccess() access: TrialAccessContext, @CurrentUser() user: AuthUser, @Body() body: UpdateTrialDto) {
+    return this.trials.update(access, body, user);
   }
 }

@@ -1,5 +1,11 @@
 import { Module } from '@nestjs/common';
 import { SequelizeModule } from '@nestjs/sequelize';
+import { FactorsModule } from '../factors/factors.module';
+import { TrialFactor } from '../factors/models/trial-factor.model';
+import { MeasuresModule } from '../measures/measures.module';
+import { RoundsModule } from '../rounds/rounds.module';
+import { SitesModule } from '../sites/sites.module';
+import { TreatmentsModule } from '../treatments/treatments.module';
 import { Trial } from './models/trial.model';
 import { TrialMembership } from './models/trial-membership.model';
 import { TrialMembershipsService } from './trial-memberships.service';
@@ -7,9 +13,9 @@ import { TrialsController } from './trials.controller';
 import { TrialsService } from './trials.service';
 
 @Module({
-  imports: [SequelizeModule.forFeature([Trial, TrialMembership])],
+  imports: [SequelizeModule.forFeature([Trial, TrialMembership, TrialFactor]), TreatmentsModule, MeasuresModule, RoundsModule, SitesModule, FactorsModule],
   controllers: [TrialsController],
   providers: [TrialsService, TrialMembershipsService],
-  exports: [TrialMembershipsService],
+  exports: [TrialMembershipsService, TrialsService],
 })
 export class TrialsModule {}

@@ -1,13 +1,27 @@
-import type { TrialSummary } from '@friable/contracts';
-import { Injectable, NotFoundException } from '@nestjs/common';
+import type { TrialDetail, TrialSummary } from '@friable/contracts';
+import { ConflictException, Injectable, NotFoundException } from '@nestjs/common';
 import { InjectConnection, InjectModel } from '@nestjs/sequelize';
+import { randomBytes } from 'node:crypto';
+import type { Transaction } from 'sequelize';
 import type { Sequelize } from 'sequelize-typescript';
+import { ActivityService } from '../activity/activity.service';
 import type { AuthUser, TrialAccessContext } from '../auth/auth-user';
+import { FieldProblemsException } from '../common/exceptions/field-problems.exception';
+import { TrialLockedException } from '../common/exceptions/trial-locked.exception';
+import { ObservationsGuardService } from '../common/protocol/observations-guard.service';
+import { ProtocolGateService } from '../common/protocol/protocol-gate.service';
+import { FactorsService } from '../factors/factors.service';
+import { TrialFactor } from '../factors/models/trial-factor.model';
+import { MeasuresService } from '../measures/measures.service';
+import { RoundsService } from '../rounds/rounds.service';
+import { SitesService } from '../sites/sites.service';
+import { TreatmentsService } from '../treatments/treatments.service';
+import { activationCheck } from './activation-check';
 import type { CreateTrialDto } from './dto/create-trial.dto';
 import type { UpdateTrialDto } from './dto/update-trial.dto';
 import { Trial } from './models/trial.model';
 import { TrialMembership, type TrialRole } from './models/trial-membership.model';
-
+import { statusTransitionRefusal } from './status-transition';
 
 function summarise(trial: Trial, roles: TrialRole[]): TrialSummary {
   return {
@@ -21,12 +35,23 @@ function summarise(trial: Trial, roles: TrialRole[]): TrialSummary {
   };
 }
 
+const trimmed = (text: string | null | undefined) => (text === undefined ? undefined : text === null ? null : text.trim() || null);
+
 @Injectable()
 export class TrialsService {
   constructor(
     @InjectModel(Trial) private readonly trials: typeof Trial,
     @InjectModel(TrialMembership) private readonly memberships: typeof TrialMembership,
+    @InjectModel(TrialFactor) private readonly factors: typeof TrialFactor,
     @InjectConnection() private readonly sequelize: Sequelize,
+    private readonly treatments: TreatmentsService,
+    private readonly measures: MeasuresService,
+    private readonly rounds: RoundsService,
+    private readonly sites: SitesService,
+    private readonly factorService: FactorsService,
+    private readonly gate: ProtocolGateService,
+    private readonly observations: ObservationsGuardService,
+    private readonly activity: ActivityService,
   ) {}
 
   /** The trials the person holds a role on; an instance administrator sees every trial. */
@@ -44,25 +69,122 @@ export class TrialsService {
   async create(input: CreateTrialDto, user: AuthUser): Promise<TrialSummary> {
     return this.sequelize.transaction(async (transaction) => {
       const trial = await this.trials.create(
-        { code: input.code.toUpperCase(), title: input.title.trim(), design: input.design ?? 'rcbd', status: 'draft', createdBy: user.id },
+        {
+          code: input.code.toUpperCase(),
+          title: input.title.trim(),
+          design: input.design ?? 'rcbd',
+          status: 'draft',
+          question: trimmed(input.question) ?? null,
+          startDate: input.startDate ?? null,
+          seed: input.seed ?? randomBytes(6).toString('hex'),
+          safetyNotes: trimmed(input.safetyNotes) ?? null,
+          createdBy: user.id,
+        },
         { transaction },
       );
       await this.memberships.create({ trialId: trial.id, userId: user.id, role: 'investigator', siteId: null }, { transaction });
+      await this.activity.record(transaction, {
+        trialId: trial.id,
+        userId: user.id,
+        kind: 'trial.created',
+        summary: `Created trial ${trial.code} (${trial.design}) with seed ${trial.seed}.`,
+        details: { code: trial.code, design: trial.design, seed: trial.seed },
+      });
       return summarise(trial, ['investigator']);
     });
   }
 
-  async get(access: TrialAccessContext): Promise<TrialSummary> {
-    const trial = await this.trials.findByPk(access.trialId);
+  /** The whole protocol of a trial, with the activation checks. */
+  async get(access: TrialAccessContext, transaction?: Transaction): Promise<TrialDetail> {
+    const trial = await this.trials.findByPk(access.trialId, { transaction });
     if (!trial) throw new NotFoundException('No such trial.');
-    return summarise(trial, access.roles);
+    const [factors, treatments, measures, rounds, sites] = [
+      await this.factorService.list(trial.id, transaction),
+      await this.treatments.list(trial.id, transaction),
+      await this.measures.list(trial.id, transaction),
+      await this.rounds.list(trial.id, transaction),
+      await this.sites.list(trial.id, transaction),
+    ];
+    return {
+      id: trial.id,
+      code: trial.code,
+      title: trial.title,
+      question: trial.question,
+      design: trial.design,
+      status: trial.status,
+      startDate: trial.startDate,
+      seed: trial.seed,
+      safetyNotes: trial.safetyNotes,
+      noControlReason: trial.noControlReason,
+      ownerId: trial.createdBy,
+      myRoles: access.roles,
+      mySiteIds: access.siteIds,
+      updatedAt: trial.updatedAt.toISOString(),
+      factors,
+      treatments,
+      measures,
+      rounds,
+      sites,
+      activation: activationCheck({ design: trial.design, factorCount: factors.length, noControlReason: trial.noControlReason, treatments, measures, rounds, sites }),
+    };
   }
 
-  async update(access: TrialAccessContext, input: UpdateTrialDto): Promise<TrialSummary> {
-    const trial = await this.trials.findByPk(access.trialId);
-    if (!trial) throw new NotFoundException('No such trial.');
-    if (input.title !== undefined) trial.title = input.title.trim();
-    await trial.save();
-    return summarise(trial, access.roles);
+  /** Changes the protocol's own fields and, last, the status (draft → active needs every activation check). */
+  async update(access: TrialAccessContext, input: UpdateTrialDto, user: AuthUser): Promise<TrialDetail> {
+    return this.sequelize.transaction(async (transaction) => {
+      const trial = await this.trials.findByPk(access.trialId, { transaction, lock: transaction.LOCK.UPDATE });
+      if (!trial) throw new NotFoundException('No such trial.');
+      const { status, ...fields } = input;
+      const fieldNames = Object.keys(fields) as Array<keyof typeof fields>;
+      if (fieldNames.length) {
+        await this.gate.openForWrite(trial.id, transaction);
+        if (fields.design !== undefined && fields.design !== trial.design) {
+          await this.gate.clearLayouts(trial.id, 'all', { userId: user.id, what: `Changing the design from ${trial.design} to ${fields.design}` }, transaction);
+          if (trial.design === 'factorial-rcbd') await this.factors.destroy({ where: { trialId: trial.id }, transaction });
+        }
+        trial.set({
+          ...fields,
+          ...(fields.title !== undefined ? { title: fields.title.trim() } : {}),
+          ...(fields.question !== undefined ? { question: trimmed(fields.question) } : {}),
+          ...(fields.safetyNotes !== undefined ? { safetyNotes: trimmed(fields.safetyNotes) } : {}),
+          ...(fields.noControlReason !== undefined ? { noControlReason: trimmed(fields.noControlReason) } : {}),
+        });
+        trial.changed('updatedAt', true);
+        await trial.save({ transaction });
+        await this.activity.record(transaction, {
+          trialId: trial.id,
+          userId: user.id,
+          kind: 'trial.updated',
+          summary: `Changed the trial's ${fieldNames.join(', ')}.`,
+          details: { changed: fieldNames },
+        });
+      }
+      if (status !== undefined && status !== trial.status) await this.changeStatus(trial, status, access, user, transaction);
+      return this.get(access, transaction);
+    });
+  }
+
+  private async changeStatus(trial: Trial, status: Trial['status'], access: TrialAccessContext, user: AuthUser, transaction: Transaction): Promise<void> {
+    const refusal = statusTransitionRefusal(trial.status, status, await this.observations.trialHasObservations(trial.id));
+    if (refusal) throw trial.status === 'locked' ? new TrialLockedException('locked') : new ConflictException(refusal);
+    if (status === 'active' && trial.status === 'draft') {
+      const { activation } = await this.get(access, transaction);
+      if (!activation.ready) {
+        throw new FieldProblemsException(
+          activation.problems.map((message) => ({ field: 'status', message })),
+          `The trial cannot become active yet: ${activation.problems.join(' ')}`,
+        );
+      }
+    }
+    const from = trial.status;
+    trial.status = status;
+    await trial.save({ transaction });
+    await this.activity.record(transaction, {
+      trialId: trial.id,
+      userId: user.id,
+      kind: 'trial.status-changed',
+      summary: `Changed the trial from ${from} to ${status}.`,
+      details: { from, to: status },
+    });
   }
 }

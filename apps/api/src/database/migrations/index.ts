@@ -3,6 +3,13 @@ import * as createUsers from './20261201090000-create-users';
 import * as createTrials from './20261201090100-create-trials';
 import * as createTrialMemberships from './20261201090200-create-trial-memberships';
 import * as createActivityEntries from './20261202090000-create-activity-entries';
+import * as extendTrialsProtocol from './20261202090100-extend-trials-protocol';
+import * as createFactors from './20261202090200-create-factors';
+import * as createTreatments from './20261202090300-create-treatments';
+import * as createMeasures from './20261202090400-create-measures';
+import * as createAssessmentRounds from './20261202090500-create-assessment-rounds';
+import * as createSites from './20261202090600-create-sites';
+import * as createPlots from './20261202090700-create-plots';
 
 export interface MigrationModule {
   up(params: { context: QueryInterface }): Promise<void>;
@@ -15,4 +22,11 @@ export const migrations: ReadonlyArray<readonly [name: string, module: Migration
   ['20261201090100-create-trials', createTrials],
   ['20261201090200-create-trial-memberships', createTrialMemberships],
   ['20261202090000-create-activity-entries', createActivityEntries],
+  ['20261202090100-extend-trials-protocol', extendTrialsProtocol],
+  ['20261202090200-create-factors', createFactors],
+  ['20261202090300-create-treatments', createTreatments],
+  ['20261202090400-create-measures', createMeasures],
+  ['20261202090500-create-assessment-rounds', createAssessmentRounds],
+  ['20261202090600-create-sites', createSites],
+  ['20261202090700-create-plots', createPlots],
 ];

@@ -1,5 +1,5 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
-import { IsIn, IsOptional, IsString, Matches, MaxLength, MinLength } from 'class-validator';
+import { IsIn, IsISO8601, IsOptional, IsString, Matches, MaxLength, MinLength } from 'class-validator';
 import { TRIAL_DESIGNS, type TrialDesign } from '../models/trial.model';
 
 export class CreateTrialDto {
@@ -18,4 +18,28 @@ export class CreateTrialDto {
   @IsOptional()
   @IsIn(TRIAL_DESIGNS, { message: `design must be one of ${TRIAL_DESIGNS.join(', ')}` })
   design?: TrialDesign;
+
+  @ApiPropertyOptional({ nullable: true, description: 'The question or hypothesis the trial answers.' })
+  @IsOptional()
+  @IsString({ message: 'question must be text' })
+  @MaxLength(2000, { message: 'question must be at most 2000 characters long' })
+  question?: string | null;
+
+  @ApiPropertyOptional({ nullable: true, example: '2026-04-01' })
+  @IsOptional()
+  @IsISO8601({ strict: true }, { message: 'startDate must be a date like 2026-04-01' })
+  @Matches(/^\d{4}-\d{2}-\d{2}$/, { message: 'startDate must be a date like 2026-04-01' })
+  startDate?: string | null;
+
+  @ApiPropertyOptional({ example: 'clay-2026', description: 'Randomization seed text; a random one when left out.' })
+  @IsOptional()
+  @IsString({ message: 'seed must be 1 to 60 characters of text' })
+  @Matches(/^\S.{0,59}$/s, { message: 'seed must be 1 to 60 characters of text' })
+  seed?: string;
+
+  @ApiPropertyOptional({ nullable: true })
+  @IsOptional()
+  @IsString({ message: 'safetyNotes must be text' })
+  @MaxLength(4000, { message: 'safetyNotes must be at most 4000 characters long' })
+  safetyNotes?: string | null;
 }

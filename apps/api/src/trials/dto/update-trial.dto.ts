@@ -1,11 +1,17 @@
-import { ApiPropertyOptional } from '@nestjs/swagger';
-import { IsOptional, IsString, MaxLength, MinLength } from 'class-validator';
+import { ApiPropertyOptional, OmitType, PartialType } from '@nestjs/swagger';
+import { IsIn, IsOptional, IsString, MaxLength } from 'class-validator';
+import { TRIAL_STATUSES, type TrialStatus } from '../models/trial.model';
+import { CreateTrialDto } from './create-trial.dto';
 
-export class UpdateTrialDto {
-  @ApiPropertyOptional({ example: 'Gypsum and compost on heavy clay, second season' })
+export class UpdateTrialDto extends PartialType(OmitType(CreateTrialDto, ['code'] as const)) {
+  @ApiPropertyOptional({ nullable: true, description: 'Why the trial has no untreated control (instead of one).' })
   @IsOptional()
-  @IsString()
-  @MinLength(3, { message: 'title must be at least 3 characters long' })
-  @MaxLength(200, { message: 'title must be at most 200 characters long' })
-  title?: string;
+  @IsString({ message: 'noControlReason must be text' })
+  @MaxLength(500, { message: 'noControlReason must be at most 500 characters long' })
+  noControlReason?: string | null;
+
+  @ApiPropertyOptional({ enum: TRIAL_STATUSES, description: "'active' only when every activation check passes (422 lists the problems)." })
+  @IsOptional()
+  @IsIn(TRIAL_STATUSES, { message: `status must be one of ${TRIAL_STATUSES.join(', ')}` })
+  status?: TrialStatus;
 }

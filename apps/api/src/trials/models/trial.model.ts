@@ -22,6 +22,24 @@ export class Trial extends Model {
   @Column({ type: DataType.STRING(12), allowNull: false, defaultValue: 'draft' })
   declare status: TrialStatus;
 
+  @Column({ type: DataType.TEXT, allowNull: true })
+  declare question: string | null;
+
+  /** YYYY-MM-DD. */
+  @Column({ type: DataType.DATEONLY, allowNull: true, field: 'start_date' })
+  declare startDate: string | null;
+
+  /** Text the plot layouts are randomized from (with each site's key). */
+  @Column({ type: DataType.STRING(60), allowNull: false, defaultValue: 'friable' })
+  declare seed: string;
+
+  @Column({ type: DataType.TEXT, allowNull: true, field: 'safety_notes' })
+  declare safetyNotes: string | null;
+
+  @Column({ type: DataType.STRING(500), allowNull: true, field: 'no_control_reason' })
+  declare noControlReason: string | null;
+
+  /** The owner: the investigator who created the trial. */
   @ForeignKey(() => User)
   @Column({ type: DataType.INTEGER.UNSIGNED, allowNull: true, field: 'created_by' })
   declare createdBy: number | null;

@@ -1,0 +1,93 @@
+import type { MeasureKind, RateBasis, RateUnitId, TrialStatus } from '@friable/contracts';
+import { Injectable, Logger } from '@nestjs/common';
+import { InjectConnection } from '@nestjs/sequelize';
+import { readFileSync } from 'node:fs';
+import { resolve } from 'node:path';
+import type { Sequelize } from 'sequelize-typescript';
+import type { AuthUser, TrialAccessContext } from '../auth/auth-user';
+import { FactorsService } from '../factors/factors.service';
+import { MeasuresService } from '../measures/measures.service';
+import { RoundsService } from '../rounds/rounds.service';
+import { SitesService } from '../sites/sites.service';
+import { TreatmentsService } from '../treatments/treatments.service';
+import { Trial } from '../trials/models/trial.model';
+import { TrialMembership } from '../trials/models/trial-membership.model';
+import { TrialsService } from '../trials/trials.service';
+import { User } from '../users/models/user.model';
+import { loadDemoScenario } from './demo-scenario';
+
+interface DemoProtocol {
+  code: string;
+  status: TrialStatus;
+  question: string | null;
+  startDate: string | null;
+  seed: string;
+  safetyNotes: string | null;
+  factors?: Array<{ name: string; levels: Array<{ code: string; name: string }> }>;
+  treatments?: Array<{ code: string; name: string; isControl?: boolean; description?: string; rateValue?: number; rateUnit?: RateUnitId; rateBasis?: RateBasis; product?: string; materialKind?: 'gypsum' | 'other' }>;
+  measures: Array<{ code: string; name: string; unit: string; kind: MeasureKind } & Record<string, number | string | boolean>>;
+  rounds: Array<{ label: string; dayOffset: number; measures: string[] }>;
+  sites: Array<{ name: string; labelPrefix: string; shape: 'rectangle' | 'round'; blocks: number; lead: string } & Record<string, number | string>>;
+}
+
+export const demoProtocolFile = resolve(__dirname, '../../../../datasets/demo/protocol.json');
+
+/**
+ * Demo loader — the invented Fernwick scenario: people and trials, then each trial's protocol built
+ * through the same services the API uses (so every check and activity entry applies), sites
+ * randomized with the trial's fixed seed, and activation through the status checks.
+ * Idempotent: a trial that already has treatments, measures or sites is left as it is.
+ */
+@Injectable()
+export class DemoLoaderService {
+  private readonly logger = new Logger('Demo');
+
+  constructor(
+    @InjectConnection() private readonly sequelize: Sequelize,
+    private readonly trials: TrialsService,
+    private readonly treatments: TreatmentsService,
+    private readonly factors: FactorsService,
+    private readonly measures: MeasuresService,
+    private readonly rounds: RoundsService,
+    private readonly sites: SitesService,
+  ) {}
+
+  async load(password: string): Promise<{ created: number; protocols: string[] }> {
+    const { created } = await loadDemoScenario(this.sequelize, password);
+    const plans = (JSON.parse(readFileSync(demoProtocolFile, 'utf8')) as { trials: DemoProtocol[] }).trials;
+    const protocols: string[] = [];
+    for (const plan of plans) if (await this.loadProtocol(plan)) protocols.push(plan.code);
+    return { created, protocols };
+  }
+
+  private async loadProtocol(plan: DemoProtocol): Promise<boolean> {
+    const trial = await Trial.findOne({ where: { code: plan.code } });
+    if (!trial) throw new Error(`demo protocol ${plan.code} has no trial in people.json`);
+    const access: TrialAccessContext = { trialId: trial.id, roles: ['investigator'], siteIds: [], adminReadOnly: false };
+    const detail = await this.trials.get(access);
+    if (detail.treatments.length || detail.measures.length || detail.sites.length) return false;
+    const owner = await User.findByPk(trial.createdBy ?? 0);
+    if (!owner) throw new Error(`demo trial ${plan.code} has no owner`);
+    const user: AuthUser = { id: owner.id, email: owner.email, name: owner.name, isAdmin: owner.isAdmin };
+
+    await this.trials.update(access, { question: plan.question, startDate: plan.startDate, seed: plan.seed, safetyNotes: plan.safetyNotes }, user);
+    if (plan.factors) await this.factors.replace(trial.id, user, { factors: plan.factors });
+    for (const treatment of plan.treatments ?? []) await this.treatments.create(trial.id, user, treatment);
+    const measureIds = new Map<string, number>();
+    for (const measure of plan.measures) measureIds.set(measure.code, (await this.measures.create(trial.id, user, measure)).id);
+    for (const round of plan.rounds) {
+      await this.rounds.create(trial.id, user, { label: round.label, dayOffset: round.dayOffset, measureIds: round.measures.map((code) => measureIds.get(code) as number) });
+    }
+    for (const { lead, ...site } of plan.sites) {
+      const leadUser = await User.findOne({ where: { email: lead } });
+      const created = await this.sites.create(trial.id, user, { ...site, leadUserId: leadUser?.id ?? null });
+      if (leadUser) await TrialMembership.update({ siteId: created.id }, { where: { trialId: trial.id, userId: leadUser.id, role: 'collaborator' } });
+      await this.sites.randomize(trial.id, created.id, user);
+    }
+    const current = await this.trials.get(access);
+    if (plan.status === 'active' && current.status !== 'active') await this.trials.update(access, { status: 'active' }, user);
+    if (plan.status === 'active' && !current.activation.ready) throw new Error(`demo trial ${plan.code} does not pass its activation checks: ${current.activation.problems.join(' ')}`);
+    this.logger.log(`protocol of ${plan.code} loaded`);
+    return true;
+  }
+}

@@ -1,0 +1,27 @@
+import { Body, Controller, Get, Put } from '@nestjs/common';
+import { ApiConflictResponse, ApiTags, ApiUnprocessableEntityResponse } from '@nestjs/swagger';
+import type { AuthUser, TrialAccessContext } from '../auth/auth-user';
+import { AnyTrialMember, TrialAccess } from '../common/decorators/access.decorator';
+import { CurrentTrialAccess, CurrentUser } from '../common/decorators/current-user.decorator';
+import { FactorsDto } from './dto/factors.dto';
+import { FactorsService } from './factors.service';
+
+@ApiTags('protocol')
+@Controller('trials/:trialId/factors')
+export class FactorsController {
+  constructor(private readonly factors: FactorsService) {}
+
+  @Get()
+  @AnyTrialMember()
+  list(@CurrentTrialAccess() access: TrialAccessContext) {
+    return this.factors.list(access.trialId);
+  }
+
+  @Put()
+  @TrialAccess('investigator')
+  @ApiUnprocessableEntityResponse({ description: 'Not exactly two factors, a factor with fewer than two levels, or repeated level codes.' })
+  @ApiConflictResponse({ description: 'The trial is locked, is not factorial, or a site has observations.' })
+  replace(@CurrentTrialAccess() access: TrialAccessContext, @CurrentUser() user: AuthUser, @Body() body: FactorsDto) {
+    return this.factors.replace(access.trialId, user, body);
+  }
+}

@@ -1,0 +1,23 @@
+import { Column, DataType, ForeignKey, HasMany, Model, Table } from 'sequelize-typescript';
+import { Trial } from '../../trials/models/trial.model';
+import { FactorLevel } from './factor-level.model';
+
+@Table({ tableName: 'trial_factors' })
+export class TrialFactor extends Model {
+  @Column({ type: DataType.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true })
+  declare id: number;
+
+  @ForeignKey(() => Trial)
+  @Column({ type: DataType.INTEGER.UNSIGNED, allowNull: false, field: 'trial_id' })
+  declare trialId: number;
+
+  /** 1 = factor A, 2 = factor B. */
+  @Column({ type: DataType.TINYINT.UNSIGNED, allowNull: false })
+  declare position: 1 | 2;
+
+  @Column({ type: DataType.STRING(80), allowNull: false })
+  declare name: string;
+
+  @HasMany(() => FactorLevel)
+  declare levels?: FactorLevel[];
+}

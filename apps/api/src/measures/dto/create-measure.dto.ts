@@ -1,0 +1,84 @@
+import { MEASURE_KINDS, type MeasureKind } from '@friable/contracts';
+import { MEASURE_UNITS } from '@friable/field';
+import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
+import { IsBoolean, IsIn, IsInt, IsNumber, IsOptional, IsString, Matches, Max, MaxLength, Min, MinLength } from 'class-validator';
+
+export const MEASURE_UNIT_IDS = MEASURE_UNITS.map((unit) => unit.id);
+const finite = { allowNaN: false, allowInfinity: false };
+
+export class CreateMeasureDto {
+  @ApiProperty({ example: 'DRAIN', description: 'Unique in the trial: 1 to 12 letters, digits or dashes.' })
+  @IsString({ message: 'code must be 1 to 12 letters, digits or dashes' })
+  @Matches(/^[A-Za-z0-9][A-Za-z0-9-]{0,11}$/, { message: 'code must be 1 to 12 letters, digits or dashes' })
+  code: string;
+
+  @ApiProperty({ example: 'drain time' })
+  @IsString({ message: 'name must be text' })
+  @MinLength(1, { message: 'name must be 1 to 80 characters long' })
+  @MaxLength(80, { message: 'name must be 1 to 80 characters long' })
+  @Matches(/^[^,()[\]\r\n"]+$/, { message: 'name must not hold commas, brackets, quotes or line breaks (it heads a CSV column)' })
+  name: string;
+
+  @ApiProperty({ enum: MEASURE_UNIT_IDS, example: 's', description: "A unit Friable converts (@friable/field's MEASURE_UNITS)." })
+  @IsIn(MEASURE_UNIT_IDS, { message: `unit must be one of ${MEASURE_UNIT_IDS.join(', ')}` })
+  unit: string;
+
+  @ApiProperty({ enum: MEASURE_KINDS })
+  @IsIn(MEASURE_KINDS, { message: `kind must be one of ${MEASURE_KINDS.join(', ')}` })
+  kind: MeasureKind;
+
+  @ApiPropertyOptional({ nullable: true, description: 'Lowest score (kind score).' })
+  @IsOptional()
+  @IsNumber(finite, { message: 'scaleMin must be a number' })
+  scaleMin?: number | null;
+
+  @ApiPropertyOptional({ nullable: true, description: 'Highest score (kind score).' })
+  @IsOptional()
+  @IsNumber(finite, { message: 'scaleMax must be a number' })
+  scaleMax?: number | null;
+
+  @ApiPropertyOptional({ nullable: true, description: 'Cut-off in the unit (kind time-with-cutoff).' })
+  @IsOptional()
+  @IsNumber(finite, { message: 'cutoff must be a number above 0' })
+  @Min(0.000001, { message: 'cutoff must be a number above 0' })
+  cutoff?: number | null;
+
+  @ApiPropertyOptional({ nullable: true, description: 'Below: a warning.' })
+  @IsOptional()
+  @IsNumber(finite, { message: 'plausibleMin must be a number' })
+  plausibleMin?: number | null;
+
+  @ApiPropertyOptional({ nullable: true, description: 'Above: a warning.' })
+  @IsOptional()
+  @IsNumber(finite, { message: 'plausibleMax must be a number' })
+  plausibleMax?: number | null;
+
+  @ApiPropertyOptional({ nullable: true, description: 'Below: an error.' })
+  @IsOptional()
+  @IsNumber(finite, { message: 'hardMin must be a number' })
+  hardMin?: number | null;
+
+  @ApiPropertyOptional({ nullable: true, description: 'Above: an error.' })
+  @IsOptional()
+  @IsNumber(finite, { message: 'hardMax must be a number' })
+  hardMax?: number | null;
+
+  @ApiPropertyOptional({ default: 1, minimum: 0, maximum: 6 })
+  @IsOptional()
+  @IsInt({ message: 'decimals must be a whole number from 0 to 6' })
+  @Min(0, { message: 'decimals must be a whole number from 0 to 6' })
+  @Max(6, { message: 'decimals must be a whole number from 0 to 6' })
+  decimals?: number;
+
+  @ApiPropertyOptional({ default: true })
+  @IsOptional()
+  @IsBoolean({ message: 'higherIsBetter must be true or false' })
+  higherIsBetter?: boolean;
+
+  @ApiPropertyOptional()
+  @IsOptional()
+  @IsInt({ message: 'position must be a whole number from 0 to 999' })
+  @Min(0, { message: 'position must be a whole number from 0 to 999' })
+  @Max(999, { message: 'position must be a whole number from 0 to 999' })
+  position?: number;
+}

@@ -1,0 +1,44 @@
+import { Body, Controller, Delete, Get, HttpCode, Param, ParseIntPipe, Patch, Post } from '@nestjs/common';
+import { ApiConflictResponse, ApiTags, ApiUnprocessableEntityResponse } from '@nestjs/swagger';
+import type { AuthUser, TrialAccessContext } from '../auth/auth-user';
+import { AnyTrialMember, TrialAccess } from '../common/decorators/access.decorator';
+import { CurrentTrialAccess, CurrentUser } from '../common/decorators/current-user.decorator';
+import { CreateMeasureDto } from './dto/create-measure.dto';
+import { UpdateMeasureDto } from './dto/update-measure.dto';
+import { MeasuresService } from './measures.service';
+
+@ApiTags('protocol')
+@Controller('trials/:trialId/measures')
+export class MeasuresController {
+  constructor(private readonly measures: MeasuresService) {}
+
+  @Get()
+  @AnyTrialMember()
+  list(@CurrentTrialAccess() access: TrialAccessContext) {
+    return this.measures.list(access.trialId);
+  }
+
+  @Post()
+  @TrialAccess('investigator')
+  @ApiUnprocessableEntityResponse({ description: 'A field is wrong (e.g. the code is already used); nothing written.' })
+  @ApiConflictResponse({ description: 'The trial is locked.' })
+  create(@CurrentTrialAccess() access: TrialAccessContext, @CurrentUser() user: AuthUser, @Body() body: CreateMeasureDto) {
+    return this.measures.create(access.trialId, user, body);
+  }
+
+  @Patch(':id')
+  @TrialAccess('investigator')
+  @ApiUnprocessableEntityResponse({ description: 'A field is wrong; nothing written.' })
+  @ApiConflictResponse({ description: 'The trial is locked.' })
+  update(@CurrentTrialAccess() access: TrialAccessContext, @CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number, @Body() body: UpdateMeasureDto) {
+    return this.measures.update(access.trialId, id, user, body);
+  }
+
+  @Delete(':id')
+  @HttpCode(204)
+  @TrialAccess('investigator')
+  @ApiConflictResponse({ description: 'The trial is locked, a site has observations of it, or it is the only measure of a round.' })
+  remove(@CurrentTrialAccess() access: TrialAccessContext, @CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number) {
+    return this.measures.remove(access.trialId, id, user);
+  }
+}

@@ -1,0 +1,130 @@
+import type { Measure } from '@friable/contracts';
+import { ConflictException, Injectable, NotFoundException } from '@nestjs/common';
+import { InjectConnection, InjectModel } from '@nestjs/sequelize';
+import type { Transaction } from 'sequelize';
+import type { Sequelize } from 'sequelize-typescript';
+import { ActivityService } from '../activity/activity.service';
+import type { AuthUser } from '../auth/auth-user';
+import { throwIfProblems } from '../common/exceptions/field-problems.exception';
+import { ProtocolGateService } from '../common/protocol/protocol-gate.service';
+import { AssessmentRoundRow } from '../rounds/models/assessment-round.model';
+import { RoundMeasure } from '../rounds/models/round-measure.model';
+import type { CreateMeasureDto } from './dto/create-measure.dto';
+import type { UpdateMeasureDto } from './dto/update-measure.dto';
+import { measureProblems, presentMeasure } from './measure.presenter';
+import { MeasureRow } from './models/measure.model';
+
+/** Fields whose change would re-read every stored value of the measure. */
+const MEANING_FIELDS = ['unit', 'kind', 'cutoff', 'scaleMin', 'scaleMax'] as const;
+
+@Injectable()
+export class MeasuresService {
+  constructor(
+    @InjectModel(MeasureRow) private readonly measures: typeof MeasureRow,
+    @InjectModel(RoundMeasure) private readonly roundMeasures: typeof RoundMeasure,
+    @InjectModel(AssessmentRoundRow) private readonly rounds: typeof AssessmentRoundRow,
+    @InjectConnection() private readonly sequelize: Sequelize,
+    private readonly gate: ProtocolGateService,
+    private readonly activity: ActivityService,
+  ) {}
+
+  async list(trialId: number, transaction?: Transaction): Promise<Measure[]> {
+    const rows = await this.measures.findAll({ where: { trialId }, order: [['position', 'ASC'], ['id', 'ASC']], transaction });
+    return rows.map(presentMeasure);
+  }
+
+  private async find(trialId: number, id: number, transaction: Transaction): Promise<MeasureRow> {
+    const row = await this.measures.findOne({ where: { id, trialId }, transaction });
+    if (!row) throw new NotFoundException('No such measure in this trial.');
+    return row;
+  }
+
+  private async checkCode(trialId: number, code: string, exceptId: number | null, transaction: Transaction): Promise<void> {
+    const other = await this.measures.findOne({ where: { trialId, code }, transaction });
+    throwIfProblems(other && other.id !== exceptId ? [{ field: 'code', message: `code ${code} is already used by another measure of this trial` }] : []);
+  }
+
+  async create(trialId: number, user: AuthUser, input: CreateMeasureDto): Promise<Measure> {
+    return this.sequelize.transaction(async (transaction) => {
+      await this.gate.openForWrite(trialId, transaction);
+      await this.checkCode(trialId, input.code, null, transaction);
+      const values = {
+        trialId,
+        code: input.code,
+        name: input.name.trim(),
+        unit: input.unit,
+        kind: input.kind,
+        scaleMin: input.scaleMin ?? null,
+        scaleMax: input.scaleMax ?? null,
+        cutoff: input.cutoff ?? null,
+        plausibleMin: input.plausibleMin ?? null,
+        plausibleMax: input.plausibleMax ?? null,
+        hardMin: input.hardMin ?? null,
+        hardMax: input.hardMax ?? null,
+        decimals: input.decimals ?? 1,
+        higherIsBetter: input.higherIsBetter ?? true,
+        position: input.position ?? ((await this.measures.max<number, MeasureRow>('position', { where: { trialId }, transaction })) ?? 0) + 1,
+      };
+      throwIfProblems(measureProblems(values));
+      const row = await this.measures.create(values, { transaction });
+      await this.activity.record(transaction, {
+        trialId,
+        userId: user.id,
+        kind: 'measure.created',
+        summary: `Added measure ${row.code} (${row.name}, ${row.unit}).`,
+        details: { measureId: row.id, code: row.code },
+      });
+      return presentMeasure(row);
+    });
+  }
+
+  async update(trialId: number, id: number, user: AuthUser, input: UpdateMeasureDto): Promise<Measure> {
+    return this.sequelize.transaction(async (transaction) => {
+      await this.gate.openForWrite(trialId, transaction);
+      const row = await this.find(trialId, id, transaction);
+      if (input.code !== undefined && input.code !== row.code) await this.checkCode(trialId, input.code, row.id, transaction);
+      const before = presentMeasure(row);
+      const merged = { ...before, ...input };
+      throwIfProblems(measureProblems(merged));
+      const changed = (Object.keys(input) as Array<keyof UpdateMeasureDto>).filter((key) => input[key] !== before[key]);
+      const meaning = changed.filter((key) => (MEANING_FIELDS as readonly string[]).includes(key));
+      if (meaning.length) {
+        await this.gate.refuseIfObserved(trialId, 'all', `Changing the ${meaning.join(' and ')} of measure ${row.code}`, transaction);
+      }
+      row.set({ ...input, ...(input.name ? { name: input.name.trim() } : {}) });
+      await row.save({ transaction });
+      await this.activity.record(transaction, {
+        trialId,
+        userId: user.id,
+        kind: 'measure.updated',
+        summary: `Changed measure ${row.code}${changed.length ? `: ${changed.join(', ')}` : ''}.`,
+        details: { measureId: row.id, changed },
+      });
+      return presentMeasure(row);
+    });
+  }
+
+  async remove(trialId: number, id: number, user: AuthUser): Promise<void> {
+    await this.sequelize.transaction(async (transaction) => {
+      await this.gate.openForWrite(trialId, transaction);
+      const row = await this.find(trialId, id, transaction);
+      await this.gate.refuseIfObserved(trialId, 'all', `Deleting measure ${row.code}`, transaction);
+      const links = await this.roundMeasures.findAll({ where: { measureId: id }, transaction });
+      for (const link of links) {
+        const others = await this.roundMeasures.count({ where: { roundId: link.roundId }, transaction });
+        if (others === 1) {
+          const round = await this.rounds.findByPk(link.roundId, { transaction });
+          throw new ConflictException(`Measure ${row.code} is the only measure of round ${round?.label ?? link.roundId}; give that round another measure or delete it first.`);
+        }
+      }
+      await row.destroy({ transaction });
+      await this.activity.record(transaction, {
+        trialId,
+        userId: user.id,
+        kind: 'measure.deleted',
+        summary: `Deleted measure ${row.code} (${row.name}).`,
+        details: { measureId: row.id, code: row.code },
+      });
+    });
+  }
+}

@@ -1,0 +1,44 @@
+import { Controller, Get, Header, Param, ParseIntPipe, Query, Res } from '@nestjs/common';
+import { ApiConflictResponse, ApiOkResponse, ApiProduces, ApiTags } from '@nestjs/swagger';
+import type { Response } from 'express';
+import type { TrialAccessContext } from '../auth/auth-user';
+import { AnyTrialMember } from '../common/decorators/access.decorator';
+import { CurrentTrialAccess } from '../common/decorators/current-user.decorator';
+import { AmountsQueryDto, PlotsQueryDto } from './dto/plots-query.dto';
+import { PlotsService } from './plots.service';
+
+@ApiTags('plot plans')
+@Controller('trials/:trialId')
+export class PlotsController {
+  constructor(private readonly plots: PlotsService) {}
+
+  @Get('plots')
+  @AnyTrialMember()
+  @ApiOkResponse({ description: 'Plot[] in site, block and position order.' })
+  list(@CurrentTrialAccess() access: TrialAccessContext, @Query() query: PlotsQueryDto) {
+    return this.plots.list(access.trialId, query.siteId);
+  }
+
+  @Get('amounts')
+  @AnyTrialMember()
+  @ApiOkResponse({ description: 'PlotAmount[]: per site and treatment, the amount for one plot and for the site with the margin.' })
+  amounts(@CurrentTrialAccess() access: TrialAccessContext, @Query() query: AmountsQueryDto) {
+    return this.plots.amounts(access.trialId, query.marginPercent ?? 10);
+  }
+
+  @Get('sites/:siteId/rounds/:roundId/template.csv')
+  @AnyTrialMember()
+  @ApiProduces('text/csv')
+  @Header('Content-Type', 'text/csv; charset=utf-8')
+  @ApiConflictResponse({ description: 'The site is not randomized yet.' })
+  async template(
+    @CurrentTrialAccess() access: TrialAccessContext,
+    @Param('siteId', ParseIntPipe) siteId: number,
+    @Param('roundId', ParseIntPipe) roundId: number,
+    @Res({ passthrough: true }) response: Response,
+  ) {
+    const { filename, csv } = await this.plots.template(access.trialId, siteId, roundId);
+    response.setHeader('Content-Disposition', `attachment; filename="${filename}"`);
+    return csv;
+  }
+}

@@ -1,0 +1,118 @@
+import type { AssessmentRound } from '@friable/contracts';
+import { Injectable, NotFoundException } from '@nestjs/common';
+import { InjectConnection, InjectModel } from '@nestjs/sequelize';
+import type { Transaction } from 'sequelize';
+import type { Sequelize } from 'sequelize-typescript';
+import { ActivityService } from '../activity/activity.service';
+import type { AuthUser } from '../auth/auth-user';
+import { throwIfProblems } from '../common/exceptions/field-problems.exception';
+import { ProtocolGateService } from '../common/protocol/protocol-gate.service';
+import { MeasureRow } from '../measures/models/measure.model';
+import { Trial } from '../trials/models/trial.model';
+import type { CreateRoundDto } from './dto/create-round.dto';
+import type { UpdateRoundDto } from './dto/update-round.dto';
+import { AssessmentRoundRow } from './models/assessment-round.model';
+import { RoundMeasure } from './models/round-measure.model';
+import { presentRound } from './round.presenter';
+
+@Injectable()
+export class RoundsService {
+  constructor(
+    @InjectModel(AssessmentRoundRow) private readonly rounds: typeof AssessmentRoundRow,
+    @InjectModel(RoundMeasure) private readonly links: typeof RoundMeasure,
+    @InjectModel(MeasureRow) private readonly measures: typeof MeasureRow,
+    @InjectModel(Trial) private readonly trials: typeof Trial,
+    @InjectConnection() private readonly sequelize: Sequelize,
+    private readonly gate: ProtocolGateService,
+    private readonly activity: ActivityService,
+  ) {}
+
+  async list(trialId: number, transaction?: Transaction): Promise<AssessmentRound[]> {
+    const trial = await this.trials.findByPk(trialId, { transaction });
+    const rows = await this.rounds.findAll({
+      where: { trialId },
+      include: [{ model: MeasureRow, attributes: ['id'] }],
+      order: [['dayOffset', 'ASC'], ['id', 'ASC']],
+      transaction,
+    });
+    return rows.map((row) => presentRound(row, trial?.startDate ?? null));
+  }
+
+  private async one(trial: Trial, id: number, transaction: Transaction): Promise<AssessmentRound> {
+    const row = await this.rounds.findOne({ where: { id, trialId: trial.id }, include: [{ model: MeasureRow, attributes: ['id'] }], transaction });
+    if (!row) throw new NotFoundException('No such assessment round in this trial.');
+    return presentRound(row, trial.startDate);
+  }
+
+  private async check(trialId: number, input: UpdateRoundDto, exceptId: number | null, transaction: Transaction): Promise<void> {
+    const problems = [];
+    if (input.label !== undefined) {
+      const other = await this.rounds.findOne({ where: { trialId, label: input.label.trim() }, transaction });
+      if (other && other.id !== exceptId) problems.push({ field: 'label', message: `label ${input.label} is already used by another round of this trial` });
+    }
+    if (input.measureIds !== undefined) {
+      const ids = [...new Set(input.measureIds)];
+      const found = await this.measures.count({ where: { trialId, id: ids }, transaction });
+      if (found !== ids.length) problems.push({ field: 'measureIds', message: 'measureIds must list measures of this trial' });
+    }
+    throwIfProblems(problems);
+  }
+
+  private async link(roundId: number, measureIds: number[], transaction: Transaction): Promise<void> {
+    await this.links.destroy({ where: { roundId }, transaction });
+    await this.links.bulkCreate([...new Set(measureIds)].map((measureId) => ({ roundId, measureId })), { transaction });
+  }
+
+  async create(trialId: number, user: AuthUser, input: CreateRoundDto): Promise<AssessmentRound> {
+    return this.sequelize.transaction(async (transaction) => {
+      const trial = await this.gate.openForWrite(trialId, transaction);
+      await this.check(trialId, input, null, transaction);
+      const row = await this.rounds.create({ trialId, label: input.label.trim(), dayOffset: input.dayOffset }, { transaction });
+      await this.link(row.id, input.measureIds, transaction);
+      await this.activity.record(transaction, {
+        trialId,
+        userId: user.id,
+        kind: 'round.created',
+        summary: `Added assessment round ${row.label} (day ${row.dayOffset}).`,
+        details: { roundId: row.id, measureIds: input.measureIds },
+      });
+      return this.one(trial, row.id, transaction);
+    });
+  }
+
+  async update(trialId: number, id: number, user: AuthUser, input: UpdateRoundDto): Promise<AssessmentRound> {
+    return this.sequelize.transaction(async (transaction) => {
+      const trial = await this.gate.openForWrite(trialId, transaction);
+      const before = await this.one(trial, id, transaction);
+      await this.check(trialId, input, id, transaction);
+      if (input.label !== undefined || input.dayOffset !== undefined) {
+        await this.rounds.update({ label: input.label?.trim() ?? before.label, dayOffset: input.dayOffset ?? before.dayOffset }, { where: { id }, transaction });
+      }
+      if (input.measureIds !== undefined) await this.link(id, input.measureIds, transaction);
+      await this.activity.record(transaction, {
+        trialId,
+        userId: user.id,
+        kind: 'round.updated',
+        summary: `Changed assessment round ${input.label ?? before.label}: ${Object.keys(input).join(', ') || 'nothing'}.`,
+        details: { roundId: id, before, changes: input },
+      });
+      return this.one(trial, id, transaction);
+    });
+  }
+
+  async remove(trialId: number, id: number, user: AuthUser): Promise<void> {
+    await this.sequelize.transaction(async (transaction) => {
+      const trial = await this.gate.openForWrite(trialId, transaction);
+      const before = await this.one(trial, id, transaction);
+      await this.gate.refuseIfObserved(trialId, 'all', `Deleting round ${before.label}`, transaction);
+      await this.rounds.destroy({ where: { id }, transaction });
+      await this.activity.record(transaction, {
+        trialId,
+        userId: user.id,
+        kind: 'round.deleted',
+        summary: `Deleted assessment round ${before.label}.`,
+        details: { roundId: id },
+      });
+    });
+  }
+}

@@ -1,0 +1,53 @@
+import { Body, Controller, Delete, Get, HttpCode, Param, ParseIntPipe, Patch, Post } from '@nestjs/common';
+import { ApiConflictResponse, ApiTags, ApiUnprocessableEntityResponse } from '@nestjs/swagger';
+import type { AuthUser, TrialAccessContext } from '../auth/auth-user';
+import { AnyTrialMember, TrialAccess } from '../common/decorators/access.decorator';
+import { CurrentTrialAccess, CurrentUser } from '../common/decorators/current-user.decorator';
+import { CreateSiteDto } from './dto/create-site.dto';
+import { RandomizeSiteDto } from './dto/randomize-site.dto';
+import { UpdateSiteDto } from './dto/update-site.dto';
+import { SitesService } from './sites.service';
+
+@ApiTags('sites')
+@Controller('trials/:trialId/sites')
+export class SitesController {
+  constructor(private readonly sites: SitesService) {}
+
+  @Get()
+  @AnyTrialMember()
+  list(@CurrentTrialAccess() access: TrialAccessContext) {
+    return this.sites.list(access.trialId);
+  }
+
+  @Post()
+  @TrialAccess('investigator')
+  @ApiUnprocessableEntityResponse({ description: 'A field is wrong (e.g. name or prefix used, geometry incomplete); nothing written.' })
+  @ApiConflictResponse({ description: 'The trial is locked.' })
+  create(@CurrentTrialAccess() access: TrialAccessContext, @CurrentUser() user: AuthUser, @Body() body: CreateSiteDto) {
+    return this.sites.create(access.trialId, user, body);
+  }
+
+  @Patch(':id')
+  @TrialAccess('investigator')
+  @ApiUnprocessableEntityResponse({ description: 'A field is wrong; nothing written.' })
+  @ApiConflictResponse({ description: 'The trial is locked, or a block change would touch a site with observations.' })
+  update(@CurrentTrialAccess() access: TrialAccessContext, @CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number, @Body() body: UpdateSiteDto) {
+    return this.sites.update(access.trialId, id, user, body);
+  }
+
+  @Delete(':id')
+  @HttpCode(204)
+  @TrialAccess('investigator')
+  @ApiConflictResponse({ description: 'The trial is locked, or the site has observations.' })
+  remove(@CurrentTrialAccess() access: TrialAccessContext, @CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number) {
+    return this.sites.remove(access.trialId, id, user);
+  }
+
+  @Post(':id/randomize')
+  @HttpCode(200)
+  @TrialAccess('investigator')
+  @ApiConflictResponse({ description: 'The trial is locked, has fewer than two treatments, or the site has observations.' })
+  randomize(@CurrentTrialAccess() access: TrialAccessContext, @CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number, @Body() body: RandomizeSiteDto) {
+    return this.sites.randomize(access.trialId, id, user, body?.seed);
+  }
+}

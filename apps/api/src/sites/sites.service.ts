@@ -1,0 +1,222 @@
+import type { Site } from '@friable/contracts';
+import { plotLabelPrefix, randomizeSite } from '@friable/field';
+import { ConflictException, Injectable, NotFoundException } from '@nestjs/common';
+import { InjectConnection, InjectModel } from '@nestjs/sequelize';
+import { fn, col, type Transaction } from 'sequelize';
+import type { Sequelize } from 'sequelize-typescript';
+import { ActivityService } from '../activity/activity.service';
+import type { AuthUser } from '../auth/auth-user';
+import { throwIfProblems, type FieldProblem } from '../common/exceptions/field-problems.exception';
+import { ObservationsGuardService } from '../common/protocol/observations-guard.service';
+import { ProtocolGateService } from '../common/protocol/protocol-gate.service';
+import { PlotRow } from '../plots/models/plot.model';
+import { TreatmentRow } from '../treatments/models/treatment.model';
+import { Trial } from '../trials/models/trial.model';
+import { TrialMembership } from '../trials/models/trial-membership.model';
+import { User } from '../users/models/user.model';
+import type { CreateSiteDto } from './dto/create-site.dto';
+import type { UpdateSiteDto } from './dto/update-site.dto';
+import { SiteRow } from './models/site.model';
+import { geometryProblems, presentSite, siteGeometry } from './site.presenter';
+
+/** The layout key of a site: its id, which never changes (its name may). */
+export const siteKey = (siteId: number) => `site-${siteId}`;
+
+@Injectable()
+export class SitesService {
+  constructor(
+    @InjectModel(SiteRow) private readonly sites: typeof SiteRow,
+    @InjectModel(PlotRow) private readonly plots: typeof PlotRow,
+    @InjectModel(TreatmentRow) private readonly treatments: typeof TreatmentRow,
+    @InjectModel(TrialMembership) private readonly memberships: typeof TrialMembership,
+    @InjectModel(Trial) private readonly trials: typeof Trial,
+    @InjectConnection() private readonly sequelize: Sequelize,
+    private readonly gate: ProtocolGateService,
+    private readonly observations: ObservationsGuardService,
+    private readonly activity: ActivityService,
+  ) {}
+
+  async list(trialId: number, transaction?: Transaction): Promise<Site[]> {
+    const trial = await this.trials.findByPk(trialId, { transaction });
+    if (!trial) throw new NotFoundException('No such trial.');
+    const rows = await this.sites.findAll({ where: { trialId }, include: [{ model: User, attributes: ['id', 'name'] }], order: [['id', 'ASC']], transaction });
+    const counts = (await this.plots.findAll({
+      attributes: ['siteId', [fn('COUNT', col('id')), 'plots']],
+      where: { trialId },
+      group: ['siteId'],
+      raw: true,
+      transaction,
+    })) as unknown as Array<{ siteId: number; plots: number | string }>;
+    const plotCount = new Map(counts.map((c) => [Number(c.siteId), Number(c.plots)]));
+    const observed = new Set(await this.observations.sitesWithObservations(trialId));
+    const treatmentCount = await this.treatments.count({ where: { trialId }, transaction });
+    return rows.map((row) =>
+      presentSite(row, { design: trial.design, treatmentCount, plotCount: plotCount.get(row.id) ?? 0, hasObservations: observed.has(row.id) }),
+    );
+  }
+
+  async one(trialId: number, id: number, transaction?: Transaction): Promise<Site> {
+    const site = (await this.list(trialId, transaction)).find((s) => s.id === id);
+    if (!site) throw new NotFoundException('No such site in this trial.');
+    return site;
+  }
+
+  private async find(trialId: number, id: number, transaction: Transaction): Promise<SiteRow> {
+    const row = await this.sites.findOne({ where: { id, trialId }, transaction });
+    if (!row) throw new NotFoundException('No such site in this trial.');
+    return row;
+  }
+
+  private async defaultPrefix(trialId: number, name: string, transaction: Transaction): Promise<string> {
+    let base: string;
+    try {
+      base = plotLabelPrefix(name);
+    } catch {
+      throwIfProblems([{ field: 'labelPrefix', message: 'labelPrefix is needed: the name has fewer than two Latin letters to make one from' }]);
+      throw new Error('unreachable');
+    }
+    const taken = new Set((await this.sites.findAll({ where: { trialId }, attributes: ['labelPrefix'], transaction })).map((s) => s.labelPrefix));
+    const candidates = [base, ...'ABCDEFGHIJKLMNOPQRSTUVWXYZ'.split('').map((letter) => `${base.slice(0, 2)}${letter}`)];
+    const free = candidates.find((c) => !taken.has(c));
+    if (!free) throwIfProblems([{ field: 'labelPrefix', message: 'labelPrefix is needed: every prefix made from the name is taken' }]);
+    return free as string;
+  }
+
+  private async check(trialId: number, input: UpdateSiteDto, exceptId: number | null, transaction: Transaction): Promise<void> {
+    const problems: FieldProblem[] = [];
+    if (input.name !== undefined) {
+      const other = await this.sites.findOne({ where: { trialId, name: input.name.trim() }, transaction });
+      if (other && other.id !== exceptId) problems.push({ field: 'name', message: `name ${input.name} is already used by another site of this trial` });
+    }
+    if (input.labelPrefix !== undefined) {
+      const other = await this.sites.findOne({ where: { trialId, labelPrefix: input.labelPrefix }, transaction });
+      if (other && other.id !== exceptId) problems.push({ field: 'labelPrefix', message: `labelPrefix ${input.labelPrefix} is already used by another site of this trial` });
+    }
+    if (input.leadUserId !== undefined && input.leadUserId !== null) {
+      const member = await this.memberships.count({ where: { trialId, userId: input.leadUserId, role: ['collaborator', 'investigator'] }, transaction });
+      if (!member) problems.push({ field: 'leadUserId', message: 'leadUserId must be a collaborator or investigator of this trial' });
+    }
+    throwIfProblems(problems);
+  }
+
+  async create(trialId: number, user: AuthUser, input: CreateSiteDto): Promise<Site> {
+    return this.sequelize.transaction(async (transaction) => {
+      await this.gate.openForWrite(trialId, transaction);
+      await this.check(trialId, input, null, transaction);
+      const geometry = {
+        shape: input.shape,
+        lengthM: input.lengthM ?? null,
+        widthM: input.widthM ?? null,
+        diameterCm: input.diameterCm ?? null,
+        containerDepthCm: input.containerDepthCm ?? null,
+        soilVolumeL: input.soilVolumeL ?? null,
+      };
+      throwIfProblems(geometryProblems(geometry));
+      const row = await this.sites.create(
+        {
+          trialId,
+          name: input.name.trim(),
+          location: input.location ?? null,
+          soilDescription: input.soilDescription ?? null,
+          ...geometry,
+          blocks: input.blocks,
+          labelPrefix: input.labelPrefix ?? (await this.defaultPrefix(trialId, input.name, transaction)),
+          leadUserId: input.leadUserId ?? null,
+        },
+        { transaction },
+      );
+      await this.activity.record(transaction, {
+        trialId,
+        userId: user.id,
+        kind: 'site.created',
+        siteId: row.id,
+        summary: `Added site ${row.name} with ${row.blocks} blocks.`,
+        details: { labelPrefix: row.labelPrefix },
+      });
+      return this.one(trialId, row.id, transaction);
+    });
+  }
+
+  async update(trialId: number, id: number, user: AuthUser, input: UpdateSiteDto): Promise<Site> {
+    return this.sequelize.transaction(async (transaction) => {
+      await this.gate.openForWrite(trialId, transaction);
+      const row = await this.find(trialId, id, transaction);
+      await this.check(trialId, input, id, transaction);
+      throwIfProblems(geometryProblems({ ...siteGeometry(row), ...input }));
+      const changed = Object.keys(input);
+      if (input.blocks !== undefined && input.blocks !== row.blocks) {
+        await this.gate.clearLayouts(trialId, [id], { userId: user.id, what: `Changing the blocks of ${row.name} from ${row.blocks} to ${input.blocks}` }, transaction);
+        await row.reload({ transaction });
+      }
+      if (input.labelPrefix !== undefined && input.labelPrefix !== row.labelPrefix && (await this.plots.count({ where: { siteId: id }, transaction }))) {
+        throw new ConflictException('The label prefix of a randomized site is printed on its plot labels; it cannot change now.');
+      }
+      row.set({ ...input, ...(input.name ? { name: input.name.trim() } : {}) });
+      await row.save({ transaction });
+      await this.activity.record(transaction, {
+        trialId,
+        userId: user.id,
+        kind: 'site.updated',
+        siteId: id,
+        summary: `Changed site ${row.name}: ${changed.join(', ') || 'nothing'}.`,
+        details: { changed },
+      });
+      return this.one(trialId, id, transaction);
+    });
+  }
+
+  async remove(trialId: number, id: number, user: AuthUser): Promise<void> {
+    await this.sequelize.transaction(async (transaction) => {
+      await this.gate.openForWrite(trialId, transaction);
+      const row = await this.find(trialId, id, transaction);
+      await this.gate.refuseIfObserved(trialId, [id], `Deleting site ${row.name}`, transaction);
+      await row.destroy({ transaction });
+      await this.activity.record(transaction, {
+        trialId,
+        userId: user.id,
+        kind: 'site.deleted',
+        siteId: id,
+        summary: `Deleted site ${row.name}.`,
+        details: { name: row.name },
+      });
+    });
+  }
+
+  /** Lays out the site's plots from the seed (the trial's unless given); refused once the site has observations. */
+  async randomize(trialId: number, id: number, user: AuthUser, seedText?: string): Promise<Site> {
+    return this.sequelize.transaction(async (transaction) => {
+      const trial = await this.gate.openForWrite(trialId, transaction);
+      const row = await this.find(trialId, id, transaction);
+      await this.gate.refuseIfObserved(trialId, [id], `Re-randomizing ${row.name}`, transaction);
+      const treatments = await this.treatments.findAll({ where: { trialId }, order: [['position', 'ASC'], ['id', 'ASC']], transaction });
+      if (treatments.length < 2) throw new ConflictException('A site can be randomized once the trial has at least two treatments.');
+      const seed = seedText ?? trial.seed;
+      const layout = randomizeSite({
+        seed,
+        siteKey: siteKey(id),
+        design: trial.design,
+        treatments: treatments.map((t) => t.code),
+        blocks: row.blocks,
+        labelPrefix: row.labelPrefix,
+      });
+      const idByCode = new Map(treatments.map((t) => [t.code, t.id]));
+      const previous = await this.plots.destroy({ where: { siteId: id }, transaction });
+      await this.plots.bulkCreate(
+        layout.map((plot) => ({ trialId, siteId: id, block: plot.block, position: plot.position, treatmentId: idByCode.get(plot.treatmentCode), label: plot.label })),
+        { transaction },
+      );
+      row.randomizedAt = new Date();
+      row.randomizationSeed = seed;
+      await row.save({ transaction });
+      await this.activity.record(transaction, {
+        trialId,
+        userId: user.id,
+        kind: 'site.randomized',
+        siteId: id,
+        summary: `${previous ? 'Re-randomized' : 'Randomized'} ${row.name} with seed ${seed}: ${layout.length} plots.`,
+        details: { seed, siteKey: siteKey(id), design: trial.design, plots: layout.length, replacedPlots: previous },
+      });
+      return this.one(trialId, id, transaction);
+    });
+  }
+}

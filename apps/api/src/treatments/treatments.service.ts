@@ -1,0 +1,125 @@
+import type { Treatment } from '@friable/contracts';
+import { ConflictException, Injectable, NotFoundException } from '@nestjs/common';
+import { InjectConnection, InjectModel } from '@nestjs/sequelize';
+import type { Sequelize } from 'sequelize-typescript';
+import type { Transaction } from 'sequelize';
+import { ActivityService } from '../activity/activity.service';
+import type { AuthUser } from '../auth/auth-user';
+import { throwIfProblems } from '../common/exceptions/field-problems.exception';
+import { ProtocolGateService } from '../common/protocol/protocol-gate.service';
+import type { Trial } from '../trials/models/trial.model';
+import type { CreateTreatmentDto } from './dto/create-treatment.dto';
+import type { UpdateTreatmentDto } from './dto/update-treatment.dto';
+import { TreatmentRow } from './models/treatment.model';
+import { presentTreatment, treatmentRateProblems } from './treatment.presenter';
+
+const factorialRefusal = "A factorial trial's treatments are every combination of its factor levels; change the factors instead.";
+
+@Injectable()
+export class TreatmentsService {
+  constructor(
+    @InjectModel(TreatmentRow) private readonly treatments: typeof TreatmentRow,
+    @InjectConnection() private readonly sequelize: Sequelize,
+    private readonly gate: ProtocolGateService,
+    private readonly activity: ActivityService,
+  ) {}
+
+  async list(trialId: number, transaction?: Transaction): Promise<Treatment[]> {
+    const rows = await this.treatments.findAll({ where: { trialId }, order: [['position', 'ASC'], ['id', 'ASC']], transaction });
+    return rows.map(presentTreatment);
+  }
+
+  private async find(trialId: number, id: number, transaction: Transaction): Promise<TreatmentRow> {
+    const row = await this.treatments.findOne({ where: { id, trialId }, transaction });
+    if (!row) throw new NotFoundException('No such treatment in this trial.');
+    return row;
+  }
+
+  private async checkCode(trialId: number, code: string, exceptId: number | null, transaction: Transaction): Promise<void> {
+    const other = await this.treatments.findOne({ where: { trialId, code }, transaction });
+    throwIfProblems(other && other.id !== exceptId ? [{ field: 'code', message: `code ${code} is already used by another treatment of this trial` }] : []);
+  }
+
+  async create(trialId: number, user: AuthUser, input: CreateTreatmentDto): Promise<Treatment> {
+    return this.sequelize.transaction(async (transaction) => {
+      const trial = await this.gate.openForWrite(trialId, transaction);
+      if (trial.design === 'factorial-rcbd') throw new ConflictException(factorialRefusal);
+      const row = await this.insert(trial, user, input, transaction);
+      await this.gate.clearLayouts(trialId, 'all', { userId: user.id, what: `Adding treatment ${row.code}` }, transaction);
+      return presentTreatment(row);
+    });
+  }
+
+  /** Writes one treatment after its checks; shared with factor-generated combinations. */
+  async insert(trial: Trial, user: AuthUser, input: CreateTreatmentDto & { factorLevelAId?: number | null; factorLevelBId?: number | null }, transaction: Transaction): Promise<TreatmentRow> {
+    await this.checkCode(trial.id, input.code, null, transaction);
+    const values = {
+      trialId: trial.id,
+      code: input.code,
+      name: input.name.trim(),
+      description: input.description ?? null,
+      isControl: input.isControl ?? false,
+      rateValue: input.rateValue ?? null,
+      rateUnit: input.rateUnit ?? null,
+      rateBasis: input.rateBasis ?? 'area',
+      incorporationDepthCm: input.incorporationDepthCm ?? null,
+      product: input.product ?? null,
+      purity: input.purity ?? null,
+      moistureBasis: input.moistureBasis ?? 'as-is',
+      moistureFraction: input.moistureFraction ?? null,
+      materialKind: input.materialKind ?? 'other',
+      factorLevelAId: input.factorLevelAId ?? null,
+      factorLevelBId: input.factorLevelBId ?? null,
+      position: input.position ?? ((await this.treatments.max<number, TreatmentRow>('position', { where: { trialId: trial.id }, transaction })) ?? 0) + 1,
+    };
+    throwIfProblems(treatmentRateProblems(values));
+    const row = await this.treatments.create(values, { transaction });
+    await this.activity.record(transaction, {
+      trialId: trial.id,
+      userId: user.id,
+      kind: 'treatment.created',
+      summary: `Added treatment ${row.code} (${row.name}).`,
+      details: { treatmentId: row.id, code: row.code },
+    });
+    return row;
+  }
+
+  async update(trialId: number, id: number, user: AuthUser, input: UpdateTreatmentDto): Promise<Treatment> {
+    return this.sequelize.transaction(async (transaction) => {
+      await this.gate.openForWrite(trialId, transaction);
+      const row = await this.find(trialId, id, transaction);
+      if (input.code !== undefined && input.code !== row.code) await this.checkCode(trialId, input.code, row.id, transaction);
+      const before = presentTreatment(row);
+      const merged = { ...before, ...input, name: input.name?.trim() ?? before.name };
+      throwIfProblems(treatmentRateProblems(merged));
+      const changed = (Object.keys(input) as Array<keyof UpdateTreatmentDto>).filter((key) => input[key] !== before[key]);
+      row.set({ ...input, name: merged.name });
+      await row.save({ transaction });
+      await this.activity.record(transaction, {
+        trialId,
+        userId: user.id,
+        kind: 'treatment.updated',
+        summary: `Changed treatment ${row.code}${changed.length ? `: ${changed.join(', ')}` : ''}.`,
+        details: { treatmentId: row.id, changed },
+      });
+      return presentTreatment(row);
+    });
+  }
+
+  async remove(trialId: number, id: number, user: AuthUser): Promise<void> {
+    await this.sequelize.transaction(async (transaction) => {
+      const trial = await this.gate.openForWrite(trialId, transaction);
+      if (trial.design === 'factorial-rcbd') throw new ConflictException(factorialRefusal);
+      const row = await this.find(trialId, id, transaction);
+      await this.gate.clearLayouts(trialId, 'all', { userId: user.id, what: `Deleting treatment ${row.code}` }, transaction);
+      await row.destroy({ transaction });
+      await this.activity.record(transaction, {
+        trialId,
+        userId: user.id,
+        kind: 'treatment.deleted',
+        summary: `Deleted treatment ${row.code} (${row.name}).`,
+        details: { treatmentId: row.id, code: row.code },
+      });
+    });
+  }
+}
