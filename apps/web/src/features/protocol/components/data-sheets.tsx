@@ -16,7 +16,7 @@ export function SiteSheets({ trial, site, plots, swatches }: { trial: TrialDetai
     <div className="fr-sheets">
       <section className="fr-sheet">
         <SheetHeading trial={trial} site={site} title="Plot plan" />
-        <PlotMap plots={plots} treatments={trial.treatments} swatches={swatches} siteName={site.name} />
+        <PlotMap plots={plots} treatments={trial.treatments} swatches={swatches} siteName={site.name} printed />
         <PlotLegend treatments={trial.treatments} swatches={swatches} />
         {trial.safetyNotes && <p className="fr-sheet__safety">Safety: {trial.safetyNotes}</p>}
       </section>

@@ -6,12 +6,12 @@ function swatchClass(swatch: TreatmentSwatch | undefined, control: boolean): str
 }
 
 /** A site's plot plan: one row per block, one cell per plot, with the plot label and treatment code. */
-export function PlotMap({ plots, treatments, swatches, siteName }: { plots: Plot[]; treatments: Treatment[]; swatches: Map<number, TreatmentSwatch>; siteName: string }) {
+export function PlotMap({ plots, treatments, swatches, siteName, printed }: { plots: Plot[]; treatments: Treatment[]; swatches: Map<number, TreatmentSwatch>; siteName: string; printed?: boolean }) {
   const blocks = [...new Set(plots.map((p) => p.block))].sort((a, b) => a - b);
   const byId = new Map(treatments.map((t) => [t.id, t]));
   return (
     <div className="fr-map-scroll">
-      <table className="fr-map" aria-label={`Plot plan of ${siteName}`}>
+      <table className="fr-map" aria-label={`${printed ? 'Printed plot plan' : 'Plot plan'} of ${siteName}`}>
         <tbody>
           {blocks.map((block) => (
             <tr key={block}>

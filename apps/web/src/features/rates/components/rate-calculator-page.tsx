@@ -75,8 +75,8 @@ export function RateCalculatorPage() {
           <Field label="Size given as" field="geometry" error={error}>
             <RadioGroup inline selectedValue={form.geometry} onChange={(e) => set('geometry')(e.currentTarget.value as GeometryMode)}>
               <Radio value="rectangle" label="Length × width" />
-              <Radio value="round" label="Inside diameter" />
-              <Radio value="area" label="Area" />
+              <Radio value="round" label="Round (inside diameter)" />
+              <Radio value="area" label="Known area" />
             </RadioGroup>
           </Field>
           {form.geometry === 'rectangle' && (

@@ -1,0 +1,76 @@
+import { screen, within } from '@testing-library/react';
+import userEvent from '@testing-library/user-event';
+import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
+import { mockApi, renderWithApp } from '../../../test/render';
+import { amounts, makeTrial, person, plotsFor } from '../test/trial-fixture';
+import { PlotPlanPage } from './plot-plan-page';
+
+const base = {
+  'GET /api/auth/me': { status: 200, body: person },
+  'GET /api/trials/3/amounts': { status: 200, body: amounts },
+  'GET /api/trials/3/sites/31/plots': { status: 200, body: plotsFor(31, 'HL') },
+};
+
+describe('PlotPlanPage', () => {
+  beforeEach(() => window.localStorage.setItem('friable.accessToken', 'token'));
+  afterEach(() => vi.unstubAllGlobals());
+
+  it('starts a collaborator on their own site, with the map, legend and amounts per plot', async () => {
+    const trial = makeTrial({ myRoles: ['collaborator'], mySiteIds: [31] });
+    trial.sites.reverse();
+    mockApi(base);
+    renderWithApp(<PlotPlanPage trial={trial} />);
+    expect(screen.getByLabelText('Site')).toHaveValue('31');
+    const map = await screen.findByRole('table', { name: 'Plot plan of Hollow Lane' });
+    expect(within(map).getAllByRole('row')).toHaveLength(4);
+    expect(within(map).getByText('HL-101')).toBeInTheDocument();
+    expect(within(map).getAllByText('G40')).toHaveLength(4);
+    expect(within(screen.getAllByRole('list', { name: 'Treatments on the map' })[0]).getByText('(control)', { exact: false })).toBeInTheDocument();
+    const table = await screen.findByRole('table', { name: 'Amounts per plot at Hollow Lane' });
+    const g40 = within(table).getByText('G40').closest('tr')!;
+    // 281.2 g = 9.92 oz = 0.620 lb (NIST SP 811 pound 453.59237 g).
+    expect(within(g40).getByText('281 g · 9.92 oz')).toBeInTheDocument();
+    expect(within(g40).getByText('0.281 kg · 0.62 lb')).toBeInTheDocument();
+    expect(within(g40).getByText('1.24 kg')).toBeInTheDocument();
+    const c2 = within(table).getByText('C2').closest('tr')!;
+    expect(within(c2).getByText('73.2 L · 19.3 gal')).toBeInTheDocument();
+    expect(screen.getByText(/dust mask and eye protection/)).toBeInTheDocument();
+    expect(screen.getByText(/5-gallon bucket of wet clay is about 30 kg/)).toBeInTheDocument();
+  });
+
+  it('prints data sheets per round with a blank cell per measure and its unit, and a label per plot', async () => {
+    mockApi(base);
+    renderWithApp(<PlotPlanPage trial={makeTrial()} />);
+    await userEvent.click(await screen.findByRole('button', { name: 'Show Sheets' }));
+    expect(screen.getByText('Data sheet — Week 2 (day 14, due 15 Mar 2027)')).toBeInTheDocument();
+    expect(screen.getByText('Drain time (s)')).toBeInTheDocument();
+    expect(screen.getByText(/written “>600”/)).toBeInTheDocument();
+    expect(screen.getByText('Plot labels')).toBeInTheDocument();
+    expect(screen.getAllByText('CLAY-T · Hollow Lane · block 1')).toHaveLength(3);
+  });
+
+  it('says a site is not randomized yet instead of showing an empty map', () => {
+    mockApi(base);
+    renderWithApp(<PlotPlanPage trial={makeTrial()} />, { route: '/trials/3/plot-plan?site=32' });
+    expect(screen.getByText('Millbrook is not randomized yet')).toBeInTheDocument();
+  });
+
+  it('downloads the CSV template with the session’s token and saves it through a Blob', async () => {
+    const calls = mockApi({ ...base, 'GET /api/trials/3/sites/31/rounds/21/template.csv': { status: 200, body: 'plot,block,treatment,DRAIN (s)\n' } });
+    const createObjectURL = vi.fn(() => 'blob:template');
+    vi.stubGlobal('URL', Object.assign(URL, { createObjectURL, revokeObjectURL: vi.fn() }));
+    const fetchMock = vi.mocked(fetch);
+    let saved = '';
+    const click = vi.spyOn(HTMLAnchorElement.prototype, 'click').mockImplementation(function (this: HTMLAnchorElement) {
+      saved = this.download;
+    });
+    renderWithApp(<PlotPlanPage trial={makeTrial()} />);
+    await userEvent.click(await screen.findByRole('button', { name: 'CSV template — Week 2' }));
+    await vi.waitFor(() => expect(createObjectURL).toHaveBeenCalled());
+    expect(calls.some((c) => c.path === '/api/trials/3/sites/31/rounds/21/template.csv')).toBe(true);
+    const init = fetchMock.mock.calls.find(([url]) => String(url).endsWith('template.csv'))?.[1];
+    expect(new Headers(init?.headers).get('Authorization')).toBe('Bearer token');
+    expect(saved).toBe('CLAY-T_HL_Week-2.csv');
+    click.mockRestore();
+  });
+});

@@ -1,0 +1,106 @@
+import { screen, waitFor, within } from '@testing-library/react';
+import userEvent from '@testing-library/user-event';
+import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
+import { mockApi, renderWithApp } from '../../../test/render';
+import { amounts, makeTrial, person } from '../test/trial-fixture';
+import { ProtocolPage } from './protocol-page';
+
+const base = { 'GET /api/auth/me': { status: 200, body: person }, 'GET /api/trials/3/amounts': { status: 200, body: amounts } };
+
+describe('ProtocolPage', () => {
+  beforeEach(() => window.localStorage.setItem('friable.accessToken', 'token'));
+  afterEach(() => vi.unstubAllGlobals());
+
+  it('shows the investigator the protocol with edit controls and each treatment’s amount per plot at each site', async () => {
+    mockApi(base);
+    renderWithApp(<ProtocolPage trial={makeTrial()} />);
+    expect(screen.getByRole('button', { name: 'Edit trial' })).toBeInTheDocument();
+    expect(screen.getByRole('button', { name: 'Add treatment' })).toBeInTheDocument();
+    expect(screen.getByRole('button', { name: 'Add measure' })).toBeInTheDocument();
+    expect(screen.getByRole('button', { name: 'Add round' })).toBeInTheDocument();
+    const g40 = screen.getByText('G40').closest('tr')!;
+    expect(within(g40).getByText('40 lb / 1,000 ft²')).toBeInTheDocument();
+    // The fixture's amounts: 281.2 g per plot = 9.92 oz (281.2 / 28.349523125, NIST SP 811 ounce).
+    expect(await within(g40).findAllByText('281 g (9.92 oz)')).toHaveLength(2);
+    const c2 = screen.getByText('C2').closest('tr')!;
+    expect(within(c2).getAllByText('73.2 L (19.3 gal)')).toHaveLength(2);
+    expect(within(screen.getByText('CTRL').closest('tr')!).getByText('control')).toBeInTheDocument();
+    expect(screen.getByText('time with cut-off at 600 s', { exact: false })).toBeInTheDocument();
+    expect(screen.getByText('15 Mar 2027')).toBeInTheDocument();
+  });
+
+  it('lists the failed activation checks in words and asks the server to activate', async () => {
+    const calls = mockApi({
+      ...base,
+      'PATCH /api/trials/3': {
+        status: 422,
+        body: { statusCode: 422, error: 'Unprocessable Entity', message: 'The trial cannot be activated yet.', errors: [{ field: 'status', message: 'Site Millbrook is not randomized yet.' }] },
+      },
+    });
+    renderWithApp(<ProtocolPage trial={makeTrial()} />);
+    expect(within(screen.getByRole('list', { name: 'What stops activation' })).getByText('Site Millbrook is not randomized yet.')).toBeInTheDocument();
+    await userEvent.click(screen.getByRole('button', { name: 'Activate trial' }));
+    expect(await screen.findByText('The trial cannot be activated yet.')).toBeInTheDocument();
+    expect(calls.find((c) => c.method === 'PATCH')?.body).toEqual({ status: 'active' });
+  });
+
+  it('shows the server’s 422 message beside the field it names', async () => {
+    mockApi({
+      ...base,
+      'POST /api/trials/3/treatments': {
+        status: 422,
+        body: { statusCode: 422, error: 'Unprocessable Entity', message: 'The treatment was not saved.', errors: [{ field: 'code', message: 'code must be 1 to 12 letters or digits' }] },
+      },
+    });
+    renderWithApp(<ProtocolPage trial={makeTrial()} />);
+    await userEvent.click(screen.getByRole('button', { name: 'Add treatment' }));
+    const dialog = await screen.findByRole('dialog');
+    await userEvent.type(within(dialog).getByLabelText('Code'), 'G 40!');
+    await userEvent.type(within(dialog).getByLabelText('Name'), 'Gypsum');
+    await userEvent.type(within(dialog).getByLabelText('Rate'), '40');
+    await userEvent.click(within(dialog).getByRole('button', { name: 'Add treatment' }));
+    const message = await within(dialog).findByText('code must be 1 to 12 letters or digits');
+    expect(message.closest('.bp6-form-group')).toHaveClass('bp6-intent-danger');
+    expect(message.closest('.bp6-form-group')).toContainElement(within(dialog).getByLabelText('Code'));
+  });
+
+  it('refuses a rate that is not a number before asking the server', async () => {
+    const calls = mockApi(base);
+    renderWithApp(<ProtocolPage trial={makeTrial()} />);
+    await userEvent.click(screen.getByRole('button', { name: 'Add treatment' }));
+    const dialog = await screen.findByRole('dialog');
+    await userEvent.type(within(dialog).getByLabelText('Rate'), 'forty');
+    await userEvent.click(within(dialog).getByRole('button', { name: 'Add treatment' }));
+    expect(await within(dialog).findByText('Rate must be a number, e.g. 12.5')).toBeInTheDocument();
+    expect(calls.some((c) => c.method === 'POST')).toBe(false);
+  });
+
+  it('sends a new treatment and loads the trial again', async () => {
+    const calls = mockApi({ ...base, 'POST /api/trials/3/treatments': { status: 201, body: {} }, 'GET /api/trials/3': { status: 200, body: makeTrial() } });
+    renderWithApp(<ProtocolPage trial={makeTrial()} />);
+    await userEvent.click(screen.getByRole('button', { name: 'Add treatment' }));
+    const dialog = await screen.findByRole('dialog');
+    await userEvent.type(within(dialog).getByLabelText('Code'), 'G20');
+    await userEvent.type(within(dialog).getByLabelText('Name'), 'Gypsum, half rate');
+    await userEvent.type(within(dialog).getByLabelText('Rate'), '20');
+    await userEvent.selectOptions(within(dialog).getByLabelText('Material'), 'gypsum');
+    await userEvent.click(within(dialog).getByRole('button', { name: 'Add treatment' }));
+    await waitFor(() => expect(screen.queryByRole('dialog')).not.toBeInTheDocument());
+    expect(calls.find((c) => c.method === 'POST')?.body).toMatchObject({ code: 'G20', name: 'Gypsum, half rate', isControl: false, rateValue: 20, rateUnit: 'lb/1000ft2', rateBasis: 'area', materialKind: 'gypsum', purity: null });
+  });
+
+  it('shows a collaborator everything read-only, with no edit controls', async () => {
+    mockApi(base);
+    renderWithApp(<ProtocolPage trial={makeTrial({ myRoles: ['collaborator'], mySiteIds: [31] })} />);
+    expect(screen.getByText(/only its investigator can change it/)).toBeInTheDocument();
+    expect(screen.getByText('G40')).toBeInTheDocument();
+    expect(screen.queryByRole('button', { name: /Edit|Add|Remove|Activate/ })).not.toBeInTheDocument();
+  });
+
+  it('shows a locked trial read-only even to its investigator, with a notice', () => {
+    mockApi(base);
+    renderWithApp(<ProtocolPage trial={makeTrial({ status: 'locked' })} />);
+    expect(screen.getByText(/This trial is locked/)).toBeInTheDocument();
+    expect(screen.queryByRole('button', { name: /Edit|Add|Remove|Activate/ })).not.toBeInTheDocument();
+  });
+});

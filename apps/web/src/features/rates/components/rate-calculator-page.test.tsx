@@ -1,0 +1,88 @@
+import { screen, within } from '@testing-library/react';
+import userEvent from '@testing-library/user-event';
+import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
+import { mockApi, renderWithApp } from '../../../test/render';
+import { RateCalculatorPage } from './rate-calculator-page';
+
+const person = { id: 9, email: 'p@example.org', name: 'Priya Vance', isAdmin: false, isActive: true, createdAt: '2026-11-01T00:00:00.000Z' };
+
+async function setBox(label: string, text: string) {
+  const box = screen.getByLabelText(label);
+  await userEvent.clear(box);
+  if (text) await userEvent.type(box, text);
+}
+
+function result() {
+  return within(screen.getByText('Amount per plot').closest('.fr-result-card') as HTMLElement);
+}
+
+describe('RateCalculatorPage', () => {
+  beforeEach(() => window.localStorage.setItem('friable.accessToken', 'token'));
+  afterEach(() => vi.unstubAllGlobals());
+
+  it('turns 40 lb/1,000 ft² of gypsum into 13.8 g for a pot of 30 cm inside diameter', async () => {
+    mockApi({ 'GET /api/auth/me': { status: 200, body: person } });
+    renderWithApp(<RateCalculatorPage />);
+    await userEvent.click(screen.getByLabelText('Round (inside diameter)'));
+    await setBox('Inside diameter', '30');
+    await setBox('Margin', '');
+    // DOMAIN.md worked example: 40 lb/1000 ft² = 195.3 g/m² → 13.8 g for a 30 cm pot; 13.8 g = 0.487 oz.
+    expect(result().getByText('13.8 g')).toBeInTheDocument();
+    expect(result().getByText('0.014 kg')).toBeInTheDocument();
+    expect(result().getByText('0.487 oz')).toBeInTheDocument();
+    expect(result().getByText('0.03 lb')).toBeInTheDocument();
+    // 4 plots × 13.80 g = 55.2 g = 0.122 lb.
+    expect(result().getByText('0.055 kg (0.122 lb)')).toBeInTheDocument();
+  });
+
+  it('gives 646 g for 2 short tons per acre on a 1.2 m × 1.2 m plot, and the total with a margin', async () => {
+    mockApi({ 'GET /api/auth/me': { status: 200, body: person } });
+    renderWithApp(<RateCalculatorPage />);
+    await setBox('Rate', '2');
+    await userEvent.selectOptions(screen.getByLabelText('Unit'), 'ton/acre');
+    // DOMAIN.md worked example: 2 short t/acre = 0.448 kg/m² → 646 g on 1.2 m × 1.2 m.
+    expect(result().getByText('646 g')).toBeInTheDocument();
+    // 2 × 907,184.74 g / 4,046.8564224 m² × 1.44 m² = 645.6 g; × 4 plots × 1.10 = 2,840.7 g = 6.263 lb
+    // (computed from the NIST SP 811 factors in DOMAIN.md, shown to 3 significant digits).
+    expect(result().getByText('2.84 kg (6.26 lb)')).toBeInTheDocument();
+  });
+
+  it('gives litres and gallons for a compost layer, and warns about a layer far deeper than usual', async () => {
+    mockApi({ 'GET /api/auth/me': { status: 200, body: person } });
+    renderWithApp(<RateCalculatorPage />);
+    await setBox('Rate', '1');
+    await userEvent.selectOptions(screen.getByLabelText('Unit'), 'cm');
+    // 1 cm over 1 m² = 10 L (DOMAIN.md); 1.44 m² → 14.4 L = 3.80 US gal (3.785411784 L/gal).
+    expect(result().getByText('14.4 L')).toBeInTheDocument();
+    expect(result().getByText('3.8 gal')).toBeInTheDocument();
+    expect(screen.queryByText(/deep is beyond the usual/)).not.toBeInTheDocument();
+    await setBox('Rate', '10');
+    expect(result().getByText(/A layer 10 cm .* deep is beyond the usual 3 in at most/)).toBeInTheDocument();
+    expect(screen.getByText(/gloves and wash your hands/)).toBeInTheDocument();
+  });
+
+  it('warns when a gypsum rate is far above common garden rates (the 100 vs 1000 trap)', async () => {
+    mockApi({ 'GET /api/auth/me': { status: 200, body: person } });
+    renderWithApp(<RateCalculatorPage />);
+    await userEvent.selectOptions(screen.getByLabelText('Unit'), 'lb/100ft2');
+    expect(result().getByText(/400 lb\/1,000 ft² of gypsum is far above/)).toBeInTheDocument();
+    expect(result().getByText(/check that this one is really per 100 ft²/)).toBeInTheDocument();
+    expect(screen.getByText(/dust mask and eye protection/)).toBeInTheDocument();
+  });
+
+  it('says what is missing instead of showing a number', async () => {
+    mockApi({ 'GET /api/auth/me': { status: 200, body: person } });
+    renderWithApp(<RateCalculatorPage />);
+    await userEvent.click(screen.getByLabelText(/Concentration/));
+    expect(result().getByText('For a concentration rate, type the incorporation depth and the soil volume.')).toBeInTheDocument();
+  });
+
+  it('asks the server once typing pauses and shows its answer', async () => {
+    const answer = { grams: 281.2, kilograms: 0.2812, ounces: 9.92, pounds: 0.62, litres: null, gallons: null, ratePerM2: { value: 195.3, unit: 'g/m2' }, areaM2: 1.44, basis: 'area', warnings: [], total: { grams: 1237, kilograms: 1.237, pounds: 2.727, litres: null, gallons: null } };
+    const calls = mockApi({ 'GET /api/auth/me': { status: 200, body: person }, 'POST /api/rates/dose': { status: 200, body: answer } });
+    renderWithApp(<RateCalculatorPage />);
+    expect(await screen.findByText('Checked with Friable’s server.', {}, { timeout: 3000 })).toBeInTheDocument();
+    expect(calls.find((c) => c.method === 'POST')?.body).toEqual({ rate: 40, unit: 'lb/1000ft2', basis: 'area', materialKind: 'gypsum', lengthM: 1.2, widthM: 1.2, plots: 4, marginPercent: 10 });
+    expect(result().getByText('1.24 kg (2.73 lb)')).toBeInTheDocument();
+  });
+});
