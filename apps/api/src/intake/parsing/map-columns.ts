@@ -1,0 +1,174 @@
+import type { IntakeProblem, Measure } from '@friable/contracts';
+import { findUnit, parseUnitFromHeader } from '@friable/field';
+import { unitFactor } from './unit-factor';
+
+/** The columns that are not measures. */
+export const COLUMN_ROLES = ['plotLabel', 'block', 'treatment', 'notes', 'missingReason'] as const;
+export type ColumnRole = (typeof COLUMN_ROLES)[number];
+
+export interface MeasureColumn {
+  readonly measureId: number;
+  readonly measureCode: string;
+  readonly index: number;
+  readonly header: string;
+  /** The unit id written in the header when it differs from the measure's unit; null when values are in the measure's unit. */
+  readonly headerUnitId: string | null;
+  /** Decimal multiplier from the header's unit to the measure's ("60" for min → s); null when nothing is converted. */
+  readonly factor: string | null;
+  /** Problems of this column (an unknown unit, a unit of another kind); its values are not read while it has any. */
+  readonly problems: readonly IntakeProblem[];
+}
+
+export interface ColumnMapping {
+  readonly plotLabel: number | null;
+  readonly block: number | null;
+  readonly treatment: number | null;
+  readonly notes: number | null;
+  readonly missingReason: number | null;
+  readonly measures: readonly MeasureColumn[];
+  /** Headers of the columns nothing reads (empty headers left out). */
+  readonly unmapped: readonly string[];
+  /** Every mapping problem, those of the measure columns included. They are errors: nothing is written while any remain. */
+  readonly problems: readonly IntakeProblem[];
+}
+
+/**
+ * How a person can override the matching, by header: a role, a measure code, or null to ignore
+ * the column.
+ */
+export type ColumnOverrides = Readonly<Record<string, ColumnRole | string | null>>;
+
+const roleSpellings: Record<ColumnRole, readonly string[]> = {
+  plotLabel: ['plot label', 'plot', 'label', 'plot id'],
+  block: ['block', 'rep', 'replicate'],
+  treatment: ['treatment code', 'treatment', 'trt'],
+  notes: ['notes', 'note', 'comments', 'comment', 'remarks'],
+  missingReason: ['missing reason', 'reason', 'reason missing', 'why missing'],
+};
+const roleWords: Record<ColumnRole, string> = {
+  plotLabel: 'the plot label',
+  block: 'the block',
+  treatment: 'the treatment code',
+  notes: 'the notes',
+  missingReason: 'the reason a value is missing',
+};
+
+/** Case, spaces, underscores and hyphens do not matter when headers are matched. */
+export function normaliseHeader(text: string): string {
+  return text.trim().toLowerCase().replace(/[\s_-]+/g, ' ');
+}
+
+function roleOfHeader(key: string): ColumnRole | undefined {
+  return COLUMN_ROLES.find((role) => roleSpellings[role].includes(key));
+}
+
+function measureNamed(measures: readonly Measure[], key: string): Measure | undefined {
+  return measures.find((measure) => normaliseHeader(measure.name) === key || normaliseHeader(measure.code) === key);
+}
+
+/** The template's header for a measure: its name with the unit symbol in parentheses. */
+export function templateHeader(measure: Pick<Measure, 'name' | 'unit'>): string {
+  return `${measure.name} (${findUnit(measure.unit)?.symbol ?? measure.unit})`;
+}
+
+type Target = { role: ColumnRole } | { measure: Measure; unitText: string | null } | null;
+
+function matchHeader(header: string, measures: readonly Measure[]): Target {
+  const key = normaliseHeader(header);
+  const role = roleOfHeader(key);
+  if (role) return { role };
+  const whole = measureNamed(measures, key);
+  if (whole) return { measure: whole, unitText: null };
+  const parsed = parseUnitFromHeader(header);
+  const named = parsed.unitText === null ? undefined : measureNamed(measures, normaliseHeader(parsed.name));
+  return named ? { measure: named, unitText: parsed.unitText } : null;
+}
+
+function overrideTarget(header: string, target: string, measures: readonly Measure[]): Target | string {
+  if ((COLUMN_ROLES as readonly string[]).includes(target)) return { role: target as ColumnRole };
+  const measure = measures.find((candidate) => candidate.code.toLowerCase() === target.trim().toLowerCase());
+  if (!measure) return `Column "${header}" is mapped to "${target}", which is not a measure of this round.`;
+  const wholeHeaderIsTheMeasure = measureNamed([measure], normaliseHeader(header)) !== undefined;
+  return { measure, unitText: wholeHeaderIsTheMeasure ? null : parseUnitFromHeader(header).unitText };
+}
+
+/**
+ * Map columns — decides which column of an uploaded file holds the plot label, the block, the
+ * treatment, the notes, the reason for a missing value, and each measure of the round.
+ *
+ * Purpose: the template's headers ("plot label", "block", "treatment code", "drain time (s)",
+ * "notes") match without help, and so do the measure's code ("DRAIN"), other cases and spacing,
+ * and the unit in parentheses or brackets. A unit Friable knows is converted ("drain time (min)"
+ * for a measure in s); a unit it does not know, or one of another kind, is a problem naming the
+ * column. `overrides` (header → role, measure code, or null to ignore) come from the browser's
+ * mapping step and win over the matching.
+ * Reference: unit spellings of @friable/field's MEASURE_UNITS.
+ * Throws: nothing; every difficulty is in `problems` (row null, column = the header).
+ * Example: `mapColumns(['plot label', 'drain time (min)'], [drainTime])` →
+ * `{ plotLabel: 0, measures: [{ measureId: 1, index: 1, header: 'drain time (min)', headerUnitId: 'min', factor: '60', problems: [] }], unmapped: [], problems: [], … }`
+ */
+export function mapColumns(headers: readonly string[], measures: readonly Measure[], overrides: ColumnOverrides = {}): ColumnMapping {
+  const problems: IntakeProblem[] = [];
+  const roles = new Map<ColumnRole, number>();
+  const measureColumns: MeasureColumn[] = [];
+  const unmapped: string[] = [];
+  const claimedBy = new Map<string, string>();
+
+  const claim = (key: string, header: string, what: string): boolean => {
+    const earlier = claimedBy.get(key);
+    if (earlier === undefined) {
+      claimedBy.set(key, header);
+      return true;
+    }
+    problems.push({ row: null, column: header, message: `Columns "${earlier}" and "${header}" both give ${what}: remove one or map it to nothing.` });
+    return false;
+  };
+
+  headers.forEach((header, index) => {
+    if (header === '') return;
+    const override = Object.hasOwn(overrides, header) ? overrides[header] : undefined;
+    const target = override === undefined ? matchHeader(header, measures) : override === null ? null : overrideTarget(header, override, measures);
+    if (typeof target === 'string') {
+      problems.push({ row: null, column: header, message: target });
+      return;
+    }
+    if (target === null) {
+      unmapped.push(header);
+    } else if ('role' in target) {
+      if (claim(target.role, header, roleWords[target.role])) roles.set(target.role, index);
+    } else if (claim(`measure:${target.measure.id}`, header, target.measure.name)) {
+      const unit = unitFactor(target.unitText, header, target.measure);
+      const columnProblems: IntakeProblem[] = unit.ok ? [] : [{ row: null, column: header, message: unit.message }];
+      problems.push(...columnProblems);
+      measureColumns.push(
+        Object.freeze({
+          measureId: target.measure.id,
+          measureCode: target.measure.code,
+          index,
+          header,
+          headerUnitId: unit.ok ? unit.headerUnitId : null,
+          factor: unit.ok ? unit.factor : null,
+          problems: Object.freeze(columnProblems),
+        }),
+      );
+    }
+  });
+
+  if (!roles.has('plotLabel')) {
+    problems.unshift({ row: null, column: null, message: 'The file has no plot label column: the first column of the template is called "plot label".' });
+  }
+  if (measureColumns.length === 0 && measures.length > 0) {
+    const expected = measures.map(templateHeader).join(', ');
+    problems.push({ row: null, column: null, message: `No column holds a measure of this round. Expected columns such as: ${expected}.` });
+  }
+  return Object.freeze({
+    plotLabel: roles.get('plotLabel') ?? null,
+    block: roles.get('block') ?? null,
+    treatment: roles.get('treatment') ?? null,
+    notes: roles.get('notes') ?? null,
+    missingReason: roles.get('missingReason') ?? null,
+    measures: Object.freeze(measureColumns),
+    unmapped: Object.freeze(unmapped),
+    problems: Object.freeze(problems.map((problem) => Object.freeze(problem))),
+  });
+}
