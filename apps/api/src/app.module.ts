@@ -20,8 +20,13 @@ import { ProblemFilter } from './common/filters/problem.filter';
 import { appConfig } from './config/app.config';
 import { authConfig } from './config/auth.config';
 import { databaseConfig } from './config/database.config';
+import { mailConfig } from './config/mail.config';
 import { sequelizeOptions } from './database/sequelize-options';
+import { DevModule } from './dev/dev.module';
 import { HealthModule } from './health/health.module';
+import { InvitationsModule } from './invitations/invitations.module';
+import { RemindersModule } from './reminders/reminders.module';
+import { TeamModule } from './team/team.module';
 import { TrialsModule } from './trials/trials.module';
 import { UsersModule } from './users/users.module';
 
@@ -30,7 +35,7 @@ import { UsersModule } from './users/users.module';
     ConfigModule.forRoot({
       isGlobal: true,
       envFilePath: [resolve(__dirname, '../../../.env')],
-      load: [appConfig, databaseConfig, authConfig],
+      load: [appConfig, databaseConfig, authConfig, mailConfig],
     }),
     SequelizeModule.forRootAsync({
       inject: [databaseConfig.KEY],
@@ -54,6 +59,10 @@ import { UsersModule } from './users/users.module';
     PlotsModule,
     RatesModule,
     DemoModule,
+    TeamModule,
+    InvitationsModule,
+    DevModule,
+    RemindersModule,
   ],
   providers: [
     { provide: APP_GUARD, useClass: JwtAuthGuard },

@@ -27,7 +27,23 @@ describe('migrations', () => {
 
     const applied = await migrator.up();
     expect(applied.map((m) => m.name)).toEqual(migrations.map(([name]) => name));
-    expect(await tables()).toEqual(['activity_entries', 'schema_migrations', 'trial_memberships', 'trials', 'users']);
+    expect(await tables()).toEqual([
+      'activity_entries',
+      'assessment_rounds',
+      'factor_levels',
+      'invitations',
+      'measures',
+      'plots',
+      'round_measures',
+      'round_reminders',
+      'schema_migrations',
+      'sites',
+      'treatments',
+      'trial_factors',
+      'trial_memberships',
+      'trials',
+      'users',
+    ]);
 
     const reverted = await migrator.down({ to: 0 });
     expect(reverted).toHaveLength(migrations.length);

@@ -1,4 +1,6 @@
 import { ActivityEntryRow } from '../activity/models/activity-entry.model';
+import { TrialInvitation } from '../invitations/models/trial-invitation.model';
+import { RoundReminder } from '../reminders/models/round-reminder.model';
 import { FactorLevel } from '../factors/models/factor-level.model';
 import { TrialFactor } from '../factors/models/trial-factor.model';
 import { MeasureRow } from '../measures/models/measure.model';
@@ -25,4 +27,6 @@ export const allModels = [
   RoundMeasure,
   SiteRow,
   PlotRow,
+  TrialInvitation,
+  RoundReminder,
 ];

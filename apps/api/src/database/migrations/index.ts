@@ -10,6 +10,8 @@ import * as createMeasures from './20261202090400-create-measures';
 import * as createAssessmentRounds from './20261202090500-create-assessment-rounds';
 import * as createSites from './20261202090600-create-sites';
 import * as createPlots from './20261202090700-create-plots';
+import * as createInvitations from './20261203090000-create-invitations';
+import * as createRoundReminders from './20261203090100-create-round-reminders';
 
 export interface MigrationModule {
   up(params: { context: QueryInterface }): Promise<void>;
@@ -29,4 +31,6 @@ export const migrations: ReadonlyArray<readonly [name: string, module: Migration
   ['20261202090500-create-assessment-rounds', createAssessmentRounds],
   ['20261202090600-create-sites', createSites],
   ['20261202090700-create-plots', createPlots],
+  ['20261203090000-create-invitations', createInvitations],
+  ['20261203090100-create-round-reminders', createRoundReminders],
 ];
