@@ -4,6 +4,7 @@ import { InjectConnection, InjectModel } from '@nestjs/sequelize';
 import type { Transaction } from 'sequelize';
 import type { Sequelize } from 'sequelize-typescript';
 import { ActivityService } from '../activity/activity.service';
+import { definedOnly } from '../common/defined-only';
 import type { AuthUser } from '../auth/auth-user';
 import { throwIfProblems } from '../common/exceptions/field-problems.exception';
 import { ProtocolGateService } from '../common/protocol/protocol-gate.service';
@@ -78,7 +79,8 @@ export class MeasuresService {
     });
   }
 
-  async update(trialId: number, id: number, user: AuthUser, input: UpdateMeasureDto): Promise<Measure> {
+  async update(trialId: number, id: number, user: AuthUser, sent: UpdateMeasureDto): Promise<Measure> {
+    const input = definedOnly(sent);
     return this.sequelize.transaction(async (transaction) => {
       await this.gate.openForWrite(trialId, transaction);
       const row = await this.find(trialId, id, transaction);

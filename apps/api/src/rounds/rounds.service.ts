@@ -4,6 +4,7 @@ import { InjectConnection, InjectModel } from '@nestjs/sequelize';
 import type { Transaction } from 'sequelize';
 import type { Sequelize } from 'sequelize-typescript';
 import { ActivityService } from '../activity/activity.service';
+import { definedOnly } from '../common/defined-only';
 import type { AuthUser } from '../auth/auth-user';
 import { throwIfProblems } from '../common/exceptions/field-problems.exception';
 import { ProtocolGateService } from '../common/protocol/protocol-gate.service';
@@ -80,7 +81,8 @@ export class RoundsService {
     });
   }
 
-  async update(trialId: number, id: number, user: AuthUser, input: UpdateRoundDto): Promise<AssessmentRound> {
+  async update(trialId: number, id: number, user: AuthUser, sent: UpdateRoundDto): Promise<AssessmentRound> {
+    const input = definedOnly(sent);
     return this.sequelize.transaction(async (transaction) => {
       const trial = await this.gate.openForWrite(trialId, transaction);
       const before = await this.one(trial, id, transaction);

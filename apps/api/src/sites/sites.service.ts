@@ -5,6 +5,7 @@ import { InjectConnection, InjectModel } from '@nestjs/sequelize';
 import { fn, col, type Transaction } from 'sequelize';
 import type { Sequelize } from 'sequelize-typescript';
 import { ActivityService } from '../activity/activity.service';
+import { definedOnly } from '../common/defined-only';
 import type { AuthUser } from '../auth/auth-user';
 import { throwIfProblems, type FieldProblem } from '../common/exceptions/field-problems.exception';
 import { ObservationsGuardService } from '../common/protocol/observations-guard.service';
@@ -137,7 +138,8 @@ export class SitesService {
     });
   }
 
-  async update(trialId: number, id: number, user: AuthUser, input: UpdateSiteDto): Promise<Site> {
+  async update(trialId: number, id: number, user: AuthUser, sent: UpdateSiteDto): Promise<Site> {
+    const input = definedOnly(sent);
     return this.sequelize.transaction(async (transaction) => {
       await this.gate.openForWrite(trialId, transaction);
       const row = await this.find(trialId, id, transaction);

@@ -4,6 +4,7 @@ import { InjectConnection, InjectModel } from '@nestjs/sequelize';
 import type { Sequelize } from 'sequelize-typescript';
 import type { Transaction } from 'sequelize';
 import { ActivityService } from '../activity/activity.service';
+import { definedOnly } from '../common/defined-only';
 import type { AuthUser } from '../auth/auth-user';
 import { throwIfProblems } from '../common/exceptions/field-problems.exception';
 import { ProtocolGateService } from '../common/protocol/protocol-gate.service';
@@ -84,7 +85,8 @@ export class TreatmentsService {
     return row;
   }
 
-  async update(trialId: number, id: number, user: AuthUser, input: UpdateTreatmentDto): Promise<Treatment> {
+  async update(trialId: number, id: number, user: AuthUser, sent: UpdateTreatmentDto): Promise<Treatment> {
+    const input = definedOnly(sent);
     return this.sequelize.transaction(async (transaction) => {
       await this.gate.openForWrite(trialId, transaction);
       const row = await this.find(trialId, id, transaction);

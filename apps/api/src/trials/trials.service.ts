@@ -5,6 +5,7 @@ import { randomBytes } from 'node:crypto';
 import type { Transaction } from 'sequelize';
 import type { Sequelize } from 'sequelize-typescript';
 import { ActivityService } from '../activity/activity.service';
+import { definedOnly } from '../common/defined-only';
 import type { AuthUser, TrialAccessContext } from '../auth/auth-user';
 import { FieldProblemsException } from '../common/exceptions/field-problems.exception';
 import { TrialLockedException } from '../common/exceptions/trial-locked.exception';
@@ -130,12 +131,13 @@ export class TrialsService {
   }
 
   /** Changes the protocol's own fields and, last, the status (draft → active needs every activation check). */
-  async update(access: TrialAccessContext, input: UpdateTrialDto, user: AuthUser): Promise<TrialDetail> {
+  async update(access: TrialAccessContext, sent: UpdateTrialDto, user: AuthUser): Promise<TrialDetail> {
+    const input = definedOnly(sent);
     return this.sequelize.transaction(async (transaction) => {
       const trial = await this.trials.findByPk(access.trialId, { transaction, lock: transaction.LOCK.UPDATE });
       if (!trial) throw new NotFoundException('No such trial.');
       const { status, ...fields } = input;
-      const fieldNames = Object.keys(fields) as Array<keyof typeof fields>;
+      const fieldNames = (Object.keys(fields) as Array<keyof typeof fields>).filter((key) => fields[key] !== undefined);
       if (fieldNames.length) {
         await this.gate.openForWrite(trial.id, transaction);
         if (fields.design !== undefined && fields.design !== trial.design) {
