@@ -7,6 +7,7 @@ import { StatsInputError } from './errors';
  * distribution functions into quantiles.
  *
  * @param equation continuous on [lower, upper] with a sign change there.
+ * @param valueAtLower equation(lower), when the caller already has it (likewise valueAtUpper).
  * @throws StatsInputError (a RangeError) when equation(lower) and equation(upper) have the same sign.
  * @example findRoot((x) => x * x - 2, 0, 2, 1e-12) // 1.4142135623730951
  */
@@ -15,11 +16,13 @@ export function findRoot(
   lower: number,
   upper: number,
   tolerance: number,
+  valueAtLower: number = equation(lower),
+  valueAtUpper: number = equation(upper),
 ): number {
   let a = lower;
   let b = upper;
-  let fa = equation(a);
-  let fb = equation(b);
+  let fa = valueAtLower;
+  let fb = valueAtUpper;
   if (fa === 0) return a;
   if (fb === 0) return b;
   if (fa * fb > 0) {
@@ -79,4 +82,37 @@ export function findRoot(
     fb = equation(b);
   }
   return b;
+}
+
+/**
+ * Root of an increasing distribution-like function between a lower and an upper
+ * bound that are known to bracket it (for example Šidák/Bonferroni bounds on a
+ * critical value), widening either bound by factors of 2 if they turn out not to.
+ * @throws StatsInputError (a RangeError) when no bracket is found within 60 widenings.
+ * @example findIncreasingRoot((x) => x * x - 2, 1, 2, 1e-12) // 1.4142135623730951
+ */
+export function findIncreasingRoot(
+  equation: (x: number) => number,
+  lowerGuess: number,
+  upperGuess: number,
+  tolerance: number,
+): number {
+  let lower = lowerGuess;
+  let upper = upperGuess;
+  let atLower = equation(lower);
+  let atUpper = equation(upper);
+  for (let widening = 0; widening < 60; widening++) {
+    if (atUpper < 0) {
+      [lower, atLower] = [upper, atUpper];
+      upper *= 2;
+      atUpper = equation(upper);
+    } else if (atLower > 0) {
+      [upper, atUpper] = [lower, atLower];
+      lower /= 2;
+      atLower = equation(lower);
+    } else {
+      return findRoot(equation, lower, upper, tolerance, atLower, atUpper);
+    }
+  }
+  throw new StatsInputError('invalid argument', `findIncreasingRoot: no bracket found from ${lowerGuess} to ${upperGuess}`);
 }

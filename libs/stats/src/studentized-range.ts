@@ -1,7 +1,8 @@
 import { jStat } from 'jstat';
 import { StatsInputError } from './errors';
 import { integrateOverPanels, panelBreakpoints } from './quadrature';
-import { findRoot } from './root-finding';
+import { twoSidedCriticalT } from './dunnett';
+import { findIncreasingRoot } from './root-finding';
 import { expectOverScaledChi } from './scaled-chi';
 
 const integrationTolerance = 1e-13;
@@ -82,7 +83,10 @@ export function studentizedRangeQuantile(p: number, groups: number, df: number):
     throw new StatsInputError('invalid argument', `studentizedRangeQuantile: p must be in (0, 1), got ${p}`);
   }
   const shortfall = (q: number): number => studentizedRangeCdf(q, groups, df) - p;
-  let upper = 2;
-  while (shortfall(upper) < 0) upper *= 2;
-  return findRoot(shortfall, upper / 2 > 1 ? upper / 2 : 0, upper, 1e-9);
+  // The range of k means is at least that of two (√2·t(1 − α/2)); Bonferroni over the
+  // k(k − 1)/2 pairs bounds it above.
+  const alpha = 1 - p;
+  const lower = Math.SQRT2 * twoSidedCriticalT(alpha, df);
+  const upper = Math.SQRT2 * twoSidedCriticalT(alpha / ((groups * (groups - 1)) / 2), df);
+  return findIncreasingRoot(shortfall, lower * (1 - 1e-9), upper * (1 + 1e-9), 1e-9);
 }
