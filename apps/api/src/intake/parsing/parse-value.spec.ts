@@ -68,8 +68,12 @@ describe('parseCellValue: limits', () => {
 
   it('compares limits in decimal, not binary floating point', () => {
     // 4.5 is the plausible maximum; 4.50000000000000000001 is above it, which a double cannot tell.
-    expect(parseCellValue('4.50000000000000000001', penetration, point).kind).toBe('value');
-    expect((parseCellValue('4.50000000000000000001', penetration, point) as { warnings: string[] }).warnings[0]).toMatch(/outside the usual range/);
+    expect(parseCellValue('4.50000000000000000001', penetration, point)).toEqual(
+      value('4.50000000000000000001', false, [
+        '4.50000000000000000001 kgf/cm² is outside the usual range of penetration resistance (0 to 4.5 kgf/cm²): check it, then accept the warning to keep it.',
+        '4.50000000000000000001 has 20 decimals; penetration resistance is usually recorded to 2. It is kept as typed.',
+      ]),
+    );
     expect(parseCellValue('4.50', penetration, point)).toEqual(value('4.50'));
   });
 });
