@@ -114,6 +114,9 @@ describe('validateIntake: every class of bad input, all reported by row and colu
     const result = validate(Buffer.from('plot label,block,treatment code,earthworms (count)\n hl-b2-p03 ,B2,gyp,3\n'));
     expect(result.errors).toEqual([]);
     expect(result.values[0]).toMatchObject({ plotId: 106, plotLabel: 'HL-B2-P03' });
+    expect(messages(validate(Buffer.from('plot label,earthworms (count)\nqh-b1-p01,3\n')).errors)).toEqual([
+      'Row 2, plot label: plot qh-b1-p01 belongs to Quarry Hill Garden, not Hollow Lane.',
+    ]);
     expect(messages(validate(Buffer.from('plot label,block,earthworms (count)\nHL-B2-P03,two,3\n')).errors)).toEqual([
       'Row 2, block: "two" is not a block number.',
     ]);

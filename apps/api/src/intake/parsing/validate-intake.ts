@@ -92,28 +92,34 @@ function checkPlan(context: RowContext, mapping: ColumnMapping, plot: SitePlot):
 }
 
 /** Finds the row's plot, or says why there is none. */
-function findPlot(context: RowContext, input: IntakeValidationInput, plotsByLabel: ReadonlyMap<string, SitePlot>, firstRowOf: Map<number, number>): SitePlot | null {
+interface PlotLookup {
+  readonly sitePlots: ReadonlyMap<string, SitePlot>;
+  readonly trialPlots: IntakeValidationInput['trialPlotLabels'];
+  readonly firstRowOf: Map<number, number>;
+}
+
+function findPlot(context: RowContext, input: IntakeValidationInput, lookup: PlotLookup): SitePlot | null {
   const column = input.mapping.plotLabel!;
   const label = context.cells[column]!.trim();
   if (label === '') {
     context.errors.push(problemAt(context, column, 'the plot label is empty.'));
     return null;
   }
-  const plot = plotsByLabel.get(labelKey(label));
+  const plot = lookup.sitePlots.get(labelKey(label));
   if (!plot) {
-    const elsewhere = input.trialPlotLabels.get(labelKey(label));
+    const elsewhere = lookup.trialPlots.get(labelKey(label));
     const message = elsewhere
       ? `plot ${label} belongs to ${elsewhere.siteName}, not ${input.siteName}.`
       : `there is no plot ${label} in this trial; check the label against the plot plan.`;
     context.errors.push(problemAt(context, column, message));
     return null;
   }
-  const firstRow = firstRowOf.get(plot.id);
+  const firstRow = lookup.firstRowOf.get(plot.id);
   if (firstRow !== undefined) {
     context.errors.push(problemAt(context, column, `plot ${plot.label} is also on row ${firstRow}; each plot may appear once in a file.`));
     return null;
   }
-  firstRowOf.set(plot.id, context.row);
+  lookup.firstRowOf.set(plot.id, context.row);
   return plot;
 }
 
@@ -198,12 +204,15 @@ export function validateIntake(input: IntakeValidationInput): IntakeValidation {
   const errors: IntakeProblem[] = [...mapping.problems];
   const out = { values: [] as IntakeValue[], warnings: columnWarnings(mapping, roundMeasures) };
   if (mapping.plotLabel !== null) {
-    const plotsByLabel = new Map(sitePlots.map((plot) => [labelKey(plot.label), plot]));
+    const lookup: PlotLookup = {
+      sitePlots: new Map(sitePlots.map((plot) => [labelKey(plot.label), plot])),
+      trialPlots: new Map([...input.trialPlotLabels].map(([label, site]) => [labelKey(label), site])),
+      firstRowOf: new Map(),
+    };
     const measuresById = new Map(roundMeasures.map((measure) => [measure.id, measure]));
-    const firstRowOf = new Map<number, number>();
     file.rows.forEach((cells, index) => {
       const context: RowContext = { cells, row: file.rowNumbers[index]!, headers: file.headers, errors };
-      const plot = findPlot(context, input, plotsByLabel, firstRowOf);
+      const plot = findPlot(context, input, lookup);
       if (plot) checkPlan(context, mapping, plot);
       readMeasureCells(context, input, plot, measuresById, out);
     });
