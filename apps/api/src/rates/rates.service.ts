@@ -49,8 +49,9 @@ export class RatesService {
       return answer;
     } catch (error) {
       if (!(error instanceof RangeError)) throw error;
-      const message = error.message.replace(/^\w+: /, '');
-      throw new FieldProblemsException([{ field: requestField(error.message), message: message.replace(/^geometry\.?/, requestField(error.message)) }]);
+      const field = requestField(error.message);
+      // "computeDose: geometry.diameterCm must be …" → "diameterCm must be …", in the request's own field names.
+      throw new FieldProblemsException([{ field, message: error.message.replace(/^\w+: \S+/, field) }]);
     }
   }
 }
