@@ -1,7 +1,10 @@
 import type { Measure } from '@friable/contracts';
+import { MEASURE_UNITS } from '@friable/field';
+import Papa from 'papaparse';
 import { describe, expect, it } from 'vitest';
 import trial from './fixtures/trial.json';
 import { mapColumns, templateHeader } from './map-columns';
+import { readCsvFile } from './read-csv-file';
 
 const measures = trial.measures as Measure[];
 const roundMeasures = measures.slice(0, 3);
@@ -16,6 +19,27 @@ describe('mapColumns', () => {
       { measureId: 1, measureCode: 'DRAIN', index: 3, header: 'drain time (s)', headerUnitId: null, factor: null, problems: [] },
       { measureId: 2, measureCode: 'CRUMB', index: 4, header: 'crumb score (score)', headerUnitId: null, factor: null, problems: [] },
       { measureId: 3, measureCode: 'WORMS', index: 5, header: 'earthworms (count)', headerUnitId: null, factor: null, problems: [] },
+    ]);
+  });
+
+  it('reads the unit of every measure unit Friable knows, by id or symbol, without converting', () => {
+    for (const unit of MEASURE_UNITS) {
+      const measure = { ...measures[0]!, unit: unit.id, name: 'reading' };
+      for (const header of [templateHeader(measure), `reading (${unit.symbol})`]) {
+        expect(mapColumns(['plot label', header], [measure]).measures[0], header).toMatchObject({ factor: null, problems: [] });
+      }
+    }
+  });
+
+  it('accepts a template written the way the plot plan writes it (papaparse, CRLF, every measure unit)', () => {
+    const fields = ['plot label', 'block', 'treatment code', ...measures.map(templateHeader), 'notes'];
+    const csv = `${Papa.unparse({ fields, data: [['HL-B1-P01', '1', 'CTRL', '', '', '', '', '', '']] }, { newline: '\r\n' })}\r\n`;
+    const file = readCsvFile(Buffer.from(csv));
+    const mapping = mapColumns(file.headers, measures);
+    expect(file.headers[6]).toBe('penetration resistance (kgf/cm2)');
+    expect(mapping.problems).toEqual([]);
+    expect(mapping.measures.map((column) => [column.measureCode, column.factor])).toEqual([
+      ['DRAIN', null], ['CRUMB', null], ['WORMS', null], ['PEN', null], ['BD', null],
     ]);
   });
 

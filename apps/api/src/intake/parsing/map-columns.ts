@@ -66,9 +66,9 @@ function measureNamed(measures: readonly Measure[], key: string): Measure | unde
   return measures.find((measure) => normaliseHeader(measure.name) === key || normaliseHeader(measure.code) === key);
 }
 
-/** The template's header for a measure: its name with the unit symbol in parentheses. */
+/** The template's header for a measure, as the plot plan's CSV template writes it: the name with the unit id in parentheses. */
 export function templateHeader(measure: Pick<Measure, 'name' | 'unit'>): string {
-  return `${measure.name} (${findUnit(measure.unit)?.symbol ?? measure.unit})`;
+  return `${measure.name} (${findUnit(measure.unit)?.id ?? measure.unit})`;
 }
 
 type Target = { role: ColumnRole } | { measure: Measure; unitText: string | null } | null;
