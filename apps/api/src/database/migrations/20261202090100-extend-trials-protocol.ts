@@ -1,4 +1,4 @@
-import { DataTypes, type QueryInterface } from 'sequelize';
+import { DataTypes, QueryTypes, type QueryInterface } from 'sequelize';
 
 // The protocol's own fields on the trial: question, start date, seed, safety notes, no-control reason.
 export async function up({ context: queryInterface }: { context: QueryInterface }): Promise<void> {
@@ -10,7 +10,9 @@ export async function up({ context: queryInterface }: { context: QueryInterface 
 }
 
 export async function down({ context: queryInterface }: { context: QueryInterface }): Promise<void> {
-  for (const column of ['no_control_reason', 'safety_notes', 'seed', 'start_date', 'question']) {
-    await queryInterface.removeColumn('trials', column);
-  }
+  // One ALTER with an explicit query type: removeColumn's untyped query trips over the mariadb driver's result meta.
+  await queryInterface.sequelize.query(
+    'ALTER TABLE `trials` DROP COLUMN `no_control_reason`, DROP COLUMN `safety_notes`, DROP COLUMN `seed`, DROP COLUMN `start_date`, DROP COLUMN `question`',
+    { type: QueryTypes.RAW },
+  );
 }
