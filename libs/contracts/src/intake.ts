@@ -1,6 +1,6 @@
 // Intake (CSV upload) and Ledger (the observations grid and its history).
 
-/** One problem in an uploaded file, by row (1 = the first data row after the header) and column header. */
+/** One problem in an uploaded file, by row as a spreadsheet shows it (the header is row 1, the first data row is row 2) and column header. */
 export interface IntakeProblem {
   row: number | null;
   column: string | null;
