@@ -28,7 +28,7 @@ export function AppLayout() {
             Rate calculator
           </NavLink>
           {outbox && (
-            <NavLink to={paths.outbox.href()} className="fr-nav-link">
+            <NavLink to={paths.outbox.href()} className="fr-nav-link fr-outbox-link">
               Outbox
             </NavLink>
           )}

@@ -10,7 +10,8 @@ export function getOutbox(): Promise<OutboxMessage[]> {
 export const outboxQueryOptions = () => queryOptions({ queryKey: ['dev', 'outbox'], queryFn: getOutbox, retry: false });
 
 export function useOutbox() {
-  return useQuery({ ...outboxQueryOptions(), refetchInterval: 5_000 });
+  // Always fresh on opening: the top bar's availability check may have cached an older list.
+  return useQuery({ ...outboxQueryOptions(), staleTime: 0, refetchOnMount: 'always', refetchInterval: 5_000 });
 }
 
 /** True when this server has an Outbox (development and test), so the top bar can offer the link. */

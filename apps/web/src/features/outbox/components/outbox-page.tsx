@@ -1,4 +1,4 @@
-import { Card, H3, H4, Tab, Tabs } from '@blueprintjs/core';
+import { Button, Card, H3, H4, Tab, Tabs } from '@blueprintjs/core';
 import type { OutboxMessage } from '@friable/contracts';
 import { useState } from 'react';
 import { EmptyState, ErrorState, LoadingState } from '../../../components/states';
@@ -17,7 +17,7 @@ export function OutboxPage() {
       <p className="fr-muted">
         Development only: e-mails are caught here instead of being delivered. Links in them work on this machine.
       </p>
-      {outbox.isPending ? (
+      {outbox.isPending || !outbox.isFetchedAfterMount ? (
         <LoadingState what="the Outbox" />
       ) : outbox.isError ? (
         <ErrorState title="The Outbox could not be loaded" error={outbox.error} onRetry={() => outbox.refetch()} />
@@ -25,9 +25,9 @@ export function OutboxPage() {
         <EmptyState title="No e-mails yet" description="Invitations and reminders appear here as soon as Friable sends them." />
       ) : (
         <ul className="fr-card-list">
-          {outbox.data.map((message) => (
+          {outbox.data.map((message, index) => (
             <li key={message.id}>
-              <OutboxCard message={message} />
+              <OutboxCard message={message} startOpen={index === 0} />
             </li>
           ))}
         </ul>
@@ -36,11 +36,24 @@ export function OutboxPage() {
   );
 }
 
-function OutboxCard({ message }: { message: OutboxMessage }) {
+/** One caught e-mail: its envelope always, its body when opened (the newest starts open). */
+function OutboxCard({ message, startOpen }: { message: OutboxMessage; startOpen: boolean }) {
   const [view, setView] = useState<'text' | 'html'>('text');
+  const [open, setOpen] = useState(startOpen);
   return (
     <Card elevation={0} className="fr-outbox__message" aria-label={`E-mail: ${message.subject}`}>
-      <H4 className="fr-outbox__subject">{message.subject}</H4>
+      <div className="fr-outbox__top">
+        <H4 className="fr-outbox__subject">{message.subject}</H4>
+        <Button
+          variant="minimal"
+          size="small"
+          icon={open ? 'chevron-up' : 'chevron-down'}
+          text={open ? 'Hide' : 'Show'}
+          aria-expanded={open}
+          aria-label={`${open ? 'Hide' : 'Show'} the e-mail “${message.subject}” to ${message.to.join(', ')}`}
+          onClick={() => setOpen(!open)}
+        />
+      </div>
       <dl className="fr-outbox__meta">
         <dt>To</dt>
         <dd>{message.to.join(', ')}</dd>
@@ -49,13 +62,13 @@ function OutboxCard({ message }: { message: OutboxMessage }) {
         <dt>Received</dt>
         <dd>{received.format(new Date(message.receivedAt))}</dd>
       </dl>
-      {message.html !== null && (
+      {open && message.html !== null && (
         <Tabs id={`outbox-${message.id}`} selectedTabId={view} onChange={(id) => setView(id as 'text' | 'html')}>
           <Tab id="text" title="Plain text" />
           <Tab id="html" title="HTML" />
         </Tabs>
       )}
-      {view === 'html' && message.html !== null ? (
+      {!open ? null : view === 'html' && message.html !== null ? (
         // The sink's copy of our own e-mail, shown in a sandbox with no scripts.
         <iframe className="fr-outbox__html" title={`HTML of ${message.subject}`} sandbox="" srcDoc={message.html} />
       ) : (

@@ -30,9 +30,7 @@ export function InvitationsList({ trialId }: { trialId: number }) {
                 <th>Site</th>
                 <th>Sent</th>
                 <th>Status</th>
-                <th>
-                  <span className="bp6-text-muted">Actions</span>
-                </th>
+                <th>Actions</th>
               </tr>
             </thead>
             <tbody>
