@@ -6,3 +6,16 @@ export { fitTrialDesign, type DesignFit, type FactorLevelMeans, type TrialDesign
 export { codeFactor, prepareTrialLayout, type PreparedLayout, type TrialObservation } from './trial-layout';
 export { productCorrelationLambdas, separateMeans, type MeanSeparation, type MeanSeparationInput, type MeanSeparationMethod, type MethodComparisons, type PairComparison } from './mean-separation';
 export { analyseTrial, type AnovaRow, type ResidualDiagnostic, type TreatmentMean, type TrialAnalysis, type TrialAnalysisRequest, type TrialTransform } from './analyse-trial';
+export { studentizedRangeCdf, studentizedRangeQuantile } from './studentized-range';
+export { dunnettPValue, dunnettProbability, dunnettQuantile } from './dunnett';
+export { shapiroWilk, type ShapiroWilkResult } from './shapiro-wilk';
+export { brownForsythe, type BrownForsytheResult } from './brown-forsythe';
+export { bartlett, bartlettFromVariances, type BartlettResult } from './bartlett';
+export { friedman, type FriedmanResult } from './friedman';
+export { kruskalWallis, type KruskalWallisResult } from './kruskal-wallis';
+export { chiSquareUpperTail } from './chi-square';
+export { adjustPValues } from './adjust-p-values';
+export { compactLetterDisplay } from './compact-letters';
+export { noncentralFCdf } from './noncentral-f';
+export { blocksForPower, rcbdPower, type RcbdPowerInput, type RcbdPowerResult } from './power';
+export { backTransform, transformValues, type TransformKind, type TransformedValues } from './transforms';
