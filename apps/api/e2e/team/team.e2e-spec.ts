@@ -12,6 +12,7 @@ const sha256 = (text: string) => createHash('sha256').update(text).digest('hex')
 describe('the Team: members, invitations by e-mail, accepting', () => {
   let t: TestApp;
   let investigator: User;
+  let collaborator: User;
   let investigatorToken: string;
   let collaboratorToken: string;
   let reviewerToken: string;
@@ -36,7 +37,7 @@ describe('the Team: members, invitations by e-mail, accepting', () => {
     t = await createTestApp();
     investigator = await createPerson({ name: 'Ines Lead' });
     investigatorToken = await tokenFor(t, investigator);
-    const collaborator = await createPerson({ name: 'Cal Grower' });
+    collaborator = await createPerson({ name: 'Cal Grower' });
     const reviewer = await createPerson({ name: 'Rita Reader' });
     collaboratorToken = await tokenFor(t, collaborator);
     reviewerToken = await tokenFor(t, reviewer);
@@ -219,10 +220,9 @@ describe('the Team: members, invitations by e-mail, accepting', () => {
     const twice = await invite({ email, role: 'collaborator', siteId: millbrook });
     expect(twice.status).toBe(409);
     expect(twice.body.message).toMatch(/already has a pending invitation/);
-    const member = await User.findOne({ where: { name: 'Cal Grower' } });
-    const already = await invite({ email: member!.email, role: 'collaborator', siteId: hollowLane });
+    const already = await invite({ email: collaborator.email, role: 'collaborator', siteId: hollowLane });
     expect(already.status).toBe(409);
-    expect(already.body.message).toBe(`${member!.email} is already a collaborator at Hollow Lane Garden on this trial.`);
+    expect(already.body.message).toBe(`${collaborator.email} is already a collaborator at Hollow Lane Garden on this trial.`);
   });
 
   it('lets an existing account join with its own password, or with its bearer token', async () => {
