@@ -54,7 +54,7 @@ describe('signing in to the built app', () => {
     await page.getByLabel('Password').fill('friable-demo');
     await page.getByRole('button', { name: 'Sign in' }).click();
     await page.getByRole('heading', { name: 'Heavy-clay amendments across three Fernwick gardens' }).waitFor();
-    expect(new URL(page.url()).pathname).toBe('/trials/1');
+    expect(new URL(page.url()).pathname).toBe('/trials/1/protocol');
     await expect(page.getByText('Reviewer').first().isVisible()).resolves.toBe(true);
   });
 

@@ -9,6 +9,7 @@ const reasonPhrases: Record<number, string> = {
   403: 'Forbidden',
   404: 'Not Found',
   409: 'Conflict',
+  410: 'Gone',
   413: 'Payload Too Large',
   422: 'Unprocessable Entity',
   429: 'Too Many Requests',
