@@ -1,4 +1,14 @@
 // Every route's path and href builder in one place.
+
+/** A trial page that shows one site and round at a time: `/trials/3/ledger?site=31&round=21`. */
+function siteRoundHref(trialId: number, section: string, siteId?: number, roundId?: number): string {
+  const query = new URLSearchParams();
+  if (siteId) query.set('site', String(siteId));
+  if (roundId) query.set('round', String(roundId));
+  const text = query.toString();
+  return `/trials/${trialId}/${section}${text ? `?${text}` : ''}`;
+}
+
 export const paths = {
   signIn: {
     path: '/sign-in',
@@ -14,6 +24,9 @@ export const paths = {
     href: (trialId: number, siteId?: number) => `/trials/${trialId}/plot-plan${siteId ? `?site=${siteId}` : ''}`,
   },
   trialTeam: { path: '/trials/:trialId/team', href: (trialId: number) => `/trials/${trialId}/team` },
+  trialIntake: { path: '/trials/:trialId/intake', href: (trialId: number, siteId?: number, roundId?: number) => siteRoundHref(trialId, 'intake', siteId, roundId) },
+  trialLedger: { path: '/trials/:trialId/ledger', href: (trialId: number, siteId?: number, roundId?: number) => siteRoundHref(trialId, 'ledger', siteId, roundId) },
+  trialActivity: { path: '/trials/:trialId/activity', href: (trialId: number) => `/trials/${trialId}/activity` },
   rateCalculator: { path: '/rate-calculator', href: () => '/rate-calculator' },
   acceptInvitation: { path: '/invitations/:token', href: (token: string) => `/invitations/${token}` },
   outbox: { path: '/outbox', href: () => '/outbox' },

@@ -16,11 +16,13 @@ export function useTrialOutlet(): TrialOutletContext {
   return useOutletContext<TrialOutletContext>();
 }
 
-const sections = [
+const sections: Array<{ label: string; href: (id: number) => string; shownTo?: (trial: TrialDetail) => boolean }> = [
   { label: 'Protocol', href: paths.trialProtocol.href },
   { label: 'Sites', href: paths.trialSites.href },
   { label: 'Plot plan', href: (id: number) => paths.trialPlotPlan.href(id) },
   { label: 'Team', href: paths.trialTeam.href },
+  // Reviewers write no data, so they get no Intake tab.
+  { label: 'Intake', href: (id: number) => paths.trialIntake.href(id), shownTo: (t: TrialDetail) => t.myRoles.some((role) => role !== 'reviewer') },
 ];
 
 /** A trial's header and section tabs around its pages. */
@@ -45,7 +47,7 @@ export function TrialLayout() {
         </div>
       </header>
       <nav className="fr-tabs" aria-label="Trial sections">
-        {sections.map((section) => (
+        {sections.filter((section) => section.shownTo?.(t) ?? true).map((section) => (
           <NavLink key={section.label} to={section.href(t.id)} className="fr-tab">
             {section.label}
           </NavLink>

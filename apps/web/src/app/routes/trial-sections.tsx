@@ -1,4 +1,5 @@
 import { useParams } from 'react-router-dom';
+import { IntakePage } from '../../features/intake/components/intake-page';
 import { PlotPlanPage } from '../../features/protocol/components/plot-plan-page';
 import { ProtocolPage } from '../../features/protocol/components/protocol-page';
 import { SitesPage } from '../../features/protocol/components/sites-page';
@@ -20,6 +21,10 @@ export function PlotPlanRoute() {
 
 export function TeamRoute() {
   return <TeamPage trial={useTrialOutlet().trial} />;
+}
+
+export function IntakeRoute() {
+  return <IntakePage trial={useTrialOutlet().trial} />;
 }
 
 export function AcceptInvitationRoute() {

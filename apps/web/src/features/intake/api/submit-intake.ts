@@ -1,0 +1,81 @@
+import type { IntakeProblem, IntakeResult, ProblemBody } from '@friable/contracts';
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { ApiError, tokenStore } from '../../../lib/api-client';
+
+/** What the person's choice of column means: a role, a measure code, or null (not read). */
+export type ColumnChoice = 'plotLabel' | 'block' | 'treatment' | 'notes' | 'missingReason' | string | null;
+
+export interface IntakeSubmission {
+  trialId: number;
+  siteId: number;
+  roundId: number;
+  file: File;
+  /** Only the columns the person mapped differently from the automatic matching (header → choice). */
+  mapping: Record<string, ColumnChoice>;
+  acceptWarnings: boolean;
+  dryRun: boolean;
+  /** Share of the file sent so far, 0 to 1, from the browser's own upload progress events. */
+  onProgress?: (fraction: number) => void;
+}
+
+/** The server's refusal of a file: nothing was written; `problems` name the row and column of each. */
+export class IntakeRefusedError extends ApiError {
+  override name = 'IntakeRefusedError';
+  get problems(): IntakeProblem[] {
+    return (this.details ?? []).map((detail) => ({ row: detail.row ?? null, column: detail.column ?? null, message: detail.message }));
+  }
+}
+
+function readBody(request: XMLHttpRequest): Partial<ProblemBody> & Partial<IntakeResult> {
+  try {
+    return JSON.parse(request.responseText) as Partial<ProblemBody> & Partial<IntakeResult>;
+  } catch {
+    return {};
+  }
+}
+
+/**
+ * POST /api/trials/:trialId/sites/:siteId/rounds/:roundId/intake (multipart: `file`, `mapping` JSON when
+ * the person changed it, `acceptWarnings`), with `?dryRun=true` for the check before the commit.
+ * XMLHttpRequest rather than fetch, because only it reports real upload progress.
+ * Rejects with IntakeRefusedError (422, every problem listed) or ApiError (any other failure).
+ */
+export function submitIntake({ trialId, siteId, roundId, file, mapping, acceptWarnings, dryRun, onProgress }: IntakeSubmission): Promise<IntakeResult> {
+  const form = new FormData();
+  form.append('file', file, file.name);
+  if (Object.keys(mapping).length > 0) form.append('mapping', JSON.stringify(mapping));
+  form.append('acceptWarnings', acceptWarnings ? 'true' : 'false');
+  return new Promise((resolve, reject) => {
+    const request = new XMLHttpRequest();
+    request.open('POST', `/api/trials/${trialId}/sites/${siteId}/rounds/${roundId}/intake${dryRun ? '?dryRun=true' : ''}`);
+    const token = tokenStore.get();
+    if (token) request.setRequestHeader('Authorization', `Bearer ${token}`);
+    request.upload.onprogress = (event) => {
+      if (event.lengthComputable && event.total > 0) onProgress?.(event.loaded / event.total);
+    };
+    request.onerror = () => reject(new ApiError(0, 'Friable cannot reach its server. Check that it is running, then try again.'));
+    request.onload = () => {
+      const body = readBody(request);
+      if (request.status >= 200 && request.status < 300) {
+        onProgress?.(1);
+        resolve(body as IntakeResult);
+        return;
+      }
+      const message = body.message || `The server answered ${request.status} ${request.statusText}`.trim();
+      const ErrorKind = request.status === 422 ? IntakeRefusedError : ApiError;
+      reject(new ErrorKind(request.status, message, body.errors ?? []));
+    };
+    request.send(form);
+  });
+}
+
+/** A dry run or a commit; a commit loads the trial's observations (and the site's "has data" flag) again. */
+export function useSubmitIntake(trialId: number) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: submitIntake,
+    onSuccess: async (result) => {
+      if (!result.dryRun) await queryClient.invalidateQueries({ queryKey: ['trials', trialId] });
+    },
+  });
+}

@@ -1,0 +1,175 @@
+import type { IntakeResult } from '@friable/contracts';
+import { screen, within } from '@testing-library/react';
+import userEvent from '@testing-library/user-event';
+import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
+import { mockApi, renderWithApp } from '../../../test/render';
+import { makeTrial, person } from '../../protocol/test/trial-fixture';
+import { IntakePage } from './intake-page';
+
+type Reply = { status: number; body: unknown };
+
+/** Stands in for XMLHttpRequest: records each upload, reports half then all of it sent, then answers. */
+class FakeUpload {
+  static sent: FakeUpload[] = [];
+  static replies: Reply[] = [];
+  upload: { onprogress: ((event: { lengthComputable: boolean; loaded: number; total: number }) => void) | null } = { onprogress: null };
+  status = 0;
+  statusText = '';
+  responseText = '';
+  url = '';
+  headers: Record<string, string> = {};
+  form: FormData | null = null;
+  onload: (() => void) | null = null;
+  onerror: (() => void) | null = null;
+  open(_method: string, url: string) {
+    this.url = url;
+  }
+  setRequestHeader(name: string, value: string) {
+    this.headers[name] = value;
+  }
+  send(form: FormData) {
+    this.form = form;
+    FakeUpload.sent.push(this);
+    const reply = FakeUpload.replies.shift() ?? { status: 500, body: { message: 'no reply prepared' } };
+    setTimeout(() => {
+      this.upload.onprogress?.({ lengthComputable: true, loaded: 50, total: 100 });
+      this.status = reply.status;
+      this.responseText = JSON.stringify(reply.body);
+      this.onload?.();
+    }, 0);
+  }
+}
+
+const template = 'plot label,block,treatment code,drain time (s),notes\nHL-101,1,G40,412,\nHL-102,1,CTRL,>600,standing water\n\nHL-103,1,C2,abc,\n';
+const csv = (text: string, name = 'hollow-lane-week-2.csv') => new File([text], name, { type: 'text/csv' });
+
+const dryRun = (extra: Partial<IntakeResult> = {}): IntakeResult => ({
+  dryRun: true,
+  created: 2,
+  updated: 1,
+  unchanged: 0,
+  warnings: [],
+  changes: [
+    { plotLabel: 'HL-101', measureCode: 'DRAIN', kind: 'new', before: null, after: '412' },
+    { plotLabel: 'HL-102', measureCode: 'DRAIN', kind: 'changed', before: '580', after: '>600' },
+    { plotLabel: 'HL-103', measureCode: 'DRAIN', kind: 'new', before: null, after: '95' },
+  ],
+  identicalToPrevious: false,
+  message: '3 values checked.',
+  ...extra,
+});
+
+const activeTrial = (extra = {}) => makeTrial({ status: 'active', ...extra });
+
+async function chooseFile(text = template) {
+  await userEvent.upload(screen.getByLabelText('CSV file'), csv(text));
+  return screen.findByRole('table', { name: 'Preview of the file' });
+}
+
+describe('IntakePage', () => {
+  beforeEach(() => {
+    window.localStorage.setItem('friable.accessToken', 'token');
+    FakeUpload.sent = [];
+    FakeUpload.replies = [];
+    vi.stubGlobal('XMLHttpRequest', FakeUpload);
+    mockApi({ 'GET /api/auth/me': { status: 200, body: person } });
+  });
+  afterEach(() => vi.unstubAllGlobals());
+
+  it('offers a collaborator only their own site, previews the file with its columns matched, and keeps blank rows’ numbers', async () => {
+    renderWithApp(<IntakePage trial={activeTrial({ myRoles: ['collaborator'], mySiteIds: [31] })} />);
+    const site = screen.getByLabelText('Site');
+    expect(within(site).getAllByRole('option').map((o) => o.textContent)).toEqual(['Hollow Lane']);
+    expect(screen.getByText(/gloves/)).toBeInTheDocument();
+    expect(screen.getByText(/dust mask/)).toBeInTheDocument();
+    expect(screen.getByText(/5-gallon bucket of wet clay/)).toBeInTheDocument();
+    const preview = await chooseFile();
+    expect(screen.getByLabelText('Column “plot label” holds')).toHaveValue('plotLabel');
+    expect(screen.getByLabelText('Column “treatment code” holds')).toHaveValue('treatment');
+    expect(screen.getByLabelText('Column “drain time (s)” holds')).toHaveValue('DRAIN');
+    expect(screen.getByLabelText('Column “notes” holds')).toHaveValue('notes');
+    // Row 4 is blank in the file; the last plot is on row 5, as a spreadsheet numbers it.
+    const rows = within(preview).getAllByRole('row').slice(1);
+    expect(rows.map((row) => within(row).getByRole('rowheader').textContent)).toEqual(['2', '3', '5']);
+    expect(screen.getByText('hollow-lane-week-2.csv')).toBeInTheDocument();
+  });
+
+  it('lists every problem of a refused file by row and column and marks those rows in the preview', async () => {
+    FakeUpload.replies.push({
+      status: 422,
+      body: {
+        statusCode: 422,
+        error: 'Unprocessable Entity',
+        message: 'The file has 2 problems; nothing was saved.',
+        errors: [
+          { row: 2, column: 'plot label', message: 'Row 2, plot label: "HL-999" is not a plot of Hollow Lane.' },
+          { row: 5, column: 'drain time (s)', message: 'Row 5, drain time (s): "abc" is not a number.' },
+        ],
+      },
+    });
+    renderWithApp(<IntakePage trial={activeTrial()} />);
+    const preview = await chooseFile();
+    await userEvent.click(screen.getByRole('button', { name: 'Check the file' }));
+    const problems = await screen.findByRole('table', { name: 'Problems in the file' });
+    const lines = within(problems).getAllByRole('row').slice(1).map((row) => within(row).getAllByRole('cell').map((cell) => cell.textContent));
+    expect(lines).toEqual([
+      ['2', 'plot label', 'Row 2, plot label: "HL-999" is not a plot of Hollow Lane.'],
+      ['5', 'drain time (s)', 'Row 5, drain time (s): "abc" is not a number.'],
+    ]);
+    expect(screen.getByText(/Nothing was saved/)).toBeInTheDocument();
+    const marked = within(preview).getAllByRole('row').filter((row) => row.getAttribute('aria-invalid') === 'true');
+    expect(marked.map((row) => within(row).getByRole('rowheader').textContent)).toEqual(['!2', '!5']);
+    expect(screen.queryByRole('button', { name: 'Save these values' })).not.toBeInTheDocument();
+  });
+
+  it('dry-runs first, then saves only once the unusual values are accepted; sends the changed column mapping', async () => {
+    FakeUpload.replies.push(
+      { status: 200, body: dryRun({ warnings: [{ row: 6, column: 'drain time (s)', message: 'Row 6, drain time (s): 3 is below the plausible 5 s.' }] }) },
+      { status: 200, body: { ...dryRun(), dryRun: false, message: '2 new and 1 changed value saved.' } },
+    );
+    renderWithApp(<IntakePage trial={activeTrial()} />, { route: '/trials/3/intake?site=31&round=21' });
+    await chooseFile();
+    await userEvent.selectOptions(screen.getByLabelText('Column “notes” holds'), '');
+    await userEvent.click(screen.getByRole('button', { name: 'Check the file' }));
+    expect(await screen.findByText('values would be saved.', { exact: false })).toHaveTextContent('2 new, 1 changed and 0 unchanged values would be saved.');
+    const changes = screen.getByRole('table', { name: 'Values this upload would write' });
+    expect(within(changes).getByText('580').closest('tr')).toHaveTextContent('HL-102DRAINChanged580>600');
+    expect(screen.getByText('Row 6, drain time (s): 3 is below the plausible 5 s.')).toBeInTheDocument();
+
+    const first = FakeUpload.sent[0]!;
+    expect(first.url).toBe('/api/trials/3/sites/31/rounds/21/intake?dryRun=true');
+    expect(first.headers.Authorization).toBe('Bearer token');
+    expect(first.form?.get('mapping')).toBe(JSON.stringify({ notes: null }));
+    expect(first.form?.get('acceptWarnings')).toBe('false');
+    expect((first.form?.get('file') as File).name).toBe('hollow-lane-week-2.csv');
+
+    const save = screen.getByRole('button', { name: 'Save these values' });
+    expect(save).toBeDisabled();
+    await userEvent.click(screen.getByLabelText(/I have checked these values/));
+    await userEvent.click(save);
+    expect(await screen.findByText('2 new and 1 changed value saved.')).toBeInTheDocument();
+    const second = FakeUpload.sent[1]!;
+    expect(second.url).toBe('/api/trials/3/sites/31/rounds/21/intake');
+    expect(second.form?.get('acceptWarnings')).toBe('true');
+    expect(screen.getByRole('link', { name: 'Open these values in the Ledger' })).toHaveAttribute('href', '/trials/3/ledger?site=31&round=21');
+  });
+
+  it('says a byte-identical file changes nothing and offers no save', async () => {
+    FakeUpload.replies.push({ status: 200, body: dryRun({ created: 0, updated: 0, unchanged: 3, identicalToPrevious: true }) });
+    renderWithApp(<IntakePage trial={activeTrial()} />);
+    await chooseFile();
+    await userEvent.click(screen.getByRole('button', { name: 'Check the file' }));
+    expect(await screen.findByText(/byte for byte the one uploaded last time/)).toBeInTheDocument();
+    expect(screen.getByRole('button', { name: 'Save these values' })).toBeDisabled();
+    expect(FakeUpload.sent[0]!.form?.get('mapping')).toBeNull();
+  });
+
+  it('gives reviewers and locked trials a note instead of an upload', () => {
+    const { unmount } = renderWithApp(<IntakePage trial={activeTrial({ myRoles: ['reviewer'] })} />);
+    expect(screen.getByText(/only its investigator and site collaborators upload data/)).toBeInTheDocument();
+    expect(screen.queryByLabelText('CSV file')).not.toBeInTheDocument();
+    unmount();
+    renderWithApp(<IntakePage trial={activeTrial({ status: 'locked' })} />);
+    expect(screen.getByText('This trial is locked for analysis; the investigator can unlock it.')).toBeInTheDocument();
+  });
+});
