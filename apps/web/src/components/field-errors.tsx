@@ -43,11 +43,13 @@ export function Field({
  */
 export function FormErrorCallout({ error, shownFields = [] }: { error: unknown; shownFields?: string[] }) {
   if (!error) return null;
-  const message = error instanceof Error ? error.message : 'Something went wrong.';
   const others =
     error instanceof ApiError
       ? (error.details ?? []).filter((detail) => !detail.field || !shownFields.some((f) => detail.field === f || detail.field?.startsWith(`${f}.`)))
       : [];
+  // The server's sentence repeats the field messages, which already stand beside their fields.
+  const allBesideFields = error instanceof ApiError && error.status === 422 && (error.details ?? []).length > 0 && others.length === 0;
+  const message = !(error instanceof Error) ? 'Something went wrong.' : allBesideFields ? 'Some fields need another look; see the messages beside them.' : error.message;
   return (
     <Callout intent="danger" icon="error" className="fr-form-error" role="alert">
       {message}

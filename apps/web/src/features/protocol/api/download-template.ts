@@ -5,7 +5,7 @@ export interface TemplateRequest {
   trialId: number;
   siteId: number;
   roundId: number;
-  /** Name the browser saves the file under. */
+  /** Name the browser saves the file under when the server does not name it. */
   fileName: string;
 }
 
@@ -32,7 +32,7 @@ export async function downloadTemplate({ trialId, siteId, roundId, fileName }: T
   const url = URL.createObjectURL(blob);
   const link = document.createElement('a');
   link.href = url;
-  link.download = fileName;
+  link.download = /filename="([^"]+)"/.exec(response.headers.get('Content-Disposition') ?? '')?.[1] ?? fileName;
   document.body.append(link);
   link.click();
   link.remove();

@@ -2,9 +2,9 @@ import type { Plot } from '@friable/contracts';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
 
-/** GET /api/trials/:trialId/sites/:siteId/plots — the site's randomized layout, block by block. */
+/** GET /api/trials/:trialId/plots?siteId= — the site's randomized layout, in block and position order. */
 export function getPlots(trialId: number, siteId: number): Promise<Plot[]> {
-  return apiRequest<Plot[]>(`/trials/${trialId}/sites/${siteId}/plots`);
+  return apiRequest<Plot[]>(`/trials/${trialId}/plots?siteId=${siteId}`);
 }
 
 export const plotsQueryOptions = (trialId: number, siteId: number) =>

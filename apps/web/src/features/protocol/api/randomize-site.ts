@@ -1,4 +1,4 @@
-import type { Plot } from '@friable/contracts';
+import type { Site } from '@friable/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
 import { trialQueryOptions } from './get-trial';
@@ -9,9 +9,9 @@ export interface RandomizeSite {
   seed?: string;
 }
 
-/** POST /api/trials/:trialId/sites/:siteId/randomize — lays out (or lays out again) the site's plots. */
-export function randomizeSite(trialId: number, { siteId, seed }: RandomizeSite): Promise<Plot[]> {
-  return apiRequest<Plot[]>(`/trials/${trialId}/sites/${siteId}/randomize`, { method: 'POST', json: seed ? { seed } : {} });
+/** POST /api/trials/:trialId/sites/:siteId/randomize — lays out (or lays out again) the site's plots; answers with the site. */
+export function randomizeSite(trialId: number, { siteId, seed }: RandomizeSite): Promise<Site> {
+  return apiRequest<Site>(`/trials/${trialId}/sites/${siteId}/randomize`, { method: 'POST', json: seed ? { seed } : {} });
 }
 
 export function useRandomizeSite(trialId: number) {

@@ -8,7 +8,7 @@ import { PlotPlanPage } from './plot-plan-page';
 const base = {
   'GET /api/auth/me': { status: 200, body: person },
   'GET /api/trials/3/amounts': { status: 200, body: amounts },
-  'GET /api/trials/3/sites/31/plots': { status: 200, body: plotsFor(31, 'HL') },
+  'GET /api/trials/3/plots?siteId=31': { status: 200, body: plotsFor(31, 'HL') },
 };
 
 describe('PlotPlanPage', () => {
