@@ -6,6 +6,7 @@ import type { Sequelize } from 'sequelize-typescript';
 import { ActivityService } from '../activity/activity.service';
 import { definedOnly } from '../common/defined-only';
 import type { AuthUser } from '../auth/auth-user';
+import { takenInTrial } from '../common/taken-in-trial';
 import { throwIfProblems } from '../common/exceptions/field-problems.exception';
 import { ProtocolGateService } from '../common/protocol/protocol-gate.service';
 import { AssessmentRoundRow } from '../rounds/models/assessment-round.model';
@@ -41,8 +42,8 @@ export class MeasuresService {
   }
 
   private async checkCode(trialId: number, code: string, exceptId: number | null, transaction: Transaction): Promise<void> {
-    const other = await this.measures.findOne({ where: { trialId, code }, transaction });
-    throwIfProblems(other && other.id !== exceptId ? [{ field: 'code', message: `code ${code} is already used by another measure of this trial` }] : []);
+    const taken = await takenInTrial(this.measures, trialId, 'code', code, exceptId, transaction, 'measure');
+    throwIfProblems(taken ? [taken] : []);
   }
 
   async create(trialId: number, user: AuthUser, input: CreateMeasureDto): Promise<Measure> {

@@ -6,7 +6,8 @@ import type { Sequelize } from 'sequelize-typescript';
 import { ActivityService } from '../activity/activity.service';
 import { definedOnly } from '../common/defined-only';
 import type { AuthUser } from '../auth/auth-user';
-import { throwIfProblems } from '../common/exceptions/field-problems.exception';
+import { throwIfProblems, type FieldProblem } from '../common/exceptions/field-problems.exception';
+import { takenInTrial } from '../common/taken-in-trial';
 import { ProtocolGateService } from '../common/protocol/protocol-gate.service';
 import { MeasureRow } from '../measures/models/measure.model';
 import { Trial } from '../trials/models/trial.model';
@@ -46,11 +47,9 @@ export class RoundsService {
   }
 
   private async check(trialId: number, input: UpdateRoundDto, exceptId: number | null, transaction: Transaction): Promise<void> {
-    const problems = [];
-    if (input.label !== undefined) {
-      const other = await this.rounds.findOne({ where: { trialId, label: input.label.trim() }, transaction });
-      if (other && other.id !== exceptId) problems.push({ field: 'label', message: `label ${input.label} is already used by another round of this trial` });
-    }
+    const problems: FieldProblem[] = [];
+    const taken = input.label === undefined ? null : await takenInTrial(this.rounds, trialId, 'label', input.label.trim(), exceptId, transaction, 'round');
+    if (taken) problems.push(taken);
     if (input.measureIds !== undefined) {
       const ids = [...new Set(input.measureIds)];
       const found = await this.measures.count({ where: { trialId, id: ids }, transaction });

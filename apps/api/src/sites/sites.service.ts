@@ -8,6 +8,7 @@ import { ActivityService } from '../activity/activity.service';
 import { definedOnly } from '../common/defined-only';
 import type { AuthUser } from '../auth/auth-user';
 import { throwIfProblems, type FieldProblem } from '../common/exceptions/field-problems.exception';
+import { takenInTrial } from '../common/taken-in-trial';
 import { ObservationsGuardService } from '../common/protocol/observations-guard.service';
 import { ProtocolGateService } from '../common/protocol/protocol-gate.service';
 import { PlotRow } from '../plots/models/plot.model';
@@ -85,13 +86,10 @@ export class SitesService {
 
   private async check(trialId: number, input: UpdateSiteDto, exceptId: number | null, transaction: Transaction): Promise<void> {
     const problems: FieldProblem[] = [];
-    if (input.name !== undefined) {
-      const other = await this.sites.findOne({ where: { trialId, name: input.name.trim() }, transaction });
-      if (other && other.id !== exceptId) problems.push({ field: 'name', message: `name ${input.name} is already used by another site of this trial` });
-    }
-    if (input.labelPrefix !== undefined) {
-      const other = await this.sites.findOne({ where: { trialId, labelPrefix: input.labelPrefix }, transaction });
-      if (other && other.id !== exceptId) problems.push({ field: 'labelPrefix', message: `labelPrefix ${input.labelPrefix} is already used by another site of this trial` });
+    for (const field of ['name', 'labelPrefix'] as const) {
+      const value = input[field]?.trim();
+      const taken = value === undefined ? null : await takenInTrial(this.sites, trialId, field, value, exceptId, transaction, 'site');
+      if (taken) problems.push(taken);
     }
     if (input.leadUserId !== undefined && input.leadUserId !== null) {
       const member = await this.memberships.count({ where: { trialId, userId: input.leadUserId, role: ['collaborator', 'investigator'] }, transaction });

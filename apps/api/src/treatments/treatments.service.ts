@@ -6,6 +6,7 @@ import type { Transaction } from 'sequelize';
 import { ActivityService } from '../activity/activity.service';
 import { definedOnly } from '../common/defined-only';
 import type { AuthUser } from '../auth/auth-user';
+import { takenInTrial } from '../common/taken-in-trial';
 import { throwIfProblems } from '../common/exceptions/field-problems.exception';
 import { ProtocolGateService } from '../common/protocol/protocol-gate.service';
 import type { Trial } from '../trials/models/trial.model';
@@ -37,8 +38,8 @@ export class TreatmentsService {
   }
 
   private async checkCode(trialId: number, code: string, exceptId: number | null, transaction: Transaction): Promise<void> {
-    const other = await this.treatments.findOne({ where: { trialId, code }, transaction });
-    throwIfProblems(other && other.id !== exceptId ? [{ field: 'code', message: `code ${code} is already used by another treatment of this trial` }] : []);
+    const taken = await takenInTrial(this.treatments, trialId, 'code', code, exceptId, transaction, 'treatment');
+    throwIfProblems(taken ? [taken] : []);
   }
 
   async create(trialId: number, user: AuthUser, input: CreateTreatmentDto): Promise<Treatment> {
