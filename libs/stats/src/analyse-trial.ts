@@ -302,7 +302,8 @@ export function analyseTrial(request: TrialAnalysisRequest): TrialAnalysis {
   }
   const separation = separateMeans({
     treatments: labels,
-    means: means.map((entry) => entry.mean),
+    // Centred means: at 1e12 the shifted means have lost the digits their differences need.
+    means: Array.from(fit.treatmentMeans),
     covariance,
     df: comparisonDf,
     alpha,

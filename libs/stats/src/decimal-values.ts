@@ -31,6 +31,21 @@ function parseScaledInteger(text: string): ScaledInteger | null {
   return { mantissa: match[1] === '-' ? -magnitude : magnitude, scale: fraction.length };
 }
 
+/**
+ * The same as parseScaledInteger(String(value)) for doubles whose shortest text has at most 15 digits, without
+ * building the text: the smallest d with round(value·10^d)/10^d === value. A decimal of at most 15 significant
+ * digits that rounds to the double is the only one, so it is the decimal the double was written as.
+ */
+function scaledNumber(value: number): ScaledInteger | null {
+  for (let scale = 0; scale <= 15; scale++) {
+    const power = 10 ** scale;
+    const mantissa = Math.round(value * power);
+    if (Math.abs(mantissa) >= 1e15) return null;
+    if (mantissa / power === value) return { mantissa, scale };
+  }
+  return null;
+}
+
 function valueText(value: unknown, index: number): string {
   if (typeof value === 'number') {
     if (!Number.isFinite(value)) throw new StatsInputError('non-finite value', `observation ${index} is ${value}`);
@@ -65,7 +80,7 @@ function valueText(value: unknown, index: number): string {
 export function centreDecimalValues(raw: readonly (number | string)[]): CentredValues {
   if (raw.length === 0) throw new StatsInputError('too few observations', 'no values were given');
   const texts = raw.map((value, index) => valueText(value, index));
-  const scaled = texts.map(parseScaledInteger);
+  const scaled = raw.map((value, index) => (typeof value === 'number' ? scaledNumber(value) : parseScaledInteger(texts[index]!)));
   let commonScale = 0;
   for (const item of scaled) if (item && item.scale > commonScale) commonScale = item.scale;
   const power = 10 ** commonScale;
