@@ -43,11 +43,11 @@ export class SitesController {
     return this.sites.remove(access.trialId, id, user);
   }
 
-  @Post(':id/randomize')
+  @Post(':siteId/randomize')
   @HttpCode(200)
   @TrialAccess('investigator')
   @ApiConflictResponse({ description: 'The trial is locked, has fewer than two treatments, or the site has observations.' })
-  randomize(@CurrentTrialAccess() access: TrialAccessContext, @CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number, @Body() body: RandomizeSiteDto) {
-    return this.sites.randomize(access.trialId, id, user, body?.seed);
+  randomize(@CurrentTrialAccess() access: TrialAccessContext, @CurrentUser() user: AuthUser, @Param('siteId', ParseIntPipe) siteId: number, @Body() body: RandomizeSiteDto) {
+    return this.sites.randomize(access.trialId, siteId, user, body?.seed);
   }
 }
