@@ -16,7 +16,8 @@ export function PlotMap({ plots, treatments, swatches, siteName, printed }: { pl
           {blocks.map((block) => (
             <tr key={block}>
               <th scope="row" className="fr-map__block">
-                Block {block}
+                <span className="fr-map__block-word">Block </span>
+                {block}
               </th>
               {plots
                 .filter((p) => p.block === block)

@@ -31,15 +31,15 @@ export function SiteAmounts({ trial, site, amounts }: { trial: TrialDetail; site
             const total = amount?.siteTotal ?? null;
             return (
               <tr key={treatment.id}>
-                <td>
+                <td data-label="Treatment">
                   <span className="fr-code">{treatment.code}</span> {treatment.name}
                 </td>
-                <td>{formatRate(treatment.rateValue, treatment.rateUnit)}</td>
-                <td>{dose ? both(dose.grams, 'g', dose.ounces, 'oz') : <span className="fr-muted">nothing to apply</span>}</td>
-                <td>{dose ? both(dose.kilograms, 'kg', dose.pounds, 'lb') : '—'}</td>
-                {litres && <td>{dose ? both(dose.litres, 'L', dose.gallons, 'gal') : '—'}</td>}
-                <td>{amount ? formatNumber(amount.plots, 0) : '—'}</td>
-                <td>
+                <td data-label="Rate">{formatRate(treatment.rateValue, treatment.rateUnit)}</td>
+                <td data-label="Per plot (g · oz)">{dose ? both(dose.grams, 'g', dose.ounces, 'oz') : <span className="fr-muted">nothing to apply</span>}</td>
+                <td data-label="Per plot (kg · lb)">{dose ? both(dose.kilograms, 'kg', dose.pounds, 'lb') : '—'}</td>
+                {litres && <td data-label="Per plot (L · gal)">{dose ? both(dose.litres, 'L', dose.gallons, 'gal') : '—'}</td>}
+                <td data-label="Plots">{amount ? formatNumber(amount.plots, 0) : '—'}</td>
+                <td data-label="All plots at this site">
                   {total
                     ? [total.grams !== null ? formatAmount(total.grams >= 1000 ? total.grams / 1000 : total.grams, total.grams >= 1000 ? 'kg' : 'g') : null, total.litres !== null ? formatAmount(total.litres, 'L') : null]
                         .filter(Boolean)

@@ -32,7 +32,7 @@ describe('RateCalculatorPage', () => {
     expect(result().getByText('0.487 oz')).toBeInTheDocument();
     expect(result().getByText('0.03 lb')).toBeInTheDocument();
     // 4 plots × 13.80 g = 55.2 g = 0.122 lb.
-    expect(result().getByText('0.055 kg (0.122 lb)')).toBeInTheDocument();
+    expect(result().getByText('55.2 g (0.122 lb)')).toBeInTheDocument();
   });
 
   it('gives 646 g for 2 short tons per acre on a 1.2 m × 1.2 m plot, and the total with a margin', async () => {

@@ -172,7 +172,7 @@ export function RateCalculatorPage() {
                     For all {formatNumber(plots, 0)} plots{margin ? ` with ${formatNumber(margin, 1)}% extra` : ''}:{' '}
                     <strong>
                       {[
-                        total.grams !== null ? `${formatAmount(total.kilograms, 'kg')} (${formatAmount(total.pounds, 'lb')})` : null,
+                        total.grams !== null ? `${total.grams < 1000 ? formatAmount(total.grams, 'g') : formatAmount(total.kilograms, 'kg')} (${formatAmount(total.pounds, 'lb')})` : null,
                         total.litres !== null ? `${formatAmount(total.litres, 'L')} (${formatAmount(total.gallons, 'gal')})` : null,
                       ]
                         .filter(Boolean)
