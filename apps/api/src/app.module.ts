@@ -13,6 +13,7 @@ import { PlotsModule } from './plots/plots.module';
 import { RatesModule } from './rates/rates.module';
 import { RoundsModule } from './rounds/rounds.module';
 import { SitesModule } from './sites/sites.module';
+import { StatsModule } from './stats/stats.module';
 import { TreatmentsModule } from './treatments/treatments.module';
 import { AccessGuard } from './auth/guards/access.guard';
 import { JwtAuthGuard } from './auth/guards/jwt-auth.guard';
@@ -29,6 +30,9 @@ import { RemindersModule } from './reminders/reminders.module';
 import { TeamModule } from './team/team.module';
 import { TrialsModule } from './trials/trials.module';
 import { UsersModule } from './users/users.module';
+import { IntakeModule } from './intake/intake.module';
+import { LedgerModule } from './ledger/ledger.module';
+import { PhotosModule } from './photos/photos.module';
 
 @Module({
   imports: [
@@ -47,6 +51,7 @@ import { UsersModule } from './users/users.module';
     }),
     AuthModule,
     UsersModule,
+    StatsModule,
     TrialsModule,
     HealthModule,
     ActivityModule,
@@ -63,6 +68,9 @@ import { UsersModule } from './users/users.module';
     InvitationsModule,
     DevModule,
     RemindersModule,
+    IntakeModule,
+    LedgerModule,
+    PhotosModule,
   ],
   providers: [
     { provide: APP_GUARD, useClass: JwtAuthGuard },

@@ -1,0 +1,67 @@
+import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
+import { ArrayMaxSize, ArrayUnique, IsArray, IsBoolean, IsIn, IsNumber, IsOptional, IsString, Max, MaxLength, Min } from 'class-validator';
+import { IsObservationList } from './observation-list.validator';
+
+export const ANALYSIS_DESIGNS = ['crd', 'rcbd', 'factorial-rcbd', 'multisite-rcbd'] as const;
+export const TRANSFORMS = ['none', 'log', 'sqrt', 'arcsine-sqrt'] as const;
+export const SEPARATION_METHODS = ['lsd', 'tukey', 'dunnett', 'bonferroni', 'holm'] as const;
+export const MAX_OBSERVATIONS = 200_000;
+
+export class ObservationDto {
+  @ApiPropertyOptional({ example: 'CTRL' })
+  treatment?: string;
+  @ApiPropertyOptional({ example: { A: 'a1', B: 'b2' }, description: 'factorial-rcbd: the level of each factor, in place of treatment' })
+  factors?: Record<string, string>;
+  @ApiPropertyOptional({ example: '1', description: 'Block label, nested within its site.' })
+  block?: string;
+  @ApiPropertyOptional({ example: 'North' })
+  site?: string;
+  @ApiProperty({ oneOf: [{ type: 'number' }, { type: 'string' }], example: '12.3', description: 'A JSON number, or decimal text (analysed exactly).' })
+  value: number | string;
+}
+
+export class AnovaRequestDto {
+  @ApiProperty({ enum: ANALYSIS_DESIGNS })
+  @IsIn(ANALYSIS_DESIGNS, { message: `design must be one of ${ANALYSIS_DESIGNS.join(', ')}` })
+  design: (typeof ANALYSIS_DESIGNS)[number];
+
+  @ApiPropertyOptional({ default: 0.05, minimum: 0.0001, maximum: 0.5 })
+  @IsOptional()
+  @IsNumber({}, { message: 'alpha must be a number' })
+  @Min(0.0001, { message: 'alpha must be at least 0.0001' })
+  @Max(0.5, { message: 'alpha must be at most 0.5' })
+  alpha?: number;
+
+  @ApiPropertyOptional({ enum: ['random', 'fixed'], default: 'random' })
+  @IsOptional()
+  @IsIn(['random', 'fixed'], { message: 'sitesAre must be random or fixed' })
+  sitesAre?: 'random' | 'fixed';
+
+  @ApiPropertyOptional({ example: 'CTRL', description: 'The control treatment, needed for Dunnett.' })
+  @IsOptional()
+  @IsString()
+  @MaxLength(100)
+  control?: string;
+
+  @ApiPropertyOptional({ enum: TRANSFORMS, default: 'none' })
+  @IsOptional()
+  @IsIn(TRANSFORMS, { message: `transform must be one of ${TRANSFORMS.join(', ')}` })
+  transform?: (typeof TRANSFORMS)[number];
+
+  @ApiPropertyOptional({ enum: SEPARATION_METHODS, isArray: true, default: ['tukey'] })
+  @IsOptional()
+  @IsArray({ message: 'meanSeparation must be a list' })
+  @ArrayUnique({ message: 'meanSeparation must not repeat a method' })
+  @IsIn(SEPARATION_METHODS, { each: true, message: `each meanSeparation must be one of ${SEPARATION_METHODS.join(', ')}` })
+  meanSeparation?: Array<(typeof SEPARATION_METHODS)[number]>;
+
+  @ApiPropertyOptional({ default: false, description: 'Show Fisher’s LSD even when the treatment F test is not significant.' })
+  @IsOptional()
+  @IsBoolean()
+  forceLsd?: boolean;
+
+  @ApiProperty({ type: [ObservationDto] })
+  @ArrayMaxSize(MAX_OBSERVATIONS, { message: `observations must hold at most ${MAX_OBSERVATIONS} rows` })
+  @IsObservationList()
+  observations: ObservationDto[];
+}

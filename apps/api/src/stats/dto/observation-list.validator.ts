@@ -1,0 +1,56 @@
+import { registerDecorator, type ValidationArguments, type ValidationOptions } from 'class-validator';
+
+const decimalText = /^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/;
+const MAX_LABEL = 100;
+const MAX_REPORTED = 5;
+
+/** The problems of an observation list, each naming the row and field (at most a few, then a count). */
+export function observationProblems(value: unknown): string[] {
+  if (!Array.isArray(value)) return ['observations must be a list'];
+  if (value.length === 0) return ['observations must not be empty'];
+  const problems: string[] = [];
+  const label = (row: number, field: string, text: unknown) => {
+    if (text === undefined || text === null) return;
+    if (typeof text !== 'string' || text.length === 0 || text.length > MAX_LABEL) {
+      problems.push(`observations[${row}].${field} must be text of 1 to ${MAX_LABEL} characters`);
+    }
+  };
+  value.forEach((item: unknown, row) => {
+    if (problems.length > MAX_REPORTED) return;
+    if (typeof item !== 'object' || item === null || Array.isArray(item)) {
+      problems.push(`observations[${row}] must be an object`);
+      return;
+    }
+    const o = item as Record<string, unknown>;
+    for (const key of Object.keys(o)) {
+      if (!['treatment', 'factors', 'block', 'site', 'value'].includes(key)) problems.push(`observations[${row}].${key} is not a known field`);
+    }
+    label(row, 'treatment', o.treatment);
+    label(row, 'block', o.block);
+    label(row, 'site', o.site);
+    if (o.factors !== undefined) {
+      if (typeof o.factors !== 'object' || o.factors === null || Array.isArray(o.factors)) problems.push(`observations[${row}].factors must be an object of factor name to level`);
+      else for (const [name, level] of Object.entries(o.factors)) label(row, `factors.${name}`, level);
+    }
+    const v = o.value;
+    const numeric = (typeof v === 'number' && Number.isFinite(v)) || (typeof v === 'string' && decimalText.test(v.trim()));
+    if (!numeric) problems.push(`observations[${row}].value must be a finite number or a decimal string`);
+  });
+  if (problems.length > MAX_REPORTED) return [...problems.slice(0, MAX_REPORTED), `and more problems after observations[${MAX_REPORTED}]`];
+  return problems;
+}
+
+/** Checks a (possibly very long) list of observations in one pass, faster than nested DTO classes. */
+export function IsObservationList(options?: ValidationOptions) {
+  return (target: object, propertyName: string) =>
+    registerDecorator({
+      name: 'isObservationList',
+      target: target.constructor,
+      propertyName,
+      options,
+      validator: {
+        validate: (value: unknown) => observationProblems(value).length === 0,
+        defaultMessage: (args: ValidationArguments) => observationProblems(args.value).join('; '),
+      },
+    });
+}
