@@ -30,6 +30,9 @@ import { RemindersModule } from './reminders/reminders.module';
 import { TeamModule } from './team/team.module';
 import { TrialsModule } from './trials/trials.module';
 import { UsersModule } from './users/users.module';
+import { IntakeModule } from './intake/intake.module';
+import { LedgerModule } from './ledger/ledger.module';
+import { PhotosModule } from './photos/photos.module';
 
 @Module({
   imports: [
@@ -65,6 +68,9 @@ import { UsersModule } from './users/users.module';
     InvitationsModule,
     DevModule,
     RemindersModule,
+    IntakeModule,
+    LedgerModule,
+    PhotosModule,
   ],
   providers: [
     { provide: APP_GUARD, useClass: JwtAuthGuard },

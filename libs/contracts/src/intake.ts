@@ -63,6 +63,39 @@ export interface ObservationEdit {
   value: string;
   missingReason?: string | null;
   notes?: string | null;
+  /** True to keep a value outside the usual range (a warning); without it such an edit answers 422 with the warning. */
+  acceptWarnings?: boolean;
+}
+
+/** POST /api/trials/:trialId/observations — a value for a cell that has none yet. */
+export interface ObservationCreate {
+  plotId: number;
+  roundId: number;
+  measureId: number;
+  /** "12.5", ">600", "" or "NA" (missing). */
+  value: string;
+  missingReason?: string | null;
+  notes?: string | null;
+  acceptWarnings?: boolean;
+}
+
+/** 409 answer of an edit made from a stale version (or a POST for a cell that already has a value): nothing was written. */
+export interface ObservationConflict {
+  statusCode: 409;
+  error: string;
+  message: string;
+  /** The value as it is stored now, with its version. */
+  current: Observation;
+}
+
+/** GET /api/trials/:trialId/plots/:plotId/rounds/:roundId/photo answers the image; PUT answers this. */
+export interface PlotPhoto {
+  plotId: number;
+  roundId: number;
+  contentType: 'image/jpeg' | 'image/png';
+  sizeBytes: number;
+  uploadedById: number | null;
+  uploadedAt: string;
 }
 
 export interface ObservationHistoryEntry {

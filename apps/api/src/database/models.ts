@@ -12,6 +12,10 @@ import { TreatmentRow } from '../treatments/models/treatment.model';
 import { Trial } from '../trials/models/trial.model';
 import { TrialMembership } from '../trials/models/trial-membership.model';
 import { User } from '../users/models/user.model';
+import { IntakeUploadRow } from '../intake/models/intake-upload.model';
+import { ObservationChangeRow } from '../observations/models/observation-change.model';
+import { ObservationRow } from '../observations/models/observation.model';
+import { PlotPhotoRow } from '../photos/models/plot-photo.model';
 
 /** Every model, for connections made outside Nest (command line, tests). */
 export const allModels = [
@@ -29,4 +33,8 @@ export const allModels = [
   PlotRow,
   TrialInvitation,
   RoundReminder,
+  IntakeUploadRow,
+  ObservationRow,
+  ObservationChangeRow,
+  PlotPhotoRow,
 ];

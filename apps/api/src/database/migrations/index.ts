@@ -12,6 +12,10 @@ import * as createSites from './20261202090600-create-sites';
 import * as createPlots from './20261202090700-create-plots';
 import * as createInvitations from './20261203090000-create-invitations';
 import * as createRoundReminders from './20261203090100-create-round-reminders';
+import * as createIntakeUploads from './20261204090000-create-intake-uploads';
+import * as createObservations from './20261204090100-create-observations';
+import * as createObservationChanges from './20261204090200-create-observation-changes';
+import * as createPlotPhotos from './20261204090300-create-plot-photos';
 
 export interface MigrationModule {
   up(params: { context: QueryInterface }): Promise<void>;
@@ -33,4 +37,8 @@ export const migrations: ReadonlyArray<readonly [name: string, module: Migration
   ['20261202090700-create-plots', createPlots],
   ['20261203090000-create-invitations', createInvitations],
   ['20261203090100-create-round-reminders', createRoundReminders],
+  ['20261204090000-create-intake-uploads', createIntakeUploads],
+  ['20261204090100-create-observations', createObservations],
+  ['20261204090200-create-observation-changes', createObservationChanges],
+  ['20261204090300-create-plot-photos', createPlotPhotos],
 ];

@@ -1,0 +1,51 @@
+import type { IntakeResult } from '@friable/contracts';
+import { Body, Controller, HttpCode, Param, ParseIntPipe, Post, Query, UnprocessableEntityException, UploadedFile, UseInterceptors } from '@nestjs/common';
+import { ApiBody, ApiConflictResponse, ApiConsumes, ApiOkResponse, ApiPayloadTooLargeResponse, ApiTags, ApiUnprocessableEntityResponse } from '@nestjs/swagger';
+import type { AuthUser, TrialAccessContext } from '../auth/auth-user';
+import { TrialAccess } from '../common/decorators/access.decorator';
+import { CurrentTrialAccess, CurrentUser } from '../common/decorators/current-user.decorator';
+import { SingleFileUpload } from '../storage/single-file-upload.interceptor';
+import { IntakeOptionsDto, flagIsSet } from './dto/intake-options.dto';
+import { intakeConfig } from './intake.config';
+import { IntakeService } from './intake.service';
+
+@ApiTags('intake')
+@Controller('trials/:trialId/sites/:siteId/rounds/:roundId/intake')
+export class IntakeController {
+  constructor(private readonly intake: IntakeService) {}
+
+  @Post()
+  @HttpCode(200)
+  @TrialAccess('investigator', 'collaborator')
+  @UseInterceptors(SingleFileUpload({ field: 'file', configToken: intakeConfig.KEY, what: 'a CSV file' }))
+  @ApiConsumes('multipart/form-data')
+  @ApiBody({
+    schema: {
+      type: 'object',
+      required: ['file'],
+      properties: {
+        file: { type: 'string', format: 'binary', description: 'The CSV file (UTF-8; comma, semicolon or tab), as the site and round template.' },
+        acceptWarnings: { type: 'string', enum: ['true', 'false'], description: 'Keep values outside the usual range as typed.' },
+      },
+    },
+  })
+  @ApiOkResponse({ description: 'IntakeResult: what was written (or, with ?dryRun=true, what would be): new, changed and unchanged values.' })
+  @ApiUnprocessableEntityResponse({ description: 'IntakeRefusal: nothing was written; errors lists every problem by row and column (or the warnings to accept).' })
+  @ApiPayloadTooLargeResponse({ description: 'The file is larger than INTAKE_MAX_BYTES (10 MB by default).' })
+  @ApiConflictResponse({ description: 'The trial is locked, or the site is not randomized yet.' })
+  upload(
+    @CurrentTrialAccess() access: TrialAccessContext,
+    @CurrentUser() user: AuthUser,
+    @Param('siteId', ParseIntPipe) siteId: number,
+    @Param('roundId', ParseIntPipe) roundId: number,
+    @Query() query: IntakeOptionsDto,
+    @Body() body: IntakeOptionsDto,
+    @UploadedFile() file: Express.Multer.File | undefined,
+  ): Promise<IntakeResult> {
+    if (!file) throw new UnprocessableEntityException('Send the CSV file as multipart/form-data in the form field "file".');
+    return this.intake.intake(access, user, siteId, roundId, { bytes: file.buffer, fileName: file.originalname || 'upload.csv' }, {
+      dryRun: flagIsSet(query.dryRun ?? body.dryRun),
+      acceptWarnings: flagIsSet(query.acceptWarnings ?? body.acceptWarnings),
+    });
+  }
+}
