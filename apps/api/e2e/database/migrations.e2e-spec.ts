@@ -17,7 +17,13 @@ describe('migrations', () => {
   beforeAll(async () => {
     const database = process.env.FRIABLE_SCRATCH_DB ?? `${readDatabaseConfig().database}_migrations`;
     sequelize = new Sequelize(sequelizeOptions({ ...readDatabaseConfig(), database }));
-    for (const name of await tables()) await sequelize.query(`DROP TABLE IF EXISTS \`${name}\``);
+    // Leftovers of an earlier run, dropped on one connection with foreign-key checks off.
+    const leftovers = await tables();
+    await sequelize.transaction(async (transaction) => {
+      await sequelize.query('SET FOREIGN_KEY_CHECKS = 0', { transaction, type: QueryTypes.RAW });
+      for (const name of leftovers) await sequelize.query(`DROP TABLE IF EXISTS \`${name}\``, { transaction, type: QueryTypes.RAW });
+      await sequelize.query('SET FOREIGN_KEY_CHECKS = 1', { transaction, type: QueryTypes.RAW });
+    });
   });
   afterAll(() => sequelize.close());
 
