@@ -42,6 +42,8 @@ export function AppLayout() {
             variant="minimal"
             icon="log-out"
             text="Sign out"
+            aria-label="Sign out"
+            className="fr-sign-out"
             onClick={() => {
               signOut();
               navigate(paths.signIn.href());
