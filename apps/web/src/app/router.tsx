@@ -7,7 +7,7 @@ import { AppLayout } from './layouts/app-layout';
 import { TrialLayout } from './layouts/trial-layout';
 import { NotFoundRoute } from './routes/not-found';
 import { SignInRoute } from './routes/sign-in';
-import { AcceptInvitationRoute, IntakeRoute, PlotPlanRoute, ProtocolRoute, SitesRoute, TeamRoute } from './routes/trial-sections';
+import { AcceptInvitationRoute, IntakeRoute, LedgerRoute, PlotPlanRoute, ProtocolRoute, SitesRoute, TeamRoute } from './routes/trial-sections';
 import { TrialsRoute } from './routes/trials';
 
 export const routes: RouteObject[] = [
@@ -34,6 +34,7 @@ export const routes: RouteObject[] = [
           { path: paths.trialPlotPlan.path, element: <PlotPlanRoute /> },
           { path: paths.trialTeam.path, element: <TeamRoute /> },
           { path: paths.trialIntake.path, element: <IntakeRoute /> },
+          { path: paths.trialLedger.path, element: <LedgerRoute /> },
         ],
       },
       { path: paths.rateCalculator.path, element: <RateCalculatorPage /> },

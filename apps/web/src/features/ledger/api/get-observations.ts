@@ -1,0 +1,16 @@
+import type { Observation } from '@friable/contracts';
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { apiRequest } from '../../../lib/api-client';
+
+/** GET /api/trials/:trialId/observations?siteId=&roundId= — every stored value of one site and round. */
+export function getObservations(trialId: number, siteId: number, roundId: number): Promise<Observation[]> {
+  return apiRequest<Observation[]>(`/trials/${trialId}/observations?siteId=${siteId}&roundId=${roundId}`);
+}
+
+/** Under the trial's key, so an Intake commit (which invalidates the trial) reloads the Ledger too. */
+export const observationsQueryOptions = (trialId: number, siteId: number, roundId: number) =>
+  queryOptions({ queryKey: ['trials', trialId, 'observations', siteId, roundId], queryFn: () => getObservations(trialId, siteId, roundId) });
+
+export function useObservations(trialId: number, siteId: number | undefined, roundId: number | undefined) {
+  return useQuery({ ...observationsQueryOptions(trialId, siteId ?? 0, roundId ?? 0), enabled: siteId !== undefined && roundId !== undefined });
+}

@@ -1,0 +1,194 @@
+import { Button, Callout, HTMLSelect } from '@blueprintjs/core';
+import type { Measure, Observation, Plot, TrialDetail } from '@friable/contracts';
+import { useMemo, useState } from 'react';
+import { useSearchParams } from 'react-router-dom';
+import { ConfirmButton } from '../../../components/confirm-button';
+import { EmptyState, ErrorState, LoadingState } from '../../../components/states';
+import { formatNumber } from '../../../lib/format';
+import { useObservations } from '../api/get-observations';
+import { useSitePlots } from '../api/get-site-plots';
+import { useSetTrialStatus } from '../api/set-trial-status';
+import { useCellSave } from '../hooks/use-cell-save';
+import { CellPanel } from './cell-panel';
+import { ConflictDialog } from './conflict-dialog';
+import { HistoryDrawer } from './history-drawer';
+import { ledgerAccess } from './ledger-access';
+import { cellKey, ledgerModel } from './ledger-cells';
+import { LedgerGrid } from './ledger-grid';
+import { LedgerLegend } from './ledger-legend';
+import { measureHeading } from './measure-heading';
+import { PhotoDialog } from './photo-dialog';
+
+/** Ledger: per site and round, every plot's values in an editable grid, with history, photos and the trial lock. */
+export function LedgerPage({ trial }: { trial: TrialDetail }) {
+  const [params, setParams] = useSearchParams();
+  const rounds = useMemo(() => [...trial.rounds].sort((a, b) => a.dayOffset - b.dayOffset), [trial.rounds]);
+  const mySite = trial.sites.find((s) => trial.mySiteIds.includes(s.id));
+  const site = trial.sites.find((s) => s.id === Number(params.get('site'))) ?? mySite ?? trial.sites[0];
+  const round = rounds.find((r) => r.id === Number(params.get('round'))) ?? rounds[0];
+  const plots = useSitePlots(trial.id, site?.randomizedAt ? site.id : undefined);
+  const observations = useObservations(trial.id, site?.randomizedAt ? site.id : undefined, round?.id);
+  const access = ledgerAccess(trial, site?.id);
+  const cells = useCellSave(trial.id, site?.id ?? 0, round?.id ?? 0);
+  const lock = useSetTrialStatus(trial.id);
+  const [focused, setFocused] = useState<{ plot: Plot; measure: Measure } | null>(null);
+  const [historyOf, setHistoryOf] = useState<Observation | null>(null);
+  const [photoOf, setPhotoOf] = useState<Plot | null>(null);
+
+  if (!site) return <EmptyState title="No sites yet" description="Once the investigator adds and randomizes a site, its values are kept here." />;
+  if (!round) return <EmptyState title="No assessment rounds yet" description="The protocol needs at least one round before values can be kept." />;
+  const measures = trial.measures.filter((m) => round.measureIds.includes(m.id));
+  const model = ledgerModel(plots.data ?? [], observations.data ?? [], measures);
+  const investigator = trial.myRoles.includes('investigator');
+
+  function pick(next: { site?: number; round?: number }) {
+    setParams({ site: String(next.site ?? site!.id), round: String(next.round ?? round!.id) }, { replace: true });
+    setFocused(null);
+  }
+
+  function edit(plot: Plot, measure: Measure, text: string, extra: { missingReason?: string | null; notes?: string | null } = {}) {
+    const seen = model.values.get(cellKey(plot.id, measure.id));
+    void cells.saveCell(
+      { plotId: plot.id, plotLabel: plot.label, measureId: measure.id, measureName: measureHeading(measure), seen },
+      { value: text, missingReason: extra.missingReason ?? seen?.missingReason ?? null, notes: extra.notes ?? seen?.notes ?? null },
+    );
+  }
+
+  const refusedCells = [...cells.refusals.entries()];
+  const focusedKey = focused ? cellKey(focused.plot.id, focused.measure.id) : null;
+
+  return (
+    <div className="fr-ledger">
+      <div className="fr-ledger__bar">
+        <label className="fr-site-picker">
+          <span>Site</span>
+          <HTMLSelect aria-label="Site" value={site.id} onChange={(event) => pick({ site: Number(event.target.value) })}>
+            {trial.sites.map((s) => (
+              <option key={s.id} value={s.id}>
+                {s.name}
+                {trial.mySiteIds.includes(s.id) ? ' (your site)' : ''}
+              </option>
+            ))}
+          </HTMLSelect>
+        </label>
+        <label className="fr-site-picker">
+          <span>Round</span>
+          <HTMLSelect aria-label="Round" value={round.id} onChange={(event) => pick({ round: Number(event.target.value) })}>
+            {rounds.map((r) => (
+              <option key={r.id} value={r.id}>
+                {r.label}
+              </option>
+            ))}
+          </HTMLSelect>
+        </label>
+        {investigator && trial.status === 'active' && (
+          <ConfirmButton
+            text="Lock the trial"
+            confirmText="Lock"
+            intent="warning"
+            loading={lock.isPending}
+            question="Lock the trial for analysis? Nobody can change its protocol or values until you unlock it."
+            onConfirm={() => lock.mutate('locked')}
+          />
+        )}
+        {investigator && trial.status === 'locked' && <Button icon="unlock" text="Unlock the trial" loading={lock.isPending} onClick={() => lock.mutate('active')} />}
+      </div>
+      {lock.error && (
+        <Callout intent="danger" compact role="alert">
+          {lock.error.message}
+        </Callout>
+      )}
+      {access.reason && (
+        <Callout intent={trial.status === 'locked' ? 'warning' : 'none'} icon={trial.status === 'locked' ? 'lock' : 'eye-open'} className="fr-readonly-notice" compact>
+          {access.reason}
+        </Callout>
+      )}
+
+      {!site.randomizedAt ? (
+        <Callout icon="random" intent="primary">
+          {site.name} is not randomized yet; its plots, and so its values, come once it is.
+        </Callout>
+      ) : plots.isPending || observations.isPending ? (
+        <LoadingState what="the Ledger" />
+      ) : plots.isError || observations.isError ? (
+        <ErrorState
+          title="The Ledger could not be loaded"
+          error={plots.error ?? observations.error}
+          onRetry={() => {
+            void plots.refetch();
+            void observations.refetch();
+          }}
+        />
+      ) : (
+        <>
+          <p className="fr-muted fr-small">
+            {site.name} · {round.label} · {formatNumber(observations.data.length, 0)} of {formatNumber(model.rows.length * model.columns.length, 0)} values recorded.
+            {access.canEdit && ' Double-click a cell (or press Enter) to type, Enter to save; choose a cell to see its notes and history.'}
+          </p>
+          <LedgerLegend />
+          <LedgerGrid
+            rows={model.rows}
+            columns={model.columns}
+            values={model.values}
+            refusals={cells.refusals}
+            savingKey={cells.savingKey}
+            editable={access.canEdit}
+            onEdit={(plot, measure, text) => edit(plot, measure, text)}
+            onFocus={(plot, measure) => setFocused(plot && measure ? { plot, measure } : null)}
+            onPhoto={setPhotoOf}
+          />
+          {refusedCells.length > 0 && (
+            <Callout intent="danger" icon="error" role="alert" className="fr-gap" title="Not saved">
+              <ul>
+                {refusedCells.map(([key, refusal]) => {
+                  const [plotId, measureId] = key.split(':').map(Number);
+                  const plot = model.rows.find((p) => p.id === plotId);
+                  const measure = model.columns.find((m) => m.id === measureId);
+                  return (
+                    <li key={key}>
+                      {plot?.label} · {measure ? measureHeading(measure) : ''}: “{refusal.text}” — {refusal.message}
+                      {refusal.warning && plot && measure && (
+                        <Button
+                          size="small"
+                          className="fr-ledger-keep"
+                          text="Keep this unusual value"
+                          onClick={() =>
+                            void cells.keepUnusual(
+                              { plotId: plot.id, plotLabel: plot.label, measureId: measure.id, measureName: measureHeading(measure), seen: model.values.get(key) },
+                              refusal,
+                            )
+                          }
+                        />
+                      )}
+                    </li>
+                  );
+                })}
+              </ul>
+            </Callout>
+          )}
+          {focused && focusedKey && (
+            <CellPanel
+              key={`${focusedKey}:${model.values.get(focusedKey)?.version ?? 0}`}
+              plot={focused.plot}
+              measure={focused.measure}
+              observation={model.values.get(focusedKey)}
+              refusal={cells.refusals.get(focusedKey)}
+              editable={access.canEdit}
+              saving={cells.savingKey === focusedKey}
+              onSave={({ value, missingReason, notes }) => edit(focused.plot, focused.measure, value, { missingReason, notes })}
+              onHistory={setHistoryOf}
+            />
+          )}
+        </>
+      )}
+      <ConflictDialog conflict={cells.conflict} onKeepMine={cells.keepMine} onTakeCurrent={cells.takeCurrent} />
+      <HistoryDrawer
+        trialId={trial.id}
+        observationId={historyOf?.id ?? null}
+        title={historyOf ? `History of ${historyOf.plotLabel} · ${historyOf.measureCode}` : 'History'}
+        onClose={() => setHistoryOf(null)}
+      />
+      <PhotoDialog trialId={trial.id} roundId={round.id} roundLabel={round.label} plot={photoOf} canEdit={access.canEdit} onClose={() => setPhotoOf(null)} />
+    </div>
+  );
+}
