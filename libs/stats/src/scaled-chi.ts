@@ -44,7 +44,7 @@ export function expectOverScaledChi(
   const upper = 1 + spread;
   const features =
     featureArgument > 0 ? [1, 3, 8].map((multiple) => multiple / featureArgument) : [];
-  const breakpoints = panelBreakpoints(lower, upper, 4, features);
+  const breakpoints = panelBreakpoints(lower, upper, 2, features);
   return integrateOverPanels((s) => density(s) * g(s), breakpoints, absoluteTolerance);
 }
 

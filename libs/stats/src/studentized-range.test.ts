@@ -57,6 +57,15 @@ describe('studentizedRangeCdf', () => {
     );
     // R 4.2.2: integrate(function(x) 20*dnorm(x)*(pnorm(x)-pnorm(x-3.2))^19, -Inf, Inf, rel.tol=1e-13) = 0.239542640375854
     expect(studentizedRangeCdf(3.2, 20, Infinity)).toBeCloseTo(0.239542640375854, 12);
+    // Many groups, finite df (the tabulated range path). R 4.2.2, nested integrate():
+    //   k <- 35; df <- 68; Rw <- function(w) integrate(function(x) k*dnorm(x)*(pnorm(x)-pnorm(x-w))^(k-1), -Inf, Inf,
+    //   rel.tol=1e-12, abs.tol=1e-15)$value; fs <- function(s) 2*(df/2)^(df/2)*s^(df-1)*exp(-df*s^2/2)/gamma(df/2);
+    //   integrate(function(s) sapply(s, function(si) fs(si)*Rw(q*si)), 0, 3, rel.tol=1e-11, abs.tol=1e-14)
+    //   gives 0.0344789250085 (q = 3) and 0.6510305538896 (q = 4.5); R's ptukey gives 0.0344791181558818 and
+    //   0.651030546685183, within its 1e-6.
+    expect(studentizedRangeCdf(3, 35, 68)).toBeCloseTo(0.0344789250085, 11);
+    expect(studentizedRangeCdf(4.5, 35, 68)).toBeCloseTo(0.6510305538896, 11);
+    expect(Math.abs(studentizedRangeCdf(3, 35, 68) - 0.0344791181558818)).toBeLessThan(1e-6);
   });
 
   it('is 0 at and below 0, 1 at Infinity, and rejects bad groups or df', () => {
@@ -142,6 +151,12 @@ describe('studentizedRangeQuantile', () => {
     expect(studentizedRangeQuantile(0.95, 4, 9)).toBeCloseTo(4.41489, 5);
     expect(studentizedRangeQuantile(0.95, 3, 27)).toBeCloseTo(3.506426, 5);
     expect(studentizedRangeQuantile(0.95, 6, 15)).toBeCloseTo(4.594735, 5);
+  });
+
+  it('is quick enough for hundreds of Tukey p-values (35 treatments, 595 pairs)', () => {
+    const started = Date.now();
+    for (let pair = 0; pair < 595; pair++) studentizedRangeCdf(1 + pair * 0.01, 35, 68);
+    expect(Date.now() - started).toBeLessThan(4000); // about 0.1 s on a laptop
   });
 
   it('inverts the cdf', () => {
