@@ -14,6 +14,7 @@ import { Trial } from '../trials/models/trial.model';
 import { TrialMembership } from '../trials/models/trial-membership.model';
 import { TrialsService } from '../trials/trials.service';
 import { User } from '../users/models/user.model';
+import { DemoObservationsService } from './demo-observations';
 import { loadDemoScenario } from './demo-scenario';
 
 interface DemoProtocol {
@@ -50,6 +51,7 @@ export class DemoLoaderService {
     private readonly measures: MeasuresService,
     private readonly rounds: RoundsService,
     private readonly sites: SitesService,
+    private readonly observations: DemoObservationsService,
   ) {}
 
   async load(password: string): Promise<{ created: number; protocols: string[] }> {
@@ -57,6 +59,7 @@ export class DemoLoaderService {
     const plans = (JSON.parse(readFileSync(demoProtocolFile, 'utf8')) as { trials: DemoProtocol[] }).trials;
     const protocols: string[] = [];
     for (const plan of plans) if (await this.loadProtocol(plan)) protocols.push(plan.code);
+    await this.observations.fill('FW-CLAY-26');
     return { created, protocols };
   }
 
