@@ -15,7 +15,7 @@ export function IntakeChanges({ result }: { result: IntakeResult }) {
         <strong>{formatNumber(result.unchanged, 0)}</strong> unchanged values {verb} saved.
       </p>
       {moving.length > 0 && (
-        <div className="fr-table-scroll">
+        <div className="fr-table-scroll fr-intake-changes">
           <HTMLTable compact striped aria-label={result.dryRun ? 'Values this upload would write' : 'Values this upload wrote'}>
             <thead>
               <tr>

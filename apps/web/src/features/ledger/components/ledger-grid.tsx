@@ -70,7 +70,7 @@ export function LedgerGrid({
         onFocusedCell={focus}
         cellRendererDependencies={[values, refusals, savingKey, editable, rows, columns]}
         defaultRowHeight={30}
-        columnWidths={[150, 64, 96, ...columns.map(() => 132)]}
+        columnWidths={[130, 60, 90, ...columns.map(() => 170)]}
         getCellClipboardData={(row, col) => (col < fixedColumns ? '' : cellText(values.get(cellKey(rows[row]!.id, columns[col - fixedColumns]!.id))))}
       >
         {[
