@@ -5,7 +5,7 @@ import type { AuthUser, TrialAccessContext } from '../auth/auth-user';
 import { TrialAccess } from '../common/decorators/access.decorator';
 import { CurrentTrialAccess, CurrentUser } from '../common/decorators/current-user.decorator';
 import { SingleFileUpload } from '../storage/single-file-upload.interceptor';
-import { IntakeOptionsDto, flagIsSet } from './dto/intake-options.dto';
+import { IntakeOptionsDto, flagIsSet, readMapping } from './dto/intake-options.dto';
 import { intakeConfig } from './intake.config';
 import { IntakeService } from './intake.service';
 
@@ -43,9 +43,14 @@ export class IntakeController {
     @UploadedFile() file: Express.Multer.File | undefined,
   ): Promise<IntakeResult> {
     if (!file) throw new UnprocessableEntityException('Send the CSV file as multipart/form-data in the form field "file".');
+    const mapping = readMapping(body.mapping);
+    if (typeof mapping === 'string') {
+      throw new UnprocessableEntityException({ statusCode: 422, error: 'Unprocessable Entity', message: `Please correct: ${mapping}.`, errors: [{ field: 'mapping', message: mapping }] });
+    }
     return this.intake.intake(access, user, siteId, roundId, { bytes: file.buffer, fileName: file.originalname || 'upload.csv' }, {
       dryRun: flagIsSet(query.dryRun ?? body.dryRun),
       acceptWarnings: flagIsSet(query.acceptWarnings ?? body.acceptWarnings),
+      columnOverrides: mapping,
     });
   }
 }

@@ -45,6 +45,8 @@ export interface IntakeUpload {
 export interface IntakeOptions {
   dryRun: boolean;
   acceptWarnings: boolean;
+  /** From the mapping step: column header → role, measure code, or null to ignore the column. */
+  columnOverrides?: Readonly<Record<string, string | null>>;
   /** False to send no receipt e-mail (the demo loader); true by default. */
   receipt?: boolean;
 }
@@ -110,7 +112,7 @@ export class IntakeService {
   ) {}
 
   async intake(access: TrialAccessContext, user: AuthUser, siteId: number, roundId: number, upload: IntakeUpload, options: IntakeOptions): Promise<IntakeResult> {
-    const prepared = await this.prepare(access, siteId, roundId, upload);
+    const prepared = await this.prepare(access, siteId, roundId, upload, options.columnOverrides ?? {});
     if (options.dryRun) return this.dryRun(prepared);
     const valueWarnings = valueWarningsOf(prepared);
     if (valueWarnings.length > 0 && !options.acceptWarnings) {
@@ -124,7 +126,13 @@ export class IntakeService {
     return result;
   }
 
-  private async prepare(access: TrialAccessContext, siteId: number, roundId: number, upload: IntakeUpload): Promise<PreparedIntake> {
+  private async prepare(
+    access: TrialAccessContext,
+    siteId: number,
+    roundId: number,
+    upload: IntakeUpload,
+    columnOverrides: Readonly<Record<string, string | null>>,
+  ): Promise<PreparedIntake> {
     const site = await this.sites.findOne({ where: { id: siteId, trialId: access.trialId } });
     if (!site) throw new NotFoundException('No such site in this trial.');
     assertMayWriteSite(access, site.id, site.name);
@@ -135,7 +143,7 @@ export class IntakeService {
     const measures = (round.measures ?? []).map(presentMeasure).sort((a, b) => a.position - b.position || a.id - b.id);
     const file = this.readFile(upload.bytes);
     const { sitePlots, trialPlotLabels } = await this.plotPlan(trial.id, site);
-    const mapping = mapColumns(file.headers, measures);
+    const mapping = mapColumns(file.headers, measures, columnOverrides);
     const validation = validateIntake({ file, mapping, sitePlots, trialPlotLabels, roundMeasures: measures, siteName: site.name });
     const errors = [...validation.errors, ...this.storageProblems(validation.values, mapping, measures)];
     if (errors.length > 0) {
