@@ -320,6 +320,7 @@ export function analyseTrial(request: TrialAnalysisRequest): TrialAnalysis {
   let bartlett: { statistic: number; p: number } | null = null;
   if (request.design === 'multisite-rcbd') {
     bartlett = siteBartlett(layout);
+    if (!bartlett) warnings.push("Bartlett's test of the per-site error variances was skipped: a site has no error degrees of freedom of its own.");
     if (bartlett && bartlett.p < 0.05) {
       warnings.push(
         `Error variances differ across sites (Bartlett's K² = ${bartlett.statistic.toPrecision(4)}, p = ${formatP(bartlett.p)}), so pooling the error across sites may mislead; look at each site's analysis too.`,

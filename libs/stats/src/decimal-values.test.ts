@@ -101,6 +101,17 @@ describe('NIST StRD one-way ANOVA through the decimal-text path', () => {
     }
   }
 
+  it('SmLs09 given as JSON numbers (read through their shortest text) reaches the same digits', () => {
+    const rows = smLsRows(2001, '1000000000000.').map((row) => ({ treatment: row.treatment, value: String(Number(row.value)) }));
+    const numeric = rows.map((row) => ({ treatment: row.treatment, value: Number(row.value) }));
+    const { layout } = prepareTrialLayout('crd', numeric, numeric.map((row) => row.value));
+    const fit = fitTrialDesign(layout);
+    // Certified SmLs09 (NIST header, STATISTICS.md A.2): between SS 160.08, within SS 180.
+    expect(agreeingDigits(fit.rows[0]!.ss, 160.08)).toBeGreaterThanOrEqual(12);
+    expect(agreeingDigits(fit.residualSs, 180)).toBeGreaterThanOrEqual(12);
+    expect(rows).toHaveLength(18009);
+  });
+
   const folder = path.join(referenceFolder, 'nist-anova');
   const files = ['SiRstv', 'SmLs01', 'SmLs02', 'SmLs03', 'AtmWtAg', 'SmLs04', 'SmLs05', 'SmLs06', 'SmLs07', 'SmLs08', 'SmLs09'];
   for (const name of files) {
