@@ -60,3 +60,4 @@ export interface HealthReport {
 export * from './protocol';
 export * from './team';
 export * from './intake';
+export * from './findings';

@@ -1,0 +1,353 @@
+// Findings (the analysis of one measure and round), saved analyses with review, exports and the report.
+import type { AssessmentRound, Measure, MeasureKind, Site, TrialDetail } from './protocol';
+
+export const ANALYSIS_DESIGNS = ['crd', 'rcbd', 'factorial-rcbd', 'multisite-rcbd'] as const;
+export type AnalysisDesign = (typeof ANALYSIS_DESIGNS)[number];
+
+export const ANALYSIS_TRANSFORMS = ['none', 'log', 'sqrt', 'arcsine-sqrt'] as const;
+export type AnalysisTransform = (typeof ANALYSIS_TRANSFORMS)[number];
+
+export const SEPARATION_METHODS = ['lsd', 'tukey', 'dunnett', 'bonferroni', 'holm'] as const;
+export type SeparationMethod = (typeof SEPARATION_METHODS)[number];
+/** Methods that give letters (Dunnett compares with the control only). */
+export type LetterMethod = Exclude<SeparationMethod, 'dunnett'>;
+
+// ---------------------------------------------------------------- POST /api/stats/anova
+
+/** One row of the ANOVA table; ms, f and p are null where the term is not tested. */
+export interface AnovaTableRow {
+  /** 'block', 'treatment', 'site', 'block:site', 'site:treatment', factor names and 'A:B', 'error', 'total'. */
+  term: string;
+  df: number;
+  ss: number;
+  ms: number | null;
+  f: number | null;
+  p: number | null;
+}
+
+export interface AnovaSummary {
+  n: number;
+  grandMean: number;
+  /** Coefficient of variation, % (100 × root MSE / grand mean). */
+  cv: number;
+  rootMse: number;
+  errorDf: number;
+}
+
+/** A least-squares mean of a treatment (or factor level). */
+export interface LsMean {
+  treatment: string;
+  n: number;
+  mean: number;
+  se: number;
+  /** With a transform: the mean back on the original scale. */
+  backTransformedMean?: number;
+}
+
+/** One comparison of two means: diff = mean a − mean b; p unadjusted for LSD, adjusted otherwise. */
+export interface MeanPair {
+  a: string;
+  b: string;
+  diff: number;
+  se: number;
+  lower: number;
+  upper: number;
+  p: number;
+  significant: boolean;
+}
+
+export interface MethodComparisonSet {
+  /** On the scale of diff/se: t (LSD), q/√2 (Tukey), Dunnett's d, Bonferroni t; null for Holm. */
+  critical: number | null;
+  /** critical × se when every pair has the same se, else null. */
+  leastSignificantDifference: number | null;
+  pairs: MeanPair[];
+}
+
+export interface ResidualPoint {
+  /** Index of the observation in the list given to the engine (Findings: context.observations). */
+  index: number;
+  fitted: number;
+  residual: number;
+  standardized: number;
+  /** |standardized| > 3. */
+  flagged: boolean;
+}
+
+/** The answer of POST /api/stats/anova, exactly as the engine gives it. */
+export interface AnovaAnswer {
+  anova: AnovaTableRow[];
+  summary: AnovaSummary;
+  means: LsMean[];
+  /** Factorial only: LS means of each factor's levels, by factor name. */
+  factorMeans?: Record<string, LsMean[]>;
+  comparisons: Partial<Record<SeparationMethod, MethodComparisonSet>>;
+  /** Per method, treatment → compact letters ("a", "ab", …). */
+  letters: Partial<Record<LetterMethod, Record<string, string>>>;
+  diagnostics: {
+    /** Null outside 3..5000 residuals. */
+    shapiroWilk: { w: number; p: number } | null;
+    /** Null when a treatment has a single plot. */
+    brownForsythe: { f: number; p: number } | null;
+    /** Multisite only: Bartlett's test of the per-site error variances. */
+    bartlett?: { statistic: number; p: number };
+    residuals: ResidualPoint[];
+  };
+  /** Plain sentences from the engine (not significant, few error df, single plot, unequal site variances, transform). */
+  warnings: string[];
+}
+
+/** POST /api/stats/friedman and /api/stats/kruskal answers. */
+export interface RankTestAnswer {
+  statistic: number;
+  df: number;
+  p: number;
+  /** Friedman only. */
+  blocksUsed?: number;
+  droppedBlocks?: string[];
+}
+
+// ---------------------------------------------------------------- GET /api/trials/:trialId/findings
+
+/** Query of GET /api/trials/:trialId/findings (numbers as query text). */
+export interface FindingsQuery {
+  measureId: number;
+  roundId: number;
+  /** Absent = all sites combined. */
+  siteId?: number;
+  /** Default 'random' (matters only with several sites combined). */
+  sitesAre?: 'random' | 'fixed';
+  /** Default 'none'. */
+  transform?: AnalysisTransform;
+  /** Default 'tukey'. */
+  method?: SeparationMethod;
+  /** Default 0.05. */
+  alpha?: number;
+  /** Compute Fisher's LSD even when the treatment F test is not significant. */
+  forceLsd?: boolean;
+}
+
+/** The choices as the server resolved them (defaults filled in). */
+export interface FindingsChoices {
+  measureId: number;
+  roundId: number;
+  siteId: number | null;
+  sitesAre: 'random' | 'fixed';
+  transform: AnalysisTransform;
+  method: SeparationMethod;
+  alpha: number;
+  forceLsd: boolean;
+}
+
+/** One observation as given to the engine, in the engine's order (residual index = position here). */
+export interface FindingsObservationRow {
+  observationId: number;
+  plotLabel: string;
+  siteName: string;
+  block: number;
+  /** Treatment code (the label the engine sees). */
+  treatment: string;
+  /** The stored decimal text (censored values: the cut-off value). */
+  value: string;
+  censored: boolean;
+}
+
+/** A treatment's mean as a percentage of the control's mean. */
+export interface PercentOfControl {
+  treatment: string;
+  /** mean / control mean × 100; null without a control or when the control mean is 0. */
+  percent: number | null;
+}
+
+/** One step of the "share of plots not yet drained at time t" curve (right-continuous). */
+export interface NotDrainedStep {
+  /** Time in the measure's unit. */
+  time: number;
+  /** Share in [0, 1] of the treatment's plots not yet drained at this time (after events at it). */
+  share: number;
+  /** Plots still at risk just before this time. */
+  atRisk: number;
+  /** Plots that drained at exactly this time. */
+  events: number;
+}
+
+export interface NotDrainedCurve {
+  treatment: string;
+  plots: number;
+  /** Plots not drained by the cut-off. */
+  censored: number;
+  /** Starts with {time: 0, share: 1}; one step per distinct observed drain time. */
+  steps: NotDrainedStep[];
+}
+
+export interface MeansOverTimePoint {
+  roundId: number;
+  roundLabel: string;
+  dayOffset: number;
+  /** LS means of the same measure and scope at that round (same choices); empty with an unavailable note. */
+  means: LsMean[];
+  /** Why a round with data could not be analysed (the engine's sentence). */
+  unavailable?: string;
+}
+
+/** The rank test beside the ANOVA: Friedman (blocks; several sites: blocks = site × block), else Kruskal–Wallis. */
+export interface FindingsRankTest extends RankTestAnswer {
+  test: 'friedman' | 'kruskal-wallis';
+  /** Null when the rank test could not run (with the reason). */
+  unavailable?: string;
+}
+
+export interface FindingsContext {
+  trialId: number;
+  trialCode: string;
+  choices: FindingsChoices;
+  /** The exact options given to the engine beside the observations (POST /api/stats/anova body without observations). */
+  engineRequest: {
+    design: AnalysisDesign;
+    alpha: number;
+    sitesAre?: 'random' | 'fixed';
+    control?: string;
+    transform: AnalysisTransform;
+    meanSeparation: SeparationMethod[];
+    forceLsd: boolean;
+  };
+  measure: { id: number; code: string; name: string; unit: string; kind: MeasureKind; higherIsBetter: boolean; cutoff: number | null; decimals: number };
+  round: { id: number; label: string; dayOffset: number };
+  scope: { siteId: number | null; siteName: string | null; /** 'one site' or 'all sites combined'. */ label: string; siteNames: string[] };
+  observations: FindingsObservationRow[];
+  censored: { count: number; cutoff: number | null };
+  missing: { count: number; reasons: Array<{ reason: string; count: number }> };
+  /** Code of the control treatment, null without one. */
+  controlCode: string | null;
+  percentOfControl: PercentOfControl[];
+  rankTest: FindingsRankTest;
+  /** Time-with-cutoff measures only. */
+  notDrained?: NotDrainedCurve[];
+  meansOverTime: MeansOverTimePoint[];
+  /** Plain sentences the engine cannot know (censoring), shown beside the engine's warnings. */
+  notices: string[];
+  /** SHA-256 (hex) of the canonical JSON of the observations sent to the engine. */
+  dataHash: string;
+  engineVersion: string;
+}
+
+/** GET /api/trials/:trialId/findings: the same body as POST /api/stats/anova, plus context. */
+export type Findings = AnovaAnswer & { context: FindingsContext };
+
+// ---------------------------------------------------------------- saved analyses (snapshots)
+
+/** POST /api/trials/:trialId/analyses body: the choices to save (analysed now, then frozen). */
+export interface AnalysisSnapshotCreate extends FindingsQuery {
+  title: string;
+}
+
+export interface AnalysisSnapshotSummary {
+  id: number;
+  trialId: number;
+  title: string;
+  choices: FindingsChoices;
+  measureName: string;
+  roundLabel: string;
+  scopeLabel: string;
+  dataHash: string;
+  engineVersion: string;
+  createdById: number | null;
+  createdBy: string | null;
+  createdAt: string;
+  signedOffAt: string | null;
+  signedOffById: number | null;
+  signedOffBy: string | null;
+  commentCount: number;
+}
+
+/** GET /api/trials/:trialId/analyses/:analysisId — the stored result, never recomputed. */
+export interface AnalysisSnapshot extends AnalysisSnapshotSummary {
+  result: Findings;
+  /** True when the current data's hash differs from dataHash. */
+  dataChanged: boolean;
+  currentDataHash: string | null;
+}
+
+export interface SnapshotComment {
+  id: number;
+  analysisId: number;
+  body: string;
+  authorId: number | null;
+  authorName: string | null;
+  createdAt: string;
+}
+
+/** POST /api/trials/:trialId/analyses/:analysisId/comments body. */
+export interface SnapshotCommentCreate {
+  body: string;
+}
+
+// ---------------------------------------------------------------- exports
+
+/** Columns of GET /api/trials/:trialId/export.csv, in order (one row per plot × round × measure). */
+export const EXPORT_CSV_COLUMNS = [
+  'trial',
+  'site',
+  'block',
+  'plot_label',
+  'treatment',
+  'round',
+  'measure',
+  'unit',
+  'value',
+  'censored',
+  'censor_limit',
+  'missing_reason',
+  'notes',
+  'recorded_by',
+  'recorded_at',
+] as const;
+export type ExportCsvColumn = (typeof EXPORT_CSV_COLUMNS)[number];
+
+/** GET /api/trials/:trialId/export-dictionary.csv has the columns column, meaning, type. */
+export interface DataDictionaryRow {
+  column: ExportCsvColumn;
+  meaning: string;
+  type: string;
+}
+
+/** Sheets of GET /api/trials/:trialId/export.xlsx: Protocol, Plot plans, Data, then one per saved analysis ("Analysis <id>"). */
+export const EXPORT_SHEETS = ['Protocol', 'Plot plans', 'Data', 'Dictionary'] as const;
+
+// ---------------------------------------------------------------- report
+
+export interface ReportMean extends LsMean {
+  letters: string | null;
+  percentOfControl: number | null;
+}
+
+export interface ReportMeasure {
+  measure: Measure;
+  /** Latest round with data for the measure; null when it has none yet. */
+  round: Pick<AssessmentRound, 'id' | 'label' | 'dayOffset'> | null;
+  /** All sites combined. */
+  scopeLabel: string;
+  method: SeparationMethod;
+  alpha: number;
+  anova: AnovaTableRow[] | null;
+  summary: AnovaSummary | null;
+  means: ReportMean[];
+  rankTest: FindingsRankTest | null;
+  /** Engine warnings and notices of this measure. */
+  warnings: string[];
+  /** Why there is no analysis (no data yet, or the engine's sentence). */
+  unavailable: string | null;
+}
+
+/** GET /api/trials/:trialId/report — everything the printable report page needs. */
+export interface TrialReport {
+  generatedAt: string;
+  engineVersion: string;
+  protocol: Omit<TrialDetail, 'myRoles' | 'mySiteIds' | 'activation'>;
+  sites: Site[];
+  measures: ReportMeasure[];
+  /** Every caution of the report, each sentence naming its measure. */
+  cautions: string[];
+  /** A short plain paragraph on what the statistics do and do not show. */
+  explanation: string;
+}
