@@ -20,7 +20,7 @@ export interface BartlettResult {
  *
  * @throws StatsInputError (a RangeError) for fewer than 2 variances, unequal lengths,
  *   a variance that is not positive or a df that is not positive.
- * @example bartlettFromVariances([0.56533125, 0.31768398], [8, 8]) // { statistic: 0.6, df: 1, p: 0.44 } (approx.)
+ * @example bartlettFromVariances([0.56533125, 0.31768398], [8, 8]) // { statistic: 0.6168, df: 1, p: 0.4322 } (Gomez wet/dry seasons, STATISTICS.md B.11)
  */
 export function bartlettFromVariances(variances: readonly number[], dfs: readonly number[]): BartlettResult {
   if (variances.length !== dfs.length) {
@@ -54,7 +54,7 @@ export function bartlettFromVariances(variances: readonly number[], dfs: readonl
  * bartlettFromVariances): each group's sample variance on n − 1 df.
  * @throws StatsInputError (a RangeError) for fewer than 2 groups, a group with fewer
  *   than 2 values, a non-finite value, or a group with zero variance.
- * @example bartlett([[1, 2, 3], [2, 4, 6]]) // { statistic: 0.9618, df: 1, p: 0.3268 } (approx.)
+ * @example bartlett([[1, 2, 3], [2, 4, 6]]) // { statistic: 0.7141, df: 1, p: 0.3981 } (R: bartlett.test(list(1:3, c(2, 4, 6))))
  */
 export function bartlett(groups: readonly (readonly number[])[]): BartlettResult {
   const variances: number[] = [];

@@ -65,7 +65,7 @@ function countLambdas(lambdas: readonly number[]): Map<number, number> {
  * p-values is only good to about 1e-3 by default (abseps = 0.001).
  *
  * @throws StatsInputError (a RangeError) for an empty lambdas, |λ| ≥ 1 or df < 1.
- * @example dunnettProbability(2.3335384, [Math.SQRT1_2, Math.SQRT1_2], 27) // 0.95 (PlantGrowth, STATISTICS.md C.2)
+ * @example dunnettProbability(2.3335384, [Math.SQRT1_2, Math.SQRT1_2], 27) // 0.9500136 (PlantGrowth, STATISTICS.md C.2)
  */
 export function dunnettProbability(c: number, lambdas: readonly number[], df: number): number {
   checkArguments('dunnettProbability', lambdas, df);
@@ -92,7 +92,7 @@ export function dunnettPValue(t: number, lambdas: readonly number[], df: number)
  * Two-sided Dunnett critical value: the c with dunnettProbability(c, lambdas, df) =
  * 1 − alpha, found by Brent's method to 1e-9.
  * @throws StatsInputError (a RangeError) when alpha is not in (0, 1), and as dunnettProbability.
- * @example dunnettQuantile(0.05, [Math.SQRT1_2, Math.SQRT1_2, Math.SQRT1_2], 16) // 2.59367 (Montgomery's d0.05(3, 16) = 2.59)
+ * @example dunnettQuantile(0.05, [Math.SQRT1_2, Math.SQRT1_2, Math.SQRT1_2], 16) // 2.59232 (Montgomery's table: d0.05(3, 16) = 2.59)
  */
 export function dunnettQuantile(alpha: number, lambdas: readonly number[], df: number): number {
   checkArguments('dunnettQuantile', lambdas, df);
@@ -106,7 +106,12 @@ export function dunnettQuantile(alpha: number, lambdas: readonly number[], df: n
   return findIncreasingRoot(shortfall, lower, upper * (1 + 1e-9), 1e-9);
 }
 
-/** Two-sided critical value of t (the normal one for infinite df). */
+/**
+ * Two-sided critical value of Student's t, t(1 − α/2; df), or of the normal for infinite df:
+ * the bracket ends of the Dunnett and studentized-range quantile searches.
+ * @throws never; NaN outside 0 < alpha < 1.
+ * @example twoSidedCriticalT(0.05, Infinity) // 1.959963984540054
+ */
 export function twoSidedCriticalT(alpha: number, df: number): number {
   return df === Infinity ? -jStat.normal.inv(alpha / 2, 0, 1) : studentTQuantile(1 - alpha / 2, df);
 }

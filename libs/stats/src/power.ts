@@ -59,7 +59,8 @@ function requirePlannerInputs(caller: string, input: Omit<RcbdPowerInput, 'block
  *
  * @throws StatsInputError (a RangeError) for treatments or blocks < 2 or not integers,
  *   sites < 1, cv or difference not positive, alpha outside (0, 1).
- * @example rcbdPower({ treatments: 3 + 1, blocks: 4, cv: 15, difference: 10, alpha: 0.05 }) // power 0.0877 (4 blocks is far too few)
+ * @example rcbdPower({ treatments: 4, blocks: 4, cv: 15, difference: 10, alpha: 0.05 })
+ *   // { power: 0.0877, noncentrality: 0.8889, df1: 3, df2: 9 } (4 blocks are far too few)
  */
 export function rcbdPower(input: RcbdPowerInput): RcbdPowerResult {
   requirePlannerInputs('rcbdPower', input);
