@@ -1,4 +1,5 @@
 import { jStat } from 'jstat';
+import { TableCache, tabulateChebyshev } from './chebyshev-table';
 import { StatsInputError } from './errors';
 import { integrateOverPanels, panelBreakpoints } from './quadrature';
 import { studentTQuantile } from './distributions';
@@ -43,6 +44,21 @@ function normalManyToOneProbability(h: number, lambdaCounts: ReadonlyMap<number,
   return Math.min(1, 2 * integrateOverPanels(integrand, panelBreakpoints(0, 9, 3), integrationTolerance));
 }
 
+// The normal probability for one set of λ is tabulated once over 0 ≤ h < 9 (see
+// tabulateChebyshev): the quantile search and each comparison's p-value reuse it.
+// Beyond 9 it is computed directly (1 − P is below 1e-15 per comparison there).
+const tabulatedLimit = 9;
+const manyToOneTables = new TableCache(32);
+
+function tabulatedManyToOneProbability(lambdaCounts: ReadonlyMap<number, number>): (h: number) => number {
+  const key = [...lambdaCounts].map(([lambda, count]) => `${lambda}x${count}`).sort().join(',');
+  const table = manyToOneTables.get(key, () =>
+    tabulateChebyshev((h) => normalManyToOneProbability(h, lambdaCounts), tabulatedLimit),
+  );
+  return (h) =>
+    h <= 0 ? 0 : h >= tabulatedLimit ? normalManyToOneProbability(h, lambdaCounts) : Math.min(1, Math.max(0, table(h)));
+}
+
 /** How many comparisons share each λ (equal replication gives one entry, so the cost does not grow with p). */
 function countLambdas(lambdas: readonly number[]): Map<number, number> {
   const counts = new Map<number, number>();
@@ -59,7 +75,8 @@ function countLambdas(lambdas: readonly number[]): Map<number, number> {
  *
  * Computed by numerical integration, not a table (Dunnett 1955, JASA 50:1096–1121,
  * eq. 2): the normal probability conditional on a shared standard normal, averaged
- * over the distribution of s/σ, both by adaptive Gauss–Kronrod quadrature with
+ * over the distribution of s/σ (the normal probability tabulated once per set of
+ * λ as Chebyshev interpolants), both by adaptive Gauss–Kronrod quadrature with
  * requested absolute error 1e-10. Against exact bivariate values of mvtnorm::pmvt it
  * agrees to 1e-12; the randomized Genz–Bretz integration behind R's multcomp
  * p-values is only good to about 1e-3 by default (abseps = 0.001).
@@ -73,7 +90,9 @@ export function dunnettProbability(c: number, lambdas: readonly number[], df: nu
   if (c <= 0) return 0;
   if (c === Infinity) return 1;
   const lambdaCounts = countLambdas(lambdas);
-  const probability = expectOverScaledChi((s) => normalManyToOneProbability(c * s, lambdaCounts), df, c, integrationTolerance);
+  if (df === Infinity) return normalManyToOneProbability(c, lambdaCounts);
+  const normalProbability = tabulatedManyToOneProbability(lambdaCounts);
+  const probability = expectOverScaledChi((s) => normalProbability(c * s), df, c, integrationTolerance);
   return Math.min(1, Math.max(0, probability));
 }
 

@@ -1,4 +1,5 @@
 import { jStat } from 'jstat';
+import { TableCache, tabulateChebyshev } from './chebyshev-table';
 import { StatsInputError } from './errors';
 import { integrateOverPanels, panelBreakpoints } from './quadrature';
 import { twoSidedCriticalT } from './dunnett';
@@ -33,54 +34,16 @@ function normalRangeCdf(w: number, groups: number): number {
   return Math.min(1, leading + 2 * groups * integral);
 }
 
-// The normal-range cdf R(w) for one number of groups is tabulated once, as Chebyshev
-// interpolants of degree 13 on panels of width 1/8 over 0 ≤ w ≤ 18 (Press et al.,
-// Numerical Recipes, 3rd ed., §5.8), because the studentized range integrates R(q·s)
-// over s for every q: a trial with many treatments asks for hundreds of Tukey p-values.
+// R(w) for one number of groups is tabulated once (see tabulateChebyshev) over
+// 0 ≤ w < 18; beyond, it is computed directly (it is 1 to within 1e-15 there).
 const tabulatedRangeLimit = 18;
-const panelsPerUnit = 8;
-const chebyshevOrder = 14;
-const tabulatedByGroups = new Map<number, Float64Array>();
+const rangeTables = new TableCache(32);
 
-function chebyshevCoefficients(groups: number): Float64Array {
-  const cached = tabulatedByGroups.get(groups);
-  if (cached) return cached;
-  const panelCount = tabulatedRangeLimit * panelsPerUnit;
-  const coefficients = new Float64Array(panelCount * chebyshevOrder);
-  const values = new Float64Array(chebyshevOrder);
-  for (let panel = 0; panel < panelCount; panel++) {
-    const centre = (panel + 0.5) / panelsPerUnit;
-    const halfWidth = 0.5 / panelsPerUnit;
-    for (let j = 0; j < chebyshevOrder; j++) {
-      const node = Math.cos((Math.PI * (j + 0.5)) / chebyshevOrder);
-      values[j] = normalRangeCdf(centre + halfWidth * node, groups);
-    }
-    for (let m = 0; m < chebyshevOrder; m++) {
-      let sum = 0;
-      for (let j = 0; j < chebyshevOrder; j++) sum += values[j] * Math.cos((Math.PI * m * (j + 0.5)) / chebyshevOrder);
-      coefficients[panel * chebyshevOrder + m] = (2 / chebyshevOrder) * sum;
-    }
-  }
-  if (tabulatedByGroups.size >= 32) tabulatedByGroups.clear();
-  tabulatedByGroups.set(groups, coefficients);
-  return coefficients;
-}
-
-/** R(w) from the tabulated interpolants (Clenshaw's recurrence); direct beyond the table. */
-function tabulatedNormalRangeCdf(w: number, groups: number, coefficients: Float64Array): number {
-  if (w <= 0) return 0;
-  if (w >= tabulatedRangeLimit) return normalRangeCdf(w, groups);
-  const panel = Math.min(Math.floor(w * panelsPerUnit), tabulatedRangeLimit * panelsPerUnit - 1);
-  const x = 2 * (w * panelsPerUnit - panel) - 1;
-  const offset = panel * chebyshevOrder;
-  let next = 0;
-  let current = 0;
-  for (let m = chebyshevOrder - 1; m >= 1; m--) {
-    const previous = current;
-    current = 2 * x * current - next + coefficients[offset + m];
-    next = previous;
-  }
-  return Math.min(1, Math.max(0, x * current - next + 0.5 * coefficients[offset]));
+function tabulatedNormalRangeCdf(groups: number): (w: number) => number {
+  const table = rangeTables.get(String(groups), () =>
+    tabulateChebyshev((w) => normalRangeCdf(w, groups), tabulatedRangeLimit),
+  );
+  return (w) => (w <= 0 ? 0 : w >= tabulatedRangeLimit ? normalRangeCdf(w, groups) : Math.min(1, Math.max(0, table(w))));
 }
 
 function checkArguments(caller: string, groups: number, df: number): void {
@@ -115,13 +78,8 @@ export function studentizedRangeCdf(q: number, groups: number, df: number): numb
   if (q <= 0) return 0;
   if (q === Infinity) return 1;
   if (df === Infinity) return normalRangeCdf(q, groups);
-  const coefficients = chebyshevCoefficients(groups);
-  const probability = expectOverScaledChi(
-    (s) => tabulatedNormalRangeCdf(q * s, groups, coefficients),
-    df,
-    q,
-    integrationTolerance,
-  );
+  const rangeCdf = tabulatedNormalRangeCdf(groups);
+  const probability = expectOverScaledChi((s) => rangeCdf(q * s), df, q, integrationTolerance);
   return Math.min(1, Math.max(0, probability));
 }
 
