@@ -2,7 +2,7 @@
 #   Rscript generate-r-fixtures.R cases.json results.json
 # For every case: anova(lm(...)) with terms in Friable's order, emmeans least-squares means (blocks nested
 # in sites), emmeans pairs with Tukey and unadjusted p, and multcomp glht Dunnett (single-step, vs the
-# first treatment). Values arrive centred (value - centre); means are shifted back by centre.
+# first treatment), and rstandard() residuals. Values arrive centred (value - centre); means are shifted back by centre.
 suppressPackageStartupMessages({ library(jsonlite); library(emmeans); library(multcomp) })
 args <- commandArgs(trailingOnly = TRUE)
 cases <- fromJSON(args[1], simplifyVector = FALSE)
@@ -75,7 +75,8 @@ analyse <- function(case) {
   dunnett_rows <- lapply(seq_along(dunnett$test$tstat), function(i) list(a = labels[i + 1], b = labels[1],
     t = unname(dunnett$test$tstat[i]), p = unname(dunnett$test$pvalues[i])))
   list(anova = anova_rows, randomSites = random_tests, means = means, factorMeans = factor_means,
-       tukey = pair_rows("tukey"), unadjusted = pair_rows("none"), dunnett = dunnett_rows)
+       tukey = pair_rows("tukey"), unadjusted = pair_rows("none"), dunnett = dunnett_rows,
+       standardizedResiduals = unname(rstandard(m)))
 }
 
 results <- lapply(cases, analyse)

@@ -55,8 +55,8 @@ export interface ResidualDiagnostic {
   readonly index: number;
   readonly fitted: number;
   readonly residual: number;
-  /** residual / √(MSE·(1 − leverage)), as R's rstandard. */
-  readonly standardized: number;
+  /** residual / √(MSE·(1 − leverage)), as R's rstandard; null for a plot with leverage 1 (its residual is 0 by construction). */
+  readonly standardized: number | null;
   /** |standardized| > 3. */
   readonly flagged: boolean;
 }
@@ -182,8 +182,8 @@ function residualDiagnostics(fit: DesignFit, mse: number, centre: number): Resid
   for (let i = 0; i < fit.residuals.length; i++) {
     const scale = Math.sqrt(mse * (1 - fit.leverage[i]!));
     const residual = fit.residuals[i]!;
-    const standardized = scale > 0 && 1 - fit.leverage[i]! > 1e-10 ? residual / scale : 0;
-    out[i] = Object.freeze({ index: i, fitted: fit.fitted[i]! + centre, residual, standardized, flagged: Math.abs(standardized) > 3 });
+    const standardized = scale > 0 && 1 - fit.leverage[i]! > 1e-10 ? residual / scale : null;
+    out[i] = Object.freeze({ index: i, fitted: fit.fitted[i]! + centre, residual, standardized, flagged: standardized !== null && Math.abs(standardized) > 3 });
   }
   return out;
 }

@@ -12,7 +12,7 @@ vi.setConfig({ testTimeout: 300_000 });
 // Expected values: datasets/reference/r-anova-fixtures.json, made by libs/stats/scripts/generate-r-fixtures.mjs
 // (R 4.2.2: anova(lm(...)) with terms in order — keep.order for the multisite model —, emmeans 1.8.4.1
 // least-squares means with blocks nested in sites, pairs(emm, adjust = "tukey" / "none"), and multcomp 1.4.22
-// summary(as.glht(contrast(emm, "trt.vs.ctrl", ref = 1))) for Dunnett).
+// summary(as.glht(contrast(emm, "trt.vs.ctrl", ref = 1))) for Dunnett, rstandard() for standardized residuals).
 // Tolerances (task brief): SS and F 1e-9 relative; p-values 1e-6 absolute; Dunnett p 2e-3 absolute (R's
 // mvtnorm integration is randomized); means and SEs 1e-9 relative.
 interface RRow {
@@ -44,6 +44,8 @@ interface RCase {
     tukey: RPair[];
     unadjusted: RPair[];
     dunnett: { a: string; b: string; t: number; p: number }[];
+    /** 'NaN' where the leverage is 1. */
+    standardizedResiduals: (number | 'NaN')[];
   };
 }
 
@@ -122,6 +124,13 @@ describe.skipIf(!fixture)('agreement with R on random trial layouts', () => {
         const pair = fixed.comparisons.dunnett!.pairs.find((candidate) => candidate.a === rPair.a)!;
         expect(Math.abs(pair.diff / pair.se - rPair.t) / Math.max(1, Math.abs(rPair.t)), `Dunnett t ${rPair.a}`).toBeLessThan(1e-9);
         expect(Math.abs(pair.p - rPair.p), `Dunnett p ${rPair.a}`).toBeLessThan(2e-3);
+      });
+
+      // rstandard(): residual / √(MSE·(1 − h)); compared to 1e-7 absolute (they are of order 1).
+      entry.expected.standardizedResiduals.forEach((value, i) => {
+        const standardized = fixed.diagnostics.residuals[i]!.standardized;
+        if (value === 'NaN') expect(standardized, `standardized residual ${i} (leverage 1)`).toBeNull();
+        else expect(Math.abs(standardized! - value), `standardized residual ${i}`).toBeLessThan(1e-7);
       });
 
       if (entry.design === 'multisite-rcbd') {
