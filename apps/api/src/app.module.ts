@@ -33,6 +33,7 @@ import { UsersModule } from './users/users.module';
 import { IntakeModule } from './intake/intake.module';
 import { LedgerModule } from './ledger/ledger.module';
 import { PhotosModule } from './photos/photos.module';
+import { FindingsModule } from './findings/findings.module';
 
 @Module({
   imports: [
@@ -71,6 +72,7 @@ import { PhotosModule } from './photos/photos.module';
     IntakeModule,
     LedgerModule,
     PhotosModule,
+    FindingsModule,
   ],
   providers: [
     { provide: APP_GUARD, useClass: JwtAuthGuard },

@@ -191,9 +191,12 @@ export interface MeansOverTimePoint {
 }
 
 /** The rank test beside the ANOVA: Friedman (blocks; several sites: blocks = site × block), else Kruskal–Wallis. */
-export interface FindingsRankTest extends RankTestAnswer {
+export interface FindingsRankTest extends Omit<RankTestAnswer, 'statistic' | 'df' | 'p'> {
   test: 'friedman' | 'kruskal-wallis';
-  /** Null when the rank test could not run (with the reason). */
+  /** statistic, df and p are null when the rank test could not run (unavailable says why). */
+  statistic: number | null;
+  df: number | null;
+  p: number | null;
   unavailable?: string;
 }
 

@@ -1,0 +1,57 @@
+import { ANALYSIS_TRANSFORMS, SEPARATION_METHODS, type AnalysisTransform, type SeparationMethod } from '@friable/contracts';
+import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
+import { Transform, Type } from 'class-transformer';
+import { IsBoolean, IsIn, IsInt, IsNumber, IsOptional, Max, Min } from 'class-validator';
+
+const booleanText = ({ value }: { value: unknown }) => (value === 'true' || value === true ? true : value === 'false' || value === false ? false : value);
+
+/** GET /api/trials/:trialId/findings — the choices of one analysis (query text). */
+export class FindingsQueryDto {
+  @ApiProperty({ description: 'The measure to analyse.' })
+  @Type(() => Number)
+  @IsInt({ message: 'measureId must be a whole number' })
+  @Min(1, { message: 'measureId must be a whole number' })
+  measureId: number;
+
+  @ApiProperty({ description: 'The assessment round to analyse.' })
+  @Type(() => Number)
+  @IsInt({ message: 'roundId must be a whole number' })
+  @Min(1, { message: 'roundId must be a whole number' })
+  roundId: number;
+
+  @ApiPropertyOptional({ description: 'One site; leave out for all sites combined.' })
+  @IsOptional()
+  @Type(() => Number)
+  @IsInt({ message: 'siteId must be a whole number' })
+  @Min(1, { message: 'siteId must be a whole number' })
+  siteId?: number;
+
+  @ApiPropertyOptional({ enum: ['random', 'fixed'], default: 'random', description: 'With all sites combined: random tests treatment against site × treatment.' })
+  @IsOptional()
+  @IsIn(['random', 'fixed'], { message: 'sitesAre must be random or fixed' })
+  sitesAre?: 'random' | 'fixed';
+
+  @ApiPropertyOptional({ enum: ANALYSIS_TRANSFORMS, default: 'none' })
+  @IsOptional()
+  @IsIn(ANALYSIS_TRANSFORMS, { message: `transform must be one of ${ANALYSIS_TRANSFORMS.join(', ')}` })
+  transform?: AnalysisTransform;
+
+  @ApiPropertyOptional({ enum: SEPARATION_METHODS, default: 'tukey', description: 'Mean separation method.' })
+  @IsOptional()
+  @IsIn(SEPARATION_METHODS, { message: `method must be one of ${SEPARATION_METHODS.join(', ')}` })
+  method?: SeparationMethod;
+
+  @ApiPropertyOptional({ default: 0.05, minimum: 0.0001, maximum: 0.5 })
+  @IsOptional()
+  @Type(() => Number)
+  @IsNumber({}, { message: 'alpha must be a number' })
+  @Min(0.0001, { message: 'alpha must be at least 0.0001' })
+  @Max(0.5, { message: 'alpha must be at most 0.5' })
+  alpha?: number;
+
+  @ApiPropertyOptional({ default: false, description: 'Compute Fisher’s LSD even when the treatment F test is not significant.' })
+  @IsOptional()
+  @Transform(booleanText)
+  @IsBoolean({ message: 'forceLsd must be true or false' })
+  forceLsd?: boolean;
+}

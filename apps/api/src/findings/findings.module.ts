@@ -1,0 +1,15 @@
+import { Module } from '@nestjs/common';
+import { ObservationsModule } from '../observations/observations.module';
+import { StatsModule } from '../stats/stats.module';
+import { TrialsModule } from '../trials/trials.module';
+import { FindingsController } from './findings.controller';
+import { FindingsService } from './findings.service';
+
+/** Findings: one measure's analysis from the stored data, through the same engine as /api/stats. */
+@Module({
+  imports: [TrialsModule, ObservationsModule, StatsModule],
+  controllers: [FindingsController],
+  providers: [FindingsService],
+  exports: [FindingsService],
+})
+export class FindingsModule {}

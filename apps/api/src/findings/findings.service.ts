@@ -1,0 +1,270 @@
+import type {
+  AnalysisDesign,
+  AnovaAnswer,
+  Findings,
+  FindingsChoices,
+  FindingsContext,
+  FindingsObservationRow,
+  FindingsRankTest,
+  MeansOverTimePoint,
+  Observation,
+  TrialDetail,
+} from '@friable/contracts';
+import { Injectable, UnprocessableEntityException } from '@nestjs/common';
+import { InjectConnection } from '@nestjs/sequelize';
+import { QueryTypes } from 'sequelize';
+import type { Sequelize } from 'sequelize-typescript';
+import { ObservationQueryService } from '../observations/observation-query.service';
+import type { AnovaRequestDto, ObservationDto } from '../stats/dto/anova-request.dto';
+import { StatsService } from '../stats/stats.service';
+import { TrialsService } from '../trials/trials.service';
+import { canonicalHash } from './canonical-hash';
+import type { FindingsQueryDto } from './dto/findings-query.dto';
+import { engineVersion } from './engine-version';
+import { notDrainedCurves } from './not-drained-curve';
+
+/** The observations of one measure, round and scope, shaped for the engine, with what the context needs. */
+interface PreparedData {
+  design: AnalysisDesign;
+  engineObservations: ObservationDto[];
+  rows: FindingsObservationRow[];
+  missing: Observation[];
+  notRecorded: number;
+  controlLabel: string | null;
+  treatmentOrder: string[];
+  siteNames: string[];
+}
+
+function refuse(message: string): never {
+  throw new UnprocessableEntityException({ statusCode: 422, error: 'Unprocessable Entity', message });
+}
+
+function resolveChoices(query: FindingsQueryDto): FindingsChoices {
+  return {
+    measureId: query.measureId,
+    roundId: query.roundId,
+    siteId: query.siteId ?? null,
+    sitesAre: query.sitesAre ?? 'random',
+    transform: query.transform ?? 'none',
+    method: query.method ?? 'tukey',
+    alpha: query.alpha ?? 0.05,
+    forceLsd: query.forceLsd ?? false,
+  };
+}
+
+const plainCopy = <T>(value: T): T => JSON.parse(JSON.stringify(value)) as T;
+
+/**
+ * Findings — the analysis of one measure at one round for one site or all sites combined, computed by
+ * libs/stats through StatsService exactly as POST /api/stats/anova would compute it from the stored decimal
+ * text, plus the context the pages need (observations in engine order, censoring, missing values, % of
+ * control, the rank test, the not-drained curve, the means over time).
+ * Throws: 422 (UnprocessableEntityException) for an unknown measure, round or site, no data, or a request the
+ * engine refuses (its sentence).
+ */
+@Injectable()
+export class FindingsService {
+  constructor(
+    @InjectConnection() private readonly sequelize: Sequelize,
+    private readonly trials: TrialsService,
+    private readonly observations: ObservationQueryService,
+    private readonly stats: StatsService,
+  ) {}
+
+  /** The protocol of a trial, read without a caller's roles. */
+  protocol(trialId: number): Promise<TrialDetail> {
+    return this.trials.get({ trialId, roles: [], siteIds: [], adminReadOnly: false });
+  }
+
+  async findings(trialId: number, query: FindingsQueryDto, protocol?: TrialDetail): Promise<Findings> {
+    const trial = protocol ?? (await this.protocol(trialId));
+    const choices = resolveChoices(query);
+    const measure = trial.measures.find((m) => m.id === choices.measureId) ?? refuse(`measureId ${choices.measureId} is not a measure of this trial.`);
+    const round = trial.rounds.find((r) => r.id === choices.roundId) ?? refuse(`roundId ${choices.roundId} is not an assessment round of this trial.`);
+    const site = choices.siteId === null ? null : (trial.sites.find((s) => s.id === choices.siteId) ?? refuse(`siteId ${choices.siteId} is not a site of this trial.`));
+    const data = await this.prepare(trial, choices, choices.roundId);
+    const scopeLabel = site ? site.name : 'all sites combined';
+    if (data.engineObservations.length === 0) refuse(`There are no values of ${measure.name} in ${round.label} at ${scopeLabel} yet.`);
+    const request = this.engineRequest(data, choices);
+    const analysis = plainCopy(this.stats.anova({ ...request, observations: data.engineObservations })) as AnovaAnswer;
+
+    const controlMean = data.controlLabel === null ? undefined : analysis.means.find((m) => m.treatment === data.controlLabel);
+    const shown = (m: { mean: number; backTransformedMean?: number }) => m.backTransformedMean ?? m.mean;
+    const percentOfControl = analysis.means.map((m) => ({
+      treatment: m.treatment,
+      percent: controlMean && shown(controlMean) !== 0 ? (shown(m) / shown(controlMean)) * 100 : null,
+    }));
+    const censoredCount = data.rows.filter((r) => r.censored).length;
+    const notices: string[] = [];
+    if (censoredCount > 0) {
+      notices.push(
+        `${censoredCount} ${censoredCount === 1 ? 'plot was' : 'plots were'} not drained by the cut-off (${measure.cutoff ?? ''} ${measure.unit}): the ANOVA analyses ${censoredCount === 1 ? 'it' : 'them'} at the cut-off value, which understates the real time, while the rank test beside it assumes no value, only that they rank last.`,
+      );
+    }
+    const missingCount = data.missing.length + data.notRecorded;
+    if (missingCount > 0) notices.push(`${missingCount} ${missingCount === 1 ? 'value is' : 'values are'} missing and left out of the analysis.`);
+    const reasons = new Map<string, number>();
+    for (const o of data.missing) reasons.set(o.missingReason ?? 'no reason given', (reasons.get(o.missingReason ?? 'no reason given') ?? 0) + 1);
+    if (data.notRecorded > 0) reasons.set('not recorded', data.notRecorded);
+
+    const context: FindingsContext = {
+      trialId: trial.id,
+      trialCode: trial.code,
+      choices,
+      engineRequest: request,
+      measure: {
+        id: measure.id,
+        code: measure.code,
+        name: measure.name,
+        unit: measure.unit,
+        kind: measure.kind,
+        higherIsBetter: measure.higherIsBetter,
+        cutoff: measure.cutoff,
+        decimals: measure.decimals,
+      },
+      round: { id: round.id, label: round.label, dayOffset: round.dayOffset },
+      scope: { siteId: site?.id ?? null, siteName: site?.name ?? null, label: scopeLabel, siteNames: data.siteNames },
+      observations: data.rows,
+      censored: { count: censoredCount, cutoff: measure.cutoff },
+      missing: { count: missingCount, reasons: [...reasons].map(([reason, count]) => ({ reason, count })) },
+      controlCode: data.controlLabel,
+      percentOfControl,
+      rankTest: this.rankTest(data),
+      ...(measure.kind === 'time-with-cutoff'
+        ? { notDrained: notDrainedCurves(data.rows.map((r, i) => ({ treatment: data.engineObservations[i]!.treatment ?? r.treatment, time: Number(r.value), censored: r.censored })), data.treatmentOrder) }
+        : {}),
+      meansOverTime: await this.meansOverTime(trial, choices, analysis),
+      notices,
+      dataHash: canonicalHash(data.engineObservations),
+      engineVersion: engineVersion(),
+    };
+    return { ...analysis, context };
+  }
+
+  /** The hash of the data the choices would analyse now (null when there are none). */
+  async currentDataHash(trialId: number, choices: FindingsChoices): Promise<string | null> {
+    const trial = await this.protocol(trialId);
+    const data = await this.prepare(trial, choices, choices.roundId);
+    return data.engineObservations.length === 0 ? null : canonicalHash(data.engineObservations);
+  }
+
+  private engineRequest(data: PreparedData, choices: FindingsChoices): FindingsContext['engineRequest'] {
+    return {
+      design: data.design,
+      alpha: choices.alpha,
+      ...(data.design === 'multisite-rcbd' ? { sitesAre: choices.sitesAre } : {}),
+      ...(data.controlLabel !== null ? { control: data.controlLabel } : {}),
+      transform: choices.transform,
+      meanSeparation: [choices.method],
+      forceLsd: choices.forceLsd,
+    };
+  }
+
+  private async prepare(trial: TrialDetail, choices: FindingsChoices, roundId: number): Promise<PreparedData> {
+    const all = await this.observations.list(trial.id, { roundId, measureId: choices.measureId, ...(choices.siteId !== null ? { siteId: choices.siteId } : {}) });
+    const valued = all.filter((o) => o.valueText !== null);
+    const missing = all.filter((o) => o.valueText === null);
+    const siteNames = [...new Set(valued.map((o) => o.siteName))];
+    const factorial = trial.design === 'factorial-rcbd' && trial.factors.length === 2;
+    let design: AnalysisDesign;
+    if (siteNames.length > 1) {
+      if (trial.design === 'crd') refuse('Sites can be combined only for blocked designs; choose one site for a completely randomized trial.');
+      design = 'multisite-rcbd';
+    } else {
+      design = trial.design === 'factorial-rcbd' && !factorial ? 'rcbd' : trial.design;
+    }
+    const factorsOf = new Map<string, Record<string, string>>();
+    if (design === 'factorial-rcbd') {
+      const levelCode = new Map(trial.factors.flatMap((f) => f.levels.map((l) => [l.id, { factor: f.name, code: l.code }] as const)));
+      for (const t of trial.treatments) {
+        const levels = t.factorLevelIds.map((id) => levelCode.get(id)).filter((l) => l !== undefined);
+        factorsOf.set(t.code, Object.fromEntries(levels.map((l) => [l.factor, l.code])));
+      }
+    }
+    const engineLabel = (code: string) => {
+      const factors = factorsOf.get(code);
+      return factors ? trial.factors.map((f) => factors[f.name] ?? '?').join(' × ') : code;
+    };
+    const engineObservations: ObservationDto[] = valued.map((o) => {
+      const base = design === 'factorial-rcbd' ? { factors: factorsOf.get(o.treatmentCode) ?? {} } : { treatment: o.treatmentCode };
+      return {
+        ...base,
+        ...(design === 'crd' ? {} : { block: String(o.block) }),
+        ...(design === 'multisite-rcbd' ? { site: o.siteName } : {}),
+        value: o.valueText!,
+      };
+    });
+    const rows = valued.map((o) => ({
+      observationId: o.id,
+      plotLabel: o.plotLabel,
+      siteName: o.siteName,
+      block: o.block,
+      treatment: o.treatmentCode,
+      value: o.valueText!,
+      censored: o.censored,
+    }));
+    const control = trial.treatments.find((t) => t.isControl);
+    const controlLabel = control && valued.some((o) => o.treatmentCode === control.code) ? engineLabel(control.code) : null;
+    const plotCount = await this.plotCount(trial.id, choices.siteId);
+    return {
+      design,
+      engineObservations,
+      rows,
+      missing,
+      notRecorded: Math.max(0, plotCount - all.length),
+      controlLabel,
+      treatmentOrder: trial.treatments.map((t) => engineLabel(t.code)),
+      siteNames,
+    };
+  }
+
+  private async plotCount(trialId: number, siteId: number | null): Promise<number> {
+    const [row] = await this.sequelize.query<{ n: number }>(
+      `SELECT COUNT(*) AS n FROM plots p JOIN sites s ON s.id = p.site_id WHERE s.trial_id = :trialId${siteId === null ? '' : ' AND p.site_id = :siteId'}`,
+      { replacements: { trialId, siteId }, type: QueryTypes.SELECT },
+    );
+    return Number(row?.n ?? 0);
+  }
+
+  private rankTest(data: PreparedData): FindingsRankTest {
+    const blocked = data.design !== 'crd';
+    const test = blocked ? 'friedman' : 'kruskal-wallis';
+    const observations = data.engineObservations.map((o, i) => ({
+      treatment: o.treatment ?? data.rows[i]!.treatment,
+      ...(blocked ? { block: o.block } : {}),
+      ...(o.site !== undefined ? { site: o.site } : {}),
+      value: o.value,
+    }));
+    try {
+      const result = blocked ? this.stats.friedman({ observations }) : this.stats.kruskal({ observations });
+      return { test, ...plainCopy(result) };
+    } catch (error) {
+      if (error instanceof UnprocessableEntityException) {
+        return { test, statistic: null, df: null, p: null, unavailable: (error.getResponse() as { message: string }).message };
+      }
+      throw error;
+    }
+  }
+
+  private async meansOverTime(trial: TrialDetail, choices: FindingsChoices, current: AnovaAnswer): Promise<MeansOverTimePoint[]> {
+    const points: MeansOverTimePoint[] = [];
+    const rounds = [...trial.rounds].sort((a, b) => a.dayOffset - b.dayOffset || a.id - b.id);
+    for (const round of rounds) {
+      const point = { roundId: round.id, roundLabel: round.label, dayOffset: round.dayOffset };
+      if (round.id === choices.roundId) {
+        points.push({ ...point, means: current.means });
+        continue;
+      }
+      const data = await this.prepare(trial, choices, round.id);
+      if (data.engineObservations.length === 0) continue;
+      try {
+        const analysis = this.stats.anova({ ...this.engineRequest(data, choices), observations: data.engineObservations } as AnovaRequestDto);
+        points.push({ ...point, means: plainCopy(analysis.means) as AnovaAnswer['means'] });
+      } catch (error) {
+        if (!(error instanceof UnprocessableEntityException)) throw error;
+        points.push({ ...point, means: [], unavailable: (error.getResponse() as { message: string }).message });
+      }
+    }
+    return points;
+  }
+}
