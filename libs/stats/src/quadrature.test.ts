@@ -1,7 +1,5 @@
 import { describe, expect, it } from 'vitest';
 import { gaussLegendreRule, integrateOverPanels, panelBreakpoints } from './quadrature';
-import { findIncreasingRoot, findRoot } from './root-finding';
-import { expectOverScaledChi } from './scaled-chi';
 
 describe('gaussLegendreRule', () => {
   it('has the textbook 2- and 3-point nodes and weights', () => {
@@ -41,41 +39,5 @@ describe('integrateOverPanels', () => {
 
   it('rejects decreasing breakpoints', () => {
     expect(() => integrateOverPanels(Math.exp, [1, 0], 1e-9)).toThrow(RangeError);
-  });
-});
-
-describe('findRoot', () => {
-  it('finds sqrt(2) and cos(x) = x', () => {
-    expect(findRoot((x) => x * x - 2, 0, 2, 1e-14)).toBeCloseTo(Math.SQRT2, 13);
-    expect(findRoot((x) => Math.cos(x) - x, 0, 1, 1e-14)).toBeCloseTo(0.7390851332151607, 13); // Dottie number
-  });
-
-  it('widens a bracket that misses the root of an increasing function', () => {
-    expect(findIncreasingRoot((x) => x * x * x - 27, 0.5, 1, 1e-13)).toBeCloseTo(3, 12);
-    expect(findIncreasingRoot((x) => x - 0.01, 1, 2, 1e-14)).toBeCloseTo(0.01, 13);
-  });
-
-  it('rejects an interval without a sign change', () => {
-    expect(() => findRoot((x) => x * x + 1, -1, 1, 1e-9)).toThrow(RangeError);
-  });
-});
-
-describe('expectOverScaledChi', () => {
-  it('integrates the density of S to 1 and gives E[S²] = 1', () => {
-    for (const df of [1, 2, 5, 30, 1000, 1e6]) {
-      expect(expectOverScaledChi(() => 1, df, 1, 1e-13)).toBeCloseTo(1, 11);
-      expect(expectOverScaledChi((s) => s * s, df, 1, 1e-13)).toBeCloseTo(1, 11);
-    }
-  });
-
-  it('gives the t distribution: E[Φ(c S)] = P(T ≤ c)', async () => {
-    const { jStat } = await import('jstat');
-    // Student's t with 4 df: P(T ≤ 2) = 0.9419417, R 4.2.2: pt(2, 4) = 0.941941738242.
-    const value = expectOverScaledChi((s) => jStat.normal.cdf(2 * s, 0, 1), 4, 2, 1e-13);
-    expect(value).toBeCloseTo(0.9419417382, 9);
-  });
-
-  it('reduces to g(1) for infinite df', () => {
-    expect(expectOverScaledChi((s) => s + 1, Infinity, 1, 1e-9)).toBe(2);
   });
 });
