@@ -6,6 +6,7 @@ import { RateCalculatorPage } from '../features/rates/components/rate-calculator
 import { AppLayout } from './layouts/app-layout';
 import { TrialLayout } from './layouts/trial-layout';
 import { NotFoundRoute } from './routes/not-found';
+import { PlannerRoute } from './routes/planner';
 import { SignInRoute } from './routes/sign-in';
 import { AcceptInvitationRoute, IntakeRoute, LedgerRoute, PlotPlanRoute, ProtocolRoute, SitesRoute, TeamRoute } from './routes/trial-sections';
 import { TrialsRoute } from './routes/trials';
@@ -38,6 +39,7 @@ export const routes: RouteObject[] = [
         ],
       },
       { path: paths.rateCalculator.path, element: <RateCalculatorPage /> },
+      { path: paths.planner.path, element: <PlannerRoute /> },
       { path: paths.outbox.path, element: <OutboxPage /> },
       { path: '*', element: <NotFoundRoute /> },
     ],

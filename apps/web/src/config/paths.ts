@@ -28,6 +28,7 @@ export const paths = {
   trialLedger: { path: '/trials/:trialId/ledger', href: (trialId: number, siteId?: number, roundId?: number) => siteRoundHref(trialId, 'ledger', siteId, roundId) },
   trialActivity: { path: '/trials/:trialId/activity', href: (trialId: number) => `/trials/${trialId}/activity` },
   rateCalculator: { path: '/rate-calculator', href: () => '/rate-calculator' },
+  planner: { path: '/planner', href: () => '/planner' },
   acceptInvitation: { path: '/invitations/:token', href: (token: string) => `/invitations/${token}` },
   outbox: { path: '/outbox', href: () => '/outbox' },
 } as const;

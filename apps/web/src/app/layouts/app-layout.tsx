@@ -27,6 +27,9 @@ export function AppLayout() {
           <NavLink to={paths.rateCalculator.href()} className="fr-nav-link">
             Rate calculator
           </NavLink>
+          <NavLink to={paths.planner.href()} className="fr-nav-link">
+            Planner
+          </NavLink>
           {outbox && (
             <NavLink to={paths.outbox.href()} className="fr-nav-link fr-outbox-link">
               Outbox
