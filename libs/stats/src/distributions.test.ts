@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { fUpperTailProbability, studentTQuantile, studentTTwoSidedPValue } from './distributions';
+import { fUpperTailProbability, regularizedIncompleteBeta, studentTQuantile, studentTTwoSidedPValue } from './distributions';
 import { relativeError } from './test-support/reference-files';
 
 describe('distributions', () => {
@@ -14,6 +14,14 @@ describe('distributions', () => {
       }
     }
     expect(studentTQuantile(1.2, 3)).toBeNaN();
+  });
+
+  it('matches R 4.2.2 to 1e-12 relative (values printed with sprintf("%.15g") on this machine)', () => {
+    expect(relativeError(studentTQuantile(0.975, 9), 2.262157162798205)).toBeLessThan(1e-12); // qt(0.975, 9)
+    expect(relativeError(studentTQuantile(1 - 0.05 / 132, 9000), 3.36900218580531)).toBeLessThan(1e-12); // qt(1-0.05/132, 9000)
+    expect(relativeError(fUpperTailProbability(14.4375, 3, 9), 0.000871272071111665)).toBeLessThan(1e-12); // pf(14.4375,3,9,lower.tail=FALSE)
+    expect(relativeError(fUpperTailProbability(66.79707, 3, 16), 2.88286693335291e-9)).toBeLessThan(1e-12); // pf(66.79707,3,16,lower.tail=FALSE)
+    expect(regularizedIncompleteBeta(0.5, 2, 3)).toBeCloseTo(0.6875, 14); // exact: 11/16
   });
 
   it('F upper tails match R pf(..., lower.tail = FALSE) as printed in STATISTICS.md', () => {
