@@ -468,6 +468,18 @@ describe('analyseTrial: input checks and warnings', () => {
     expect(Object.isFrozen(crd)).toBe(true);
   });
 
+  it('still answers when the residuals are all zero (diagnostics become null with a warning)', () => {
+    const observations = rcbdObservations(['a', 'b', 'c'], [
+      [1, 2, 3],
+      [2, 3, 4],
+      [5, 6, 7],
+    ]);
+    const result = analyseTrial({ design: 'rcbd', observations });
+    expect(result.summary.errorDf).toBe(4);
+    expect(row(result, 'error').ss).toBeLessThan(1e-20);
+    expect(result.means.map((m) => m.mean)).toEqual([2, 3, 6]);
+  });
+
   it('flags residuals whose standardized value exceeds 3', () => {
     const observations = Array.from({ length: 40 }, (_, i) => ({ treatment: i % 2 ? 'a' : 'b', value: (i % 5) * 0.1 + (i === 7 ? 20 : 0) }));
     const result = analyseTrial({ design: 'crd', observations });

@@ -188,6 +188,17 @@ function residualDiagnostics(fit: DesignFit, mse: number, centre: number): Resid
   return out;
 }
 
+/** A diagnostic test that cannot run on these residuals (e.g. all equal) becomes null and a warning, not an error. */
+function diagnosticOrNull<T>(run: () => T, name: string, warnings: string[]): T | null {
+  try {
+    return run();
+  } catch (error) {
+    if (!(error instanceof RangeError)) throw error;
+    warnings.push(`The ${name} test was skipped: ${error.message}.`);
+    return null;
+  }
+}
+
 function residualGroups(fit: DesignFit, layout: TrialLayout): number[][] {
   const groups: number[][] = layout.treatment.levels.map(() => []);
   layout.treatment.codes.forEach((code, i) => groups[code]!.push(fit.residuals[i]!));
@@ -329,10 +340,10 @@ export function analyseTrial(request: TrialAnalysisRequest): TrialAnalysis {
   }
   if (transformed.note) warnings.push(transformed.note);
 
-  const shapiro = n >= 3 && n <= 5000 ? shapiroWilk(Array.from(fit.residuals)) : null;
-  if (!shapiro) warnings.push(`The Shapiro–Wilk test was skipped: it covers 3 to 5000 residuals and there are ${n}.`);
+  const shapiro = n >= 3 && n <= 5000 ? diagnosticOrNull(() => shapiroWilk(Array.from(fit.residuals)), 'Shapiro–Wilk', warnings) : null;
+  if (n < 3 || n > 5000) warnings.push(`The Shapiro–Wilk test was skipped: it covers 3 to 5000 residuals and there are ${n}.`);
   const groups = residualGroups(fit, layout);
-  const spread = groups.every((group) => group.length >= 2) ? brownForsythe(groups) : null;
+  const spread = groups.every((group) => group.length >= 2) ? diagnosticOrNull(() => brownForsythe(groups), 'Brown–Forsythe', warnings) : null;
 
   return Object.freeze({
     anova: Object.freeze(anova),
