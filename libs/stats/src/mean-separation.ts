@@ -65,9 +65,12 @@ function differenceVariance(covariance: Float64Array, k: number, i: number, j: n
 }
 
 /**
- * λ for Dunnett's product correlation ρ_ij ≈ λ_i λ_j, fitted to the exact correlations of the
+ * Product-correlation λ for Dunnett's test: ρ_ij ≈ λ_i λ_j, fitted to the exact correlations of the
  * comparisons with the control by alternating least squares. Equal replication gives λ = √½ exactly;
- * a one-way layout gives λ_i = √(n_i/(n_i + n_0)) exactly.
+ * a one-way layout gives λ_i = √(n_i/(n_i + n_0)) exactly; missing plots give a close approximation.
+ * Reference: Hsu (1996), Multiple Comparisons, §3.1.1 (one-factor product correlation).
+ * @throws never.
+ * @example productCorrelationLambdas([[1, 0.5], [0.5, 1]]); // [0.7071, 0.7071]
  */
 export function productCorrelationLambdas(correlation: readonly (readonly number[])[]): number[] {
   const m = correlation.length;

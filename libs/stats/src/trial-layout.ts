@@ -24,7 +24,12 @@ export interface PreparedLayout {
 
 const DESIGNS: readonly TrialDesign[] = ['crd', 'rcbd', 'factorial-rcbd', 'multisite-rcbd'];
 
-/** Codes labels in order of first appearance. */
+/**
+ * Factor coding: level codes for labels, levels in order of first appearance (the protocol's order when the
+ * data follow it), as R's factor(x, levels = unique(x)).
+ * Reference: Chambers & Hastie (1992), Statistical Models in S, §2.2. @throws never.
+ * @example codeFactor('treatment', ['b', 'a', 'b']); // { levels: ['b', 'a'], codes: Int32Array [0, 1, 0] }
+ */
 export function codeFactor(name: string, labels: readonly string[]): ModelFactor {
   const index = new Map<string, number>();
   const codes = new Int32Array(labels.length);
