@@ -34,6 +34,7 @@ import { IntakeModule } from './intake/intake.module';
 import { LedgerModule } from './ledger/ledger.module';
 import { PhotosModule } from './photos/photos.module';
 import { FindingsModule } from './findings/findings.module';
+import { AnalysesModule } from './analyses/analyses.module';
 
 @Module({
   imports: [
@@ -73,6 +74,7 @@ import { FindingsModule } from './findings/findings.module';
     LedgerModule,
     PhotosModule,
     FindingsModule,
+    AnalysesModule,
   ],
   providers: [
     { provide: APP_GUARD, useClass: JwtAuthGuard },

@@ -69,7 +69,8 @@ export interface ResidualPoint {
   index: number;
   fitted: number;
   residual: number;
-  standardized: number;
+  /** Null for a plot with leverage 1 (R gives NaN). */
+  standardized: number | null;
   /** |standardized| > 3. */
   flagged: boolean;
 }

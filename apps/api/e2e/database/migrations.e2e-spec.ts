@@ -35,6 +35,7 @@ describe('migrations', () => {
     expect(applied.map((m) => m.name)).toEqual(migrations.map(([name]) => name));
     expect(await tables()).toEqual([
       'activity_entries',
+      'analysis_snapshots',
       'assessment_rounds',
       'factor_levels',
       'intake_uploads',
@@ -48,6 +49,7 @@ describe('migrations', () => {
       'round_reminders',
       'schema_migrations',
       'sites',
+      'snapshot_comments',
       'treatments',
       'trial_factors',
       'trial_memberships',

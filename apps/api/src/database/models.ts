@@ -16,6 +16,8 @@ import { IntakeUploadRow } from '../intake/models/intake-upload.model';
 import { ObservationChangeRow } from '../observations/models/observation-change.model';
 import { ObservationRow } from '../observations/models/observation.model';
 import { PlotPhotoRow } from '../photos/models/plot-photo.model';
+import { AnalysisSnapshotRow } from '../analyses/models/analysis-snapshot.model';
+import { SnapshotCommentRow } from '../analyses/models/snapshot-comment.model';
 
 /** Every model, for connections made outside Nest (command line, tests). */
 export const allModels = [
@@ -37,4 +39,6 @@ export const allModels = [
   ObservationRow,
   ObservationChangeRow,
   PlotPhotoRow,
+  AnalysisSnapshotRow,
+  SnapshotCommentRow,
 ];

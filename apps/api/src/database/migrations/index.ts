@@ -16,6 +16,8 @@ import * as createIntakeUploads from './20261204090000-create-intake-uploads';
 import * as createObservations from './20261204090100-create-observations';
 import * as createObservationChanges from './20261204090200-create-observation-changes';
 import * as createPlotPhotos from './20261204090300-create-plot-photos';
+import * as createAnalysisSnapshots from './20261205090000-create-analysis-snapshots';
+import * as createSnapshotComments from './20261205090100-create-snapshot-comments';
 
 export interface MigrationModule {
   up(params: { context: QueryInterface }): Promise<void>;
@@ -41,4 +43,6 @@ export const migrations: ReadonlyArray<readonly [name: string, module: Migration
   ['20261204090100-create-observations', createObservations],
   ['20261204090200-create-observation-changes', createObservationChanges],
   ['20261204090300-create-plot-photos', createPlotPhotos],
+  ['20261205090000-create-analysis-snapshots', createAnalysisSnapshots],
+  ['20261205090100-create-snapshot-comments', createSnapshotComments],
 ];
