@@ -5,6 +5,7 @@ import { OutboxPage } from '../features/outbox/components/outbox-page';
 import { RateCalculatorPage } from '../features/rates/components/rate-calculator-page';
 import { AppLayout } from './layouts/app-layout';
 import { TrialLayout } from './layouts/trial-layout';
+import { ActivityRoute } from './routes/activity';
 import { NotFoundRoute } from './routes/not-found';
 import { PlannerRoute } from './routes/planner';
 import { SignInRoute } from './routes/sign-in';
@@ -36,6 +37,7 @@ export const routes: RouteObject[] = [
           { path: paths.trialTeam.path, element: <TeamRoute /> },
           { path: paths.trialIntake.path, element: <IntakeRoute /> },
           { path: paths.trialLedger.path, element: <LedgerRoute /> },
+          { path: paths.trialActivity.path, element: <ActivityRoute /> },
         ],
       },
       { path: paths.rateCalculator.path, element: <RateCalculatorPage /> },
