@@ -35,6 +35,7 @@ import { LedgerModule } from './ledger/ledger.module';
 import { PhotosModule } from './photos/photos.module';
 import { FindingsModule } from './findings/findings.module';
 import { AnalysesModule } from './analyses/analyses.module';
+import { ExportsModule } from './exports/exports.module';
 
 @Module({
   imports: [
@@ -75,6 +76,7 @@ import { AnalysesModule } from './analyses/analyses.module';
     PhotosModule,
     FindingsModule,
     AnalysesModule,
+    ExportsModule,
   ],
   providers: [
     { provide: APP_GUARD, useClass: JwtAuthGuard },

@@ -12,6 +12,12 @@ import { AnalysisSnapshotRow } from './models/analysis-snapshot.model';
 import { SnapshotCommentRow } from './models/snapshot-comment.model';
 import { SignOffRefusedException } from './sign-off-refused.exception';
 
+/** The people a saved analysis names: who saved it and who signed it off. */
+const people = () => [
+  { model: User, as: 'creator', attributes: ['id', 'name'] },
+  { model: User, as: 'signer', attributes: ['id', 'name'] },
+];
+
 function presentComment(row: SnapshotCommentRow): SnapshotComment {
   return { id: row.id, analysisId: row.snapshotId, body: row.body, authorId: row.authorId, authorName: row.author?.name ?? null, createdAt: row.createdAt.toISOString() };
 }
@@ -68,10 +74,7 @@ export class AnalysesService {
     const rows = await this.snapshots.findAll({
       where: { trialId },
       attributes: { exclude: ['result'] },
-      include: [
-        { model: User, as: 'creator', attributes: ['id', 'name'] },
-        { model: User, as: 'signer', attributes: ['id', 'name'] },
-      ],
+      include: people(),
       order: [['id', 'DESC']],
     });
     const counts = await this.commentCounts(rows.map((r) => r.id));
@@ -93,7 +96,7 @@ export class AnalysesService {
 
   /** Every saved analysis with its stored result (the workbook export). */
   async all(trialId: number): Promise<Array<AnalysisSnapshotSummary & { result: Findings }>> {
-    const rows = await this.snapshots.findAll({ where: { trialId }, include: [{ model: User, as: 'creator', attributes: ['id', 'name'] }, { model: User, as: 'signer', attributes: ['id', 'name'] }], order: [['id', 'ASC']] });
+    const rows = await this.snapshots.findAll({ where: { trialId }, include: people(), order: [['id', 'ASC']] });
     const counts = await this.commentCounts(rows.map((r) => r.id));
     return rows.map((row) => ({ ...this.summary(row, counts.get(row.id) ?? 0), result: JSON.parse(row.result) as Findings }));
   }
@@ -144,10 +147,7 @@ export class AnalysesService {
   private async find(trialId: number, analysisId: number): Promise<AnalysisSnapshotRow> {
     const row = await this.snapshots.findOne({
       where: { id: analysisId, trialId },
-      include: [
-        { model: User, as: 'creator', attributes: ['id', 'name'] },
-        { model: User, as: 'signer', attributes: ['id', 'name'] },
-      ],
+      include: people(),
     });
     if (!row) throw new NotFoundException('No such saved analysis in this trial.');
     return row;
