@@ -126,10 +126,12 @@ export function PlannerPage() {
           ) : !curveDone ? (
             <LoadingState what="the power at each number of blocks" />
           ) : (
-            <>
-              <Suspense fallback={<LoadingState what="the chart" />}>
-                <PowerCurve points={points} targetPower={asked.targetPower} recommended={recommended} />
-              </Suspense>
+            <div className="fr-planner__curve-body">
+              <div className="fr-planner__chart">
+                <Suspense fallback={<LoadingState what="the chart" />}>
+                  <PowerCurve points={points} targetPower={asked.targetPower} recommended={recommended} />
+                </Suspense>
+              </div>
               <div className="fr-planner__table">
                 <HTMLTable compact striped aria-label="Power at each number of blocks">
                   <thead>
@@ -156,7 +158,7 @@ export function PlannerPage() {
                   </tbody>
                 </HTMLTable>
               </div>
-            </>
+            </div>
           )}
         </Card>
       )}
