@@ -36,6 +36,7 @@ import { PhotosModule } from './photos/photos.module';
 import { FindingsModule } from './findings/findings.module';
 import { AnalysesModule } from './analyses/analyses.module';
 import { ExportsModule } from './exports/exports.module';
+import { ReportsModule } from './reports/reports.module';
 
 @Module({
   imports: [
@@ -77,6 +78,7 @@ import { ExportsModule } from './exports/exports.module';
     FindingsModule,
     AnalysesModule,
     ExportsModule,
+    ReportsModule,
   ],
   providers: [
     { provide: APP_GUARD, useClass: JwtAuthGuard },

@@ -1,0 +1,20 @@
+import { Controller, Get } from '@nestjs/common';
+import { ApiOkResponse, ApiOperation, ApiTags } from '@nestjs/swagger';
+import type { TrialAccessContext } from '../auth/auth-user';
+import { AnyTrialMember } from '../common/decorators/access.decorator';
+import { CurrentTrialAccess } from '../common/decorators/current-user.decorator';
+import { ReportsService } from './reports.service';
+
+@ApiTags('reports')
+@Controller('trials/:trialId/report')
+export class ReportsController {
+  constructor(private readonly reports: ReportsService) {}
+
+  @Get()
+  @AnyTrialMember()
+  @ApiOperation({ summary: 'Everything the printable report needs: protocol, sites, per measure the ANOVA and means with letters (latest round with data, all sites combined), cautions and a plain paragraph' })
+  @ApiOkResponse({ description: 'TrialReport.' })
+  get(@CurrentTrialAccess() access: TrialAccessContext) {
+    return this.reports.report(access.trialId);
+  }
+}
