@@ -14,5 +14,12 @@ describe('readMailConfig', () => {
     expect(() => readMailConfig({ REMINDER_HOUR: '24' })).toThrow(/^REMINDER_HOUR must be a whole number from 0 to 23/);
     expect(() => readMailConfig({ INVITATION_TTL_HOURS: '0' })).toThrow(/^INVITATION_TTL_HOURS/);
     expect(() => readMailConfig({ MAIL_FROM: 'Friable' })).toThrow(/^MAIL_FROM must contain an e-mail address/);
+    expect(() => readMailConfig({ SCHEDULER_ENABLED: 'sometimes' })).toThrow(new EnvironmentError('SCHEDULER_ENABLED must be true or false; got "sometimes".'));
+  });
+
+  it('runs the reminder schedule unless SCHEDULER_ENABLED is false', () => {
+    expect(readMailConfig({}).schedulerEnabled).toBe(true);
+    expect(readMailConfig({ SCHEDULER_ENABLED: 'false' }).schedulerEnabled).toBe(false);
+    expect(readMailConfig({ SCHEDULER_ENABLED: '1' }).schedulerEnabled).toBe(true);
   });
 });

@@ -1,7 +1,7 @@
 import { registerAs } from '@nestjs/config';
 import { resolve } from 'node:path';
 import { readAppConfig } from './app.config';
-import { EnvironmentError, requireInteger, requireText } from './validate-environment';
+import { EnvironmentError, requireFlag, requireInteger, requireText } from './validate-environment';
 
 export interface MailConfig {
   smtpHost: string;
@@ -15,6 +15,8 @@ export interface MailConfig {
   invitationTtlHours: number;
   /** Local hour (0–23) at which the daily reminder job runs. */
   reminderHour: number;
+  /** False on all but one of several API instances, so reminders go out once. */
+  schedulerEnabled: boolean;
 }
 
 // The repository root, from src/config or dist/config alike.
@@ -31,6 +33,7 @@ export function readMailConfig(env: NodeJS.ProcessEnv = process.env): MailConfig
     appUrl: readAppConfig(env).appUrl,
     invitationTtlHours: requireInteger(env, 'INVITATION_TTL_HOURS', 168, 1, 24 * 90),
     reminderHour: requireInteger(env, 'REMINDER_HOUR', 7, 0, 23),
+    schedulerEnabled: requireFlag(env, 'SCHEDULER_ENABLED', true),
   };
 }
 

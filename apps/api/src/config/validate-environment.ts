@@ -20,3 +20,12 @@ export function requireInteger(env: NodeJS.ProcessEnv, name: string, fallback: n
   }
   return value;
 }
+
+export function requireFlag(env: NodeJS.ProcessEnv, name: string, fallback: boolean): boolean {
+  const raw = env[name];
+  if (raw === undefined || raw.trim() === '') return fallback;
+  const value = raw.trim().toLowerCase();
+  if (value === 'true' || value === '1') return true;
+  if (value === 'false' || value === '0') return false;
+  throw new EnvironmentError(`${name} must be true or false; got "${raw}".`);
+}

@@ -62,9 +62,12 @@ export class RemindersService implements OnApplicationBootstrap {
     private readonly scheduler: SchedulerRegistry,
   ) {}
 
-  /** Schedules the daily run at REMINDER_HOUR (local time); test runs call sendDueReminders themselves. */
+  /**
+   * Schedules the daily run at REMINDER_HOUR (local time); test runs call sendDueReminders themselves,
+   * and instances with SCHEDULER_ENABLED=false leave it to the one that runs it.
+   */
   onApplicationBootstrap(): void {
-    if (this.app.nodeEnv === 'test') return;
+    if (this.app.nodeEnv === 'test' || !this.mailSettings.schedulerEnabled) return;
     const job = CronJob.from({
       cronTime: `0 0 ${this.mailSettings.reminderHour} * * *`,
       onTick: () => {
