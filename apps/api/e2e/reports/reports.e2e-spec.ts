@@ -55,4 +55,15 @@ describe('Report: what the printable report page needs', () => {
     expect(report.cautions).toContain('drain time: No values of drain time have been recorded yet.');
     expect((await t.http.get(`${base}/report`).set(bearer(built.tokens.nonMember))).status).toBe(404);
   });
+
+  it('documents the Findings, saved-analysis, export and report routes on the OpenAPI page', async () => {
+    const paths = (await t.http.get('/api/docs/openapi.json')).body.paths as Record<string, Record<string, unknown>>;
+    const methods = (path: string) => Object.keys(paths[path] ?? {}).sort();
+    expect(methods('/api/trials/{trialId}/findings')).toEqual(['get']);
+    expect(methods('/api/trials/{trialId}/analyses')).toEqual(['get', 'post']);
+    expect(methods('/api/trials/{trialId}/analyses/{analysisId}')).toEqual(['get']);
+    expect(methods('/api/trials/{trialId}/analyses/{analysisId}/comments')).toEqual(['get', 'post']);
+    expect(methods('/api/trials/{trialId}/analyses/{analysisId}/sign-off')).toEqual(['post']);
+    for (const file of ['export.csv', 'export-dictionary.csv', 'export.xlsx', 'report']) expect(methods(`/api/trials/{trialId}/${file}`)).toEqual(['get']);
+  });
 });
