@@ -6,6 +6,7 @@ import { RateCalculatorPage } from '../features/rates/components/rate-calculator
 import { AppLayout } from './layouts/app-layout';
 import { TrialLayout } from './layouts/trial-layout';
 import { ActivityRoute } from './routes/activity';
+import { FindingsRoute, QuickAnalysisRoute, ReportRoute } from './routes/findings-routes';
 import { NotFoundRoute } from './routes/not-found';
 import { PlannerRoute } from './routes/planner';
 import { SignInRoute } from './routes/sign-in';
@@ -37,10 +38,14 @@ export const routes: RouteObject[] = [
           { path: paths.trialTeam.path, element: <TeamRoute /> },
           { path: paths.trialIntake.path, element: <IntakeRoute /> },
           { path: paths.trialLedger.path, element: <LedgerRoute /> },
+          { path: paths.trialFindings.path, element: <FindingsRoute /> },
+          { path: paths.trialReport.path, element: <ReportRoute /> },
+          { path: paths.trialActivity.path, element: <ActivityRoute /> },
           { path: paths.trialActivity.path, element: <ActivityRoute /> },
         ],
       },
       { path: paths.rateCalculator.path, element: <RateCalculatorPage /> },
+      { path: paths.quickAnalysis.path, element: <QuickAnalysisRoute /> },
       { path: paths.planner.path, element: <PlannerRoute /> },
       { path: paths.outbox.path, element: <OutboxPage /> },
       { path: '*', element: <NotFoundRoute /> },

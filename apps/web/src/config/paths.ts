@@ -26,9 +26,12 @@ export const paths = {
   trialTeam: { path: '/trials/:trialId/team', href: (trialId: number) => `/trials/${trialId}/team` },
   trialIntake: { path: '/trials/:trialId/intake', href: (trialId: number, siteId?: number, roundId?: number) => siteRoundHref(trialId, 'intake', siteId, roundId) },
   trialLedger: { path: '/trials/:trialId/ledger', href: (trialId: number, siteId?: number, roundId?: number) => siteRoundHref(trialId, 'ledger', siteId, roundId) },
+  trialFindings: { path: '/trials/:trialId/findings', href: (trialId: number) => `/trials/${trialId}/findings` },
+  trialReport: { path: '/trials/:trialId/report', href: (trialId: number) => `/trials/${trialId}/report` },
   trialActivity: { path: '/trials/:trialId/activity', href: (trialId: number) => `/trials/${trialId}/activity` },
   rateCalculator: { path: '/rate-calculator', href: () => '/rate-calculator' },
   planner: { path: '/planner', href: () => '/planner' },
+  quickAnalysis: { path: '/quick-analysis', href: () => '/quick-analysis' },
   acceptInvitation: { path: '/invitations/:token', href: (token: string) => `/invitations/${token}` },
   outbox: { path: '/outbox', href: () => '/outbox' },
 } as const;

@@ -27,6 +27,9 @@ export function AppLayout() {
           <NavLink to={paths.rateCalculator.href()} className="fr-nav-link">
             Rate calculator
           </NavLink>
+          <NavLink to={paths.quickAnalysis.href()} className="fr-nav-link">
+            Quick analysis
+          </NavLink>
           <NavLink to={paths.planner.href()} className="fr-nav-link">
             Planner
           </NavLink>

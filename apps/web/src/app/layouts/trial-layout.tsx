@@ -24,6 +24,7 @@ const sections: Array<{ label: string; href: (id: number) => string; shownTo?: (
   // Reviewers write no data, so they get no Intake tab.
   { label: 'Intake', href: (id: number) => paths.trialIntake.href(id), shownTo: (t: TrialDetail) => t.myRoles.some((role) => role !== 'reviewer') },
   { label: 'Ledger', href: (id: number) => paths.trialLedger.href(id) },
+  { label: 'Findings', href: paths.trialFindings.href },
   { label: 'Activity', href: paths.trialActivity.href },
 ];
 

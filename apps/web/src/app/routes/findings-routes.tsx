@@ -1,0 +1,34 @@
+import { lazy, Suspense } from 'react';
+import { LoadingState } from '../../components/states';
+import { useTrialOutlet } from '../layouts/trial-layout';
+
+// The Findings pages load with their route (their plots load later still, only when drawn).
+const QuickAnalysisPage = lazy(() => import('../../features/findings/components/quick-analysis-page').then((m) => ({ default: m.QuickAnalysisPage })));
+const FindingsPage = lazy(() => import('../../features/findings/components/findings-page').then((m) => ({ default: m.FindingsPage })));
+const ReportPage = lazy(() => import('../../features/findings/components/report-page').then((m) => ({ default: m.ReportPage })));
+
+export function QuickAnalysisRoute() {
+  return (
+    <Suspense fallback={<LoadingState what="Quick analysis" />}>
+      <QuickAnalysisPage />
+    </Suspense>
+  );
+}
+
+export function FindingsRoute() {
+  const { trial } = useTrialOutlet();
+  return (
+    <Suspense fallback={<LoadingState what="the Findings" />}>
+      <FindingsPage trial={trial} />
+    </Suspense>
+  );
+}
+
+export function ReportRoute() {
+  const { trial } = useTrialOutlet();
+  return (
+    <Suspense fallback={<LoadingState what="the report" />}>
+      <ReportPage trial={trial} />
+    </Suspense>
+  );
+}

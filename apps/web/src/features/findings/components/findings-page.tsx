@@ -1,0 +1,172 @@
+import { Button, Callout, HTMLSelect } from '@blueprintjs/core';
+import type { FindingsQuery, SeparationMethod, TrialDetail } from '@friable/contracts';
+import { useEffect, useMemo, useState } from 'react';
+import { Link, useSearchParams } from 'react-router-dom';
+import { EmptyState, ErrorState, LoadingState } from '../../../components/states';
+import { paths } from '../../../config/paths';
+import { ApiError } from '../../../lib/api-client';
+import { useDownloadExport } from '../api/download-export';
+import { findingsQueryOptions, getFindings, useFindings } from '../api/get-findings';
+import { useSiteMeans } from '../hooks/use-site-means';
+import { AnalysisChoices, Choice, defaultAnalysisOptions, type AnalysisOptions } from './analysis-choices';
+import { contextNotices, contextPlots } from './context-plots';
+import { FindingsView } from './findings-view';
+
+/** The page's choices, read from the address so a view can be shared and reloaded. */
+function readChoices(params: URLSearchParams): Partial<FindingsQuery> & AnalysisOptions {
+  const number = (key: string) => (params.get(key) ? Number(params.get(key)) : undefined);
+  return {
+    measureId: number('measure'),
+    roundId: number('round'),
+    siteId: number('site'),
+    sitesAre: params.get('sites') === 'fixed' ? 'fixed' : 'random',
+    transform: (params.get('transform') as AnalysisOptions['transform']) ?? defaultAnalysisOptions.transform,
+    method: (params.get('method') as SeparationMethod) ?? defaultAnalysisOptions.method,
+    alpha: number('alpha') ?? defaultAnalysisOptions.alpha,
+  };
+}
+
+/** Findings: one measure and round analysed at one site or all sites combined, with plots, saved analyses and exports. */
+export function FindingsPage({ trial }: { trial: TrialDetail }) {
+  const [params, setParams] = useSearchParams();
+  const choices = readChoices(params);
+  const measures = useMemo(() => [...trial.measures].sort((a, b) => a.position - b.position), [trial.measures]);
+  const measure = measures.find((m) => m.id === choices.measureId) ?? measures[0];
+  const rounds = useMemo(
+    () => [...trial.rounds].filter((r) => (measure ? r.measureIds.includes(measure.id) : false)).sort((a, b) => b.dayOffset - a.dayOffset),
+    [trial.rounds, measure],
+  );
+  // With no round chosen, start at the latest round and step back while a round has no values yet.
+  const [stepBack, setStepBack] = useState(0);
+  const chosenRound = rounds.find((r) => r.id === choices.roundId);
+  const round = chosenRound ?? rounds[Math.min(stepBack, Math.max(rounds.length - 1, 0))];
+  const combinable = trial.design !== 'crd' && trial.sites.length > 1;
+  const siteId = choices.siteId ?? (combinable ? undefined : trial.sites[0]?.id);
+  const options: AnalysisOptions = { method: choices.method, transform: choices.transform, alpha: choices.alpha, sitesAre: choices.sitesAre };
+  const query: FindingsQuery | null =
+    measure && round
+      ? { measureId: measure.id, roundId: round.id, ...(siteId ? { siteId } : {}), sitesAre: options.sitesAre, transform: options.transform, method: options.method, alpha: options.alpha }
+      : null;
+  const findings = useFindings(trial.id, query);
+  const noData = findings.error instanceof ApiError && findings.error.status === 422 && /no values/i.test(findings.error.message);
+  const stepFurther = noData && !chosenRound && stepBack < rounds.length - 1 && !findings.isFetching;
+  useEffect(() => {
+    if (stepFurther) setStepBack((step) => step + 1);
+  }, [stepFurther]);
+
+  const combined = query !== null && !query.siteId && combinable;
+  const interaction = useSiteMeans(
+    combined
+      ? trial.sites.map((site) => {
+          const siteQuery = { ...query!, siteId: site.id };
+          return { name: site.name, options: { queryKey: findingsQueryOptions(trial.id, siteQuery).queryKey, queryFn: () => getFindings(trial.id, siteQuery) } };
+        })
+      : [],
+  );
+  const download = useDownloadExport();
+  const treatmentNames = useMemo(() => Object.fromEntries(trial.treatments.map((t) => [t.code, t.name])), [trial.treatments]);
+
+  function choose(next: Partial<Record<'measure' | 'round' | 'site' | 'sites' | 'transform' | 'method' | 'alpha', string | undefined>>) {
+    const merged = new URLSearchParams(params);
+    for (const [key, value] of Object.entries(next)) {
+      if (value === undefined || value === '') merged.delete(key);
+      else merged.set(key, value);
+    }
+    setParams(merged, { replace: true });
+  }
+
+  if (!measure) return <EmptyState title="No measures yet" description="The protocol needs a measure before there is anything to analyse." />;
+  if (!round) return <EmptyState title="No rounds for this measure" description={`No assessment round records ${measure.name} yet.`} />;
+  const data = findings.data;
+  const dunnettAllowed = trial.treatments.some((t) => t.isControl);
+
+  return (
+    <div className="fr-findings">
+      <AnalysisChoices
+        options={options}
+        onChange={(next) => choose({ sites: next.sitesAre, transform: next.transform, method: next.method, alpha: String(next.alpha) })}
+        showSites={combined}
+        dunnettAllowed={dunnettAllowed}
+        before={
+          <>
+            <Choice label="Measure">
+              <HTMLSelect aria-label="Measure" value={measure.id} onChange={(e) => { setStepBack(0); choose({ measure: e.target.value, round: undefined }); }}>
+                {measures.map((m) => (
+                  <option key={m.id} value={m.id}>
+                    {m.name}
+                  </option>
+                ))}
+              </HTMLSelect>
+            </Choice>
+            <Choice label="Round">
+              <HTMLSelect aria-label="Round" value={round.id} onChange={(e) => choose({ round: e.target.value })}>
+                {rounds.map((r) => (
+                  <option key={r.id} value={r.id}>
+                    {r.label}
+                  </option>
+                ))}
+              </HTMLSelect>
+            </Choice>
+            <Choice label="Scope">
+              <HTMLSelect aria-label="Scope" value={siteId ?? ''} onChange={(e) => choose({ site: e.target.value || undefined })}>
+                {combinable && <option value="">All sites combined</option>}
+                {trial.sites.map((s) => (
+                  <option key={s.id} value={s.id}>
+                    {s.name}
+                  </option>
+                ))}
+              </HTMLSelect>
+            </Choice>
+          </>
+        }
+      />
+      <div className="fr-findings-actions">
+        <Button icon="download" text="Tidy CSV" loading={download.isPending && download.variables?.kind === 'csv'} onClick={() => download.mutate({ trialId: trial.id, kind: 'csv', fallbackName: `${trial.code}.csv` })} />
+        <Button icon="th" text="Workbook" loading={download.isPending && download.variables?.kind === 'xlsx'} onClick={() => download.mutate({ trialId: trial.id, kind: 'xlsx', fallbackName: `${trial.code}.xlsx` })} />
+        <Link to={paths.trialReport.href(trial.id)} className="bp6-button fr-findings-report-link">
+          <span className="bp6-button-text">Printable report</span>
+        </Link>
+      </div>
+      {download.error && (
+        <p className="fr-error-line" role="alert">
+          {download.error.message}
+        </p>
+      )}
+      {findings.isPending ? (
+        <LoadingState what="the analysis" />
+      ) : findings.isError && !data ? (
+        noData ? (
+          <EmptyState title="No values to analyse yet" description={findings.error.message} />
+        ) : (
+          <ErrorState title="This analysis could not be made" error={findings.error} onRetry={() => findings.refetch()} />
+        )
+      ) : data ? (
+        <>
+          {findings.isError && (
+            <Callout intent="warning" role="alert" compact className="fr-gap">
+              {findings.error.message} The analysis below is the previous one.
+            </Callout>
+          )}
+          <p className="fr-findings-caption">
+            <strong>{data.context.measure.name}</strong> ({data.context.measure.unit}) · {data.context.round.label} · {data.context.scope.label}
+            {data.context.scope.siteNames.length > 1 ? ` (${data.context.scope.siteNames.join(', ')})` : ''}
+            {findings.isFetching && <span className="fr-muted"> · updating…</span>}
+          </p>
+          <FindingsView
+            answer={data}
+            method={data.context.choices.method}
+            alpha={data.context.choices.alpha}
+            control={data.context.controlCode ?? undefined}
+            decimals={data.context.measure.decimals}
+            unit={data.context.measure.unit}
+            treatmentNames={treatmentNames}
+            percentOfControl={data.context.percentOfControl}
+            notices={contextNotices(data.context)}
+            rankTest={{ kind: data.context.rankTest.test, answer: data.context.rankTest }}
+            plots={{ ...contextPlots(data.context), interaction }}
+          />
+        </>
+      ) : null}
+    </div>
+  );
+}
