@@ -43,6 +43,45 @@ describe('Findings and Quick analysis', () => {
   });
   afterAll(() => browser.close());
 
+  it('a reviewer saves an analysis and comments on it; the investigator is refused the sign-off of an unlocked trial in words; the report prints', async () => {
+    const context = await browser.newContext({ viewport: { width: 1280, height: 800 } });
+    const page = await context.newPage();
+    await signIn(page, 'reviewer@example.org');
+    await page.getByRole('heading', { name: 'Trials', exact: true }).waitFor();
+    const id = await trialId(page, 'FW-CLAY-26');
+    await page.goto(`${baseUrl()}/trials/${id}/findings`);
+    await page.getByRole('table', { name: 'Analysis of variance' }).waitFor();
+    const title = `Reviewer check ${Date.now()}`;
+    await page.getByLabel('Title of the saved analysis').fill(title);
+    await page.getByRole('button', { name: 'Save this analysis' }).click();
+    await page.getByRole('button', { name: `Open the saved analysis ${title}` }).click();
+    await page.getByRole('heading', { name: `Saved analysis: ${title}` }).waitFor();
+    await page.getByText('The data have not changed since this analysis was saved.').waitFor();
+    await page.getByLabel('Your comment').fill('Check the two Hollow Lane plots flooded in Day 14.');
+    await page.getByRole('button', { name: 'Add the comment' }).click();
+    await page.getByRole('list', { name: 'Comments' }).getByText('Check the two Hollow Lane plots flooded in Day 14.').waitFor();
+    await screenshot(page, 'findings-saved-analysis-wide');
+    const address = page.url();
+    await context.close();
+
+    const investigator = await (await browser.newContext({ viewport: { width: 1280, height: 800 } })).newPage();
+    await signIn(investigator, 'investigator@example.org');
+    await investigator.getByRole('heading', { name: 'Trials', exact: true }).waitFor();
+    await investigator.goto(address);
+    await investigator.getByRole('button', { name: 'Sign off this analysis' }).click();
+    await investigator.getByRole('alert').getByText('Lock the trial before signing off an analysis').waitFor();
+
+    await investigator.goto(`${baseUrl()}/trials/${id}/report`);
+    await investigator.getByRole('heading', { name: 'What these statistics show, and what they do not' }).waitFor();
+    await investigator.locator('.js-plotly-plot .trace').first().waitFor({ timeout: 30_000 });
+    await screenshot(investigator, 'findings-report-wide');
+    await investigator.emulateMedia({ media: 'print' });
+    expect(await investigator.getByRole('navigation', { name: 'Trial sections' }).isVisible()).toBe(false);
+    expect(await investigator.getByRole('button', { name: 'Print the report' }).isVisible()).toBe(false);
+    await screenshot(investigator, 'findings-report-print');
+    await investigator.context().close();
+  });
+
   for (const viewport of [
     { name: 'wide', width: 1280, height: 800 },
     { name: 'phone', width: 390, height: 844 },

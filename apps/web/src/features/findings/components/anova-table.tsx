@@ -19,11 +19,11 @@ export function SignificanceLegend() {
 }
 
 /** The ANOVA table (df, SS, MS, F, p with its mark), then the grand mean, CV and the error's root mean square. */
-export function AnovaTable({ answer, decimals, unit }: { answer: AnovaAnswer; decimals: number; unit?: string }) {
+export function AnovaTable({ answer, decimals, unit, headingId = 'fr-anova-title' }: { answer: Pick<AnovaAnswer, 'anova' | 'summary'>; decimals: number; unit?: string; headingId?: string }) {
   const { summary } = answer;
   return (
-    <section className="fr-findings-block" aria-labelledby="fr-anova-title">
-      <h3 id="fr-anova-title" className="fr-findings-heading">
+    <section className="fr-findings-block" aria-labelledby={headingId}>
+      <h3 id={headingId} className="fr-findings-heading">
         Analysis of variance
       </h3>
       <div className="fr-table-scroll">

@@ -27,7 +27,7 @@ export function ComparisonsTable({ answer, method, alpha, decimals }: { answer: 
           <tbody>
             {comparisons.pairs.map((pair) => (
               <tr key={`${pair.a}|${pair.b}`}>
-                <th scope="row">
+                <th scope="row" className="fr-findings-pair">
                   <span className="fr-code">{pair.a}</span> − <span className="fr-code">{pair.b}</span>
                 </th>
                 <td className="fr-num">{formatMeasureValue(pair.diff, decimals)}</td>

@@ -24,13 +24,3 @@ export function contextPlots(context: FindingsContext): Omit<FindingsPlotInputs,
     overTime: [...overTime.values()],
   };
 }
-
-/** The missing values in words, beside the server's own notices. */
-export function contextNotices(context: FindingsContext): string[] {
-  const notices = [...context.notices];
-  if (context.missing.count > 0) {
-    const reasons = context.missing.reasons.map((r) => `${r.reason}: ${r.count}`).join('; ');
-    notices.push(`${context.missing.count} value${context.missing.count === 1 ? ' is' : 's are'} missing and left out of the analysis${reasons ? ` (${reasons})` : ''}.`);
-  }
-  return notices;
-}

@@ -9,8 +9,9 @@ import { useDownloadExport } from '../api/download-export';
 import { findingsQueryOptions, getFindings, useFindings } from '../api/get-findings';
 import { useSiteMeans } from '../hooks/use-site-means';
 import { AnalysisChoices, Choice, defaultAnalysisOptions, type AnalysisOptions } from './analysis-choices';
-import { contextNotices, contextPlots } from './context-plots';
-import { FindingsView } from './findings-view';
+import { FindingsCaption, FindingsResultView } from './findings-result-view';
+import { SnapshotView } from './snapshot-view';
+import { SnapshotsPanel } from './snapshots-panel';
 
 /** The page's choices, read from the address so a view can be shared and reloaded. */
 function readChoices(params: URLSearchParams): Partial<FindingsQuery> & AnalysisOptions {
@@ -66,7 +67,7 @@ export function FindingsPage({ trial }: { trial: TrialDetail }) {
   const download = useDownloadExport();
   const treatmentNames = useMemo(() => Object.fromEntries(trial.treatments.map((t) => [t.code, t.name])), [trial.treatments]);
 
-  function choose(next: Partial<Record<'measure' | 'round' | 'site' | 'sites' | 'transform' | 'method' | 'alpha', string | undefined>>) {
+  function choose(next: Partial<Record<'measure' | 'round' | 'site' | 'sites' | 'transform' | 'method' | 'alpha' | 'analysis', string | undefined>>) {
     const merged = new URLSearchParams(params);
     for (const [key, value] of Object.entries(next)) {
       if (value === undefined || value === '') merged.delete(key);
@@ -77,6 +78,8 @@ export function FindingsPage({ trial }: { trial: TrialDetail }) {
 
   if (!measure) return <EmptyState title="No measures yet" description="The protocol needs a measure before there is anything to analyse." />;
   if (!round) return <EmptyState title="No rounds for this measure" description={`No assessment round records ${measure.name} yet.`} />;
+  const openAnalysis = Number(params.get('analysis')) || null;
+  if (openAnalysis) return <SnapshotView trial={trial} analysisId={openAnalysis} treatmentNames={treatmentNames} onClose={() => choose({ analysis: undefined })} />;
   const data = findings.data;
   const dunnettAllowed = trial.treatments.some((t) => t.isControl);
 
@@ -148,23 +151,11 @@ export function FindingsPage({ trial }: { trial: TrialDetail }) {
             </Callout>
           )}
           <p className="fr-findings-caption">
-            <strong>{data.context.measure.name}</strong> ({data.context.measure.unit}) · {data.context.round.label} · {data.context.scope.label}
-            {data.context.scope.siteNames.length > 1 ? ` (${data.context.scope.siteNames.join(', ')})` : ''}
+            <FindingsCaption findings={data} />
             {findings.isFetching && <span className="fr-muted"> · updating…</span>}
           </p>
-          <FindingsView
-            answer={data}
-            method={data.context.choices.method}
-            alpha={data.context.choices.alpha}
-            control={data.context.controlCode ?? undefined}
-            decimals={data.context.measure.decimals}
-            unit={data.context.measure.unit}
-            treatmentNames={treatmentNames}
-            percentOfControl={data.context.percentOfControl}
-            notices={contextNotices(data.context)}
-            rankTest={{ kind: data.context.rankTest.test, answer: data.context.rankTest }}
-            plots={{ ...contextPlots(data.context), interaction }}
-          />
+          <FindingsResultView findings={data} treatmentNames={treatmentNames} interaction={interaction} />
+          {query && <SnapshotsPanel trial={trial} query={query} defaultTitle={`${data.context.measure.name}, ${data.context.round.label}, ${data.context.scope.label}`} onOpen={(id) => choose({ analysis: String(id) })} />}
         </>
       ) : null}
     </div>

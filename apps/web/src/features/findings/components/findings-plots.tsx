@@ -103,8 +103,9 @@ export default function FindingsPlots({ answer, method, only, measureName, unit,
             xaxis: categorical,
             yaxis: { title: { text: axisTitle } },
             showlegend: false,
+            // On a category axis a number is the category's position; a label such as "1" would be read as one too.
             annotations: letters
-              ? answer.means.map((m) => ({ x: m.treatment, y: m.mean + m.se, text: `<b>${letters[m.treatment] ?? ''}</b>`, showarrow: false, yshift: 14, font: { size: 14, color: palette[0] } }))
+              ? answer.means.map((m, i) => ({ x: i, y: m.mean + m.se, text: `<b>${letters[m.treatment] ?? ''}</b>`, showarrow: false, yshift: 14, font: { size: 14, color: palette[0] } }))
               : [],
           }}
         />

@@ -54,7 +54,7 @@ export function MeansTable({
                 <tr key={mean.treatment}>
                   <th scope="row">
                     <span className="fr-code">{mean.treatment}</span>
-                    {treatmentNames?.[mean.treatment] && <span className="fr-muted"> {treatmentNames[mean.treatment]}</span>}
+                    {treatmentNames?.[mean.treatment] && <span className="fr-muted fr-findings-name"> {treatmentNames[mean.treatment]}</span>}
                     {mean.treatment === control && <span className="fr-muted"> (control)</span>}
                   </th>
                   <td className="fr-num">{mean.n}</td>

@@ -1,6 +1,178 @@
-import type { TrialDetail } from '@friable/contracts';
+import { Button, Callout, H2, HTMLTable } from '@blueprintjs/core';
+import type { ReportMeasure, TrialDetail } from '@friable/contracts';
+import { lazy, Suspense } from 'react';
+import { Link } from 'react-router-dom';
+import { ErrorState, LoadingState } from '../../../components/states';
+import { paths } from '../../../config/paths';
+import { designLabels, formatArea, formatDate, formatRate } from '../../../lib/format';
+import { useReport } from '../api/get-report';
+import { AnovaTable } from './anova-table';
+import { RankTestPanel } from './rank-test-panel';
+import { formatMeasureValue, methodLabels } from './stat-format';
 
-/** The printable report of a trial (filled in below). */
+const ReportMeansPlot = lazy(() => import('./report-means-plot'));
+const percent = new Intl.NumberFormat('en-US', { maximumFractionDigits: 0 });
+
+/** The printable report: protocol, sites, per measure the ANOVA, means with letters and a plot, the cautions and what the statistics show. */
 export function ReportPage({ trial }: { trial: TrialDetail }) {
-  return <p>Report of {trial.title}</p>;
+  const report = useReport(trial.id);
+  if (report.isPending) return <LoadingState what="the report" />;
+  if (report.isError) return <ErrorState title="The report could not be made" error={report.error} onRetry={() => report.refetch()} />;
+  const r = report.data;
+  const p = r.protocol;
+  return (
+    <article className="fr-report fr-report-page">
+      <div className="fr-findings-actions fr-report__screen-only">
+        <Link to={paths.trialFindings.href(trial.id)}>← Back to the Findings</Link>
+        <Button icon="print" text="Print the report" onClick={() => window.print()} />
+      </div>
+      <H2>
+        {p.title} <span className="fr-code">{p.code}</span>
+      </H2>
+      <p className="fr-muted fr-small">
+        Report made on {formatDate(r.generatedAt)} by Friable (analysis engine {r.engineVersion}).
+      </p>
+      {p.question && (
+        <p>
+          <strong>Question:</strong> {p.question}
+        </p>
+      )}
+      <p>
+        <strong>Design:</strong> {designLabels[p.design] ?? p.design}
+        {p.startDate ? ` · started ${formatDate(p.startDate)}` : ''}
+      </p>
+      <h3 className="fr-findings-heading">Treatments</h3>
+      <div className="fr-table-scroll">
+        <HTMLTable compact striped className="fr-findings-table" aria-label="Treatments">
+          <thead>
+            <tr>
+              <th scope="col">Code</th>
+              <th scope="col">Name</th>
+              <th scope="col">Rate</th>
+            </tr>
+          </thead>
+          <tbody>
+            {p.treatments.map((t) => (
+              <tr key={t.id}>
+                <th scope="row" className="fr-code">
+                  {t.code}
+                </th>
+                <td>
+                  {t.name}
+                  {t.isControl ? ' (control)' : ''}
+                </td>
+                <td>{formatRate(t.rateValue, t.rateUnit)}</td>
+              </tr>
+            ))}
+          </tbody>
+        </HTMLTable>
+      </div>
+      <h3 className="fr-findings-heading">Sites</h3>
+      <div className="fr-table-scroll">
+        <HTMLTable compact striped className="fr-findings-table" aria-label="Sites">
+          <thead>
+            <tr>
+              <th scope="col">Site</th>
+              <th scope="col">Soil</th>
+              <th scope="col" className="fr-num">Blocks</th>
+              <th scope="col">Plot size</th>
+            </tr>
+          </thead>
+          <tbody>
+            {r.sites.map((s) => (
+              <tr key={s.id}>
+                <th scope="row">{s.name}</th>
+                <td>{s.soilDescription ?? '—'}</td>
+                <td className="fr-num">{s.blocks}</td>
+                <td>{formatArea(s.areaM2)}</td>
+              </tr>
+            ))}
+          </tbody>
+        </HTMLTable>
+      </div>
+      {r.measures.map((m) => (
+        <ReportMeasureSection key={m.measure.id} entry={m} />
+      ))}
+      <section className="fr-report__measure">
+        <h3 className="fr-findings-heading">Cautions</h3>
+        {r.cautions.length ? (
+          <ul>
+            {r.cautions.map((c) => (
+              <li key={c}>{c}</li>
+            ))}
+          </ul>
+        ) : (
+          <p>The analyses raised no cautions.</p>
+        )}
+        <h3 className="fr-findings-heading">What these statistics show, and what they do not</h3>
+        <p>{r.explanation}</p>
+        {p.safetyNotes && (
+          <p>
+            <strong>Safety:</strong> {p.safetyNotes}
+          </p>
+        )}
+      </section>
+    </article>
+  );
+}
+
+function ReportMeasureSection({ entry }: { entry: ReportMeasure }) {
+  const { measure } = entry;
+  const headingId = `fr-report-measure-${measure.id}`;
+  return (
+    <section className="fr-report__measure" aria-labelledby={`${headingId}-name`}>
+      <h3 id={`${headingId}-name`} className="fr-findings-heading">
+        {measure.name} ({measure.unit}){entry.round ? ` — ${entry.round.label}, ${entry.scopeLabel}` : ''}
+      </h3>
+      {entry.unavailable || !entry.anova || !entry.summary ? (
+        <Callout icon="info-sign">{entry.unavailable ?? 'No analysis yet.'}</Callout>
+      ) : (
+        <>
+          <AnovaTable answer={{ anova: entry.anova, summary: entry.summary }} decimals={measure.decimals} unit={measure.unit} headingId={`${headingId}-anova`} />
+          <div className="fr-table-scroll">
+            <HTMLTable compact striped className="fr-findings-table" aria-label={`Means of ${measure.name}`}>
+              <thead>
+                <tr>
+                  <th scope="col">Treatment</th>
+                  <th scope="col" className="fr-num">n</th>
+                  <th scope="col" className="fr-num">Mean ± SE</th>
+                  <th scope="col">Letters</th>
+                  <th scope="col" className="fr-num">% of control</th>
+                </tr>
+              </thead>
+              <tbody>
+                {entry.means.map((mean) => (
+                  <tr key={mean.treatment}>
+                    <th scope="row" className="fr-code">
+                      {mean.treatment}
+                    </th>
+                    <td className="fr-num">{mean.n}</td>
+                    <td className="fr-num">
+                      {formatMeasureValue(mean.mean, measure.decimals)} ± {formatMeasureValue(mean.se, measure.decimals)}
+                    </td>
+                    <td className="fr-findings-letters">{mean.letters ?? ''}</td>
+                    <td className="fr-num">{mean.percentOfControl === null ? '—' : `${percent.format(mean.percentOfControl)} %`}</td>
+                  </tr>
+                ))}
+              </tbody>
+            </HTMLTable>
+          </div>
+          <p className="fr-muted fr-small">
+            {methodLabels[entry.method]} at α = {entry.alpha}: means sharing a letter do not differ significantly.
+          </p>
+          {entry.rankTest && <RankTestPanel kind={entry.rankTest.test} answer={entry.rankTest} />}
+          <Suspense fallback={<LoadingState what="the plot" />}>
+            <ReportMeansPlot means={entry.means} measureName={measure.name} unit={measure.unit} />
+          </Suspense>
+          {entry.warnings.length > 0 && (
+            <ul className="fr-findings-checks">
+              {entry.warnings.map((w) => (
+                <li key={w}>{w}</li>
+              ))}
+            </ul>
+          )}
+        </>
+      )}
+    </section>
+  );
 }

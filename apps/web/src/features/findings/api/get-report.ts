@@ -1,0 +1,14 @@
+import type { TrialReport } from '@friable/contracts';
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { apiRequest } from '../../../lib/api-client';
+
+/** GET /api/trials/:trialId/report — the protocol, sites and per measure the ANOVA and means of the latest round with data. */
+export function getReport(trialId: number): Promise<TrialReport> {
+  return apiRequest<TrialReport>(`/trials/${trialId}/report`);
+}
+
+export const reportQueryOptions = (trialId: number) => queryOptions({ queryKey: ['trials', trialId, 'report'], queryFn: () => getReport(trialId) });
+
+export function useReport(trialId: number) {
+  return useQuery(reportQueryOptions(trialId));
+}

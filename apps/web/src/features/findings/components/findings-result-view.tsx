@@ -1,0 +1,35 @@
+import type { Findings } from '@friable/contracts';
+import { contextPlots } from './context-plots';
+import { FindingsView } from './findings-view';
+import type { PlotSeries } from './plot-inputs';
+
+/** A trial's Findings (live or saved) in the shared view, every choice read from its own context. */
+export function FindingsResultView({ findings, treatmentNames, interaction }: { findings: Findings; treatmentNames?: Record<string, string>; interaction?: PlotSeries[] }) {
+  const { context } = findings;
+  return (
+    <FindingsView
+      answer={findings}
+      method={context.choices.method}
+      alpha={context.choices.alpha}
+      control={context.controlCode ?? undefined}
+      decimals={context.measure.decimals}
+      unit={context.measure.unit}
+      treatmentNames={treatmentNames}
+      percentOfControl={context.percentOfControl}
+      notices={context.notices}
+      rankTest={{ kind: context.rankTest.test, answer: context.rankTest }}
+      plots={{ ...contextPlots(context), interaction }}
+    />
+  );
+}
+
+/** "drain time (s) · Day 14 · all sites combined (…)", the line above an analysis. */
+export function FindingsCaption({ findings }: { findings: Findings }) {
+  const { measure, round, scope } = findings.context;
+  return (
+    <>
+      <strong>{measure.name}</strong> ({measure.unit}) · {round.label} · {scope.label}
+      {scope.siteNames.length > 1 ? ` (${scope.siteNames.join(', ')})` : ''}
+    </>
+  );
+}

@@ -1,0 +1,31 @@
+import type { ReportMean } from '@friable/contracts';
+import { PlotlyChart } from './plotly-chart';
+
+/** The report's plot of one measure: least-squares means with SE bars and their letters (loaded lazily with Plotly). */
+export default function ReportMeansPlot({ means, measureName, unit }: { means: ReportMean[]; measureName: string; unit: string }) {
+  return (
+    <div className="fr-findings-plots">
+      <PlotlyChart
+        label={`Means of ${measureName}`}
+        title="Means ± SE, with letters"
+        data={[
+          {
+            type: 'scatter',
+            mode: 'markers',
+            x: means.map((m) => m.treatment),
+            y: means.map((m) => m.mean),
+            error_y: { type: 'data', array: means.map((m) => m.se), visible: true, thickness: 1.5, color: '#5b4332' },
+            marker: { color: '#b5603d', size: 11, symbol: 'diamond' },
+          },
+        ]}
+        layout={{
+          xaxis: { type: 'category', categoryorder: 'array', categoryarray: means.map((m) => m.treatment), title: { text: 'Treatment' } },
+          yaxis: { title: { text: `${measureName} (${unit})` } },
+          showlegend: false,
+          // On a category axis a number is the category's position; a label such as "1" would be read as one too.
+          annotations: means.map((m, i) => ({ x: i, y: m.mean + m.se, text: `<b>${m.letters ?? ''}</b>`, showarrow: false, yshift: 14, font: { size: 14 } })),
+        }}
+      />
+    </div>
+  );
+}
