@@ -51,6 +51,8 @@ describe('the investigator plans blocks and reads the trial’s activity', () =>
       await page.getByRole('link', { name: 'Planner', exact: true }).click();
       await page.getByRole('heading', { name: 'Planner', exact: true }).waitFor();
 
+      // The person's trials are offered as sources of a CV (the demo keeps no saved analyses, so it is typed here).
+      await expect.poll(() => page.getByLabel('Earlier trial').locator('option').count()).toBeGreaterThan(1);
       await setBox(page, 'Treatments', '5');
       await setBox(page, 'CV', '20');
       await setBox(page, 'Difference', '25');

@@ -1,5 +1,8 @@
 import { PlannerPage } from '../../features/planner/components/planner-page';
+import { useTrials } from '../../features/trials/api/get-trials';
 
+/** The Planner, offered the person's trials to take a CV from their saved analyses. */
 export function PlannerRoute() {
-  return <PlannerPage />;
+  const trials = useTrials();
+  return <PlannerPage trials={trials.data ?? []} />;
 }

@@ -22,13 +22,14 @@ type PowerBody = { treatments: number; cv: number; difference: number; alpha: nu
  * A stand-in for POST /api/stats/power that answers with the same engine the API uses
  * (libs/stats, itself checked against R's noncentral F in power.test.ts), recording every body.
  */
-function powerServer(refuse?: { status: number; body: unknown }) {
+function powerServer(refuse?: { status: number; body: unknown }, reads: Record<string, unknown> = {}) {
   const bodies: PowerBody[] = [];
   vi.stubGlobal(
     'fetch',
     vi.fn(async (input: RequestInfo | URL, init?: RequestInit) => {
       const reply = (status: number, body: unknown) => new Response(JSON.stringify(body), { status, headers: { 'Content-Type': 'application/json' } });
       if (String(input) === '/api/auth/me') return reply(200, person);
+      if (String(input) in reads) return reply(200, reads[String(input)]);
       if (String(input) !== '/api/stats/power' || init?.method !== 'POST') return reply(404, { message: 'no such mock' });
       const body = JSON.parse(String(init.body)) as PowerBody;
       bodies.push(body);
@@ -117,5 +118,23 @@ describe('PlannerPage', () => {
     await fill({ CV: '60', Difference: '2', 'Target power': '0.99' });
     expect(await screen.findByRole('alert')).toHaveTextContent('100 blocks give less than power 0.99');
     expect(screen.getByText(/No recommendation for these numbers/)).toBeInTheDocument();
+  });
+
+  it('takes the CV from a saved analysis of one of the person’s trials, and says where it came from', async () => {
+    const summary = { id: 5, trialId: 3, title: 'Drain time at the end', measureName: 'Drain time', roundLabel: 'Week 2', scopeLabel: 'all sites combined' };
+    const bodies = powerServer(undefined, {
+      '/api/trials/3/analyses': [summary],
+      // An invented stored result: only its CV is read here.
+      '/api/trials/3/analyses/5': { ...summary, choices: { transform: 'log' }, result: { summary: { cv: 23.456 } } },
+    });
+    const trials = [{ id: 3, code: 'CLAY-T', title: 'Clay test trial', design: 'rcbd' as const, status: 'locked' as const, myRoles: ['investigator' as const], updatedAt: '2026-11-20T09:00:00.000Z' }];
+    renderWithApp(<PlannerPage trials={trials} />);
+    await userEvent.selectOptions(screen.getByLabelText('Earlier trial'), 'CLAY-T — Clay test trial');
+    await userEvent.selectOptions(await screen.findByLabelText('Saved analysis'), 'Drain time at the end · Drain time, Week 2');
+    await vi.waitFor(() => expect(screen.getByLabelText('CV')).toHaveValue('23.5'));
+    expect(screen.getByText('From Drain time at the end (Drain time, Week 2, all sites combined).')).toBeInTheDocument();
+    expect(screen.getByText(/used a log transform, so its CV describes the transformed values/)).toBeInTheDocument();
+    await userEvent.click(screen.getByRole('button', { name: 'Work out the blocks' }));
+    await vi.waitFor(() => expect(bodies[0]).toMatchObject({ cv: 23.5, targetPower: 0.8 }));
   });
 });

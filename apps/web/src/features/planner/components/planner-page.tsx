@@ -1,4 +1,5 @@
 import { Button, Callout, Card, H2, H3, HTMLTable } from '@blueprintjs/core';
+import type { TrialSummary } from '@friable/contracts';
 import { lazy, Suspense, useState, type FormEvent } from 'react';
 import { Field, FormErrorCallout } from '../../../components/field-errors';
 import { NumberText } from '../../../components/number-text';
@@ -6,6 +7,7 @@ import { ErrorState, LoadingState } from '../../../components/states';
 import { formatNumber } from '../../../lib/format';
 import { useBlocksNeeded } from '../api/compute-blocks-needed';
 import { usePowerCurve, type PlannerQuestion } from '../api/compute-power';
+import { CvPicker, type PickedCv } from './cv-picker';
 import { initialPlannerForm, plannerQuestionFrom, type PlannerForm } from './planner-form';
 import { blocksForMinimumDf, errorDfPerSite, MIN_ERROR_DF, plannerWarnings } from './planner-warnings';
 
@@ -21,8 +23,9 @@ function curveBlocks(treatments: number, recommended: number | null): number[] {
 }
 
 /** Planner: before a trial, how many blocks per site it takes to detect a given difference with a given power. */
-export function PlannerPage() {
+export function PlannerPage({ trials = [] }: { trials?: TrialSummary[] }) {
   const [form, setForm] = useState<PlannerForm>(initialPlannerForm);
+  const [cvSource, setCvSource] = useState<PickedCv | null>(null);
   const [asked, setAsked] = useState<{ question: PlannerQuestion; targetPower: number } | null>(null);
   const [formError, setFormError] = useState<unknown>(null);
   const set = (key: keyof PlannerForm) => (text: string) => setForm((all) => ({ ...all, [key]: text }));
@@ -67,13 +70,40 @@ export function PlannerPage() {
               </Field>
             </div>
             <div className="fr-form-row">
-              <Field label="CV" field="cv" error={error} help="Coefficient of variation from an earlier trial of the same measure.">
-                <NumberText id="fr-field-cv" value={form.cv} onChange={set('cv')} unit="%" />
+              <Field
+                label="CV"
+                field="cv"
+                error={error}
+                help={cvSource ? `From ${cvSource.from}.` : 'Coefficient of variation from an earlier trial of the same measure.'}
+              >
+                <NumberText
+                  id="fr-field-cv"
+                  value={form.cv}
+                  onChange={(text) => {
+                    setCvSource(null);
+                    set('cv')(text);
+                  }}
+                  unit="%"
+                />
               </Field>
               <Field label="Difference" field="difference" error={error} help="The smallest difference between two treatments worth detecting, as % of the mean.">
                 <NumberText id="fr-field-difference" value={form.difference} onChange={set('difference')} unit="%" />
               </Field>
             </div>
+            {trials.length > 0 && (
+              <CvPicker
+                trials={trials}
+                onPick={(picked) => {
+                  setCvSource(picked);
+                  set('cv')(String(picked.cv));
+                }}
+              />
+            )}
+            {cvSource?.caution && (
+              <Callout intent="warning" compact className="fr-gap">
+                {cvSource.caution}
+              </Callout>
+            )}
             <div className="fr-form-row">
               <Field label="Significance level" field="alpha" error={error} help="α of the F test; 0.05 is usual.">
                 <NumberText id="fr-field-alpha" value={form.alpha} onChange={set('alpha')} />
@@ -179,7 +209,7 @@ export function PlannerPage() {
             Several sites are pooled as copies of one layout that agree with each other. When sites disagree about the treatments, the combined test has fewer degrees of
             freedom and less power than shown; plan for a lost plot or site too.
           </li>
-          <li>The CV is typed here; take it from an earlier trial of the same measure, in similar soil.</li>
+          <li>The CV is best taken from an earlier trial of the same measure, in similar soil; one trial's CV is itself only an estimate.</li>
         </ul>
       </Card>
     </section>
