@@ -52,6 +52,7 @@ export function configureApp(app: NestExpressApplication): NestExpressApplicatio
 }
 
 export async function createApp(): Promise<NestExpressApplication> {
-  const app = await NestFactory.create<NestExpressApplication>(AppModule, { bufferLogs: false, bodyParser: false });
+  // Warnings and errors only: the route table at every start is noise for the people running it.
+  const app = await NestFactory.create<NestExpressApplication>(AppModule, { logger: ['warn', 'error'], bodyParser: false });
   return configureApp(app);
 }

@@ -1,5 +1,4 @@
 import 'reflect-metadata';
-import { Logger } from '@nestjs/common';
 import { createApp } from './bootstrap';
 import { readAppConfig } from './config/app.config';
 
@@ -7,7 +6,7 @@ async function main(): Promise<void> {
   const config = readAppConfig();
   const app = await createApp();
   await app.listen(config.port, config.host);
-  new Logger('Friable').log(`listening on http://${config.host}:${config.port} (OpenAPI page at /api/docs)`);
+  process.stdout.write(`Friable API listening on http://${config.host}:${config.port} (OpenAPI page at /api/docs)\n`);
 }
 
 main().catch((error: unknown) => {

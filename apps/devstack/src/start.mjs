@@ -1,7 +1,9 @@
 // npm start: installs what is missing, starts MariaDB on loopback, migrates, loads the demo scenario,
 // builds the web app and serves everything at http://127.0.0.1:3000 until Ctrl-C.
 import { spawn } from 'node:child_process';
+import { readFileSync } from 'node:fs';
 import { resolve } from 'node:path';
+import { setTimeout as sleep } from 'node:timers/promises';
 import { repoRoot } from './env.mjs';
 import { apiCommand, appEnvironment, buildWebApp, compileTypeScript, ensureDependencies, startDatabase } from './prepare.mjs';
 import { startMailSink } from './mail-sink.mjs';
@@ -46,18 +48,24 @@ if (!stopping) {
   api.on('exit', (code) => {
     if (!stopping) stopAll(code ?? 1);
   });
-  const password = env.DEMO_PASSWORD || 'friable-demo';
-  log(`Friable is starting at http://${env.HOST}:${env.PORT}`);
-  log(`demo accounts (password "${password}"):`);
-  for (const [email, role] of [
-    ['admin@example.org', 'instance administrator'],
-    ['ines.investigator@example.org', 'investigator'],
-    ['colin.collaborator@example.org', 'collaborator, Hollow Lane garden'],
-    ['carla.collaborator@example.org', 'collaborator, Millbrook garden'],
-    ['cody.collaborator@example.org', 'collaborator, Quarry Hill garden'],
-    ['rhea.reviewer@example.org', 'reviewer'],
-  ]) {
-    log(`  ${email.padEnd(34)} ${role}`);
+  await announceWhenReady();
+}
+
+/** Waits for the API to answer, then says where it is and who can sign in. */
+async function announceWhenReady() {
+  const url = `http://${env.HOST}:${env.PORT}`;
+  for (let attempt = 0; attempt < 240 && !stopping; attempt += 1) {
+    try {
+      if ((await fetch(`${url}/api/health`)).ok) break;
+    } catch {
+      // not listening yet
+    }
+    await sleep(250);
   }
+  if (stopping) return;
+  const { people } = JSON.parse(readFileSync(resolve(repoRoot, 'datasets/demo/people.json'), 'utf8'));
+  log(`Friable is running at ${url}`);
+  log(`demo accounts (password "${env.DEMO_PASSWORD || 'friable-demo'}"):`);
+  for (const person of people) log(`  ${person.email.padEnd(28)} ${person.name}, ${person.describe}`);
   log('press Ctrl-C to stop the app and the database');
 }
