@@ -62,3 +62,31 @@ export async function apiRequest<T>(path: string, init: RequestInit & { json?: u
   if (response.status === 204) return undefined as T;
   return (await response.json()) as T;
 }
+
+/**
+ * Downloads a file from the API with the session's token (a bare link would go without it and be
+ * refused) and saves it under the server's own file name, or `fallbackName` when it gives none.
+ */
+export async function apiDownload(path: string, fallbackName: string): Promise<void> {
+  const token = tokenStore.get();
+  let response: Response;
+  try {
+    response = await fetch(`/api${path}`, { headers: token ? { Authorization: `Bearer ${token}` } : {} });
+  } catch {
+    throw new ApiError(0, 'Friable cannot reach its server. Check that it is running, then try again.');
+  }
+  if (!response.ok) {
+    const error = await readProblem(response);
+    if (response.status === 401 && token) unauthorizedHandler?.();
+    throw error;
+  }
+  const url = URL.createObjectURL(await response.blob());
+  const link = document.createElement('a');
+  link.href = url;
+  link.download = /filename="([^"]+)"/.exec(response.headers.get('Content-Disposition') ?? '')?.[1] ?? fallbackName;
+  document.body.append(link);
+  link.click();
+  link.remove();
+  // Give the browser a moment to start the download before the address is let go.
+  setTimeout(() => URL.revokeObjectURL(url), 10_000);
+}
