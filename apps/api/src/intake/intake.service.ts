@@ -7,7 +7,7 @@ import type { Transaction } from 'sequelize';
 import type { Sequelize } from 'sequelize-typescript';
 import { ActivityService } from '../activity/activity.service';
 import type { AuthUser, TrialAccessContext } from '../auth/auth-user';
-import { TrialLockedException } from '../common/exceptions/trial-locked.exception';
+import { refuseIfClosed } from '../common/exceptions/trial-locked.exception';
 import { ProtocolGateService } from '../common/protocol/protocol-gate.service';
 import { mailConfig } from '../config/mail.config';
 import { MailService } from '../mail/mail.service';
@@ -137,7 +137,7 @@ export class IntakeService {
     if (!site) throw new NotFoundException('No such site in this trial.');
     assertMayWriteSite(access, site.id, site.name);
     const trial = (await this.trials.findByPk(access.trialId))!;
-    if (trial.status === 'locked' || trial.status === 'archived') throw new TrialLockedException(trial.status);
+    refuseIfClosed(trial);
     const round = await this.rounds.findOne({ where: { id: roundId, trialId: trial.id }, include: [MeasureRow] });
     if (!round) throw new NotFoundException('No such assessment round in this trial.');
     const measures = (round.measures ?? []).map(presentMeasure).sort((a, b) => a.position - b.position || a.id - b.id);

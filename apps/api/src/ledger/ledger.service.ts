@@ -6,7 +6,7 @@ import type { Sequelize } from 'sequelize-typescript';
 import { ActivityService } from '../activity/activity.service';
 import type { AuthUser, TrialAccessContext } from '../auth/auth-user';
 import { FieldProblemsException } from '../common/exceptions/field-problems.exception';
-import { TrialLockedException } from '../common/exceptions/trial-locked.exception';
+import { refuseIfClosed } from '../common/exceptions/trial-locked.exception';
 import { ProtocolGateService } from '../common/protocol/protocol-gate.service';
 import { describeStoredValue } from '../intake/parsing';
 import { presentMeasure } from '../measures/measure.presenter';
@@ -100,7 +100,7 @@ export class LedgerService {
   private async save(access: TrialAccessContext, user: AuthUser, cell: Cell, input: ObservationValueFields, version: number | null): Promise<Observation> {
     assertMayWriteSite(access, cell.siteId, cell.siteName);
     const trial = (await this.trials.findByPk(access.trialId))!;
-    if (trial.status === 'locked' || trial.status === 'archived') throw new TrialLockedException(trial.status);
+    refuseIfClosed(trial);
     const measure = presentMeasure((await this.measures.findByPk(cell.measureId))!);
     const reading = readEditedValue(input.value, input.missingReason, measure);
     if (!reading.ok) throw new FieldProblemsException([...reading.problems]);

@@ -4,7 +4,7 @@ import { InjectConnection, InjectModel } from '@nestjs/sequelize';
 import type { Sequelize } from 'sequelize-typescript';
 import { ActivityService } from '../activity/activity.service';
 import type { AuthUser, TrialAccessContext } from '../auth/auth-user';
-import { TrialLockedException } from '../common/exceptions/trial-locked.exception';
+import { refuseIfClosed } from '../common/exceptions/trial-locked.exception';
 import { ProtocolGateService } from '../common/protocol/protocol-gate.service';
 import { assertMayWriteSite } from '../observations/site-write-access';
 import { PlotRow } from '../plots/models/plot.model';
@@ -54,7 +54,7 @@ export class PhotosService {
     const place = await this.place(access.trialId, plotId, roundId);
     assertMayWriteSite(access, place.plot.siteId, place.plot.site?.name ?? 'this site');
     const trial = (await this.trials.findByPk(access.trialId))!;
-    if (trial.status === 'locked' || trial.status === 'archived') throw new TrialLockedException(trial.status);
+    refuseIfClosed(trial);
     return place;
   }
 

@@ -10,3 +10,8 @@ export class TrialLockedException extends ConflictException {
     );
   }
 }
+
+/** Throws TrialLockedException when the trial is locked or archived; every write path asks this one question. */
+export function refuseIfClosed(trial: { status: string }): void {
+  if (trial.status === 'locked' || trial.status === 'archived') throw new TrialLockedException(trial.status);
+}

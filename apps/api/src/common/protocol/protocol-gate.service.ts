@@ -6,7 +6,7 @@ import { PlotRow } from '../../plots/models/plot.model';
 import { SiteRow } from '../../sites/models/site.model';
 import { Trial } from '../../trials/models/trial.model';
 import { ObservationsExistException } from '../exceptions/observations-exist.exception';
-import { TrialLockedException } from '../exceptions/trial-locked.exception';
+import { refuseIfClosed } from '../exceptions/trial-locked.exception';
 import { ObservationsGuardService } from './observations-guard.service';
 
 /**
@@ -29,7 +29,7 @@ export class ProtocolGateService {
   async openForWrite(trialId: number, transaction: Transaction): Promise<Trial> {
     const trial = await this.trials.findByPk(trialId, { transaction, lock: transaction.LOCK.UPDATE });
     if (!trial) throw new NotFoundException('No such trial.');
-    if (trial.status === 'locked' || trial.status === 'archived') throw new TrialLockedException(trial.status);
+    refuseIfClosed(trial);
     return trial;
   }
 
