@@ -1,6 +1,6 @@
 import { Callout } from '@blueprintjs/core';
 import type { AnovaAnswer } from '@friable/contracts';
-import { formatP, formatStatistic } from './stat-format';
+import { formatStatistic, pClause } from './stat-format';
 
 /** The answer's warnings in words, then the checks of the model's assumptions. */
 export function AnalysisCautions({ answer }: { answer: AnovaAnswer }) {
@@ -25,15 +25,15 @@ export function AnalysisCautions({ answer }: { answer: AnovaAnswer }) {
       <ul className="fr-findings-checks">
         <li>
           Normality of the residuals (Shapiro–Wilk):{' '}
-          {shapiroWilk ? `W = ${formatStatistic(shapiroWilk.w)}, p = ${formatP(shapiroWilk.p)}${shapiroWilk.p < 0.05 ? ' — the residuals look far from normal.' : '.'}` : 'not computed.'}
+          {shapiroWilk ? `W = ${formatStatistic(shapiroWilk.w)}, ${pClause(shapiroWilk.p)}${shapiroWilk.p < 0.05 ? ' — the residuals look far from normal.' : '.'}` : 'not computed.'}
         </li>
         <li>
           Equal spread across treatments (Brown–Forsythe):{' '}
-          {brownForsythe ? `F = ${formatStatistic(brownForsythe.f)}, p = ${formatP(brownForsythe.p)}${brownForsythe.p < 0.05 ? ' — the spread differs between treatments.' : '.'}` : 'not computed (a treatment has a single plot).'}
+          {brownForsythe ? `F = ${formatStatistic(brownForsythe.f)}, ${pClause(brownForsythe.p)}${brownForsythe.p < 0.05 ? ' — the spread differs between treatments.' : '.'}` : 'not computed (a treatment has a single plot).'}
         </li>
         {bartlett && (
           <li>
-            Equal error variance across sites (Bartlett): K² = {formatStatistic(bartlett.statistic)}, p = {formatP(bartlett.p)}.
+            Equal error variance across sites (Bartlett): K² = {formatStatistic(bartlett.statistic)}, {pClause(bartlett.p)}.
           </li>
         )}
         <li>{flagged === 0 ? 'No residual lies more than 3 standard errors from its fitted value.' : `${flagged} residual${flagged === 1 ? ' lies' : 's lie'} more than 3 standard errors from the fitted value: check those plots.`}</li>

@@ -1,14 +1,18 @@
 import type { Findings } from '@friable/contracts';
 import { contextPlots } from './context-plots';
 import { FindingsView } from './findings-view';
+import { inProtocolOrder } from './stat-format';
 import type { PlotSeries } from './plot-inputs';
 
 /** A trial's Findings (live or saved) in the shared view, every choice read from its own context. */
 export function FindingsResultView({ findings, treatmentNames, interaction }: { findings: Findings; treatmentNames?: Record<string, string>; interaction?: PlotSeries[] }) {
   const { context } = findings;
+  // The engine lists means in the order the data came; people read them in the protocol's order.
+  const order = treatmentNames ? Object.keys(treatmentNames) : [];
+  const answer = order.length ? { ...findings, means: inProtocolOrder(findings.means, order) } : findings;
   return (
     <FindingsView
-      answer={findings}
+      answer={answer}
       method={context.choices.method}
       alpha={context.choices.alpha}
       control={context.controlCode ?? undefined}

@@ -1,4 +1,4 @@
-import { formatP, formatStatistic, significanceMark } from './stat-format';
+import { formatStatistic, pClause, significanceMark } from './stat-format';
 
 /** A rank test's answer; statistic, df and p are null when it could not run (unavailable says why). */
 export interface RankTestResult {
@@ -26,7 +26,7 @@ export function RankTestPanel({ kind, answer, error, pending }: { kind: 'friedma
       ) : answer ? (
         <>
           <p>
-            {name}: χ² = {formatStatistic(answer.statistic)} on {answer.df} df, p = {formatP(answer.p)}{' '}
+            {name}: χ² = {formatStatistic(answer.statistic)} on {answer.df} df, {pClause(answer.p)}{' '}
             <span className="fr-findings-mark">{significanceMark(answer.p)}</span>
           </p>
           {answer.droppedBlocks && answer.droppedBlocks.length > 0 && (

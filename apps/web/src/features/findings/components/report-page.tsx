@@ -9,6 +9,7 @@ import { useReport } from '../api/get-report';
 import { AnovaTable } from './anova-table';
 import { RankTestPanel } from './rank-test-panel';
 import { formatMeasureValue, methodLabels } from './stat-format';
+import { inProtocolOrder } from './stat-format';
 
 const ReportMeansPlot = lazy(() => import('./report-means-plot'));
 const percent = new Intl.NumberFormat('en-US', { maximumFractionDigits: 0 });
@@ -91,7 +92,7 @@ export function ReportPage({ trial }: { trial: TrialDetail }) {
         </HTMLTable>
       </div>
       {r.measures.map((m) => (
-        <ReportMeasureSection key={m.measure.id} entry={m} />
+        <ReportMeasureSection key={m.measure.id} entry={m} treatmentOrder={p.treatments.map((t) => t.code)} />
       ))}
       <section className="fr-report__measure">
         <h3 className="fr-findings-heading">Cautions</h3>
@@ -116,8 +117,9 @@ export function ReportPage({ trial }: { trial: TrialDetail }) {
   );
 }
 
-function ReportMeasureSection({ entry }: { entry: ReportMeasure }) {
+function ReportMeasureSection({ entry, treatmentOrder }: { entry: ReportMeasure; treatmentOrder: string[] }) {
   const { measure } = entry;
+  const means = inProtocolOrder(entry.means, treatmentOrder);
   const headingId = `fr-report-measure-${measure.id}`;
   return (
     <section className="fr-report__measure" aria-labelledby={`${headingId}-name`}>
@@ -141,7 +143,7 @@ function ReportMeasureSection({ entry }: { entry: ReportMeasure }) {
                 </tr>
               </thead>
               <tbody>
-                {entry.means.map((mean) => (
+                {means.map((mean) => (
                   <tr key={mean.treatment}>
                     <th scope="row" className="fr-code">
                       {mean.treatment}
@@ -162,7 +164,7 @@ function ReportMeasureSection({ entry }: { entry: ReportMeasure }) {
           </p>
           {entry.rankTest && <RankTestPanel kind={entry.rankTest.test} answer={entry.rankTest} />}
           <Suspense fallback={<LoadingState what="the plot" />}>
-            <ReportMeansPlot means={entry.means} measureName={measure.name} unit={measure.unit} />
+            <ReportMeansPlot means={means} measureName={measure.name} unit={measure.unit} />
           </Suspense>
           {entry.warnings.length > 0 && (
             <ul className="fr-findings-checks">

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { formatP, formatStatistic, significanceMark, termLabel } from './stat-format';
+import { formatP, formatStatistic, significanceMark, termLabel, inProtocolOrder, pClause } from './stat-format';
 
 describe('statistic formatting', () => {
   it('keeps four significant digits and groups large values', () => {
@@ -23,5 +23,19 @@ describe('statistic formatting', () => {
   it('names terms in words', () => {
     expect(termLabel('site:treatment')).toBe('Site × treatment');
     expect(termLabel('spacing:density')).toBe('Spacing × Density');
+  });
+});
+
+describe('inProtocolOrder', () => {
+  it('puts rows in the protocol order and keeps unknown treatments last, as they came', () => {
+    const rows = [{ treatment: 'LFM' }, { treatment: 'GYP' }, { treatment: 'X2' }, { treatment: 'CTL' }, { treatment: 'X1' }];
+    expect(inProtocolOrder(rows, ['CTL', 'GYP', 'LFM']).map((r) => r.treatment)).toEqual(['CTL', 'GYP', 'LFM', 'X2', 'X1']);
+  });
+});
+
+describe('pClause', () => {
+  it('reads as a sentence for small and ordinary p-values', () => {
+    expect(pClause(0.00001)).toBe('p < 0.0001');
+    expect(pClause(0.0314078541739)).toBe('p = 0.0314');
   });
 });

@@ -19,6 +19,12 @@ export function formatP(p: number | null | undefined): string {
   return Number(p.toPrecision(3)).toString();
 }
 
+/** "p = 0.0314" or "p < 0.0001", for a sentence. */
+export function pClause(p: number | null | undefined): string {
+  const text = formatP(p);
+  return text.startsWith('<') ? `p ${text}` : `p = ${text}`;
+}
+
 /** Friable's significance marks, strongest first; the legend beside every table lists them. */
 export const significanceMarks = [
   { below: 0.001, mark: '***', words: 'p < 0.001' },
@@ -72,3 +78,12 @@ export const transformLabels: Record<string, string> = {
   sqrt: 'Square root',
   'arcsine-sqrt': 'Arcsine of the square root',
 };
+
+/** Rows in the protocol's treatment order (control and amendments as the investigator listed them); others after, as they came. */
+export function inProtocolOrder<T extends { treatment: string }>(rows: readonly T[], codes: readonly string[]): T[] {
+  const rank = new Map(codes.map((code, index) => [code, index]));
+  return rows
+    .map((row, index) => ({ row, index }))
+    .sort((a, b) => (rank.get(a.row.treatment) ?? codes.length + a.index) - (rank.get(b.row.treatment) ?? codes.length + b.index))
+    .map(({ row }) => row);
+}
