@@ -56,8 +56,10 @@ export function FindingsPage({ trial }: { trial: TrialDetail }) {
   }, [stepFurther]);
 
   const combined = query !== null && !query.siteId && combinable;
+  // The per-site analyses feed only the interaction plot: asked once the combined one has answered,
+  // so they neither delay the first table nor run for a round that has no values.
   const interaction = useSiteMeans(
-    combined
+    combined && findings.isSuccess
       ? trial.sites.map((site) => {
           const siteQuery = { ...query!, siteId: site.id };
           return { name: site.name, options: { queryKey: findingsQueryOptions(trial.id, siteQuery).queryKey, queryFn: () => getFindings(trial.id, siteQuery) } };
