@@ -12,6 +12,7 @@ import { PlannerRoute } from './routes/planner';
 import { SignInRoute } from './routes/sign-in';
 import { AcceptInvitationRoute, IntakeRoute, LedgerRoute, PlotPlanRoute, ProtocolRoute, SitesRoute, TeamRoute } from './routes/trial-sections';
 import { TrialsRoute } from './routes/trials';
+import { PeopleRoute } from './routes/people';
 
 export const routes: RouteObject[] = [
   { path: paths.signIn.path, element: <SignInRoute /> },
@@ -48,6 +49,7 @@ export const routes: RouteObject[] = [
       { path: paths.quickAnalysis.path, element: <QuickAnalysisRoute /> },
       { path: paths.planner.path, element: <PlannerRoute /> },
       { path: paths.outbox.path, element: <OutboxPage /> },
+      { path: paths.people.path, element: <PeopleRoute /> },
       { path: '*', element: <NotFoundRoute /> },
     ],
   },

@@ -34,4 +34,5 @@ export const paths = {
   quickAnalysis: { path: '/quick-analysis', href: () => '/quick-analysis' },
   acceptInvitation: { path: '/invitations/:token', href: (token: string) => `/invitations/${token}` },
   outbox: { path: '/outbox', href: () => '/outbox' },
+  people: { path: '/people', href: () => '/people' },
 } as const;

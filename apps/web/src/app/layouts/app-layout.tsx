@@ -33,6 +33,11 @@ export function AppLayout() {
           <NavLink to={paths.planner.href()} className="fr-nav-link">
             Planner
           </NavLink>
+          {user?.isAdmin && (
+            <NavLink to={paths.people.href()} className="fr-nav-link">
+              People
+            </NavLink>
+          )}
           {outbox && (
             <NavLink to={paths.outbox.href()} className="fr-nav-link fr-outbox-link">
               Outbox
