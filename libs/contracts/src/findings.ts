@@ -113,7 +113,8 @@ export interface RankTestAnswer {
 /** Query of GET /api/trials/:trialId/findings (numbers as query text). */
 export interface FindingsQuery {
   measureId: number;
-  roundId: number;
+  /** Absent = the latest round holding values of the measure in the scope (context.choices says which). */
+  roundId?: number;
   /** Absent = all sites combined. */
   siteId?: number;
   /** Default 'random' (matters only with several sites combined). */

@@ -128,6 +128,18 @@ describe('Findings: the analysis of stored data through the engine', () => {
     expect(dunnett.comparisons.dunnett!.pairs.every((p) => p.b === 'CTL' || p.a === 'CTL')).toBe(true);
   });
 
+  it('without a round, analyses the latest round holding values and says which (the same numbers as asking for it)', async () => {
+    const latest = await get(`${base}/findings?measureId=${measure('DRAIN').id}`);
+    expect(latest.status).toBe(200);
+    // The demo holds values for Day 0 and Day 14; Day 28 is still to be measured.
+    expect(latest.body.context.choices.roundId).toBe(round('Day 14').id);
+    const asked = await get(`${base}/findings?measureId=${measure('DRAIN').id}&roundId=${round('Day 14').id}`);
+    const { context: latestContext, ...latestAnalysis } = latest.body as Findings;
+    const { context: askedContext, ...askedAnalysis } = asked.body as Findings;
+    expect(latestAnalysis).toEqual(askedAnalysis);
+    expect(latestContext.dataHash).toBe(askedContext.dataHash);
+  });
+
   it('refuses unknown choices by name, no data by a sentence, and non-members with 404', async () => {
     const bad = await get(`${base}/findings?measureId=${measure('CRUST').id}&roundId=${round('Day 0').id}&method=scheffe&alpha=2`);
     expect(bad.status).toBe(422);

@@ -39,10 +39,10 @@ function refuse(message: string): never {
   throw new UnprocessableEntityException({ statusCode: 422, error: 'Unprocessable Entity', message });
 }
 
-function resolveChoices(query: FindingsQueryDto): FindingsChoices {
+function resolveChoices(query: FindingsQueryDto, roundId: number): FindingsChoices {
   return {
     measureId: query.measureId,
-    roundId: query.roundId,
+    roundId,
     siteId: query.siteId ?? null,
     sitesAre: query.sitesAre ?? 'random',
     transform: query.transform ?? 'none',
@@ -78,8 +78,12 @@ export class FindingsService {
 
   async findings(trialId: number, query: FindingsQueryDto, protocol?: TrialDetail): Promise<Findings> {
     const trial = protocol ?? (await this.protocol(trialId));
-    const choices = resolveChoices(query);
-    const measure = trial.measures.find((m) => m.id === choices.measureId) ?? refuse(`measureId ${choices.measureId} is not a measure of this trial.`);
+    const measure = trial.measures.find((m) => m.id === query.measureId) ?? refuse(`measureId ${query.measureId} is not a measure of this trial.`);
+    const roundId =
+      query.roundId ??
+      (await this.latestRoundWithValues(trial, measure.id, query.siteId ?? null)) ??
+      refuse(`There are no values of ${measure.name} ${query.siteId ? 'at this site' : 'at any site'} yet.`);
+    const choices = resolveChoices(query, roundId);
     const round = trial.rounds.find((r) => r.id === choices.roundId) ?? refuse(`roundId ${choices.roundId} is not an assessment round of this trial.`);
     const site = choices.siteId === null ? null : (trial.sites.find((s) => s.id === choices.siteId) ?? refuse(`siteId ${choices.siteId} is not a site of this trial.`));
     const data = await this.prepare(trial, choices, choices.roundId);
@@ -139,6 +143,14 @@ export class FindingsService {
       engineVersion: engineVersion(),
     };
     return { ...analysis, context };
+  }
+
+  /** The latest round (by day) that holds a value of the measure in the scope, when none was chosen. */
+  private async latestRoundWithValues(trial: TrialDetail, measureId: number, siteId: number | null): Promise<number | null> {
+    const stored = await this.observations.list(trial.id, { measureId, ...(siteId !== null ? { siteId } : {}) });
+    const withValues = new Set(stored.filter((o) => o.valueText !== null).map((o) => o.roundId));
+    const latest = trial.rounds.filter((r) => withValues.has(r.id)).sort((a, b) => b.dayOffset - a.dayOffset || b.id - a.id)[0];
+    return latest?.id ?? null;
   }
 
   /** The hash of the data the choices would analyse now (null when there are none). */

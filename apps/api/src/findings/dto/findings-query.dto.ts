@@ -13,11 +13,12 @@ export class FindingsQueryDto {
   @Min(1, { message: 'measureId must be a whole number' })
   measureId: number;
 
-  @ApiProperty({ description: 'The assessment round to analyse.' })
+  @ApiPropertyOptional({ description: 'The assessment round to analyse; leave out for the latest round holding values of the measure in this scope.' })
+  @IsOptional()
   @Type(() => Number)
   @IsInt({ message: 'roundId must be a whole number' })
   @Min(1, { message: 'roundId must be a whole number' })
-  roundId: number;
+  roundId?: number;
 
   @ApiPropertyOptional({ description: 'One site; leave out for all sites combined.' })
   @IsOptional()

@@ -1,6 +1,6 @@
 import { Button, Callout, HTMLSelect } from '@blueprintjs/core';
 import type { FindingsQuery, SeparationMethod, TrialDetail } from '@friable/contracts';
-import { useEffect, useMemo, useState } from 'react';
+import { useMemo } from 'react';
 import { Link, useSearchParams } from 'react-router-dom';
 import { EmptyState, ErrorState, LoadingState } from '../../../components/states';
 import { paths } from '../../../config/paths';
@@ -37,23 +37,29 @@ export function FindingsPage({ trial }: { trial: TrialDetail }) {
     () => [...trial.rounds].filter((r) => (measure ? r.measureIds.includes(measure.id) : false)).sort((a, b) => b.dayOffset - a.dayOffset),
     [trial.rounds, measure],
   );
-  // With no round chosen, start at the latest round and step back while a round has no values yet.
-  const [stepBack, setStepBack] = useState(0);
+  // With no round chosen the server analyses the latest round holding values, and says which.
   const chosenRound = rounds.find((r) => r.id === choices.roundId);
-  const round = chosenRound ?? rounds[Math.min(stepBack, Math.max(rounds.length - 1, 0))];
   const combinable = trial.design !== 'crd' && trial.sites.length > 1;
   const siteId = choices.siteId ?? (combinable ? undefined : trial.sites[0]?.id);
   const options: AnalysisOptions = { method: choices.method, transform: choices.transform, alpha: choices.alpha, sitesAre: choices.sitesAre };
   const query: FindingsQuery | null =
-    measure && round
-      ? { measureId: measure.id, roundId: round.id, ...(siteId ? { siteId } : {}), sitesAre: options.sitesAre, transform: options.transform, method: options.method, alpha: options.alpha }
+    measure && rounds.length > 0
+      ? {
+          measureId: measure.id,
+          ...(chosenRound ? { roundId: chosenRound.id } : {}),
+          ...(siteId ? { siteId } : {}),
+          sitesAre: options.sitesAre,
+          transform: options.transform,
+          method: options.method,
+          alpha: options.alpha,
+        }
       : null;
   const findings = useFindings(trial.id, query);
   const noData = findings.error instanceof ApiError && findings.error.status === 422 && /no values/i.test(findings.error.message);
-  const stepFurther = noData && !chosenRound && stepBack < rounds.length - 1 && !findings.isFetching;
-  useEffect(() => {
-    if (stepFurther) setStepBack((step) => step + 1);
-  }, [stepFurther]);
+  const analysedRoundId = findings.data?.context.choices.roundId;
+  const round = chosenRound ?? rounds.find((r) => r.id === analysedRoundId) ?? rounds[0];
+  // The exact choices of the analysis on screen, round included, for saving and for the per-site plots.
+  const shownQuery: FindingsQuery | null = query && analysedRoundId ? { ...query, roundId: analysedRoundId } : query;
 
   const combined = query !== null && !query.siteId && combinable;
   // The per-site analyses feed only the interaction plot: asked once the combined one has answered,
@@ -61,7 +67,7 @@ export function FindingsPage({ trial }: { trial: TrialDetail }) {
   const interaction = useSiteMeans(
     combined && findings.isSuccess
       ? trial.sites.map((site) => {
-          const siteQuery = { ...query!, siteId: site.id };
+          const siteQuery = { ...shownQuery!, siteId: site.id };
           return { name: site.name, options: { queryKey: findingsQueryOptions(trial.id, siteQuery).queryKey, queryFn: () => getFindings(trial.id, siteQuery) } };
         })
       : [],
@@ -95,7 +101,7 @@ export function FindingsPage({ trial }: { trial: TrialDetail }) {
         before={
           <>
             <Choice label="Measure">
-              <HTMLSelect aria-label="Measure" value={measure.id} onChange={(e) => { setStepBack(0); choose({ measure: e.target.value, round: undefined }); }}>
+              <HTMLSelect aria-label="Measure" value={measure.id} onChange={(e) => choose({ measure: e.target.value, round: undefined })}>
                 {measures.map((m) => (
                   <option key={m.id} value={m.id}>
                     {m.name}
@@ -157,7 +163,7 @@ export function FindingsPage({ trial }: { trial: TrialDetail }) {
             {findings.isFetching && <span className="fr-muted"> · updating…</span>}
           </p>
           <FindingsResultView findings={data} treatmentNames={treatmentNames} interaction={interaction} />
-          {query && <SnapshotsPanel trial={trial} query={query} defaultTitle={`${data.context.measure.name}, ${data.context.round.label}, ${data.context.scope.label}`} onOpen={(id) => choose({ analysis: String(id) })} />}
+          {shownQuery && <SnapshotsPanel trial={trial} query={shownQuery} defaultTitle={`${data.context.measure.name}, ${data.context.round.label}, ${data.context.scope.label}`} onOpen={(id) => choose({ analysis: String(id) })} />}
         </>
       ) : null}
     </div>
