@@ -1,5 +1,6 @@
 // npm test: the same preparation as npm start with a separate test database (the demo data is never
 // touched), then type-check, lint and every suite. Prints one closing line: "N passed, N failed".
+import { spawnSync } from 'node:child_process';
 import { existsSync, mkdirSync, readFileSync, rmSync } from 'node:fs';
 import { resolve } from 'node:path';
 import { repoRoot } from './env.mjs';
@@ -11,9 +12,9 @@ const npm = 'npm';
 const started = Date.now();
 ensureDependencies();
 ensureDebianPackages(['chromium'], { reason: "Chromium (Debian's chromium, for the browser tests)", probe: () => existsSync('/usr/bin/chromium') });
-ensureDebianPackages(['r-base-core', 'r-cran-emmeans', 'r-cran-multcomp', 'r-cran-car'], {
+ensureDebianPackages(['r-base-core', 'r-cran-emmeans', 'r-cran-multcomp', 'r-cran-car', 'r-cran-jsonlite'], {
   reason: 'R with emmeans, multcomp and car (the statistics reference implementation)',
-  probe: () => commandExists('Rscript'),
+  probe: () => commandExists('Rscript') && spawnSync('Rscript', ['-e', 'suppressMessages({library(emmeans); library(multcomp); library(jsonlite)})'], { stdio: 'ignore' }).status === 0,
 });
 
 const base = appEnvironment();

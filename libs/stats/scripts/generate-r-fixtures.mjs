@@ -3,7 +3,7 @@
 // anova(lm(...)) with terms in order, emmeans least-squares means and Tukey pairs, multcomp glht Dunnett)
 // and writes datasets/reference/r-anova-fixtures.json, which src/r-reference.test.ts compares against.
 //
-// Usage: node libs/stats/scripts/generate-r-fixtures.mjs [--cases 96] [--seed 20240611]
+// Usage: node libs/stats/scripts/generate-r-fixtures.mjs [--cases 96] [--seed 20240611] [--output FILE]
 // Needs /usr/bin/Rscript with the Debian packages r-cran-emmeans, r-cran-multcomp, r-cran-jsonlite.
 import { execFileSync } from 'node:child_process';
 import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
@@ -12,11 +12,15 @@ import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 
 const here = path.dirname(fileURLToPath(import.meta.url));
-const output = path.resolve(here, '../../../datasets/reference/r-anova-fixtures.json');
-const argument = (name, fallback) => {
+const textArgument = (name) => {
   const at = process.argv.indexOf(`--${name}`);
-  return at >= 0 ? Number(process.argv[at + 1]) : fallback;
+  return at >= 0 ? process.argv[at + 1] : undefined;
 };
+const argument = (name, fallback) => {
+  const text = textArgument(name);
+  return text === undefined ? fallback : Number(text);
+};
+const output = path.resolve(textArgument('output') ?? path.resolve(here, '../../../datasets/reference/r-anova-fixtures.json'));
 const caseCount = argument('cases', 96);
 const seed = argument('seed', 20240611);
 
