@@ -2,6 +2,7 @@ import { Module } from '@nestjs/common';
 import { ConfigModule, type ConfigType } from '@nestjs/config';
 import { APP_FILTER, APP_GUARD } from '@nestjs/core';
 import { SequelizeModule } from '@nestjs/sequelize';
+import { ThrottlerGuard, ThrottlerModule } from '@nestjs/throttler';
 import { resolve } from 'node:path';
 import { ActivityModule } from './activity/activity.module';
 import { AuthModule } from './auth/auth.module';
@@ -53,6 +54,14 @@ import { ReportsModule } from './reports/reports.module';
         synchronize: false,
       }),
     }),
+    // Flood protection per client address (@nestjs/throttler); sign-in has its own, tighter limit.
+    ThrottlerModule.forRootAsync({
+      inject: [authConfig.KEY],
+      useFactory: (config: ConfigType<typeof authConfig>) => ({
+        throttlers: [{ name: 'default', ttl: 60_000, limit: config.requestsPerMinute }],
+        errorMessage: 'Too many requests from this address. Please wait a minute and try again.',
+      }),
+    }),
     AuthModule,
     UsersModule,
     StatsModule,
@@ -81,6 +90,7 @@ import { ReportsModule } from './reports/reports.module';
     ReportsModule,
   ],
   providers: [
+    { provide: APP_GUARD, useClass: ThrottlerGuard },
     { provide: APP_GUARD, useClass: JwtAuthGuard },
     { provide: APP_GUARD, useClass: AccessGuard },
     { provide: APP_FILTER, useClass: ProblemFilter },

@@ -1,5 +1,7 @@
 import { Body, Controller, Get, HttpCode, Ip, Post } from '@nestjs/common';
 import { ApiOkResponse, ApiTags, ApiTooManyRequestsResponse, ApiUnauthorizedResponse } from '@nestjs/swagger';
+import { Throttle } from '@nestjs/throttler';
+import { readAuthConfig } from '../config/auth.config';
 import type { AuthUser } from './auth-user';
 import { AuthService } from './auth.service';
 import { Public, SignedIn } from '../common/decorators/access.decorator';
@@ -13,6 +15,8 @@ export class AuthController {
 
   @Post('login')
   @Public()
+  // Every attempt counts here, right or wrong; LoginAttemptsService separately refuses after repeated failures.
+  @Throttle({ default: { limit: () => readAuthConfig().loginAttemptsPerMinute, ttl: 60_000 } })
   @HttpCode(200)
   @ApiOkResponse({ description: 'A bearer token and the signed-in person.' })
   @ApiUnauthorizedResponse({ description: 'Wrong e-mail or password (the same answer for both).' })
