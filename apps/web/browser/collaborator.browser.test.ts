@@ -73,6 +73,9 @@ describe('a collaborator of the demo trial', () => {
     expect(await phonePage.evaluate(() => document.documentElement.scrollWidth - window.innerWidth)).toBeLessThanOrEqual(0);
     await screenshot(phonePage, 'plot-plan-phone');
     await phonePage.getByRole('link', { name: 'Protocol', exact: true }).click();
+    // Wait for the Protocol page itself: until it replaces the plot plan, "GYP" stands on every plot.
+    await phonePage.waitForURL(/\/protocol$/);
+    await phonePage.getByRole('heading', { name: 'Treatments', exact: true }).waitFor();
     await phonePage.getByText('GYP', { exact: true }).waitFor();
     expect(await phonePage.evaluate(() => document.documentElement.scrollWidth - window.innerWidth)).toBeLessThanOrEqual(0);
     await screenshot(phonePage, 'protocol-phone');
