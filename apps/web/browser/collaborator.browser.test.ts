@@ -1,7 +1,7 @@
 import { readFileSync } from 'node:fs';
-import type { Browser, BrowserContext, Page } from 'playwright-core';
-import { afterAll, afterEach, beforeAll, beforeEach, describe, expect, it } from 'vitest';
-import { forbidOutsideRequests, launchBrowser, screenshot, signIn } from './support';
+import type { Page } from 'playwright-core';
+import { describe, expect, it } from 'vitest';
+import { screenshot, signIn, useBrowserSession } from './support';
 
 const demoTitle = 'Heavy-clay amendments across three Fernwick gardens';
 
@@ -13,48 +13,33 @@ async function openDemoTrial(page: Page): Promise<number> {
 }
 
 describe('a collaborator of the demo trial', () => {
-  let browser: Browser;
-  let context: BrowserContext;
-  let page: Page;
-  let outside: string[];
-
-  beforeAll(async () => {
-    browser = await launchBrowser();
-  });
-  afterAll(() => browser.close());
-  beforeEach(async () => {
-    context = await browser.newContext({ viewport: { width: 1280, height: 800 }, acceptDownloads: true });
-    page = await context.newPage();
-    outside = [];
-    forbidOutsideRequests(page, outside);
-  });
-  afterEach(() => context.close());
+  const session = useBrowserSession({ acceptDownloads: true });
 
   it('finds their own site’s plot plan, amounts per plot and template', async () => {
-    await signIn(page, 'hollow.lane@example.org');
-    await openDemoTrial(page);
-    await page.getByRole('link', { name: 'Plot plan', exact: true }).click();
+    await signIn(session.page, 'hollow.lane@example.org');
+    await openDemoTrial(session.page);
+    await session.page.getByRole('link', { name: 'Plot plan', exact: true }).click();
     // They start on their own site.
-    await expect(page.getByLabel('Site', { exact: true }).inputValue()).resolves.not.toBe('');
-    await expect(page.getByLabel('Site', { exact: true }).locator('option:checked').textContent()).resolves.toBe('Hollow Lane Community Garden (your site)');
-    const map = page.getByRole('table', { name: 'Plot plan of Hollow Lane Community Garden', exact: true });
+    await expect(session.page.getByLabel('Site', { exact: true }).inputValue()).resolves.not.toBe('');
+    await expect(session.page.getByLabel('Site', { exact: true }).locator('option:checked').textContent()).resolves.toBe('Hollow Lane Community Garden (your site)');
+    const map = session.page.getByRole('table', { name: 'Plot plan of Hollow Lane Community Garden', exact: true });
     await map.waitFor();
     // Five blocks of the five demo treatments.
     await expect(map.getByRole('row').count()).resolves.toBe(5);
     await expect(map.getByText('GYP', { exact: true }).count()).resolves.toBe(5);
 
     // 40 lb/1000 ft² of gypsum on a 1.2 m × 1.2 m bed: 4.88243 g/m² per lb/1000 ft² × 40 × 1.44 m² = 281 g (DOMAIN.md factors).
-    const amounts = page.getByRole('table', { name: 'Amounts per plot at Hollow Lane Community Garden' });
+    const amounts = session.page.getByRole('table', { name: 'Amounts per plot at Hollow Lane Community Garden' });
     await amounts.waitFor();
     const gypsum = amounts.getByRole('row').filter({ hasText: 'GYP' });
     await expect(gypsum.getByText('281 g · 9.92 oz').isVisible()).resolves.toBe(true);
     // A 1 in compost layer: 25.4 L/m² × 1.44 m² = 36.6 L = 9.66 US gal.
     await expect(amounts.getByRole('row').filter({ hasText: 'CMP' }).getByText('36.6 L · 9.66 gal').isVisible()).resolves.toBe(true);
-    await expect(page.getByText(/dust mask and eye protection/).isVisible()).resolves.toBe(true);
-    await screenshot(page, 'plot-plan-collaborator');
+    await expect(session.page.getByText(/dust mask and eye protection/).isVisible()).resolves.toBe(true);
+    await screenshot(session.page, 'plot-plan-collaborator');
 
-    const downloading = page.waitForEvent('download');
-    await page.getByRole('button', { name: 'CSV template — Day 0' }).click();
+    const downloading = session.page.waitForEvent('download');
+    await session.page.getByRole('button', { name: 'CSV template — Day 0' }).click();
     const download = await downloading;
     expect(download.suggestedFilename()).toBe('FW-CLAY-26-HL-Day-0.csv');
     const lines = readFileSync((await download.path())!, 'utf8').split('\r\n').filter(Boolean);
@@ -64,7 +49,7 @@ describe('a collaborator of the demo trial', () => {
     expect(lines).toHaveLength(26);
     expect(lines.slice(1).every((line) => /^HL-[^,]+,[1-5],(CTL|GYP|CMP|SHL|LFM),/.test(line))).toBe(true);
 
-    const phone = await browser.newContext({ viewport: { width: 390, height: 844 }, isMobile: true });
+    const phone = await session.browser.newContext({ viewport: { width: 390, height: 844 }, isMobile: true });
     const phonePage = await phone.newPage();
     await signIn(phonePage, 'hollow.lane@example.org');
     await openDemoTrial(phonePage);
@@ -80,21 +65,21 @@ describe('a collaborator of the demo trial', () => {
     expect(await phonePage.evaluate(() => document.documentElement.scrollWidth - window.innerWidth)).toBeLessThanOrEqual(0);
     await screenshot(phonePage, 'protocol-phone');
     await phone.close();
-    expect(outside).toEqual([]);
+    expect(session.outside).toEqual([]);
   });
 
   it('cannot change the protocol: no edit controls, and a direct PATCH answers 403', async () => {
-    await signIn(page, 'hollow.lane@example.org');
-    const trialId = await openDemoTrial(page);
-    await page.getByText('only its investigator can change it', { exact: false }).waitFor();
-    await page.getByText('GYP', { exact: true }).first().waitFor();
-    await expect(page.getByRole('button', { name: /^(Edit|Add|Remove|Activate)/ }).count()).resolves.toBe(0);
-    await screenshot(page, 'protocol-collaborator');
-    await page.getByRole('link', { name: 'Sites', exact: true }).click();
-    await page.getByText('Hollow Lane Community Garden', { exact: false }).first().waitFor();
-    await expect(page.getByRole('button', { name: /^(Edit|Add|Remove|Randomize)/ }).count()).resolves.toBe(0);
+    await signIn(session.page, 'hollow.lane@example.org');
+    const trialId = await openDemoTrial(session.page);
+    await session.page.getByText('only its investigator can change it', { exact: false }).waitFor();
+    await session.page.getByText('GYP', { exact: true }).first().waitFor();
+    await expect(session.page.getByRole('button', { name: /^(Edit|Add|Remove|Activate)/ }).count()).resolves.toBe(0);
+    await screenshot(session.page, 'protocol-collaborator');
+    await session.page.getByRole('link', { name: 'Sites', exact: true }).click();
+    await session.page.getByText('Hollow Lane Community Garden', { exact: false }).first().waitFor();
+    await expect(session.page.getByRole('button', { name: /^(Edit|Add|Remove|Randomize)/ }).count()).resolves.toBe(0);
 
-    const answer = await page.evaluate(async (id) => {
+    const answer = await session.page.evaluate(async (id) => {
       const response = await fetch(`/api/trials/${id}`, {
         method: 'PATCH',
         headers: { 'Content-Type': 'application/json', Authorization: `Bearer ${localStorage.getItem('friable.accessToken')}` },
@@ -103,7 +88,7 @@ describe('a collaborator of the demo trial', () => {
       return response.status;
     }, trialId);
     expect(answer).toBe(403);
-    await page.reload();
-    await page.getByRole('heading', { name: demoTitle }).waitFor();
+    await session.page.reload();
+    await session.page.getByRole('heading', { name: demoTitle }).waitFor();
   });
 });

@@ -1,6 +1,7 @@
 import { mkdirSync } from 'node:fs';
 import { resolve } from 'node:path';
-import { chromium, type Browser, type Page } from 'playwright-core';
+import { chromium, type Browser, type BrowserContext, type BrowserContextOptions, type Page } from 'playwright-core';
+import { afterAll, afterEach, beforeAll, beforeEach } from 'vitest';
 import { repoRoot } from '../../devstack/src/env.mjs';
 
 export const baseUrl = () => process.env.FRIABLE_BROWSER_BASE_URL ?? 'http://127.0.0.1:3999';
@@ -34,4 +35,29 @@ export function forbidOutsideRequests(page: Page, seen: string[]): void {
     const url = new URL(request.url());
     if (!['127.0.0.1', 'localhost'].includes(url.hostname) && url.protocol !== 'data:' && url.protocol !== 'blob:') seen.push(request.url());
   });
+}
+
+export interface BrowserSession {
+  browser: Browser;
+  context: BrowserContext;
+  page: Page;
+  /** Requests to any host other than the app's own, seen on `page` (should stay empty). */
+  outside: string[];
+}
+
+/** One browser for the test file and a fresh laptop-sized context and page per test. */
+export function useBrowserSession(contextOptions: BrowserContextOptions = {}): BrowserSession {
+  const session = {} as BrowserSession;
+  beforeAll(async () => {
+    session.browser = await launchBrowser();
+  });
+  afterAll(() => session.browser.close());
+  beforeEach(async () => {
+    session.context = await session.browser.newContext({ viewport: { width: 1280, height: 800 }, ...contextOptions });
+    session.page = await session.context.newPage();
+    session.outside = [];
+    forbidOutsideRequests(session.page, session.outside);
+  });
+  afterEach(() => session.context.close());
+  return session;
 }

@@ -1,6 +1,5 @@
-import type { Browser, BrowserContext, Page } from 'playwright-core';
-import { afterAll, afterEach, beforeAll, beforeEach, describe, expect, it } from 'vitest';
-import { baseUrl, demoPassword, forbidOutsideRequests, launchBrowser, screenshot, signIn } from './support';
+import { beforeAll, describe, expect, it } from 'vitest';
+import { baseUrl, demoPassword, forbidOutsideRequests, screenshot, signIn, useBrowserSession } from './support';
 
 const tag = Math.random().toString(36).slice(2, 8);
 const trialTitle = `Team trial ${tag}`;
@@ -43,51 +42,39 @@ async function prepareTrial(): Promise<number> {
 }
 
 describe('inviting a collaborator from the Team page', () => {
-  let browser: Browser;
-  let context: BrowserContext;
-  let page: Page;
-  let outside: string[];
+  const session = useBrowserSession({ viewport: { width: 1280, height: 900 } });
   let trialId: number;
 
   beforeAll(async () => {
-    browser = await launchBrowser();
     trialId = await prepareTrial();
   });
-  afterAll(() => browser.close());
-  beforeEach(async () => {
-    context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
-    page = await context.newPage();
-    outside = [];
-    forbidOutsideRequests(page, outside);
-  });
-  afterEach(() => context.close());
 
   it('sends the invitation, shows it in the Outbox, and the new person joins from the link', async () => {
-    await signIn(page, 'investigator@example.org');
-    await page.getByRole('heading', { name: 'Trials', exact: true }).waitFor();
-    await page.goto(`${baseUrl()}/trials/${trialId}/team`);
-    await page.getByRole('table', { name: 'Members' }).waitFor();
-    await page.getByLabel('E-mail').fill(invitee);
-    await page.getByLabel('Site').selectOption({ label: siteName });
-    await page.getByRole('button', { name: 'Send invitation' }).click();
-    await page.getByText(`Invitation sent to ${invitee}.`).waitFor();
-    await page.getByRole('region', { name: 'Pending invitations' }).getByText(invitee).waitFor();
-    await screenshot(page, 'team-investigator');
+    await signIn(session.page, 'investigator@example.org');
+    await session.page.getByRole('heading', { name: 'Trials', exact: true }).waitFor();
+    await session.page.goto(`${baseUrl()}/trials/${trialId}/team`);
+    await session.page.getByRole('table', { name: 'Members' }).waitFor();
+    await session.page.getByLabel('E-mail').fill(invitee);
+    await session.page.getByLabel('Site').selectOption({ label: siteName });
+    await session.page.getByRole('button', { name: 'Send invitation' }).click();
+    await session.page.getByText(`Invitation sent to ${invitee}.`).waitFor();
+    await session.page.getByRole('region', { name: 'Pending invitations' }).getByText(invitee).waitFor();
+    await screenshot(session.page, 'team-investigator');
 
-    await page.getByRole('link', { name: 'Outbox' }).click();
-    const card = page.locator('.fr-outbox__message').filter({ hasText: invitee }).first();
+    await session.page.getByRole('link', { name: 'Outbox' }).click();
+    const card = session.page.locator('.fr-outbox__message').filter({ hasText: invitee }).first();
     await card.waitFor();
     const show = card.getByRole('button', { name: /^Show/ });
     if (await show.count()) await show.click();
     await expect(card.getByText(trialTitle).first().isVisible()).resolves.toBe(true);
-    await screenshot(page, 'outbox');
+    await screenshot(session.page, 'outbox');
     const link = await card.getByRole('link', { name: /\/invitations\// }).getAttribute('href');
     expect(link).toMatch(new RegExp(`^${baseUrl()}/invitations/[A-Za-z0-9_-]{43}$`));
 
     // The invitee, in a browser of their own, not signed in.
-    const theirs = await browser.newContext({ viewport: { width: 390, height: 844 }, isMobile: true });
+    const theirs = await session.browser.newContext({ viewport: { width: 390, height: 844 }, isMobile: true });
     const theirPage = await theirs.newPage();
-    forbidOutsideRequests(theirPage, outside);
+    forbidOutsideRequests(theirPage, session.outside);
     await theirPage.goto(link as string);
     await theirPage.getByRole('heading', { name: `Join ${trialTitle}` }).waitFor();
     await expect(theirPage.getByText(siteName).isVisible()).resolves.toBe(true);
@@ -106,10 +93,10 @@ describe('inviting a collaborator from the Team page', () => {
     await theirPage.getByText('This invitation has already been used. Sign in to open the trial.').waitFor();
     await theirs.close();
 
-    await page.goto(`${baseUrl()}/trials/${trialId}/team`);
-    await page.getByRole('table', { name: 'Members' }).getByText('Quinn Quarry').waitFor();
-    await expect(page.getByRole('table', { name: 'Members' }).getByText(siteName).isVisible()).resolves.toBe(true);
-    await screenshot(page, 'team-after-joining');
-    expect(outside).toEqual([]);
+    await session.page.goto(`${baseUrl()}/trials/${trialId}/team`);
+    await session.page.getByRole('table', { name: 'Members' }).getByText('Quinn Quarry').waitFor();
+    await expect(session.page.getByRole('table', { name: 'Members' }).getByText(siteName).isVisible()).resolves.toBe(true);
+    await screenshot(session.page, 'team-after-joining');
+    expect(session.outside).toEqual([]);
   });
 });
