@@ -22,13 +22,6 @@ export interface AftFit {
   readonly converged: boolean;
 }
 
-/** log f₀ or log S₀ of the standardized log time w, with its first two derivatives in w. */
-interface LogTerm {
-  value: number;
-  first: number;
-  second: number;
-}
-
 const HALF_LOG_TWO_PI = 0.5 * Math.log(2 * Math.PI);
 
 /** Upper tail Q(w) of the standard normal, relative-accurate far out (via the χ²₁ tail). */
@@ -37,33 +30,40 @@ function normalUpperTail(w: number): number {
   return w > 0 ? tail : 1 - tail;
 }
 
-function logDensity(distribution: AftDistribution, w: number): LogTerm {
+/**
+ * log f₀(w) (a drained plot) or log S₀(w) (a censored one) of the standardized log time w, with its first two
+ * derivatives in w, written into `out` [value, first, second] (no allocation: this runs once per plot and step).
+ */
+function logTerm(distribution: AftDistribution, exact: boolean, w: number, out: Float64Array): void {
   if (distribution === 'weibull') {
     const e = Math.exp(w);
-    return { value: w - e, first: 1 - e, second: -e };
-  }
-  if (distribution === 'lognormal') return { value: -0.5 * w * w - HALF_LOG_TWO_PI, first: -w, second: -1 };
-  // logistic: log f₀ = w − 2 log(1 + eʷ)
-  const p = 1 / (1 + Math.exp(-w));
-  const log1pExp = w > 0 ? w + Math.log1p(Math.exp(-w)) : Math.log1p(Math.exp(w));
-  return { value: w - 2 * log1pExp, first: 1 - 2 * p, second: -2 * p * (1 - p) };
-}
-
-function logSurvival(distribution: AftDistribution, w: number): LogTerm {
-  if (distribution === 'weibull') {
-    const e = Math.exp(w);
-    return { value: -e, first: -e, second: -e };
+    out[0] = exact ? w - e : -e;
+    out[1] = exact ? 1 - e : -e;
+    out[2] = -e;
+    return;
   }
   if (distribution === 'lognormal') {
+    if (exact) {
+      out[0] = -0.5 * w * w - HALF_LOG_TWO_PI;
+      out[1] = -w;
+      out[2] = -1;
+      return;
+    }
     const q = normalUpperTail(w);
     const density = Math.exp(-0.5 * w * w - HALF_LOG_TWO_PI);
     // Mills ratio; beyond w ≈ 37 both underflow, where λ ≈ w + 1/w.
     const lambda = q > 0 ? density / q : w + 1 / w;
-    return { value: q > 0 ? Math.log(q) : -0.5 * w * w - HALF_LOG_TWO_PI - Math.log(w), first: -lambda, second: -lambda * (lambda - w) };
+    out[0] = q > 0 ? Math.log(q) : -0.5 * w * w - HALF_LOG_TWO_PI - Math.log(w);
+    out[1] = -lambda;
+    out[2] = -lambda * (lambda - w);
+    return;
   }
+  // logistic: log f₀ = w − 2 log(1 + eʷ), log S₀ = −log(1 + eʷ)
   const p = 1 / (1 + Math.exp(-w));
   const log1pExp = w > 0 ? w + Math.log1p(Math.exp(-w)) : Math.log1p(Math.exp(w));
-  return { value: -log1pExp, first: -p, second: -p * (1 - p) };
+  out[0] = exact ? w - 2 * log1pExp : -log1pExp;
+  out[1] = exact ? 1 - 2 * p : -p;
+  out[2] = exact ? -2 * p * (1 - p) : -p * (1 - p);
 }
 
 /** Log-likelihood of (β, log σ) with its gradient and information (−Hessian) over the kept columns and log σ. */
@@ -76,7 +76,6 @@ function evaluate(
   logScale: number,
   position: Int32Array,
   size: number,
-  withDerivatives: boolean,
 ): { logLik: number; gradient: Float64Array; information: Float64Array } {
   const sigma = Math.exp(logScale);
   const eta = linearPredictor(matrix, coefficients);
@@ -84,31 +83,34 @@ function evaluate(
   const s = size - 1; // index of log σ
   const gradient = new Float64Array(size);
   const information = new Float64Array(size * size);
+  const term = new Float64Array(3);
   let logLik = 0;
   const { rowStart, columnIndex, values } = matrix;
   for (let i = 0; i < n; i++) {
     const w = (logTimes[i]! - eta[i]!) / sigma;
     const exact = censored[i] === 0;
-    const term = exact ? logDensity(distribution, w) : logSurvival(distribution, w);
-    logLik += term.value - (exact ? logScale + logTimes[i]! : 0);
-    if (!withDerivatives) continue;
-    const dEta = -term.first / sigma;
-    const dS = -w * term.first - (exact ? 1 : 0);
-    const dEtaEta = term.second / (sigma * sigma);
-    const dEtaS = (w * term.second + term.first) / sigma;
-    const dSS = w * term.first + w * w * term.second;
-    gradient[s]! += dS;
-    information[s * size + s]! -= dSS;
-    for (let a = rowStart[i]!; a < rowStart[i + 1]!; a++) {
+    logTerm(distribution, exact, w, term);
+    const first = term[1]!;
+    const second = term[2]!;
+    logLik += term[0]! - (exact ? logScale + logTimes[i]! : 0);
+    const dEta = -first / sigma;
+    const dEtaEta = second / (sigma * sigma);
+    const dEtaS = (w * second + first) / sigma;
+    gradient[s]! += -w * first - (exact ? 1 : 0);
+    information[s * size + s]! -= w * first + w * w * second;
+    const end = rowStart[i + 1]!;
+    for (let a = rowStart[i]!; a < end; a++) {
       const ja = position[columnIndex[a]!]!;
       if (ja < 0) continue;
       const xa = values[a]!;
       gradient[ja]! += xa * dEta;
       information[ja * size + s]! -= xa * dEtaS;
       information[s * size + ja]! -= xa * dEtaS;
-      for (let b = rowStart[i]!; b < rowStart[i + 1]!; b++) {
+      const rowOffset = ja * size;
+      const scaled = xa * dEtaEta;
+      for (let b = rowStart[i]!; b < end; b++) {
         const jb = position[columnIndex[b]!]!;
-        if (jb >= 0) information[ja * size + jb]! -= xa * values[b]! * dEtaEta;
+        if (jb >= 0) information[rowOffset + jb]! -= scaled * values[b]!;
       }
     }
   }
@@ -144,10 +146,17 @@ function startingValues(matrix: ModelMatrix, logTimes: Float64Array, distributio
  * reports it. Columns aliased with earlier ones (an empty cell) get NaN, as R's NA.
  * Reference: Kalbfleisch & Prentice (2002), The Statistical Analysis of Failure Time Data, 2nd ed., §3.5
  * and §5.2; Therneau, survival package, survreg.fit.
+ * `start` may carry a neighbouring model's estimates by column name (the refits of the term tests).
  * @throws StatsInputError for a time that is not a finite number above 0, unequal lengths, or no drained plot.
  * @example fitAcceleratedFailureTime(matrix, times, censored, 'weibull').scale; // σ̂, as survreg's $scale
  */
-export function fitAcceleratedFailureTime(matrix: ModelMatrix, times: Float64Array, censored: Uint8Array, distribution: AftDistribution): AftFit {
+export function fitAcceleratedFailureTime(
+  matrix: ModelMatrix,
+  times: Float64Array,
+  censored: Uint8Array,
+  distribution: AftDistribution,
+  start?: { readonly coefficients: ReadonlyMap<string, number>; readonly logScale: number },
+): AftFit {
   const n = matrix.rowCount;
   if (times.length !== n || censored.length !== n) throw new StatsInputError('unequal lengths', `${times.length} times and ${censored.length} censoring flags for ${n} rows`);
   const logTimes = new Float64Array(n);
@@ -169,7 +178,15 @@ export function fitAcceleratedFailureTime(matrix: ModelMatrix, times: Float64Arr
   });
   const size = keptColumns.length + 1;
   let { coefficients, logScale } = startingValues(matrix, logTimes, distribution, aliased);
-  let current = evaluate(matrix, logTimes, censored, distribution, coefficients, logScale, position, size, true);
+  if (start) {
+    // A warm start (a neighbouring model's estimates, by column name) saves most Newton steps.
+    matrix.columnNames.forEach((name, j) => {
+      const value = start.coefficients.get(name);
+      if (value !== undefined && !aliased[j]) coefficients[j] = value;
+    });
+    logScale = start.logScale;
+  }
+  let current = evaluate(matrix, logTimes, censored, distribution, coefficients, logScale, position, size);
   let converged = false;
   let iterations = 0;
   for (; iterations < 200 && !converged; iterations++) {
@@ -189,17 +206,18 @@ export function fitAcceleratedFailureTime(matrix: ModelMatrix, times: Float64Arr
     let nextLogScale = logScale;
     for (let halving = 0; halving < 40; halving++) {
       nextCoefficients = Float64Array.from(coefficients);
-      keptColumns.forEach((column, k) => (nextCoefficients[column]! += scaleStep * step[k]!));
+      for (let k = 0; k < keptColumns.length; k++) nextCoefficients[keptColumns[k]!]! += scaleStep * step[k]!;
       nextLogScale = logScale + scaleStep * step[size - 1]!;
-      next = evaluate(matrix, logTimes, censored, distribution, nextCoefficients, nextLogScale, position, size, false);
+      next = evaluate(matrix, logTimes, censored, distribution, nextCoefficients, nextLogScale, position, size);
       if (Number.isFinite(next.logLik) && next.logLik >= current.logLik - 1e-12 * Math.abs(current.logLik)) break;
       scaleStep /= 2;
     }
     const change = next.logLik - current.logLik;
     coefficients = nextCoefficients;
     logScale = nextLogScale;
-    current = evaluate(matrix, logTimes, censored, distribution, coefficients, logScale, position, size, true);
-    const largestStep = Math.max(...Array.from(step, (x) => Math.abs(x * scaleStep)));
+    current = next;
+    let largestStep = 0;
+    for (let k = 0; k < size; k++) largestStep = Math.max(largestStep, Math.abs(step[k]! * scaleStep));
     converged = Math.abs(change) <= 1e-12 * Math.max(1, Math.abs(current.logLik)) && largestStep < 1e-7;
   }
   const covariance = factorSymmetric(current.information, size, 1e-12, false).inverse();

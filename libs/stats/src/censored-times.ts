@@ -177,13 +177,14 @@ function fitModel(layout: ModelLayout, times: readonly number[], censored: reado
   const rows = rowsForModel(layout, censored, warnings);
   const rowTimes = Float64Array.from(rows, (i) => times[i]!);
   const rowCensored = Uint8Array.from(rows, (i) => (censored[i] ? 1 : 0));
-  const fitTerms = (terms: readonly LayoutTerm[]): AftFit => {
-    const matrix = buildModelMatrix(rows.length, terms.map((t) => subsetTerm(t, rows).term));
-    return fitAcceleratedFailureTime(matrix, rowTimes, rowCensored, distribution);
-  };
   const allTerms = [...layout.blockingTerms, layout.treatmentTerm];
   const matrix = buildModelMatrix(rows.length, allTerms.map((t) => subsetTerm(t, rows).term));
   const fit = fitAcceleratedFailureTime(matrix, rowTimes, rowCensored, distribution);
+  const warmStart = { coefficients: new Map(matrix.columnNames.map((name, j) => [name, fit.coefficients[j]!] as const).filter(([, v]) => Number.isFinite(v))), logScale: Math.log(fit.scale) };
+  const fitTerms = (terms: readonly LayoutTerm[]): AftFit => {
+    const reduced = buildModelMatrix(rows.length, terms.map((t) => subsetTerm(t, rows).term));
+    return fitAcceleratedFailureTime(reduced, rowTimes, rowCensored, distribution, warmStart);
+  };
   if (!fit.converged) warnings.push('The time-ratio model did not converge fully; read its estimates with care.');
   const rankOf = (f: AftFit) => f.aliased.filter((a) => !a).length + 1;
   const tests = dropTermTests(layout, { logLik: fit.logLik, rank: rankOf(fit) }, (terms) => {

@@ -39,50 +39,60 @@ export function logRank(values: readonly StratifiedTime[]): LogRankResult {
   });
   const k = groups.length;
   const groupIndex = new Map(groups.map((g, i) => [g, i]));
-  const byStratum = new Map<string, StratifiedTime[]>();
-  for (const v of values) {
+  const groupOf = Int32Array.from(values, (v) => groupIndex.get(v.group)!);
+  const strataIndex = new Map<string, number>();
+  const stratumOf = Int32Array.from(values, (v) => {
     const key = v.stratum ?? '';
-    const list = byStratum.get(key);
-    if (list) list.push(v);
-    else byStratum.set(key, [v]);
-  }
+    let code = strataIndex.get(key);
+    if (code === undefined) strataIndex.set(key, (code = strataIndex.size));
+    return code;
+  });
+  // One pass over the plots sorted by stratum, then time.
+  const order = Int32Array.from(values, (_, i) => i).sort((a, b) => stratumOf[a]! - stratumOf[b]! || values[a]!.time - values[b]!.time);
   const observed = new Float64Array(k);
   const expected = new Float64Array(k);
   const variance = new Float64Array(k * k);
   const atRisk = new Float64Array(k);
   const drained = new Float64Array(k);
-  for (const members of byStratum.values()) {
-    const sorted = [...members].sort((a, b) => a.time - b.time);
+  const leaving = new Float64Array(k);
+  for (let start = 0; start < order.length; ) {
+    const stratum = stratumOf[order[start]!]!;
+    let end = start;
     atRisk.fill(0);
-    for (const v of sorted) atRisk[groupIndex.get(v.group)!]!++;
-    let total = sorted.length;
-    for (let i = 0; i < sorted.length; ) {
-      const time = sorted[i]!.time;
+    while (end < order.length && stratumOf[order[end]!] === stratum) atRisk[groupOf[order[end++]!]!]!++;
+    let total = end - start;
+    for (let i = start; i < end; ) {
+      const time = values[order[i]!]!.time;
       drained.fill(0);
-      const leaving = new Float64Array(k);
+      leaving.fill(0);
       let events = 0;
       let leavingTotal = 0;
-      while (i < sorted.length && sorted[i]!.time === time) {
-        const g = groupIndex.get(sorted[i]!.group)!;
-        if (!sorted[i]!.censored) {
+      for (; i < end && values[order[i]!]!.time === time; i++) {
+        const plot = order[i]!;
+        const g = groupOf[plot]!;
+        if (!values[plot]!.censored) {
           drained[g]!++;
           events++;
         }
         leaving[g]!++;
         leavingTotal++;
-        i++;
       }
       if (events > 0) {
         const spread = total > 1 ? (events * (total - events)) / (total * total * (total - 1)) : 0;
         for (let a = 0; a < k; a++) {
+          const nA = atRisk[a]!;
           observed[a]! += drained[a]!;
-          expected[a]! += (events * atRisk[a]!) / total;
-          for (let b = 0; b < k; b++) variance[a * k + b]! += spread * atRisk[a]! * ((a === b ? total : 0) - atRisk[b]!);
+          expected[a]! += (events * nA) / total;
+          if (spread === 0 || nA === 0) continue;
+          const row = a * k;
+          variance[row + a]! += spread * nA * total;
+          for (let b = 0; b < k; b++) variance[row + b]! -= spread * nA * atRisk[b]!;
         }
       }
       for (let a = 0; a < k; a++) atRisk[a]! -= leaving[a]!;
       total -= leavingTotal;
     }
+    start = end;
   }
   const used = groups.map((_, a) => a).filter((a) => expected[a]! > 0);
   let chiSquare = 0;
@@ -103,7 +113,7 @@ export function logRank(values: readonly StratifiedTime[]): LogRankResult {
     chiSquare,
     df,
     p: df > 0 ? chiSquareUpperTail(chiSquare, df) : 1,
-    strata: byStratum.size,
+    strata: strataIndex.size,
     groups: Object.freeze(groups.map((group, a) => Object.freeze({ group, observed: observed[a]!, expected: expected[a]! }))),
   });
 }

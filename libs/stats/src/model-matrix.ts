@@ -74,25 +74,28 @@ export function buildModelMatrix(rowCount: number, terms: readonly ModelMatrixTe
     levelColumns.push(map);
   });
 
+  // At most one entry a term and row, plus the intercept.
   const rowStart = new Int32Array(rowCount + 1);
-  const indices: number[] = [];
-  const entries: number[] = [];
+  const indices = new Int32Array(rowCount * (terms.length + 1));
+  const entries = new Float64Array(rowCount * (terms.length + 1));
+  let filled = 0;
   for (let row = 0; row < rowCount; row++) {
-    indices.push(0);
-    entries.push(1);
-    terms.forEach((term, t) => {
+    indices[filled] = 0;
+    entries[filled++] = 1;
+    for (let t = 0; t < terms.length; t++) {
+      const term = terms[t]!;
       const map = levelColumns[t]!;
       if (term.kind === 'covariate') {
-        indices.push(map[0]!);
-        entries.push(term.values[row]!);
-        return;
+        indices[filled] = map[0]!;
+        entries[filled++] = term.values[row]!;
+        continue;
       }
       const column = map[term.codes[row]!]!;
-      if (column < 0) return;
-      indices.push(column);
-      entries.push(term.kind === 'factor' ? 1 : term.values[row]!);
-    });
-    rowStart[row + 1] = indices.length;
+      if (column < 0) continue;
+      indices[filled] = column;
+      entries[filled++] = term.kind === 'factor' ? 1 : term.values[row]!;
+    }
+    rowStart[row + 1] = filled;
   }
   return Object.freeze({
     rowCount,
@@ -101,8 +104,8 @@ export function buildModelMatrix(rowCount: number, terms: readonly ModelMatrixTe
     columnTerm: Int32Array.from(columnTerm),
     termNames: Object.freeze(terms.map((term) => term.name)),
     rowStart,
-    columnIndex: Int32Array.from(indices),
-    values: Float64Array.from(entries),
+    columnIndex: indices.subarray(0, filled),
+    values: entries.subarray(0, filled),
   });
 }
 
