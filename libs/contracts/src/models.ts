@@ -97,3 +97,95 @@ export interface CensoredAnswer {
   adjustment: string;
   warnings: string[];
 }
+
+/** The rank test beside a model: Friedman with blocks (site × block with several sites), else Kruskal–Wallis. */
+export interface ModelRankTest {
+  test: 'friedman' | 'kruskal-wallis';
+  statistic: number | null;
+  df: number | null;
+  p: number | null;
+  unavailable?: string;
+}
+
+/** A ratio of a treatment to the control (odds, rates), with simultaneous 95 % limits and an adjusted p. */
+export interface ControlRatio {
+  treatment: string;
+  ratio: number;
+  lower: number;
+  upper: number;
+  p: number;
+}
+
+// ---------------------------------------------------------------- POST /api/stats/ordinal
+
+export interface LabelledValueInput {
+  treatment: string;
+  block?: string;
+  site?: string;
+  value: number | string;
+}
+
+export interface OrdinalRequest {
+  design: ModelDesign;
+  control?: string;
+  observations: LabelledValueInput[];
+}
+
+export interface OrdinalAnswer {
+  /** The scores seen, lowest first. */
+  categories: string[];
+  logLik: number;
+  thresholds: Array<{ between: string; estimate: number; se: number }>;
+  coefficients: ModelCoefficient[];
+  tests: LikelihoodRatioTest[];
+  /** Odds of a higher score than the control's (above 1: higher scores). */
+  oddsRatios: ControlRatio[];
+  /** Predicted share of plots in each score per treatment, averaged over blocks. */
+  probabilities: Array<{ treatment: string; category: string; probability: number; se: number }>;
+  rankTest: ModelRankTest;
+  control: string;
+  adjustment: string;
+  warnings: string[];
+}
+
+// ---------------------------------------------------------------- POST /api/stats/counts
+
+export const COUNT_FAMILIES = ['auto', 'poisson', 'quasipoisson'] as const;
+export type CountFamilyChoice = (typeof COUNT_FAMILIES)[number];
+
+export interface CountsRequest {
+  design: ModelDesign;
+  control?: string;
+  /** Default 'auto': quasi-Poisson when Pearson's χ² shows overdispersion at the 5 % level. */
+  family?: CountFamilyChoice;
+  observations: LabelledValueInput[];
+}
+
+export interface CountTermTestAnswer {
+  term: string;
+  df: number;
+  deviance: number;
+  /** Poisson: the deviance as χ². */
+  chiSquare: number | null;
+  /** Quasi-Poisson: F against the dispersion, on (df, denDf). */
+  f: number | null;
+  denDf: number | null;
+  p: number | null;
+}
+
+export interface CountsAnswer {
+  family: 'poisson' | 'quasipoisson';
+  dispersion: number;
+  overdispersion: { pearsonChiSquare: number; df: number; p: number; present: boolean };
+  deviance: number;
+  residualDf: number;
+  logLik: number;
+  coefficients: ModelCoefficient[];
+  tests: CountTermTestAnswer[];
+  rateRatios: ControlRatio[];
+  /** The model's count per plot for each treatment (averaged over blocks on the log scale), 95 % limits. */
+  rates: Array<{ treatment: string; rate: number; lower: number; upper: number }>;
+  control: string;
+  adjustment: string;
+  warnings: string[];
+}

@@ -1,7 +1,8 @@
 # Reference analyses for src/r-model-reference.test.ts, called by generate-r-model-fixtures.mjs:
 #   Rscript generate-r-model-fixtures.R cases.json results.json
 # Each case names its family; each family's function below is the R a statistician would write for it.
-suppressPackageStartupMessages({ library(jsonlite); library(survival); library(multcomp) })
+suppressPackageStartupMessages({ library(jsonlite); library(survival); library(multcomp); library(MASS); library(emmeans) })
+emm_options(msg.nesting = FALSE, msg.interaction = FALSE)
 args <- commandArgs(trailingOnly = TRUE)
 cases <- fromJSON(args[1], simplifyVector = FALSE)
 
@@ -13,7 +14,7 @@ with_control_first <- function(x, control) factor(x, levels = c(control, setdiff
 case_frame <- function(case) {
   obs <- case$observations
   d <- data.frame(treatment = with_control_first(column(obs, "treatment"), case$control))
-  if (case$design != "crd") d$block <- column(obs, "block")
+  if (case$design != "crd") d$block <- first_appearance(column(obs, "block"))
   if (case$design == "multisite-rcbd") {
     d$site <- first_appearance(column(obs, "site"))
     d$blk <- first_appearance(paste(d$site, "/", d$block))
@@ -24,17 +25,22 @@ case_frame <- function(case) {
 }
 
 # Models compared for each term's likelihood-ratio test (the term dropped; a site with its blocks).
-model_formulas <- function(design, response) {
-  full <- switch(design, crd = "~ treatment", rcbd = "~ blk + treatment", "multisite-rcbd" = "~ blk + treatment")
+# Blocks nested in sites: site + site:block codes each site's blocks by contrasts (no aliased columns, and the
+# nesting emmeans needs); with whole blocks left out (censored times), blk (one label per site and block,
+# unused levels dropped) spans the same space, as survreg counts the df of an unused site:block column.
+model_formulas <- function(design, response, nested = "site + site:block") {
+  full <- switch(design, crd = "~ treatment", rcbd = "~ blk + treatment", "multisite-rcbd" = paste("~", nested, "+ treatment"))
   drops <- switch(design,
     crd = list(treatment = "~ 1"),
     rcbd = list(block = "~ treatment", treatment = "~ blk"),
-    "multisite-rcbd" = list(site = "~ treatment", "block:site" = "~ site + treatment", treatment = "~ blk"))
+    "multisite-rcbd" = list(site = "~ treatment", "block:site" = "~ site + treatment", treatment = paste("~", nested)))
   list(full = as.formula(paste(response, full)), drops = lapply(drops, function(f) as.formula(paste(response, f))))
 }
 
 # Single-step many-to-one comparisons on the treatment coefficients (multcomp), normal or t.
 dunnett_rows <- function(cf, V, df) {
+  keep <- !is.na(cf)  # aliased columns (an empty cell) have no estimate
+  cf <- cf[keep]; V <- V[names(cf), names(cf), drop = FALSE]
   tr <- grep("^treatment", names(cf))
   K <- diag(length(cf))[tr, , drop = FALSE]
   rownames(K) <- sub("^treatment", "", names(cf)[tr])
@@ -53,7 +59,7 @@ analyse_censored <- function(case) {
   d$time <- as.numeric(column(obs, "value"))
   d$status <- ifelse(vapply(obs, function(o) isTRUE(o$censored), TRUE), 0, 1)
   ctl <- survreg.control(rel.tolerance = 1e-13, iter.max = 200)
-  f <- model_formulas(case$design, "Surv(time, status)")
+  f <- model_formulas(case$design, "Surv(time, status)", nested = "blk")
   # As Friable: a block where no plot drained is left out of the time-ratio model (its effect would run to infinity).
   all_d <- d
   if (!is.null(d$blk)) d <- droplevels(d[ave(d$status, d$blk, FUN = sum) > 0, ])
@@ -89,7 +95,61 @@ analyse_censored <- function(case) {
     timeRatios = dunnett_rows(cf, V, 0), curves = curves, medians = medians)
 }
 
-analyse <- function(case) switch(case$family, censored = analyse_censored(case))
+analyse_ordinal <- function(case) {
+  d <- case_frame(case)
+  d$score <- factor(as.numeric(column(case$observations, "value")), ordered = TRUE)
+  ctl <- list(reltol = 1e-15, maxit = 5000)
+  f <- model_formulas(case$design, "score")
+  # Started from no effects and the observed cumulative shares (polr's own glm start fails on sparse tables).
+  fit_with <- function(formula) {
+    k <- ncol(model.matrix(formula, d)) - 1
+    polr(formula, data = d, Hess = TRUE, control = ctl, start = c(rep(0, k), qlogis(cumsum(table(d$score))[-nlevels(d$score)] / nrow(d))))
+  }
+  m <- fit_with(f$full)
+  tests <- lapply(names(f$drops), function(term) {
+    a <- anova(fit_with(f$drops[[term]]), m)
+    list(term = term, df = a[["   Df"]][2], chiSquare = a[["LR stat."]][2], p = a[["Pr(Chi)"]][2])
+  })
+  cf <- coef(m)
+  V <- vcov(m)
+  treatment_coefficients <- lapply(grep("^treatment", names(cf)), function(j) list(treatment = sub("^treatment", "", names(cf)[j]), estimate = unname(cf[j]), se = sqrt(V[names(cf)[j], names(cf)[j]])))
+  e <- if (case$design == "multisite-rcbd") emmeans(m, ~ treatment | score, mode = "prob", nesting = "block %in% site") else emmeans(m, ~ treatment | score, mode = "prob")
+  es <- as.data.frame(summary(e))
+  probabilities <- lapply(seq_len(nrow(es)), function(i) list(treatment = as.character(es$treatment[i]), category = as.character(es$score[i]), probability = es$prob[i], se = es$SE[i]))
+  list(logLik = as.numeric(logLik(m)), thresholds = unname(m$zeta), treatmentCoefficients = treatment_coefficients, tests = tests,
+    oddsRatios = dunnett_rows(cf, V[names(cf), names(cf)], 0), probabilities = probabilities)
+}
+
+analyse_counts <- function(case) {
+  d <- case_frame(case)
+  d$count <- as.numeric(column(case$observations, "value"))
+  f <- model_formulas(case$design, "count")
+  m <- glm(f$full, data = d, family = poisson, control = glm.control(epsilon = 1e-14, maxit = 100))
+  pearson <- sum(residuals(m, type = "pearson")^2)
+  rdf <- df.residual(m)
+  over <- pchisq(pearson, rdf, lower.tail = FALSE) < 0.05 && pearson / rdf > 1
+  family <- if (over) quasipoisson else poisson
+  m <- glm(f$full, data = d, family = family, control = glm.control(epsilon = 1e-14, maxit = 100))
+  test <- if (over) "F" else "Chisq"
+  tests <- lapply(names(f$drops), function(term) {
+    r <- glm(f$drops[[term]], data = d, family = family, control = glm.control(epsilon = 1e-14, maxit = 100))
+    a <- anova(r, m, test = test)
+    list(term = term, df = a$Df[2], deviance = a$Deviance[2], f = if (over) a$F[2] else NULL, p = a[[ncol(a)]][2])
+  })
+  cf <- coef(m)
+  V <- vcov(m)
+  treatment_coefficients <- lapply(grep("^treatment", names(cf)), function(j) list(treatment = sub("^treatment", "", names(cf)[j]), estimate = unname(cf[j]), se = sqrt(V[j, j])))
+  # Quasi-Poisson limits on t with the residual df, as summary.glm tests (emmeans would use z).
+  edf <- if (over) rdf else Inf
+  e <- if (case$design == "multisite-rcbd") emmeans(m, ~ treatment, type = "response", nesting = "block %in% site", df = edf) else emmeans(m, ~ treatment, type = "response", df = edf)
+  es <- as.data.frame(summary(e))
+  lower_name <- grep("LCL$|lower.CL", names(es), value = TRUE); upper_name <- grep("UCL$|upper.CL", names(es), value = TRUE)
+  rates <- lapply(seq_len(nrow(es)), function(i) list(treatment = as.character(es$treatment[i]), rate = es$rate[i], lower = es[[lower_name]][i], upper = es[[upper_name]][i]))
+  list(family = if (over) "quasipoisson" else "poisson", dispersion = pearson / rdf, pearson = pearson, residualDf = rdf, deviance = deviance(m),
+    treatmentCoefficients = treatment_coefficients, tests = tests, rateRatios = dunnett_rows(cf, V, if (over) rdf else 0), rates = rates)
+}
+
+analyse <- function(case) switch(case$family, censored = analyse_censored(case), ordinal = analyse_ordinal(case), counts = analyse_counts(case))
 
 results <- lapply(cases, analyse)
 versions <- sapply(c("survival", "nlme", "emmeans", "MASS", "car", "multcomp"), function(p) tryCatch(as.character(packageVersion(p)), error = function(e) NA))

@@ -22,7 +22,9 @@ const casesPerFamily = Number(textArgument('cases') ?? 6);
 const seed = Number(textArgument('seed') ?? 20261212);
 const onlyFamily = textArgument('family');
 
-const { random, integer, gauss } = seededRandom(seed);
+// Each case draws from its own stream (seed, family, case number), so any subset regenerates identically.
+let random, integer, gauss;
+const reseed = (familyIndex, caseIndex) => ({ random, integer, gauss } = seededRandom(seed + 7919 * familyIndex + 104729 * caseIndex));
 const round = (x, decimals) => Math.round(x * 10 ** decimals) / 10 ** decimals;
 
 const DESIGNS = ['crd', 'rcbd', 'multisite-rcbd'];
@@ -59,13 +61,49 @@ function censoredCase(id, design, distribution) {
   return { id, family: 'censored', design, distribution, control: 'CTRL', observations };
 }
 
+function ordinalCase(id, design) {
+  const plots = layout(design);
+  const cuts = [-1.5, -0.3, 0.8, 2];
+  const observations = plots.map(({ effect, ...labels }) => {
+    const u = Math.min(Math.max(random(), 1e-9), 1 - 1e-9);
+    const latent = 2 * effect + Math.log(u / (1 - u));
+    return { ...labels, value: String(1 + cuts.filter((c) => latent > c).length) };
+  });
+  return { id, family: 'ordinal', design, control: 'CTRL', observations };
+}
+
+/** A Poisson draw (Knuth's product of uniforms; the means here stay small). */
+function poisson(mean) {
+  const limit = Math.exp(-mean);
+  let k = 0;
+  for (let product = random(); product > limit; product *= random()) k++;
+  return k;
+}
+
+function countCase(id, design, overdispersed) {
+  const plots = layout(design);
+  const observations = plots.map(({ effect, ...labels }) => {
+    // Overdispersed: the mean itself varies from plot to plot (a gamma-like spread from two exponentials).
+    const spread = overdispersed ? (-Math.log(1 - random()) - Math.log(1 - random())) / 2 : 1;
+    return { ...labels, value: poisson(8 * Math.exp(effect) * spread) };
+  });
+  return { id, family: 'counts', design, control: 'CTRL', observations };
+}
+
 const families = {
+  ordinal: (i) => ordinalCase(`ordinal-${String(i + 1).padStart(2, '0')}`, DESIGNS[i % DESIGNS.length]),
+  counts: (i) => countCase(`counts-${String(i + 1).padStart(2, '0')}`, DESIGNS[i % DESIGNS.length], i % 2 === 1),
   censored: (i) => censoredCase(`censored-${String(i + 1).padStart(2, '0')}`, DESIGNS[i % DESIGNS.length], ['weibull', 'lognormal', 'loglogistic'][(i + Math.floor(i / 3)) % 3]),
 };
 
 const cases = Object.entries(families)
   .filter(([family]) => onlyFamily === undefined || family === onlyFamily)
-  .flatMap(([, make]) => Array.from({ length: casesPerFamily }, (_, i) => make(i)));
+  .flatMap(([family, make]) =>
+    Array.from({ length: casesPerFamily }, (_, i) => {
+      reseed(Object.keys(families).indexOf(family) + 1, i);
+      return make(i);
+    }),
+  );
 
 const work = mkdtempSync(path.join(tmpdir(), 'friable-r-models-'));
 try {

@@ -1,6 +1,7 @@
 import { chiSquareUpperTail } from './chi-square';
 import { StatsInputError } from './errors';
 import { linearPredictor, weightedCrossProduct, type ModelMatrix } from './model-matrix';
+import { maximizeByNewton } from './newton-raphson';
 import { factorSymmetric } from './symmetric-factor';
 
 /** Error distributions of log time: Weibull (extreme value), log-normal (normal), log-logistic (logistic). */
@@ -186,40 +187,20 @@ export function fitAcceleratedFailureTime(
     });
     logScale = start.logScale;
   }
-  let current = evaluate(matrix, logTimes, censored, distribution, coefficients, logScale, position, size);
-  let converged = false;
-  let iterations = 0;
-  for (; iterations < 200 && !converged; iterations++) {
-    let factor = factorSymmetric(current.information, size, 1e-12, true);
-    let ridge = 0;
-    while (factor.rank < size && ridge < 1e6) {
-      // Far from the optimum the information can be indefinite: damp the step (Levenberg) until it is not.
-      ridge = ridge === 0 ? 1e-6 : ridge * 10;
-      const damped = Float64Array.from(current.information);
-      for (let j = 0; j < size; j++) damped[j * size + j]! += ridge * Math.max(1, Math.abs(current.information[j * size + j]!));
-      factor = factorSymmetric(damped, size, 1e-12, true);
-    }
-    const step = factor.solve(current.gradient);
-    let scaleStep = 1;
-    let next = current;
-    let nextCoefficients = coefficients;
-    let nextLogScale = logScale;
-    for (let halving = 0; halving < 40; halving++) {
-      nextCoefficients = Float64Array.from(coefficients);
-      for (let k = 0; k < keptColumns.length; k++) nextCoefficients[keptColumns[k]!]! += scaleStep * step[k]!;
-      nextLogScale = logScale + scaleStep * step[size - 1]!;
-      next = evaluate(matrix, logTimes, censored, distribution, nextCoefficients, nextLogScale, position, size);
-      if (Number.isFinite(next.logLik) && next.logLik >= current.logLik - 1e-12 * Math.abs(current.logLik)) break;
-      scaleStep /= 2;
-    }
-    const change = next.logLik - current.logLik;
-    coefficients = nextCoefficients;
-    logScale = nextLogScale;
-    current = next;
-    let largestStep = 0;
-    for (let k = 0; k < size; k++) largestStep = Math.max(largestStep, Math.abs(step[k]! * scaleStep));
-    converged = Math.abs(change) <= 1e-12 * Math.max(1, Math.abs(current.logLik)) && largestStep < 1e-7;
-  }
+  const toCoefficients = (parameters: Float64Array) => {
+    const full = new Float64Array(p);
+    keptColumns.forEach((column, k) => (full[column] = parameters[k]!));
+    return full;
+  };
+  const startParameters = Float64Array.from({ length: size }, (_, k) => (k < keptColumns.length ? coefficients[keptColumns[k]!]! : logScale));
+  const result = maximizeByNewton(startParameters, (parameters) =>
+    evaluate(matrix, logTimes, censored, distribution, toCoefficients(parameters), parameters[size - 1]!, position, size),
+  );
+  const current = result.state;
+  const converged = result.converged;
+  const iterations = result.iterations;
+  coefficients = toCoefficients(result.parameters);
+  logScale = result.parameters[size - 1]!;
   const covariance = factorSymmetric(current.information, size, 1e-12, false).inverse();
   const reported = Float64Array.from(coefficients, (value, j) => (aliased[j] ? Number.NaN : value));
   return Object.freeze({

@@ -2,7 +2,7 @@ import { AFT_DISTRIBUTIONS, fitAcceleratedFailureTime, type AftDistribution, typ
 import { StatsInputError } from './errors';
 import { dropTermTests, type LikelihoodRatioRow } from './likelihood-ratio';
 import { logRank } from './log-rank';
-import { manyToControl, manyToControlStatement } from './many-to-control';
+import { manyToControlStatement, treatmentContrasts } from './many-to-control';
 import { buildModelMatrix } from './model-matrix';
 import { modelLayout, type LabelledPlot, type LayoutTerm, type ModelLayout } from './model-layout';
 import { productLimitCurve, type ProductLimitPoint } from './product-limit';
@@ -196,18 +196,10 @@ function fitModel(layout: ModelLayout, times: readonly number[], censored: reado
   const coefficients = matrix.columnNames.flatMap((term, j) => (fit.aliased[j] ? [] : [Object.freeze({ term, estimate: fit.coefficients[j]!, se: seOf(j) })]));
   if (fit.aliased.some((a) => a)) warnings.push(`Some terms could not be estimated from these plots (empty cells): ${matrix.columnNames.filter((_, j) => fit.aliased[j]).join(', ')}.`);
 
-  const compared = layout.treatments.filter((t) => t !== layout.reference);
-  const columns = compared.map((t) => matrix.columnNames.indexOf(`treatment[${t}]`));
-  const estimable = compared.filter((_, k) => columns[k]! >= 0 && !fit.aliased[columns[k]!]);
-  const kept = columns.filter((c) => c >= 0 && !fit.aliased[c]);
-  const m = kept.length;
-  const covariance = new Float64Array(m * m);
-  kept.forEach((a, r) => kept.forEach((b, c) => (covariance[r * m + c] = fit.covariance[fit.covarianceColumns.indexOf(a) * size + fit.covarianceColumns.indexOf(b)]!)));
-  const timeRatios =
-    m === 0
-      ? []
-      : manyToControl(estimable, kept.map((c) => fit.coefficients[c]!), covariance, Infinity).contrasts.map((c) =>
-          Object.freeze({ treatment: c.treatment, ratio: Math.exp(c.estimate), lower: Math.exp(c.lower), upper: Math.exp(c.upper), p: c.p }),
-        );
+  const where = (column: number) => fit.covarianceColumns.indexOf(column);
+  const contrasts = treatmentContrasts(layout.treatments, layout.reference, matrix.columnNames, fit.coefficients, (a, b) => fit.covariance[where(a) * size + where(b)]!, Infinity);
+  const timeRatios = (contrasts?.contrasts ?? []).map((c) =>
+    Object.freeze({ treatment: c.treatment, ratio: Math.exp(c.estimate), lower: Math.exp(c.lower), upper: Math.exp(c.upper), p: c.p }),
+  );
   return { fit, coefficients, tests, timeRatios };
 }

@@ -28,3 +28,9 @@ export { productLimitCurve, type CurveMedian, type ProductLimitCurve, type Produ
 export { logRank, type LogRankResult, type StratifiedTime } from './log-rank';
 export { AFT_DISTRIBUTIONS, fitAcceleratedFailureTime, type AftDistribution, type AftFit } from './accelerated-failure-time';
 export { analyseCensoredTimes, type CensoredObservation, type CensoredTimesAnalysis, type CensoredTimesRequest, type TreatmentCurve, type TreatmentMedian } from './censored-times';
+export { categoryProbabilities, fitProportionalOdds, type ProportionalOddsFit } from './proportional-odds';
+export { analyseOrdinalScores, type OrdinalScoresAnalysis, type OrdinalScoresRequest, type ScoreObservation, type ScoreRankTest } from './ordinal-scores';
+export { fitPoissonLogLinear, type PoissonFit } from './poisson-regression';
+export { analyseCounts, type CountFamily, type CountObservation, type CountsAnalysis, type CountsRequest, type CountTermTest } from './count-analysis';
+export { layoutGrid, type LayoutGrid } from './model-layout';
+export { maximizeByNewton, type LikelihoodState, type NewtonResult } from './newton-raphson';

@@ -55,3 +55,29 @@ export function manyToControl(treatments: readonly string[], estimates: readonly
   );
   return Object.freeze({ critical, contrasts: Object.freeze(contrasts) });
 }
+
+/**
+ * The treatment-versus-control contrasts of a fitted model whose treatment columns are named
+ * `treatment[level]` with the control as reference: each column's estimate, the covariance of those that
+ * could be estimated, and their single-step comparisons (`manyToControl`).
+ * @throws as manyToControl.
+ * @example treatmentContrasts(['C', 'G'], 'C', names, beta, (a, b) => cov[a][b], Infinity); // { critical, contrasts: [{ treatment: 'G', … }] }
+ */
+export function treatmentContrasts(
+  treatments: readonly string[],
+  control: string,
+  columnNames: readonly string[],
+  coefficients: Float64Array,
+  covarianceOf: (columnA: number, columnB: number) => number,
+  df: number,
+  alpha = 0.05,
+): ManyToControl | null {
+  const compared = treatments.filter((t) => t !== control);
+  const columns = compared.map((t) => columnNames.indexOf(`treatment[${t}]`));
+  const usable = compared.map((t, k) => ({ treatment: t, column: columns[k]! })).filter(({ column }) => column >= 0 && Number.isFinite(coefficients[column]!));
+  const m = usable.length;
+  if (m === 0) return null;
+  const covariance = new Float64Array(m * m);
+  usable.forEach((a, r) => usable.forEach((b, c) => (covariance[r * m + c] = covarianceOf(a.column, b.column))));
+  return manyToControl(usable.map((u) => u.treatment), usable.map((u) => coefficients[u.column]!), covariance, df, alpha);
+}

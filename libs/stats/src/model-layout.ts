@@ -34,12 +34,65 @@ export interface ModelLayout {
   readonly strata?: readonly string[];
   /** Site of each row when the design has sites. */
   readonly sites?: readonly string[];
-  /** Sites in order of first appearance, and each site's blocks as "site / block" labels. */
+  /** Sites in order of first appearance. */
   readonly siteLevels: readonly string[];
+}
+
+/** Rows of the reference grid: every block (with its site) × every treatment, each block weighted equally within its site and the sites equally. */
+export interface LayoutGrid {
+  readonly rowCount: number;
+  /** The layout's terms with codes for the grid rows (same levels and references, so the same model-matrix columns). */
+  readonly terms: readonly LayoutTerm[];
+  /** Treatment of each grid row (index into layout.treatments). */
+  readonly treatment: Int32Array;
+  /** Weight of each row within its treatment (they sum to 1 per treatment). */
+  readonly weight: Float64Array;
 }
 
 function factorTerm(name: string, shownAs: string, levels: readonly string[], codes: Int32Array, reference?: readonly number[]): LayoutTerm {
   return { name: shownAs, term: { kind: 'factor', name, levels, codes, ...(reference ? { reference } : {}) } };
+}
+
+/**
+ * The reference grid of a layout, over which least-squares means and model-based treatment summaries are
+ * averaged: blocks equally within each site, then sites equally (emmeans' `nesting = "block %in% site"`).
+ * Reference: Searle, Speed & Milliken (1980), Population marginal means in the linear model, Am. Stat. 34:216.
+ * @throws never.
+ * @example layoutGrid(modelLayout('rcbd', plots)).rowCount; // blocks × treatments
+ */
+export function layoutGrid(layout: ModelLayout): LayoutGrid {
+  const treatments = layout.treatments.length;
+  const treatmentTerm = layout.treatmentTerm.term as Extract<ModelMatrixTerm, { kind: 'factor' }>;
+  const modelCode = layout.treatments.map((t) => treatmentTerm.levels.indexOf(t));
+  const blockTerm = layout.blockingTerms.find((t) => t.name !== 'site')?.term as Extract<ModelMatrixTerm, { kind: 'factor' }> | undefined;
+  const blocks = blockTerm ? blockTerm.levels.length : 1;
+  const siteTerm = layout.blockingTerms.find((t) => t.name === 'site')?.term as Extract<ModelMatrixTerm, { kind: 'factor' }> | undefined;
+  const siteOfBlock = Int32Array.from({ length: blocks }, (_, b) => (siteTerm && blockTerm ? siteTerm.levels.indexOf(blockTerm.levels[b]!.slice(0, blockTerm.levels[b]!.lastIndexOf(' / '))) : 0));
+  const sites = siteTerm ? siteTerm.levels.length : 1;
+  const blocksPerSite = new Float64Array(sites);
+  siteOfBlock.forEach((site) => blocksPerSite[site]!++);
+  const rowCount = blocks * treatments;
+  const treatment = new Int32Array(rowCount);
+  const weight = new Float64Array(rowCount);
+  const blockCodes = new Int32Array(rowCount);
+  const siteCodes = new Int32Array(rowCount);
+  const treatmentCodes = new Int32Array(rowCount);
+  for (let b = 0; b < blocks; b++) {
+    for (let t = 0; t < treatments; t++) {
+      const row = b * treatments + t;
+      treatment[row] = t;
+      weight[row] = 1 / (sites * blocksPerSite[siteOfBlock[b]!]!);
+      blockCodes[row] = b;
+      siteCodes[row] = siteOfBlock[b]!;
+      treatmentCodes[row] = modelCode[t]!;
+    }
+  }
+  const withCodes = (term: LayoutTerm, codes: Int32Array): LayoutTerm => ({ name: term.name, term: { ...(term.term as Extract<ModelMatrixTerm, { kind: 'factor' }>), codes } });
+  const terms = [
+    ...layout.blockingTerms.map((term) => withCodes(term, term.name === 'site' ? siteCodes : blockCodes)),
+    withCodes(layout.treatmentTerm, treatmentCodes),
+  ];
+  return Object.freeze({ rowCount, terms, treatment, weight });
 }
 
 function label(value: string | undefined, what: string, design: string, row: number): string {

@@ -3,6 +3,8 @@ import path from 'node:path';
 import { describe, expect, it } from 'vitest';
 import type { AftDistribution } from './accelerated-failure-time';
 import { analyseCensoredTimes, type CensoredObservation } from './censored-times';
+import { analyseCounts } from './count-analysis';
+import { analyseOrdinalScores } from './ordinal-scores';
 import { relativeError } from './test-support/reference-files';
 
 // Expected values: datasets/reference/r-model-fixtures.json, made by libs/stats/scripts/generate-r-model-fixtures.mjs
@@ -21,6 +23,18 @@ function close(actual: number | null | undefined, expected: number, tolerance: n
 
 function within(actual: number | null | undefined, expected: number, absolute: number, what: string): void {
   expect(Math.abs((actual as number) - expected), `${what}: ${actual} vs R ${expected}`).toBeLessThanOrEqual(absolute);
+}
+
+/**
+ * multcomp's single-step limits exp(estimate ± critical · se) and adjusted p (summary/confint of glht): the critical
+ * value to 3e-3 relative and p to 2e-3 absolute (mvtnorm's integration is randomized, abseps 1e-3; Friable's uses a
+ * product-form correlation fitted to the exact one).
+ */
+function simultaneous(mine: { ratio: number; lower: number; upper: number; p: number }, r: { treatment: string; estimate: number; se: number; critical: number; lower: number; upper: number; p: number }): void {
+  const critical = (Math.log(mine.upper) - Math.log(mine.ratio)) / r.se;
+  close(critical, r.critical, 3e-3, `critical value (${r.treatment})`);
+  close((Math.log(mine.ratio) - Math.log(mine.lower)) / r.se, r.critical, 3e-3, `critical value below (${r.treatment})`);
+  within(mine.p, r.p, 2e-3, `adjusted p ${r.treatment}`);
 }
 
 describe('censored drain times against R survival 3.5.3 (survfit, survdiff + strata, survreg + LR tests, multcomp)', () => {
@@ -93,9 +107,92 @@ describe('censored drain times against R survival 3.5.3 (survfit, survdiff + str
       for (const ratio of expected.timeRatios) {
         const mine = result.timeRatios.find((t) => t.treatment === ratio.treatment)!;
         close(mine.ratio, Math.exp(ratio.estimate), 1e-6, `time ratio ${ratio.treatment}`);
-        close(mine.lower, Math.exp(ratio.lower), 2e-3, `lower ${ratio.treatment}`);
-        close(mine.upper, Math.exp(ratio.upper), 2e-3, `upper ${ratio.treatment}`);
-        within(mine.p, ratio.p, 2e-3, `adjusted p ${ratio.treatment}`);
+        simultaneous(mine, ratio);
+      }
+    });
+  }
+});
+
+describe('scores against R MASS 7.3 polr (Hess = TRUE, reltol 1e-15), anova(reduced, full), emmeans mode = "prob", multcomp', () => {
+  const cases = fixture.cases.filter((c) => c.family === 'ordinal');
+  it('has the ordinal cases', () => expect(cases.length).toBeGreaterThanOrEqual(6));
+
+  for (const entry of cases) {
+    it(`${entry.id}: ${entry.design}`, () => {
+      const expected = entry.expected;
+      const result = analyseOrdinalScores({ design: entry.design, control: entry.control, observations: entry.observations });
+      // Log-likelihood 1e-9 relative; cut-points and coefficients 1e-5 relative (optim's BFGS stops short of Newton's
+      // precision); SEs 1e-4 relative (polr's Hessian is optim's finite-difference one).
+      close(result.logLik, expected.logLik, 1e-9, 'logLik');
+      ([] as number[]).concat(expected.thresholds).forEach((zeta, c) => within(result.thresholds[c]!.estimate, zeta, 1e-5 * Math.max(1, Math.abs(zeta)), `cut-point ${c + 1}`));
+      for (const coefficient of expected.treatmentCoefficients) {
+        const mine = result.coefficients.find((c) => c.term === `treatment[${coefficient.treatment}]`);
+        within(mine?.estimate, coefficient.estimate, 1e-5 * Math.max(1, Math.abs(coefficient.estimate)), `coefficient ${coefficient.treatment}`);
+        close(mine?.se, coefficient.se, 1e-4, `se ${coefficient.treatment}`);
+      }
+      // anova(reduced, full) LR statistic 1e-6 absolute, df exact, p 1e-7 absolute.
+      expected.tests.forEach((test: { term: string; df: number; chiSquare: number; p: number }) => {
+        const mine = result.tests.find((t) => t.term === test.term)!;
+        expect(mine.df, `${test.term} df`).toBe(test.df);
+        within(mine.chiSquare, test.chiSquare, 1e-6, `${test.term} LR`);
+        within(mine.p as number, test.p, 1e-7, `${test.term} p`);
+      });
+      // emmeans(…, mode = "prob"): shares 1e-6 absolute, SEs 1e-4 relative.
+      for (const share of expected.probabilities) {
+        const mine = result.probabilities.find((p) => p.treatment === share.treatment && p.category === share.category)!;
+        within(mine.probability, share.probability, 1e-6, `P(${share.category} | ${share.treatment})`);
+        close(mine.se, share.se, 1e-3, `SE of P(${share.category} | ${share.treatment})`);
+      }
+      for (const ratio of expected.oddsRatios) {
+        const mine = result.oddsRatios.find((t) => t.treatment === ratio.treatment)!;
+        close(mine.ratio, Math.exp(ratio.estimate), 1e-5, `odds ratio ${ratio.treatment}`);
+        simultaneous(mine, ratio);
+      }
+    });
+  }
+});
+
+describe('counts against R glm (poisson, quasipoisson), anova(test = "Chisq" | "F"), emmeans type = "response", multcomp', () => {
+  const cases = fixture.cases.filter((c) => c.family === 'counts');
+  it('has the count cases, some of them overdispersed', () => {
+    expect(cases.length).toBeGreaterThanOrEqual(6);
+    expect(cases.some((c) => c.expected.family === 'quasipoisson')).toBe(true);
+    expect(cases.some((c) => c.expected.family === 'poisson')).toBe(true);
+  });
+
+  for (const entry of cases) {
+    it(`${entry.id}: ${entry.design}`, () => {
+      const expected = entry.expected;
+      const result = analyseCounts({ design: entry.design, control: entry.control, observations: entry.observations });
+      // glm(control = glm.control(epsilon = 1e-14)): family chosen alike; deviance, Pearson χ² 1e-9 relative;
+      // coefficients and SEs 1e-7 relative; tests 1e-7; emmeans rates and limits 1e-7 relative.
+      expect(result.family).toBe(expected.family);
+      close(result.deviance, expected.deviance, 1e-9, 'deviance');
+      close(result.overdispersion.pearsonChiSquare, expected.pearson, 1e-9, 'Pearson');
+      expect(result.residualDf).toBe(expected.residualDf);
+      close(result.dispersion, expected.dispersion, 1e-9, 'dispersion');
+      for (const coefficient of expected.treatmentCoefficients) {
+        const mine = result.coefficients.find((c) => c.term === `treatment[${coefficient.treatment}]`);
+        within(mine?.estimate, coefficient.estimate, 1e-7 * Math.max(1, Math.abs(coefficient.estimate)), `coefficient ${coefficient.treatment}`);
+        close(mine?.se, coefficient.se, 1e-7, `se ${coefficient.treatment}`);
+      }
+      expected.tests.forEach((test: { term: string; df: number; deviance: number; f?: number; p: number }) => {
+        const mine = result.tests.find((t) => t.term === test.term)!;
+        expect(mine.df, `${test.term} df`).toBe(test.df);
+        within(mine.deviance, test.deviance, 1e-7 * Math.max(1, test.deviance), `${test.term} deviance`);
+        if (test.f !== undefined && test.f !== null) close(mine.f, test.f, 1e-7, `${test.term} F`);
+        within(mine.p as number, test.p, 1e-9, `${test.term} p`);
+      });
+      for (const rate of expected.rates) {
+        const mine = result.rates.find((r) => r.treatment === rate.treatment)!;
+        close(mine.rate, rate.rate, 1e-7, `rate ${rate.treatment}`);
+        close(mine.lower, rate.lower, 1e-7, `rate lower ${rate.treatment}`);
+        close(mine.upper, rate.upper, 1e-7, `rate upper ${rate.treatment}`);
+      }
+      for (const ratio of expected.rateRatios) {
+        const mine = result.rateRatios.find((t) => t.treatment === ratio.treatment)!;
+        close(mine.ratio, Math.exp(ratio.estimate), 1e-7, `rate ratio ${ratio.treatment}`);
+        simultaneous(mine, ratio);
       }
     });
   }

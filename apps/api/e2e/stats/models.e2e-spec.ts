@@ -14,6 +14,20 @@ const gehan = readFileSync(resolve(__dirname, '../../../../datasets/reference/ge
     return { treatment: treat!, block: pair!, value: time!, censored: cens === '0' };
   });
 
+// Beall (1942) insect counts, datasets/reference/insect-sprays.csv (R's InsectSprays): 6 sprays × 12 plots.
+const insects = readFileSync(resolve(__dirname, '../../../../datasets/reference/insect-sprays.csv'), 'utf8')
+  .trim()
+  .split('\n')
+  .slice(1)
+  .map((line) => {
+    const [count, spray] = line.split(',');
+    return { treatment: spray!, value: Number(count) };
+  });
+
+// Invented crumble scores of an RCBD: 3 treatments × 8 blocks.
+const crumble: Record<string, number[]> = { CTRL: [2, 3, 3, 1, 2, 3, 4, 2], GYP: [2, 3, 4, 2, 3, 3, 3, 5], CMP: [4, 3, 5, 4, 2, 5, 4, 3] };
+const crumbleObservations = Object.entries(crumble).flatMap(([treatment, values]) => values.map((value, b) => ({ treatment, block: String(b + 1), value })));
+
 describe('the measurement-model endpoints', () => {
   let t: TestApp;
   let token: string;
@@ -82,6 +96,63 @@ describe('the measurement-model endpoints', () => {
       const negative = await post({ design: 'crd', distribution: 'weibull', observations: [{ treatment: 'A', value: -3, censored: false }, { treatment: 'B', value: 4, censored: false }] });
       expect(negative.status).toBe(422);
       expect(negative.body.message).toMatch(/row 1 of the observations: the time must be a number of at least 0/);
+    });
+  });
+
+  describe('POST /api/stats/ordinal', () => {
+    it('needs a signed-in person', async () => {
+      expect((await t.http.post('/api/stats/ordinal').send({ design: 'rcbd', observations: crumbleObservations })).status).toBe(401);
+    });
+
+    it('tests treatment by likelihood ratio as polr does, with odds ratios, shares and the Friedman test', async () => {
+      const response = await t.http.post('/api/stats/ordinal').set(bearer(token)).send({ design: 'rcbd', control: 'CTRL', observations: crumbleObservations });
+      expect(response.status).toBe(200);
+      const body = response.body;
+      // R 4.2.2, MASS 7.3-58.2: anova(polr(score ~ block), polr(score ~ block + treatment)): LR 10.116251241868781 on 2 df,
+      // p 0.0063574646507047472; coef treatmentCMP 3.4405887575936633 (1e-6 relative).
+      const treatment = body.tests.find((row: { term: string }) => row.term === 'treatment');
+      expect(treatment.df).toBe(2);
+      expect(Math.abs(treatment.chiSquare / 10.116251241868781 - 1)).toBeLessThan(1e-6);
+      expect(Math.abs(treatment.p - 0.0063574646507047472)).toBeLessThan(1e-7);
+      expect(Math.abs(body.oddsRatios[1].ratio / Math.exp(3.4405887575936633) - 1)).toBeLessThan(1e-5);
+      expect(body.categories).toEqual(['1', '2', '3', '4', '5']);
+      expect(body.probabilities).toHaveLength(15);
+      expect(body.rankTest).toMatchObject({ test: 'friedman', df: 2 });
+    });
+
+    it('refuses a score that is not a number, naming the row', async () => {
+      const response = await t.http.post('/api/stats/ordinal').set(bearer(token)).send({ design: 'crd', observations: [{ treatment: 'A', value: 'x' }, { treatment: 'B', value: 2 }] });
+      expect(response.status).toBe(422);
+      expect(response.body.message).toMatch(/observations\[0\]\.value must be a finite number or a decimal string/);
+    });
+  });
+
+  describe('POST /api/stats/counts', () => {
+    it('needs a signed-in person', async () => {
+      expect((await t.http.post('/api/stats/counts').send({ design: 'crd', observations: insects })).status).toBe(401);
+    });
+
+    it('finds the insect counts overdispersed and answers with quasi-Poisson rate ratios', async () => {
+      const response = await t.http.post('/api/stats/counts').set(bearer(token)).send({ design: 'crd', control: 'A', observations: insects });
+      expect(response.status).toBe(200);
+      const body = response.body;
+      // R 4.2.2: glm(count ~ spray, InsectSprays, poisson): Pearson χ² 99.509028826974117 on 66 df (p 0.00483); quasi-Poisson
+      // dispersion 1.5077125579849557; anova(…, test = "F") F 41.216414635115875 (glm.control(epsilon = 1e-14)); 1e-9 relative.
+      expect(body.family).toBe('quasipoisson');
+      expect(body.overdispersion.present).toBe(true);
+      expect(Math.abs(body.dispersion / 1.5077125579849557 - 1)).toBeLessThan(1e-9);
+      expect(Math.abs(body.tests[0].f / 41.216414635115875 - 1)).toBeLessThan(1e-9);
+      expect(body.rateRatios.map((r: { treatment: string }) => r.treatment)).toEqual(['B', 'C', 'D', 'E', 'F']);
+      expect(body.rates[0].rate).toBeCloseTo(14.5, 9); // mean count of spray A (R: mean(InsectSprays$count[1:12]))
+    });
+
+    it('refuses a count that is not whole and an unknown family', async () => {
+      const fraction = await t.http.post('/api/stats/counts').set(bearer(token)).send({ design: 'crd', observations: [{ treatment: 'A', value: 2.5 }, { treatment: 'B', value: 1 }] });
+      expect(fraction.status).toBe(422);
+      expect(fraction.body.message).toMatch(/row 1 of the observations: a count must be a whole number of at least 0, got 2.5/);
+      const family = await t.http.post('/api/stats/counts').set(bearer(token)).send({ design: 'crd', family: 'binomial', observations: insects });
+      expect(family.status).toBe(422);
+      expect(family.body.message).toMatch(/family must be one of auto, poisson, quasipoisson/);
     });
   });
 });

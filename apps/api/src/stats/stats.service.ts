@@ -1,8 +1,9 @@
 import { Injectable, UnprocessableEntityException } from '@nestjs/common';
-import type { CensoredAnswer } from '@friable/contracts';
-import { analyseCensoredTimes, analyseTrial, blocksForPower, friedman, kruskalWallis, rcbdPower, type TrialAnalysis, type TrialAnalysisRequest } from '@friable/stats';
+import type { CensoredAnswer, CountsAnswer, OrdinalAnswer } from '@friable/contracts';
+import { analyseCensoredTimes, analyseCounts, analyseOrdinalScores, analyseTrial, blocksForPower, friedman, kruskalWallis, rcbdPower, type TrialAnalysis, type TrialAnalysisRequest } from '@friable/stats';
 import type { AnovaRequestDto } from './dto/anova-request.dto';
 import type { CensoredRequestDto } from './dto/censored-request.dto';
+import type { CountsRequestDto, OrdinalRequestDto } from './dto/labelled-value-request.dto';
 import type { PowerRequestDto } from './dto/power-request.dto';
 import type { RankTestRequestDto } from './dto/rank-test-request.dto';
 
@@ -36,6 +37,14 @@ export class StatsService {
 
   censored(request: CensoredRequestDto): CensoredAnswer {
     return engine(() => plain(analyseCensoredTimes(request)));
+  }
+
+  ordinal(request: OrdinalRequestDto): OrdinalAnswer {
+    return engine(() => plain(analyseOrdinalScores(request)));
+  }
+
+  counts(request: CountsRequestDto): CountsAnswer {
+    return engine(() => plain(analyseCounts(request)));
   }
 
   friedman(request: RankTestRequestDto) {

@@ -1,6 +1,6 @@
 import { AFT_DISTRIBUTIONS, type AftDistribution } from '@friable/contracts';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
-import { LikelihoodRatioTestDto, ModelCoefficientDto } from './model-answer-parts.dto';
+import { ControlRatioDto, LikelihoodRatioTestDto, ModelCoefficientDto } from './model-answer-parts.dto';
 
 class LogRankDto {
   @ApiProperty({ example: 14.2 })
@@ -11,19 +11,6 @@ class LogRankDto {
   p: number;
   @ApiProperty({ example: 14, description: 'Number of strata (blocks, or site × block) the test was summed over.' })
   strata: number;
-}
-
-class TimeRatioDto {
-  @ApiProperty({ example: 'GYP' })
-  treatment: string;
-  @ApiProperty({ example: 0.62, description: 'Typical drain time relative to the control’s (below 1: faster).' })
-  ratio: number;
-  @ApiProperty({ example: 0.45, description: 'Simultaneous 95 % limits.' })
-  lower: number;
-  @ApiProperty({ example: 0.85 })
-  upper: number;
-  @ApiProperty({ example: 0.002, description: 'Single-step adjusted p-value.' })
-  p: number;
 }
 
 class MedianTimeDto {
@@ -95,8 +82,8 @@ export class CensoredAnswerDto {
   tests: LikelihoodRatioTestDto[];
   @ApiProperty({ type: LogRankDto })
   logRank: LogRankDto;
-  @ApiProperty({ type: [TimeRatioDto] })
-  timeRatios: TimeRatioDto[];
+  @ApiProperty({ type: [ControlRatioDto], description: 'Typical drain time relative to the control’s (below 1: faster).' })
+  timeRatios: ControlRatioDto[];
   @ApiProperty({ type: [MedianTimeDto] })
   medians: MedianTimeDto[];
   @ApiProperty({ type: [CurveDto] })
