@@ -19,3 +19,5 @@ export { compactLetterDisplay } from './compact-letters';
 export { noncentralFCdf } from './noncentral-f';
 export { blocksForPower, rcbdPower, type RcbdPowerInput, type RcbdPowerResult } from './power';
 export { backTransform, transformValues, type TransformKind, type TransformedValues } from './transforms';
+export { sumToZeroDesign, type FixedTerm, type SumToZeroDesign } from './sum-to-zero-design';
+export * from './reml/index';
