@@ -21,3 +21,12 @@ export { blocksForPower, rcbdPower, type RcbdPowerInput, type RcbdPowerResult } 
 export { backTransform, transformValues, type TransformKind, type TransformedValues } from './transforms';
 export { sumToZeroDesign, type FixedTerm, type SumToZeroDesign } from './sum-to-zero-design';
 export * from './reml/index';
+export { buildModelMatrix, linearPredictor, weightedCrossProduct, type ModelMatrix, type ModelMatrixTerm } from './model-matrix';
+export { factorSymmetric, type SymmetricFactor } from './symmetric-factor';
+export { MODEL_DESIGNS, modelLayout, type LabelledPlot, type LayoutTerm, type ModelDesign, type ModelLayout } from './model-layout';
+export { dropTermTests, type LikelihoodRatioRow } from './likelihood-ratio';
+export { manyToControl, manyToControlStatement, type ControlContrast, type ManyToControl } from './many-to-control';
+export { productLimitCurve, type CurveMedian, type ProductLimitCurve, type ProductLimitPoint, type TimedValue } from './product-limit';
+export { logRank, type LogRankResult, type StratifiedTime } from './log-rank';
+export { AFT_DISTRIBUTIONS, fitAcceleratedFailureTime, type AftDistribution, type AftFit } from './accelerated-failure-time';
+export { analyseCensoredTimes, type CensoredObservation, type CensoredTimesAnalysis, type CensoredTimesRequest, type TreatmentCurve, type TreatmentMedian } from './censored-times';
