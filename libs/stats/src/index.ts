@@ -19,6 +19,8 @@ export { compactLetterDisplay } from './compact-letters';
 export { noncentralFCdf } from './noncentral-f';
 export { blocksForPower, rcbdPower, type RcbdPowerInput, type RcbdPowerResult } from './power';
 export { backTransform, transformValues, type TransformKind, type TransformedValues } from './transforms';
+export { sumToZeroDesign, type FixedTerm, type SumToZeroDesign } from './sum-to-zero-design';
+export * from './reml/index';
 export { buildModelMatrix, linearPredictor, weightedCrossProduct, type ModelMatrix, type ModelMatrixTerm } from './model-matrix';
 export { factorSymmetric, type SymmetricFactor } from './symmetric-factor';
 export { MODEL_DESIGNS, modelLayout, type LabelledPlot, type LayoutTerm, type ModelDesign, type ModelLayout } from './model-layout';
