@@ -1,6 +1,7 @@
 import { NestFactory } from '@nestjs/core';
 import type { NestExpressApplication } from '@nestjs/platform-express';
 import { DocumentBuilder, SwaggerModule } from '@nestjs/swagger';
+import cookieParser from 'cookie-parser';
 import express, { type NextFunction, type Request, type Response } from 'express';
 import { existsSync } from 'node:fs';
 import { join } from 'node:path';
@@ -8,12 +9,16 @@ import { AppModule } from './app.module';
 import { toProblem } from './common/filters/problem.filter';
 import { createValidationPipe } from './common/pipes/validation.pipe';
 import { readAppConfig } from './config/app.config';
+import { readAuthConfig } from './config/auth.config';
 
 /** Everything main.ts and the end-to-end tests share: prefix, validation, OpenAPI page, the built web app. */
 export function configureApp(app: NestExpressApplication): NestExpressApplication {
   app.setGlobalPrefix('api');
   app.useGlobalPipes(createValidationPipe());
-  app.set('trust proxy', 'loopback');
+  // X-Forwarded-For counts only from the proxies TRUST_PROXY names (none by default), so a client cannot
+  // choose the address that sign-in lockouts and rate limits count by.
+  app.set('trust proxy', readAuthConfig().trustProxy);
+  app.use(cookieParser());
   app.disable('x-powered-by');
   // Analysis requests carry whole data sets; everything else stays small.
   app.use('/api/stats', express.json({ limit: '25mb' }));

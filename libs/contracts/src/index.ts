@@ -25,6 +25,12 @@ export interface PublicUser {
   isAdmin: boolean;
   isActive: boolean;
   createdAt: string;
+  /** BCP 47 tag for numbers and dates (e.g. `de-DE`, decimal comma); null means the browser's own. */
+  locale: string | null;
+  emailReminders: boolean;
+  emailReceipts: boolean;
+  /** When the person last signed in; null if never. */
+  lastSignInAt: string | null;
 }
 
 export interface LoginRequest {
@@ -62,3 +68,5 @@ export * from './team';
 export * from './intake';
 export * from './findings';
 export * from './models';
+export * from './accounts';
+export * from './review';

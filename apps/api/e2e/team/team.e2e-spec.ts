@@ -259,7 +259,7 @@ describe('the Team: members, invitations by e-mail, accepting', () => {
     expect(short.status).toBe(422);
     expect(short.body.errors).toEqual([
       { field: 'name', message: 'name must not be empty' },
-      { field: 'password', message: 'password must be at least 10 characters long' },
+      { field: 'password', message: 'The password must be at least 12 characters long; it has 5.' },
     ]);
     expect(await User.count({ where: { email } })).toBe(0);
     expect((await t.http.get(`/api/invitations/${token}`)).status).toBe(200);
