@@ -1,4 +1,5 @@
 import { registerDecorator, type ValidationArguments, type ValidationOptions } from 'class-validator';
+import { checkNumber, checkNumberText, numberBoundMessage, shownNumber } from '../../common/input/number-bounds';
 
 const decimalText = /^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/;
 const MAX_LABEL = 100;
@@ -33,8 +34,12 @@ export function observationProblems(value: unknown): string[] {
       else for (const [name, level] of Object.entries(o.factors)) label(row, `factors.${name}`, level);
     }
     const v = o.value;
+    const bound = typeof v === 'number' ? checkNumber(v) : typeof v === 'string' ? checkNumberText(v) : { ok: true as const };
     const numeric = (typeof v === 'number' && Number.isFinite(v)) || (typeof v === 'string' && decimalText.test(v.trim()));
-    if (!numeric) problems.push(`observations[${row}].value must be a finite number or a decimal string`);
+    if (!bound.ok) {
+      const shown = typeof v === 'string' ? `"${shownNumber(v)}"` : shownNumber(String(v));
+      problems.push(numberBoundMessage(`observations[${row}].value ${shown}`, bound.problem).replace(/\.$/, ''));
+    } else if (!numeric) problems.push(`observations[${row}].value must be a finite number or a decimal string`);
   });
   if (problems.length > MAX_REPORTED) return [...problems.slice(0, MAX_REPORTED), `and more problems after observations[${MAX_REPORTED}]`];
   return problems;
