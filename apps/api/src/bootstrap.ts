@@ -8,12 +8,14 @@ import { AppModule } from './app.module';
 import { toProblem } from './common/filters/problem.filter';
 import { boundedJson } from './common/input/bounded-json';
 import { createValidationPipe } from './common/pipes/validation.pipe';
+import { securityHeaders } from './common/security/security-headers';
 import { readAppConfig } from './config/app.config';
 import { MAX_OBSERVATIONS } from './stats/dto/anova-request.dto';
 
 /** Everything main.ts and the end-to-end tests share: prefix, validation, OpenAPI page, the built web app. */
 export function configureApp(app: NestExpressApplication): NestExpressApplication {
   app.setGlobalPrefix('api');
+  app.use(securityHeaders());
   app.useGlobalPipes(createValidationPipe());
   app.set('trust proxy', 'loopback');
   app.disable('x-powered-by');
