@@ -266,9 +266,11 @@ describe('the Team: members, invitations by e-mail, accepting', () => {
     expect((await t.http.get('/api/invitations/not-a-real-token-at-all')).status).toBe(404);
   });
 
-  it('shows caught e-mails, newest first, in the development Outbox', async () => {
+  it('shows caught e-mails, newest first, in the development Outbox (administrators only)', async () => {
     const { email } = await inviteCollaborator();
-    const outbox = await t.http.get('/api/dev/outbox').set(bearer(collaboratorToken));
+    expect((await t.http.get('/api/dev/outbox').set(bearer(collaboratorToken))).status).toBe(403);
+    const adminToken = await tokenFor(t, await createPerson({ isAdmin: true, name: 'Outbox reader' }));
+    const outbox = await t.http.get('/api/dev/outbox').set(bearer(adminToken));
     expect(outbox.status).toBe(200);
     const times = outbox.body.map((m: { receivedAt: string }) => m.receivedAt);
     expect(times).toEqual([...times].sort().reverse());

@@ -1,6 +1,8 @@
 import type { Measure } from '@friable/contracts';
 import { findUnit } from '@friable/field';
-import Decimal from 'decimal.js';
+import type Decimal from 'decimal.js';
+import { MeasurementDecimal } from '../../common/input/measurement-decimal';
+import { numberBoundMessage, shownNumber } from '../../common/input/number-bounds';
 import { readDecimalText, type DecimalTextProblem } from './decimal-text';
 import { looksLikeFormula } from './neutralise-formula';
 import { convertDecimalText } from './unit-factor';
@@ -33,6 +35,7 @@ const leftCensoredPrefix = /^(?:<=|<|≤)/;
 const freezeError = (message: string): CellValue => Object.freeze({ kind: 'error', message });
 
 function notANumber(typed: string, problem: DecimalTextProblem): string {
+  if (problem === 'too-large' || problem === 'too-small' || problem === 'too-many-digits') return numberBoundMessage(`"${shownNumber(typed)}"`, problem);
   if (problem === 'comma-in-point-file') {
     return `"${typed}" is not a number here: this file uses a point as the decimal mark (write ${typed.replace(',', '.')}) and no thousands separators.`;
   }
@@ -125,7 +128,7 @@ export function parseCellValue(text: string, measure: Measure, { decimalComma, h
   }
   const converted = headerUnit !== null && headerUnit !== measure.unit;
   const valueText = converted ? convertDecimalText(reading.text, headerUnit, measure.unit) : reading.text;
-  const value = new Decimal(valueText);
+  const value = new MeasurementDecimal(valueText);
   const shown = `${censored ? '>' : ''}${valueText}${unitSuffix(measure.unit)}${converted ? ` (${typed}${unitSuffix(headerUnit)})` : ''}`;
   const kindError = kindProblem(value, shown, measure);
   if (kindError) return freezeError(kindError);
