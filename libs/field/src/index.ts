@@ -39,3 +39,4 @@ export {
   type TrialDesign,
 } from './randomize';
 export { DESIGN_MINIMUMS, designWarnings, type DesignCheckInput } from './design-checks';
+export { DATA_COLUMNS, IDENTITY_COLUMNS, RECORD_COLUMNS, dataColumnOfHeader, normaliseHeader, type DataColumn } from './data-columns';

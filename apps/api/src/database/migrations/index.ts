@@ -18,6 +18,9 @@ import * as createObservationChanges from './20261204090200-create-observation-c
 import * as createPlotPhotos from './20261204090300-create-plot-photos';
 import * as createAnalysisSnapshots from './20261205090000-create-analysis-snapshots';
 import * as createSnapshotComments from './20261205090100-create-snapshot-comments';
+import * as addObservationUpload from './20261217090000-add-observation-upload';
+import * as createIntakeImports from './20261217090100-create-intake-imports';
+import * as createIntakeColumnChoices from './20261217090200-create-intake-column-choices';
 
 export interface MigrationModule {
   up(params: { context: QueryInterface }): Promise<void>;
@@ -45,4 +48,7 @@ export const migrations: ReadonlyArray<readonly [name: string, module: Migration
   ['20261204090300-create-plot-photos', createPlotPhotos],
   ['20261205090000-create-analysis-snapshots', createAnalysisSnapshots],
   ['20261205090100-create-snapshot-comments', createSnapshotComments],
+  ['20261217090000-add-observation-upload', addObservationUpload],
+  ['20261217090100-create-intake-imports', createIntakeImports],
+  ['20261217090200-create-intake-column-choices', createIntakeColumnChoices],
 ];
