@@ -39,6 +39,8 @@ describe('migrations', () => {
       'analysis_snapshots',
       'assessment_rounds',
       'factor_levels',
+      'intake_column_choices',
+      'intake_imports',
       'intake_uploads',
       'invitations',
       'measures',

@@ -21,6 +21,8 @@ import { SnapshotCommentRow } from '../analyses/models/snapshot-comment.model';
 import { UserSession } from '../auth/models/user-session.model';
 import { SignInLockout } from '../auth/models/sign-in-lockout.model';
 import { PasswordReset } from '../auth/models/password-reset.model';
+import { IntakeImportRow } from '../intake/models/intake-import.model';
+import { IntakeColumnChoiceRow } from '../intake/models/intake-column-choice.model';
 
 /** Every model, for connections made outside Nest (command line, tests). */
 export const allModels = [
@@ -47,4 +49,6 @@ export const allModels = [
   UserSession,
   SignInLockout,
   PasswordReset,
+  IntakeImportRow,
+  IntakeColumnChoiceRow,
 ];

@@ -26,6 +26,9 @@ import * as createTrialDepartures from './20261213090400-create-trial-departures
 import * as createAnalysisSignOffs from './20261213090500-create-analysis-sign-offs';
 import * as extendSnapshotComments from './20261213090600-extend-snapshot-comments';
 import * as createReviewRequests from './20261213090700-create-review-requests';
+import * as addObservationUpload from './20261217090000-add-observation-upload';
+import * as createIntakeImports from './20261217090100-create-intake-imports';
+import * as createIntakeColumnChoices from './20261217090200-create-intake-column-choices';
 
 export interface MigrationModule {
   up(params: { context: QueryInterface }): Promise<void>;
@@ -61,4 +64,7 @@ export const migrations: ReadonlyArray<readonly [name: string, module: Migration
   ['20261213090500-create-analysis-sign-offs', createAnalysisSignOffs],
   ['20261213090600-extend-snapshot-comments', extendSnapshotComments],
   ['20261213090700-create-review-requests', createReviewRequests],
+  ['20261217090000-add-observation-upload', addObservationUpload],
+  ['20261217090100-create-intake-imports', createIntakeImports],
+  ['20261217090200-create-intake-column-choices', createIntakeColumnChoices],
 ];
