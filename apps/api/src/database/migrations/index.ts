@@ -18,6 +18,9 @@ import * as createObservationChanges from './20261204090200-create-observation-c
 import * as createPlotPhotos from './20261204090300-create-plot-photos';
 import * as createAnalysisSnapshots from './20261205090000-create-analysis-snapshots';
 import * as createSnapshotComments from './20261205090100-create-snapshot-comments';
+import * as factorLevelRates from './20261218090000-factor-level-rates';
+import * as fourFactorTreatments from './20261218090100-four-factor-treatments';
+import * as plotUnits from './20261218090200-plot-units';
 
 export interface MigrationModule {
   up(params: { context: QueryInterface }): Promise<void>;
@@ -45,4 +48,7 @@ export const migrations: ReadonlyArray<readonly [name: string, module: Migration
   ['20261204090300-create-plot-photos', createPlotPhotos],
   ['20261205090000-create-analysis-snapshots', createAnalysisSnapshots],
   ['20261205090100-create-snapshot-comments', createSnapshotComments],
+  ['20261218090000-factor-level-rates', factorLevelRates],
+  ['20261218090100-four-factor-treatments', fourFactorTreatments],
+  ['20261218090200-plot-units', plotUnits],
 ];
