@@ -2,6 +2,8 @@ import { Body, Controller, HttpCode, Post } from '@nestjs/common';
 import { ApiOkResponse, ApiOperation, ApiTags, ApiUnprocessableEntityResponse } from '@nestjs/swagger';
 import { SignedIn } from '../common/decorators/access.decorator';
 import { AnovaRequestDto } from './dto/anova-request.dto';
+import { CensoredAnswerDto } from './dto/censored-answer.dto';
+import { CensoredRequestDto } from './dto/censored-request.dto';
 import { PowerRequestDto } from './dto/power-request.dto';
 import { RankTestRequestDto } from './dto/rank-test-request.dto';
 import { StatsService } from './stats.service';
@@ -25,6 +27,24 @@ export class StatsController {
   @ApiUnprocessableEntityResponse({ description: 'A malformed body (naming the field) or a statistically impossible request (the engine’s sentence).' })
   anova(@Body() body: AnovaRequestDto) {
     return this.stats.anova(body);
+  }
+
+  @Post('censored')
+  @SignedIn()
+  @HttpCode(200)
+  @ApiOperation({
+    summary: 'Drain times with a cut-off: not-drained curves, stratified log-rank test and time ratios to the control',
+    description:
+      'Product-limit curves per treatment with 95 % log-scale bands and medians (null: not reached), per site too; the log-rank test stratified by block ' +
+      '(site × block with several sites); an accelerated-failure-time model (weibull, lognormal or loglogistic) with blocks and sites as terms, a ' +
+      'likelihood-ratio test of each term by dropping it (a site with its blocks), and time ratios to the control with simultaneous 95 % limits and ' +
+      'single-step (Dunnett-type) adjusted p-values. A block where nothing drained is left out of the model; a treatment that never drained leaves ' +
+      'the model out (warnings say so).',
+  })
+  @ApiOkResponse({ type: CensoredAnswerDto })
+  @ApiUnprocessableEntityResponse({ description: 'A malformed body (naming the field) or data the analysis cannot take (the engine’s sentence).' })
+  censored(@Body() body: CensoredRequestDto) {
+    return this.stats.censored(body);
   }
 
   @Post('friedman')
