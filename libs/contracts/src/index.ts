@@ -14,7 +14,11 @@ export type TrialRole = (typeof TRIAL_ROLES)[number];
 export const TRIAL_STATUSES = ['draft', 'active', 'locked', 'archived'] as const;
 export type TrialStatus = (typeof TRIAL_STATUSES)[number];
 
-export const TRIAL_DESIGNS = ['crd', 'rcbd', 'factorial-rcbd'] as const;
+/**
+ * One treatment factor: completely randomized (crd) or in complete blocks (rcbd). Factorials of 2–4 factors,
+ * completely randomized or in blocks. Split plot and split-split plot, in blocks. Any of them at one site or several.
+ */
+export const TRIAL_DESIGNS = ['crd', 'rcbd', 'factorial-crd', 'factorial-rcbd', 'split-plot', 'split-split-plot'] as const;
 export type TrialDesign = (typeof TRIAL_DESIGNS)[number];
 
 /** What the API says about a person: never the password hash. */

@@ -29,6 +29,9 @@ import * as createReviewRequests from './20261213090700-create-review-requests';
 import * as addObservationUpload from './20261217090000-add-observation-upload';
 import * as createIntakeImports from './20261217090100-create-intake-imports';
 import * as createIntakeColumnChoices from './20261217090200-create-intake-column-choices';
+import * as factorLevelRates from './20261218090000-factor-level-rates';
+import * as fourFactorTreatments from './20261218090100-four-factor-treatments';
+import * as plotUnits from './20261218090200-plot-units';
 
 export interface MigrationModule {
   up(params: { context: QueryInterface }): Promise<void>;
@@ -67,4 +70,7 @@ export const migrations: ReadonlyArray<readonly [name: string, module: Migration
   ['20261217090000-add-observation-upload', addObservationUpload],
   ['20261217090100-create-intake-imports', createIntakeImports],
   ['20261217090200-create-intake-column-choices', createIntakeColumnChoices],
+  ['20261218090000-factor-level-rates', factorLevelRates],
+  ['20261218090100-four-factor-treatments', fourFactorTreatments],
+  ['20261218090200-plot-units', plotUnits],
 ];
