@@ -2,7 +2,7 @@ import * as mariadb from 'mariadb';
 import type { SequelizeOptions } from 'sequelize-typescript';
 import type { DatabaseConfig } from '../config/database.config';
 
-/** Connection options shared by the Nest module, the command line and the tests. */
+/** Connection options shared by the Nest module, the command line and the tests (a socket timeout of 0 means none). */
 export function sequelizeOptions(config: DatabaseConfig): SequelizeOptions {
   return {
     dialect: 'mariadb',
@@ -14,9 +14,12 @@ export function sequelizeOptions(config: DatabaseConfig): SequelizeOptions {
     username: config.username,
     password: config.password,
     logging: false,
-    pool: { max: config.poolMax, min: 0, idle: 10_000 },
+    // Short waits, so that a database that is gone is answered 503 within a second (see
+    // common/filters/problem.filter.ts) rather than holding requests; the socket timeout bounds a
+    // query sent to a server that froze (a paused server never closes the connection).
+    pool: { max: config.poolMax, min: 0, idle: 10_000, acquire: config.acquireTimeoutMs, evict: 1_000 },
     define: { underscored: true, timestamps: true },
-    dialectOptions: { connectTimeout: 5_000 },
+    dialectOptions: { connectTimeout: config.connectTimeoutMs, socketTimeout: config.socketTimeoutMs },
     timezone: '+00:00',
   };
 }
