@@ -12,12 +12,16 @@ import { createValidationPipe } from './common/pipes/validation.pipe';
 import { securityHeaders } from './common/security/security-headers';
 import { readAppConfig } from './config/app.config';
 import { readAuthConfig } from './config/auth.config';
+import { databaseGate } from './health/database-gate';
+import { DatabaseWatchService } from './health/database-watch.service';
 import { MAX_OBSERVATIONS } from './stats/dto/anova-request.dto';
 
 /** Everything main.ts and the end-to-end tests share: prefix, validation, OpenAPI page, the built web app. */
 export function configureApp(app: NestExpressApplication): NestExpressApplication {
   app.setGlobalPrefix('api');
   app.use(securityHeaders());
+  // While the database does not answer, API requests are answered 503 at once (health/database-gate.ts).
+  app.use(databaseGate(app.get(DatabaseWatchService)));
   app.useGlobalPipes(createValidationPipe());
   // X-Forwarded-For counts only from the proxies TRUST_PROXY names (none by default), so a client cannot
   // choose the address that sign-in lockouts and rate limits count by.
