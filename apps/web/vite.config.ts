@@ -30,5 +30,7 @@ export default defineConfig({
     environment: 'jsdom',
     setupFiles: ['src/test-setup.ts'],
     css: false,
+    // Two cores shared with the other suites: a page test typing into several boxes can take seconds.
+    testTimeout: 20_000,
   },
 });

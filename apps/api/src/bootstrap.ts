@@ -1,6 +1,6 @@
 import { NestFactory } from '@nestjs/core';
 import type { NestExpressApplication } from '@nestjs/platform-express';
-import { DocumentBuilder, SwaggerModule } from '@nestjs/swagger';
+import { SwaggerModule } from '@nestjs/swagger';
 import express, { type NextFunction, type Request, type Response } from 'express';
 import { existsSync } from 'node:fs';
 import { join } from 'node:path';
@@ -8,6 +8,7 @@ import { AppModule } from './app.module';
 import { toProblem } from './common/filters/problem.filter';
 import { createValidationPipe } from './common/pipes/validation.pipe';
 import { readAppConfig } from './config/app.config';
+import { createOpenApiDocument } from './openapi/openapi-document';
 
 /** Everything main.ts and the end-to-end tests share: prefix, validation, OpenAPI page, the built web app. */
 export function configureApp(app: NestExpressApplication): NestExpressApplication {
@@ -26,15 +27,7 @@ export function configureApp(app: NestExpressApplication): NestExpressApplicatio
   });
   app.enableShutdownHooks();
 
-  const document = SwaggerModule.createDocument(
-    app,
-    new DocumentBuilder()
-      .setTitle('Friable API')
-      .setDescription('Replicated garden-treatment trials: protocol, sites, plots, observations and findings.')
-      .setVersion('0.1.0')
-      .addBearerAuth()
-      .build(),
-  );
+  const document = createOpenApiDocument(app);
   SwaggerModule.setup('api/docs', app, document, { jsonDocumentUrl: 'api/docs/openapi.json' });
 
   const { webDistDir } = readAppConfig();

@@ -61,3 +61,4 @@ export * from './protocol';
 export * from './team';
 export * from './intake';
 export * from './findings';
+export * from './planner';

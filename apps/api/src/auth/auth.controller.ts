@@ -7,6 +7,8 @@ import { AuthService } from './auth.service';
 import { Public, SignedIn } from '../common/decorators/access.decorator';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
 import { LoginDto } from './dto/login.dto';
+import { PublicUserDto } from '../users/dto/public-user.dto';
+import { LoginResponseDto } from './dto/login-response.dto';
 
 @ApiTags('auth')
 @Controller('auth')
@@ -18,7 +20,7 @@ export class AuthController {
   // Every attempt counts here, right or wrong; LoginAttemptsService separately refuses after repeated failures.
   @Throttle({ default: { limit: () => readAuthConfig().loginAttemptsPerMinute, ttl: 60_000 } })
   @HttpCode(200)
-  @ApiOkResponse({ description: 'A bearer token and the signed-in person.' })
+  @ApiOkResponse({ type: LoginResponseDto, description: 'A bearer token and the signed-in person.' })
   @ApiUnauthorizedResponse({ description: 'Wrong e-mail or password (the same answer for both).' })
   @ApiTooManyRequestsResponse({ description: 'Too many failed attempts from this address within the window.' })
   login(@Body() body: LoginDto, @Ip() address: string) {
@@ -27,6 +29,7 @@ export class AuthController {
 
   @Get('me')
   @SignedIn()
+  @ApiOkResponse({ type: PublicUserDto, description: 'The signed-in person.' })
   me(@CurrentUser() user: AuthUser) {
     return this.auth.me(user.id);
   }

@@ -2,6 +2,7 @@ import { Controller, Get } from '@nestjs/common';
 import { ApiNotFoundResponse, ApiOkResponse, ApiTags } from '@nestjs/swagger';
 import { SignedIn } from '../common/decorators/access.decorator';
 import { OutboxService } from './outbox.service';
+import { OutboxMessageDto } from './dto/outbox-message.dto';
 
 @ApiTags('development')
 @Controller('dev/outbox')
@@ -10,7 +11,7 @@ export class OutboxController {
 
   @Get()
   @SignedIn()
-  @ApiOkResponse({ description: 'OutboxMessage[]: e-mails the local SMTP sink caught, newest first.' })
+  @ApiOkResponse({ type: [OutboxMessageDto], description: 'OutboxMessage[]: e-mails the local SMTP sink caught, newest first.' })
   @ApiNotFoundResponse({ description: 'NODE_ENV is production: there is no Outbox.' })
   list() {
     return this.outbox.list();

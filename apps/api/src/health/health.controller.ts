@@ -5,6 +5,7 @@ import type { Response } from 'express';
 import { QueryTypes } from 'sequelize';
 import type { Sequelize } from 'sequelize-typescript';
 import { Public } from '../common/decorators/access.decorator';
+import { HealthReportDto } from './dto/health-report.dto';
 
 @ApiTags('health')
 @Controller('health')
@@ -13,8 +14,8 @@ export class HealthController {
 
   @Get()
   @Public()
-  @ApiOkResponse({ description: '{"status":"ok","database":"up"}' })
-  @ApiServiceUnavailableResponse({ description: 'Names what is down.' })
+  @ApiOkResponse({ type: HealthReportDto, description: '{"status":"ok","database":"up"}' })
+  @ApiServiceUnavailableResponse({ type: HealthReportDto, description: 'Names what is down.' })
   async check(@Res({ passthrough: true }) response: Response) {
     try {
       await Promise.race([

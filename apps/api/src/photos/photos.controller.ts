@@ -6,6 +6,8 @@ import { CurrentTrialAccess, CurrentUser } from '../common/decorators/current-us
 import { SingleFileUpload } from '../storage/single-file-upload.interceptor';
 import { photosConfig } from './photos.config';
 import { PhotosService } from './photos.service';
+import { PlotPhotoDto } from './dto/plot-photo.dto';
+import { ApiFileResponse } from '../common/openapi/file-response.decorator';
 
 @ApiTags('photos')
 @Controller('trials/:trialId/plots/:plotId/rounds/:roundId/photo')
@@ -14,7 +16,7 @@ export class PhotosController {
 
   @Get()
   @AnyTrialMember()
-  @ApiOkResponse({ description: 'The image (image/jpeg or image/png).' })
+  @ApiFileResponse(['image/jpeg', 'image/png'], 'The image (image/jpeg or image/png).')
   async get(@CurrentTrialAccess() access: TrialAccessContext, @Param('plotId', ParseIntPipe) plotId: number, @Param('roundId', ParseIntPipe) roundId: number) {
     const { photo, bytes } = await this.photos.get(access.trialId, plotId, roundId);
     return new StreamableFile(bytes, { type: photo.contentType, length: bytes.length, disposition: 'inline' });
@@ -25,7 +27,7 @@ export class PhotosController {
   @UseInterceptors(SingleFileUpload({ field: 'file', configToken: photosConfig.KEY, what: 'a photo' }))
   @ApiConsumes('multipart/form-data')
   @ApiBody({ schema: { type: 'object', required: ['file'], properties: { file: { type: 'string', format: 'binary', description: 'A JPEG or PNG image.' } } } })
-  @ApiOkResponse({ description: 'PlotPhoto: the photo kept (its type as found in the bytes).' })
+  @ApiOkResponse({ type: PlotPhotoDto, description: 'PlotPhoto: the photo kept (its type as found in the bytes).' })
   @ApiUnprocessableEntityResponse({ description: 'The file is not a JPEG or PNG image (checked from its content).' })
   @ApiPayloadTooLargeResponse({ description: 'The photo is larger than PHOTO_MAX_BYTES (8 MB by default).' })
   @ApiConflictResponse({ description: 'The trial is locked.' })

@@ -1,10 +1,11 @@
 import { Body, Controller, Get, HttpCode, Param, ParseIntPipe, Post } from '@nestjs/common';
-import { ApiConflictResponse, ApiTags } from '@nestjs/swagger';
+import { ApiConflictResponse, ApiCreatedResponse, ApiOkResponse, ApiTags } from '@nestjs/swagger';
 import type { AuthUser } from '../auth/auth-user';
 import { AdminOnly } from '../common/decorators/access.decorator';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
 import { CreateUserDto } from './dto/create-user.dto';
 import { UsersService } from './users.service';
+import { PublicUserDto } from './dto/public-user.dto';
 
 @ApiTags('users')
 @Controller('users')
@@ -13,6 +14,7 @@ export class UsersController {
 
   @Get()
   @AdminOnly()
+  @ApiOkResponse({ type: [PublicUserDto], description: 'Every account.' })
   list() {
     return this.users.list();
   }
@@ -20,6 +22,7 @@ export class UsersController {
   @Post()
   @AdminOnly()
   @ApiConflictResponse({ description: 'The e-mail is already in use.' })
+  @ApiCreatedResponse({ type: PublicUserDto, description: 'The new account.' })
   create(@Body() body: CreateUserDto) {
     return this.users.create(body);
   }
@@ -27,6 +30,7 @@ export class UsersController {
   @Post(':userId/deactivate')
   @AdminOnly()
   @HttpCode(200)
+  @ApiOkResponse({ type: PublicUserDto, description: 'The account, now inactive: its sessions end at once.' })
   deactivate(@Param('userId', ParseIntPipe) userId: number, @CurrentUser() actor: AuthUser) {
     return this.users.setActive(userId, false, actor.id);
   }
@@ -34,6 +38,7 @@ export class UsersController {
   @Post(':userId/reactivate')
   @AdminOnly()
   @HttpCode(200)
+  @ApiOkResponse({ type: PublicUserDto, description: 'The account, active again.' })
   reactivate(@Param('userId', ParseIntPipe) userId: number, @CurrentUser() actor: AuthUser) {
     return this.users.setActive(userId, true, actor.id);
   }

@@ -1,10 +1,9 @@
-import type { Observation } from '@friable/contracts';
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { apiRequest } from '../../../lib/api-client';
+import { api, unwrap } from '../../../lib/api-client';
 
 /** GET /api/trials/:trialId/observations?siteId=&roundId= — every stored value of one site and round. */
-export function getObservations(trialId: number, siteId: number, roundId: number): Promise<Observation[]> {
-  return apiRequest<Observation[]>(`/trials/${trialId}/observations?siteId=${siteId}&roundId=${roundId}`);
+export function getObservations(trialId: number, siteId: number, roundId: number) {
+  return unwrap(api.GET('/api/trials/{trialId}/observations', { params: { path: { trialId }, query: { siteId, roundId } } }));
 }
 
 /** Under the trial's key, so an Intake commit (which invalidates the trial) reloads the Ledger too. */

@@ -1,18 +1,17 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import { ApiError, apiRequest, tokenStore } from '../../../lib/api-client';
+import { api, ApiError, formBody, unwrap } from '../../../lib/api-client';
 
-const photoPath = (trialId: number, plotId: number, roundId: number) => `/trials/${trialId}/plots/${plotId}/rounds/${roundId}/photo`;
+const photoPath = '/api/trials/{trialId}/plots/{plotId}/rounds/{roundId}/photo' as const;
 
 /**
- * GET /api/trials/:trialId/plots/:plotId/rounds/:roundId/photo with the session's token (an <img>
- * alone would go without it): an object URL for the image, or null when the plot has no photo.
+ * GET /api/trials/:trialId/plots/:plotId/rounds/:roundId/photo through the client (an <img> alone would
+ * go without the session): an object URL for the image, or null when the plot has no photo.
  */
 export async function getPlotPhoto(trialId: number, plotId: number, roundId: number): Promise<string | null> {
-  const token = tokenStore.get();
-  const response = await fetch(`/api${photoPath(trialId, plotId, roundId)}`, { headers: token ? { Authorization: `Bearer ${token}` } : {} });
+  const { data, response } = await api.GET(photoPath, { params: { path: { trialId, plotId, roundId } }, parseAs: 'blob' });
   if (response.status === 404) return null;
-  if (!response.ok) throw new ApiError(response.status, `The photo could not be loaded (the server answered ${response.status}).`);
-  return URL.createObjectURL(await response.blob());
+  if (!response.ok || !data) throw new ApiError(response.status, `The photo could not be loaded (the server answered ${response.status}).`);
+  return URL.createObjectURL(data);
 }
 
 export const plotPhotoQueryOptions = (trialId: number, plotId: number, roundId: number) => ({
@@ -25,10 +24,8 @@ export function usePlotPhoto(trialId: number, plotId: number | null, roundId: nu
 }
 
 /** PUT the photo (JPEG or PNG, as multipart `file`). */
-export function putPlotPhoto({ trialId, plotId, roundId, file }: { trialId: number; plotId: number; roundId: number; file: File }): Promise<unknown> {
-  const form = new FormData();
-  form.append('file', file, file.name);
-  return apiRequest(photoPath(trialId, plotId, roundId), { method: 'PUT', body: form });
+export function putPlotPhoto({ trialId, plotId, roundId, file }: { trialId: number; plotId: number; roundId: number; file: File }) {
+  return unwrap(api.PUT(photoPath, { params: { path: { trialId, plotId, roundId } }, ...formBody({ file }) }));
 }
 
 export function usePutPlotPhoto(trialId: number) {

@@ -1,6 +1,7 @@
-import type { Observation, ObservationCreate, ObservationEdit } from '@friable/contracts';
+import type { ObservationEdit } from '@friable/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { apiRequest } from '../../../lib/api-client';
+import { api, unwrap } from '../../../lib/api-client';
+import { trialQueryOptions } from '../../../lib/api/get-trial';
 
 export interface ObservationSave {
   trialId: number;
@@ -18,12 +19,12 @@ export interface ObservationSave {
  * /api/trials/:trialId/observations for a new value. The server judges the value (422 with its
  * sentence) and answers 409 when someone else changed it since (nothing is overwritten).
  */
-export function saveObservation({ trialId, observationId, plotId, roundId, measureId, edit }: ObservationSave): Promise<Observation> {
+export function saveObservation({ trialId, observationId, plotId, roundId, measureId, edit }: ObservationSave) {
   if (observationId === null) {
     const { version: _unused, ...value } = edit;
-    return apiRequest<Observation>(`/trials/${trialId}/observations`, { method: 'POST', json: { plotId, roundId, measureId, ...value } satisfies ObservationCreate });
+    return unwrap(api.POST('/api/trials/{trialId}/observations', { params: { path: { trialId } }, body: { plotId, roundId, measureId, ...value } }));
   }
-  return apiRequest<Observation>(`/trials/${trialId}/observations/${observationId}`, { method: 'PATCH', json: edit });
+  return unwrap(api.PATCH('/api/trials/{trialId}/observations/{observationId}', { params: { path: { trialId, observationId } }, body: edit }));
 }
 
 /** Saves one cell; afterwards the site's values, and the trial (its sites' "has data"), load again. */
@@ -32,7 +33,7 @@ export function useSaveObservation(trialId: number) {
   return useMutation({
     mutationFn: saveObservation,
     onSettled: async () => {
-      await queryClient.invalidateQueries({ queryKey: ['trials', trialId] });
+      await queryClient.invalidateQueries({ queryKey: trialQueryOptions(trialId).queryKey });
     },
   });
 }

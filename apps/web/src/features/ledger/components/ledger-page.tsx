@@ -6,7 +6,7 @@ import { ConfirmButton } from '../../../components/confirm-button';
 import { EmptyState, ErrorState, LoadingState } from '../../../components/states';
 import { formatNumber } from '../../../lib/format';
 import { useObservations } from '../api/get-observations';
-import { useSitePlots } from '../api/get-site-plots';
+import { useSitePlots } from '../../../lib/api/get-site-plots';
 import { useSetTrialStatus } from '../api/set-trial-status';
 import { useCellSave } from '../hooks/use-cell-save';
 import { CellPanel } from './cell-panel';

@@ -1,10 +1,9 @@
-import type { Plot } from '@friable/contracts';
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { apiRequest } from '../../../lib/api-client';
+import { api, unwrap } from '../api-client';
 
 /** GET /api/trials/:trialId/plots?siteId= — the Ledger's rows: every plot of the site, values or not. */
-export function getSitePlots(trialId: number, siteId: number): Promise<Plot[]> {
-  return apiRequest<Plot[]>(`/trials/${trialId}/plots?siteId=${siteId}`);
+export function getSitePlots(trialId: number, siteId: number) {
+  return unwrap(api.GET('/api/trials/{trialId}/plots', { params: { path: { trialId }, query: { siteId } } }));
 }
 
 export const sitePlotsQueryOptions = (trialId: number, siteId: number) =>

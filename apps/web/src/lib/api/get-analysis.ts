@@ -1,10 +1,9 @@
-import type { AnalysisSnapshot } from '@friable/contracts';
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { apiRequest } from '../../../lib/api-client';
+import { api, unwrap } from '../api-client';
 
 /** GET /api/trials/:trialId/analyses/:analysisId — the stored result, never recomputed, and whether the data changed since. */
-export function getAnalysis(trialId: number, analysisId: number): Promise<AnalysisSnapshot> {
-  return apiRequest<AnalysisSnapshot>(`/trials/${trialId}/analyses/${analysisId}`);
+export function getAnalysis(trialId: number, analysisId: number) {
+  return unwrap(api.GET('/api/trials/{trialId}/analyses/{analysisId}', { params: { path: { trialId, analysisId } } }));
 }
 
 export const analysisQueryOptions = (trialId: number, analysisId: number) =>
