@@ -1,24 +1,34 @@
 import { NestFactory } from '@nestjs/core';
 import type { NestExpressApplication } from '@nestjs/platform-express';
 import { SwaggerModule } from '@nestjs/swagger';
+import cookieParser from 'cookie-parser';
 import express, { type NextFunction, type Request, type Response } from 'express';
 import { existsSync } from 'node:fs';
 import { join } from 'node:path';
 import { AppModule } from './app.module';
 import { toProblem } from './common/filters/problem.filter';
+import { boundedJson } from './common/input/bounded-json';
 import { createValidationPipe } from './common/pipes/validation.pipe';
+import { securityHeaders } from './common/security/security-headers';
 import { readAppConfig } from './config/app.config';
 import { createOpenApiDocument } from './openapi/openapi-document';
+import { readAuthConfig } from './config/auth.config';
+import { MAX_OBSERVATIONS } from './stats/dto/anova-request.dto';
 
 /** Everything main.ts and the end-to-end tests share: prefix, validation, OpenAPI page, the built web app. */
 export function configureApp(app: NestExpressApplication): NestExpressApplication {
   app.setGlobalPrefix('api');
+  app.use(securityHeaders());
   app.useGlobalPipes(createValidationPipe());
-  app.set('trust proxy', 'loopback');
+  // X-Forwarded-For counts only from the proxies TRUST_PROXY names (none by default), so a client cannot
+  // choose the address that sign-in lockouts and rate limits count by.
+  app.set('trust proxy', readAuthConfig().trustProxy);
+  app.use(cookieParser());
   app.disable('x-powered-by');
-  // Analysis requests carry whole data sets; everything else stays small.
-  app.use('/api/stats', express.json({ limit: '25mb' }));
-  app.use(express.json({ limit: '2mb' }));
+  // Analysis requests carry whole data sets; everything else stays small. Depth, list length and
+  // numbers are bounded on the raw bytes before JSON.parse (common/input/bounded-json.ts).
+  app.use('/api/stats', boundedJson({ limit: '25mb', maxItems: MAX_OBSERVATIONS }));
+  app.use(boundedJson({ limit: '2mb' }));
   // Body-parser failures are answered here, in the API's own words, before they reach a route.
   app.use((error: unknown, _request: Request, response: Response, next: NextFunction) => {
     if (!error) return next();
@@ -27,10 +37,10 @@ export function configureApp(app: NestExpressApplication): NestExpressApplicatio
   });
   app.enableShutdownHooks();
 
-  const document = createOpenApiDocument(app);
-  SwaggerModule.setup('api/docs', app, document, { jsonDocumentUrl: 'api/docs/openapi.json' });
+  const { webDistDir, apiDocsPublic } = readAppConfig();
+  // The OpenAPI page is public only when API_DOCS_PUBLIC=true; otherwise it is not served at all.
+  if (apiDocsPublic) SwaggerModule.setup('api/docs', app, createOpenApiDocument(app), { jsonDocumentUrl: 'api/docs/openapi.json' });
 
-  const { webDistDir } = readAppConfig();
   const indexHtml = join(webDistDir, 'index.html');
   if (existsSync(indexHtml)) {
     app.use(express.static(webDistDir, { index: false, maxAge: '1h' }));
@@ -43,6 +53,9 @@ export function configureApp(app: NestExpressApplication): NestExpressApplicatio
   }
   return app;
 }
+
+// The OpenAPI document (src/openapi/openapi-document.ts), re-exported for the tests that import it from here.
+export { createOpenApiDocument };
 
 export async function createApp(): Promise<NestExpressApplication> {
   // Warnings and errors only: the route table at every start is noise for the people running it.

@@ -7,7 +7,7 @@ import { CurrentTrialAccess } from '../common/decorators/current-user.decorator'
 import { AmountsQueryDto, PlotsQueryDto } from './dto/plots-query.dto';
 import { PlotsService } from './plots.service';
 import { PlotDto } from './dto/plot.dto';
-import { PlotAmountDto } from './dto/plot-amount.dto';
+import { LevelAmountDto, PlotAmountDto } from './dto/plot-amount.dto';
 import { ApiFileResponse } from '../common/openapi/file-response.decorator';
 
 @ApiTags('plot plans')
@@ -27,6 +27,17 @@ export class PlotsController {
   @ApiOkResponse({ type: [PlotAmountDto], description: 'PlotAmount[]: per site and treatment, the amount for one plot and for the site with the margin.' })
   amounts(@CurrentTrialAccess() access: TrialAccessContext, @Query() query: AmountsQueryDto) {
     return this.plots.amounts(access.trialId, query.marginPercent ?? 10);
+  }
+
+  @Get('level-amounts')
+  @AnyTrialMember()
+  @ApiOkResponse({
+    type: [LevelAmountDto],
+    description:
+      'LevelAmount[] (factorial and split-plot trials): per site and factor level, the amount for one unit the level is applied to (a plot, or a whole plot of a split plot) and for all of them with the margin. Empty for one-factor designs.',
+  })
+  levelAmounts(@CurrentTrialAccess() access: TrialAccessContext, @Query() query: AmountsQueryDto) {
+    return this.plots.levelAmounts(access.trialId, query.marginPercent ?? 10);
   }
 
   @Get('sites/:siteId/rounds/:roundId/template.csv')

@@ -10,7 +10,42 @@ export interface paths {
         };
         get?: never;
         put?: never;
+        /** Sign in: answers a short-lived bearer token for API clients and sets the httpOnly session cookie browsers use */
         post: operations["AuthController_login"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/auth/logout": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** Sign out: ends this session (its token and cookie stop working) */
+        post: operations["AuthController_logout"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/auth/logout-all": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** Sign out everywhere: ends every session of the account, this one included */
+        post: operations["AuthController_logoutAll"];
         delete?: never;
         options?: never;
         head?: never;
@@ -27,6 +62,57 @@ export interface paths {
         get: operations["AuthController_me"];
         put?: never;
         post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/auth/password": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** Change one’s own password (the current one is required); every other session ends */
+        post: operations["AuthController_changePassword"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/auth/password-reset": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** Forgotten password: e-mails a single-use link APP_URL/reset-password/<token>; the same answer for any address */
+        post: operations["AuthController_requestReset"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/auth/password-reset/confirm": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** Set a new password from the e-mailed link; every session of the account ends */
+        post: operations["AuthController_confirmReset"];
         delete?: never;
         options?: never;
         head?: never;
@@ -133,6 +219,46 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/stats/censored": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * Drain times with a cut-off: not-drained curves, stratified log-rank test and time ratios to the control
+         * @description Product-limit curves per treatment with 95 % log-scale bands and medians (null: not reached), per site too; the log-rank test stratified by block (site × block with several sites); an accelerated-failure-time model (weibull, lognormal or loglogistic) with blocks and sites as terms, a likelihood-ratio test of each term by dropping it (a site with its blocks), and time ratios to the control with simultaneous 95 % limits and single-step (Dunnett-type) adjusted p-values. A block where nothing drained is left out of the model; a treatment that never drained leaves the model out (warnings say so).
+         */
+        post: operations["StatsController_censored"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/stats/counts": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * Counts per plot: Poisson log-linear model with blocks, overdispersion check, quasi-Poisson when needed, rate ratios to the control
+         * @description A Poisson log-linear model with the design’s blocks and sites; overdispersion judged by Pearson’s χ² on the residual df, and when present (family auto) a quasi-Poisson fit: standard errors × √dispersion, F tests of each term, t-based limits. Rate ratios to the control with simultaneous 95 % limits and single-step adjusted p-values, and the model’s count per plot for each treatment.
+         */
+        post: operations["StatsController_counts"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/api/stats/friedman": {
         parameters: {
             query?: never;
@@ -161,6 +287,26 @@ export interface paths {
         put?: never;
         /** Kruskal–Wallis rank test (tie-corrected) */
         post: operations["StatsController_kruskal"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/stats/ordinal": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * Scores on an ordered scale: proportional-odds model with blocks, odds ratios to the control, predicted shares, rank test
+         * @description A cumulative-logit (proportional-odds) model with the design’s blocks and sites; a likelihood-ratio test of each term by dropping it; each treatment’s odds of a higher score against the control with simultaneous 95 % limits and single-step adjusted p-values; the predicted share of each score per treatment averaged over blocks; and the rank test beside it (Friedman with blocks, else Kruskal–Wallis).
+         */
+        post: operations["StatsController_ordinal"];
         delete?: never;
         options?: never;
         head?: never;
@@ -403,6 +549,54 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/trials/{trialId}/intake-columns": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["IntakeImportsController_remembered"];
+        put?: never;
+        post?: never;
+        delete: operations["IntakeImportsController_forget"];
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/trials/{trialId}/intake-imports": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["IntakeImportsController_recent"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/trials/{trialId}/intake-imports/{ticket}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["IntakeImportsController_one"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/api/trials/{trialId}/invitations": {
         parameters: {
             query?: never;
@@ -445,6 +639,22 @@ export interface paths {
         get?: never;
         put?: never;
         post: operations["TrialInvitationsController_resend"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/trials/{trialId}/level-amounts": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["PlotsController_levelAmounts"];
+        put?: never;
+        post?: never;
         delete?: never;
         options?: never;
         head?: never;
@@ -756,6 +966,23 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/users/{userId}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        /** An administrator changes an account; isActive false ends its sessions at once */
+        patch: operations["UsersController_update"];
+        trace?: never;
+    };
     "/api/users/{userId}/deactivate": {
         parameters: {
             query?: never;
@@ -788,6 +1015,23 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/users/me": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        /** One’s own display name, locale for numbers and dates, and e-mail preferences */
+        patch: operations["UsersController_updateMine"];
+        trace?: never;
+    };
 }
 export type webhooks = Record<string, never>;
 export interface components {
@@ -798,13 +1042,18 @@ export interface components {
              * @example Robin Ash
              */
             name?: string;
-            /** @description A new password (at least 10 characters) for a new account, or the existing account’s password. Not needed with the bearer token of the invited person. */
+            /** @description A new password (at least 12 characters, not a common one) for a new account, or the existing account’s password. Not needed with the bearer token of the invited person. */
             password?: string;
+        };
+        AccountNoticeDto: {
+            message: string;
         };
         ActivationCheckDto: {
             /** @description Each failed check in words, e.g. "Site Millbrook is not randomized yet." */
             problems: string[];
             ready: boolean;
+            /** @description What does not stop the trial but should be read before it starts (the design's guardrails per site). */
+            warnings: string[];
         };
         ActivityEntryDto: {
             /** Format: date-time */
@@ -824,7 +1073,7 @@ export interface components {
             userName: string | null;
         };
         /** @enum {string} */
-        AnalysisDesign: "crd" | "rcbd" | "factorial-rcbd" | "multisite-rcbd";
+        AnalysisDesign: "crd" | "rcbd" | "factorial-crd" | "factorial-rcbd" | "split-plot" | "split-split-plot" | "multisite-rcbd" | "multisite-factorial-rcbd" | "multisite-split-plot";
         AnalysisSnapshotDto: {
             choices: components["schemas"]["FindingsChoicesDto"];
             commentCount: number;
@@ -937,6 +1186,11 @@ export interface components {
             /** @description 'block', 'treatment', 'site', 'block:site', 'site:treatment', factor names and 'A:B', 'error', 'total'. */
             term: string;
         };
+        /**
+         * @description Where the levels go on: every plot, or a split plot's whole plots, sub plots or sub-sub plots.
+         * @enum {string}
+         */
+        AppliedUnit: "plot" | "whole plot" | "sub plot" | "sub-sub plot";
         AssessmentRoundDto: {
             dayOffset: number;
             /**
@@ -956,6 +1210,84 @@ export interface components {
             f: number;
             p: number;
         };
+        CategoryShareDto: {
+            /** @example 4 */
+            category: string;
+            /**
+             * @description Predicted share of plots with this score, averaged over blocks.
+             * @example 0.41
+             */
+            probability: number;
+            /**
+             * @description Delta-method standard error.
+             * @example 0.08
+             */
+            se: number;
+            /** @example CMP */
+            treatment: string;
+        };
+        CensoredAnswerDto: {
+            /** @description How the comparisons with the control are adjusted, in words. */
+            adjustment: string;
+            /** @description With several sites: each site’s curves and medians. */
+            bySite?: components["schemas"]["SiteCurvesDto"][];
+            /** @description Log-time coefficients (treatment contrasts against the control). */
+            coefficients: components["schemas"]["ModelCoefficientDto"][];
+            /** @example CTRL */
+            control: string;
+            curves: components["schemas"]["CurveDto"][];
+            /** @enum {string} */
+            distribution: "weibull" | "lognormal" | "loglogistic";
+            /** @description Null when the time-ratio model could not be fitted (warnings say why). */
+            logLik: number | null;
+            logRank: components["schemas"]["LogRankDto"];
+            medians: components["schemas"]["MedianTimeDto"][];
+            scale: number | null;
+            tests: components["schemas"]["LikelihoodRatioTestDto"][];
+            /** @description Typical drain time relative to the control’s (below 1: faster). */
+            timeRatios: components["schemas"]["ControlRatioDto"][];
+            treatments: components["schemas"]["TreatmentCountDto"][];
+            warnings: string[];
+        };
+        CensoredObservationDto: {
+            /**
+             * @description Block label, nested within its site (rcbd, multisite-rcbd).
+             * @example 1
+             */
+            block?: string;
+            /**
+             * @description True when the plot had not drained by `value` (right-censored).
+             * @example false
+             */
+            censored: boolean;
+            /** @example Hollow Lane */
+            site?: string;
+            /** @example GYP */
+            treatment: string;
+            /**
+             * @description The drain time, or the cut-off the plot had not drained by.
+             * @example 212.5
+             */
+            value: number | string;
+        };
+        CensoredRequestDto: {
+            /**
+             * @description The reference of the time ratios; default the first treatment.
+             * @example CTRL
+             */
+            control?: string;
+            /**
+             * @description crd (treatment), rcbd (block, treatment), multisite-rcbd (site, block within site, treatment).
+             * @enum {string}
+             */
+            design: "crd" | "rcbd" | "multisite-rcbd";
+            /**
+             * @description Distribution of the time-ratio (accelerated-failure-time) model.
+             * @enum {string}
+             */
+            distribution: "weibull" | "lognormal" | "loglogistic";
+            observations: components["schemas"]["CensoredObservationDto"][];
+        };
         CensoredSummaryDto: {
             count: number;
             cutoff: number | null;
@@ -966,6 +1298,91 @@ export interface components {
             holm?: components["schemas"]["MethodComparisonSetDto"];
             lsd?: components["schemas"]["MethodComparisonSetDto"];
             tukey?: components["schemas"]["MethodComparisonSetDto"];
+        };
+        ControlRatioDto: {
+            /** @example 1.2 */
+            lower: number;
+            /**
+             * @description Single-step adjusted p-value.
+             * @example 0.002
+             */
+            p: number;
+            /** @example 1.8 */
+            ratio: number;
+            /** @example CMP */
+            treatment: string;
+            /** @example 2.7 */
+            upper: number;
+        };
+        CountRateDto: {
+            /** @example 9.8 */
+            lower: number;
+            /**
+             * @description The model’s count per plot, averaged over blocks on the log scale.
+             * @example 12.4
+             */
+            rate: number;
+            /** @example CMP */
+            treatment: string;
+            /** @example 15.7 */
+            upper: number;
+        };
+        CountsAnswerDto: {
+            adjustment: string;
+            /** @description Log-rate coefficients (treatment contrasts against the control). */
+            coefficients: components["schemas"]["ModelCoefficientDto"][];
+            /** @example CTRL */
+            control: string;
+            deviance: number;
+            /**
+             * @description Pearson χ² / residual df of the Poisson fit.
+             * @example 1.5
+             */
+            dispersion: number;
+            /** @enum {string} */
+            family: "poisson" | "quasipoisson";
+            logLik: number;
+            overdispersion: components["schemas"]["OverdispersionDto"];
+            /** @description Count rate relative to the control’s. */
+            rateRatios: components["schemas"]["ControlRatioDto"][];
+            rates: components["schemas"]["CountRateDto"][];
+            residualDf: number;
+            tests: components["schemas"]["CountTermTestDto"][];
+            warnings: string[];
+        };
+        CountsRequestDto: {
+            /**
+             * @description The reference of the odds ratios; default the first treatment.
+             * @example CTRL
+             */
+            control?: string;
+            /** @enum {string} */
+            design: "crd" | "rcbd" | "multisite-rcbd";
+            /**
+             * @description auto: quasi-Poisson when Pearson’s χ² shows overdispersion at the 5 % level.
+             * @default auto
+             * @enum {string}
+             */
+            family?: "auto" | "poisson" | "quasipoisson";
+            /** @description value: the score. */
+            observations: components["schemas"]["LabelledValueDto"][];
+        };
+        CountTermTestDto: {
+            /** @description Poisson: the deviance as χ². */
+            chiSquare: number | null;
+            denDf: number | null;
+            /**
+             * @description Deviance explained by the term.
+             * @example 31.2
+             */
+            deviance: number;
+            /** @example 4 */
+            df: number;
+            /** @description Quasi-Poisson: F against the dispersion. */
+            f: number | null;
+            p: number | null;
+            /** @example treatment */
+            term: string;
         };
         CreateAnalysisDto: {
             /** @default 0.05 */
@@ -1161,7 +1578,7 @@ export interface components {
              * @default rcbd
              * @enum {string}
              */
-            design?: "crd" | "rcbd" | "factorial-rcbd";
+            design?: "crd" | "rcbd" | "factorial-crd" | "factorial-rcbd" | "split-plot" | "split-split-plot";
             /** @description The question or hypothesis the trial answers. */
             question?: string | null;
             safetyNotes?: string | null;
@@ -1182,8 +1599,35 @@ export interface components {
             isAdmin?: boolean;
             /** @example Robin Ash */
             name: string;
-            /** @example a long passphrase */
+            /**
+             * @description At least 12 characters; not a common password.
+             * @example a long passphrase
+             */
             password: string;
+        };
+        CurveDto: {
+            points: components["schemas"]["CurvePointDto"][];
+            /** @example GYP */
+            treatment: string;
+        };
+        CurvePointDto: {
+            /** @example 12 */
+            atRisk: number;
+            /** @example 0 */
+            censored: number;
+            /** @example 1 */
+            events: number;
+            /** @example 0.52 */
+            lower: number | null;
+            /**
+             * @description Share of plots not yet drained just after `time`.
+             * @example 0.75
+             */
+            notDrained: number;
+            /** @example 212 */
+            time: number;
+            /** @example 1 */
+            upper: number | null;
         };
         DiagnosticsDto: {
             /** @description Multisite only: Bartlett's test of the per-site error variances. */
@@ -1280,6 +1724,21 @@ export interface components {
             sitesAre?: "random" | "fixed";
             transform: components["schemas"]["AnalysisTransform"];
         };
+        ErrorStratumDto: {
+            /**
+             * @description How the df are counted, in words.
+             * @example (2 blocks − 1) × (2 levels of Amendment − 1)
+             */
+            arithmetic: string;
+            /** @description The F the first term must exceed at p = 0.05; null with no error df. */
+            criticalF: number | null;
+            errorDf: number;
+            /** @example Whole-plot error */
+            name: string;
+            /** @description Terms tested against it: factor names joined by ':', or 'treatment'. */
+            terms: string[];
+            unit: components["schemas"]["AppliedUnit"];
+        };
         FactorDto: {
             levels: components["schemas"]["FactorLevelDto"][];
             /** @example Gypsum */
@@ -1291,11 +1750,39 @@ export interface components {
              * @example G1
              */
             code: string;
+            description?: string | null;
+            /** @description Depth the field rate is mixed into (concentration basis). */
+            incorporationDepthCm?: number | null;
+            /**
+             * @default other
+             * @enum {string}
+             */
+            materialKind?: "gypsum" | "other";
+            /**
+             * @default as-is
+             * @enum {string}
+             */
+            moistureBasis?: "as-is" | "dry";
+            /** @description Water share of the as-is product, at least 0 and below 1. */
+            moistureFraction?: number | null;
             /** @example Gypsum 40 lb/1000 ft² */
             name: string;
+            /** @example Garden gypsum, 20 kg bag */
+            product?: string | null;
+            /** @description Share of active material, above 0 and at most 1. */
+            purity?: number | null;
+            /**
+             * @default area
+             * @enum {string}
+             */
+            rateBasis?: "area" | "concentration";
+            /** @enum {string|null} */
+            rateUnit?: "lb/100ft2" | "lb/1000ft2" | "lb/acre" | "g/m2" | "kg/m2" | "kg/ha" | "t/ha" | "ton/acre" | "in" | "cm" | "yd3/1000ft2" | null;
+            /** @example 40 */
+            rateValue?: number | null;
         };
         FactorsDto: {
-            /** @description Exactly two factors; the treatments become every combination of their levels. */
+            /** @description A factorial takes 2 to 4 factors; a split plot exactly 2 (the whole-plot factor first), a split-split plot 3 (whole plot, sub plot, sub-sub plot). The treatments become every combination of their levels. Same factors and level codes as before: names and rates change in place and the plot layouts stay. */
             factors: components["schemas"]["FactorDto"][];
         };
         FactorsReplacedDto: {
@@ -1401,43 +1888,111 @@ export interface components {
             status: "ok" | "unavailable";
         };
         IntakeChangeDto: {
+            /** @example NA (bed flooded) */
             after: string | null;
+            /** @example 12.50 */
             before: string | null;
             /** @enum {string} */
             kind: "new" | "changed" | "unchanged";
+            /** @example DRAIN */
             measureCode: string;
+            /** @example HL-B1-P01 */
             plotLabel: string;
         };
+        IntakeColumnChoiceDto: {
+            /**
+             * @description plotLabel, block, treatment, notes, missingReason, a measure code, or null (not read).
+             * @example DRAIN
+             */
+            choice: string | null;
+            /** @example secs to drain */
+            header: string;
+        };
+        IntakeImportDto: {
+            /** @description Bytes of a CSV file read so far. */
+            bytesRead: number;
+            dryRun: boolean;
+            /** @example hollow-lane-day-0.xlsx */
+            fileName: string;
+            /** Format: date-time */
+            finishedAt: string | null;
+            /** @enum {string} */
+            format: "csv" | "xlsx";
+            message: string | null;
+            /** @description The 422 answer, once refused. */
+            refusal: components["schemas"]["IntakeRefusalDto"] | null;
+            /** @description The 200 answer, once done. */
+            result: components["schemas"]["IntakeResultDto"] | null;
+            roundId: number;
+            /** @description Data rows read and checked so far. */
+            rowsChecked: number;
+            siteId: number;
+            sizeBytes: number;
+            /** @enum {string} */
+            stage: "checking" | "comparing" | "writing" | "done" | "refused" | "failed" | "interrupted";
+            /** Format: date-time */
+            startedAt: string;
+            ticket: string;
+            /** Format: date-time */
+            updatedAt: string;
+            userName: string | null;
+            valuesDone: number;
+            /** @description Values to compare or write, once known. */
+            valuesTotal: number | null;
+        };
         IntakeProblemDto: {
-            /** @description The column header. */
+            /**
+             * @description The column header as written in the file.
+             * @example drain time (s)
+             */
             column: string | null;
+            /** @example Row 4, drain time (s): "abc" is not a number. */
             message: string;
-            /** @description As a spreadsheet numbers it: the header is row 1, the first data row is row 2. */
+            /**
+             * @description The row a spreadsheet shows (the header is row 1); null for the whole file.
+             * @example 4
+             */
             row: number | null;
         };
         IntakeRefusalDto: {
+            /** @example Unprocessable Entity */
             error: string;
             errors: components["schemas"]["IntakeProblemDto"][];
+            /** @example Nothing was written: the file has 3 problems in 2 rows. Correct them and upload the whole file again. */
             message: string;
             /** @enum {number} */
             statusCode: 422;
         };
         IntakeResultDto: {
-            /** @description Per value: what the upload would do (dry run) or did. */
+            /** @description Changed values first, then new, then unchanged, each in file order; at most 1,000. */
             changes: components["schemas"]["IntakeChangeDto"][];
+            /**
+             * @description Values counted above but not listed in changes.
+             * @example 0
+             */
+            changesOmitted: number;
+            /** @example 27 */
             created: number;
             dryRun: boolean;
-            /** @description True when the file is byte-identical to the last committed upload for this site and round. */
             identicalToPrevious: boolean;
+            /** @example Saved good.csv for Test Garden, Day 0: 27 new values, 0 changed, 0 unchanged. */
             message: string;
+            /**
+             * @description The import record of this upload.
+             * @example 3f0c9a52-8d0e-4f7b-9a55-0a4d7c2e1b6f
+             */
+            ticket: string;
+            /** @example 0 */
             unchanged: number;
+            /** @example 0 */
             updated: number;
-            /** @description Values outside the plausible range, and similar: accepted only with acceptWarnings=true. */
+            /** @description Values outside the usual range (to accept with acceptWarnings=true) and notes about columns. */
             warnings: components["schemas"]["IntakeProblemDto"][];
         };
         InvitationAcceptResponseDto: {
+            /** @description Short-lived access token (JWT, HS256) for the Authorization: Bearer header. */
             accessToken: string;
-            /** @description Seconds until the token expires. */
+            /** @description Seconds until the access token expires; sign in again after that. */
             expiresIn: number;
             /** @enum {string} */
             tokenType: "Bearer";
@@ -1471,6 +2026,19 @@ export interface components {
             trialCode: string;
             trialTitle: string;
         };
+        LabelledValueDto: {
+            /**
+             * @description Block label, nested within its site (rcbd, multisite-rcbd).
+             * @example 1
+             */
+            block?: string;
+            /** @example Hollow Lane */
+            site?: string;
+            /** @example CMP */
+            treatment: string;
+            /** @example 3 */
+            value: number | string;
+        };
         LettersByMethodDto: {
             /** @description Treatment → compact letters ("a", "ab", …). */
             bonferroni?: {
@@ -1489,6 +2057,39 @@ export interface components {
                 [key: string]: string;
             };
         };
+        LevelAmountDto: {
+            appliedTo: components["schemas"]["AppliedUnit"];
+            factorId: number;
+            factorName: string;
+            levelCode: string;
+            levelId: number;
+            levelName: string;
+            perUnit: components["schemas"]["DoseAnswerDto"] | null;
+            /** @description Measured plots one unit covers; 1 for a plot. */
+            plotsPerUnit: number;
+            /** @description Why no amount could be worked out (a rate the site's geometry cannot take). */
+            problem: string | null;
+            siteId: number;
+            /** @description All the site's units of this level, with the margin. */
+            siteTotal: components["schemas"]["SiteTotalDto"] | null;
+            /** @description Surface of one unit: the site's plot area × plotsPerUnit. */
+            unitAreaM2: number;
+            /** @description Units of this level at the site. */
+            units: number;
+        };
+        LikelihoodRatioTestDto: {
+            /** @example 18.2 */
+            chiSquare: number;
+            /** @example 4 */
+            df: number;
+            /** @example 0.0011 */
+            p: number | null;
+            /**
+             * @description 'site' (dropped with its blocks), 'block', 'block:site', 'treatment'.
+             * @example treatment
+             */
+            term: string;
+        };
         LoginDto: {
             /** @example investigator@example.org */
             email: string;
@@ -1496,12 +2097,26 @@ export interface components {
             password: string;
         };
         LoginResponseDto: {
+            /** @description Short-lived access token (JWT, HS256) for the Authorization: Bearer header. */
             accessToken: string;
-            /** @description Seconds until the token expires. */
+            /** @description Seconds until the access token expires; sign in again after that. */
             expiresIn: number;
             /** @enum {string} */
             tokenType: "Bearer";
             user: components["schemas"]["PublicUserDto"];
+        };
+        LogRankDto: {
+            /** @example 14.2 */
+            chiSquare: number;
+            /** @example 4 */
+            df: number;
+            /** @example 0.0067 */
+            p: number;
+            /**
+             * @description Number of strata (blocks, or site × block) the test was summed over.
+             * @example 14
+             */
+            strata: number;
         };
         LsMeanDto: {
             /** @description With a transform: the mean back on the original scale. */
@@ -1558,6 +2173,19 @@ export interface components {
         };
         /** @enum {string} */
         MeasureKind: "continuous" | "count" | "score" | "time-with-cutoff";
+        MedianTimeDto: {
+            /** @example 150 */
+            lower: number | null;
+            /**
+             * @description Null: not reached.
+             * @example 212
+             */
+            median: number | null;
+            /** @example GYP */
+            treatment: string;
+            /** @example 300 */
+            upper: number | null;
+        };
         MemberDto: {
             email: string;
             membershipId: number;
@@ -1583,6 +2211,39 @@ export interface components {
         MissingSummaryDto: {
             count: number;
             reasons: components["schemas"]["MissingReasonCountDto"][];
+        };
+        ModelCoefficientDto: {
+            /** @example -0.21 */
+            estimate: number;
+            /** @example 0.08 */
+            se: number;
+            /** @example treatment[GYP] */
+            term: string;
+        };
+        ModelRankTestDto: {
+            df: number | null;
+            p: number | null;
+            statistic: number | null;
+            /** @enum {string} */
+            test: "friedman" | "kruskal-wallis";
+            /** @description Why the rank test could not run. */
+            unavailable?: string;
+        };
+        MySettingsDto: {
+            /** @description An e-mailed receipt after each upload. */
+            emailReceipts?: boolean;
+            /** @description E-mails when a round is due at one’s sites. */
+            emailReminders?: boolean;
+            /**
+             * @description BCP 47 tag for numbers and dates (de-DE writes 1,5); null follows the browser.
+             * @example de-DE
+             */
+            locale?: string | null;
+            /**
+             * @description Display name, shown on the Team, in the Activity and on sign-offs.
+             * @example Robin Ash
+             */
+            name?: string;
         };
         NotDrainedCurveDto: {
             /** @description Plots not drained by the cut-off. */
@@ -1642,6 +2303,42 @@ export interface components {
             /** @enum {string} */
             source: "upload" | "edit";
         };
+        OrdinalAnswerDto: {
+            adjustment: string;
+            /**
+             * @example [
+             *       "1",
+             *       "2",
+             *       "3",
+             *       "4",
+             *       "5"
+             *     ]
+             */
+            categories: string[];
+            /** @description Log-odds of a higher score (treatment contrasts against the control). */
+            coefficients: components["schemas"]["ModelCoefficientDto"][];
+            /** @example CTRL */
+            control: string;
+            logLik: number;
+            /** @description Odds of a higher score than the control’s. */
+            oddsRatios: components["schemas"]["ControlRatioDto"][];
+            probabilities: components["schemas"]["CategoryShareDto"][];
+            rankTest: components["schemas"]["ModelRankTestDto"];
+            tests: components["schemas"]["LikelihoodRatioTestDto"][];
+            thresholds: components["schemas"]["ThresholdDto"][];
+            warnings: string[];
+        };
+        OrdinalRequestDto: {
+            /**
+             * @description The reference of the odds ratios; default the first treatment.
+             * @example CTRL
+             */
+            control?: string;
+            /** @enum {string} */
+            design: "crd" | "rcbd" | "multisite-rcbd";
+            /** @description value: the score. */
+            observations: components["schemas"]["LabelledValueDto"][];
+        };
         OutboxMessageDto: {
             from: string;
             html: string | null;
@@ -1651,6 +2348,32 @@ export interface components {
             subject: string;
             text: string;
             to: string[];
+        };
+        OverdispersionDto: {
+            /** @example 66 */
+            df: number;
+            /** @example 0.0048 */
+            p: number;
+            /** @example 99.5 */
+            pearsonChiSquare: number;
+            /** @example true */
+            present: boolean;
+        };
+        PasswordChangeDto: {
+            /** @description The password in use now. */
+            currentPassword: string;
+            /** @description At least 12 characters; not a common password. */
+            newPassword: string;
+        };
+        PasswordResetConfirmDto: {
+            /** @description The new password: at least 12 characters; not a common password. */
+            password: string;
+            /** @description The secret at the end of the e-mailed link APP_URL/reset-password/<token>. */
+            token: string;
+        };
+        PasswordResetRequestDto: {
+            /** @example investigator@example.org */
+            email: string;
         };
         PercentOfControlDto: {
             /** @description mean / control mean × 100; null without a control or when the control mean is 0. */
@@ -1674,8 +2397,19 @@ export interface components {
             position: number;
             siteId: number;
             siteName: string;
+            /** @description Split designs: the sub plot within its whole plot, from 1. */
+            subPlot: number | null;
+            /** @description Split-split plot: the sub-sub plot within its sub plot, from 1. */
+            subSubPlot: number | null;
             treatmentCode: string;
             treatmentId: number;
+            /** @description Split designs: the whole plot within its block, from 1. */
+            wholePlot: number | null;
+            /**
+             * @description Split designs: the label of the whole plot the plot lies in.
+             * @example HL-B2-W3
+             */
+            wholePlotLabel: string | null;
         };
         PlotPhotoDto: {
             /** @enum {string} */
@@ -1756,9 +2490,21 @@ export interface components {
             /** Format: date-time */
             createdAt: string;
             email: string;
+            /** @description E-mailed receipts after an upload. */
+            emailReceipts: boolean;
+            /** @description E-mails about rounds due at the person’s sites. */
+            emailReminders: boolean;
             id: number;
             isActive: boolean;
             isAdmin: boolean;
+            /** Format: date-time */
+            lastSignInAt: string | null;
+            /**
+             * @description BCP 47 tag for numbers and dates; null follows the browser.
+             * @example de-DE
+             */
+            locale: string | null;
+            /** @description Display name. */
             name: string;
         };
         RandomizeSiteDto: {
@@ -1859,9 +2605,19 @@ export interface components {
         };
         /** @enum {string} */
         SeparationMethod: "lsd" | "tukey" | "dunnett" | "bonferroni" | "holm";
+        SessionsEndedDto: {
+            message: string;
+            sessionsEnded: number;
+        };
         ShapiroWilkDto: {
             p: number;
             w: number;
+        };
+        SiteCurvesDto: {
+            curves: components["schemas"]["CurveDto"][];
+            medians: components["schemas"]["MedianTimeDto"][];
+            /** @example Hollow Lane */
+            site: string;
         };
         SiteDto: {
             /** @description Computed from the geometry. */
@@ -1889,7 +2645,9 @@ export interface components {
             shape: "rectangle" | "round";
             soilDescription: string | null;
             soilVolumeL: number | null;
-            /** @description Guardrail sentences: fewer than 4 blocks, error df below 12, one treatment. */
+            /** @description The error strata of the design at this site. */
+            strata: components["schemas"]["ErrorStratumDto"][];
+            /** @description Guardrail sentences: fewer than 4 blocks, error df below 12 in any stratum, one treatment. */
             warnings: string[];
             widthM: number | null;
         };
@@ -1906,10 +2664,31 @@ export interface components {
             createdAt: string;
             id: number;
         };
+        ThresholdDto: {
+            /**
+             * @description The cut-point between two neighbouring scores (logit scale).
+             * @example 2|3
+             */
+            between: string;
+            /** @example -0.4 */
+            estimate: number;
+            /** @example 0.3 */
+            se: number;
+        };
+        TreatmentCountDto: {
+            /** @example 12 */
+            drained: number;
+            /** @example 2 */
+            notDrained: number;
+            /** @example 14 */
+            plots: number;
+            /** @example GYP */
+            treatment: string;
+        };
         TreatmentDto: {
             code: string;
             description: string | null;
-            /** @description For factorial trials: the level of each factor. */
+            /** @description Factorial and split-plot trials: the level of each factor, in the factors' order. */
             factorLevelIds: number[];
             id: number;
             /** @description Needed when rateBasis is 'concentration'. */
@@ -1932,7 +2711,7 @@ export interface components {
             rateValue: number | null;
         };
         /** @enum {string} */
-        TrialDesign: "crd" | "rcbd" | "factorial-rcbd";
+        TrialDesign: "crd" | "rcbd" | "factorial-crd" | "factorial-rcbd" | "split-plot" | "split-split-plot";
         TrialDetailDto: {
             activation: components["schemas"]["ActivationCheckDto"];
             code: string;
@@ -1959,19 +2738,38 @@ export interface components {
             updatedAt: string;
         };
         TrialFactorDto: {
+            /** @description Where the levels go on: every plot, or a split plot's whole plots, sub plots or sub-sub plots. */
+            appliedTo: components["schemas"]["AppliedUnit"];
             id: number;
             levels: components["schemas"]["TrialFactorLevelDto"][];
             name: string;
             /**
-             * @description 1 = factor A, 2 = factor B.
+             * @description 1 to 4 in the order given; a split plot's whole-plot factor is 1.
              * @enum {number}
              */
-            position: 1 | 2;
+            position: 1 | 2 | 3 | 4;
         };
         TrialFactorLevelDto: {
+            /** @description 1 to 6 letters or digits, unique within the factor; treatment codes join the level codes. */
             code: string;
+            description: string | null;
             id: number;
+            /** @description Needed when rateBasis is 'concentration'. */
+            incorporationDepthCm: number | null;
+            /** @enum {string} */
+            materialKind: "gypsum" | "other";
+            /** @enum {string} */
+            moistureBasis: "as-is" | "dry";
+            /** @description Water share of the as-is product for a dry-basis rate, [0, 1). */
+            moistureFraction: number | null;
             name: string;
+            product: string | null;
+            /** @description Share of active material in the product, (0, 1]; null = the rate is for the product as sold. */
+            purity: number | null;
+            rateBasis: components["schemas"]["RateBasis"];
+            rateUnit: components["schemas"]["RateUnitId"] | null;
+            /** @description null for an untreated control or a treatment without an applied material. */
+            rateValue: number | null;
         };
         TrialProtocolDto: {
             code: string;
@@ -2146,7 +2944,7 @@ export interface components {
              * @default rcbd
              * @enum {string}
              */
-            design?: "crd" | "rcbd" | "factorial-rcbd";
+            design?: "crd" | "rcbd" | "factorial-crd" | "factorial-rcbd" | "split-plot" | "split-split-plot";
             /** @description Why the trial has no untreated control (instead of one). */
             noControlReason?: string | null;
             /** @description The question or hypothesis the trial answers. */
@@ -2166,6 +2964,28 @@ export interface components {
             status?: "draft" | "active" | "locked" | "archived";
             /** @example Gypsum and compost on heavy clay */
             title?: string;
+        };
+        UpdateUserDto: {
+            /** @example robin.ash@example.org */
+            email?: string;
+            /** @description An e-mailed receipt after each upload. */
+            emailReceipts?: boolean;
+            /** @description E-mails when a round is due at one’s sites. */
+            emailReminders?: boolean;
+            /** @description false deactivates the account and ends its sessions; true reactivates it with no session. */
+            isActive?: boolean;
+            /** @description Instance administrator. */
+            isAdmin?: boolean;
+            /**
+             * @description BCP 47 tag for numbers and dates (de-DE writes 1,5); null follows the browser.
+             * @example de-DE
+             */
+            locale?: string | null;
+            /**
+             * @description Display name, shown on the Team, in the Activity and on sign-offs.
+             * @example Robin Ash
+             */
+            name?: string;
         };
     };
     responses: never;
@@ -2189,7 +3009,6 @@ export interface operations {
             };
         };
         responses: {
-            /** @description A bearer token and the signed-in person. */
             200: {
                 headers: {
                     [name: string]: unknown;
@@ -2198,7 +3017,7 @@ export interface operations {
                     "application/json": components["schemas"]["LoginResponseDto"];
                 };
             };
-            /** @description Wrong e-mail or password (the same answer for both). */
+            /** @description Wrong e-mail or password (the same answer for both), or a deactivated account. */
             401: {
                 headers: {
                     [name: string]: unknown;
@@ -2207,8 +3026,64 @@ export interface operations {
                     "application/json": components["schemas"]["ProblemDto"];
                 };
             };
-            /** @description Too many failed attempts from this address within the window. */
+            /** @description Sign-in locked for this account or address after repeated failures; the message says until when, Retry-After how many seconds. */
             429: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+        };
+    };
+    AuthController_logout: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["AccountNoticeDto"];
+                };
+            };
+            /** @description No valid token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+        };
+    };
+    AuthController_logoutAll: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["SessionsEndedDto"];
+                };
+            };
+            /** @description No valid token. */
+            401: {
                 headers: {
                     [name: string]: unknown;
                 };
@@ -2227,7 +3102,7 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
-            /** @description The signed-in person. */
+            /** @description The signed-in person, with their locale and e-mail preferences. */
             200: {
                 headers: {
                     [name: string]: unknown;
@@ -2238,6 +3113,138 @@ export interface operations {
             };
             /** @description No valid token. */
             401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+        };
+    };
+    AuthController_changePassword: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["PasswordChangeDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["AccountNoticeDto"];
+                };
+            };
+            /** @description No valid token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description The current password is not right. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description The new password is too short, too long, common, or one’s own name or e-mail (a sentence). */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description Sign-in locked for this account or address after repeated failures; the message says until when, Retry-After how many seconds. */
+            429: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+        };
+    };
+    AuthController_requestReset: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["PasswordResetRequestDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["AccountNoticeDto"];
+                };
+            };
+        };
+    };
+    AuthController_confirmReset: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["PasswordResetConfirmDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["AccountNoticeDto"];
+                };
+            };
+            /** @description No reset link has this token. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description The link was already used or has expired. */
+            410: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description The new password does not meet the rules (a sentence). */
+            422: {
                 headers: {
                     [name: string]: unknown;
                 };
@@ -2267,6 +3274,19 @@ export interface operations {
             };
             /** @description No valid token. */
             401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /**
+             * @description Only an instance administrator may read the Outbox.
+             *
+             *     Needs an instance administrator.
+             */
+            403: {
                 headers: {
                     [name: string]: unknown;
                 };
@@ -2414,7 +3434,7 @@ export interface operations {
                     "application/json": components["schemas"]["ProblemDto"];
                 };
             };
-            /** @description A name and a password of at least 10 characters are needed for a new account. */
+            /** @description A name and a password of at least 12 characters (not a common one) are needed for a new account. */
             422: {
                 headers: {
                     [name: string]: unknown;
@@ -2509,6 +3529,88 @@ export interface operations {
             };
         };
     };
+    StatsController_censored: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["CensoredRequestDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["CensoredAnswerDto"];
+                };
+            };
+            /** @description No valid token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description A malformed body (naming the field) or data the analysis cannot take (the engine’s sentence). */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+        };
+    };
+    StatsController_counts: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["CountsRequestDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["CountsAnswerDto"];
+                };
+            };
+            /** @description No valid token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description A malformed body (naming the field) or data the analysis cannot take (the engine’s sentence). */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+        };
+    };
     StatsController_friedman: {
         parameters: {
             query?: never;
@@ -2566,6 +3668,47 @@ export interface operations {
             };
             /** @description No valid token. */
             401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+        };
+    };
+    StatsController_ordinal: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["OrdinalRequestDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["OrdinalAnswerDto"];
+                };
+            };
+            /** @description No valid token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description A malformed body (naming the field) or data the analysis cannot take (the engine’s sentence). */
+            422: {
                 headers: {
                     [name: string]: unknown;
                 };
@@ -3493,7 +4636,7 @@ export interface operations {
                     "application/json": components["schemas"]["ProblemDto"];
                 };
             };
-            /** @description The trial is locked, is not factorial, or a site has observations. */
+            /** @description The trial is locked, is neither factorial nor split plot, or changing the level codes would clear the layout of a site with observations. */
             409: {
                 headers: {
                     [name: string]: unknown;
@@ -3502,7 +4645,7 @@ export interface operations {
                     "application/json": components["schemas"]["ProblemDto"];
                 };
             };
-            /** @description Not exactly two factors, a factor with fewer than two levels, or repeated level codes. */
+            /** @description A number of factors the design does not take, a factor with fewer than two levels, repeated level codes, or a level rate without its unit. */
             422: {
                 headers: {
                     [name: string]: unknown;
@@ -3578,6 +4721,214 @@ export interface operations {
             };
             /** @description An unknown measure, round or site, no data yet, or the engine’s sentence. */
             422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+        };
+    };
+    IntakeImportsController_remembered: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                /** @description The trial. */
+                trialId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description What the trial’s uploads read their own column headers as, where someone chose it: the next upload starts from these. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["IntakeColumnChoiceDto"][];
+                };
+            };
+            /** @description No valid token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description Needs one of these roles on the trial: investigator, collaborator, reviewer. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description No such trial, or you are not a member of it. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+        };
+    };
+    IntakeImportsController_forget: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                /** @description The trial. */
+                trialId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description The remembered column choices are forgotten; headers are matched by their names again. */
+            204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description No valid token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description Needs one of these roles on the trial: investigator. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description No such trial, or you are not a member of it. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+        };
+    };
+    IntakeImportsController_recent: {
+        parameters: {
+            query: {
+                /** @description The round of the uploads. */
+                roundId: number;
+                /** @description The site of the uploads. */
+                siteId: number;
+            };
+            header?: never;
+            path: {
+                /** @description The trial. */
+                trialId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description The latest ten uploads sent for a site and round, newest first, running ones with their stage and counts. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["IntakeImportDto"][];
+                };
+            };
+            /** @description No valid token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description Needs one of these roles on the trial: investigator, collaborator, reviewer. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description No such trial, or you are not a member of it. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+        };
+    };
+    IntakeImportsController_one: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                ticket: string;
+                /** @description The trial. */
+                trialId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description One upload: its stage (checking, comparing, writing, then done, refused, failed or interrupted) and counts, then its answer. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["IntakeImportDto"];
+                };
+            };
+            /** @description No valid token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description Needs one of these roles on the trial: investigator, collaborator, reviewer. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /**
+             * @description No upload with this ticket in the trial.
+             *
+             *     No such trial, or you are not a member of it.
+             */
+            404: {
                 headers: {
                     [name: string]: unknown;
                 };
@@ -3829,6 +5180,59 @@ export interface operations {
             };
             /** @description The invitation was already accepted or withdrawn. */
             409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+        };
+    };
+    PlotsController_levelAmounts: {
+        parameters: {
+            query?: {
+                /** @description Extra to prepare for spills and weighing losses, in percent. */
+                marginPercent?: number;
+            };
+            header?: never;
+            path: {
+                /** @description The trial. */
+                trialId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description LevelAmount[] (factorial and split-plot trials): per site and factor level, the amount for one unit the level is applied to (a plot, or a whole plot of a split plot) and for all of them with the margin. Empty for one-factor designs. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["LevelAmountDto"][];
+                };
+            };
+            /** @description No valid token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description Needs one of these roles on the trial: investigator, collaborator, reviewer. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description No such trial, or you are not a member of it. */
+            404: {
                 headers: {
                     [name: string]: unknown;
                 };
@@ -4461,7 +5865,7 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
-            /** @description The image (image/jpeg or image/png). */
+            /** @description The image (image/jpeg or image/png), as an attachment named after the plot and round. */
             200: {
                 headers: {
                     [name: string]: unknown;
@@ -5277,6 +6681,10 @@ export interface operations {
                 dryRun?: "true" | "false" | "1" | "0";
                 /** @description JSON object from a column header to what it holds — plotLabel, block, treatment, notes, missingReason, a measure code — or null to ignore the column. Headers not named are matched automatically. */
                 mapping?: string;
+                /** @description For a workbook: the sheet to read (its tab name). The first visible sheet when left out. */
+                sheet?: string;
+                /** @description A name of your choosing for this upload (8 to 64 letters, digits or dashes), to follow it at GET /api/trials/:trialId/intake-imports/:ticket while it runs. */
+                ticket?: string;
             };
             header?: never;
             path: {
@@ -5297,9 +6705,15 @@ export interface operations {
                     acceptWarnings?: "true" | "false";
                     /**
                      * Format: binary
-                     * @description The CSV file (UTF-8; comma, semicolon or tab), as the site and round template.
+                     * @description The CSV file (UTF-8; comma, semicolon or tab) or .xlsx workbook, as the site and round template. Up to INTAKE_MAX_BYTES (100 MB by default).
                      */
                     file: string;
+                    /** @description JSON: column header → plotLabel, block, treatment, notes, missingReason, a measure code, or null. */
+                    mapping?: string;
+                    /** @description For a workbook: the sheet to read; the first visible one by default. */
+                    sheet?: string;
+                    /** @description Your name for this upload, to follow its progress at /api/trials/:trialId/intake-imports/:ticket. */
+                    ticket?: string;
                 };
             };
         };
@@ -5349,7 +6763,7 @@ export interface operations {
                     "application/json": components["schemas"]["ProblemDto"];
                 };
             };
-            /** @description The file is larger than INTAKE_MAX_BYTES (10 MB by default). */
+            /** @description The file is larger than INTAKE_MAX_BYTES (100 MB by default, enough for a million rows of the template). */
             413: {
                 headers: {
                     [name: string]: unknown;
@@ -5692,7 +7106,7 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
-            /** @description Every account. */
+            /** @description Everyone, by name, with their last sign-in. */
             200: {
                 headers: {
                     [name: string]: unknown;
@@ -5734,13 +7148,82 @@ export interface operations {
             };
         };
         responses: {
-            /** @description The new account. */
             201: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
                     "application/json": components["schemas"]["PublicUserDto"];
+                };
+            };
+            /** @description No valid token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description Needs an instance administrator. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description The e-mail is already in use. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description A field is wrong, or the password is too short or too common (a sentence). */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+        };
+    };
+    UsersController_update: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                userId: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["UpdateUserDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["PublicUserDto"];
+                };
+            };
+            /** @description Administrators cannot deactivate themselves or drop their own rights. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
                 };
             };
             /** @description No valid token. */
@@ -5783,7 +7266,7 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
-            /** @description The account, now inactive: its sessions end at once. */
+            /** @description Deactivated: every session ended, sign-in refused. */
             200: {
                 headers: {
                     [name: string]: unknown;
@@ -5823,7 +7306,7 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
-            /** @description The account, active again. */
+            /** @description Reactivated with no valid session: old tokens stay dead. */
             200: {
                 headers: {
                     [name: string]: unknown;
@@ -5843,6 +7326,47 @@ export interface operations {
             };
             /** @description Needs an instance administrator. */
             403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+        };
+    };
+    UsersController_updateMine: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["MySettingsDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["PublicUserDto"];
+                };
+            };
+            /** @description No valid token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description A field is wrong (named), e.g. an unknown locale. */
+            422: {
                 headers: {
                     [name: string]: unknown;
                 };

@@ -29,6 +29,9 @@ export interface SeenRequest {
 export async function readRequest(input: RequestInfo | URL, init?: RequestInit): Promise<SeenRequest> {
   const request = input instanceof Request ? input : new Request(new URL(String(input), window.location.origin), init);
   const url = new URL(request.url);
+  if (request.headers.get('Content-Type')?.startsWith('multipart/form-data')) {
+    return { method: request.method.toUpperCase(), path: url.pathname + url.search, body: await request.clone().formData(), headers: request.headers };
+  }
   const text = request.body ? await request.clone().text() : '';
   let body: unknown = undefined;
   if (text) {

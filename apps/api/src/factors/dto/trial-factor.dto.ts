@@ -1,16 +1,19 @@
-import type { Factor } from '@friable/contracts';
+import { APPLIED_UNITS, type AppliedUnit, type Factor, type FactorLevel } from '@friable/contracts';
 import { ApiProperty } from '@nestjs/swagger';
-import { TreatmentDto } from '../../treatments/dto/treatment.dto';
+import { MaterialRateDto, TreatmentDto } from '../../treatments/dto/treatment.dto';
 
-export class TrialFactorLevelDto {
+export class TrialFactorLevelDto extends MaterialRateDto implements FactorLevel {
   @ApiProperty()
   id: number;
 
-  @ApiProperty()
+  @ApiProperty({ description: '1 to 6 letters or digits, unique within the factor; treatment codes join the level codes.' })
   code: string;
 
   @ApiProperty()
   name: string;
+
+  @ApiProperty({ type: String, nullable: true })
+  description: string | null;
 }
 
 /** A factor of a factorial trial with its levels (named apart from FactorDto, the request's factor). */
@@ -18,11 +21,14 @@ export class TrialFactorDto implements Factor {
   @ApiProperty()
   id: number;
 
-  @ApiProperty({ enum: [1, 2], description: '1 = factor A, 2 = factor B.' })
-  position: 1 | 2;
+  @ApiProperty({ enum: [1, 2, 3, 4], description: "1 to 4 in the order given; a split plot's whole-plot factor is 1." })
+  position: 1 | 2 | 3 | 4;
 
   @ApiProperty()
   name: string;
+
+  @ApiProperty({ enum: APPLIED_UNITS, enumName: 'AppliedUnit', description: "Where the levels go on: every plot, or a split plot's whole plots, sub plots or sub-sub plots." })
+  appliedTo: AppliedUnit;
 
   @ApiProperty({ type: [TrialFactorLevelDto] })
   levels: TrialFactorLevelDto[];

@@ -1,6 +1,6 @@
 import { TRIAL_ROLES, type Invitation, type InvitationAcceptResponse, type InvitationPreview, type TrialRole } from '@friable/contracts';
 import { ApiProperty } from '@nestjs/swagger';
-import { LoginResponseDto } from '../../auth/dto/login-response.dto';
+import { LoginResponseDto } from '../../auth/dto/auth-answers.dto';
 
 export class InvitationDto implements Invitation {
   @ApiProperty()

@@ -1,5 +1,26 @@
-import type { Site } from '@friable/contracts';
+import { APPLIED_UNITS, type AppliedUnit, type ErrorStratum, type Site } from '@friable/contracts';
 import { ApiProperty } from '@nestjs/swagger';
+
+/** One error line of the design's ANOVA at a site (a split plot has a whole-plot and a sub-plot error). */
+export class ErrorStratumDto implements ErrorStratum {
+  @ApiProperty({ enum: APPLIED_UNITS, enumName: 'AppliedUnit' })
+  unit: AppliedUnit;
+
+  @ApiProperty({ example: 'Whole-plot error' })
+  name: string;
+
+  @ApiProperty()
+  errorDf: number;
+
+  @ApiProperty({ example: '(2 blocks − 1) × (2 levels of Amendment − 1)', description: 'How the df are counted, in words.' })
+  arithmetic: string;
+
+  @ApiProperty({ type: [String], description: "Terms tested against it: factor names joined by ':', or 'treatment'." })
+  terms: string[];
+
+  @ApiProperty({ type: Number, nullable: true, description: 'The F the first term must exceed at p = 0.05; null with no error df.' })
+  criticalF: number | null;
+}
 
 export class SiteDto implements Site {
   @ApiProperty()
@@ -59,6 +80,9 @@ export class SiteDto implements Site {
   @ApiProperty()
   hasObservations: boolean;
 
-  @ApiProperty({ type: [String], description: 'Guardrail sentences: fewer than 4 blocks, error df below 12, one treatment.' })
+  @ApiProperty({ type: [String], description: 'Guardrail sentences: fewer than 4 blocks, error df below 12 in any stratum, one treatment.' })
   warnings: string[];
+
+  @ApiProperty({ type: [ErrorStratumDto], description: 'The error strata of the design at this site.' })
+  strata: ErrorStratumDto[];
 }

@@ -1,22 +1,8 @@
-import { RATE_BASES, RATE_UNIT_IDS, type RateBasis, type RateUnitId, type Treatment } from '@friable/contracts';
+import { RATE_BASES, RATE_UNIT_IDS, type MaterialRate, type RateBasis, type RateUnitId, type Treatment } from '@friable/contracts';
 import { ApiProperty } from '@nestjs/swagger';
 
-export class TreatmentDto implements Treatment {
-  @ApiProperty()
-  id: number;
-
-  @ApiProperty()
-  code: string;
-
-  @ApiProperty()
-  name: string;
-
-  @ApiProperty({ type: String, nullable: true })
-  description: string | null;
-
-  @ApiProperty()
-  isControl: boolean;
-
+/** The stated rate of what is applied and its material: a treatment's, or a factor level's. */
+export class MaterialRateDto implements MaterialRate {
   @ApiProperty({ type: Number, nullable: true, description: 'null for an untreated control or a treatment without an applied material.' })
   rateValue: number | null;
 
@@ -43,8 +29,25 @@ export class TreatmentDto implements Treatment {
 
   @ApiProperty({ enum: ['gypsum', 'other'] })
   materialKind: 'gypsum' | 'other';
+}
 
-  @ApiProperty({ type: [Number], description: 'For factorial trials: the level of each factor.' })
+export class TreatmentDto extends MaterialRateDto implements Treatment {
+  @ApiProperty()
+  id: number;
+
+  @ApiProperty()
+  code: string;
+
+  @ApiProperty()
+  name: string;
+
+  @ApiProperty({ type: String, nullable: true })
+  description: string | null;
+
+  @ApiProperty()
+  isControl: boolean;
+
+  @ApiProperty({ type: [Number], description: 'Factorial and split-plot trials: the level of each factor, in the factors\' order.' })
   factorLevelIds: number[];
 
   @ApiProperty()

@@ -12,6 +12,9 @@ export class ActivationCheckDto implements ActivationCheck {
 
   @ApiProperty({ type: [String], description: 'Each failed check in words, e.g. "Site Millbrook is not randomized yet."' })
   problems: string[];
+
+  @ApiProperty({ type: [String], description: "What does not stop the trial but should be read before it starts (the design's guardrails per site)." })
+  warnings: string[];
 }
 
 /** The protocol fields of a trial, without what depends on the caller (also the report's protocol). */

@@ -1,6 +1,7 @@
 import type { LoginResponse, PublicUser } from '@friable/contracts';
 import { useQueryClient } from '@tanstack/react-query';
 import { createContext, useCallback, useContext, useEffect, useMemo, useState, type ReactNode } from 'react';
+import { setAccountLocale } from '../../../lib/person-locale';
 import { session } from '../../../lib/session';
 import { meQueryOptions, useMe } from '../api/get-me';
 
@@ -43,6 +44,12 @@ export function AuthProvider({ children }: { children: ReactNode }) {
     },
     [queryClient],
   );
+
+  // Numbers are read and written the person's way: their account's locale once it says one, else the browser's.
+  const user = me.data as (PublicUser & { locale?: string | null }) | undefined;
+  useEffect(() => {
+    setAccountLocale(user?.locale);
+  }, [user?.locale]);
 
   useEffect(() => {
     session.onEnded(() => signOut('Your session has ended. Please sign in again.'));

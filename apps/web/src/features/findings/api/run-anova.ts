@@ -4,6 +4,8 @@ import type { components } from '../../../lib/api-schema';
 
 /** The body of POST /api/stats/anova (see docs/api.md). */
 export type AnovaRequest = components['schemas']['AnovaRequestDto'];
+/** The designs POST /api/stats/anova analyses (Quick analysis offers these). */
+export type QuickDesign = AnovaRequest['design'];
 /** One row given to the engine: a treatment (or a factorial's levels), its block and site, and the value. */
 export type AnalysisObservation = AnovaRequest['observations'][number];
 
