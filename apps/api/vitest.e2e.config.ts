@@ -11,6 +11,7 @@ export default defineConfig({
   plugins: [swc.vite({ module: { type: 'es6' } })],
   test: {
     include: ['e2e/**/*.e2e-spec.ts'],
+    setupFiles: ['e2e/support/setup.ts'],
     environment: 'node',
     fileParallelism: false,
     testTimeout: 30_000,

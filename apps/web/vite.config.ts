@@ -30,7 +30,7 @@ export default defineConfig({
     environment: 'jsdom',
     setupFiles: ['src/test-setup.ts'],
     css: false,
-    // Typing through user-event is slow on a busy two-core CI machine; 5 s timed out there.
+    // Two cores shared with the other suites: a page test typing into several boxes can take seconds.
     testTimeout: 20_000,
   },
 });

@@ -1,6 +1,6 @@
 import { NestFactory } from '@nestjs/core';
 import type { NestExpressApplication } from '@nestjs/platform-express';
-import { DocumentBuilder, SwaggerModule, type OpenAPIObject } from '@nestjs/swagger';
+import { SwaggerModule } from '@nestjs/swagger';
 import cookieParser from 'cookie-parser';
 import express, { type NextFunction, type Request, type Response } from 'express';
 import { existsSync } from 'node:fs';
@@ -11,6 +11,7 @@ import { boundedJson } from './common/input/bounded-json';
 import { createValidationPipe } from './common/pipes/validation.pipe';
 import { securityHeaders } from './common/security/security-headers';
 import { readAppConfig } from './config/app.config';
+import { createOpenApiDocument } from './openapi/openapi-document';
 import { readAuthConfig } from './config/auth.config';
 import { databaseGate } from './health/database-gate';
 import { DatabaseWatchService } from './health/database-watch.service';
@@ -57,18 +58,8 @@ export function configureApp(app: NestExpressApplication): NestExpressApplicatio
   return app;
 }
 
-/** The OpenAPI document of every route (served at /api/docs when configured; read by tests). */
-export function createOpenApiDocument(app: NestExpressApplication): OpenAPIObject {
-  return SwaggerModule.createDocument(
-    app,
-    new DocumentBuilder()
-      .setTitle('Friable API')
-      .setDescription('Replicated garden-treatment trials: protocol, sites, plots, observations and findings.')
-      .setVersion('0.1.0')
-      .addBearerAuth()
-      .build(),
-  );
-}
+// The OpenAPI document (src/openapi/openapi-document.ts), re-exported for the tests that import it from here.
+export { createOpenApiDocument };
 
 export async function createApp(): Promise<NestExpressApplication> {
   // Warnings and errors only: the route table at every start is noise for the people running it.

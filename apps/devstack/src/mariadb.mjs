@@ -129,8 +129,13 @@ export class LocalMariaDb {
   /** Stops the server if this process started it. */
   stop() {
     if (!this.startedHere) return;
-    spawnSync('mariadb-admin', [...this.clientArgs(), 'shutdown'], { stdio: 'ignore' });
+    this.shutdown();
     this.startedHere = false;
     log('MariaDB stopped');
+  }
+
+  /** Stops the server whoever started it (npm run db:down). */
+  shutdown() {
+    spawnSync('mariadb-admin', [...this.clientArgs(), 'shutdown'], { stdio: 'ignore' });
   }
 }

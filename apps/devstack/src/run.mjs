@@ -1,5 +1,6 @@
 // Small process helpers shared by the devstack scripts.
 import { spawn, spawnSync } from 'node:child_process';
+import { waitForDebianLock } from './debian-lock.mjs';
 
 export function log(message) {
   process.stdout.write(`[friable] ${message}\n`);
@@ -41,10 +42,21 @@ export function ensureDebianPackages(packages, { reason, probe }) {
   }
   log(`installing ${packages.join(' ')} (${reason}) with apt-get…`);
   const env = { ...process.env, DEBIAN_FRONTEND: 'noninteractive' };
-  let install = spawnSync('apt-get', ['install', '-y', '-q', '--no-install-recommends', ...packages], { stdio: 'inherit', env });
+  // Another package manager may hold the lock: wait for it, and let apt-get itself wait for what races in.
+  const waitForLock = () => {
+    try {
+      waitForDebianLock();
+    } catch (error) {
+      fail(error.message);
+    }
+  };
+  const lockTimeout = ['-o', 'DPkg::Lock::Timeout=300'];
+  waitForLock();
+  let install = spawnSync('apt-get', [...lockTimeout, 'install', '-y', '-q', '--no-install-recommends', ...packages], { stdio: 'inherit', env });
   if (install.status !== 0) {
-    runOrThrow('apt-get', ['update', '-q'], { env });
-    install = spawnSync('apt-get', ['install', '-y', '-q', '--no-install-recommends', ...packages], { stdio: 'inherit', env });
+    waitForLock();
+    runOrThrow('apt-get', [...lockTimeout, 'update', '-q'], { env });
+    install = spawnSync('apt-get', [...lockTimeout, 'install', '-y', '-q', '--no-install-recommends', ...packages], { stdio: 'inherit', env });
   }
   if (install.status !== 0 || !probe()) fail(`could not install ${packages.join(' ')}; install it by hand and try again.`);
 }

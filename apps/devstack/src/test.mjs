@@ -48,6 +48,7 @@ const suites = [
   { name: 'API end-to-end', cwd: 'apps/api', args: ['--config', 'vitest.e2e.config.ts'] },
   { name: 'web components', cwd: 'apps/web', args: [] },
   { name: 'browser', cwd: 'apps/web', args: ['--config', 'vitest.browser.config.ts'] },
+  { name: 'devstack', cwd: 'apps/devstack', args: [] },
 ];
 const tally = { passed: 0, failed: 0, skipped: 0 };
 const problems = [];
@@ -76,8 +77,8 @@ async function runSuite(suite) {
 let exitCode = 0;
 try {
   compileTypeScript();
-  log('linting (eslint)…');
-  runOrThrow(npm, ['exec', '--', 'eslint', '.'], { cwd: repoRoot });
+  log('linting (npm run lint: eslint, the generated API client)…');
+  runOrThrow(npm, ['run', 'lint'], { cwd: repoRoot });
   apiCommand(env, ['migrate', 'up']);
   apiCommand(env, ['demo', 'load']);
   buildWebApp();

@@ -5,7 +5,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { baseUrl, launchBrowser, screenshot, signIn } from './support';
 
 // Montgomery, Design and Analysis of Experiments: hardness-testing tips (4 tips × 4 coupons as blocks),
-// /work/shared/reference/STATISTICS.md B.1. Expected: F(tips) = 14.44 (NDSU SAS listing; R: F = 14.438),
+// datasets/reference/STATISTICS.md B.1. Expected: F(tips) = 14.44 (NDSU SAS listing; R: F = 14.438),
 // Tukey groups {1, 2, 3} and {4} (multcomp::cld, R 4.2.2, as listed there: 1 a, 2 a, 3 a, 4 b).
 const hardness = [
   'tip,coupon,hardness',

@@ -71,6 +71,7 @@ export * from './protocol';
 export * from './team';
 export * from './intake';
 export * from './findings';
+export * from './planner';
 export * from './models';
 export * from './accounts';
 export * from './review';

@@ -7,7 +7,7 @@ import { readReferenceCsv, relativeError } from './test-support/reference-files'
 // Tukey p-values call studentizedRangeCdf (~20 ms each), so examples with many pairs need more than 5 s.
 vi.setConfig({ testTimeout: 300_000 });
 
-// Every expected value below names its source; "STATISTICS.md X" is /work/shared/reference/STATISTICS.md
+// Every expected value below names its source; "STATISTICS.md X" is datasets/reference/STATISTICS.md
 // section X, which records where each number was read or how it was computed (R 4.2.2 calls).
 // Tolerances: values printed with d significant digits are checked to half a unit in the last printed digit
 // (relative), via `close(actual, expected, digits)`.
@@ -190,7 +190,7 @@ describe('analyseTrial: RCBD worked examples', () => {
   });
 
   const seedRate = readReferenceCsv('data/agridat_gomez.seedrate.csv');
-  it.skipIf(!seedRate)('Gomez & Gomez seed rate (Table 2.6 from memory; R 4.2.2 in STATISTICS.md B.5)', () => {
+  it('Gomez & Gomez seed rate (Table 2.6 from memory; R 4.2.2 in STATISTICS.md B.5)', () => {
     const result = analyseTrial({
       design: 'rcbd',
       control: '25',
@@ -215,7 +215,7 @@ describe('analyseTrial: RCBD worked examples', () => {
   });
 
   const clewer = readReferenceCsv('data/agridat_clewer.wheat.csv');
-  it.skipIf(!clewer)('Clewer & Scarisbrick wheat (agridat Rd "matches book"; R 4.2.2)', () => {
+  it('Clewer & Scarisbrick wheat (agridat Rd "matches book"; R 4.2.2)', () => {
     const observations = clewer!.map((r) => ({ treatment: r.gen!, block: r.block!, value: r.yield! }));
     const result = analyseTrial({ design: 'rcbd', meanSeparation: ['lsd', 'tukey'], observations });
     close(row(result, 'block').ss, 9.78, 3); // book: Block SS=9.78
@@ -234,7 +234,7 @@ describe('analyseTrial: RCBD worked examples', () => {
   });
 
   const beets = readReferenceCsv('data/agridat_cochran.beets.csv');
-  it.skipIf(!beets)('Snedecor sugar beets (Statistical Methods 4th ed. Table 12.13 data; R 4.2.2)', () => {
+  it('Snedecor sugar beets (Statistical Methods 4th ed. Table 12.13 data; R 4.2.2)', () => {
     const result = analyseTrial({
       design: 'rcbd',
       control: 'None',
@@ -261,7 +261,7 @@ describe('analyseTrial: RCBD worked examples', () => {
   });
 
   const gomez728 = readReferenceCsv('data/agridat_gomez.heteroskedastic.csv');
-  it.skipIf(!gomez728)('Gomez & Gomez Table 7.28, 35 genotypes × 3 reps (agridat Rd "Match Gomez table 7.28")', () => {
+  it('Gomez & Gomez Table 7.28, 35 genotypes × 3 reps (agridat Rd "Match Gomez table 7.28")', () => {
     // STATISTICS.md B.8: the table is reproduced after setting G17/R2 to 7.58 (as on Gomez p. 311); the file has 5.58.
     const fixed = gomez728!.map((r) => (r.gen === 'G17' && r.rep === 'R2' ? { ...r, yield: '7.58' } : r));
     const result = analyseTrial({ design: 'rcbd', observations: fixed.map((r) => ({ treatment: r.gen!, block: r.rep!, value: r.yield! })) });
@@ -306,7 +306,7 @@ describe('analyseTrial: one-way examples', () => {
   });
 
   const plantGrowth = readReferenceCsv('data/PlantGrowth.csv');
-  it.skipIf(!plantGrowth)("PlantGrowth (R datasets-Ex.Rout.save anova; TukeyHSD printed output; R 4.2.2)", () => {
+  it("PlantGrowth (R datasets-Ex.Rout.save anova; TukeyHSD printed output; R 4.2.2)", () => {
     const result = analyseTrial({
       design: 'crd',
       control: 'ctrl',
@@ -342,7 +342,7 @@ describe('analyseTrial: one-way examples', () => {
 
 describe('analyseTrial: factorial in blocks', () => {
   const turnip = readReferenceCsv('data/agridat_mead.turnip.csv');
-  it.skipIf(!turnip)('Mead turnips, density × spacing in 3 blocks (Example 12.3; R 4.2.2 aov in STATISTICS.md B.10)', () => {
+  it('Mead turnips, density × spacing in 3 blocks (Example 12.3; R 4.2.2 aov in STATISTICS.md B.10)', () => {
     const result = analyseTrial({
       design: 'factorial-rcbd',
       factorNames: ['density', 'spacing'],
@@ -376,7 +376,7 @@ describe('analyseTrial: factorial in blocks', () => {
 describe('analyseTrial: combined analysis over sites', () => {
   const wetDry = readReferenceCsv('data/agridat_gomez.wetdry.csv');
   const observations = wetDry?.map((r) => ({ treatment: r.nitrogen!, block: r.rep!, site: r.season!, value: r.yield! })) ?? [];
-  it.skipIf(!wetDry)('Gomez & Gomez wet/dry seasons, random seasons (R 4.2.2 in STATISTICS.md B.11)', () => {
+  it('Gomez & Gomez wet/dry seasons, random seasons (R 4.2.2 in STATISTICS.md B.11)', () => {
     const result = analyseTrial({ design: 'multisite-rcbd', meanSeparation: ['tukey'], observations });
     expect(result.anova.map((r) => r.term)).toEqual(['site', 'block:site', 'treatment', 'site:treatment', 'error', 'total']);
     close(row(result, 'site').ss, 4.497715, 7);
@@ -400,7 +400,7 @@ describe('analyseTrial: combined analysis over sites', () => {
     expect(result.warnings.some((w) => w.includes('Error variances differ'))).toBe(false);
   });
 
-  it.skipIf(!wetDry)('Gomez & Gomez wet/dry seasons, fixed seasons (R 4.2.2 in STATISTICS.md B.11)', () => {
+  it('Gomez & Gomez wet/dry seasons, fixed seasons (R 4.2.2 in STATISTICS.md B.11)', () => {
     const result = analyseTrial({ design: 'multisite-rcbd', sitesAre: 'fixed', observations });
     close(row(result, 'treatment').f, 10.61714, 7);
     close(row(result, 'treatment').p, 0.00021418, 5);

@@ -8,6 +8,7 @@ import request from 'supertest';
 import { AppModule } from '../../src/app.module';
 import { configureApp } from '../../src/bootstrap';
 import { User } from '../../src/users/models/user.model';
+import { checkResponsesAgainstOpenApi } from './response-contract';
 
 export const TEST_PASSWORD = 'correct horse battery';
 
@@ -21,7 +22,9 @@ export interface TestApp {
 /** The whole API, configured as main.ts does, on the real test database. */
 export async function createTestApp(): Promise<TestApp> {
   const moduleRef = await Test.createTestingModule({ imports: [AppModule] }).compile();
-  const app = configureApp(moduleRef.createNestApplication<NestExpressApplication>({ logger: ['error'], bodyParser: false }));
+  const app = moduleRef.createNestApplication<NestExpressApplication>({ logger: ['error'], bodyParser: false });
+  configureApp(app);
+  checkResponsesAgainstOpenApi(app);
   await app.init();
   const sequelize = app.get<Sequelize>(getConnectionToken());
   return { app, http: request(app.getHttpServer()), sequelize, close: () => app.close() };

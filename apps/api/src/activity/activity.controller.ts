@@ -5,6 +5,7 @@ import { AnyTrialMember } from '../common/decorators/access.decorator';
 import { CurrentTrialAccess } from '../common/decorators/current-user.decorator';
 import { ActivityService } from './activity.service';
 import { ActivityQueryDto } from './dto/activity-query.dto';
+import { ActivityEntryDto } from './dto/activity-entry.dto';
 
 @ApiTags('activity')
 @Controller('trials/:trialId/activity')
@@ -13,7 +14,7 @@ export class ActivityController {
 
   @Get()
   @AnyTrialMember()
-  @ApiOkResponse({ description: 'ActivityEntry[], newest first.' })
+  @ApiOkResponse({ type: [ActivityEntryDto], description: 'ActivityEntry[], newest first.' })
   list(@CurrentTrialAccess() access: TrialAccessContext, @Query() query: ActivityQueryDto) {
     return this.activity.list(access.trialId, query);
   }

@@ -6,6 +6,7 @@ import { CurrentTrialAccess, CurrentUser } from '../common/decorators/current-us
 import { AnalysesService } from './analyses.service';
 import { CreateAnalysisDto } from './dto/create-analysis.dto';
 import { CreateCommentDto } from './dto/create-comment.dto';
+import { AnalysisSnapshotDto, AnalysisSnapshotSummaryDto, SnapshotCommentDto } from './dto/analysis-snapshot.dto';
 
 @ApiTags('analyses')
 @Controller('trials/:trialId/analyses')
@@ -15,7 +16,7 @@ export class AnalysesController {
   @Post()
   @TrialAccess('investigator', 'reviewer')
   @ApiOperation({ summary: 'Save this analysis: the choices, the SHA-256 of the data used, the engine version and the full Findings, frozen' })
-  @ApiCreatedResponse({ description: 'AnalysisSnapshot (dataChanged false).' })
+  @ApiCreatedResponse({ type: AnalysisSnapshotDto, description: 'AnalysisSnapshot (dataChanged false).' })
   @ApiUnprocessableEntityResponse({ description: 'A choice refused by name, no data, or the engine’s sentence.' })
   create(@CurrentTrialAccess() access: TrialAccessContext, @CurrentUser() user: AuthUser, @Body() body: CreateAnalysisDto) {
     return this.analyses.create(access.trialId, user, body);
@@ -23,28 +24,28 @@ export class AnalysesController {
 
   @Get()
   @AnyTrialMember()
-  @ApiOkResponse({ description: 'AnalysisSnapshotSummary[], newest first (without the result).' })
+  @ApiOkResponse({ type: [AnalysisSnapshotSummaryDto], description: 'AnalysisSnapshotSummary[], newest first (without the result).' })
   list(@CurrentTrialAccess() access: TrialAccessContext) {
     return this.analyses.list(access.trialId);
   }
 
   @Get(':analysisId')
   @AnyTrialMember()
-  @ApiOkResponse({ description: 'AnalysisSnapshot: the stored result, never recomputed, with dataChanged when today’s data hash differs.' })
+  @ApiOkResponse({ type: AnalysisSnapshotDto, description: 'AnalysisSnapshot: the stored result, never recomputed, with dataChanged when today’s data hash differs.' })
   get(@CurrentTrialAccess() access: TrialAccessContext, @Param('analysisId', ParseIntPipe) analysisId: number) {
     return this.analyses.get(access.trialId, analysisId);
   }
 
   @Get(':analysisId/comments')
   @AnyTrialMember()
-  @ApiOkResponse({ description: 'SnapshotComment[], oldest first.' })
+  @ApiOkResponse({ type: [SnapshotCommentDto], description: 'SnapshotComment[], oldest first.' })
   comments(@CurrentTrialAccess() access: TrialAccessContext, @Param('analysisId', ParseIntPipe) analysisId: number) {
     return this.analyses.listComments(access.trialId, analysisId);
   }
 
   @Post(':analysisId/comments')
   @AnyTrialMember()
-  @ApiCreatedResponse({ description: 'SnapshotComment; recorded in the activity log.' })
+  @ApiCreatedResponse({ type: SnapshotCommentDto, description: 'SnapshotComment; recorded in the activity log.' })
   comment(
     @CurrentTrialAccess() access: TrialAccessContext,
     @CurrentUser() user: AuthUser,
@@ -57,7 +58,7 @@ export class AnalysesController {
   @Post(':analysisId/sign-off')
   @TrialAccess('investigator')
   @HttpCode(200)
-  @ApiOkResponse({ description: 'AnalysisSnapshot with signedOffAt and signedOffBy; recorded in the activity log.' })
+  @ApiOkResponse({ type: AnalysisSnapshotDto, description: 'AnalysisSnapshot with signedOffAt and signedOffBy; recorded in the activity log.' })
   @ApiConflictResponse({ description: 'The trial is not locked, or the analysis is already signed off (a sentence).' })
   signOff(@CurrentTrialAccess() access: TrialAccessContext, @CurrentUser() user: AuthUser, @Param('analysisId', ParseIntPipe) analysisId: number) {
     return this.analyses.signOff(access.trialId, analysisId, user);

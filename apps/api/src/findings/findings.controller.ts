@@ -5,6 +5,7 @@ import { AnyTrialMember } from '../common/decorators/access.decorator';
 import { CurrentTrialAccess } from '../common/decorators/current-user.decorator';
 import { FindingsQueryDto } from './dto/findings-query.dto';
 import { FindingsService } from './findings.service';
+import { FindingsDto } from './dto/findings.dto';
 
 @ApiTags('findings')
 @Controller('trials/:trialId/findings')
@@ -21,7 +22,7 @@ export class FindingsController {
       'the rank test (Friedman for blocked designs, blocks = site × block when sites are combined; Kruskal–Wallis otherwise), ' +
       'the not-drained curve for a time with a cut-off, the means over time and the data hash.',
   })
-  @ApiOkResponse({ description: 'Findings: AnovaAnswer & {context}.' })
+  @ApiOkResponse({ type: FindingsDto, description: 'Findings: AnovaAnswer & {context}.' })
   @ApiUnprocessableEntityResponse({ description: 'An unknown measure, round or site, no data yet, or the engine’s sentence.' })
   get(@CurrentTrialAccess() access: TrialAccessContext, @Query() query: FindingsQueryDto) {
     return this.findings.findings(access.trialId, query);

@@ -4,6 +4,7 @@ import type { Response } from 'express';
 import { Public } from '../common/decorators/access.decorator';
 import { RETRY_AFTER_SECONDS } from '../common/filters/problem.filter';
 import { DatabaseWatchService } from './database-watch.service';
+import { HealthReportDto } from './dto/health-report.dto';
 
 @ApiTags('health')
 @Controller('health')
@@ -12,8 +13,8 @@ export class HealthController {
 
   @Get()
   @Public()
-  @ApiOkResponse({ description: '{"status":"ok","database":"up"}' })
-  @ApiServiceUnavailableResponse({ description: 'Names what is down.' })
+  @ApiOkResponse({ type: HealthReportDto, description: '{"status":"ok","database":"up"}' })
+  @ApiServiceUnavailableResponse({ type: HealthReportDto, description: 'Names what is down.' })
   async check(@Res({ passthrough: true }) response: Response) {
     // A check of its own (answered within a second or counted as down), not the last one's result.
     if (await this.database.check()) return { status: 'ok', database: 'up' };

@@ -1,6 +1,6 @@
 import type { IntakeResult } from '@friable/contracts';
 import { Body, Controller, HttpCode, Param, ParseIntPipe, Post, Query, UnprocessableEntityException, UploadedFile, UseInterceptors } from '@nestjs/common';
-import { ApiBody, ApiConflictResponse, ApiConsumes, ApiOkResponse, ApiPayloadTooLargeResponse, ApiTags, ApiUnprocessableEntityResponse } from '@nestjs/swagger';
+import { ApiBody, ApiConflictResponse, ApiExtraModels, getSchemaPath, ApiConsumes, ApiOkResponse, ApiPayloadTooLargeResponse, ApiTags, ApiUnprocessableEntityResponse } from '@nestjs/swagger';
 import type { AuthUser, TrialAccessContext } from '../auth/auth-user';
 import { TrialAccess } from '../common/decorators/access.decorator';
 import { CurrentTrialAccess, CurrentUser } from '../common/decorators/current-user.decorator';
@@ -8,7 +8,10 @@ import { SingleFileUpload } from '../storage/single-file-upload.interceptor';
 import { IntakeOptionsDto, flagIsSet, readMapping } from './dto/intake-options.dto';
 import { intakeConfig } from './intake.config';
 import { IntakeService } from './intake.service';
+import { IntakeRefusalDto, IntakeResultDto } from './dto/intake-responses.dto';
+import { ProblemDto } from '../common/dto/problem.dto';
 
+@ApiExtraModels(IntakeRefusalDto, ProblemDto)
 @ApiTags('intake')
 @Controller('trials/:trialId/sites/:siteId/rounds/:roundId/intake')
 export class IntakeController {
@@ -36,8 +39,8 @@ export class IntakeController {
       },
     },
   })
-  @ApiOkResponse({ description: 'IntakeResult: what was written (or, with ?dryRun=true, what would be): new, changed and unchanged values.' })
-  @ApiUnprocessableEntityResponse({ description: 'IntakeRefusal: nothing was written; errors lists every problem by row and column (or the warnings to accept).' })
+  @ApiOkResponse({ type: IntakeResultDto, description: 'IntakeResult: what was written (or, with ?dryRun=true, what would be): new, changed and unchanged values.' })
+  @ApiUnprocessableEntityResponse({ schema: { anyOf: [{ $ref: getSchemaPath(IntakeRefusalDto) }, { $ref: getSchemaPath(ProblemDto) }] }, description: 'IntakeRefusal: nothing was written; errors lists every problem by row and column (or the warnings to accept).' })
   @ApiPayloadTooLargeResponse({ description: 'The file is larger than INTAKE_MAX_BYTES (100 MB by default, enough for a million rows of the template).' })
   @ApiConflictResponse({ description: 'The trial is locked, or the site is not randomized yet.' })
   upload(

@@ -1,18 +1,11 @@
 import { Body, Controller, Get, Param, Post, Req, Res } from '@nestjs/common';
-import {
-  ApiCreatedResponse,
-  ApiForbiddenResponse,
-  ApiGoneResponse,
-  ApiNotFoundResponse,
-  ApiOkResponse,
-  ApiTags,
-  ApiUnprocessableEntityResponse,
-} from '@nestjs/swagger';
+import { ApiCreatedResponse, ApiForbiddenResponse, ApiGoneResponse, ApiNotFoundResponse, ApiOkResponse, ApiTags, ApiUnprocessableEntityResponse } from '@nestjs/swagger';
 import type { Request, Response } from 'express';
 import { Public } from '../common/decorators/access.decorator';
 import { AcceptInvitationDto } from './dto/accept-invitation.dto';
 import { InvitationsService } from './invitations.service';
 import { SessionsService } from '../auth/sessions.service';
+import { InvitationAcceptResponseDto, InvitationPreviewDto } from './dto/invitation.dto';
 
 /** The invitation link's own routes: public, because the invitee may have no account yet. */
 @ApiTags('team')
@@ -25,7 +18,7 @@ export class InvitationsController {
 
   @Get()
   @Public()
-  @ApiOkResponse({ description: 'InvitationPreview: the trial, role and site the link invites to.' })
+  @ApiOkResponse({ type: InvitationPreviewDto, description: 'InvitationPreview: the trial, role and site the link invites to.' })
   @ApiNotFoundResponse({ description: 'No invitation has this link (mistyped, or replaced by a resend).' })
   @ApiGoneResponse({ description: 'The invitation was already used, withdrawn or has expired.' })
   preview(@Param('token') token: string) {
@@ -34,8 +27,8 @@ export class InvitationsController {
 
   @Post('accept')
   @Public()
-  @ApiCreatedResponse({ description: 'InvitationAcceptResponse: a new account was made and is signed in.' })
-  @ApiOkResponse({ description: 'InvitationAcceptResponse: the existing account joined and is signed in.' })
+  @ApiCreatedResponse({ type: InvitationAcceptResponseDto, description: 'InvitationAcceptResponse: a new account was made and is signed in.' })
+  @ApiOkResponse({ type: InvitationAcceptResponseDto, description: 'InvitationAcceptResponse: the existing account joined and is signed in.' })
   @ApiUnprocessableEntityResponse({ description: 'A name and a password of at least 12 characters (not a common one) are needed for a new account.' })
   @ApiForbiddenResponse({ description: 'The password does not match the existing account, or the account is deactivated.' })
   @ApiNotFoundResponse({ description: 'No invitation has this link.' })

@@ -1,5 +1,5 @@
 import { Body, Controller, Get, Param, ParseIntPipe, Patch, Post, Query, UseFilters } from '@nestjs/common';
-import { ApiConflictResponse, ApiCreatedResponse, ApiOkResponse, ApiTags, ApiUnprocessableEntityResponse } from '@nestjs/swagger';
+import { ApiConflictResponse, ApiExtraModels, getSchemaPath, ApiCreatedResponse, ApiOkResponse, ApiTags, ApiUnprocessableEntityResponse } from '@nestjs/swagger';
 import type { AuthUser, TrialAccessContext } from '../auth/auth-user';
 import { AnyTrialMember, TrialAccess } from '../common/decorators/access.decorator';
 import { CurrentTrialAccess, CurrentUser } from '../common/decorators/current-user.decorator';
@@ -8,7 +8,13 @@ import { EditObservationDto } from './dto/edit-observation.dto';
 import { ObservationQueryDto } from './dto/observation-query.dto';
 import { LedgerService } from './ledger.service';
 import { ObservationConflictFilter } from './observation-conflict.filter';
+import { ProblemDto } from '../common/dto/problem.dto';
+import { ObservationConflictDto, ObservationHistoryEntryDto, RecordedObservationDto } from './dto/recorded-observation.dto';
 
+// A stale version answers with the stored value; a locked trial with the usual problem body.
+const observationConflict = { anyOf: [{ $ref: getSchemaPath(ObservationConflictDto) }, { $ref: getSchemaPath(ProblemDto) }] };
+
+@ApiExtraModels(ObservationConflictDto, ProblemDto)
 @ApiTags('ledger')
 @Controller('trials/:trialId/observations')
 @UseFilters(ObservationConflictFilter)
@@ -17,15 +23,15 @@ export class LedgerController {
 
   @Get()
   @AnyTrialMember()
-  @ApiOkResponse({ description: 'Observation[]: each value with its plot, site, block, treatment, round, measure, text and number, censoring, version and who recorded it.' })
+  @ApiOkResponse({ type: [RecordedObservationDto], description: 'Observation[]: each value with its plot, site, block, treatment, round, measure, text and number, censoring, version and who recorded it.' })
   list(@CurrentTrialAccess() access: TrialAccessContext, @Query() query: ObservationQueryDto) {
     return this.ledger.list(access.trialId, query);
   }
 
   @Post()
   @TrialAccess('investigator', 'collaborator')
-  @ApiCreatedResponse({ description: 'Observation: the value recorded (version 1).' })
-  @ApiConflictResponse({ description: 'The trial is locked, or the cell already has a value (ObservationConflict with the current value).' })
+  @ApiCreatedResponse({ type: RecordedObservationDto, description: 'Observation: the value recorded (version 1).' })
+  @ApiConflictResponse({ schema: observationConflict, description: 'The trial is locked, or the cell already has a value (ObservationConflict with the current value).' })
   @ApiUnprocessableEntityResponse({ description: 'The value is refused as Intake would refuse it, or it needs acceptWarnings.' })
   create(@CurrentTrialAccess() access: TrialAccessContext, @CurrentUser() user: AuthUser, @Body() body: CreateObservationDto) {
     return this.ledger.create(access, user, body);
@@ -33,8 +39,8 @@ export class LedgerController {
 
   @Patch(':observationId')
   @TrialAccess('investigator', 'collaborator')
-  @ApiOkResponse({ description: 'Observation after the save (version + 1; unchanged when nothing differs).' })
-  @ApiConflictResponse({ description: 'The trial is locked, or the version is stale: ObservationConflict with the current value; nothing was written.' })
+  @ApiOkResponse({ type: RecordedObservationDto, description: 'Observation after the save (version + 1; unchanged when nothing differs).' })
+  @ApiConflictResponse({ schema: observationConflict, description: 'The trial is locked, or the version is stale: ObservationConflict with the current value; nothing was written.' })
   @ApiUnprocessableEntityResponse({ description: 'The value is refused as Intake would refuse it, or it needs acceptWarnings.' })
   edit(
     @CurrentTrialAccess() access: TrialAccessContext,
@@ -47,7 +53,7 @@ export class LedgerController {
 
   @Get(':observationId/history')
   @AnyTrialMember()
-  @ApiOkResponse({ description: 'ObservationHistoryEntry[], oldest first: who, when, before, after, by upload or by edit.' })
+  @ApiOkResponse({ type: [ObservationHistoryEntryDto], description: 'ObservationHistoryEntry[], oldest first: who, when, before, after, by upload or by edit.' })
   history(@CurrentTrialAccess() access: TrialAccessContext, @Param('observationId', ParseIntPipe) observationId: number) {
     return this.ledger.history(access.trialId, observationId);
   }

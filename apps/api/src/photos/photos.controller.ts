@@ -7,6 +7,8 @@ import { DOWNLOAD_POLICY } from '../common/security/security-headers';
 import { SingleFileUpload } from '../storage/single-file-upload.interceptor';
 import { photosConfig } from './photos.config';
 import { PhotosService } from './photos.service';
+import { PlotPhotoDto } from './dto/plot-photo.dto';
+import { ApiFileResponse } from '../common/openapi/file-response.decorator';
 
 @ApiTags('photos')
 @Controller('trials/:trialId/plots/:plotId/rounds/:roundId/photo')
@@ -18,7 +20,7 @@ export class PhotosController {
   // A photo is someone's upload: served as a download under a sandbox, never sniffed, so bytes
   // hidden after the image (a script, say) cannot run in Friable's origin.
   @Header('Content-Security-Policy', DOWNLOAD_POLICY)
-  @ApiOkResponse({ description: 'The image (image/jpeg or image/png), as an attachment named after the plot and round.' })
+  @ApiFileResponse(['image/jpeg', 'image/png'], 'The image (image/jpeg or image/png), as an attachment named after the plot and round.')
   async get(@CurrentTrialAccess() access: TrialAccessContext, @Param('plotId', ParseIntPipe) plotId: number, @Param('roundId', ParseIntPipe) roundId: number) {
     const { photo, bytes } = await this.photos.get(access.trialId, plotId, roundId);
     const fileName = await this.photos.downloadName(access.trialId, plotId, roundId, photo);
@@ -30,7 +32,7 @@ export class PhotosController {
   @UseInterceptors(SingleFileUpload({ field: 'file', configToken: photosConfig.KEY, what: 'a photo' }))
   @ApiConsumes('multipart/form-data')
   @ApiBody({ schema: { type: 'object', required: ['file'], properties: { file: { type: 'string', format: 'binary', description: 'A JPEG or PNG image.' } } } })
-  @ApiOkResponse({ description: 'PlotPhoto: the photo kept (its type as found in the bytes).' })
+  @ApiOkResponse({ type: PlotPhotoDto, description: 'PlotPhoto: the photo kept (its type as found in the bytes).' })
   @ApiUnprocessableEntityResponse({ description: 'The file is not a JPEG or PNG image (checked from its content).' })
   @ApiPayloadTooLargeResponse({ description: 'The photo is larger than PHOTO_MAX_BYTES (8 MB by default).' })
   @ApiConflictResponse({ description: 'The trial is locked.' })

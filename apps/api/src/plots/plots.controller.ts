@@ -1,11 +1,14 @@
 import { Controller, Get, Header, Param, ParseIntPipe, Query, Res } from '@nestjs/common';
-import { ApiConflictResponse, ApiOkResponse, ApiProduces, ApiTags } from '@nestjs/swagger';
+import { ApiConflictResponse, ApiOkResponse, ApiTags } from '@nestjs/swagger';
 import type { Response } from 'express';
 import type { TrialAccessContext } from '../auth/auth-user';
 import { AnyTrialMember } from '../common/decorators/access.decorator';
 import { CurrentTrialAccess } from '../common/decorators/current-user.decorator';
 import { AmountsQueryDto, PlotsQueryDto } from './dto/plots-query.dto';
 import { PlotsService } from './plots.service';
+import { PlotDto } from './dto/plot.dto';
+import { LevelAmountDto, PlotAmountDto } from './dto/plot-amount.dto';
+import { ApiFileResponse } from '../common/openapi/file-response.decorator';
 
 @ApiTags('plot plans')
 @Controller('trials/:trialId')
@@ -14,14 +17,14 @@ export class PlotsController {
 
   @Get('plots')
   @AnyTrialMember()
-  @ApiOkResponse({ description: 'Plot[] in site, block and position order.' })
+  @ApiOkResponse({ type: [PlotDto], description: 'Plot[] in site, block and position order.' })
   list(@CurrentTrialAccess() access: TrialAccessContext, @Query() query: PlotsQueryDto) {
     return this.plots.list(access.trialId, query.siteId);
   }
 
   @Get('amounts')
   @AnyTrialMember()
-  @ApiOkResponse({ description: 'PlotAmount[]: per site and treatment, the amount for one plot and for the site with the margin.' })
+  @ApiOkResponse({ type: [PlotAmountDto], description: 'PlotAmount[]: per site and treatment, the amount for one plot and for the site with the margin.' })
   amounts(@CurrentTrialAccess() access: TrialAccessContext, @Query() query: AmountsQueryDto) {
     return this.plots.amounts(access.trialId, query.marginPercent ?? 10);
   }
@@ -29,6 +32,7 @@ export class PlotsController {
   @Get('level-amounts')
   @AnyTrialMember()
   @ApiOkResponse({
+    type: [LevelAmountDto],
     description:
       'LevelAmount[] (factorial and split-plot trials): per site and factor level, the amount for one unit the level is applied to (a plot, or a whole plot of a split plot) and for all of them with the margin. Empty for one-factor designs.',
   })
@@ -38,8 +42,8 @@ export class PlotsController {
 
   @Get('sites/:siteId/rounds/:roundId/template.csv')
   @AnyTrialMember()
-  @ApiProduces('text/csv')
   @Header('Content-Type', 'text/csv; charset=utf-8')
+  @ApiFileResponse(['text/csv'], "The site's plots of the round, one row each, with a column per measure to fill in.")
   @ApiConflictResponse({ description: 'The site is not randomized yet.' })
   async template(
     @CurrentTrialAccess() access: TrialAccessContext,

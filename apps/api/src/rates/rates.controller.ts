@@ -3,6 +3,7 @@ import { ApiOkResponse, ApiTags, ApiUnprocessableEntityResponse } from '@nestjs/
 import { SignedIn } from '../common/decorators/access.decorator';
 import { DoseRequestDto } from './dto/dose-request.dto';
 import { RatesService } from './rates.service';
+import { DoseAnswerDto } from './dto/dose-answer.dto';
 
 @ApiTags('rates')
 @Controller('rates')
@@ -12,7 +13,7 @@ export class RatesController {
   @Post('dose')
   @HttpCode(200)
   @SignedIn()
-  @ApiOkResponse({ description: 'DoseAnswer: grams, kilograms, ounces, pounds (litres and gallons for depth rates), warnings.' })
+  @ApiOkResponse({ type: DoseAnswerDto, description: 'DoseAnswer: grams, kilograms, ounces, pounds (litres and gallons for depth rates), warnings.' })
   @ApiUnprocessableEntityResponse({ description: 'A field is missing or out of range; the error names it.' })
   dose(@Body() body: DoseRequestDto) {
     return this.rates.dose(body);

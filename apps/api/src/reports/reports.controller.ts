@@ -4,6 +4,7 @@ import type { TrialAccessContext } from '../auth/auth-user';
 import { AnyTrialMember } from '../common/decorators/access.decorator';
 import { CurrentTrialAccess } from '../common/decorators/current-user.decorator';
 import { ReportsService } from './reports.service';
+import { TrialReportDto } from './dto/trial-report.dto';
 
 @ApiTags('reports')
 @Controller('trials/:trialId/report')
@@ -13,7 +14,7 @@ export class ReportsController {
   @Get()
   @AnyTrialMember()
   @ApiOperation({ summary: 'Everything the printable report needs: protocol, sites, per measure the ANOVA and means with letters (latest round with data, all sites combined), cautions and a plain paragraph' })
-  @ApiOkResponse({ description: 'TrialReport.' })
+  @ApiOkResponse({ type: TrialReportDto, description: 'TrialReport.' })
   get(@CurrentTrialAccess() access: TrialAccessContext) {
     return this.reports.report(access.trialId);
   }

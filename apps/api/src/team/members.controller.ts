@@ -4,6 +4,7 @@ import type { TrialAccessContext } from '../auth/auth-user';
 import { AnyTrialMember } from '../common/decorators/access.decorator';
 import { CurrentTrialAccess } from '../common/decorators/current-user.decorator';
 import { MembersService } from './members.service';
+import { MemberDto } from './dto/member.dto';
 
 @ApiTags('team')
 @Controller('trials/:trialId/members')
@@ -12,7 +13,7 @@ export class MembersController {
 
   @Get()
   @AnyTrialMember()
-  @ApiOkResponse({ description: 'Member[]: everyone on the trial with their role and, for collaborators, their site.' })
+  @ApiOkResponse({ type: [MemberDto], description: 'Member[]: everyone on the trial with their role and, for collaborators, their site.' })
   list(@CurrentTrialAccess() access: TrialAccessContext) {
     return this.members.list(access.trialId);
   }

@@ -1,11 +1,12 @@
 import { Body, Controller, Delete, Get, HttpCode, Param, ParseIntPipe, Patch, Post } from '@nestjs/common';
-import { ApiConflictResponse, ApiTags, ApiUnprocessableEntityResponse } from '@nestjs/swagger';
+import { ApiConflictResponse, ApiCreatedResponse, ApiNoContentResponse, ApiOkResponse, ApiTags, ApiUnprocessableEntityResponse } from '@nestjs/swagger';
 import type { AuthUser, TrialAccessContext } from '../auth/auth-user';
 import { AnyTrialMember, TrialAccess } from '../common/decorators/access.decorator';
 import { CurrentTrialAccess, CurrentUser } from '../common/decorators/current-user.decorator';
 import { CreateTreatmentDto } from './dto/create-treatment.dto';
 import { UpdateTreatmentDto } from './dto/update-treatment.dto';
 import { TreatmentsService } from './treatments.service';
+import { TreatmentDto } from './dto/treatment.dto';
 
 @ApiTags('protocol')
 @Controller('trials/:trialId/treatments')
@@ -14,6 +15,7 @@ export class TreatmentsController {
 
   @Get()
   @AnyTrialMember()
+  @ApiOkResponse({ type: [TreatmentDto], description: 'The treatments in their order.' })
   list(@CurrentTrialAccess() access: TrialAccessContext) {
     return this.treatments.list(access.trialId);
   }
@@ -22,6 +24,7 @@ export class TreatmentsController {
   @TrialAccess('investigator')
   @ApiUnprocessableEntityResponse({ description: 'A field is wrong (e.g. the code is already used); nothing written.' })
   @ApiConflictResponse({ description: 'The trial is locked, is factorial, or a site has observations.' })
+  @ApiCreatedResponse({ type: TreatmentDto, description: 'The treatment as saved.' })
   create(@CurrentTrialAccess() access: TrialAccessContext, @CurrentUser() user: AuthUser, @Body() body: CreateTreatmentDto) {
     return this.treatments.create(access.trialId, user, body);
   }
@@ -30,6 +33,7 @@ export class TreatmentsController {
   @TrialAccess('investigator')
   @ApiUnprocessableEntityResponse({ description: 'A field is wrong; nothing written.' })
   @ApiConflictResponse({ description: 'The trial is locked.' })
+  @ApiOkResponse({ type: TreatmentDto, description: 'The treatment after the change.' })
   update(@CurrentTrialAccess() access: TrialAccessContext, @CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number, @Body() body: UpdateTreatmentDto) {
     return this.treatments.update(access.trialId, id, user, body);
   }
@@ -38,6 +42,7 @@ export class TreatmentsController {
   @HttpCode(204)
   @TrialAccess('investigator')
   @ApiConflictResponse({ description: 'The trial is locked, is factorial, or a site has observations of it.' })
+  @ApiNoContentResponse({ description: 'The treatment was deleted.' })
   remove(@CurrentTrialAccess() access: TrialAccessContext, @CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number) {
     return this.treatments.remove(access.trialId, id, user);
   }

@@ -1,6 +1,7 @@
 import type { ProblemBody } from '@friable/contracts';
-
-const TOKEN_KEY = 'friable.accessToken';
+import createClient from 'openapi-fetch';
+import type { paths } from './api-schema';
+import { sessionMiddleware } from './session';
 
 /** An answer from the API that was not a success, with its sentence and per-field details. */
 export class ApiError extends Error {
@@ -14,79 +15,70 @@ export class ApiError extends Error {
   }
 }
 
-let unauthorizedHandler: (() => void) | null = null;
+export const UNREACHABLE_MESSAGE = 'Friable cannot reach its server. Check that it is running, then try again.';
 
-/** Called whenever the API answers 401 to a signed-in request (the session is over). */
-export function onUnauthorized(handler: (() => void) | null): void {
-  unauthorizedHandler = handler;
+/**
+ * The API client, typed by `api-schema.ts` (generated from the API's OpenAPI document): paths,
+ * parameters, bodies and answers are checked at compile time. `fetch` is looked up at each call,
+ * so tests can replace it.
+ */
+export const api = createClient<paths>({ baseUrl: window.location.origin, fetch: (request) => globalThis.fetch(request) });
+api.use(sessionMiddleware);
+
+interface Answer<T> {
+  data?: T;
+  error?: unknown;
+  response: Response;
 }
 
-export const tokenStore = {
-  get: (): string | null => window.localStorage.getItem(TOKEN_KEY),
-  set: (token: string) => window.localStorage.setItem(TOKEN_KEY, token),
-  clear: () => window.localStorage.removeItem(TOKEN_KEY),
-};
-
-async function readProblem(response: Response): Promise<ApiError> {
-  let body: Partial<ProblemBody> = {};
-  try {
-    body = (await response.json()) as Partial<ProblemBody>;
-  } catch {
-    // Not JSON (a proxy error page, say): fall back to the status line.
-  }
-  const message = body.message || `The server answered ${response.status} ${response.statusText || ''}`.trim();
-  return new ApiError(response.status, message, body.errors ?? []);
-}
-
-/** Calls the API with the session's token; throws ApiError with the server's own message on failure. */
-export async function apiRequest<T>(path: string, init: RequestInit & { json?: unknown } = {}): Promise<T> {
-  const headers = new Headers(init.headers);
-  const token = tokenStore.get();
-  if (token) headers.set('Authorization', `Bearer ${token}`);
-  let body = init.body;
-  if (init.json !== undefined) {
-    headers.set('Content-Type', 'application/json');
-    body = JSON.stringify(init.json);
-  }
-  let response: Response;
-  try {
-    response = await fetch(`/api${path}`, { ...init, headers, body });
-  } catch {
-    throw new ApiError(0, 'Friable cannot reach its server. Check that it is running, then try again.');
-  }
-  if (!response.ok) {
-    const error = await readProblem(response);
-    if (response.status === 401 && token) unauthorizedHandler?.();
-    throw error;
-  }
-  if (response.status === 204) return undefined as T;
-  return (await response.json()) as T;
+/** The error for an answer that was not a success, in the server's own words when it gave any. */
+export function problemOf(response: Pick<Response, 'status' | 'statusText'>, body: unknown): ApiError {
+  const problem = (typeof body === 'object' && body !== null ? body : {}) as Partial<ProblemBody>;
+  const message = problem.message || `The server answered ${response.status} ${response.statusText || ''}`.trim();
+  return new ApiError(response.status, message, problem.errors ?? []);
 }
 
 /**
- * Downloads a file from the API with the session's token (a bare link would go without it and be
- * refused) and saves it under the server's own file name, or `fallbackName` when it gives none.
+ * The data of a typed call, or an ApiError carrying the server's sentence (status 0 when the server
+ * could not be reached). Every endpoint file goes through here.
  */
-export async function apiDownload(path: string, fallbackName: string): Promise<void> {
-  const token = tokenStore.get();
-  let response: Response;
+export async function unwrap<T>(call: Promise<Answer<T>>): Promise<T> {
+  let answer: Answer<T>;
   try {
-    response = await fetch(`/api${path}`, { headers: token ? { Authorization: `Bearer ${token}` } : {} });
+    answer = await call;
   } catch {
-    throw new ApiError(0, 'Friable cannot reach its server. Check that it is running, then try again.');
+    throw new ApiError(0, UNREACHABLE_MESSAGE);
   }
-  if (!response.ok) {
-    const error = await readProblem(response);
-    if (response.status === 401 && token) unauthorizedHandler?.();
-    throw error;
+  if (!answer.response.ok) throw problemOf(answer.response, answer.error);
+  return answer.data as T;
+}
+
+/** Saves a file answer (asked with `parseAs: 'blob'`) under the server's own file name, or `fallbackName`. */
+export async function saveFile(call: Promise<Answer<Blob>>, fallbackName: string): Promise<void> {
+  let answer: Answer<Blob>;
+  try {
+    answer = await call;
+  } catch {
+    throw new ApiError(0, UNREACHABLE_MESSAGE);
   }
-  const url = URL.createObjectURL(await response.blob());
+  if (!answer.response.ok) throw problemOf(answer.response, answer.error);
+  const url = URL.createObjectURL(answer.data as Blob);
   const link = document.createElement('a');
   link.href = url;
-  link.download = /filename="([^"]+)"/.exec(response.headers.get('Content-Disposition') ?? '')?.[1] ?? fallbackName;
+  link.download = /filename="([^"]+)"/.exec(answer.response.headers.get('Content-Disposition') ?? '')?.[1] ?? fallbackName;
   document.body.append(link);
   link.click();
   link.remove();
   // Give the browser a moment to start the download before the address is let go.
   setTimeout(() => URL.revokeObjectURL(url), 10_000);
+}
+
+/** A multipart body for a typed call whose body is a form (a file upload). */
+export function formBody(fields: Record<string, string | Blob | File>): { body: never; bodySerializer: () => FormData } {
+  const form = new FormData();
+  for (const [name, value] of Object.entries(fields)) {
+    if (value instanceof File) form.append(name, value, value.name);
+    else form.append(name, value);
+  }
+  return { body: {} as never, bodySerializer: () => form };
 }

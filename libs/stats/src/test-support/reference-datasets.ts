@@ -1,13 +1,8 @@
 import { readReferenceCsv } from './reference-files';
 
-/** Values of `valueColumn` grouped by `groupColumn`, groups in first-seen order; null when the file is absent. */
-export function groupedReferenceValues(
-  relative: string,
-  valueColumn: string,
-  groupColumn: string,
-): Map<string, number[]> | null {
+/** Values of `valueColumn` grouped by `groupColumn`, groups in first-seen order (a missing file throws). */
+export function groupedReferenceValues(relative: string, valueColumn: string, groupColumn: string): Map<string, number[]> {
   const rows = readReferenceCsv(relative);
-  if (!rows) return null;
   const groups = new Map<string, number[]>();
   for (const row of rows) groups.set(row[groupColumn], [...(groups.get(row[groupColumn]) ?? []), Number(row[valueColumn])]);
   return groups;

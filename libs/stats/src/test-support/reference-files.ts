@@ -1,22 +1,32 @@
 import { existsSync, readFileSync } from 'node:fs';
 import path from 'node:path';
 
-/** The shared reference folder beside the checkout (see STATISTICS.md "How to use these files"). */
-export const referenceFolder = path.resolve(__dirname, '../../../../../shared/reference');
+/** The reference datasets inside the repository (datasets/reference; each file's source in its README.md). */
+export const referenceFolder = path.resolve(__dirname, '../../../../datasets/reference');
 
-/** Absolute path of a reference file, or null (with a console note) when the folder is absent. */
-export function referencePath(relative: string): string | null {
+/** A reference dataset that should be in the repository is not: the check that needs it cannot run. */
+export class MissingReferenceDataError extends Error {
+  override name = 'MissingReferenceDataError';
+}
+
+/**
+ * Absolute path of a reference file in datasets/reference. A missing file fails the test that asked
+ * for it, naming the file: a reference check never passes, or skips, without its data.
+ */
+export function referencePath(relative: string): string {
   const file = path.join(referenceFolder, relative);
-  if (existsSync(file)) return file;
-  console.warn(`reference file ${file} is absent; its checks are skipped`);
-  return null;
+  if (!existsSync(file)) {
+    throw new MissingReferenceDataError(
+      `The reference dataset ${path.relative(process.cwd(), file)} is missing, so the check that compares with it cannot run. ` +
+        'It belongs in the repository under datasets/reference/ (sources in datasets/reference/README.md).',
+    );
+  }
+  return file;
 }
 
 /** Rows of a small quoted CSV file as records of strings (values keep their original text). */
-export function readReferenceCsv(relative: string): Record<string, string>[] | null {
-  const file = referencePath(relative);
-  if (!file) return null;
-  const [header, ...lines] = readFileSync(file, 'utf8').trim().split(/\r?\n/);
+export function readReferenceCsv(relative: string): Record<string, string>[] {
+  const [header, ...lines] = readFileSync(referencePath(relative), 'utf8').trim().split(/\r?\n/);
   const unquote = (cell: string): string => cell.trim().replace(/^"(.*)"$/, '$1');
   const names = header!.split(',').map(unquote);
   return lines.map((line) => {

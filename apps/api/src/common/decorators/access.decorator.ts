@@ -1,6 +1,6 @@
 import { SetMetadata, applyDecorators } from '@nestjs/common';
-import { ApiBearerAuth, ApiForbiddenResponse, ApiNotFoundResponse, ApiUnauthorizedResponse } from '@nestjs/swagger';
-import type { TrialRole } from '../../trials/models/trial-membership.model';
+import type { TrialRole } from '@friable/contracts';
+import { ApiBearerAuth, ApiForbiddenResponse, ApiNotFoundResponse, ApiParam, ApiUnauthorizedResponse } from '@nestjs/swagger';
 
 export const ACCESS_RULE = 'friable:access-rule';
 
@@ -38,6 +38,8 @@ export const AdminOnly = () =>
 export const TrialAccess = (...roles: TrialRole[]) =>
   applyDecorators(
     SetMetadata(ACCESS_RULE, { kind: 'trial', roles, adminMayRead: true } satisfies AccessRule),
+    // The guard reads :trialId itself, so no handler declares it: documented here once.
+    ApiParam({ name: 'trialId', type: Number, description: 'The trial.' }),
     ApiBearerAuth(),
     ApiUnauthorizedResponse({ description: 'No valid token.' }),
     ApiForbiddenResponse({ description: `Needs one of these roles on the trial: ${roles.join(', ')}.` }),

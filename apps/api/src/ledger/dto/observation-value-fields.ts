@@ -8,13 +8,13 @@ export class ObservationValueFields {
   @MaxLength(60, { message: 'value must be at most 60 characters' })
   value!: string;
 
-  @ApiPropertyOptional({ example: 'bed flooded', nullable: true, description: 'Why the value is missing (only for a missing value).' })
+  @ApiPropertyOptional({ type: String, example: 'bed flooded', nullable: true, description: 'Why the value is missing (only for a missing value).' })
   @IsOptional()
   @IsString({ message: 'missingReason must be text' })
   @MaxLength(200, { message: 'missingReason must be at most 200 characters' })
   missingReason?: string | null;
 
-  @ApiPropertyOptional({ nullable: true, description: 'Notes, kept exactly as typed.' })
+  @ApiPropertyOptional({ type: String, nullable: true, description: 'Notes, kept exactly as typed.' })
   @IsOptional()
   @IsString({ message: 'notes must be text' })
   @MaxLength(10_000, { message: 'notes must be at most 10,000 characters' })

@@ -30,49 +30,49 @@ export class CreateMeasureDto {
   @IsIn(MEASURE_KINDS, { message: `kind must be one of ${MEASURE_KINDS.join(', ')}` })
   kind: MeasureKind;
 
-  @ApiPropertyOptional({ nullable: true, description: 'Lowest score (kind score).' })
+  @ApiPropertyOptional({ type: Number, nullable: true, description: 'Lowest score (kind score).' })
   @IsOptional()
   @IsNumber(finite, { message: 'scaleMin must be a number' })
   @Min(-LIMIT, { message: withinLimit('scaleMin') })
   @Max(LIMIT, { message: withinLimit('scaleMin') })
   scaleMin?: number | null;
 
-  @ApiPropertyOptional({ nullable: true, description: 'Highest score (kind score).' })
+  @ApiPropertyOptional({ type: Number, nullable: true, description: 'Highest score (kind score).' })
   @IsOptional()
   @IsNumber(finite, { message: 'scaleMax must be a number' })
   @Min(-LIMIT, { message: withinLimit('scaleMax') })
   @Max(LIMIT, { message: withinLimit('scaleMax') })
   scaleMax?: number | null;
 
-  @ApiPropertyOptional({ nullable: true, description: 'Cut-off in the unit (kind time-with-cutoff).' })
+  @ApiPropertyOptional({ type: Number, nullable: true, description: 'Cut-off in the unit (kind time-with-cutoff).' })
   @IsOptional()
   @IsNumber(finite, { message: 'cutoff must be a number above 0' })
   @Min(0.000001, { message: 'cutoff must be a number above 0' })
   @Max(LIMIT, { message: 'cutoff must be at most 999,999,999,999' })
   cutoff?: number | null;
 
-  @ApiPropertyOptional({ nullable: true, description: 'Below: a warning.' })
+  @ApiPropertyOptional({ type: Number, nullable: true, description: 'Below: a warning.' })
   @IsOptional()
   @IsNumber(finite, { message: 'plausibleMin must be a number' })
   @Min(-LIMIT, { message: withinLimit('plausibleMin') })
   @Max(LIMIT, { message: withinLimit('plausibleMin') })
   plausibleMin?: number | null;
 
-  @ApiPropertyOptional({ nullable: true, description: 'Above: a warning.' })
+  @ApiPropertyOptional({ type: Number, nullable: true, description: 'Above: a warning.' })
   @IsOptional()
   @IsNumber(finite, { message: 'plausibleMax must be a number' })
   @Min(-LIMIT, { message: withinLimit('plausibleMax') })
   @Max(LIMIT, { message: withinLimit('plausibleMax') })
   plausibleMax?: number | null;
 
-  @ApiPropertyOptional({ nullable: true, description: 'Below: an error.' })
+  @ApiPropertyOptional({ type: Number, nullable: true, description: 'Below: an error.' })
   @IsOptional()
   @IsNumber(finite, { message: 'hardMin must be a number' })
   @Min(-LIMIT, { message: withinLimit('hardMin') })
   @Max(LIMIT, { message: withinLimit('hardMin') })
   hardMin?: number | null;
 
-  @ApiPropertyOptional({ nullable: true, description: 'Above: an error.' })
+  @ApiPropertyOptional({ type: Number, nullable: true, description: 'Above: an error.' })
   @IsOptional()
   @IsNumber(finite, { message: 'hardMax must be a number' })
   @Min(-LIMIT, { message: withinLimit('hardMax') })

@@ -10,13 +10,13 @@ export class CreateSiteDto {
   @MaxLength(120, { message: 'name must be 2 to 120 characters long' })
   name: string;
 
-  @ApiPropertyOptional({ nullable: true })
+  @ApiPropertyOptional({ type: String, nullable: true })
   @IsOptional()
   @IsString({ message: 'location must be text' })
   @MaxLength(300, { message: 'location must be at most 300 characters long' })
   location?: string | null;
 
-  @ApiPropertyOptional({ nullable: true })
+  @ApiPropertyOptional({ type: String, nullable: true })
   @IsOptional()
   @IsString({ message: 'soilDescription must be text' })
   @MaxLength(2000, { message: 'soilDescription must be at most 2000 characters long' })
@@ -26,35 +26,35 @@ export class CreateSiteDto {
   @IsIn(['rectangle', 'round'], { message: 'shape must be rectangle or round' })
   shape: 'rectangle' | 'round';
 
-  @ApiPropertyOptional({ nullable: true, description: 'Rectangle plots.' })
+  @ApiPropertyOptional({ type: Number, nullable: true, description: 'Rectangle plots.' })
   @IsOptional()
   @IsNumber(finite, { message: 'lengthM must be a number of metres above 0' })
   @Min(0.01, { message: 'lengthM must be a number of metres above 0' })
   @Max(10000, { message: 'lengthM must be at most 10000 m' })
   lengthM?: number | null;
 
-  @ApiPropertyOptional({ nullable: true, description: 'Rectangle plots.' })
+  @ApiPropertyOptional({ type: Number, nullable: true, description: 'Rectangle plots.' })
   @IsOptional()
   @IsNumber(finite, { message: 'widthM must be a number of metres above 0' })
   @Min(0.01, { message: 'widthM must be a number of metres above 0' })
   @Max(10000, { message: 'widthM must be at most 10000 m' })
   widthM?: number | null;
 
-  @ApiPropertyOptional({ nullable: true, description: 'Round plots or containers: inside diameter at the soil surface.' })
+  @ApiPropertyOptional({ type: Number, nullable: true, description: 'Round plots or containers: inside diameter at the soil surface.' })
   @IsOptional()
   @IsNumber(finite, { message: 'diameterCm must be a number of centimetres above 0' })
   @Min(0.1, { message: 'diameterCm must be a number of centimetres above 0' })
   @Max(100000, { message: 'diameterCm must be at most 100000 cm' })
   diameterCm?: number | null;
 
-  @ApiPropertyOptional({ nullable: true })
+  @ApiPropertyOptional({ type: Number, nullable: true })
   @IsOptional()
   @IsNumber(finite, { message: 'containerDepthCm must be a number of centimetres above 0' })
   @Min(0.1, { message: 'containerDepthCm must be a number of centimetres above 0' })
   @Max(10000, { message: 'containerDepthCm must be at most 10000 cm' })
   containerDepthCm?: number | null;
 
-  @ApiPropertyOptional({ nullable: true, description: 'Soil volume per container, for rates per soil volume.' })
+  @ApiPropertyOptional({ type: Number, nullable: true, description: 'Soil volume per container, for rates per soil volume.' })
   @IsOptional()
   @IsNumber(finite, { message: 'soilVolumeL must be a number of litres above 0' })
   @Min(0.001, { message: 'soilVolumeL must be a number of litres above 0' })
@@ -73,7 +73,7 @@ export class CreateSiteDto {
   @Matches(/^[A-Z]{2,3}$/, { message: 'labelPrefix must be two or three capital letters' })
   labelPrefix?: string;
 
-  @ApiPropertyOptional({ nullable: true, description: 'A member of the trial who leads the work at this site.' })
+  @ApiPropertyOptional({ type: Number, nullable: true, description: 'A member of the trial who leads the work at this site.' })
   @IsOptional()
   @IsInt({ message: 'leadUserId must be the id of a member of this trial' })
   leadUserId?: number | null;

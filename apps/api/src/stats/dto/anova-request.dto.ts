@@ -10,7 +10,7 @@ export const MAX_OBSERVATIONS = 200_000;
 export class ObservationDto {
   @ApiPropertyOptional({ example: 'CTRL' })
   treatment?: string;
-  @ApiPropertyOptional({ example: { A: 'a1', B: 'b2' }, description: 'factorial-rcbd: the level of each factor, in place of treatment' })
+  @ApiPropertyOptional({ type: 'object', additionalProperties: { type: 'string' }, example: { A: 'a1', B: 'b2' }, description: 'factorial-rcbd: the level of each factor, in place of treatment' })
   factors?: Record<string, string>;
   @ApiPropertyOptional({ example: '1', description: 'Block label, nested within its site.' })
   block?: string;

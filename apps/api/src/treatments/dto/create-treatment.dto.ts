@@ -14,7 +14,7 @@ export class CreateTreatmentDto {
   @MaxLength(120, { message: 'name must be 1 to 120 characters long' })
   name: string;
 
-  @ApiPropertyOptional({ nullable: true })
+  @ApiPropertyOptional({ type: String, nullable: true })
   @IsOptional()
   @IsString({ message: 'description must be text' })
   @MaxLength(2000, { message: 'description must be at most 2000 characters long' })
@@ -25,7 +25,7 @@ export class CreateTreatmentDto {
   @IsBoolean({ message: 'isControl must be true or false' })
   isControl?: boolean;
 
-  @ApiPropertyOptional({ nullable: true, example: 40 })
+  @ApiPropertyOptional({ type: Number, nullable: true, example: 40 })
   @IsOptional()
   @IsNumber({ allowNaN: false, allowInfinity: false }, { message: 'rateValue must be a number of at least 0' })
   @Min(0, { message: 'rateValue must be a number of at least 0' })
@@ -42,20 +42,20 @@ export class CreateTreatmentDto {
   @IsIn(RATE_BASES, { message: `rateBasis must be one of ${RATE_BASES.join(', ')}` })
   rateBasis?: RateBasis;
 
-  @ApiPropertyOptional({ nullable: true, description: 'Depth the field rate is mixed into (concentration basis).' })
+  @ApiPropertyOptional({ type: Number, nullable: true, description: 'Depth the field rate is mixed into (concentration basis).' })
   @IsOptional()
   @IsNumber({ allowNaN: false, allowInfinity: false }, { message: 'incorporationDepthCm must be a number above 0' })
   @Min(0.01, { message: 'incorporationDepthCm must be a number above 0' })
   @Max(1000, { message: 'incorporationDepthCm must be at most 1000' })
   incorporationDepthCm?: number | null;
 
-  @ApiPropertyOptional({ nullable: true, example: 'Garden gypsum, 20 kg bag' })
+  @ApiPropertyOptional({ type: String, nullable: true, example: 'Garden gypsum, 20 kg bag' })
   @IsOptional()
   @IsString({ message: 'product must be text' })
   @MaxLength(200, { message: 'product must be at most 200 characters long' })
   product?: string | null;
 
-  @ApiPropertyOptional({ nullable: true, description: 'Share of active material, above 0 and at most 1.' })
+  @ApiPropertyOptional({ type: Number, nullable: true, description: 'Share of active material, above 0 and at most 1.' })
   @IsOptional()
   @IsNumber({ allowNaN: false, allowInfinity: false }, { message: 'purity must be a fraction above 0 and at most 1' })
   @Min(0.000001, { message: 'purity must be a fraction above 0 and at most 1' })
@@ -67,7 +67,7 @@ export class CreateTreatmentDto {
   @IsIn(['as-is', 'dry'], { message: 'moistureBasis must be as-is or dry' })
   moistureBasis?: 'as-is' | 'dry';
 
-  @ApiPropertyOptional({ nullable: true, description: 'Water share of the as-is product, at least 0 and below 1.' })
+  @ApiPropertyOptional({ type: Number, nullable: true, description: 'Water share of the as-is product, at least 0 and below 1.' })
   @IsOptional()
   @IsNumber({ allowNaN: false, allowInfinity: false }, { message: 'moistureFraction must be a fraction of at least 0 and below 1' })
   @Min(0, { message: 'moistureFraction must be a fraction of at least 0 and below 1' })

@@ -19,13 +19,13 @@ export class CreateTrialDto {
   @IsIn(TRIAL_DESIGNS, { message: `design must be one of ${TRIAL_DESIGNS.join(', ')}` })
   design?: TrialDesign;
 
-  @ApiPropertyOptional({ nullable: true, description: 'The question or hypothesis the trial answers.' })
+  @ApiPropertyOptional({ type: String, nullable: true, description: 'The question or hypothesis the trial answers.' })
   @IsOptional()
   @IsString({ message: 'question must be text' })
   @MaxLength(2000, { message: 'question must be at most 2000 characters long' })
   question?: string | null;
 
-  @ApiPropertyOptional({ nullable: true, example: '2026-04-01' })
+  @ApiPropertyOptional({ type: String, nullable: true, example: '2026-04-01' })
   @IsOptional()
   @IsISO8601({ strict: true }, { message: 'startDate must be a date like 2026-04-01' })
   @Matches(/^\d{4}-\d{2}-\d{2}$/, { message: 'startDate must be a date like 2026-04-01' })
@@ -37,7 +37,7 @@ export class CreateTrialDto {
   @Matches(/^\S.{0,59}$/s, { message: 'seed must be 1 to 60 characters of text' })
   seed?: string;
 
-  @ApiPropertyOptional({ nullable: true })
+  @ApiPropertyOptional({ type: String, nullable: true })
   @IsOptional()
   @IsString({ message: 'safetyNotes must be text' })
   @MaxLength(4000, { message: 'safetyNotes must be at most 4000 characters long' })

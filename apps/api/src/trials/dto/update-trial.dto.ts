@@ -4,7 +4,7 @@ import { TRIAL_STATUSES, type TrialStatus } from '../models/trial.model';
 import { CreateTrialDto } from './create-trial.dto';
 
 export class UpdateTrialDto extends PartialType(OmitType(CreateTrialDto, ['code'] as const)) {
-  @ApiPropertyOptional({ nullable: true, description: 'Why the trial has no untreated control (instead of one).' })
+  @ApiPropertyOptional({ type: String, nullable: true, description: 'Why the trial has no untreated control (instead of one).' })
   @IsOptional()
   @IsString({ message: 'noControlReason must be text' })
   @MaxLength(500, { message: 'noControlReason must be at most 500 characters long' })

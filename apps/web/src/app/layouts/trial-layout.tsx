@@ -5,7 +5,7 @@ import { ErrorState, LoadingState } from '../../components/states';
 import { TrialStatusTag } from '../../components/trial-status-tag';
 import { paths } from '../../config/paths';
 import { designLabels, roleLabels } from '../../lib/format';
-import { useTrial } from '../../features/protocol/api/get-trial';
+import { useTrial } from '../../lib/api/get-trial';
 
 export interface TrialOutletContext {
   trial: TrialDetail;

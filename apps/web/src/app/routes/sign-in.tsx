@@ -11,9 +11,9 @@ function safeReturnPath(value: string | null): string {
 export function SignInRoute() {
   const [params] = useSearchParams();
   const navigate = useNavigate();
-  const { token } = useAuth();
+  const { signedIn } = useAuth();
   const returnTo = safeReturnPath(params.get('returnTo'));
-  if (token) return <Navigate to={returnTo} replace />;
+  if (signedIn) return <Navigate to={returnTo} replace />;
   return (
     <div className="fr-sign-in-page">
       <div className="fr-sign-in-page__brand">

@@ -1,6 +1,5 @@
-import type { ActivityEntry } from '@friable/contracts';
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
-import { apiRequest } from '../../../lib/api-client';
+import { api, unwrap } from '../../../lib/api-client';
 
 /** The server-side filters of the activity list; each left out means "any". */
 export interface ActivityFilter {
@@ -10,19 +9,10 @@ export interface ActivityFilter {
   userId?: number;
 }
 
-/** The query string for a filter: `?kind=site.randomized&siteId=3&userId=7`, or '' for everything. */
-export function activityQueryString(filter: ActivityFilter): string {
-  const query = new URLSearchParams();
-  if (filter.kind) query.set('kind', filter.kind);
-  if (filter.siteId) query.set('siteId', String(filter.siteId));
-  if (filter.userId) query.set('userId', String(filter.userId));
-  const text = query.toString();
-  return text ? `?${text}` : '';
-}
-
 /** GET /api/trials/:trialId/activity?kind=&siteId=&userId= — the trial's audit trail, newest first (at most 1,000 entries). */
-export function getActivity(trialId: number, filter: ActivityFilter): Promise<ActivityEntry[]> {
-  return apiRequest<ActivityEntry[]>(`/trials/${trialId}/activity${activityQueryString(filter)}`);
+export function getActivity(trialId: number, { kind, siteId, userId }: ActivityFilter) {
+  const query = { kind: kind || undefined, siteId: siteId || undefined, userId: userId || undefined };
+  return unwrap(api.GET('/api/trials/{trialId}/activity', { params: { path: { trialId }, query } }));
 }
 
 /** Under the trial's key, so every change that reloads the trial reloads its activity too. */

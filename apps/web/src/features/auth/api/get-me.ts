@@ -1,14 +1,13 @@
-import type { PublicUser } from '@friable/contracts';
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { apiRequest } from '../../../lib/api-client';
+import { api, unwrap } from '../../../lib/api-client';
 
-export function getMe(): Promise<PublicUser> {
-  return apiRequest<PublicUser>('/auth/me');
+/** GET /api/auth/me — who the session belongs to. */
+export function getMe() {
+  return unwrap(api.GET('/api/auth/me'));
 }
 
-export const meQueryOptions = (token: string | null) =>
-  queryOptions({ queryKey: ['auth', 'me', token], queryFn: getMe, enabled: token !== null, staleTime: 5 * 60_000 });
+export const meQueryOptions = () => queryOptions({ queryKey: ['auth', 'me'], queryFn: getMe, staleTime: 5 * 60_000 });
 
-export function useMe(token: string | null) {
-  return useQuery(meQueryOptions(token));
+export function useMe(enabled: boolean) {
+  return useQuery({ ...meQueryOptions(), enabled });
 }

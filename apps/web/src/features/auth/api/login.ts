@@ -1,9 +1,10 @@
-import type { LoginRequest, LoginResponse } from '@friable/contracts';
+import type { LoginRequest } from '@friable/contracts';
 import { useMutation } from '@tanstack/react-query';
-import { apiRequest } from '../../../lib/api-client';
+import { api, unwrap } from '../../../lib/api-client';
 
-export function login(request: LoginRequest): Promise<LoginResponse> {
-  return apiRequest<LoginResponse>('/auth/login', { method: 'POST', json: request });
+/** POST /api/auth/login — a session and the person it belongs to (401 for a wrong e-mail or password). */
+export function login(request: LoginRequest) {
+  return unwrap(api.POST('/api/auth/login', { body: request }));
 }
 
 export function useLogin() {

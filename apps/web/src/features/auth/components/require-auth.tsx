@@ -6,9 +6,9 @@ import { useAuth } from '../hooks/auth-context';
 
 /** Sends a signed-out visitor to sign-in, and back to where they were going afterwards. */
 export function RequireAuth({ children }: { children: ReactNode }) {
-  const { token, user, checking } = useAuth();
+  const { signedIn, user, checking } = useAuth();
   const location = useLocation();
-  if (!token) return <Navigate to={paths.signIn.href(location.pathname + location.search)} replace />;
+  if (!signedIn) return <Navigate to={paths.signIn.href(location.pathname + location.search)} replace />;
   if (checking || !user) return <LoadingState what="your account" />;
   return <>{children}</>;
 }

@@ -29,7 +29,7 @@ describe('SignInForm', () => {
     await userEvent.type(screen.getByLabelText('Password'), 'friable-demo');
     await userEvent.click(screen.getByRole('button', { name: 'Sign in' }));
     await vi.waitFor(() => expect(onSignedIn).toHaveBeenCalledOnce());
-    expect(calls[0]).toEqual({ method: 'POST', path: '/api/auth/login', body: { email: 'ines@example.org', password: 'friable-demo' } });
+    expect(calls[0]).toMatchObject({ method: 'POST', path: '/api/auth/login', body: { email: 'ines@example.org', password: 'friable-demo' } });
     expect(window.localStorage.getItem('friable.accessToken')).toBe('a.b.c');
   });
 

@@ -1,14 +1,15 @@
 import type { LoginResponse, PublicUser } from '@friable/contracts';
 import { useQueryClient } from '@tanstack/react-query';
 import { createContext, useCallback, useContext, useEffect, useMemo, useState, type ReactNode } from 'react';
-import { onUnauthorized, tokenStore } from '../../../lib/api-client';
 import { setAccountLocale } from '../../../lib/person-locale';
-import { useMe } from '../api/get-me';
+import { session } from '../../../lib/session';
+import { meQueryOptions, useMe } from '../api/get-me';
 
 interface AuthState {
-  token: string | null;
+  /** True while this browser holds a session (it may still be checked, or turn out expired). */
+  signedIn: boolean;
   user: PublicUser | undefined;
-  /** True while a stored token is being checked with the server. */
+  /** True while a held session is being checked with the server. */
   checking: boolean;
   /** Set when the session ended on its own (expired, or the account was deactivated). */
   endedReason: string | null;
@@ -20,14 +21,14 @@ const AuthContext = createContext<AuthState | null>(null);
 
 export function AuthProvider({ children }: { children: ReactNode }) {
   const queryClient = useQueryClient();
-  const [token, setToken] = useState<string | null>(() => tokenStore.get());
+  const [signedIn, setSignedIn] = useState(() => session.isOpen());
   const [endedReason, setEndedReason] = useState<string | null>(null);
-  const me = useMe(token);
+  const me = useMe(signedIn);
 
   const signOut = useCallback(
     (reason?: string) => {
-      tokenStore.clear();
-      setToken(null);
+      session.close();
+      setSignedIn(false);
       setEndedReason(reason ?? null);
       queryClient.clear();
     },
@@ -36,10 +37,10 @@ export function AuthProvider({ children }: { children: ReactNode }) {
 
   const signIn = useCallback(
     (response: LoginResponse) => {
-      tokenStore.set(response.accessToken);
-      queryClient.setQueryData(['auth', 'me', response.accessToken], response.user);
+      session.open(response);
+      queryClient.setQueryData(meQueryOptions().queryKey, response.user);
       setEndedReason(null);
-      setToken(response.accessToken);
+      setSignedIn(true);
     },
     [queryClient],
   );
@@ -51,13 +52,13 @@ export function AuthProvider({ children }: { children: ReactNode }) {
   }, [user?.locale]);
 
   useEffect(() => {
-    onUnauthorized(() => signOut('Your session has ended. Please sign in again.'));
-    return () => onUnauthorized(null);
+    session.onEnded(() => signOut('Your session has ended. Please sign in again.'));
+    return () => session.onEnded(null);
   }, [signOut]);
 
   const value = useMemo<AuthState>(
-    () => ({ token, user: me.data, checking: token !== null && me.isPending, endedReason, signIn, signOut }),
-    [token, me.data, me.isPending, endedReason, signIn, signOut],
+    () => ({ signedIn, user: me.data, checking: signedIn && me.isPending, endedReason, signIn, signOut }),
+    [signedIn, me.data, me.isPending, endedReason, signIn, signOut],
   );
   return <AuthContext.Provider value={value}>{children}</AuthContext.Provider>;
 }

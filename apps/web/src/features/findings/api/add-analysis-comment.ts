@@ -1,11 +1,11 @@
-import type { SnapshotComment, SnapshotCommentCreate } from '@friable/contracts';
+import type { SnapshotCommentCreate } from '@friable/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { apiRequest } from '../../../lib/api-client';
-import { analysesQueryOptions } from './get-analyses';
+import { api, unwrap } from '../../../lib/api-client';
+import { analysesQueryOptions } from '../../../lib/api/get-analyses';
 
 /** POST /api/trials/:trialId/analyses/:analysisId/comments — a review comment on a saved analysis. */
-export function addAnalysisComment(trialId: number, analysisId: number, body: SnapshotCommentCreate): Promise<SnapshotComment> {
-  return apiRequest<SnapshotComment>(`/trials/${trialId}/analyses/${analysisId}/comments`, { method: 'POST', json: body });
+export function addAnalysisComment(trialId: number, analysisId: number, body: SnapshotCommentCreate) {
+  return unwrap(api.POST('/api/trials/{trialId}/analyses/{analysisId}/comments', { params: { path: { trialId, analysisId } }, body }));
 }
 
 export function useAddAnalysisComment(trialId: number, analysisId: number) {

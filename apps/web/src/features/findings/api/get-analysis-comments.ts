@@ -1,10 +1,9 @@
-import type { SnapshotComment } from '@friable/contracts';
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { apiRequest } from '../../../lib/api-client';
+import { api, unwrap } from '../../../lib/api-client';
 
 /** GET /api/trials/:trialId/analyses/:analysisId/comments — the review comments, oldest first. */
-export function getAnalysisComments(trialId: number, analysisId: number): Promise<SnapshotComment[]> {
-  return apiRequest<SnapshotComment[]>(`/trials/${trialId}/analyses/${analysisId}/comments`);
+export function getAnalysisComments(trialId: number, analysisId: number) {
+  return unwrap(api.GET('/api/trials/{trialId}/analyses/{analysisId}/comments', { params: { path: { trialId, analysisId } } }));
 }
 
 export const analysisCommentsQueryOptions = (trialId: number, analysisId: number) =>

@@ -1,16 +1,10 @@
-import type { Findings, FindingsQuery } from '@friable/contracts';
+import type { FindingsQuery } from '@friable/contracts';
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
-import { apiRequest } from '../../../lib/api-client';
-
-function queryText(query: FindingsQuery): string {
-  const params = new URLSearchParams();
-  for (const [key, value] of Object.entries(query)) if (value !== undefined && value !== null) params.set(key, String(value));
-  return params.toString();
-}
+import { api, unwrap } from '../../../lib/api-client';
 
 /** GET /api/trials/:trialId/findings?measureId=&roundId=&siteId=… — one measure and round analysed, with its context. */
-export function getFindings(trialId: number, query: FindingsQuery): Promise<Findings> {
-  return apiRequest<Findings>(`/trials/${trialId}/findings?${queryText(query)}`);
+export function getFindings(trialId: number, query: FindingsQuery) {
+  return unwrap(api.GET('/api/trials/{trialId}/findings', { params: { path: { trialId }, query } }));
 }
 
 /** Under the trial's key, so new values (which invalidate the trial) bring fresh Findings. */

@@ -1,10 +1,9 @@
-import type { TrialReport } from '@friable/contracts';
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { apiRequest } from '../../../lib/api-client';
+import { api, unwrap } from '../../../lib/api-client';
 
 /** GET /api/trials/:trialId/report — the protocol, sites and per measure the ANOVA and means of the latest round with data. */
-export function getReport(trialId: number): Promise<TrialReport> {
-  return apiRequest<TrialReport>(`/trials/${trialId}/report`);
+export function getReport(trialId: number) {
+  return unwrap(api.GET('/api/trials/{trialId}/report', { params: { path: { trialId } } }));
 }
 
 export const reportQueryOptions = (trialId: number) => queryOptions({ queryKey: ['trials', trialId, 'report'], queryFn: () => getReport(trialId) });

@@ -1,32 +1,17 @@
-import type { AnalysisDesign, AnalysisTransform, AnovaAnswer, SeparationMethod } from '@friable/contracts';
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { apiRequest } from '../../../lib/api-client';
-
-/** One row given to the engine: a treatment (or a factorial's levels), its block and site, and the value. */
-export interface AnalysisObservation {
-  treatment?: string;
-  factors?: Record<string, string>;
-  block?: string;
-  site?: string;
-  /** Decimal text is analysed exactly. */
-  value: number | string;
-}
+import { api, unwrap } from '../../../lib/api-client';
+import type { components } from '../../../lib/api-schema';
 
 /** The body of POST /api/stats/anova (see docs/api.md). */
-export interface AnovaRequest {
-  design: AnalysisDesign;
-  alpha?: number;
-  sitesAre?: 'random' | 'fixed';
-  control?: string;
-  transform?: AnalysisTransform;
-  meanSeparation?: SeparationMethod[];
-  forceLsd?: boolean;
-  observations: AnalysisObservation[];
-}
+export type AnovaRequest = components['schemas']['AnovaRequestDto'];
+/** The designs POST /api/stats/anova analyses (Quick analysis offers these). */
+export type QuickDesign = AnovaRequest['design'];
+/** One row given to the engine: a treatment (or a factorial's levels), its block and site, and the value. */
+export type AnalysisObservation = AnovaRequest['observations'][number];
 
 /** POST /api/stats/anova — the stateless analysis of pasted observations (nothing is stored). */
-export function runAnova(request: AnovaRequest): Promise<AnovaAnswer> {
-  return apiRequest<AnovaAnswer>('/stats/anova', { method: 'POST', json: request });
+export function runAnova(request: AnovaRequest) {
+  return unwrap(api.POST('/api/stats/anova', { body: request }));
 }
 
 /** Keyed by the whole request, so changing a choice asks again and going back reuses the answer. */

@@ -1,13 +1,12 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { apiRequest } from '../../../lib/api-client';
-import type { RankTestAnswer } from '@friable/contracts';
+import { api, unwrap } from '../../../lib/api-client';
 import type { AnalysisObservation } from './run-anova';
 
 export type RankTestKind = 'friedman' | 'kruskal';
 
 /** POST /api/stats/friedman (blocked data) or /api/stats/kruskal — the rank-based test beside the ANOVA. */
-export function runRankTest(kind: RankTestKind, observations: AnalysisObservation[]): Promise<RankTestAnswer> {
-  return apiRequest<RankTestAnswer>(`/stats/${kind}`, { method: 'POST', json: { observations } });
+export function runRankTest(kind: RankTestKind, observations: AnalysisObservation[]) {
+  return unwrap(kind === 'friedman' ? api.POST('/api/stats/friedman', { body: { observations } }) : api.POST('/api/stats/kruskal', { body: { observations } }));
 }
 
 export const rankTestQueryOptions = (kind: RankTestKind, observations: AnalysisObservation[]) =>

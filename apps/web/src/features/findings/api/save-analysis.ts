@@ -1,11 +1,11 @@
-import type { AnalysisSnapshot, AnalysisSnapshotCreate } from '@friable/contracts';
+import type { AnalysisSnapshotCreate } from '@friable/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { apiRequest } from '../../../lib/api-client';
-import { analysesQueryOptions } from './get-analyses';
+import { api, unwrap } from '../../../lib/api-client';
+import { analysesQueryOptions } from '../../../lib/api/get-analyses';
 
 /** POST /api/trials/:trialId/analyses — "Save this analysis": the choices analysed now and frozen. */
-export function saveAnalysis(trialId: number, body: AnalysisSnapshotCreate): Promise<AnalysisSnapshot> {
-  return apiRequest<AnalysisSnapshot>(`/trials/${trialId}/analyses`, { method: 'POST', json: body });
+export function saveAnalysis(trialId: number, body: AnalysisSnapshotCreate) {
+  return unwrap(api.POST('/api/trials/{trialId}/analyses', { params: { path: { trialId } }, body }));
 }
 
 export function useSaveAnalysis(trialId: number) {

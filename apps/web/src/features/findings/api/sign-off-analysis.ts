@@ -1,11 +1,10 @@
-import type { AnalysisSnapshot } from '@friable/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { apiRequest } from '../../../lib/api-client';
-import { analysesQueryOptions } from './get-analyses';
+import { api, unwrap } from '../../../lib/api-client';
+import { analysesQueryOptions } from '../../../lib/api/get-analyses';
 
 /** POST /api/trials/:trialId/analyses/:analysisId/sign-off — the investigator signs off a saved analysis of a locked trial (else 409 with a sentence). */
-export function signOffAnalysis(trialId: number, analysisId: number): Promise<AnalysisSnapshot> {
-  return apiRequest<AnalysisSnapshot>(`/trials/${trialId}/analyses/${analysisId}/sign-off`, { method: 'POST' });
+export function signOffAnalysis(trialId: number, analysisId: number) {
+  return unwrap(api.POST('/api/trials/{trialId}/analyses/{analysisId}/sign-off', { params: { path: { trialId, analysisId } } }));
 }
 
 export function useSignOffAnalysis(trialId: number, analysisId: number) {

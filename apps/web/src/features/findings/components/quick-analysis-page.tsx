@@ -1,17 +1,16 @@
 import { Button, Callout, H2, HTMLSelect, HTMLTable, TextArea } from '@blueprintjs/core';
-import type { AnalysisDesign } from '@friable/contracts';
 import { useMemo, useState } from 'react';
 import { ErrorState, LoadingState } from '../../../components/states';
 import { designLabels } from '../../../lib/format';
-import { anovaQueryOptions, runAnova, useAnova, type AnovaRequest } from '../api/run-anova';
+import { anovaQueryOptions, runAnova, useAnova, type AnovaRequest, type QuickDesign } from '../api/run-anova';
 import { useRankTest } from '../api/run-rank-test';
 import { useSiteMeans } from '../hooks/use-site-means';
 import { AnalysisChoices, Choice, defaultAnalysisOptions, type AnalysisOptions } from './analysis-choices';
 import { FindingsView } from './findings-view';
 import { columnRoleLabels, guessColumnRoles, guessDesign, missingColumns, quickObservations, readQuickTable, typedDecimals, type ColumnRole } from './quick-data';
 
-const DESIGNS: AnalysisDesign[] = ['crd', 'rcbd', 'factorial-rcbd', 'multisite-rcbd'];
-const quickDesignLabels: Record<AnalysisDesign, string> = { ...designLabels, 'multisite-rcbd': 'Blocks at several sites, combined' } as Record<AnalysisDesign, string>;
+const DESIGNS: QuickDesign[] = ['crd', 'rcbd', 'factorial-rcbd', 'multisite-rcbd'];
+const quickDesignLabels: Record<QuickDesign, string> = { ...designLabels, 'multisite-rcbd': 'Blocks at several sites, combined' } as Record<QuickDesign, string>;
 const ROLES = Object.keys(columnRoleLabels) as ColumnRole[];
 const PREVIEW_ROWS = 8;
 
@@ -28,7 +27,7 @@ function readFile(file: Blob): Promise<string> {
 export function QuickAnalysisPage() {
   const [text, setText] = useState('');
   const [roles, setRoles] = useState<ColumnRole[]>([]);
-  const [design, setDesign] = useState<AnalysisDesign>('rcbd');
+  const [design, setDesign] = useState<QuickDesign>('rcbd');
   const [control, setControl] = useState('');
   const [options, setOptions] = useState<AnalysisOptions>(defaultAnalysisOptions);
   const [request, setRequest] = useState<AnovaRequest | null>(null);
@@ -158,7 +157,7 @@ export function QuickAnalysisPage() {
             before={
               <>
                 <Choice label="Design">
-                  <HTMLSelect aria-label="Design" value={design} onChange={(event) => { setDesign(event.target.value as AnalysisDesign); setRequest(null); }}>
+                  <HTMLSelect aria-label="Design" value={design} onChange={(event) => { setDesign(event.target.value as QuickDesign); setRequest(null); }}>
                     {DESIGNS.map((d) => (
                       <option key={d} value={d}>
                         {quickDesignLabels[d]}

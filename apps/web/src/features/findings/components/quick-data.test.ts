@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { guessColumnRoles, guessDesign, missingColumns, quickObservations, readQuickTable, typedDecimals } from './quick-data';
 
-// Montgomery's hardness-testing tips (RCBD, 4 tips × 4 coupons), /work/shared/reference/STATISTICS.md B.1.
+// Montgomery's hardness-testing tips (RCBD, 4 tips × 4 coupons), datasets/reference/STATISTICS.md B.1.
 const hardness = `tip,coupon,hardness
 1,1,9.3
 1,2,9.4

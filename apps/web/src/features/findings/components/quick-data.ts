@@ -1,6 +1,5 @@
-import type { AnalysisDesign } from '@friable/contracts';
 import Papa from 'papaparse';
-import type { AnalysisObservation } from '../api/run-anova';
+import type { AnalysisObservation, QuickDesign } from '../api/run-anova';
 
 export type ColumnRole = 'treatment' | 'factorA' | 'factorB' | 'block' | 'site' | 'value' | 'ignore';
 
@@ -70,7 +69,7 @@ export function guessColumnRoles(table: QuickTable): ColumnRole[] {
 }
 
 /** The design the roles imply: sites → combined over sites; two factors → factorial in blocks; a block → RCBD; else CRD. */
-export function guessDesign(roles: readonly ColumnRole[]): AnalysisDesign {
+export function guessDesign(roles: readonly ColumnRole[]): QuickDesign {
   if (roles.includes('factorA') && roles.includes('factorB')) return 'factorial-rcbd';
   if (roles.includes('site')) return 'multisite-rcbd';
   if (roles.includes('block')) return 'rcbd';
@@ -78,7 +77,7 @@ export function guessDesign(roles: readonly ColumnRole[]): AnalysisDesign {
 }
 
 /** What each design needs beside a value; a missing column is named. */
-export function missingColumns(design: AnalysisDesign, roles: readonly ColumnRole[]): string[] {
+export function missingColumns(design: QuickDesign, roles: readonly ColumnRole[]): string[] {
   const needed: ColumnRole[] = ['value'];
   if (design === 'factorial-rcbd') needed.push('factorA', 'factorB', 'block');
   else needed.push('treatment');
@@ -88,7 +87,7 @@ export function missingColumns(design: AnalysisDesign, roles: readonly ColumnRol
 }
 
 /** The rows as the engine takes them, values as the decimal text typed (analysed exactly). */
-export function quickObservations(table: QuickTable, roles: readonly ColumnRole[], design: AnalysisDesign): AnalysisObservation[] {
+export function quickObservations(table: QuickTable, roles: readonly ColumnRole[], design: QuickDesign): AnalysisObservation[] {
   const at = (role: ColumnRole) => roles.indexOf(role);
   const [treatment, block, site, value, factorA, factorB] = (['treatment', 'block', 'site', 'value', 'factorA', 'factorB'] as const).map(at);
   return table.rows.map((row) => {

@@ -4,7 +4,7 @@ import { useState } from 'react';
 import { ErrorState, LoadingState } from '../../../components/states';
 import { formatDate } from '../../../lib/format';
 import { useAddAnalysisComment } from '../api/add-analysis-comment';
-import { useAnalysis } from '../api/get-analysis';
+import { useAnalysis } from '../../../lib/api/get-analysis';
 import { useAnalysisComments } from '../api/get-analysis-comments';
 import { useSignOffAnalysis } from '../api/sign-off-analysis';
 import { FindingsCaption, FindingsResultView } from './findings-result-view';

@@ -2,7 +2,7 @@ import { Button, InputGroup, Tag } from '@blueprintjs/core';
 import type { FindingsQuery, TrialDetail } from '@friable/contracts';
 import { useState } from 'react';
 import { formatDate } from '../../../lib/format';
-import { useAnalyses } from '../api/get-analyses';
+import { useAnalyses } from '../../../lib/api/get-analyses';
 import { useSaveAnalysis } from '../api/save-analysis';
 
 /** "Save this analysis" (investigators and reviewers) and the list of saved analyses, each opened with its stored numbers. */

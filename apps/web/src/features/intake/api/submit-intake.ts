@@ -1,6 +1,13 @@
-import type { IntakeProblem, IntakeResult, ProblemBody } from '@friable/contracts';
+import type { IntakeProblem } from '@friable/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { ApiError, tokenStore } from '../../../lib/api-client';
+import { ApiError, problemOf, UNREACHABLE_MESSAGE } from '../../../lib/api-client';
+import type { paths } from '../../../lib/api-schema';
+import { trialQueryOptions } from '../../../lib/api/get-trial';
+import { session } from '../../../lib/session';
+
+type IntakeRoute = paths['/api/trials/{trialId}/sites/{siteId}/rounds/{roundId}/intake']['post'];
+/** The 200 answer of the intake (also for a dry run), as the API documents it. */
+export type IntakeAnswer = IntakeRoute['responses'][200]['content']['application/json'];
 
 /** What the person's choice of column means: a role, a measure code, or null (not read). */
 export type ColumnChoice = 'plotLabel' | 'block' | 'treatment' | 'notes' | 'missingReason' | string | null;
@@ -26,9 +33,9 @@ export class IntakeRefusedError extends ApiError {
   }
 }
 
-function readBody(request: XMLHttpRequest): Partial<ProblemBody> & Partial<IntakeResult> {
+function readBody(request: XMLHttpRequest): unknown {
   try {
-    return JSON.parse(request.responseText) as Partial<ProblemBody> & Partial<IntakeResult>;
+    return JSON.parse(request.responseText);
   } catch {
     return {};
   }
@@ -37,10 +44,11 @@ function readBody(request: XMLHttpRequest): Partial<ProblemBody> & Partial<Intak
 /**
  * POST /api/trials/:trialId/sites/:siteId/rounds/:roundId/intake (multipart: `file`, `mapping` JSON when
  * the person changed it, `acceptWarnings`), with `?dryRun=true` for the check before the commit.
- * XMLHttpRequest rather than fetch, because only it reports real upload progress.
+ * XMLHttpRequest rather than the typed client's fetch, because only it reports real upload progress;
+ * it carries the session the same way (lib/session.ts).
  * Rejects with IntakeRefusedError (422, every problem listed) or ApiError (any other failure).
  */
-export function submitIntake({ trialId, siteId, roundId, file, mapping, acceptWarnings, dryRun, onProgress }: IntakeSubmission): Promise<IntakeResult> {
+export function submitIntake({ trialId, siteId, roundId, file, mapping, acceptWarnings, dryRun, onProgress }: IntakeSubmission): Promise<IntakeAnswer> {
   const form = new FormData();
   form.append('file', file, file.name);
   if (Object.keys(mapping).length > 0) form.append('mapping', JSON.stringify(mapping));
@@ -48,22 +56,22 @@ export function submitIntake({ trialId, siteId, roundId, file, mapping, acceptWa
   return new Promise((resolve, reject) => {
     const request = new XMLHttpRequest();
     request.open('POST', `/api/trials/${trialId}/sites/${siteId}/rounds/${roundId}/intake${dryRun ? '?dryRun=true' : ''}`);
-    const token = tokenStore.get();
-    if (token) request.setRequestHeader('Authorization', `Bearer ${token}`);
+    const credentials = session.credentialHeaders();
+    for (const [name, value] of Object.entries(credentials)) request.setRequestHeader(name, value);
     request.upload.onprogress = (event) => {
       if (event.lengthComputable && event.total > 0) onProgress?.(event.loaded / event.total);
     };
-    request.onerror = () => reject(new ApiError(0, 'Friable cannot reach its server. Check that it is running, then try again.'));
+    request.onerror = () => reject(new ApiError(0, UNREACHABLE_MESSAGE));
     request.onload = () => {
+      session.answered(request.status, Object.keys(credentials).length > 0);
       const body = readBody(request);
       if (request.status >= 200 && request.status < 300) {
         onProgress?.(1);
-        resolve(body as IntakeResult);
+        resolve(body as IntakeAnswer);
         return;
       }
-      const message = body.message || `The server answered ${request.status} ${request.statusText}`.trim();
-      const ErrorKind = request.status === 422 ? IntakeRefusedError : ApiError;
-      reject(new ErrorKind(request.status, message, body.errors ?? []));
+      const problem = problemOf(request, body);
+      reject(request.status === 422 ? new IntakeRefusedError(problem.status, problem.message, problem.details) : problem);
     };
     request.send(form);
   });
@@ -75,7 +83,7 @@ export function useSubmitIntake(trialId: number) {
   return useMutation({
     mutationFn: submitIntake,
     onSuccess: async (result) => {
-      if (!result.dryRun) await queryClient.invalidateQueries({ queryKey: ['trials', trialId] });
+      if (!result.dryRun) await queryClient.invalidateQueries({ queryKey: trialQueryOptions(trialId).queryKey });
     },
   });
 }

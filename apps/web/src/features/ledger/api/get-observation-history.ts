@@ -1,10 +1,9 @@
-import type { ObservationHistoryEntry } from '@friable/contracts';
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { apiRequest } from '../../../lib/api-client';
+import { api, unwrap } from '../../../lib/api-client';
 
 /** GET /api/trials/:trialId/observations/:observationId/history — who changed one value, when, from what to what. */
-export function getObservationHistory(trialId: number, observationId: number): Promise<ObservationHistoryEntry[]> {
-  return apiRequest<ObservationHistoryEntry[]>(`/trials/${trialId}/observations/${observationId}/history`);
+export function getObservationHistory(trialId: number, observationId: number) {
+  return unwrap(api.GET('/api/trials/{trialId}/observations/{observationId}/history', { params: { path: { trialId, observationId } } }));
 }
 
 export const observationHistoryQueryOptions = (trialId: number, observationId: number) =>

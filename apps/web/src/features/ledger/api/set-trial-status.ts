@@ -1,10 +1,10 @@
-import type { TrialDetail } from '@friable/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { apiRequest } from '../../../lib/api-client';
+import { api, unwrap } from '../../../lib/api-client';
+import { trialQueryOptions } from '../../../lib/api/get-trial';
 
 /** PATCH /api/trials/:trialId {status} — the investigator locks the data for analysis, or unlocks it. */
-export function setTrialStatus(trialId: number, status: 'locked' | 'active'): Promise<TrialDetail> {
-  return apiRequest<TrialDetail>(`/trials/${trialId}`, { method: 'PATCH', json: { status } });
+export function setTrialStatus(trialId: number, status: 'locked' | 'active') {
+  return unwrap(api.PATCH('/api/trials/{trialId}', { params: { path: { trialId } }, body: { status } }));
 }
 
 export function useSetTrialStatus(trialId: number) {
@@ -12,7 +12,7 @@ export function useSetTrialStatus(trialId: number) {
   return useMutation({
     mutationFn: (status: 'locked' | 'active') => setTrialStatus(trialId, status),
     onSuccess: async () => {
-      await queryClient.invalidateQueries({ queryKey: ['trials', trialId] });
+      await queryClient.invalidateQueries({ queryKey: trialQueryOptions(trialId).queryKey });
     },
   });
 }

@@ -1,7 +1,7 @@
 import { Button, Callout, Dialog, DialogBody } from '@blueprintjs/core';
 import type { Plot } from '@friable/contracts';
 import { ErrorState, LoadingState } from '../../../components/states';
-import { usePlotPhoto, usePutPlotPhoto } from '../api/plot-photo';
+import { usePlotPhoto, usePutPlotPhoto } from '../../../lib/api/plot-photo';
 
 /** The photo of one plot in this round, and a way to add or replace it (JPEG or PNG). */
 export function PhotoDialog({ trialId, roundId, roundLabel, plot, canEdit, onClose }: { trialId: number; roundId: number; roundLabel: string; plot: Plot | null; canEdit: boolean; onClose: () => void }) {

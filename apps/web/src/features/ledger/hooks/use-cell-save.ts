@@ -2,8 +2,8 @@ import type { Observation, ObservationEdit } from '@friable/contracts';
 import { useQueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
 import { ApiError } from '../../../lib/api-client';
-import { observationsQueryOptions } from '../api/get-observations';
-import { useSaveObservation } from '../api/save-observation';
+import { observationsQueryOptions } from '../../../lib/api/get-observations';
+import { useSaveObservation } from '../../../lib/api/save-observation';
 import { cellKey } from '../components/ledger-cells';
 
 export interface CellTarget {

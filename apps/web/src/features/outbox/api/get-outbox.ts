@@ -1,10 +1,9 @@
-import type { OutboxMessage } from '@friable/contracts';
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { apiRequest } from '../../../lib/api-client';
+import { api, unwrap } from '../../../lib/api-client';
 
 /** GET /api/dev/outbox — e-mails the local SMTP sink caught, newest first (administrators; 404 in production). */
-export function getOutbox(): Promise<OutboxMessage[]> {
-  return apiRequest<OutboxMessage[]>('/dev/outbox');
+export function getOutbox() {
+  return unwrap(api.GET('/api/dev/outbox'));
 }
 
 export const outboxQueryOptions = () => queryOptions({ queryKey: ['dev', 'outbox'], queryFn: getOutbox, retry: false });

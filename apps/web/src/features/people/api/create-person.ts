@@ -1,18 +1,13 @@
-import type { PublicUser } from '@friable/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { apiRequest } from '../../../lib/api-client';
+import { api, unwrap } from '../../../lib/api-client';
+import type { components } from '../../../lib/api-schema';
 import { peopleQueryOptions } from './get-people';
 
-export interface PersonInput {
-  email: string;
-  name: string;
-  password: string;
-  isAdmin: boolean;
-}
+export type PersonInput = components['schemas']['CreateUserDto'];
 
 /** POST /api/users: a new account (409 when the e-mail is taken, 422 naming a bad field). */
-export function createPerson(input: PersonInput): Promise<PublicUser> {
-  return apiRequest<PublicUser>('/users', { method: 'POST', json: input });
+export function createPerson(input: PersonInput) {
+  return unwrap(api.POST('/api/users', { body: input }));
 }
 
 export function useCreatePerson() {

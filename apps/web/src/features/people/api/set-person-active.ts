@@ -1,11 +1,11 @@
-import type { PublicUser } from '@friable/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { apiRequest } from '../../../lib/api-client';
+import { api, unwrap } from '../../../lib/api-client';
 import { peopleQueryOptions } from './get-people';
 
 /** POST /api/users/:userId/deactivate (signs the person out everywhere) or …/reactivate. */
-export function setPersonActive({ userId, active }: { userId: number; active: boolean }): Promise<PublicUser> {
-  return apiRequest<PublicUser>(`/users/${userId}/${active ? 'reactivate' : 'deactivate'}`, { method: 'POST' });
+export function setPersonActive({ userId, active }: { userId: number; active: boolean }) {
+  const options = { params: { path: { userId } } };
+  return unwrap(active ? api.POST('/api/users/{userId}/reactivate', options) : api.POST('/api/users/{userId}/deactivate', options));
 }
 
 export function useSetPersonActive() {

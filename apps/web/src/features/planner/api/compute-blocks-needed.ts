@@ -1,16 +1,10 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { apiRequest } from '../../../lib/api-client';
+import { api, unwrap } from '../../../lib/api-client';
 import type { PlannerQuestion } from './compute-power';
 
-/** The smallest number of blocks per site reaching the target power, and the power it gives. */
-export interface BlocksNeeded {
-  blocks: number;
-  power: number;
-}
-
-/** POST /api/stats/power with targetPower — the blocks per site needed (the server refuses, in words, past 100 blocks). */
-export function computeBlocksNeeded(question: PlannerQuestion, targetPower: number): Promise<BlocksNeeded> {
-  return apiRequest<BlocksNeeded>('/stats/power', { method: 'POST', json: { ...question, targetPower } });
+/** POST /api/stats/power with targetPower — the blocks per site needed and the power they give (the server refuses, in words, past 100 blocks). */
+export function computeBlocksNeeded(question: PlannerQuestion, targetPower: number) {
+  return unwrap(api.POST('/api/stats/power', { body: { ...question, targetPower } }));
 }
 
 export const blocksNeededQueryOptions = (question: PlannerQuestion, targetPower: number) =>

@@ -1,5 +1,5 @@
 import { queryOptions, useQueries } from '@tanstack/react-query';
-import { apiRequest } from '../../../lib/api-client';
+import { api, unwrap } from '../../../lib/api-client';
 
 /** What the Planner asks about: a randomized complete block trial repeated at `sites` sites. */
 export interface PlannerQuestion {
@@ -12,18 +12,9 @@ export interface PlannerQuestion {
   sites: number;
 }
 
-/** The power of the treatment F test with `blocks` blocks per site, and the F distribution it used. */
-export interface PowerAtBlocks {
-  blocks: number;
-  power: number;
-  noncentrality: number;
-  df1: number;
-  df2: number;
-}
-
-/** POST /api/stats/power with blocks — the power of the treatment F test for that many blocks per site. */
-export function computePower(question: PlannerQuestion, blocks: number): Promise<PowerAtBlocks> {
-  return apiRequest<PowerAtBlocks>('/stats/power', { method: 'POST', json: { ...question, blocks } });
+/** POST /api/stats/power with blocks — the power of the treatment F test for that many blocks per site, and the F distribution it used. */
+export function computePower(question: PlannerQuestion, blocks: number) {
+  return unwrap(api.POST('/api/stats/power', { body: { ...question, blocks } }));
 }
 
 /** The same numbers always give the same power, so an answer is kept like a read. */

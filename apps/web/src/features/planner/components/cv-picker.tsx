@@ -2,8 +2,8 @@ import { Callout, HTMLSelect } from '@blueprintjs/core';
 import type { TrialSummary } from '@friable/contracts';
 import { useQueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
-import { savedAnalysisQueryOptions } from '../api/get-saved-analysis';
-import { useSavedAnalyses } from '../api/get-saved-analyses';
+import { analysisQueryOptions } from '../../../lib/api/get-analysis';
+import { useAnalyses } from '../../../lib/api/get-analyses';
 
 /** Where a CV came from, in words, with a caution when it is not on the measure's own scale. */
 export interface PickedCv {
@@ -17,13 +17,13 @@ export function CvPicker({ trials, onPick }: { trials: TrialSummary[]; onPick: (
   const queryClient = useQueryClient();
   const [trialId, setTrialId] = useState<number | undefined>();
   const [problem, setProblem] = useState<string | null>(null);
-  const analyses = useSavedAnalyses(trialId);
+  const analyses = useAnalyses(trialId);
 
   async function pick(analysisId: number) {
     if (!trialId || !analysisId) return;
     setProblem(null);
     try {
-      const snapshot = await queryClient.fetchQuery(savedAnalysisQueryOptions(trialId, analysisId));
+      const snapshot = await queryClient.fetchQuery({ ...analysisQueryOptions(trialId, analysisId), staleTime: Infinity });
       const transform = snapshot.choices.transform;
       onPick({
         // One decimal, as a person would type it.

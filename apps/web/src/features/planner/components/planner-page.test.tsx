@@ -2,7 +2,7 @@ import { blocksForPower, rcbdPower } from '@friable/stats';
 import { screen, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
-import { renderWithApp } from '../../../test/render';
+import { jsonReply, readRequest, renderWithApp } from '../../../test/render';
 import { PlannerPage } from './planner-page';
 
 // Plotly needs a real browser; the curve's points are what this page hands it.
@@ -27,11 +27,12 @@ function powerServer(refuse?: { status: number; body: unknown }, reads: Record<s
   vi.stubGlobal(
     'fetch',
     vi.fn(async (input: RequestInfo | URL, init?: RequestInit) => {
-      const reply = (status: number, body: unknown) => new Response(JSON.stringify(body), { status, headers: { 'Content-Type': 'application/json' } });
-      if (String(input) === '/api/auth/me') return reply(200, person);
-      if (String(input) in reads) return reply(200, reads[String(input)]);
-      if (String(input) !== '/api/stats/power' || init?.method !== 'POST') return reply(404, { message: 'no such mock' });
-      const body = JSON.parse(String(init.body)) as PowerBody;
+      const reply = jsonReply;
+      const seen = await readRequest(input, init);
+      if (seen.path === '/api/auth/me') return reply(200, person);
+      if (seen.path in reads) return reply(200, reads[seen.path]);
+      if (seen.path !== '/api/stats/power' || seen.method !== 'POST') return reply(404, { message: 'no such mock' });
+      const body = seen.body as PowerBody;
       bodies.push(body);
       if (refuse) return reply(refuse.status, refuse.body);
       if (body.blocks !== undefined) return reply(200, { ...rcbdPower({ ...body, blocks: body.blocks }), blocks: body.blocks });

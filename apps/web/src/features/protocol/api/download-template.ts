@@ -1,5 +1,5 @@
 import { useMutation } from '@tanstack/react-query';
-import { apiDownload } from '../../../lib/api-client';
+import { api, saveFile } from '../../../lib/api-client';
 
 export interface TemplateRequest {
   trialId: number;
@@ -11,7 +11,7 @@ export interface TemplateRequest {
 
 /** GET /api/trials/:trialId/sites/:siteId/rounds/:roundId/template.csv, saved under the server's file name. */
 export function downloadTemplate({ trialId, siteId, roundId, fileName }: TemplateRequest): Promise<void> {
-  return apiDownload(`/trials/${trialId}/sites/${siteId}/rounds/${roundId}/template.csv`, fileName);
+  return saveFile(api.GET('/api/trials/{trialId}/sites/{siteId}/rounds/{roundId}/template.csv', { params: { path: { trialId, siteId, roundId } }, parseAs: 'blob' }), fileName);
 }
 
 export function useDownloadTemplate() {

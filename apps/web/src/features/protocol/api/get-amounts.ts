@@ -1,10 +1,9 @@
-import type { PlotAmount } from '@friable/contracts';
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { apiRequest } from '../../../lib/api-client';
+import { api, unwrap } from '../../../lib/api-client';
 
 /** GET /api/trials/:trialId/amounts — each treatment's material per plot at each site, and the site totals. */
-export function getAmounts(trialId: number): Promise<PlotAmount[]> {
-  return apiRequest<PlotAmount[]>(`/trials/${trialId}/amounts`);
+export function getAmounts(trialId: number) {
+  return unwrap(api.GET('/api/trials/{trialId}/amounts', { params: { path: { trialId } } }));
 }
 
 export const amountsQueryOptions = (trialId: number) => queryOptions({ queryKey: ['trials', trialId, 'amounts'], queryFn: () => getAmounts(trialId) });

@@ -1,7 +1,5 @@
-import type { Site } from '@friable/contracts';
-import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { apiRequest } from '../../../lib/api-client';
-import { trialQueryOptions } from './get-trial';
+import { api, unwrap } from '../../../lib/api-client';
+import { useProtocolMutation } from './use-protocol-mutation';
 
 export interface RandomizeSite {
   siteId: number;
@@ -10,15 +8,11 @@ export interface RandomizeSite {
 }
 
 /** POST /api/trials/:trialId/sites/:siteId/randomize — lays out (or lays out again) the site's plots; answers with the site. */
-export function randomizeSite(trialId: number, { siteId, seed }: RandomizeSite): Promise<Site> {
-  return apiRequest<Site>(`/trials/${trialId}/sites/${siteId}/randomize`, { method: 'POST', json: seed ? { seed } : {} });
+export function randomizeSite(trialId: number, { siteId, seed }: RandomizeSite) {
+  return unwrap(api.POST('/api/trials/{trialId}/sites/{siteId}/randomize', { params: { path: { trialId, siteId } }, body: seed ? { seed } : {} }));
 }
 
+/** The trial key is the prefix of the plots and amounts keys, so all three load again. */
 export function useRandomizeSite(trialId: number) {
-  const queryClient = useQueryClient();
-  return useMutation({
-    mutationFn: (input: RandomizeSite) => randomizeSite(trialId, input),
-    // The trial key is the prefix of the plots and amounts keys, so all three load again.
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: trialQueryOptions(trialId).queryKey }),
-  });
+  return useProtocolMutation(trialId, (input: RandomizeSite) => randomizeSite(trialId, input));
 }

@@ -1,19 +1,16 @@
-import type { AssessmentRound, RoundInput } from '@friable/contracts';
-import { apiRequest } from '../../../lib/api-client';
+import type { RoundInput } from '@friable/contracts';
+import { api, unwrap } from '../../../lib/api-client';
 import { useProtocolMutation } from './use-protocol-mutation';
 
-export interface SaveRound {
-  roundId?: number;
-  input: RoundInput;
-}
-
-/** POST /api/trials/:trialId/rounds, or PATCH …/rounds/:roundId. */
-export function saveRound(trialId: number, { roundId, input }: SaveRound): Promise<AssessmentRound> {
-  return roundId
-    ? apiRequest<AssessmentRound>(`/trials/${trialId}/rounds/${roundId}`, { method: 'PATCH', json: input })
-    : apiRequest<AssessmentRound>(`/trials/${trialId}/rounds`, { method: 'POST', json: input });
+/** POST /api/trials/:trialId/rounds, or PATCH …/rounds/:id when `roundId` is given. */
+export function saveRound(trialId: number, { roundId, input }: { roundId?: number; input: RoundInput }) {
+  return unwrap(
+    roundId
+      ? api.PATCH('/api/trials/{trialId}/rounds/{id}', { params: { path: { trialId, id: roundId } }, body: input })
+      : api.POST('/api/trials/{trialId}/rounds', { params: { path: { trialId } }, body: input }),
+  );
 }
 
 export function useSaveRound(trialId: number) {
-  return useProtocolMutation(trialId, (save: SaveRound) => saveRound(trialId, save));
+  return useProtocolMutation(trialId, (save: Parameters<typeof saveRound>[1]) => saveRound(trialId, save));
 }

@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { trialQueryOptions } from './get-trial';
+import { trialQueryOptions } from '../../../lib/api/get-trial';
 
 /**
  * A change to a trial's protocol: after it succeeds the whole trial (and what hangs off it: plots,

@@ -1,11 +1,11 @@
 import { Checkbox, HTMLSelect, InputGroup } from '@blueprintjs/core';
-import { MEASURE_KINDS, type Measure, type MeasureInput, type MeasureKind, type TrialDetail } from '@friable/contracts';
+import { MEASURE_KINDS, type Measure, type MeasureKind, type TrialDetail } from '@friable/contracts';
 import { useState } from 'react';
 import { Field, parseNumberFields } from '../../../components/field-errors';
 import { FormDialog } from '../../../components/form-dialog';
 import { NumberText } from '../../../components/number-text';
 import { measureKindLabels, numberInputText } from '../../../lib/format';
-import { useSaveMeasure } from '../api/save-measure';
+import { useSaveMeasure, type MeasureBody, type MeasureUnitId } from '../api/save-measure';
 import { measureUnitGroups, unitSymbol } from './measure-units';
 
 const shownFields = ['code', 'name', 'unit', 'kind', 'scaleMin', 'scaleMax', 'cutoff', 'plausibleMin', 'plausibleMax', 'hardMin', 'hardMax', 'decimals', 'higherIsBetter'];
@@ -26,7 +26,7 @@ export function MeasureDialog({ trial, measure, onClose }: { trial: TrialDetail;
   const [localError, setLocalError] = useState<Error | null>(null);
   const [code, setCode] = useState(measure?.code ?? '');
   const [name, setName] = useState(measure?.name ?? '');
-  const [unit, setUnit] = useState(measure?.unit ?? 's');
+  const [unit, setUnit] = useState<MeasureUnitId>((measure?.unit as MeasureUnitId | undefined) ?? 's');
   const [kind, setKind] = useState<MeasureKind>(measure?.kind ?? 'continuous');
   const [texts, setTexts] = useState({
     scaleMin: numberInputText(measure?.scaleMin),
@@ -48,7 +48,7 @@ export function MeasureDialog({ trial, measure, onClose }: { trial: TrialDetail;
     setLocalError(parsed.error);
     if (parsed.error) return;
     const v = parsed.values;
-    const input: MeasureInput = {
+    const input: MeasureBody = {
       code: code.trim(),
       name: name.trim(),
       unit,
@@ -78,7 +78,7 @@ export function MeasureDialog({ trial, measure, onClose }: { trial: TrialDetail;
           </div>
           <div className="fr-form-row">
             <Field label="Unit" field="unit" error={error}>
-              <HTMLSelect id="fr-field-unit" value={unit} onChange={(e) => setUnit(e.target.value)} fill>
+              <HTMLSelect id="fr-field-unit" value={unit} onChange={(e) => setUnit(e.target.value as MeasureUnitId)} fill>
                 {measureUnitGroups.map((group) => (
                   <optgroup key={group.dimension} label={group.dimension}>
                     {group.units.map((u) => (

@@ -6,7 +6,7 @@ import { SafetyCautions } from '../../../components/safety-cautions';
 import { EmptyState, ErrorState, LoadingState } from '../../../components/states';
 import { formatArea, formatNumber } from '../../../lib/format';
 import { useAmounts } from '../api/get-amounts';
-import { usePlots } from '../api/get-plots';
+import { useSitePlots } from '../../../lib/api/get-site-plots';
 import { SiteSheets } from './data-sheets';
 import { PlotLegend, PlotMap } from './plot-map';
 import { SiteAmounts } from './site-amounts';
@@ -23,7 +23,7 @@ function chooseSite(trial: TrialDetail, requested: string | null): Site | undefi
 export function PlotPlanPage({ trial }: { trial: TrialDetail }) {
   const [params, setParams] = useSearchParams();
   const site = chooseSite(trial, params.get('site'));
-  const plots = usePlots(trial.id, site?.randomizedAt ? site.id : undefined);
+  const plots = useSitePlots(trial.id, site?.randomizedAt ? site.id : undefined);
   const amounts = useAmounts(trial.id);
   const swatches = useMemo(() => treatmentSwatches(trial.treatments), [trial.treatments]);
   const [printLayout, setPrintLayout] = useState(false);

@@ -6,7 +6,7 @@ import { Field, parseNumberFields } from '../../../components/field-errors';
 import { FormDialog } from '../../../components/form-dialog';
 import { NumberText } from '../../../components/number-text';
 import { formatArea, numberInputText, parseNumberInput } from '../../../lib/format';
-import { useMembers } from '../api/get-members';
+import { useMembers } from '../../../lib/api/get-members';
 import { useSaveSite } from '../api/save-site';
 
 const shownFields = ['name', 'location', 'soilDescription', 'shape', 'lengthM', 'widthM', 'diameterCm', 'containerDepthCm', 'soilVolumeL', 'blocks', 'labelPrefix', 'leadUserId'];
@@ -29,7 +29,7 @@ function previewArea(shape: 'rectangle' | 'round', length: string, width: string
 /** Add or change a site: where it is, the soil, each plot's size and shape, the blocks and who leads it. */
 export function SiteDialog({ trial, site, onClose }: { trial: TrialDetail; site: Site | null; onClose: () => void }) {
   const save = useSaveSite(trial.id);
-  const members = useMembers(trial.id, true);
+  const members = useMembers(trial.id);
   const [localError, setLocalError] = useState<Error | null>(null);
   const [name, setName] = useState(site?.name ?? '');
   const [location, setLocation] = useState(site?.location ?? '');

@@ -1,10 +1,10 @@
-import type { DoseAnswer, DoseRequest } from '@friable/contracts';
+import type { DoseRequest } from '@friable/contracts';
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
-import { apiRequest } from '../../../lib/api-client';
+import { api, unwrap } from '../../../lib/api-client';
 
 /** POST /api/rates/dose — the server's Rate calculator (the same arithmetic as @friable/field). */
-export function computeDoseOnServer(request: DoseRequest): Promise<DoseAnswer> {
-  return apiRequest<DoseAnswer>('/rates/dose', { method: 'POST', json: request });
+export function computeDoseOnServer(request: DoseRequest) {
+  return unwrap(api.POST('/api/rates/dose', { body: request }));
 }
 
 /** Asking twice with the same numbers gives the same answer, so the answer is cached like a read. */

@@ -1,10 +1,10 @@
-import type { InvitationAcceptInput, InvitationAcceptResponse } from '@friable/contracts';
+import type { InvitationAcceptInput } from '@friable/contracts';
 import { useMutation } from '@tanstack/react-query';
-import { apiRequest } from '../../../lib/api-client';
+import { api, unwrap } from '../../../lib/api-client';
 
 /** POST /api/invitations/:token/accept — joins the trial and answers with a signed-in session. */
-export function acceptInvitation(token: string, input: InvitationAcceptInput): Promise<InvitationAcceptResponse> {
-  return apiRequest<InvitationAcceptResponse>(`/invitations/${encodeURIComponent(token)}/accept`, { method: 'POST', json: input });
+export function acceptInvitation(token: string, input: InvitationAcceptInput) {
+  return unwrap(api.POST('/api/invitations/{token}/accept', { params: { path: { token } }, body: input }));
 }
 
 export function useAcceptInvitation(token: string) {

@@ -1,13 +1,13 @@
-import type { Invitation } from '@friable/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { apiRequest } from '../../../lib/api-client';
+import { api, unwrap } from '../../../lib/api-client';
 import { invitationsQueryOptions } from './get-invitations';
 
 /** POST …/invitations/:id/resend (a new link; the old one stops working) or DELETE …/invitations/:id (withdraw). */
-export function changeInvitation(trialId: number, invitationId: number, change: 'resend' | 'revoke'): Promise<Invitation> {
-  return change === 'resend'
-    ? apiRequest<Invitation>(`/trials/${trialId}/invitations/${invitationId}/resend`, { method: 'POST' })
-    : apiRequest<Invitation>(`/trials/${trialId}/invitations/${invitationId}`, { method: 'DELETE' });
+export function changeInvitation(trialId: number, invitationId: number, change: 'resend' | 'revoke') {
+  const options = { params: { path: { trialId, invitationId } } };
+  return unwrap(
+    change === 'resend' ? api.POST('/api/trials/{trialId}/invitations/{invitationId}/resend', options) : api.DELETE('/api/trials/{trialId}/invitations/{invitationId}', options),
+  );
 }
 
 export function useChangeInvitation(trialId: number) {

@@ -1,11 +1,11 @@
-import type { Invitation, InvitationInput } from '@friable/contracts';
+import type { InvitationInput } from '@friable/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { apiRequest } from '../../../lib/api-client';
+import { api, unwrap } from '../../../lib/api-client';
 import { invitationsQueryOptions } from './get-invitations';
 
 /** POST /api/trials/:trialId/invitations — saves the invitation and e-mails the link. */
-export function createInvitation(trialId: number, input: InvitationInput): Promise<Invitation> {
-  return apiRequest<Invitation>(`/trials/${trialId}/invitations`, { method: 'POST', json: input });
+export function createInvitation(trialId: number, input: InvitationInput) {
+  return unwrap(api.POST('/api/trials/{trialId}/invitations', { params: { path: { trialId } }, body: input }));
 }
 
 export function useCreateInvitation(trialId: number) {

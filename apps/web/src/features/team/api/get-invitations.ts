@@ -1,10 +1,9 @@
-import type { Invitation } from '@friable/contracts';
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { apiRequest } from '../../../lib/api-client';
+import { api, unwrap } from '../../../lib/api-client';
 
 /** GET /api/trials/:trialId/invitations — every invitation, newest first (investigators only). */
-export function getInvitations(trialId: number): Promise<Invitation[]> {
-  return apiRequest<Invitation[]>(`/trials/${trialId}/invitations`);
+export function getInvitations(trialId: number) {
+  return unwrap(api.GET('/api/trials/{trialId}/invitations', { params: { path: { trialId } } }));
 }
 
 export const invitationsQueryOptions = (trialId: number) =>

@@ -4,7 +4,8 @@ import { Link } from 'react-router-dom';
 import { Field, FormErrorCallout } from '../../../components/field-errors';
 import { LoadingState } from '../../../components/states';
 import { paths } from '../../../config/paths';
-import { ApiError, tokenStore } from '../../../lib/api-client';
+import { ApiError } from '../../../lib/api-client';
+import { session } from '../../../lib/session';
 import { formatDate, roleLabels } from '../../../lib/format';
 import { useAcceptInvitation } from '../api/accept-invitation';
 import { useInvitationPreview } from '../api/get-invitation-preview';
@@ -27,7 +28,7 @@ export function AcceptInvitationPage({ token, onJoined = openTrial }: { token: s
     const existing = preview.data?.accountExists;
     accept.mutate(existing ? { password } : { name: name.trim(), password }, {
       onSuccess: (response) => {
-        tokenStore.set(response.accessToken);
+        session.open(response);
         onJoined(paths.trial.href(response.trialId));
       },
     });

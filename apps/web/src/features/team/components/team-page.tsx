@@ -2,7 +2,7 @@ import { Callout, H3, HTMLTable, Tag } from '@blueprintjs/core';
 import type { Member, TrialDetail } from '@friable/contracts';
 import { EmptyState, ErrorState, LoadingState } from '../../../components/states';
 import { formatDate, roleLabels } from '../../../lib/format';
-import { useMembers } from '../api/get-members';
+import { useMembers } from '../../../lib/api/get-members';
 import { InvitationsList } from './invitations-list';
 import { InviteForm } from './invite-form';
 

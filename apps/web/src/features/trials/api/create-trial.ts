@@ -1,11 +1,11 @@
-import type { TrialCreateInput, TrialDetail } from '@friable/contracts';
+import type { TrialCreateInput } from '@friable/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { apiRequest } from '../../../lib/api-client';
+import { api, unwrap } from '../../../lib/api-client';
 import { trialsQueryOptions } from './get-trials';
 
 /** POST /api/trials — a new draft trial; the caller becomes its investigator. */
-export function createTrial(input: TrialCreateInput): Promise<TrialDetail> {
-  return apiRequest<TrialDetail>('/trials', { method: 'POST', json: input });
+export function createTrial(input: TrialCreateInput) {
+  return unwrap(api.POST('/api/trials', { body: input }));
 }
 
 export function useCreateTrial() {

@@ -1,9 +1,9 @@
-import type { TrialSummary } from '@friable/contracts';
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { apiRequest } from '../../../lib/api-client';
+import { api, unwrap } from '../../../lib/api-client';
 
-export function getTrials(): Promise<TrialSummary[]> {
-  return apiRequest<TrialSummary[]>('/trials');
+/** GET /api/trials — the caller's trials (every trial for an administrator). */
+export function getTrials() {
+  return unwrap(api.GET('/api/trials'));
 }
 
 export const trialsQueryOptions = () => queryOptions({ queryKey: ['trials'], queryFn: getTrials });

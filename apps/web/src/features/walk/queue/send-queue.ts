@@ -1,6 +1,8 @@
 import type { Observation } from '@friable/contracts';
-import { ApiError, apiRequest } from '../../../lib/api-client';
-import { sendObservation, sendPlotPhoto } from '../api/walk-observations';
+import { ApiError } from '../../../lib/api-client';
+import { getObservations } from '../../../lib/api/get-observations';
+import { putPlotPhoto } from '../../../lib/api/plot-photo';
+import { saveObservation } from '../../../lib/api/save-observation';
 import { fieldQueue, type FieldQueueDatabase, type QueuedValue } from './field-queue';
 
 export interface SendReport {
@@ -19,17 +21,20 @@ const isUnusual = (error: ApiError) => error.status === 422 && /acceptWarnings|u
 const mustStop = (error: unknown) => !(error instanceof ApiError) || error.status === 0 || error.status === 401 || error.status >= 500;
 
 async function currentValue(entry: QueuedValue): Promise<Observation | undefined> {
-  const stored = await apiRequest<Observation[]>(`/trials/${entry.trialId}/observations?siteId=${entry.siteId}&roundId=${entry.roundId}&measureId=${entry.measureId}`);
+  const stored = await getObservations(entry.trialId, entry.siteId, entry.roundId, entry.measureId);
   return stored.find((o) => o.plotId === entry.plotId && o.measureId === entry.measureId);
 }
 
 async function sendValue(entry: QueuedValue, db: FieldQueueDatabase, report: SendReport): Promise<boolean> {
   try {
-    const saved = await sendObservation(
-      entry.trialId,
-      { observationId: entry.seen.observationId, plotId: entry.plotId, roundId: entry.roundId, measureId: entry.measureId },
-      { version: entry.seen.version, value: entry.value, notes: entry.notes, missingReason: entry.missingReason, acceptWarnings: entry.acceptWarnings || undefined },
-    );
+    const saved = await saveObservation({
+      trialId: entry.trialId,
+      observationId: entry.seen.observationId,
+      plotId: entry.plotId,
+      roundId: entry.roundId,
+      measureId: entry.measureId,
+      edit: { version: entry.seen.version, value: entry.value, notes: entry.notes, missingReason: entry.missingReason, acceptWarnings: entry.acceptWarnings || undefined },
+    });
     // Only the entry that was sent goes: a newer value typed meanwhile stays to be sent next.
     await db.transaction('rw', db.values, async () => {
       const now = await db.values.get(entry.id!);
@@ -76,7 +81,7 @@ export async function sendWaiting(db: FieldQueueDatabase = fieldQueue): Promise<
   const photos = await db.photos.where('state').equals('waiting').sortBy('queuedAt');
   for (const photo of photos) {
     try {
-      await sendPlotPhoto(photo.trialId, photo.plotId, photo.roundId, new Blob([photo.bytes], { type: photo.contentType }), photo.fileName);
+      await putPlotPhoto({ trialId: photo.trialId, plotId: photo.plotId, roundId: photo.roundId, file: new Blob([photo.bytes], { type: photo.contentType }), fileName: photo.fileName });
       await db.photos.delete(photo.id!);
       report.photosSent += 1;
     } catch (error) {

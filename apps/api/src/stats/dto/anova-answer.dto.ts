@@ -1,0 +1,231 @@
+import type { AnovaAnswer, AnovaSummary, AnovaTableRow, LsMean, MeanPair, MethodComparisonSet, RankTestAnswer, ResidualPoint } from '@friable/contracts';
+import { ApiExtraModels, ApiProperty, ApiPropertyOptional, getSchemaPath } from '@nestjs/swagger';
+
+export class AnovaTableRowDto implements AnovaTableRow {
+  @ApiProperty({ description: "'block', 'treatment', 'site', 'block:site', 'site:treatment', factor names and 'A:B', 'error', 'total'." })
+  term: string;
+
+  @ApiProperty()
+  df: number;
+
+  @ApiProperty()
+  ss: number;
+
+  @ApiProperty({ type: Number, nullable: true, description: 'Null where the term is not tested.' })
+  ms: number | null;
+
+  @ApiProperty({ type: Number, nullable: true })
+  f: number | null;
+
+  @ApiProperty({ type: Number, nullable: true })
+  p: number | null;
+}
+
+export class AnovaSummaryDto implements AnovaSummary {
+  @ApiProperty()
+  n: number;
+
+  @ApiProperty()
+  grandMean: number;
+
+  @ApiProperty({ description: 'Coefficient of variation, % (100 × root MSE / grand mean).' })
+  cv: number;
+
+  @ApiProperty()
+  rootMse: number;
+
+  @ApiProperty()
+  errorDf: number;
+}
+
+export class LsMeanDto implements LsMean {
+  @ApiProperty()
+  treatment: string;
+
+  @ApiProperty()
+  n: number;
+
+  @ApiProperty()
+  mean: number;
+
+  @ApiProperty()
+  se: number;
+
+  @ApiPropertyOptional({ description: 'With a transform: the mean back on the original scale.' })
+  backTransformedMean?: number;
+}
+
+export class MeanPairDto implements MeanPair {
+  @ApiProperty()
+  a: string;
+
+  @ApiProperty()
+  b: string;
+
+  @ApiProperty({ description: 'mean a − mean b' })
+  diff: number;
+
+  @ApiProperty()
+  se: number;
+
+  @ApiProperty()
+  lower: number;
+
+  @ApiProperty()
+  upper: number;
+
+  @ApiProperty({ description: 'Unadjusted for LSD, adjusted otherwise.' })
+  p: number;
+
+  @ApiProperty()
+  significant: boolean;
+}
+
+export class MethodComparisonSetDto implements MethodComparisonSet {
+  @ApiProperty({ type: Number, nullable: true, description: "On the scale of diff/se: t (LSD), q/√2 (Tukey), Dunnett's d, Bonferroni t; null for Holm." })
+  critical: number | null;
+
+  @ApiProperty({ type: Number, nullable: true, description: 'critical × se when every pair has the same se, else null.' })
+  leastSignificantDifference: number | null;
+
+  @ApiProperty({ type: [MeanPairDto] })
+  pairs: MeanPairDto[];
+}
+
+export class ComparisonsByMethodDto {
+  @ApiPropertyOptional({ type: MethodComparisonSetDto })
+  lsd?: MethodComparisonSetDto;
+
+  @ApiPropertyOptional({ type: MethodComparisonSetDto })
+  tukey?: MethodComparisonSetDto;
+
+  @ApiPropertyOptional({ type: MethodComparisonSetDto })
+  dunnett?: MethodComparisonSetDto;
+
+  @ApiPropertyOptional({ type: MethodComparisonSetDto })
+  bonferroni?: MethodComparisonSetDto;
+
+  @ApiPropertyOptional({ type: MethodComparisonSetDto })
+  holm?: MethodComparisonSetDto;
+}
+
+const lettersByTreatment = { type: 'object', additionalProperties: { type: 'string' }, description: 'Treatment → compact letters ("a", "ab", …).' } as const;
+
+export class LettersByMethodDto {
+  @ApiPropertyOptional(lettersByTreatment)
+  lsd?: Record<string, string>;
+
+  @ApiPropertyOptional(lettersByTreatment)
+  tukey?: Record<string, string>;
+
+  @ApiPropertyOptional(lettersByTreatment)
+  bonferroni?: Record<string, string>;
+
+  @ApiPropertyOptional(lettersByTreatment)
+  holm?: Record<string, string>;
+}
+
+export class ShapiroWilkDto {
+  @ApiProperty()
+  w: number;
+
+  @ApiProperty()
+  p: number;
+}
+
+export class BrownForsytheDto {
+  @ApiProperty()
+  f: number;
+
+  @ApiProperty()
+  p: number;
+}
+
+export class BartlettDto {
+  @ApiProperty()
+  statistic: number;
+
+  @ApiProperty()
+  p: number;
+}
+
+export class ResidualPointDto implements ResidualPoint {
+  @ApiProperty({ description: 'Index of the observation in the list given to the engine.' })
+  index: number;
+
+  @ApiProperty()
+  fitted: number;
+
+  @ApiProperty()
+  residual: number;
+
+  @ApiProperty({ type: Number, nullable: true, description: 'Null for a plot with leverage 1.' })
+  standardized: number | null;
+
+  @ApiProperty({ description: '|standardized| > 3.' })
+  flagged: boolean;
+}
+
+export class DiagnosticsDto {
+  @ApiProperty({ type: ShapiroWilkDto, nullable: true, description: 'Null outside 3..5000 residuals.' })
+  shapiroWilk: ShapiroWilkDto | null;
+
+  @ApiProperty({ type: BrownForsytheDto, nullable: true, description: 'Null when a treatment has a single plot.' })
+  brownForsythe: BrownForsytheDto | null;
+
+  @ApiPropertyOptional({ type: BartlettDto, description: "Multisite only: Bartlett's test of the per-site error variances." })
+  bartlett?: BartlettDto;
+
+  @ApiProperty({ type: [ResidualPointDto] })
+  residuals: ResidualPointDto[];
+}
+
+/** The answer of POST /api/stats/anova, exactly as the engine gives it. */
+@ApiExtraModels(LsMeanDto)
+export class AnovaAnswerDto implements AnovaAnswer {
+  @ApiProperty({ type: [AnovaTableRowDto] })
+  anova: AnovaTableRowDto[];
+
+  @ApiProperty({ type: AnovaSummaryDto })
+  summary: AnovaSummaryDto;
+
+  @ApiProperty({ type: [LsMeanDto] })
+  means: LsMeanDto[];
+
+  @ApiPropertyOptional({
+    type: 'object',
+    additionalProperties: { type: 'array', items: { $ref: getSchemaPath(LsMeanDto) } },
+    description: "Factorial only: LS means of each factor's levels, by factor name.",
+  })
+  factorMeans?: Record<string, LsMeanDto[]>;
+
+  @ApiProperty({ type: ComparisonsByMethodDto })
+  comparisons: ComparisonsByMethodDto;
+
+  @ApiProperty({ type: LettersByMethodDto, description: 'Per method, treatment → compact letters.' })
+  letters: LettersByMethodDto;
+
+  @ApiProperty({ type: DiagnosticsDto })
+  diagnostics: DiagnosticsDto;
+
+  @ApiProperty({ type: [String], description: 'Plain sentences from the engine.' })
+  warnings: string[];
+}
+
+/** POST /api/stats/friedman and /api/stats/kruskal answers. */
+export class RankTestAnswerDto implements RankTestAnswer {
+  @ApiProperty()
+  statistic: number;
+
+  @ApiProperty()
+  df: number;
+
+  @ApiProperty()
+  p: number;
+
+  @ApiPropertyOptional({ description: 'Friedman only.' })
+  blocksUsed?: number;
+
+  @ApiPropertyOptional({ type: [String], description: 'Friedman only: incomplete blocks left out.' })
+  droppedBlocks?: string[];
+}
