@@ -189,3 +189,72 @@ export interface CountsAnswer {
   adjustment: string;
   warnings: string[];
 }
+
+// ---------------------------------------------------------------- POST /api/stats/repeated
+
+export const REPEATED_COVARIANCES = ['cs', 'ar1', 'unstructured', 'auto'] as const;
+export type RepeatedCovariance = (typeof REPEATED_COVARIANCES)[number];
+
+export interface RepeatedObservationInput {
+  treatment: string;
+  /** In a completely randomized trial the block names the replicate (a plot is site + block + treatment). */
+  block?: string;
+  site?: string;
+  round: string;
+  /** The round's day offset. */
+  time: number | string;
+  value: number | string;
+}
+
+export interface RepeatedRequest {
+  design: ModelDesign;
+  covariance: RepeatedCovariance;
+  control?: string;
+  observations: RepeatedObservationInput[];
+}
+
+export interface CovarianceChoice {
+  structure: 'cs' | 'ar1' | 'unstructured';
+  /** cs: plotVariance, residualVariance, correlation; ar1: variance, phi (correlation a day apart); unstructured: variance[round], covariance[round,round]. */
+  parameters: Record<string, number>;
+  logLik: number;
+  aic: number;
+}
+
+export interface RepeatedTermTestAnswer {
+  term: string;
+  numDf: number;
+  denDf: number;
+  f: number;
+  p: number;
+}
+
+export interface SplitPlotRowAnswer {
+  term: string;
+  stratum: 'between plots' | 'within plots';
+  df: number;
+  ss: number;
+  ms: number;
+  f: number | null;
+  p: number | null;
+  pGreenhouseGeisser?: number | null;
+  pHuynhFeldt?: number | null;
+}
+
+export interface RepeatedAnswer {
+  covariance: CovarianceChoice;
+  /** Every structure tried ('auto'), or the one asked for; one that could not be fitted says why. */
+  candidates: Array<CovarianceChoice | { structure: 'cs' | 'ar1' | 'unstructured'; unavailable: string }>;
+  /** Kenward–Roger F tests of treatment, round and treatment:round. */
+  anova: RepeatedTermTestAnswer[];
+  /** Treatment within each round (Kenward–Roger). */
+  byRound: Array<RepeatedTermTestAnswer & { round: string }>;
+  /** Of the split plot in time on complete plots; null when it cannot be computed. mauchlyW and p are null with two rounds. */
+  sphericity: { mauchlyW: number | null; chiSquare: number | null; df: number | null; p: number | null; greenhouseGeisser: number; huynhFeldt: number } | null;
+  splitPlot: { table: SplitPlotRowAnswer[]; plotsUsed: number; plotsLeftOut: number } | null;
+  /** Least-squares means per treatment and round with Kenward–Roger SEs and df. */
+  means: Array<{ treatment: string; round: string; mean: number; se: number; df: number }>;
+  rounds: Array<{ round: string; time: number }>;
+  plots: number;
+  warnings: string[];
+}
