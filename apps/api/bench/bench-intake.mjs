@@ -1,41 +1,85 @@
-// Intake benchmark: a 100,000-row CSV for one site and round of a scratch trial, committed through
-// the real IntakeService (parse, validate, plan, batched inserts in one transaction), then the same
-// rows loaded by MariaDB's own LOAD DATA LOCAL INFILE into a scratch copy of the observations table.
-// Prints both times and their ratio. Not a test: run `npm run build` first, then `npm run bench:intake`
-// (DB_NAME names the database; it must be migrated). Everything it creates is removed at the end.
+// Intake benchmark: CSV files of 100,000 and 1,000,000 rows for one site and round of a scratch trial,
+// uploaded over HTTP to a real API process (multipart to disk, streamed check, bulk write of values and
+// history in one transaction), beside MariaDB's own LOAD DATA LOCAL INFILE of the same rows into an
+// identical scratch copy of the observations table. Prints both times and their ratio, where the time
+// went (the import's own stages, followed as the browser follows them), the slowest /api/health answer
+// during the upload, and the API process's peak memory (VmHWM).
+// Not a test: run `npm run build` first, then `npm run bench:intake`. BENCH_ROWS=100000 runs one size.
+// Everything happens in a scratch database (<DB_NAME>_bench) that is dropped at the end.
+import { spawn } from 'node:child_process';
+import { randomUUID } from 'node:crypto';
 import { createRequire } from 'node:module';
-import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { mkdtempSync, openAsBlob, readFileSync, rmSync, statSync, writeFileSync, createWriteStream } from 'node:fs';
 import { tmpdir } from 'node:os';
-import { join } from 'node:path';
+import { join, resolve } from 'node:path';
 import { performance } from 'node:perf_hooks';
-import { loadEnvironment } from '../../devstack/src/env.mjs';
+import { setTimeout as sleep } from 'node:timers/promises';
+import { repoRoot } from '../../devstack/src/env.mjs';
+import { apiCommand, appEnvironment, startDatabase } from '../../devstack/src/prepare.mjs';
 
-const ROWS = Number(process.env.BENCH_ROWS ?? 100_000);
+const SIZES = process.env.BENCH_ROWS ? [Number(process.env.BENCH_ROWS)] : [100_000, 1_000_000];
 const PLOTS_PER_BLOCK = 100;
-Object.assign(process.env, { ...loadEnvironment(), ...process.env });
-process.env.JWT_SECRET ||= 'bench-only-secret-that-is-long-enough-0123456789';
-process.env.INTAKE_MAX_BYTES ||= String(20 * 1_048_576);
-
 const require = createRequire(import.meta.url);
-const { NestFactory } = require('@nestjs/core');
-const { getConnectionToken } = require('@nestjs/sequelize');
-const { QueryTypes } = require('sequelize');
 const mariadb = require('mariadb');
-const { AppModule } = require('../dist/app.module.js');
-const { IntakeService } = require('../dist/intake/intake.service.js');
+const bcrypt = require('bcryptjs');
 
+const base = appEnvironment();
+const env = appEnvironment({
+  DB_NAME: `${base.DB_NAME}_bench`,
+  PORT: base.BENCH_PORT || '3997',
+  NODE_ENV: 'production',
+  SCHEDULER_ENABLED: 'false',
+  INTAKE_MAX_BYTES: String(200 * 1_048_576),
+  // No mail sink runs here; the receipt fails quietly after the commit, as it would with a relay down.
+  SMTP_PORT: '9',
+});
+const url = `http://127.0.0.1:${env.PORT}`;
 const seconds = (ms) => `${(ms / 1000).toFixed(2)} s`;
-const tag = Math.random().toString(36).slice(2, 8).toUpperCase();
-
-const app = await NestFactory.createApplicationContext(AppModule, { logger: ['error'] });
-const sequelize = app.get(getConnectionToken());
-const insert = (sql, replacements) => sequelize.query(sql, { replacements, type: QueryTypes.INSERT }).then(([id]) => Number(id));
-const now = new Date();
-let trialId = null;
+const rows = (n) => n.toLocaleString('en');
+const megabytes = (bytes) => `${(bytes / 1_048_576).toFixed(0)} MB`;
 const work = mkdtempSync(join(tmpdir(), 'friable-bench-'));
-try {
-  const userId = await insert('INSERT INTO users (email, name, password_hash, created_at, updated_at) VALUES (?, ?, ?, ?, ?)', [`bench-${tag}@example.org`, 'Bench runner', 'x', now, now]);
-  trialId = await insert("INSERT INTO trials (code, title, status, created_by, created_at, updated_at) VALUES (?, 'Intake benchmark', 'active', ?, ?, ?)", [`BENCH-${tag}`, userId, now, now]);
+
+const db = await startDatabase(env, []);
+db.dropDatabase(env.DB_NAME);
+db.ensureDatabase(env.DB_NAME, env.DB_USER, env.DB_PASSWORD);
+apiCommand(env, ['migrate', 'up']);
+const connection = await mariadb.createConnection({
+  host: env.DB_HOST,
+  port: Number(env.DB_PORT),
+  user: env.DB_USER,
+  password: env.DB_PASSWORD,
+  database: env.DB_NAME,
+  permitLocalInfile: true,
+  timezone: '+00:00',
+});
+const api = spawn(process.execPath, [resolve(repoRoot, 'apps/api/dist/main.js')], { env, cwd: repoRoot, stdio: ['ignore', 'ignore', 'inherit'] });
+
+/** Peak resident memory of the API process so far (Linux /proc). */
+function peakMemory() {
+  const status = readFileSync(`/proc/${api.pid}/status`, 'utf8');
+  return Number(/VmHWM:\s+(\d+) kB/.exec(status)[1]) * 1024;
+}
+
+async function waitForApi() {
+  for (let attempt = 0; attempt < 240; attempt += 1) {
+    try {
+      if ((await fetch(`${url}/api/health`)).ok) return;
+    } catch {
+      // not listening yet
+    }
+    await sleep(250);
+  }
+  throw new Error('the API did not start');
+}
+
+async function scratchTrial(size, tag) {
+  const now = new Date();
+  const insert = async (sql, values) => Number((await connection.query(sql, values)).insertId);
+  const email = `bench-${tag}@example.org`;
+  const password = 'bench-password-0123';
+  const userId = await insert('INSERT INTO users (email, name, password_hash, is_admin, is_active, created_at, updated_at) VALUES (?, ?, ?, 0, 1, ?, ?)', [email, 'Bench runner', bcrypt.hashSync(password, 4), now, now]);
+  const trialId = await insert("INSERT INTO trials (code, title, status, created_by, created_at, updated_at) VALUES (?, 'Intake benchmark', 'active', ?, ?, ?)", [`BENCH-${tag}`, userId, now, now]);
+  await insert("INSERT INTO trial_memberships (trial_id, user_id, role, site_id, created_at, updated_at) VALUES (?, ?, 'investigator', NULL, ?, ?)", [trialId, userId, now, now]);
   const treatmentIds = [];
   for (const code of ['C', 'G', 'K', 'L']) treatmentIds.push(await insert('INSERT INTO treatments (trial_id, code, name, created_at, updated_at) VALUES (?, ?, ?, ?, ?)', [trialId, code, code, now, now]));
   const measureId = await insert(
@@ -44,81 +88,134 @@ try {
   );
   const roundId = await insert("INSERT INTO assessment_rounds (trial_id, label, day_offset, created_at, updated_at) VALUES (?, 'Day 0', 0, ?, ?)", [trialId, now, now]);
   await insert('INSERT INTO round_measures (round_id, measure_id) VALUES (?, ?)', [roundId, measureId]);
-  const blocks = Math.ceil(ROWS / PLOTS_PER_BLOCK);
+  const blocks = Math.ceil(size / PLOTS_PER_BLOCK);
   const siteId = await insert("INSERT INTO sites (trial_id, name, shape, blocks, label_prefix, randomized_at, created_at, updated_at) VALUES (?, 'Bench Garden', 'rectangle', ?, 'BG', ?, ?, ?)", [trialId, blocks, now, now, now]);
-  const labels = [];
-  for (let start = 0; start < ROWS; start += 5000) {
+  const labelOf = (index) => `BG-B${Math.floor(index / PLOTS_PER_BLOCK) + 1}-P${String((index % PLOTS_PER_BLOCK) + 1).padStart(3, '0')}`;
+  for (let start = 0; start < size; start += 5000) {
     const batch = [];
-    for (let index = start; index < Math.min(ROWS, start + 5000); index += 1) {
-      const block = Math.floor(index / PLOTS_PER_BLOCK) + 1;
-      const position = (index % PLOTS_PER_BLOCK) + 1;
-      const label = `BG-B${block}-P${String(position).padStart(3, '0')}`;
-      labels.push(label);
-      batch.push([trialId, siteId, block, position, treatmentIds[index % 4], label, now, now]);
+    for (let index = start; index < Math.min(size, start + 5000); index += 1) {
+      batch.push(trialId, siteId, Math.floor(index / PLOTS_PER_BLOCK) + 1, (index % PLOTS_PER_BLOCK) + 1, treatmentIds[index % 4], labelOf(index), now, now);
     }
-    await sequelize.query(`INSERT INTO plots (trial_id, site_id, block, position, treatment_id, label, created_at, updated_at) VALUES ${batch.map(() => '(?,?,?,?,?,?,?,?)').join(',')}`, {
-      replacements: batch.flat(),
-      type: QueryTypes.INSERT,
-    });
+    await connection.query(`INSERT INTO plots (trial_id, site_id, block, position, treatment_id, label, created_at, updated_at) VALUES ${'(?,?,?,?,?,?,?,?),'.repeat(batch.length / 8).slice(0, -1)}`, batch);
   }
-  // Values with one decimal, as typed on a data sheet: 50.0 to 449.9 mL.
-  const values = labels.map((_, index) => `${50 + (index * 37) % 400}.${index % 10}`);
-  const csv = Buffer.from(`plot label,water retained (mL)\r\n${labels.map((label, index) => `${label},${values[index]}\r\n`).join('')}`);
+  return { email, password, userId, trialId, siteId, roundId, measureId, labelOf };
+}
 
-  const intake = app.get(IntakeService);
-  const access = { trialId, roles: ['investigator'], siteIds: [], adminReadOnly: false };
-  const user = { id: userId, email: `bench-${tag}@example.org`, name: 'Bench runner', isAdmin: false };
+/** Values with one decimal, as typed on a data sheet: 50.0 to 449.9 mL. */
+const valueOf = (index) => `${50 + ((index * 37) % 400)}.${index % 10}`;
+
+async function writeFile(path, size, line) {
+  const out = createWriteStream(path);
+  let chunk = '';
+  for (let index = 0; index < size; index += 1) {
+    chunk += line(index);
+    if (chunk.length > 1_000_000) {
+      if (!out.write(chunk)) await new Promise((done) => out.once('drain', done));
+      chunk = '';
+    }
+  }
+  out.end(chunk);
+  await new Promise((done) => out.once('finish', done));
+}
+
+async function measure(size) {
+  const tag = Math.random().toString(36).slice(2, 8).toUpperCase();
+  const trial = await scratchTrial(size, tag);
+  const csvPath = join(work, `bench-${size}.csv`);
+  await writeFile(csvPath, size, (index) => `${index === 0 ? 'plot label,water retained (mL)\r\n' : ''}${trial.labelOf(index)},${valueOf(index)}\r\n`);
+  const login = await (await fetch(`${url}/api/auth/login`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ email: trial.email, password: trial.password }) })).json();
+  const auth = { Authorization: `Bearer ${login.accessToken}` };
+
+  // Follow the import as the browser does, and keep asking /api/health meanwhile.
+  const ticket = randomUUID();
+  const stages = [];
+  let healthWorst = 0;
+  let healthAnswers = 0;
+  let running = true;
+  const follow = (async () => {
+    while (running) {
+      const response = await fetch(`${url}/api/trials/${trial.trialId}/intake-imports/${ticket}`, { headers: auth });
+      if (response.ok) {
+        const record = await response.json();
+        if (stages.at(-1)?.stage !== record.stage) stages.push({ stage: record.stage, at: performance.now() });
+      }
+      await sleep(50);
+    }
+  })();
+  const health = (async () => {
+    while (running) {
+      const asked = performance.now();
+      await fetch(`${url}/api/health`);
+      healthWorst = Math.max(healthWorst, performance.now() - asked);
+      healthAnswers += 1;
+      await sleep(100);
+    }
+  })();
+
+  const form = new FormData();
+  form.append('ticket', ticket);
+  form.append('file', await openAsBlob(csvPath), 'bench.csv');
   const started = performance.now();
-  const result = await intake.intake(access, user, siteId, roundId, { bytes: csv, fileName: 'bench.csv' }, { dryRun: false, acceptWarnings: true, receipt: false });
+  const response = await fetch(`${url}/api/trials/${trial.trialId}/sites/${trial.siteId}/rounds/${trial.roundId}/intake`, { method: 'POST', headers: auth, body: form });
+  const body = await response.json();
   const intakeMs = performance.now() - started;
-  const [{ n }] = await sequelize.query('SELECT COUNT(*) AS n FROM observations WHERE trial_id = ?', { replacements: [trialId], type: QueryTypes.SELECT });
-  if (Number(n) !== ROWS || result.created !== ROWS) throw new Error(`expected ${ROWS} observations, found ${n} (created ${result.created})`);
+  running = false;
+  await Promise.all([follow, health]);
+  if (response.status !== 200) throw new Error(`the upload answered ${response.status}: ${JSON.stringify(body).slice(0, 500)}`);
+  const [{ n }] = await connection.query('SELECT COUNT(*) AS n FROM observations WHERE trial_id = ?', [trial.trialId]);
+  const [{ h }] = await connection.query('SELECT COUNT(*) AS h FROM observation_changes WHERE trial_id = ?', [trial.trialId]);
+  if (Number(n) !== size || Number(h) !== size || body.created !== size) throw new Error(`expected ${size} observations and history rows, found ${n} and ${h} (created ${body.created})`);
 
   // The same rows, by MariaDB's bulk loader, into a scratch table shaped like observations (no foreign keys).
-  const plotIds = await sequelize.query('SELECT id FROM plots WHERE site_id = ? ORDER BY block, position', { replacements: [siteId], type: QueryTypes.SELECT });
-  const stamp = now.toISOString().slice(0, 23).replace('T', ' ');
-  const tsv = join(work, 'observations.tsv');
-  writeFileSync(tsv, plotIds.map(({ id }, index) => [trialId, id, roundId, measureId, values[index], values[index], 0, '\\N', '\\N', 1, 'upload', userId, stamp, stamp, stamp].join('\t')).join('\n'));
-  await sequelize.query('DROP TABLE IF EXISTS bench_observations_scratch');
-  await sequelize.query('CREATE TABLE bench_observations_scratch LIKE observations');
-  const connection = await mariadb.createConnection({
-    host: process.env.DB_HOST,
-    port: Number(process.env.DB_PORT),
-    user: process.env.DB_USER,
-    password: process.env.DB_PASSWORD,
-    database: process.env.DB_NAME,
-    permitLocalInfile: true,
-  });
-  let loadMs;
-  try {
-    const loadStarted = performance.now();
-    await connection.beginTransaction();
-    await connection.query(
-      `LOAD DATA LOCAL INFILE ? INTO TABLE bench_observations_scratch FIELDS TERMINATED BY '\\t' LINES TERMINATED BY '\\n'
-       (trial_id, plot_id, round_id, measure_id, value_text, value_decimal, censored, missing_reason, notes, version, source, recorded_by, recorded_at, created_at, updated_at)`,
-      [tsv],
-    );
-    await connection.commit();
-    loadMs = performance.now() - loadStarted;
-    const [{ loaded }] = await connection.query('SELECT COUNT(*) AS loaded FROM bench_observations_scratch');
-    if (Number(loaded) !== ROWS) throw new Error(`LOAD DATA loaded ${loaded} rows, expected ${ROWS}`);
-    await connection.query('DROP TABLE bench_observations_scratch');
-  } finally {
-    await connection.end();
-  }
-  console.log(`Intake of ${ROWS.toLocaleString('en')} rows (${(csv.length / 1_048_576).toFixed(1)} MB CSV; parse, validate, plan, insert values and history in one transaction): ${seconds(intakeMs)}`);
-  console.log(`LOAD DATA LOCAL INFILE of the same ${ROWS.toLocaleString('en')} rows into a scratch table: ${seconds(loadMs)}`);
-  console.log(`Ratio (Intake / LOAD DATA): ${(intakeMs / loadMs).toFixed(1)}×; the issue's budget is 10 s for Intake: ${intakeMs < 10_000 ? 'met' : 'NOT met'}.`);
-} finally {
-  if (trialId !== null) {
-    for (const table of ['observation_changes', 'observations', 'intake_uploads', 'activity_entries', 'plots', 'round_measures'].filter(Boolean)) {
-      const where = table === 'round_measures' ? 'round_id IN (SELECT id FROM assessment_rounds WHERE trial_id = ?)' : 'trial_id = ?';
-      await sequelize.query(`DELETE FROM ${table} WHERE ${where}`, { replacements: [trialId] });
-    }
-    await sequelize.query('DELETE FROM trials WHERE id = ?', { replacements: [trialId] });
-    await sequelize.query('DELETE FROM users WHERE email = ?', { replacements: [`bench-${tag}@example.org`] });
-  }
-  await sequelize.query('DROP TABLE IF EXISTS bench_observations_scratch');
-  rmSync(work, { recursive: true, force: true });
-  await app.close();
+  const plotIds = await connection.query('SELECT id FROM plots WHERE site_id = ? ORDER BY block, position', [trial.siteId]);
+  const stamp = new Date().toISOString().slice(0, 23).replace('T', ' ');
+  const tsvPath = join(work, `bench-${size}.tsv`);
+  await writeFile(tsvPath, size, (index) => `${[trial.trialId, plotIds[index].id, trial.roundId, trial.measureId, valueOf(index), valueOf(index), 0, '\\N', '\\N', 1, 'upload', trial.userId, stamp, stamp, stamp].join('\t')}\n`);
+  await connection.query('DROP TABLE IF EXISTS bench_observations_scratch');
+  await connection.query('CREATE TABLE bench_observations_scratch LIKE observations');
+  const loadStarted = performance.now();
+  await connection.beginTransaction();
+  await connection.query(
+    `LOAD DATA LOCAL INFILE ? INTO TABLE bench_observations_scratch FIELDS TERMINATED BY '\\t' LINES TERMINATED BY '\\n'
+     (trial_id, plot_id, round_id, measure_id, value_text, value_decimal, censored, missing_reason, notes, version, source, recorded_by, recorded_at, created_at, updated_at)`,
+    [tsvPath],
+  );
+  await connection.commit();
+  const loadMs = performance.now() - loadStarted;
+  const [{ loaded }] = await connection.query('SELECT COUNT(*) AS loaded FROM bench_observations_scratch');
+  if (Number(loaded) !== size) throw new Error(`LOAD DATA loaded ${loaded} rows, expected ${size}`);
+  await connection.query('DROP TABLE bench_observations_scratch');
+
+  const ends = [...stages.slice(1).map((entry) => entry.at), started + intakeMs];
+  const phases = [
+    `sending and saving to disk ${seconds((stages[0]?.at ?? started) - started)}`,
+    ...stages.filter((entry, index) => !['done', 'refused', 'failed'].includes(entry.stage) && index < ends.length).map((entry, index) => `${entry.stage} ${seconds(ends[index] - entry.at)}`),
+  ];
+  return { size, bytes: statSync(csvPath).size, intakeMs, loadMs, phases, healthWorst, healthAnswers, peak: peakMemory() };
 }
+
+const results = [];
+try {
+  await waitForApi();
+  for (const size of SIZES) results.push(await measure(size));
+} finally {
+  api.kill('SIGTERM');
+  await connection.end();
+  db.dropDatabase(env.DB_NAME);
+  db.stop();
+  rmSync(work, { recursive: true, force: true });
+}
+
+for (const result of results) {
+  console.log(`\n${rows(result.size)} rows (${(result.bytes / 1_048_576).toFixed(1)} MB CSV) through POST …/intake: ${seconds(result.intakeMs)} (${result.phases.join(', ')})`);
+  console.log(`LOAD DATA LOCAL INFILE of the same ${rows(result.size)} rows into a scratch table: ${seconds(result.loadMs)}`);
+  console.log(`Ratio (Intake / LOAD DATA): ${(result.intakeMs / result.loadMs).toFixed(2)}×; slowest /api/health during the upload: ${result.healthWorst.toFixed(0)} ms (${result.healthAnswers} answers); API peak memory so far (VmHWM): ${megabytes(result.peak)}`);
+}
+const hundred = results.find((result) => result.size === 100_000);
+if (hundred) {
+  const ratio = hundred.intakeMs / hundred.loadMs;
+  console.log(`\nTargets for 100,000 rows: ≤ 3× LOAD DATA (${ratio.toFixed(2)}×: ${ratio <= 3 ? 'met' : 'NOT met'}), ≤ 5 s (${seconds(hundred.intakeMs)}: ${hundred.intakeMs <= 5000 ? 'met' : 'NOT met'}).`);
+}
+const million = results.find((result) => result.size === 1_000_000);
+if (million) console.log(`Target for 1,000,000 rows: API peak memory < 400 MB (${megabytes(million.peak)}: ${million.peak < 400 * 1_048_576 ? 'met' : 'NOT met'}).`);
+writeFileSync(join(repoRoot, '.data', 'bench-intake.json'), JSON.stringify(results, null, 2));

@@ -7,6 +7,16 @@ export interface IntakeProblem {
   message: string;
 }
 
+/** One value of an upload's change list. */
+export interface IntakeChange {
+  plotLabel: string;
+  measureCode: string;
+  kind: 'new' | 'changed' | 'unchanged';
+  /** As a person writes it: "12.50", ">600", "NA (flooded)"; null when there was no value. */
+  before: string | null;
+  after: string | null;
+}
+
 /** POST /api/trials/:trialId/sites/:siteId/rounds/:roundId/intake — 200 answer (also for ?dryRun=true). */
 export interface IntakeResult {
   dryRun: boolean;
@@ -15,11 +25,65 @@ export interface IntakeResult {
   unchanged: number;
   /** Values outside the plausible range, and similar: accepted only with acceptWarnings=true. */
   warnings: IntakeProblem[];
-  /** Per value: what the upload would do (dry run) or did. */
-  changes: Array<{ plotLabel: string; measureCode: string; kind: 'new' | 'changed' | 'unchanged'; before: string | null; after: string | null }>;
+  /**
+   * Per value: what the upload would do (dry run) or did — changed values first, then new ones,
+   * then unchanged ones, each in file order, at most INTAKE_CHANGE_LIST_CAP of them.
+   */
+  changes: IntakeChange[];
+  /** How many values the counts hold beyond those listed in `changes` (0 for files of up to 1,000 values). */
+  changesOmitted: number;
   /** True when the file is byte-identical to the last committed upload for this site and round. */
   identicalToPrevious: boolean;
   message: string;
+  /** The import record that followed this upload (GET /api/trials/:trialId/intake-imports/:ticket). */
+  ticket: string;
+}
+
+/** Most values listed in an IntakeResult's `changes`. */
+export const INTAKE_CHANGE_LIST_CAP = 1000;
+
+/**
+ * Where an upload stands: checking rows, comparing with the values already stored, writing; then
+ * done, refused (nothing written, problems listed), failed (nothing written, a server fault) or
+ * interrupted (the server stopped while it ran; nothing was written).
+ */
+export type IntakeStage = 'checking' | 'comparing' | 'writing' | 'done' | 'refused' | 'failed' | 'interrupted';
+
+/** GET /api/trials/:trialId/intake-imports/:ticket — an upload's progress, then its answer. */
+export interface IntakeImport {
+  ticket: string;
+  siteId: number;
+  roundId: number;
+  fileName: string;
+  sizeBytes: number;
+  format: 'csv' | 'xlsx';
+  dryRun: boolean;
+  stage: IntakeStage;
+  /** Data rows read and checked so far. */
+  rowsChecked: number;
+  /** Bytes of the file read so far (CSV; a workbook is unpacked first, so it stays 0). */
+  bytesRead: number;
+  /** Values to compare or write, once known. */
+  valuesTotal: number | null;
+  /** Values compared or written so far. */
+  valuesDone: number;
+  /** The answer's sentence once finished; what is happening while it runs. */
+  message: string | null;
+  userName: string | null;
+  startedAt: string;
+  updatedAt: string;
+  finishedAt: string | null;
+  /** The 200 answer, once done. */
+  result: IntakeResult | null;
+  /** The 422 answer, once refused: every problem by row and column. */
+  refusal: IntakeRefusal | null;
+}
+
+/** GET /api/trials/:trialId/intake-columns — how the trial's uploads read their own headers, where people chose it. */
+export interface IntakeColumnChoice {
+  header: string;
+  /** plotLabel, block, treatment, notes, missingReason, a measure code, or null ("not read"). */
+  choice: string | null;
 }
 
 /** 422 answer of the intake: nothing was written. */

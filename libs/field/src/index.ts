@@ -51,3 +51,4 @@ export {
 } from './randomize';
 export { criticalFAt05, errorStrata, factorialTerms, type ErrorStratum, type StrataInput, type StratumFactor } from './design-strata';
 export { DESIGN_MINIMUMS, designWarnings, type DesignCheckInput } from './design-checks';
+export { DATA_COLUMNS, IDENTITY_COLUMNS, RECORD_COLUMNS, dataColumnOfHeader, normaliseHeader, type DataColumn } from './data-columns';

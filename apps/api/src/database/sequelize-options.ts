@@ -1,6 +1,7 @@
 import * as mariadb from 'mariadb';
 import type { SequelizeOptions } from 'sequelize-typescript';
 import type { DatabaseConfig } from '../config/database.config';
+import { openLocalInfile } from './local-infile';
 
 /** Connection options shared by the Nest module, the command line and the tests. */
 export function sequelizeOptions(config: DatabaseConfig): SequelizeOptions {
@@ -16,7 +17,8 @@ export function sequelizeOptions(config: DatabaseConfig): SequelizeOptions {
     logging: false,
     pool: { max: config.poolMax, min: 0, idle: 10_000 },
     define: { underscored: true, timestamps: true },
-    dialectOptions: { connectTimeout: 5_000 },
+    // LOAD DATA LOCAL INFILE (Intake's bulk load) reads only streams this process registered; see local-infile.ts.
+    dialectOptions: { connectTimeout: 5_000, permitLocalInfile: true, infileStreamFactory: openLocalInfile },
     timezone: '+00:00',
   };
 }

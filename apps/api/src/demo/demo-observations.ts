@@ -99,7 +99,7 @@ export class DemoObservationsService {
         const csv = await this.csvFor(trial.id, site, round);
         const access = { trialId: trial.id, roles: ['investigator' as const], siteIds: [], adminReadOnly: false };
         const fileName = `${trialCode}-${site.prefix}-${round.label.replace(/\s+/g, '-')}.csv`;
-        await this.intake.intake(access, user, site.id, round.id, { bytes: Buffer.from(csv), fileName }, { dryRun: false, acceptWarnings: true, receipt: false });
+        await this.intake.intake(access, user, site.id, round.id, { source: { bytes: Buffer.from(csv) }, fileName }, { dryRun: false, acceptWarnings: true, receipt: false });
         filled += 1;
       }
     }

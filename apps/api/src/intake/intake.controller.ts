@@ -17,21 +17,28 @@ export class IntakeController {
   @Post()
   @HttpCode(200)
   @TrialAccess('investigator', 'collaborator')
-  @UseInterceptors(SingleFileUpload({ field: 'file', configToken: intakeConfig.KEY, what: 'a CSV file' }))
+  @UseInterceptors(SingleFileUpload({ field: 'file', configToken: intakeConfig.KEY, what: 'an upload', storage: 'disk' }))
   @ApiConsumes('multipart/form-data')
   @ApiBody({
     schema: {
       type: 'object',
       required: ['file'],
       properties: {
-        file: { type: 'string', format: 'binary', description: 'The CSV file (UTF-8; comma, semicolon or tab), as the site and round template.' },
+        file: {
+          type: 'string',
+          format: 'binary',
+          description: 'The CSV file (UTF-8; comma, semicolon or tab) or .xlsx workbook, as the site and round template. Up to INTAKE_MAX_BYTES (100 MB by default).',
+        },
         acceptWarnings: { type: 'string', enum: ['true', 'false'], description: 'Keep values outside the usual range as typed.' },
+        mapping: { type: 'string', description: 'JSON: column header → plotLabel, block, treatment, notes, missingReason, a measure code, or null.' },
+        ticket: { type: 'string', description: 'Your name for this upload, to follow its progress at /api/trials/:trialId/intake-imports/:ticket.' },
+        sheet: { type: 'string', description: 'For a workbook: the sheet to read; the first visible one by default.' },
       },
     },
   })
   @ApiOkResponse({ description: 'IntakeResult: what was written (or, with ?dryRun=true, what would be): new, changed and unchanged values.' })
   @ApiUnprocessableEntityResponse({ description: 'IntakeRefusal: nothing was written; errors lists every problem by row and column (or the warnings to accept).' })
-  @ApiPayloadTooLargeResponse({ description: 'The file is larger than INTAKE_MAX_BYTES (10 MB by default).' })
+  @ApiPayloadTooLargeResponse({ description: 'The file is larger than INTAKE_MAX_BYTES (100 MB by default, enough for a million rows of the template).' })
   @ApiConflictResponse({ description: 'The trial is locked, or the site is not randomized yet.' })
   upload(
     @CurrentTrialAccess() access: TrialAccessContext,
@@ -42,15 +49,17 @@ export class IntakeController {
     @Body() body: IntakeOptionsDto,
     @UploadedFile() file: Express.Multer.File | undefined,
   ): Promise<IntakeResult> {
-    if (!file) throw new UnprocessableEntityException('Send the CSV file as multipart/form-data in the form field "file".');
+    if (!file) throw new UnprocessableEntityException('Send the CSV file or workbook as multipart/form-data in the form field "file".');
     const mapping = readMapping(body.mapping);
     if (typeof mapping === 'string') {
       throw new UnprocessableEntityException({ statusCode: 422, error: 'Unprocessable Entity', message: `Please correct: ${mapping}.`, errors: [{ field: 'mapping', message: mapping }] });
     }
-    return this.intake.intake(access, user, siteId, roundId, { bytes: file.buffer, fileName: file.originalname || 'upload.csv' }, {
+    return this.intake.intake(access, user, siteId, roundId, { source: { path: file.path, size: file.size }, fileName: file.originalname || 'upload.csv' }, {
       dryRun: flagIsSet(query.dryRun ?? body.dryRun),
       acceptWarnings: flagIsSet(query.acceptWarnings ?? body.acceptWarnings),
       columnOverrides: mapping,
+      ticket: body.ticket ?? query.ticket,
+      sheet: body.sheet ?? query.sheet ?? null,
     });
   }
 }

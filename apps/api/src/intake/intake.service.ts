@@ -1,10 +1,10 @@
-import type { IntakeProblem, IntakeResult, Measure } from '@friable/contracts';
-import { ConflictException, Inject, Injectable, Logger, NotFoundException, PayloadTooLargeException, UnprocessableEntityException } from '@nestjs/common';
+import { INTAKE_CHANGE_LIST_CAP, type IntakeChange, type IntakeProblem, type IntakeRefusal, type IntakeResult, type Measure } from '@friable/contracts';
+import { ConflictException, HttpException, Inject, Injectable, Logger, NotFoundException, PayloadTooLargeException, UnprocessableEntityException } from '@nestjs/common';
 import type { ConfigType } from '@nestjs/config';
 import { InjectConnection, InjectModel } from '@nestjs/sequelize';
-import { createHash } from 'node:crypto';
-import type { Transaction } from 'sequelize';
+import { QueryTypes, Transaction } from 'sequelize';
 import type { Sequelize } from 'sequelize-typescript';
+import { dataColumnOfHeader } from '@friable/field';
 import { ActivityService } from '../activity/activity.service';
 import type { AuthUser, TrialAccessContext } from '../auth/auth-user';
 import { refuseIfClosed } from '../common/exceptions/trial-locked.exception';
@@ -13,33 +13,36 @@ import { mailConfig } from '../config/mail.config';
 import { MailService } from '../mail/mail.service';
 import { MeasureRow } from '../measures/models/measure.model';
 import { presentMeasure } from '../measures/measure.presenter';
-import { ObservationStoreService, type StoredObservation, type ValueToWrite } from '../observations/observation-store.service';
+import { ObservationBulkStore, type BulkComparison, type BulkWriteContext } from '../observations/observation-bulk-store.service';
 import { assertMayWriteSite } from '../observations/site-write-access';
 import { storableValue } from '../observations/storable-value';
-import { PlotRow } from '../plots/models/plot.model';
 import { AssessmentRoundRow } from '../rounds/models/assessment-round.model';
 import { SiteRow } from '../sites/models/site.model';
-import { TreatmentRow } from '../treatments/models/treatment.model';
 import { Trial } from '../trials/models/trial.model';
+import { IntakeColumnsService } from './intake-columns.service';
+import { IntakeImportsService, type ImportProgress } from './intake-imports.service';
 import { intakeConfig } from './intake.config';
 import { IntakeUploadRow } from './models/intake-upload.model';
 import {
+  IntakeChecker,
   IntakeFileError,
+  SitePlotIndex,
+  TableRows,
+  describeStoredValue,
   mapColumns,
-  planChanges,
-  readCsvFile,
-  validateIntake,
-  type ChangePlan,
+  plotLabelKey,
   type ColumnMapping,
-  type ExistingValue,
   type IntakeValue,
-  type SitePlot,
+  type StorageChecks,
+  type TableHeader,
 } from './parsing';
+import { openUpload, sniffFormat, sourceSize, type UploadReading, type UploadSource } from './read-upload';
 import { intakeReceiptEmail } from './receipt-email';
+import { ValueSpool } from './value-spool';
 
 export interface IntakeUpload {
-  bytes: Buffer;
   fileName: string;
+  source: UploadSource;
 }
 
 export interface IntakeOptions {
@@ -49,48 +52,96 @@ export interface IntakeOptions {
   columnOverrides?: Readonly<Record<string, string | null>>;
   /** False to send no receipt e-mail (the demo loader); true by default. */
   receipt?: boolean;
+  /** The browser's name for this upload, to follow its progress; one is made up when absent. */
+  ticket?: string;
+  /** The workbook sheet to read; the first visible one when absent. */
+  sheet?: string | null;
 }
 
-/** Everything read and checked before a transaction starts. */
-interface PreparedIntake {
+interface Resolved {
   trial: Trial;
   site: SiteRow;
   round: AssessmentRoundRow;
+  measures: Measure[];
+}
+
+/** Everything read and checked before a transaction starts; the values wait on disk in `spool`. */
+interface PreparedIntake extends Resolved {
   mapping: ColumnMapping;
+  automatic: ColumnMapping;
   rowsRead: number;
-  values: readonly IntakeValue[];
+  valueWarnings: number;
   warnings: readonly IntakeProblem[];
-  sha256: string;
+  reading: UploadReading;
+  spool: ValueSpool;
+  /** The first values worth writing, in file order: the change list when nothing is stored yet. */
+  firstValues: IntakeValue[];
 }
 
 const count = (value: number) => new Intl.NumberFormat('en').format(value);
 const plural = (value: number, one: string, many: string) => `${count(value)} ${value === 1 ? one : many}`;
-const keyOf = (value: { plotId: number; measureId: number }) => `${value.plotId}:${value.measureId}`;
+const PLOT_PAGE = 20_000;
+
+function refusalBody(message: string, errors: readonly IntakeProblem[]): IntakeRefusal {
+  return { statusCode: 422, error: 'Unprocessable Entity', message, errors: [...errors] };
+}
 
 function refusal(message: string, errors: readonly IntakeProblem[]): UnprocessableEntityException {
-  return new UnprocessableEntityException({ statusCode: 422, error: 'Unprocessable Entity', message, errors: [...errors] });
+  return new UnprocessableEntityException(refusalBody(message, errors));
 }
 
-/** Warnings about values (they have a row) need the uploader's word; notes about columns (no row) are only told. */
-const valueWarningsOf = (prepared: PreparedIntake) => prepared.warnings.filter((warning) => warning.row !== null);
+/** The table's limits, checked with every other rule so a file that cannot be stored is refused by row and column. */
+const storageChecks: StorageChecks = {
+  value(valueText) {
+    if (valueText.length <= 20 && !valueText.includes('e')) return null;
+    const storable = storableValue(valueText);
+    return storable.ok ? null : storable.message;
+  },
+  reason(reason) {
+    return reason.length <= 200 ? null : `the reason has ${count(reason.length)} characters; reasons of up to 200 are kept.`;
+  },
+};
 
-/** A blank cell where nothing is stored records nothing: an empty cell of the template is not an observation. */
-function worthWriting(value: IntakeValue, stored: ReadonlyMap<string, StoredObservation>): boolean {
-  return !(value.blank && value.missingReason === null && !stored.has(keyOf(value)));
+/** A refused file as a merged range in the table: by its first row and column. */
+function mergedProblems(reading: UploadReading, header: TableHeader | null): IntakeProblem[] {
+  const from = header?.rowNumber ?? 1;
+  return reading.merged
+    .filter((range) => range.lastRow >= from)
+    .slice(0, 100)
+    .map((range) => {
+      const column = header?.headers[range.firstColumn] || null;
+      const message = `Row ${range.firstRow}${column ? `, ${column}` : ''}: cells ${range.ref} are merged. Unmerge them so every row has its own value in its own cell (in your spreadsheet program: select them, then unmerge), then upload the file again.`;
+      return { row: range.firstRow, column, message };
+    });
 }
+
+/** Whether a row is the header row: it has a cell naming the plot label (by the person's mapping, the trial's memory or its spelling). */
+function namesPlotLabel(cells: readonly string[], overrides: Readonly<Record<string, string | null>>, remembered: Readonly<Record<string, string | null>>): boolean {
+  return cells.some((cell) => {
+    const header = cell.trim();
+    if (header === '') return false;
+    if (Object.hasOwn(overrides, header)) return overrides[header] === 'plotLabel';
+    if (remembered[header] === 'plotLabel') return true;
+    return dataColumnOfHeader(header)?.role === 'plotLabel';
+  });
+}
+
 
 /**
- * Intake — reads an uploaded CSV file for one site and round, checks every row, and either
- * answers what it would do (dry run) or writes the whole file in one transaction.
+ * Intake — reads an uploaded CSV file or workbook sheet for one site and round, checks every row,
+ * and either answers what it would do (dry run) or writes the whole file in one transaction.
  *
- * Purpose: the all-or-nothing rule. Any error: nothing is written, 422 lists every problem by
- * row and column. Warnings (values outside the usual range): written only with acceptWarnings.
- * A file byte-identical to the last committed one for the site and round changes nothing. Each
- * commit is an intake_uploads row, a history row per value written, an activity entry and a
- * receipt e-mail to the uploader.
+ * Purpose: the all-or-nothing rule, for files of a million rows. The file is read as a stream
+ * (never whole in memory); each checked value goes to a spool on disk; any error: nothing is
+ * written, 422 lists every problem by row and column. Warnings (values outside the usual range):
+ * written only with acceptWarnings. The spool is then compared with the stored values and written
+ * by `ObservationBulkStore` in a few set-based statements. A file byte-identical to the last
+ * committed one for the site and round changes nothing. Each commit is an intake_uploads row, a
+ * history row per value written, an activity entry and a receipt e-mail to the uploader; every
+ * upload is also an intake_imports record whose stage and counts the browser follows.
  * Throws (as HTTP answers): 403 for a site the caller may not write for, 404 for an unknown site
- * or round, 409 when the trial is locked or the site not randomized, 413 over INTAKE_MAX_BYTES,
- * 422 with `errors` for a file that is refused.
+ * or round, 409 when the trial is locked, the site not randomized, or values changed while the
+ * file was written, 413 over INTAKE_MAX_BYTES, 422 with `errors` for a file that is refused.
  */
 @Injectable()
 export class IntakeService {
@@ -100,39 +151,71 @@ export class IntakeService {
     @InjectConnection() private readonly sequelize: Sequelize,
     @InjectModel(Trial) private readonly trials: typeof Trial,
     @InjectModel(SiteRow) private readonly sites: typeof SiteRow,
-    @InjectModel(PlotRow) private readonly plots: typeof PlotRow,
     @InjectModel(AssessmentRoundRow) private readonly rounds: typeof AssessmentRoundRow,
     @InjectModel(IntakeUploadRow) private readonly uploads: typeof IntakeUploadRow,
     @Inject(intakeConfig.KEY) private readonly config: ConfigType<typeof intakeConfig>,
     @Inject(mailConfig.KEY) private readonly mailSettings: ConfigType<typeof mailConfig>,
     private readonly gate: ProtocolGateService,
-    private readonly store: ObservationStoreService,
+    private readonly bulk: ObservationBulkStore,
+    private readonly imports: IntakeImportsService,
+    private readonly columns: IntakeColumnsService,
     private readonly activity: ActivityService,
     private readonly mail: MailService,
   ) {}
 
   async intake(access: TrialAccessContext, user: AuthUser, siteId: number, roundId: number, upload: IntakeUpload, options: IntakeOptions): Promise<IntakeResult> {
-    const prepared = await this.prepare(access, siteId, roundId, upload, options.columnOverrides ?? {});
-    if (options.dryRun) return this.dryRun(prepared);
-    const valueWarnings = valueWarningsOf(prepared);
-    if (valueWarnings.length > 0 && !options.acceptWarnings) {
-      throw refusal(
-        `Nothing was written: ${plural(valueWarnings.length, 'warning needs', 'warnings need')} your decision. Check the values, then send the file again with acceptWarnings=true to keep them as typed.`,
-        valueWarnings,
-      );
+    const resolved = await this.resolve(access, siteId, roundId);
+    const size = sourceSize(upload.source);
+    if (size > this.config.maxBytes) {
+      throw new PayloadTooLargeException(`The file is larger than ${count(Math.round(this.config.maxBytes / 1_048_576))} MB, the most accepted for an upload. Split it by site or round.`);
     }
-    const result = await this.sequelize.transaction((transaction) => this.commit(prepared, user, upload, transaction));
-    if (!result.identicalToPrevious && options.receipt !== false) await this.sendReceipt(prepared, user, upload, result);
-    return result;
+    const progress = await this.imports.start({
+      ticket: options.ticket,
+      trialId: resolved.trial.id,
+      siteId,
+      roundId,
+      userId: user.id,
+      fileName: upload.fileName,
+      sizeBytes: size,
+      format: await sniffFormat(upload.source),
+      dryRun: options.dryRun,
+    });
+    let prepared: PreparedIntake | null = null;
+    try {
+      prepared = await this.prepare(resolved, upload, options, progress);
+      if (prepared.valueWarnings > 0 && !options.dryRun && !options.acceptWarnings) {
+        const warnings = prepared.warnings.filter((warning) => warning.row !== null);
+        throw refusal(
+          `Nothing was written: ${plural(prepared.valueWarnings, 'warning needs', 'warnings need')} your decision. Check the values, then send the file again with acceptWarnings=true to keep them as typed.`,
+          warnings,
+        );
+      }
+      const result = options.dryRun ? await this.dryRun(prepared, progress) : await this.commit(prepared, user, upload, progress);
+      await progress.done(result);
+      if (!result.dryRun && !result.identicalToPrevious && options.receipt !== false) await this.sendReceipt(prepared, user, upload, result);
+      return result;
+    } catch (error) {
+      await this.recordFailure(progress, error);
+      throw error;
+    } finally {
+      prepared?.spool.remove();
+    }
   }
 
-  private async prepare(
-    access: TrialAccessContext,
-    siteId: number,
-    roundId: number,
-    upload: IntakeUpload,
-    columnOverrides: Readonly<Record<string, string | null>>,
-  ): Promise<PreparedIntake> {
+  private async recordFailure(progress: ImportProgress, error: unknown): Promise<void> {
+    if (error instanceof HttpException && error.getStatus() === 422) {
+      const body = error.getResponse();
+      const problems = typeof body === 'object' && body !== null && 'errors' in body ? ((body as { errors: IntakeProblem[] }).errors ?? []) : [];
+      await progress.refused(refusalBody(error.message, problems));
+    } else if (error instanceof HttpException) {
+      await progress.failed(error.message);
+    } else {
+      await progress.failed('The server could not finish this upload; nothing was written. Try again, and tell the trial’s investigator if it happens again.');
+    }
+  }
+
+  /** The trial, site and round of the upload, and whether the caller may write there. */
+  private async resolve(access: TrialAccessContext, siteId: number, roundId: number): Promise<Resolved> {
     const site = await this.sites.findOne({ where: { id: siteId, trialId: access.trialId } });
     if (!site) throw new NotFoundException('No such site in this trial.');
     assertMayWriteSite(access, site.id, site.name);
@@ -140,82 +223,161 @@ export class IntakeService {
     refuseIfClosed(trial);
     const round = await this.rounds.findOne({ where: { id: roundId, trialId: trial.id }, include: [MeasureRow] });
     if (!round) throw new NotFoundException('No such assessment round in this trial.');
+    const [plotted] = await this.sequelize.query<{ n: number }>('SELECT COUNT(*) AS n FROM plots WHERE site_id = ? LIMIT 1', { replacements: [site.id], type: QueryTypes.SELECT });
+    if (!Number(plotted!.n)) throw new ConflictException(`${site.name} is not randomized yet: randomize it to get its plots, then upload its data.`);
     const measures = (round.measures ?? []).map(presentMeasure).sort((a, b) => a.position - b.position || a.id - b.id);
-    const file = this.readFile(upload.bytes);
-    const { sitePlots, trialPlotLabels } = await this.plotPlan(trial.id, site);
-    const mapping = mapColumns(file.headers, measures, columnOverrides);
-    const validation = validateIntake({ file, mapping, sitePlots, trialPlotLabels, roundMeasures: measures, siteName: site.name });
-    const errors = [...validation.errors, ...this.storageProblems(validation.values, mapping, measures)];
-    if (errors.length > 0) {
-      const rows = new Set(errors.map((error) => error.row).filter((row) => row !== null)).size;
-      const where = rows > 0 ? ` in ${plural(rows, 'row', 'rows')}` : '';
-      throw refusal(`Nothing was written: the file has ${plural(errors.length, 'problem', 'problems')}${where}. Correct them and upload the whole file again.`, errors);
-    }
-    const sha256 = createHash('sha256').update(upload.bytes).digest('hex');
-    return { trial, site, round, mapping, rowsRead: file.rows.length, values: validation.values, warnings: validation.warnings, sha256 };
+    return { trial, site, round, measures };
   }
 
-  private readFile(bytes: Buffer) {
+  /** The site's plots, read a page at a time into a compact index. */
+  private async plotIndex(siteId: number): Promise<SitePlotIndex> {
+    const index = new SitePlotIndex();
+    let after = 0;
+    for (;;) {
+      const rows = await this.sequelize.query<{ id: number; label: string; block: number; treatmentCode: string | null }>(
+        `SELECT p.id, p.label, p.block, t.code AS treatmentCode FROM plots p LEFT JOIN treatments t ON t.id = p.treatment_id
+          WHERE p.site_id = ? AND p.id > ? ORDER BY p.id LIMIT ${PLOT_PAGE}`,
+        { replacements: [siteId, after], type: QueryTypes.SELECT },
+      );
+      for (const row of rows) index.add({ id: Number(row.id), label: row.label, block: Number(row.block), treatmentCode: row.treatmentCode ?? '' });
+      if (rows.length < PLOT_PAGE) return index;
+      after = Number(rows[rows.length - 1]!.id);
+    }
+  }
+
+  /** The other sites of the trial that have these labels, by label key. */
+  private async otherSites(trialId: number, labels: readonly string[]): Promise<Map<string, string>> {
+    if (labels.length === 0) return new Map();
+    const rows = await this.sequelize.query<{ label: string; name: string }>(
+      'SELECT p.label, s.name FROM plots p JOIN sites s ON s.id = p.site_id WHERE p.trial_id = ? AND p.label IN (?)',
+      { replacements: [trialId, labels], type: QueryTypes.SELECT },
+    );
+    return new Map(rows.map((row) => [plotLabelKey(row.label), row.name]));
+  }
+
+  private async prepare(resolved: Resolved, upload: IntakeUpload, options: IntakeOptions, progress: ImportProgress): Promise<PreparedIntake> {
+    const { trial, site, measures } = resolved;
+    const overrides = options.columnOverrides ?? {};
+    const remembered = await this.columns.remembered(trial.id);
+    const plots = await this.plotIndex(site.id);
+    const spool = new ValueSpool(this.config.workDir);
     try {
-      return readCsvFile(bytes, { maxBytes: this.config.maxBytes });
+      const opened = await openUpload(upload.source, options.sheet ?? null).catch((error: unknown) => this.fileRefusal(error));
+      const firstValues: IntakeValue[] = [];
+      let header: TableHeader | null = null;
+      let mapping: ColumnMapping | null = null;
+      let checker: IntakeChecker | null = null;
+      const table = new TableRows({
+        isHeader: (cells) => namesPlotLabel(cells, overrides, remembered),
+        onHeader: (found) => {
+          header = found;
+          mapping = mapColumns(found.headers, measures, overrides, remembered);
+          checker = new IntakeChecker({
+            mapping,
+            headers: found.headers,
+            plots,
+            roundMeasures: measures,
+            siteName: site.name,
+            decimalComma: opened.decimalComma,
+            storage: storageChecks,
+            onValue: (value) => {
+              // Once the file has an error nothing will be written: keep checking, stop spooling.
+              if (checker!.errorCount > 0) return;
+              spool.add(value);
+              if (firstValues.length < INTAKE_CHANGE_LIST_CAP && !(value.blank && value.missingReason === null)) firstValues.push(value);
+            },
+          });
+        },
+        onRow: (row) => checker!.check(row),
+        onRowProblem: (problem) => checker!.addRowProblem(problem),
+      });
+      const reading = await opened
+        .read(
+          (row) => table.push(row),
+          (bytesRead) => progress.checking(table.rowsRead, bytesRead),
+        )
+        .catch((error: unknown) => this.fileRefusal(error));
+      try {
+        table.finish(`The file has a header row but no data rows (read as ${reading.readAs}).`);
+      } catch (error) {
+        this.fileRefusal(error);
+      }
+      const found = header as TableHeader | null;
+      const done = checker as IntakeChecker | null;
+      if (!done || !mapping || !found) throw refusal('The file holds only blank lines.', [{ row: null, column: null, message: 'The file holds only blank lines.' }]);
+      for (const problem of mergedProblems(reading, found)) done.addRowProblem(problem);
+      const { errors, warnings } = done.finish(await this.otherSites(trial.id, done.labelsToLookUp()));
+      if (errors.length > 0) {
+        const rows = new Set(errors.map((error) => error.row).filter((row) => row !== null)).size;
+        const where = rows > 0 ? ` in ${plural(rows, 'row', 'rows')}` : '';
+        throw refusal(`Nothing was written: the file has ${plural(done.errorCount, 'problem', 'problems')}${where}. Correct them and upload the whole file again.`, errors);
+      }
+      spool.close();
+      await progress.stage('checking', { rowsChecked: done.rows, valuesTotal: done.values });
+      const automatic = mapColumns(found.headers, measures);
+      return { ...resolved, mapping, automatic, rowsRead: done.rows, valueWarnings: done.valueWarningCount, warnings, reading, spool, firstValues };
     } catch (error) {
-      if (!(error instanceof IntakeFileError)) throw error;
-      if (error.status === 413) throw new PayloadTooLargeException(error.message);
-      throw refusal(error.message, error.problems.length ? error.problems : [{ row: null, column: null, message: error.message }]);
+      spool.remove();
+      throw error;
     }
   }
 
-  private async plotPlan(trialId: number, site: SiteRow): Promise<{ sitePlots: SitePlot[]; trialPlotLabels: Map<string, { siteId: number; siteName: string }> }> {
-    const rows = await this.plots.findAll({
-      where: { trialId },
-      attributes: ['id', 'label', 'block', 'siteId'],
-      include: [{ model: TreatmentRow, attributes: ['code'] }, { model: SiteRow, attributes: ['name'] }],
-    });
-    const sitePlots = rows
-      .filter((row) => row.siteId === site.id)
-      .map((row) => ({ id: row.id, label: row.label, block: row.block, treatmentCode: row.treatment?.code ?? '' }));
-    if (sitePlots.length === 0) throw new ConflictException(`${site.name} is not randomized yet: randomize it to get its plots, then upload its data.`);
-    const trialPlotLabels = new Map(rows.map((row) => [row.label, { siteId: row.siteId, siteName: row.site?.name ?? '' }]));
-    return { sitePlots, trialPlotLabels };
-  }
-
-  /** Values the table cannot keep (longer than 40 characters, more than 20 whole digits), by row and column. */
-  private storageProblems(values: readonly IntakeValue[], mapping: ColumnMapping, measures: readonly Measure[]): IntakeProblem[] {
-    const headers = new Map(mapping.measures.map((column) => [column.measureId, column.header]));
-    return values.flatMap((value) => {
-      if (value.valueText === null) return [];
-      const storable = storableValue(value.valueText);
-      if (storable.ok) return [];
-      const column = headers.get(value.measureId) ?? measures.find((m) => m.id === value.measureId)?.name ?? null;
-      return [{ row: value.row, column, message: `Row ${value.row}, ${column}: ${storable.message}` }];
-    });
+  /** Turns a reader's IntakeFileError into the HTTP answer (413 or 422 with its rows); anything else goes on as it is. */
+  private fileRefusal(error: unknown): never {
+    if (!(error instanceof IntakeFileError)) throw error;
+    if (error.status === 413) throw new PayloadTooLargeException(error.message);
+    throw refusal(error.message, error.problems.length ? error.problems : [{ row: null, column: null, message: error.message }]);
   }
 
   private async latestUpload(prepared: PreparedIntake, transaction?: Transaction): Promise<IntakeUploadRow | null> {
     return this.uploads.findOne({ where: { siteId: prepared.site.id, roundId: prepared.round.id }, order: [['id', 'DESC']], transaction });
   }
 
-  /** The incoming values worth writing and the plan against what is stored. */
-  private plan(prepared: PreparedIntake, stored: readonly StoredObservation[]): { values: IntakeValue[]; plan: ChangePlan; storedByKey: Map<string, StoredObservation> } {
-    const storedByKey = new Map(stored.map((value) => [keyOf(value), value]));
-    const values = prepared.values.filter((value) => worthWriting(value, storedByKey));
-    const withNotes = prepared.mapping.notes !== null;
-    const existing: ExistingValue[] = stored.map(({ plotId, measureId, valueText, censored, missingReason, notes }) =>
-      withNotes ? { plotId, measureId, valueText, censored, missingReason, notes } : { plotId, measureId, valueText, censored, missingReason },
-    );
-    return { values, plan: planChanges(values, existing), storedByKey };
+  private context(prepared: PreparedIntake, user: AuthUser | null, uploadId: number | null): BulkWriteContext {
+    return {
+      trialId: prepared.trial.id,
+      siteId: prepared.site.id,
+      roundId: prepared.round.id,
+      userId: user?.id ?? null,
+      uploadId,
+      at: new Date(),
+      withNotes: prepared.mapping.notes !== null,
+      method: this.config.bulkLoad,
+    };
   }
 
-  private result(dryRun: boolean, prepared: PreparedIntake, plan: ChangePlan, identicalToPrevious: boolean, message: string): IntakeResult {
+  /** Nothing stored yet: every value in the spool is new, listed from the first ones kept in memory. */
+  private freshComparison(prepared: PreparedIntake): BulkComparison {
+    const listed = prepared.firstValues.map((value) => ({
+      kind: 'new' as const,
+      plotLabel: value.plotLabel,
+      measureCode: value.measureCode,
+      before: null,
+      after: { valueText: value.valueText, censored: value.censored, missingReason: value.missingReason },
+    }));
+    return { created: prepared.spool.values.lines, updated: 0, unchanged: 0, listed };
+  }
+
+  private result(dryRun: boolean, prepared: PreparedIntake, comparison: BulkComparison, identicalToPrevious: boolean, message: string, ticket: string): IntakeResult {
+    const changes: IntakeChange[] = comparison.listed.map(({ kind, plotLabel, measureCode, before, after }) => ({
+      plotLabel,
+      measureCode,
+      kind,
+      before: before === null ? null : describeStoredValue(before),
+      after: describeStoredValue(after),
+    }));
+    const total = comparison.created + comparison.updated + comparison.unchanged;
     return {
       dryRun,
-      created: plan.created,
-      updated: plan.updated,
-      unchanged: plan.unchanged,
+      created: comparison.created,
+      updated: comparison.updated,
+      unchanged: comparison.unchanged,
       warnings: [...prepared.warnings],
-      changes: plan.changes.map(({ plotLabel, measureCode, kind, before, after }) => ({ plotLabel, measureCode, kind, before, after })),
+      changes,
+      changesOmitted: Math.max(0, total - changes.length),
       identicalToPrevious,
       message,
+      ticket,
     };
   }
 
@@ -223,70 +385,94 @@ export class IntakeService {
     return `This file is byte for byte the one committed for ${prepared.site.name}, ${prepared.round.label} on ${previous.createdAt.toISOString().slice(0, 10)}; nothing was changed.`;
   }
 
-  private async dryRun(prepared: PreparedIntake): Promise<IntakeResult> {
+  /** Compares with the stored values (in the database, on a staging table) and writes nothing. */
+  private async dryRun(prepared: PreparedIntake, progress: ImportProgress): Promise<IntakeResult> {
+    await progress.stage('comparing', { message: 'Comparing with the values already stored…', valuesTotal: prepared.spool.values.lines + prepared.spool.blanks.lines });
     const previous = await this.latestUpload(prepared);
-    const { plan } = this.plan(prepared, await this.store.storedForSite(prepared.trial.id, prepared.site.id, prepared.round.id));
-    const identical = previous?.sha256 === prepared.sha256;
-    const valueWarnings = valueWarningsOf(prepared).length;
-    const warned = valueWarnings ? ` ${plural(valueWarnings, 'warning needs', 'warnings need')} acceptWarnings=true.` : '';
+    const identical = previous?.sha256 === prepared.reading.sha256;
+    const comparison = await this.sequelize.transaction({ isolationLevel: Transaction.ISOLATION_LEVELS.READ_COMMITTED }, async (transaction) => {
+      const stored = await this.bulk.countStored(transaction, prepared.trial.id, prepared.site.id, prepared.round.id);
+      if (stored === 0) return this.freshComparison(prepared);
+      try {
+        await this.bulk.stage(transaction, this.context(prepared, null, null), prepared.spool);
+        return await this.bulk.compareStaged(transaction, INTAKE_CHANGE_LIST_CAP);
+      } finally {
+        await this.bulk.dropStage(transaction);
+      }
+    });
+    const warned = prepared.valueWarnings ? ` ${plural(prepared.valueWarnings, 'warning needs', 'warnings need')} acceptWarnings=true.` : '';
     const message = identical
-      ? this.identicalMessage(prepared, previous)
-      : `Nothing was written (dry run). Committing would add ${plural(plan.created, 'new value', 'new values')}, change ${count(plan.updated)} and leave ${count(plan.unchanged)} unchanged.${warned}`;
-    return this.result(true, prepared, plan, identical, message);
+      ? this.identicalMessage(prepared, previous!)
+      : `Nothing was written (dry run). Committing would add ${plural(comparison.created, 'new value', 'new values')}, change ${count(comparison.updated)} and leave ${count(comparison.unchanged)} unchanged.${warned}`;
+    return this.result(true, prepared, comparison, identical, message, progress.ticket);
   }
 
-  private async commit(prepared: PreparedIntake, user: AuthUser, upload: IntakeUpload, transaction: Transaction): Promise<IntakeResult> {
+  private async commit(prepared: PreparedIntake, user: AuthUser, upload: IntakeUpload, progress: ImportProgress): Promise<IntakeResult> {
     const { trial, site, round } = prepared;
-    await this.gate.openForWrite(trial.id, transaction);
-    const previous = await this.latestUpload(prepared, transaction);
-    if (previous?.sha256 === prepared.sha256) {
-      const empty: ChangePlan = { created: 0, updated: 0, unchanged: prepared.values.length, changes: [] };
-      return this.result(false, prepared, empty, true, this.identicalMessage(prepared, previous));
-    }
-    const { values, plan, storedByKey } = this.plan(prepared, await this.store.storedForSite(trial.id, site.id, round.id, transaction));
-    const at = new Date();
-    const row = await this.uploads.create(
-      {
-        trialId: trial.id,
-        siteId: site.id,
-        roundId: round.id,
-        userId: user.id,
-        sha256: prepared.sha256,
-        fileName: upload.fileName.slice(0, 255),
-        sizeBytes: upload.bytes.length,
-        rowsRead: prepared.rowsRead,
-        createdCount: plan.created,
-        updatedCount: plan.updated,
-        unchangedCount: plan.unchanged,
-        warningsAccepted: valueWarningsOf(prepared).length,
-      },
-      { transaction },
-    );
-    const keepNotes = prepared.mapping.notes === null;
-    const writes = values.flatMap((value, index) => {
-      if (plan.changes[index]!.kind === 'unchanged') return [];
-      const before = storedByKey.get(keyOf(value)) ?? null;
-      const next: ValueToWrite = {
-        plotId: value.plotId,
-        measureId: value.measureId,
-        valueText: value.valueText,
-        censored: value.censored,
-        missingReason: value.missingReason,
-        notes: keepNotes ? (before?.notes ?? null) : value.notes,
-      };
-      return [{ value: next, before }];
+    return this.sequelize.transaction({ isolationLevel: Transaction.ISOLATION_LEVELS.READ_COMMITTED }, async (transaction) => {
+      await this.gate.openForWrite(trial.id, transaction);
+      const previous = await this.latestUpload(prepared, transaction);
+      if (previous?.sha256 === prepared.reading.sha256) {
+        const total = prepared.spool.values.lines;
+        return this.result(false, prepared, { created: 0, updated: 0, unchanged: total, listed: [] }, true, this.identicalMessage(prepared, previous), progress.ticket);
+      }
+      await progress.stage('comparing', { message: 'Comparing with the values already stored…', valuesTotal: prepared.spool.values.lines + prepared.spool.blanks.lines });
+      const stored = await this.bulk.lockStored(transaction, trial.id, site.id, round.id);
+      const probe = this.context(prepared, user, null);
+      let comparison: BulkComparison;
+      if (stored === 0) comparison = this.freshComparison(prepared);
+      else {
+        await this.bulk.stage(transaction, probe, prepared.spool);
+        comparison = await this.bulk.compareStaged(transaction, INTAKE_CHANGE_LIST_CAP);
+      }
+      try {
+        const row = await this.uploads.create(
+          {
+            trialId: trial.id,
+            siteId: site.id,
+            roundId: round.id,
+            userId: user.id,
+            sha256: prepared.reading.sha256,
+            fileName: upload.fileName.slice(0, 255),
+            sizeBytes: Math.min(sourceSize(upload.source), 4_294_967_295),
+            rowsRead: prepared.rowsRead,
+            createdCount: comparison.created,
+            updatedCount: comparison.updated,
+            unchangedCount: comparison.unchanged,
+            warningsAccepted: prepared.valueWarnings,
+          },
+          { transaction },
+        );
+        const writing = comparison.created + comparison.updated;
+        await progress.stage('writing', { message: `Writing ${plural(writing, 'value', 'values')} and their history…`, valuesTotal: writing, valuesDone: 0 });
+        const context = { ...probe, uploadId: row.id };
+        if (stored === 0) await this.bulk.insertFresh(transaction, context, prepared.spool.values);
+        else await this.bulk.mergeStaged(transaction, context);
+        await this.columns.remember(transaction, trial.id, user.id, prepared.mapping.choices, prepared.automatic.choices);
+        const counts = `${plural(comparison.created, 'new value', 'new values')}, ${count(comparison.updated)} changed, ${count(comparison.unchanged)} unchanged`;
+        await this.activity.record(transaction, {
+          trialId: trial.id,
+          userId: user.id,
+          kind: 'intake.committed',
+          siteId: site.id,
+          summary: `Imported ${upload.fileName} for ${site.name}, ${round.label}: ${counts}.`,
+          details: {
+            uploadId: row.id,
+            roundId: round.id,
+            fileName: upload.fileName,
+            sha256: prepared.reading.sha256,
+            sheet: prepared.reading.sheet,
+            created: comparison.created,
+            updated: comparison.updated,
+            unchanged: comparison.unchanged,
+            warningsAccepted: prepared.valueWarnings,
+          },
+        });
+        return this.result(false, prepared, comparison, false, `Saved ${upload.fileName} for ${site.name}, ${round.label}: ${counts}.`, progress.ticket);
+      } finally {
+        if (stored > 0) await this.bulk.dropStage(transaction);
+      }
     });
-    await this.store.write(transaction, { trialId: trial.id, roundId: round.id, userId: user.id, source: 'upload', uploadId: row.id, at }, writes);
-    const counts = `${plural(plan.created, 'new value', 'new values')}, ${count(plan.updated)} changed, ${count(plan.unchanged)} unchanged`;
-    await this.activity.record(transaction, {
-      trialId: trial.id,
-      userId: user.id,
-      kind: 'intake.committed',
-      siteId: site.id,
-      summary: `Imported ${upload.fileName} for ${site.name}, ${round.label}: ${counts}.`,
-      details: { uploadId: row.id, roundId: round.id, fileName: upload.fileName, sha256: prepared.sha256, created: plan.created, updated: plan.updated, unchanged: plan.unchanged, warningsAccepted: valueWarningsOf(prepared).length },
-    });
-    return this.result(false, prepared, plan, false, `Saved ${upload.fileName} for ${site.name}, ${round.label}: ${counts}.`);
   }
 
   /** The receipt goes after the commit; a mail server that is down does not undo the upload. */
@@ -304,7 +490,7 @@ export class IntakeService {
           created: result.created,
           updated: result.updated,
           unchanged: result.unchanged,
-          warningsAccepted: valueWarningsOf(prepared).length,
+          warningsAccepted: prepared.valueWarnings,
           committedAt: new Date(),
           link: `${this.mailSettings.appUrl}/trials/${prepared.trial.id}/ledger?site=${prepared.site.id}&round=${prepared.round.id}`,
         }),

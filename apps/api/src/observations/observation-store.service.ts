@@ -34,7 +34,7 @@ export interface WriteContext {
 const BATCH_ROWS = 2000;
 
 const observationColumns =
-  'trial_id, plot_id, round_id, measure_id, value_text, value_decimal, censored, missing_reason, notes, version, source, recorded_by, recorded_at, created_at, updated_at';
+  'trial_id, plot_id, round_id, measure_id, value_text, value_decimal, censored, missing_reason, notes, version, source, upload_id, recorded_by, recorded_at, created_at, updated_at';
 
 function chunks<T>(items: readonly T[], size = BATCH_ROWS): T[][] {
   const out: T[][] = [];
@@ -116,16 +116,16 @@ export class ObservationStoreService {
     const replaced = changes.map((change, index) => ({ ...change, index })).filter((change) => change.before !== null);
     for (const batch of chunks(fresh)) {
       const rows = await this.sequelize.query<{ id: number }>(
-        `INSERT INTO observations (${observationColumns}) VALUES ${batch.map(() => '(?,?,?,?,?,?,?,?,?,1,?,?,?,?,?)').join(',')} RETURNING id`,
+        `INSERT INTO observations (${observationColumns}) VALUES ${batch.map(() => '(?,?,?,?,?,?,?,?,?,1,?,?,?,?,?,?)').join(',')} RETURNING id`,
         { replacements: batch.flatMap(({ value }) => this.rowValues(context, value)), type: QueryTypes.SELECT, transaction },
       );
       rows.forEach((row, position) => (ids[batch[position]!.index] = Number(row.id)));
     }
     for (const batch of chunks(replaced)) {
       await this.sequelize.query(
-        `INSERT INTO observations (id, ${observationColumns}) VALUES ${batch.map(() => '(?,?,?,?,?,?,?,?,?,?,1,?,?,?,?,?)').join(',')}
+        `INSERT INTO observations (id, ${observationColumns}) VALUES ${batch.map(() => '(?,?,?,?,?,?,?,?,?,?,1,?,?,?,?,?,?)').join(',')}
          ON DUPLICATE KEY UPDATE value_text = VALUES(value_text), value_decimal = VALUES(value_decimal), censored = VALUES(censored),
-           missing_reason = VALUES(missing_reason), notes = VALUES(notes), version = version + 1, source = VALUES(source),
+           missing_reason = VALUES(missing_reason), notes = VALUES(notes), version = version + 1, source = VALUES(source), upload_id = VALUES(upload_id),
            recorded_by = VALUES(recorded_by), recorded_at = VALUES(recorded_at), updated_at = VALUES(updated_at)`,
         { replacements: batch.flatMap(({ value, before }) => [before!.id, ...this.rowValues(context, value)]), type: QueryTypes.INSERT, transaction },
       );
@@ -147,6 +147,7 @@ export class ObservationStoreService {
       value.missingReason,
       value.notes,
       context.source,
+      context.uploadId,
       context.userId,
       context.at,
       context.at,

@@ -12,7 +12,9 @@ import {
 } from '@nestjs/common';
 import type { Request, Response } from 'express';
 import multer, { MulterError } from 'multer';
-import type { Observable } from 'rxjs';
+import { rm } from 'node:fs/promises';
+import { tmpdir } from 'node:os';
+import { finalize, type Observable } from 'rxjs';
 
 export interface SingleFileUploadOptions {
   /** The multipart form field that carries the file, e.g. `file`. */
@@ -21,6 +23,12 @@ export interface SingleFileUploadOptions {
   configToken: string | symbol;
   /** What the file is, for messages: "a CSV file", "a photo". */
   what: string;
+  /**
+   * 'memory' (the default) hands the route `file.buffer`; 'disk' streams the upload into the
+   * config's `workDir` (else the system's temporary folder), hands the route `file.path`, and removes
+   * the file once the route has answered — for uploads too large to hold in memory.
+   */
+  storage?: 'memory' | 'disk';
 }
 
 export function formatMegabytes(bytes: number): string {
@@ -41,8 +49,9 @@ function refusal(error: unknown, options: SingleFileUploadOptions, maxBytes: num
 }
 
 /**
- * Single file upload — an interceptor that reads one multipart file into memory, refusing a file
- * over the configured size with 413 and a sentence (multer's LIMIT_FILE_SIZE), before the route runs.
+ * Single file upload — an interceptor that reads one multipart file into memory (or onto disk),
+ * refusing a file over the configured size with 413 and a sentence (multer's LIMIT_FILE_SIZE),
+ * before the route runs.
  *
  * Purpose: Intake and photos both take one file; the size limit comes from their own config.
  * Reference: multer's limits (https://github.com/expressjs/multer#limits).
@@ -52,16 +61,21 @@ function refusal(error: unknown, options: SingleFileUploadOptions, maxBytes: num
 export function SingleFileUpload(options: SingleFileUploadOptions): Type<NestInterceptor> {
   @Injectable()
   class SingleFileUploadInterceptor implements NestInterceptor {
-    constructor(@Inject(options.configToken) private readonly config: { maxBytes: number }) {}
+    constructor(@Inject(options.configToken) private readonly config: { maxBytes: number; workDir?: string }) {}
 
     async intercept(context: ExecutionContext, next: CallHandler): Promise<Observable<unknown>> {
       const http = context.switchToHttp();
+      const request = http.getRequest<Request>();
       const maxBytes = this.config.maxBytes;
-      const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: maxBytes, files: 1, fields: 20 } }).single(options.field);
+      const storage = options.storage === 'disk' ? multer.diskStorage({ destination: this.config.workDir ?? tmpdir() }) : multer.memoryStorage();
+      const upload = multer({ storage, limits: { fileSize: maxBytes, files: 1, fields: 20 } }).single(options.field);
       await new Promise<void>((resolve, reject) => {
-        upload(http.getRequest<Request>(), http.getResponse<Response>(), (error: unknown) => (error ? reject(refusal(error, options, maxBytes)) : resolve()));
+        upload(request, http.getResponse<Response>(), (error: unknown) => (error ? reject(refusal(error, options, maxBytes)) : resolve()));
       });
-      return next.handle();
+      const path = request.file?.path;
+      if (!path) return next.handle();
+      // The route has read the file by the time its answer goes out; a file left behind would fill the disk.
+      return next.handle().pipe(finalize(() => void rm(path, { force: true })));
     }
   }
   return mixin(SingleFileUploadInterceptor);

@@ -60,6 +60,12 @@ export class ProblemFilter implements ExceptionFilter {
       this.logger.error(exception instanceof Error ? (exception.stack ?? exception.message) : String(exception));
     }
     if (response.headersSent) return;
+    if (body.statusCode === HttpStatus.TOO_MANY_REQUESTS) {
+      // Every 429 says when to come back: the lockout's own time, the throttler's, or a minute.
+      const own = (exception as { retryAfterSeconds?: unknown }).retryAfterSeconds;
+      if (typeof own === 'number') response.setHeader('Retry-After', String(own));
+      else if (!response.getHeader('Retry-After')) response.setHeader('Retry-After', '60');
+    }
     response.status(body.statusCode).json(body);
   }
 }

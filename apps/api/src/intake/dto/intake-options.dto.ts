@@ -1,5 +1,5 @@
 import { ApiPropertyOptional } from '@nestjs/swagger';
-import { IsIn, IsOptional, IsString, MaxLength } from 'class-validator';
+import { IsIn, IsOptional, IsString, Matches, MaxLength } from 'class-validator';
 
 const FLAGS = ['true', 'false', '1', '0'] as const;
 
@@ -24,6 +24,20 @@ export class IntakeOptionsDto {
   @IsString({ message: 'mapping must be JSON text' })
   @MaxLength(20_000, { message: 'mapping must be at most 20000 characters' })
   mapping?: string;
+
+  @ApiPropertyOptional({
+    description: 'A name of your choosing for this upload (8 to 64 letters, digits or dashes), to follow it at GET /api/trials/:trialId/intake-imports/:ticket while it runs.',
+    example: '3f0c9a52-8d0e-4f7b-9a55-0a4d7c2e1b6f',
+  })
+  @IsOptional()
+  @Matches(/^[A-Za-z0-9-]{8,64}$/, { message: 'ticket must be 8 to 64 letters, digits or dashes' })
+  ticket?: string;
+
+  @ApiPropertyOptional({ description: 'For a workbook: the sheet to read (its tab name). The first visible sheet when left out.', example: 'Day 14' })
+  @IsOptional()
+  @IsString({ message: 'sheet must be text' })
+  @MaxLength(100, { message: 'sheet must be at most 100 characters' })
+  sheet?: string;
 }
 
 /** The column overrides of the mapping step, or a sentence saying why they cannot be read. */

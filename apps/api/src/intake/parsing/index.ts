@@ -1,8 +1,9 @@
 // Intake's pure core: reading, mapping and checking an uploaded CSV file (no database, no Nest).
 export { IntakeFileError, type IntakeFileStatus } from './intake-file.error';
-export { decodeCsvText } from './decode-csv-text';
+export { CsvReader, type RawRow } from './csv-reader';
+export { HEADER_SEARCH_ROWS, readHeaderCells, TableRows, type SourceRow, type TableHeader, type TableRow } from './table-rows';
 export { readDecimalText, type DecimalTextProblem, type DecimalTextReading } from './decimal-text';
-export { INTAKE_MAX_BYTES, INTAKE_MAX_CELL_CHARACTERS, INTAKE_MAX_COLUMNS, readCsvFile, type CsvDelimiter, type CsvFile } from './read-csv-file';
+export { DecimalMarkCount, INTAKE_MAX_BYTES, INTAKE_MAX_CELL_CHARACTERS, INTAKE_MAX_COLUMNS, readCsvFile, tooLarge, type CsvDelimiter, type CsvFile } from './read-csv-file';
 export { convertDecimalText, unitFactor, type UnitFactor } from './unit-factor';
 export {
   COLUMN_ROLES,
@@ -12,13 +13,20 @@ export {
   type ColumnMapping,
   type ColumnOverrides,
   type ColumnRole,
+  type IdentityColumnAt,
   type MeasureColumn,
 } from './map-columns';
 export { looksLikeFormula, neutraliseFormula } from './neutralise-formula';
 export { parseCellValue, type CellOptions, type CellValue } from './parse-value';
 export {
   INTAKE_PROBLEM_CAP,
+  IntakeChecker,
+  SitePlotIndex,
+  plotLabelKey,
   validateIntake,
+  type IntakeCheckerOptions,
+  type OtherSiteLookup,
+  type StorageChecks,
   type IntakeValidation,
   type IntakeValidationInput,
   type IntakeValue,

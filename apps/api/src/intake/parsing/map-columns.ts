@@ -1,10 +1,12 @@
 import type { IntakeProblem, Measure } from '@friable/contracts';
-import { findUnit, parseUnitFromHeader } from '@friable/field';
+import { DATA_COLUMNS, IDENTITY_COLUMNS, dataColumnOfHeader, findUnit, normaliseHeader, parseUnitFromHeader } from '@friable/field';
 import { unitFactor } from './unit-factor';
 
-/** The columns that are not measures. */
-export const COLUMN_ROLES = ['plotLabel', 'block', 'treatment', 'notes', 'missingReason'] as const;
-export type ColumnRole = (typeof COLUMN_ROLES)[number];
+export { normaliseHeader };
+
+/** The columns that are not measures: plotLabel, block, treatment, notes, missingReason (and any identity column a design adds). */
+export const COLUMN_ROLES: readonly string[] = DATA_COLUMNS.map((column) => column.role);
+export type ColumnRole = string;
 
 export interface MeasureColumn {
   readonly measureId: number;
@@ -19,17 +21,28 @@ export interface MeasureColumn {
   readonly problems: readonly IntakeProblem[];
 }
 
+/** An identity column other than the plot label (block, treatment code, …): checked against the plot plan. */
+export interface IdentityColumnAt {
+  readonly role: string;
+  readonly index: number;
+  readonly header: string;
+}
+
 export interface ColumnMapping {
   readonly plotLabel: number | null;
   readonly block: number | null;
   readonly treatment: number | null;
   readonly notes: number | null;
   readonly missingReason: number | null;
+  /** Every identity column the file has besides the plot label, in file order. */
+  readonly identity: readonly IdentityColumnAt[];
   readonly measures: readonly MeasureColumn[];
   /** Headers of the columns nothing reads (empty headers left out). */
   readonly unmapped: readonly string[];
   /** Every mapping problem, those of the measure columns included. They are errors: nothing is written while any remain. */
   readonly problems: readonly IntakeProblem[];
+  /** What each named column was read as (header → role, measure code or null), to be remembered for the trial's next upload. */
+  readonly choices: Readonly<Record<string, string | null>>;
 }
 
 /**
@@ -38,29 +51,8 @@ export interface ColumnMapping {
  */
 export type ColumnOverrides = Readonly<Record<string, ColumnRole | string | null>>;
 
-const roleSpellings: Record<ColumnRole, readonly string[]> = {
-  plotLabel: ['plot label', 'plot', 'label', 'plot id'],
-  block: ['block', 'rep', 'replicate'],
-  treatment: ['treatment code', 'treatment', 'trt'],
-  notes: ['notes', 'note', 'comments', 'comment', 'remarks'],
-  missingReason: ['missing reason', 'reason', 'reason missing', 'why missing'],
-};
-const roleWords: Record<ColumnRole, string> = {
-  plotLabel: 'the plot label',
-  block: 'the block',
-  treatment: 'the treatment code',
-  notes: 'the notes',
-  missingReason: 'the reason a value is missing',
-};
-
-/** Case, spaces, underscores and hyphens do not matter when headers are matched. */
-export function normaliseHeader(text: string): string {
-  return text.trim().toLowerCase().replace(/[\s_-]+/g, ' ');
-}
-
-function roleOfHeader(key: string): ColumnRole | undefined {
-  return COLUMN_ROLES.find((role) => roleSpellings[role].includes(key));
-}
+const roleWords: Record<string, string> = Object.fromEntries(DATA_COLUMNS.map((column) => [column.role, column.words]));
+const identityRoles = new Set(IDENTITY_COLUMNS.map((column) => column.role));
 
 function measureNamed(measures: readonly Measure[], key: string): Measure | undefined {
   return measures.find((measure) => normaliseHeader(measure.name) === key || normaliseHeader(measure.code) === key);
@@ -75,7 +67,7 @@ type Target = { role: ColumnRole } | { measure: Measure; unitText: string | null
 
 function matchHeader(header: string, measures: readonly Measure[]): Target {
   const key = normaliseHeader(header);
-  const role = roleOfHeader(key);
+  const role = dataColumnOfHeader(header)?.role;
   if (role) return { role };
   const whole = measureNamed(measures, key);
   if (whole) return { measure: whole, unitText: null };
@@ -85,7 +77,7 @@ function matchHeader(header: string, measures: readonly Measure[]): Target {
 }
 
 function overrideTarget(header: string, target: string, measures: readonly Measure[]): Target | string {
-  if ((COLUMN_ROLES as readonly string[]).includes(target)) return { role: target as ColumnRole };
+  if (COLUMN_ROLES.includes(target)) return { role: target };
   const measure = measures.find((candidate) => candidate.code.toLowerCase() === target.trim().toLowerCase());
   if (!measure) return `Column "${header}" is mapped to "${target}", which is not a measure of this round.`;
   const wholeHeaderIsTheMeasure = measureNamed([measure], normaliseHeader(header)) !== undefined;
@@ -101,14 +93,22 @@ function overrideTarget(header: string, target: string, measures: readonly Measu
  * and the unit in parentheses or brackets. A unit Friable knows is converted ("drain time (min)"
  * for a measure in s); a unit it does not know, or one of another kind, is a problem naming the
  * column. `overrides` (header → role, measure code, or null to ignore) come from the browser's
- * mapping step and win over the matching.
+ * mapping step and win over the matching; `remembered` choices (the trial's earlier uploads) come
+ * next, and one that no longer fits the round (a measure it does not take) is passed over silently.
  * Reference: unit spellings of @friable/field's MEASURE_UNITS.
  * Throws: nothing; every difficulty is in `problems` (row null, column = the header).
  * Example: `mapColumns(['plot label', 'drain time (min)'], [drainTime])` →
  * `{ plotLabel: 0, measures: [{ measureId: 1, index: 1, header: 'drain time (min)', headerUnitId: 'min', factor: '60', problems: [] }], unmapped: [], problems: [], … }`
  */
-export function mapColumns(headers: readonly string[], measures: readonly Measure[], overrides: ColumnOverrides = {}): ColumnMapping {
+export function mapColumns(
+  headers: readonly string[],
+  measures: readonly Measure[],
+  overrides: ColumnOverrides = {},
+  remembered: ColumnOverrides = {},
+): ColumnMapping {
   const problems: IntakeProblem[] = [];
+  const choices: Record<string, string | null> = {};
+  const identity: IdentityColumnAt[] = [];
   const roles = new Map<ColumnRole, number>();
   const measureColumns: MeasureColumn[] = [];
   const unmapped: string[] = [];
@@ -126,16 +126,19 @@ export function mapColumns(headers: readonly string[], measures: readonly Measur
 
   headers.forEach((header, index) => {
     if (header === '') return;
-    const override = Object.hasOwn(overrides, header) ? overrides[header] : undefined;
-    const target = override === undefined ? matchHeader(header, measures) : override === null ? null : overrideTarget(header, override, measures);
+    const target = targetOf(header, measures, overrides, remembered);
     if (typeof target === 'string') {
       problems.push({ row: null, column: header, message: target });
       return;
     }
+    choices[header] = target === null ? null : 'role' in target ? target.role : target.measure.code;
     if (target === null) {
       unmapped.push(header);
     } else if ('role' in target) {
-      if (claim(target.role, header, roleWords[target.role])) roles.set(target.role, index);
+      if (claim(target.role, header, roleWords[target.role]!)) {
+        roles.set(target.role, index);
+        if (identityRoles.has(target.role) && target.role !== 'plotLabel') identity.push(Object.freeze({ role: target.role, index, header }));
+      }
     } else if (claim(`measure:${target.measure.id}`, header, target.measure.name)) {
       const unit = unitFactor(target.unitText, header, target.measure);
       const columnProblems: IntakeProblem[] = unit.ok ? [] : [{ row: null, column: header, message: unit.message }];
@@ -167,8 +170,25 @@ export function mapColumns(headers: readonly string[], measures: readonly Measur
     treatment: roles.get('treatment') ?? null,
     notes: roles.get('notes') ?? null,
     missingReason: roles.get('missingReason') ?? null,
+    identity: Object.freeze(identity),
     measures: Object.freeze(measureColumns),
     unmapped: Object.freeze(unmapped),
     problems: Object.freeze(problems.map((problem) => Object.freeze(problem))),
+    choices: Object.freeze(choices),
   });
+}
+
+/** The person's choice for the header, else the trial's remembered one while it still fits, else the automatic match. */
+function targetOf(header: string, measures: readonly Measure[], overrides: ColumnOverrides, remembered: ColumnOverrides): Target | string {
+  if (Object.hasOwn(overrides, header)) {
+    const override = overrides[header];
+    return override === null || override === undefined ? null : overrideTarget(header, override, measures);
+  }
+  if (Object.hasOwn(remembered, header)) {
+    const choice = remembered[header];
+    if (choice === null) return null;
+    const target = choice === undefined ? null : overrideTarget(header, choice, measures);
+    if (target !== null && typeof target !== 'string') return target;
+  }
+  return matchHeader(header, measures);
 }

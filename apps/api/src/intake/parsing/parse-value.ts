@@ -1,6 +1,8 @@
 import type { Measure } from '@friable/contracts';
 import { findUnit } from '@friable/field';
-import Decimal from 'decimal.js';
+import type Decimal from 'decimal.js';
+import { MeasurementDecimal } from '../../common/input/measurement-decimal';
+import { numberBoundMessage, shownNumber } from '../../common/input/number-bounds';
 import { readDecimalText, type DecimalTextProblem } from './decimal-text';
 import { looksLikeFormula } from './neutralise-formula';
 import { convertDecimalText } from './unit-factor';
@@ -33,6 +35,7 @@ const leftCensoredPrefix = /^(?:<=|<|≤)/;
 const freezeError = (message: string): CellValue => Object.freeze({ kind: 'error', message });
 
 function notANumber(typed: string, problem: DecimalTextProblem): string {
+  if (problem === 'too-large' || problem === 'too-small' || problem === 'too-many-digits') return numberBoundMessage(`"${shownNumber(typed)}"`, problem);
   if (problem === 'comma-in-point-file') {
     return `"${typed}" is not a number here: this file uses a point as the decimal mark (write ${typed.replace(',', '.')}) and no thousands separators.`;
   }
@@ -44,14 +47,49 @@ function notANumber(typed: string, problem: DecimalTextProblem): string {
   return `"${typed}" is not a number.`;
 }
 
+const suffixes = new Map<string, string>();
+
 /** The unit after a number in a message: " s", " g/cm³"; nothing for scores and counts ("7", not "7 score"). */
 function unitSuffix(unitId: string): string {
-  if (unitId === 'score' || unitId === 'count') return '';
-  return ` ${findUnit(unitId)?.symbol ?? unitId}`;
+  let suffix = suffixes.get(unitId);
+  if (suffix === undefined) {
+    suffix = unitId === 'score' || unitId === 'count' ? '' : ` ${findUnit(unitId)?.symbol ?? unitId}`;
+    suffixes.set(unitId, suffix);
+  }
+  return suffix;
+}
+
+/** What the checks ask of a value: order and wholeness. */
+type Comparable = Pick<Decimal, 'lt' | 'gt' | 'isInteger' | 'isNegative'>;
+
+/** Canonical decimal text of at most 15 digits: distinct such decimals stay distinct, and in order, as doubles. */
+function isShortDecimal(text: string): boolean {
+  let digits = 0;
+  for (let index = 0; index < text.length; index += 1) {
+    const code = text.charCodeAt(index);
+    if (code >= 48 && code <= 57) digits += 1;
+    else if (code !== 46 && !(code === 45 && index === 0)) return false;
+  }
+  return digits > 0 && digits <= 15;
+}
+
+/**
+ * The value for the checks: a double when the text has at most 15 digits (every comparison with
+ * a limit is then exact, and a million cells cost no decimal objects), else a Decimal.
+ */
+function comparableValue(valueText: string): Comparable {
+  if (!isShortDecimal(valueText)) return new MeasurementDecimal(valueText);
+  const number = Number(valueText);
+  return {
+    lt: (other) => number < Number(other),
+    gt: (other) => number > Number(other),
+    isInteger: () => Number.isInteger(number),
+    isNegative: () => number < 0 || Object.is(number, -0),
+  } as Comparable;
 }
 
 /** Whole-number and scale rules of counts and scores. */
-function kindProblem(value: Decimal, shown: string, measure: Measure): string | null {
+function kindProblem(value: Comparable, shown: string, measure: Measure): string | null {
   if (measure.kind === 'count' && (!value.isInteger() || value.isNegative())) {
     return `${shown} is not a count: ${measure.name} must be a whole number, 0 or more.`;
   }
@@ -69,12 +107,12 @@ function rangeText(low: number | null, high: number | null, suffix: string): str
   return low !== null ? `at least ${low}${suffix}` : `at most ${high}${suffix}`;
 }
 
-function outside(value: Decimal, low: number | null, high: number | null): boolean {
+function outside(value: Comparable, low: number | null, high: number | null): boolean {
   return (low !== null && value.lt(String(low))) || (high !== null && value.gt(String(high)));
 }
 
 /** Cut-off, hard limits (errors) and the usual range (a warning). */
-function limitProblems(value: Decimal, censored: boolean, shown: string, measure: Measure): { error: string | null; warning: string | null } {
+function limitProblems(value: Comparable, censored: boolean, shown: string, measure: Measure): { error: string | null; warning: string | null } {
   const suffix = unitSuffix(measure.unit);
   if (measure.kind === 'time-with-cutoff' && measure.cutoff !== null && value.gt(String(measure.cutoff))) {
     const error = censored
@@ -125,7 +163,7 @@ export function parseCellValue(text: string, measure: Measure, { decimalComma, h
   }
   const converted = headerUnit !== null && headerUnit !== measure.unit;
   const valueText = converted ? convertDecimalText(reading.text, headerUnit, measure.unit) : reading.text;
-  const value = new Decimal(valueText);
+  const value = comparableValue(valueText);
   const shown = `${censored ? '>' : ''}${valueText}${unitSuffix(measure.unit)}${converted ? ` (${typed}${unitSuffix(headerUnit)})` : ''}`;
   const kindError = kindProblem(value, shown, measure);
   if (kindError) return freezeError(kindError);

@@ -1,8 +1,10 @@
 import type { IntakeProblem, Measure } from '@friable/contracts';
+import { IDENTITY_COLUMNS } from '@friable/field';
 import type { ColumnMapping, MeasureColumn } from './map-columns';
 import { templateHeader } from './map-columns';
 import { parseCellValue } from './parse-value';
 import type { CsvFile } from './read-csv-file';
+import type { TableRow } from './table-rows';
 
 /** Most errors (and, apart, warnings) listed; one more line says how many were left out. */
 export const INTAKE_PROBLEM_CAP = 500;
@@ -12,6 +14,8 @@ export interface SitePlot {
   readonly label: string;
   readonly block: number;
   readonly treatmentCode: string;
+  /** The plot's value for each identity column beyond block and treatment that a design adds (whole plot, sub-plot…). */
+  readonly identity?: Readonly<Record<string, string>>;
 }
 
 export interface IntakeValue {
@@ -30,6 +34,12 @@ export interface IntakeValue {
   readonly notes: string | null;
   /** Spreadsheet row number (the header is row 1). */
   readonly row: number;
+}
+
+/** Checks a value must pass to be stored (the table's limits), each a sentence or null. */
+export interface StorageChecks {
+  value(valueText: string): string | null;
+  reason(reason: string): string | null;
 }
 
 export interface IntakeValidationInput {
@@ -51,120 +61,90 @@ export interface IntakeValidation {
   readonly warnings: readonly IntakeProblem[];
 }
 
-const labelKey = (label: string): string => label.trim().toUpperCase();
+export const plotLabelKey = (label: string): string => {
+  const trimmed = label.trim();
+  const upper = trimmed.toUpperCase();
+  return upper === trimmed ? trimmed : upper;
+};
 
-function capped(problems: readonly IntakeProblem[]): readonly IntakeProblem[] {
-  const kept = problems.length > INTAKE_PROBLEM_CAP ? problems.slice(0, INTAKE_PROBLEM_CAP) : [...problems];
-  if (problems.length > INTAKE_PROBLEM_CAP) {
-    kept.push({ row: null, column: null, message: `…and ${problems.length - INTAKE_PROBLEM_CAP} more like these.` });
+/**
+ * The plots of one site by label, kept column by column so a site of a million plots fits in
+ * a few tens of megabytes.
+ */
+export class SitePlotIndex {
+  private readonly byKey = new Map<string, number>();
+  readonly ids: number[] = [];
+  readonly labels: string[] = [];
+  readonly blocks: number[] = [];
+  readonly treatmentCodes: string[] = [];
+  private readonly identities: Array<Readonly<Record<string, string>> | undefined> = [];
+  private readonly codes = new Map<string, string>();
+
+  static of(plots: readonly SitePlot[]): SitePlotIndex {
+    const index = new SitePlotIndex();
+    for (const plot of plots) index.add(plot);
+    return index;
   }
-  return Object.freeze(kept.map((problem) => Object.freeze(problem)));
-}
 
-interface RowContext {
-  readonly cells: readonly string[];
-  readonly row: number;
-  readonly headers: readonly string[];
-  readonly errors: IntakeProblem[];
-}
+  get size(): number {
+    return this.ids.length;
+  }
 
-function problemAt(context: RowContext, column: number | null, message: string): IntakeProblem {
-  const header = column === null ? null : context.headers[column]!;
-  return { row: context.row, column: header, message: `Row ${context.row}${header === null ? '' : `, ${header}`}: ${message}` };
-}
-
-/** Checks the block and treatment cells against the plot plan. */
-function checkPlan(context: RowContext, mapping: ColumnMapping, plot: SitePlot): void {
-  const blockText = mapping.block === null ? '' : context.cells[mapping.block]!.trim();
-  if (blockText !== '') {
-    const match = /^(?:block\s*|b)?(\d+)$/i.exec(blockText);
-    if (!match) context.errors.push(problemAt(context, mapping.block, `"${blockText}" is not a block number.`));
-    else if (Number(match[1]) !== plot.block) {
-      context.errors.push(problemAt(context, mapping.block, `plot ${plot.label} is in block ${plot.block} in the plot plan, not ${blockText}.`));
+  add(plot: SitePlot): void {
+    const position = this.ids.length;
+    this.byKey.set(plotLabelKey(plot.label), position);
+    this.ids.push(plot.id);
+    this.labels.push(plot.label);
+    this.blocks.push(plot.block);
+    // One string per treatment code, however many plots share it.
+    if (!this.codes.has(plot.treatmentCode)) this.codes.set(plot.treatmentCode, plot.treatmentCode);
+    this.treatmentCodes.push(this.codes.get(plot.treatmentCode)!);
+    if (plot.identity || this.identities.length > 0) {
+      this.identities.length = position;
+      this.identities.push(plot.identity);
     }
   }
-  const treatmentText = mapping.treatment === null ? '' : context.cells[mapping.treatment]!.trim();
-  if (treatmentText !== '' && treatmentText.toUpperCase() !== plot.treatmentCode.toUpperCase()) {
-    context.errors.push(
-      problemAt(context, mapping.treatment, `plot ${plot.label} is treatment ${plot.treatmentCode} in the plot plan, not ${treatmentText}.`),
-    );
+
+  /** The position of the plot with this label (case and surrounding spaces aside), or −1. */
+  find(label: string): number {
+    return this.byKey.get(label) ?? this.byKey.get(plotLabelKey(label)) ?? -1;
+  }
+
+  identity(position: number, role: string): string | undefined {
+    return this.identities[position]?.[role];
   }
 }
 
-/** Finds the row's plot, or says why there is none. */
-interface PlotLookup {
-  readonly sitePlots: ReadonlyMap<string, SitePlot>;
-  readonly trialPlots: IntakeValidationInput['trialPlotLabels'];
-  readonly firstRowOf: Map<number, number>;
+/** Where a label the site does not have belongs instead: the other site's name by label key, or nothing. */
+export type OtherSiteLookup = ReadonlyMap<string, string>;
+
+interface PendingPlotProblem {
+  readonly problem: { row: number; column: string; message: string };
+  readonly label: string;
 }
 
-function findPlot(context: RowContext, input: IntakeValidationInput, lookup: PlotLookup): SitePlot | null {
-  const column = input.mapping.plotLabel!;
-  const label = context.cells[column]!.trim();
-  if (label === '') {
-    context.errors.push(problemAt(context, column, 'the plot label is empty.'));
-    return null;
+const blockPattern = /^(?:block\s*|b)?(\d+)$/i;
+
+/** An identity column's check against the plot plan: the sentence for a disagreement, or null. */
+function identityProblem(role: string, typed: string, plots: SitePlotIndex, position: number): string | null {
+  const label = plots.labels[position]!;
+  if (role === 'block') {
+    const match = blockPattern.exec(typed);
+    if (!match) return `"${typed}" is not a block number.`;
+    const block = plots.blocks[position]!;
+    return Number(match[1]) === block ? null : `plot ${label} is in block ${block} in the plot plan, not ${typed}.`;
   }
-  const plot = lookup.sitePlots.get(labelKey(label));
-  if (!plot) {
-    const elsewhere = lookup.trialPlots.get(labelKey(label));
-    const message = elsewhere
-      ? `plot ${label} belongs to ${elsewhere.siteName}, not ${input.siteName}.`
-      : `there is no plot ${label} in this trial; check the label against the plot plan.`;
-    context.errors.push(problemAt(context, column, message));
-    return null;
+  if (role === 'treatment') {
+    const code = plots.treatmentCodes[position]!;
+    return typed.toUpperCase() === code.toUpperCase() ? null : `plot ${label} is treatment ${code} in the plot plan, not ${typed}.`;
   }
-  const firstRow = lookup.firstRowOf.get(plot.id);
-  if (firstRow !== undefined) {
-    context.errors.push(problemAt(context, column, `plot ${plot.label} is also on row ${firstRow}; each plot may appear once in a file.`));
-    return null;
-  }
-  lookup.firstRowOf.set(plot.id, context.row);
-  return plot;
+  const planned = plots.identity(position, role);
+  if (planned === undefined || planned.toUpperCase() === typed.toUpperCase()) return null;
+  const words = IDENTITY_COLUMNS.find((column) => column.role === role)?.words ?? role;
+  return `the plot plan gives plot ${label} ${planned} for ${words}, not ${typed}.`;
 }
 
-function readMeasureCells(
-  context: RowContext,
-  input: IntakeValidationInput,
-  plot: SitePlot | null,
-  measuresById: ReadonlyMap<number, Measure>,
-  out: { values: IntakeValue[]; warnings: IntakeProblem[] },
-): void {
-  const { mapping, file } = input;
-  const textAt = (index: number | null): string | null => {
-    const text = index === null ? '' : context.cells[index]!.trim();
-    return text === '' ? null : text;
-  };
-  const notes = textAt(mapping.notes);
-  const missingReason = textAt(mapping.missingReason);
-  for (const column of mapping.measures) {
-    if (column.problems.length > 0) continue;
-    const measure = measuresById.get(column.measureId)!;
-    const cell = parseCellValue(context.cells[column.index]!, measure, { decimalComma: file.decimalComma, headerUnit: column.headerUnitId });
-    if (cell.kind === 'error') {
-      context.errors.push(problemAt(context, column.index, cell.message));
-      continue;
-    }
-    if (cell.kind === 'value') out.warnings.push(...cell.warnings.map((warning) => problemAt(context, column.index, warning)));
-    if (!plot) continue;
-    out.values.push(
-      Object.freeze({
-        plotId: plot.id,
-        plotLabel: plot.label,
-        measureId: column.measureId,
-        measureCode: column.measureCode,
-        valueText: cell.kind === 'value' ? cell.valueText : null,
-        censored: cell.kind === 'value' && cell.censored,
-        missingReason: cell.kind === 'missing' ? missingReason : null,
-        blank: cell.kind === 'missing' && cell.blank,
-        notes,
-        row: context.row,
-      }),
-    );
-  }
-}
-
-function columnWarnings(mapping: ColumnMapping, roundMeasures: readonly Measure[]): IntakeProblem[] {
+function columnNotes(mapping: ColumnMapping, roundMeasures: readonly Measure[]): IntakeProblem[] {
   const present = new Set(mapping.measures.map((column: MeasureColumn) => column.measureId));
   const absent = roundMeasures.filter((measure) => !present.has(measure.id));
   return [
@@ -177,45 +157,247 @@ function columnWarnings(mapping: ColumnMapping, roundMeasures: readonly Measure[
   ];
 }
 
+/** A list that keeps its first 500 entries and counts the rest. */
+class CappedList {
+  readonly kept: IntakeProblem[] = [];
+  left = 0;
+
+  constructor(first: readonly IntakeProblem[] = []) {
+    for (const problem of first) this.add(problem);
+  }
+
+  get count(): number {
+    return this.kept.length + this.left;
+  }
+
+  add(problem: IntakeProblem): boolean {
+    if (this.kept.length < INTAKE_PROBLEM_CAP) {
+      this.kept.push(problem);
+      return true;
+    }
+    this.left += 1;
+    return false;
+  }
+
+  result(): readonly IntakeProblem[] {
+    const all = this.left > 0 ? [...this.kept, { row: null, column: null, message: `…and ${this.left} more like these.` }] : this.kept;
+    return Object.freeze(all.map((problem) => Object.freeze(problem)));
+  }
+}
+
+export interface IntakeCheckerOptions {
+  readonly mapping: ColumnMapping;
+  readonly headers: readonly string[];
+  readonly plots: SitePlotIndex;
+  readonly roundMeasures: readonly Measure[];
+  readonly siteName: string;
+  readonly decimalComma: boolean;
+  /** Every value of every row that has a plot, in file order (blank cells included). */
+  readonly onValue: (value: IntakeValue) => void;
+  readonly storage?: StorageChecks;
+}
+
 /**
- * Validate intake — checks every row of an uploaded file against the site's plot plan and the
- * round's measures, and lists every problem by row and column.
+ * Intake checker — checks an uploaded file row by row against the site's plot plan and the
+ * round's measures, handing each value on as soon as its row is read and listing every problem
+ * by row and column.
  *
- * Purpose: the all-or-nothing rule of Intake. Errors: the mapping's problems (no plot label
- * column, units Friable cannot convert, two columns for one measure), an empty or unknown plot
- * label, a plot of another site ("plot QH-B1-P03 belongs to Quarry Hill Garden, not Hollow
- * Lane"), a plot twice in the file (the later row names the earlier one), a block or treatment
- * that disagrees with the plot plan, and every value `parseCellValue` refuses. Warnings: values
- * outside the usual range, more decimals than usual, round measures without a column, columns
- * nothing reads. There is no early exit; each list stops at 500 with a line saying how many
- * more there are.
+ * Purpose: the all-or-nothing rule of Intake, for files of any length. Errors: the mapping's
+ * problems (no plot label column, units Friable cannot convert, two columns for one measure), an
+ * empty or unknown plot label, a plot of another site ("plot QH-B1-P03 belongs to Quarry Hill
+ * Garden, not Hollow Lane", filled in by `finish` once the caller has looked the labels up), a
+ * plot twice in the file (the later row names the earlier one), an identity column (block,
+ * treatment code, …) that disagrees with the plot plan, every value `parseCellValue` refuses, and
+ * values the table cannot store. Warnings: values outside the usual range, more decimals than
+ * usual, round measures without a column, columns nothing reads. There is no early exit; each
+ * list stops at 500 with a line saying how many more there are.
  *
- * Rows: `row` is the row number a spreadsheet shows for the file, so the header is row 1 and the
- * first data row is row 2 (blank rows count, a quoted line break does not). Columns: the header
- * as written in the file. Messages repeat both: `Row 4, drain time (s): "abc" is not a number.`
- * Plot labels match without regard to case or surrounding spaces.
- * Reference: the Intake issue's list of refusals; values from `parseCellValue`.
+ * Rows: `row` is the row number a spreadsheet shows for the file (the header is row 1 when the
+ * file starts with it). Columns: the header as written. Messages repeat both:
+ * `Row 4, drain time (s): "abc" is not a number.` Plot labels match without regard to case or
+ * surrounding spaces.
  * Throws: nothing; a mapping without a plot label column gives only the mapping's errors.
- * Example: `validateIntake({ file, mapping, sitePlots, trialPlotLabels, roundMeasures, siteName: 'Hollow Lane' }).errors`
+ * Example: `checker.check({ cells: ['HL-B2-P03', 'CTRL'], rowNumber: 4 })` with a treatment column →
+ * error `{ row: 4, column: 'treatment code', message: 'Row 4, treatment code: plot HL-B2-P03 is treatment GYP in the plot plan, not CTRL.' }`
+ */
+export class IntakeChecker {
+  private readonly errors: CappedList;
+  private readonly warnings: CappedList;
+  private readonly measuresById: ReadonlyMap<number, Measure>;
+  private readonly firstRowOf: Int32Array;
+  private readonly unknownPlots: PendingPlotProblem[] = [];
+  private readonly readableColumns: readonly MeasureColumn[];
+  private readonly columnNoteCount: number;
+  private rowsChecked = 0;
+  private valuesRead = 0;
+
+  constructor(private readonly options: IntakeCheckerOptions) {
+    this.errors = new CappedList(options.mapping.problems);
+    const notes = columnNotes(options.mapping, options.roundMeasures);
+    this.columnNoteCount = notes.length;
+    this.warnings = new CappedList(notes);
+    this.measuresById = new Map(options.roundMeasures.map((measure) => [measure.id, measure]));
+    this.firstRowOf = new Int32Array(options.plots.size);
+    this.readableColumns = options.mapping.measures.filter((column) => column.problems.length === 0);
+  }
+
+  get rows(): number {
+    return this.rowsChecked;
+  }
+
+  get values(): number {
+    return this.valuesRead;
+  }
+
+  get errorCount(): number {
+    return this.errors.count;
+  }
+
+  /** Warnings about values (they have a row); notes about columns have none. */
+  get valueWarningCount(): number {
+    return this.warnings.count - this.columnNoteCount;
+  }
+
+  /** A problem of a whole row found while reading it (values beyond the header). */
+  addRowProblem(problem: IntakeProblem): void {
+    this.errors.add(problem);
+  }
+
+  check(row: TableRow): void {
+    this.rowsChecked += 1;
+    const { mapping } = this.options;
+    if (mapping.plotLabel === null) return;
+    const position = this.findPlot(row);
+    if (position >= 0) this.checkIdentity(row, position);
+    this.readMeasureCells(row, position);
+  }
+
+  /** Labels of the rows whose plot the site does not have (at most 500): look up which site has them, then call `finish`. */
+  labelsToLookUp(): string[] {
+    return [...new Set(this.unknownPlots.map((pending) => pending.label))];
+  }
+
+  finish(otherSites: OtherSiteLookup = new Map()): Omit<IntakeValidation, 'values'> {
+    for (const { problem, label } of this.unknownPlots) {
+      const elsewhere = otherSites.get(plotLabelKey(label));
+      const text = elsewhere
+        ? `plot ${label} belongs to ${elsewhere}, not ${this.options.siteName}.`
+        : `there is no plot ${label} in this trial; check the label against the plot plan.`;
+      problem.message = `Row ${problem.row}, ${problem.column}: ${text}`;
+    }
+    return Object.freeze({ errors: this.errors.result(), warnings: this.warnings.result() });
+  }
+
+  private problemAt(row: TableRow, column: number | null, message: string): IntakeProblem {
+    const header = column === null ? null : this.options.headers[column]!;
+    return { row: row.rowNumber, column: header, message: `Row ${row.rowNumber}${header === null ? '' : `, ${header}`}: ${message}` };
+  }
+
+  /** The row's plot position, or −1 (the reason is among the errors). */
+  private findPlot(row: TableRow): number {
+    const column = this.options.mapping.plotLabel!;
+    const label = row.cells[column]!.trim();
+    if (label === '') {
+      this.errors.add(this.problemAt(row, column, 'the plot label is empty.'));
+      return -1;
+    }
+    const { plots } = this.options;
+    const position = plots.find(label);
+    if (position < 0) {
+      const problem = { row: row.rowNumber, column: this.options.headers[column]!, message: '' };
+      if (this.errors.add(problem)) this.unknownPlots.push({ problem, label });
+      return -1;
+    }
+    const firstRow = this.firstRowOf[position]!;
+    if (firstRow !== 0) {
+      this.errors.add(this.problemAt(row, column, `plot ${plots.labels[position]} is also on row ${firstRow}; each plot may appear once in a file.`));
+      return -1;
+    }
+    this.firstRowOf[position] = row.rowNumber;
+    return position;
+  }
+
+  private checkIdentity(row: TableRow, position: number): void {
+    for (const column of this.options.mapping.identity) {
+      const typed = row.cells[column.index]!.trim();
+      if (typed === '') continue;
+      const problem = identityProblem(column.role, typed, this.options.plots, position);
+      if (problem) this.errors.add(this.problemAt(row, column.index, problem));
+    }
+  }
+
+  private readMeasureCells(row: TableRow, position: number): void {
+    const { mapping, plots, decimalComma, storage } = this.options;
+    const textAt = (index: number | null): string | null => {
+      const text = index === null ? '' : row.cells[index]!.trim();
+      return text === '' ? null : text;
+    };
+    const notes = textAt(mapping.notes);
+    const missingReason = textAt(mapping.missingReason);
+    let reasonChecked = false;
+    for (const column of this.readableColumns) {
+      const cellProblem = row.cellProblems?.get(column.index);
+      if (cellProblem) {
+        this.errors.add(this.problemAt(row, column.index, cellProblem));
+        continue;
+      }
+      const measure = this.measuresById.get(column.measureId)!;
+      const cell = parseCellValue(row.cells[column.index]!, measure, { decimalComma, headerUnit: column.headerUnitId });
+      if (cell.kind === 'error') {
+        this.errors.add(this.problemAt(row, column.index, cell.message));
+        continue;
+      }
+      if (cell.kind === 'value') {
+        for (const warning of cell.warnings) this.warnings.add(this.problemAt(row, column.index, warning));
+        const unstorable = storage?.value(cell.valueText);
+        if (unstorable) {
+          this.errors.add(this.problemAt(row, column.index, unstorable));
+          continue;
+        }
+      } else if (missingReason !== null && !reasonChecked && storage) {
+        reasonChecked = true;
+        const tooLong = storage.reason(missingReason);
+        if (tooLong) this.errors.add(this.problemAt(row, mapping.missingReason, tooLong));
+      }
+      if (position < 0) continue;
+      this.valuesRead += 1;
+      this.options.onValue({
+        plotId: plots.ids[position]!,
+        plotLabel: plots.labels[position]!,
+        measureId: column.measureId,
+        measureCode: column.measureCode,
+        valueText: cell.kind === 'value' ? cell.valueText : null,
+        censored: cell.kind === 'value' && cell.censored,
+        missingReason: cell.kind === 'missing' ? missingReason : null,
+        blank: cell.kind === 'missing' && cell.blank,
+        notes,
+        row: row.rowNumber,
+      });
+    }
+  }
+}
+
+/**
+ * Validate intake — checks a whole file read into memory (`readCsvFile`): `IntakeChecker` over
+ * every row, with the plot labels of the trial at hand.
+ *
+ * Purpose: the pure core's one-call form, for small files and tests; Intake itself streams.
+ * Throws: nothing. Example: `validateIntake({ file, mapping, sitePlots, trialPlotLabels, roundMeasures, siteName: 'Hollow Lane' }).errors`
  * → `[{ row: 4, column: 'treatment code', message: 'Row 4, treatment code: plot HL-B2-P03 is treatment GYP in the plot plan, not CTRL.' }]`
  */
 export function validateIntake(input: IntakeValidationInput): IntakeValidation {
-  const { file, mapping, sitePlots, roundMeasures } = input;
-  const errors: IntakeProblem[] = [...mapping.problems];
-  const out = { values: [] as IntakeValue[], warnings: columnWarnings(mapping, roundMeasures) };
-  if (mapping.plotLabel !== null) {
-    const lookup: PlotLookup = {
-      sitePlots: new Map(sitePlots.map((plot) => [labelKey(plot.label), plot])),
-      trialPlots: new Map([...input.trialPlotLabels].map(([label, site]) => [labelKey(label), site])),
-      firstRowOf: new Map(),
-    };
-    const measuresById = new Map(roundMeasures.map((measure) => [measure.id, measure]));
-    file.rows.forEach((cells, index) => {
-      const context: RowContext = { cells, row: file.rowNumbers[index]!, headers: file.headers, errors };
-      const plot = findPlot(context, input, lookup);
-      if (plot) checkPlan(context, mapping, plot);
-      readMeasureCells(context, input, plot, measuresById, out);
-    });
-  }
-  return Object.freeze({ values: Object.freeze(out.values), errors: capped(errors), warnings: capped(out.warnings) });
+  const { file, mapping, sitePlots, roundMeasures, siteName } = input;
+  const values: IntakeValue[] = [];
+  const checker = new IntakeChecker({
+    mapping,
+    headers: file.headers,
+    plots: SitePlotIndex.of(sitePlots),
+    roundMeasures,
+    siteName,
+    decimalComma: file.decimalComma,
+    onValue: (value) => values.push(Object.freeze(value)),
+  });
+  file.rows.forEach((cells, index) => checker.check({ cells, rowNumber: file.rowNumbers[index]! }));
+  const otherSites = new Map([...input.trialPlotLabels].map(([label, site]) => [plotLabelKey(label), site.siteName] as const));
+  return Object.freeze({ values: Object.freeze(values), ...checker.finish(otherSites) });
 }

@@ -50,6 +50,10 @@ export class ObservationRow extends Model {
   @Column({ type: DataType.STRING(10), allowNull: false })
   declare source: ObservationSource;
 
+  /** The upload that last wrote this value; null after an edit in the Ledger. */
+  @Column({ type: DataType.INTEGER.UNSIGNED, allowNull: true, field: 'upload_id' })
+  declare uploadId: number | null;
+
   @ForeignKey(() => User)
   @Column({ type: DataType.INTEGER.UNSIGNED, allowNull: true, field: 'recorded_by' })
   declare recordedBy: number | null;

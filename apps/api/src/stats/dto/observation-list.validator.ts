@@ -1,10 +1,21 @@
 import { registerDecorator, type ValidationArguments, type ValidationOptions } from 'class-validator';
+import { checkNumber, checkNumberText, numberBoundMessage, shownNumber } from '../../common/input/number-bounds';
 
 const decimalText = /^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/;
 const MAX_LABEL = 100;
 const MAX_REPORTED = 5;
 
 const isNumeric = (v: unknown) => (typeof v === 'number' && Number.isFinite(v)) || (typeof v === 'string' && decimalText.test(v.trim()));
+
+/** A number field of a row: within the shared bounds (checked before anything parses it), then numeric. */
+function decimalProblem(row: number, field: string, v: unknown): string | null {
+  const bound = typeof v === 'number' ? checkNumber(v) : typeof v === 'string' ? checkNumberText(v) : null;
+  if (bound && !bound.ok) {
+    const shown = typeof v === 'string' ? `"${shownNumber(v)}"` : shownNumber(String(v));
+    return numberBoundMessage(`observations[${row}].${field} ${shown}`, bound.problem).replace(/\.$/, '');
+  }
+  return isNumeric(v) ? null : `observations[${row}].${field} must be a finite number or a decimal string`;
+}
 
 /** Fields some analyses add to an observation, and what each must hold. */
 export type ExtraObservationFields = Readonly<Record<string, 'boolean' | 'label' | 'decimal' | 'required-boolean' | 'required-label' | 'required-decimal'>>;
@@ -38,7 +49,8 @@ export function observationProblems(value: unknown, extra: ExtraObservationField
       }
       if (kind.endsWith('boolean') && typeof field !== 'boolean') problems.push(`observations[${row}].${key} must be true or false`);
       if (kind.endsWith('label')) label(row, key, field);
-      if (kind.endsWith('decimal') && !isNumeric(field)) problems.push(`observations[${row}].${key} must be a finite number or a decimal string`);
+      const fieldProblem = kind.endsWith('decimal') ? decimalProblem(row, key, field) : null;
+      if (fieldProblem) problems.push(fieldProblem);
     }
     label(row, 'treatment', o.treatment);
     label(row, 'block', o.block);
@@ -47,7 +59,8 @@ export function observationProblems(value: unknown, extra: ExtraObservationField
       if (typeof o.factors !== 'object' || o.factors === null || Array.isArray(o.factors)) problems.push(`observations[${row}].factors must be an object of factor name to level`);
       else for (const [name, level] of Object.entries(o.factors)) label(row, `factors.${name}`, level);
     }
-    if (!isNumeric(o.value)) problems.push(`observations[${row}].value must be a finite number or a decimal string`);
+    const valueProblem = decimalProblem(row, 'value', o.value);
+    if (valueProblem) problems.push(valueProblem);
   });
   if (problems.length > MAX_REPORTED) return [...problems.slice(0, MAX_REPORTED), `and more problems after observations[${MAX_REPORTED}]`];
   return problems;

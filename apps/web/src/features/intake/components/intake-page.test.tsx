@@ -54,8 +54,10 @@ const dryRun = (extra: Partial<IntakeResult> = {}): IntakeResult => ({
     { plotLabel: 'HL-102', measureCode: 'DRAIN', kind: 'changed', before: '580', after: '>600' },
     { plotLabel: 'HL-103', measureCode: 'DRAIN', kind: 'new', before: null, after: '95' },
   ],
+  changesOmitted: 0,
   identicalToPrevious: false,
   message: '3 values checked.',
+  ticket: 'test-ticket-0001',
   ...extra,
 });
 
