@@ -1,5 +1,7 @@
 // The models made for each kind of measurement: censored drain times, rounds over time, scores and counts
 // (POST /api/stats/censored, /repeated, /ordinal, /counts), and the analysis choice of Findings.
+import type { AnovaAnswer, FindingsChoices, FindingsContext, FindingsObservationRow } from './findings';
+import type { MeasureKind } from './protocol';
 
 /** Layouts the measurement models accept (a plot is site + block + treatment). */
 export const MODEL_DESIGNS = ['crd', 'rcbd', 'multisite-rcbd'] as const;
@@ -258,3 +260,95 @@ export interface RepeatedAnswer {
   plots: number;
   warnings: string[];
 }
+
+// ---------------------------------------------------------------- Findings: the model made for each measure
+
+
+/** The analyses Findings offers (`analysis=`). */
+export const FINDINGS_ANALYSES = ['anova', 'censored', 'repeated', 'ancova', 'ordinal', 'counts'] as const;
+export type FindingsAnalysis = (typeof FINDINGS_ANALYSES)[number];
+
+/** One analysis the page can switch to, and whether it applies to this measure and these data. */
+export interface AnalysisOption {
+  analysis: FindingsAnalysis;
+  /** Friable's name for it, e.g. "Not-drained curves and time ratios". */
+  label: string;
+  available: boolean;
+  isDefault: boolean;
+  /** Why it is not available, or the caution it carries (the ANOVA on cut-off values is biased). */
+  note: string | null;
+}
+
+/** Which model this answer is, the one made for the measure, and why, in plain words. */
+export interface ModelChoice {
+  analysis: FindingsAnalysis;
+  defaultAnalysis: FindingsAnalysis;
+  /** "Drain time has a cut-off: …" — which model and why. */
+  why: string;
+  options: AnalysisOption[];
+}
+
+/** The model options of Findings beside the ANOVA choices (query text). */
+export interface FindingsModelQuery {
+  /** Default: the model made for the measure's kind. */
+  analysis?: FindingsAnalysis;
+  /** censored: default weibull. */
+  distribution?: AftDistribution;
+  /** repeated: default auto. */
+  covariance?: RepeatedCovariance;
+  /** counts: default auto. */
+  family?: CountFamilyChoice;
+  /** ancova: the round whose values are the covariate; default the earliest round of the same measure. */
+  covariateRoundId?: number;
+  /** ancova: the measure of the covariate; default the same measure. */
+  covariateMeasureId?: number;
+}
+
+/** The context of a model analysis in Findings (the ANOVA keeps FindingsContext, with modelChoice). */
+export interface ModelFindingsContext {
+  trialId: number;
+  trialCode: string;
+  choices: Pick<FindingsChoices, 'measureId' | 'roundId' | 'siteId' | 'alpha' | 'method'> & {
+    analysis: FindingsAnalysis;
+    distribution?: AftDistribution;
+    covariance?: RepeatedCovariance;
+    family?: CountFamilyChoice;
+    covariateMeasureId?: number;
+    covariateRoundId?: number;
+  };
+  modelChoice: ModelChoice;
+  /** The body sent to the stateless endpoint, without observations; with them it gives this very answer. */
+  engineRequest: Record<string, unknown>;
+  /** The observations sent to the engine, in its order. */
+  engineObservations: Array<Record<string, unknown>>;
+  measure: FindingsContext['measure'];
+  /** The round analysed (repeated: the latest of the rounds used). */
+  round: FindingsContext['round'];
+  /** repeated: the rounds used, in time order. */
+  rounds?: Array<FindingsContext['round']>;
+  scope: FindingsContext['scope'];
+  observations: Array<FindingsObservationRow & { roundLabel?: string; covariate?: string }>;
+  censored: FindingsContext['censored'];
+  missing: FindingsContext['missing'];
+  controlCode: string | null;
+  /** Plain sentences the engine cannot know (values left out, censored values entering at the cut-off, the covariate used). */
+  notices: string[];
+  dataHash: string;
+  engineVersion: string;
+}
+
+/** GET /api/trials/:trialId/findings?analysis=… for a model: the stateless endpoint's answer, plus context. */
+export type ModelFindings =
+  | (CensoredAnswer & { analysis: 'censored'; context: ModelFindingsContext })
+  | (RepeatedAnswer & { analysis: 'repeated'; context: ModelFindingsContext })
+  | (AnovaAnswer & { analysis: 'ancova'; context: ModelFindingsContext })
+  | (OrdinalAnswer & { analysis: 'ordinal'; context: ModelFindingsContext })
+  | (CountsAnswer & { analysis: 'counts'; context: ModelFindingsContext });
+
+/** The analysis made for each kind of measure. */
+export const DEFAULT_ANALYSIS: Record<MeasureKind, FindingsAnalysis> = {
+  continuous: 'anova',
+  count: 'counts',
+  score: 'ordinal',
+  'time-with-cutoff': 'censored',
+};

@@ -220,7 +220,34 @@ analyse_repeated <- function(case) {
   result
 }
 
-analyse <- function(case) switch(case$family, repeated = analyse_repeated(case), censored = analyse_censored(case), ordinal = analyse_ordinal(case), counts = analyse_counts(case))
+analyse_ancova <- function(case) {
+  obs <- case$observations
+  d <- case_frame(case)
+  d$value <- as.numeric(column(obs, "value"))
+  d$x <- as.numeric(column(obs, "covariate"))
+  terms <- switch(case$design, crd = "x + treatment", rcbd = "blk + x + treatment", "multisite-rcbd" = "site + site:block + x + treatment + site:treatment")
+  # keep.order: R would otherwise move site:block behind the covariate and treatment.
+  m <- lm(terms(as.formula(paste("value ~", terms)), keep.order = TRUE), data = d)
+  a <- anova(m)
+  rows <- lapply(seq_len(nrow(a) - 1), function(i) list(term = trimws(rownames(a)[i]), df = a$Df[i], ss = a[["Sum Sq"]][i], f = a[["F value"]][i], p = a[["Pr(>F)"]][i]))
+  # The covariate adjusted for every other term (type II), as textbook ANCOVA tables give the regression.
+  dx <- drop1(m, scope = ~ x, test = "F")
+  rows[[which(vapply(rows, function(r) r$term == "x", TRUE))]] <- list(term = "x", df = dx$Df[2], ss = dx[["Sum of Sq"]][2], f = dx[["F value"]][2], p = dx[["Pr(>F)"]][2])
+  emm <- if (case$design == "multisite-rcbd") emmeans(m, ~ treatment, nesting = "block %in% site") else emmeans(m, ~ treatment)
+  es <- as.data.frame(summary(emm))
+  tukey <- as.data.frame(summary(pairs(emm, adjust = "tukey")))
+  slopes <- anova(m, update(m, . ~ . + x:treatment))
+  base <- switch(case$design, crd = "1", rcbd = "blk", "multisite-rcbd" = "site + site:block")
+  baseline <- anova(lm(as.formula(paste("x ~", base)), data = d), lm(as.formula(paste("x ~", base, "+ treatment")), data = d))
+  co <- summary(m)$coefficients["x", ]
+  list(anova = rows, errorDf = df.residual(m), errorSs = deviance(m),
+    means = lapply(seq_len(nrow(es)), function(i) list(treatment = as.character(es$treatment[i]), mean = es$emmean[i], se = es$SE[i])),
+    tukeyP = unname(tukey$p.value), slopes = list(f = slopes$F[2], p = slopes[["Pr(>F)"]][2], df1 = slopes$Df[2]),
+    baseline = list(f = baseline$F[2], p = baseline[["Pr(>F)"]][2]), slope = list(estimate = unname(co[1]), se = unname(co[2]), t = unname(co[3]), p = unname(co[4])),
+    standardizedResiduals = unname(rstandard(m)))
+}
+
+analyse <- function(case) switch(case$family, ancova = analyse_ancova(case), repeated = analyse_repeated(case), censored = analyse_censored(case), ordinal = analyse_ordinal(case), counts = analyse_counts(case))
 
 results <- lapply(cases, analyse)
 versions <- sapply(c("survival", "nlme", "emmeans", "MASS", "car", "multcomp"), function(p) tryCatch(as.character(packageVersion(p)), error = function(e) NA))

@@ -110,10 +110,21 @@ function repeatedCase(id, design, structure) {
   return { id, family: 'repeated', design, covariance: structure, control: 'CTRL', observations };
 }
 
+/** A baseline (day-0) value per plot and a later value that follows it, with treatment and block effects. */
+function ancovaCase(id, design) {
+  const plots = layout(design);
+  const observations = plots.map(({ effect, ...labels }) => {
+    const baseline = 30 + 4 * gauss() + (design === 'multisite-rcbd' ? 0 : effect);
+    return { ...labels, value: round(12 + 0.6 * baseline + 3 * effect + gauss(), 2), covariate: round(baseline, 2) };
+  });
+  return { id, family: 'ancova', design, control: 'CTRL', sitesAre: 'fixed', observations };
+}
+
 const families = {
   ordinal: (i) => ordinalCase(`ordinal-${String(i + 1).padStart(2, '0')}`, DESIGNS[i % DESIGNS.length]),
   counts: (i) => countCase(`counts-${String(i + 1).padStart(2, '0')}`, DESIGNS[i % DESIGNS.length], i % 2 === 1),
   repeated: (i) => repeatedCase(`repeated-${String(i + 1).padStart(2, '0')}`, DESIGNS[i % DESIGNS.length], ['cs', 'ar1', 'unstructured'][(i + Math.floor(i / 3)) % 3]),
+  ancova: (i) => ancovaCase(`ancova-${String(i + 1).padStart(2, '0')}`, DESIGNS[i % DESIGNS.length]),
   censored: (i) => censoredCase(`censored-${String(i + 1).padStart(2, '0')}`, DESIGNS[i % DESIGNS.length], ['weibull', 'lognormal', 'loglogistic'][(i + Math.floor(i / 3)) % 3]),
 };
 

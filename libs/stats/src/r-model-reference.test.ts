@@ -2,6 +2,7 @@ import { existsSync, readFileSync } from 'node:fs';
 import path from 'node:path';
 import { describe, expect, it } from 'vitest';
 import type { AftDistribution } from './accelerated-failure-time';
+import { analyseTrial } from './analyse-trial';
 import { analyseCensoredTimes, type CensoredObservation } from './censored-times';
 import { analyseCounts } from './count-analysis';
 import { analyseOrdinalScores } from './ordinal-scores';
@@ -314,6 +315,49 @@ describe('rounds over time against R nlme 3.1 gls, lme4 + pbkrtest (Kenward–Ro
           within(mine.pHuynhFeldt as number, row.pHuynhFeldt, 1e-10, `${row.term} HF p`);
         }
       }
+    });
+  }
+});
+
+describe('baseline covariate against R lm (anova, type I with the covariate before treatment), emmeans and rstandard', () => {
+  const cases = fixture.cases.filter((c) => c.family === 'ancova');
+  it('has the covariate cases', () => expect(cases.length).toBeGreaterThanOrEqual(6));
+  const rName = (term: string) => (term === 'blk' ? 'block' : term === 'x' ? 'covariate' : term === 'site:block' ? 'block:site' : term);
+
+  for (const entry of cases) {
+    it(`${entry.id}: ${entry.design}`, () => {
+      const expected = entry.expected;
+      // Through the same entry point as POST /api/stats/anova: observations with a covariate.
+      const result = analyseTrial({ design: entry.design, sitesAre: 'fixed', control: entry.control, meanSeparation: ['tukey'], observations: entry.observations }) as ReturnType<typeof analyseTrial> & {
+        slopes: { f: number; p: number; df1: number };
+        baseline: { f: number; p: number };
+        covariate: { slope: number; se: number; t: number; p: number };
+      };
+      // anova(lm(value ~ blocks + x + treatment)): SS and F 1e-9 relative, p 1e-10 absolute.
+      for (const row of expected.anova) {
+        const mine = result.anova.find((r) => r.term === rName(row.term))!;
+        expect(mine, `row ${row.term}`).toBeDefined();
+        expect(mine.df).toBe(row.df);
+        close(mine.ss, row.ss, 1e-9, `${row.term} SS`);
+        close(mine.f, row.f, 1e-9, `${row.term} F`);
+        within(mine.p as number, row.p, 1e-10, `${row.term} p`);
+      }
+      expect(result.summary.errorDf).toBe(expected.errorDf);
+      // emmeans(fit, ~ treatment): adjusted means and SEs 1e-9 relative; Tukey p 1e-6 absolute.
+      for (const mean of expected.means) {
+        const mine = result.means.find((m) => m.treatment === mean.treatment)!;
+        close(mine.mean, mean.mean, 1e-9, `adjusted mean ${mean.treatment}`);
+        close(mine.se, mean.se, 1e-9, `SE ${mean.treatment}`);
+      }
+      ([] as number[]).concat(expected.tukeyP).forEach((p, k) => within(result.comparisons.tukey!.pairs[k]!.p, p, 1e-6, `Tukey pair ${k + 1}`));
+      // anova(fit, update(fit, . ~ . + x:treatment)) and anova(lm(x ~ blocks), lm(x ~ blocks + treatment)): 1e-9 relative.
+      close(result.slopes.f, expected.slopes.f, 1e-9, 'equal slopes F');
+      expect(result.slopes.df1).toBe(expected.slopes.df1);
+      close(result.baseline.f, expected.baseline.f, 1e-9, 'baseline F');
+      close(result.covariate.slope, expected.slope.estimate, 1e-9, 'common slope');
+      close(result.covariate.se, expected.slope.se, 1e-9, 'slope SE');
+      // rstandard(fit): 1e-8 relative.
+      ([] as number[]).concat(expected.standardizedResiduals).forEach((value, i) => within(result.diagnostics.residuals[i]!.standardized as number, value, 1e-8 * Math.max(1, Math.abs(value)), `standardized residual ${i + 1}`));
     });
   }
 });

@@ -38,6 +38,16 @@ const dental = readFileSync(resolve(__dirname, '../../../../datasets/reference/d
     return { treatment: sex!, block: subject!, round: `Age ${age}`, time: Number(age), value: distance! };
   });
 
+// Montgomery's fiber strength with the diameter as covariate (datasets/reference/fiber-strength.csv).
+const fiber = readFileSync(resolve(__dirname, '../../../../datasets/reference/fiber-strength.csv'), 'utf8')
+  .trim()
+  .split('\n')
+  .slice(1)
+  .map((line) => {
+    const [machine, strength, diameter] = line.split(',');
+    return { treatment: `machine ${machine}`, value: strength!, covariate: diameter! };
+  });
+
 describe('the measurement-model endpoints', () => {
   let t: TestApp;
   let token: string;
@@ -206,6 +216,33 @@ describe('the measurement-model endpoints', () => {
       const twoDays = await post({ design: 'crd', covariance: 'cs', observations: [...dental.slice(0, 4), { ...dental[0], block: 'X', time: 9 }] });
       expect(twoDays.status).toBe(422);
       expect(twoDays.body.message).toMatch(/round Age 8 is given at day 8 and at day 9 \(row 5\)/);
+    });
+  });
+
+  describe('POST /api/stats/anova with a covariate', () => {
+    it('answers the analysis of covariance: a covariate row, adjusted means and the equal-slopes test', async () => {
+      const response = await t.http.post('/api/stats/anova').set(bearer(token)).send({ design: 'crd', meanSeparation: ['tukey'], observations: fiber });
+      expect(response.status).toBe(200);
+      const body = response.body;
+      // Montgomery's ANCOVA table (from memory, 2 decimals): regression 178.01, machines 13.28, error 27.99 on 11 df;
+      // R: anova(lm(strength ~ diameter + machine)), emmeans 40.38, 41.42, 38.80.
+      const row = (term: string) => body.anova.find((r: { term: string }) => r.term === term);
+      expect(row('covariate').ss).toBeCloseTo(178.01, 2);
+      expect(row('treatment').ss).toBeCloseTo(13.28, 2);
+      expect(row('error').df).toBe(11);
+      expect(body.means.map((m: { mean: number }) => Number(m.mean.toFixed(2)))).toEqual([40.38, 41.42, 38.8]);
+      expect(body.slopes).toEqual({ f: expect.any(Number), p: expect.any(Number), df1: 2, df2: 9 });
+      expect(body.covariate.slope).toBeCloseTo(0.954, 3);
+      expect(body.baseline.df1).toBe(2);
+    });
+
+    it('refuses a covariate that is not a number, naming the row', async () => {
+      const response = await t.http
+        .post('/api/stats/anova')
+        .set(bearer(token))
+        .send({ design: 'crd', observations: fiber.map((o, i) => (i === 2 ? { ...o, covariate: 'thick' } : o)) });
+      expect(response.status).toBe(422);
+      expect(response.body.message).toMatch(/observations\[2\]\.covariate must be a finite number or a decimal string/);
     });
   });
 });
