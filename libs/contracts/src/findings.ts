@@ -106,6 +106,12 @@ export interface AnovaAnswer {
   };
   /** Plain sentences from the engine (not significant, few error df, single plot, unequal site variances, transform). */
   warnings: string[];
+  /** With a covariate on the observations (analysis of covariance): the common slope, with the covariate's mean. */
+  covariate?: { mean: number; slope: number; se: number; t: number; p: number };
+  /** With a covariate: the test of equal slopes across treatments. */
+  slopes?: { f: number; p: number; df1: number; df2: number };
+  /** With a covariate: the covariate itself between treatments (a baseline should not differ). */
+  baseline?: { f: number; p: number; df1: number; df2: number };
 }
 
 /** POST /api/stats/friedman and /api/stats/kruskal answers. */
@@ -243,6 +249,8 @@ export interface FindingsContext {
   meansOverTime: MeansOverTimePoint[];
   /** Plain sentences the engine cannot know (censoring), shown beside the engine's warnings. */
   notices: string[];
+  /** Which model this is (the ANOVA), the one made for the measure and the others on offer. */
+  modelChoice?: import('./models').ModelChoice;
   /** SHA-256 (hex) of the canonical JSON of the observations sent to the engine. */
   dataHash: string;
   engineVersion: string;

@@ -1,5 +1,7 @@
 // The models made for each kind of measurement: censored drain times, rounds over time, scores and counts
 // (POST /api/stats/censored, /repeated, /ordinal, /counts), and the analysis choice of Findings.
+import type { AnovaAnswer, FindingsChoices, FindingsContext, FindingsObservationRow } from './findings';
+import type { MeasureKind } from './protocol';
 
 /** Layouts the measurement models accept (a plot is site + block + treatment). */
 export const MODEL_DESIGNS = ['crd', 'rcbd', 'multisite-rcbd'] as const;
@@ -189,3 +191,164 @@ export interface CountsAnswer {
   adjustment: string;
   warnings: string[];
 }
+
+// ---------------------------------------------------------------- POST /api/stats/repeated
+
+export const REPEATED_COVARIANCES = ['cs', 'ar1', 'unstructured', 'auto'] as const;
+export type RepeatedCovariance = (typeof REPEATED_COVARIANCES)[number];
+
+export interface RepeatedObservationInput {
+  treatment: string;
+  /** In a completely randomized trial the block names the replicate (a plot is site + block + treatment). */
+  block?: string;
+  site?: string;
+  round: string;
+  /** The round's day offset. */
+  time: number | string;
+  value: number | string;
+}
+
+export interface RepeatedRequest {
+  design: ModelDesign;
+  covariance: RepeatedCovariance;
+  control?: string;
+  observations: RepeatedObservationInput[];
+}
+
+export interface CovarianceChoice {
+  structure: 'cs' | 'ar1' | 'unstructured';
+  /** cs: plotVariance, residualVariance, correlation; ar1: variance, phi (correlation a day apart); unstructured: variance[round], covariance[round,round]. */
+  parameters: Record<string, number>;
+  logLik: number;
+  aic: number;
+}
+
+export interface RepeatedTermTestAnswer {
+  term: string;
+  numDf: number;
+  denDf: number;
+  f: number;
+  p: number;
+}
+
+export interface SplitPlotRowAnswer {
+  term: string;
+  stratum: 'between plots' | 'within plots';
+  df: number;
+  ss: number;
+  ms: number;
+  f: number | null;
+  p: number | null;
+  pGreenhouseGeisser?: number | null;
+  pHuynhFeldt?: number | null;
+}
+
+export interface RepeatedAnswer {
+  covariance: CovarianceChoice;
+  /** Every structure tried ('auto'), or the one asked for; one that could not be fitted says why. */
+  candidates: Array<CovarianceChoice | { structure: 'cs' | 'ar1' | 'unstructured'; unavailable: string }>;
+  /** Kenward–Roger F tests of treatment, round and treatment:round. */
+  anova: RepeatedTermTestAnswer[];
+  /** Treatment within each round (Kenward–Roger). */
+  byRound: Array<RepeatedTermTestAnswer & { round: string }>;
+  /** Of the split plot in time on complete plots; null when it cannot be computed. mauchlyW and p are null with two rounds. */
+  sphericity: { mauchlyW: number | null; chiSquare: number | null; df: number | null; p: number | null; greenhouseGeisser: number; huynhFeldt: number } | null;
+  splitPlot: { table: SplitPlotRowAnswer[]; plotsUsed: number; plotsLeftOut: number } | null;
+  /** Least-squares means per treatment and round with Kenward–Roger SEs and df. */
+  means: Array<{ treatment: string; round: string; mean: number; se: number; df: number }>;
+  rounds: Array<{ round: string; time: number }>;
+  plots: number;
+  warnings: string[];
+}
+
+// ---------------------------------------------------------------- Findings: the model made for each measure
+
+
+/** The analyses Findings offers (`analysis=`). */
+export const FINDINGS_ANALYSES = ['anova', 'censored', 'repeated', 'ancova', 'ordinal', 'counts'] as const;
+export type FindingsAnalysis = (typeof FINDINGS_ANALYSES)[number];
+
+/** One analysis the page can switch to, and whether it applies to this measure and these data. */
+export interface AnalysisOption {
+  analysis: FindingsAnalysis;
+  /** Friable's name for it, e.g. "Not-drained curves and time ratios". */
+  label: string;
+  available: boolean;
+  isDefault: boolean;
+  /** Why it is not available, or the caution it carries (the ANOVA on cut-off values is biased). */
+  note: string | null;
+}
+
+/** Which model this answer is, the one made for the measure, and why, in plain words. */
+export interface ModelChoice {
+  analysis: FindingsAnalysis;
+  defaultAnalysis: FindingsAnalysis;
+  /** "Drain time has a cut-off: …" — which model and why. */
+  why: string;
+  options: AnalysisOption[];
+}
+
+/** The model options of Findings beside the ANOVA choices (query text). */
+export interface FindingsModelQuery {
+  /** Default: the model made for the measure's kind. */
+  analysis?: FindingsAnalysis;
+  /** censored: default weibull. */
+  distribution?: AftDistribution;
+  /** repeated: default auto. */
+  covariance?: RepeatedCovariance;
+  /** counts: default auto. */
+  family?: CountFamilyChoice;
+  /** ancova: the round whose values are the covariate; default the earliest round of the same measure. */
+  covariateRoundId?: number;
+  /** ancova: the measure of the covariate; default the same measure. */
+  covariateMeasureId?: number;
+}
+
+/** The context of a model analysis in Findings (the ANOVA keeps FindingsContext, with modelChoice). */
+export interface ModelFindingsContext {
+  trialId: number;
+  trialCode: string;
+  choices: Pick<FindingsChoices, 'measureId' | 'roundId' | 'siteId' | 'alpha' | 'method'> & {
+    analysis: FindingsAnalysis;
+    distribution?: AftDistribution;
+    covariance?: RepeatedCovariance;
+    family?: CountFamilyChoice;
+    covariateMeasureId?: number;
+    covariateRoundId?: number;
+  };
+  modelChoice: ModelChoice;
+  /** The body sent to the stateless endpoint, without observations; with them it gives this very answer. */
+  engineRequest: Record<string, unknown>;
+  /** The observations sent to the engine, in its order. */
+  engineObservations: Array<Record<string, unknown>>;
+  measure: FindingsContext['measure'];
+  /** The round analysed (repeated: the latest of the rounds used). */
+  round: FindingsContext['round'];
+  /** repeated: the rounds used, in time order. */
+  rounds?: Array<FindingsContext['round']>;
+  scope: FindingsContext['scope'];
+  observations: Array<FindingsObservationRow & { roundLabel?: string; covariate?: string }>;
+  censored: FindingsContext['censored'];
+  missing: FindingsContext['missing'];
+  controlCode: string | null;
+  /** Plain sentences the engine cannot know (values left out, censored values entering at the cut-off, the covariate used). */
+  notices: string[];
+  dataHash: string;
+  engineVersion: string;
+}
+
+/** GET /api/trials/:trialId/findings?analysis=… for a model: the stateless endpoint's answer, plus context. */
+export type ModelFindings =
+  | (CensoredAnswer & { analysis: 'censored'; context: ModelFindingsContext })
+  | (RepeatedAnswer & { analysis: 'repeated'; context: ModelFindingsContext })
+  | (AnovaAnswer & { analysis: 'ancova'; context: ModelFindingsContext })
+  | (OrdinalAnswer & { analysis: 'ordinal'; context: ModelFindingsContext })
+  | (CountsAnswer & { analysis: 'counts'; context: ModelFindingsContext });
+
+/** The analysis made for each kind of measure. */
+export const DEFAULT_ANALYSIS: Record<MeasureKind, FindingsAnalysis> = {
+  continuous: 'anova',
+  count: 'counts',
+  score: 'ordinal',
+  'time-with-cutoff': 'censored',
+};

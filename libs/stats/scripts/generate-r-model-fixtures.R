@@ -149,7 +149,105 @@ analyse_counts <- function(case) {
     treatmentCoefficients = treatment_coefficients, tests = tests, rateRatios = dunnett_rows(cf, V, if (over) rdf else 0), rates = rates)
 }
 
-analyse <- function(case) switch(case$family, censored = analyse_censored(case), ordinal = analyse_ordinal(case), counts = analyse_counts(case))
+analyse_repeated <- function(case) {
+  suppressPackageStartupMessages({ library(nlme); library(lme4); library(pbkrtest); library(car) })
+  # R's default treatment contrasts: the REML log-likelihood depends on the coding of X (log|X'V⁻¹X|), and
+  # Friable codes as R does by default. Marginal F tests need sum-to-zero contrasts: a second fit below.
+  old <- options(contrasts = c("contr.treatment", "contr.poly")); on.exit(options(old))
+  obs <- case$observations
+  d <- case_frame(case)
+  d$day <- as.numeric(column(obs, "time"))
+  rounds <- unique(column(obs, "round")[order(d$day)])
+  d$round <- factor(column(obs, "round"), levels = rounds)
+  d$k <- as.integer(d$round)
+  d$value <- as.numeric(column(obs, "value"))
+  d$plot <- factor(paste(column(obs, "site"), column(obs, "block"), d$treatment))
+  blocking <- switch(case$design, crd = "", rcbd = "blk + ", "multisite-rcbd" = "site + site:block + ")
+  fixed <- as.formula(paste("value ~", blocking, "treatment * round"))
+  ctl <- glsControl(maxIter = 500, msMaxIter = 500, tolerance = 1e-10, msTol = 1e-12, returnObject = TRUE)
+  g <- switch(case$covariance,
+    cs = gls(fixed, data = d, correlation = corCompSymm(form = ~ 1 | plot), method = "REML", control = ctl),
+    # corCAR1 starts at φ = 0.2 a day, where 14-day gaps leave the likelihood flat: start, as Friable, at a
+    # correlation of one half between neighbouring rounds.
+    ar1 = gls(fixed, data = d, correlation = corCAR1(value = 0.5^(1 / mean(diff(sort(unique(d$day))))), form = ~ day | plot), method = "REML", control = ctl),
+    unstructured = gls(fixed, data = d, correlation = corSymm(form = ~ k | plot), weights = varIdent(form = ~ 1 | round), method = "REML", control = ctl))
+  full_plot <- names(which.max(table(d$plot)))
+  V <- getVarCov(g, individual = full_plot)
+  emg <- as.data.frame(summary(emmeans(g, ~ treatment * round, mode = "df.error", data = d)))
+  options(contrasts = c("contr.sum", "contr.poly"))
+  marginal <- anova(update(g, data = d), type = "marginal")
+  options(contrasts = c("contr.treatment", "contr.poly"))
+  wald <- lapply(c("treatment", "round", "treatment:round"), function(term) list(term = term, numDf = marginal[term, "numDF"], f = marginal[term, "F-value"]))
+  phi <- if (case$covariance == "ar1") unname(coef(g$modelStruct$corStruct, unconstrained = FALSE)) else NULL
+  result <- list(logLik = as.numeric(logLik(g)), aic = AIC(g), covariance = unname(as.vector(V)), phi = phi,
+    means = lapply(seq_len(nrow(emg)), function(i) list(treatment = as.character(emg$treatment[i]), round = as.character(emg$round[i]), mean = emg$emmean[i], se = emg$SE[i])),
+    wald = wald)
+  if (case$covariance == "cs") {
+    # Compound symmetry = a random plot intercept: Kenward–Roger from pbkrtest on the lmer fit.
+    lmm <- lmer(update(fixed, . ~ . + (1 | plot)), data = d, REML = TRUE)
+    em <- emmeans(lmm, ~ treatment * round, lmer.df = "kenward-roger")
+    es <- as.data.frame(summary(em))
+    lf <- em@linfct
+    nt <- nlevels(d$treatment); nr <- nlevels(d$round)
+    cell <- function(t, r) lf[(r - 1) * nt + t, ]
+    tmean <- function(t) Reduce(`+`, lapply(1:nr, function(r) cell(t, r))) / nr
+    rmean <- function(r) Reduce(`+`, lapply(1:nt, function(t) cell(t, r))) / nt
+    kr <- function(term, L) { k <- KRmodcomp(lmm, L)$test; list(term = term, numDf = k["Ftest", "ndf"], denDf = k["Ftest", "ddf"], f = k["Ftest", "stat"], p = k["Ftest", "p.value"]) }
+    result$kenwardRoger <- list(
+      kr("treatment", do.call(rbind, lapply(2:nt, function(t) tmean(t) - tmean(1)))),
+      kr("round", do.call(rbind, lapply(2:nr, function(r) rmean(r) - rmean(1)))),
+      kr("treatment:round", do.call(rbind, unlist(lapply(2:nt, function(t) lapply(2:nr, function(r) cell(t, r) - cell(1, r) - cell(t, 1) + cell(1, 1))), recursive = FALSE))))
+    result$byRound <- lapply(1:nr, function(r) c(list(round = rounds[r]), kr("treatment", do.call(rbind, lapply(2:nt, function(t) cell(t, r) - cell(1, r))))))
+    result$krMeans <- lapply(seq_len(nrow(es)), function(i) list(treatment = as.character(es$treatment[i]), round = as.character(es$round[i]), mean = es$emmean[i], se = es$SE[i], df = es$df[i]))
+    result$lmerLogLik <- as.numeric(logLik(lmm))
+  }
+  # The classical split plot in time on complete plots: car::Anova on the wide table (type II).
+  wide <- reshape(d[, c("plot", "round", "value")], idvar = "plot", timevar = "round", direction = "wide")
+  wide <- wide[complete.cases(wide), ]
+  between <- d[match(wide$plot, d$plot), ]
+  Y <- as.matrix(wide[, paste0("value.", rounds)])
+  bformula <- as.formula(paste("Y ~", switch(case$design, crd = "treatment", rcbd = "blk + treatment", "multisite-rcbd" = "site + site:block + treatment")))
+  mlm <- lm(bformula, data = between)
+  a <- Anova(mlm, idata = data.frame(round = factor(rounds, levels = rounds)), idesign = ~ round, type = 2)
+  s <- suppressWarnings(summary(a, multivariate = FALSE))
+  u <- s$univariate.tests
+  result$splitPlot <- lapply(rownames(u)[-1], function(term) list(term = term, ss = u[term, "Sum Sq"], df = u[term, "num Df"], errorSs = u[term, "Error SS"], errorDf = u[term, "den Df"], f = u[term, "F value"], p = u[term, "Pr(>F)"]))
+  if (length(rounds) > 2) {
+    result$sphericity <- list(mauchlyW = unname(s$sphericity.tests[1, 1]), p = unname(s$sphericity.tests[1, 2]),
+      greenhouseGeisser = unname(s$pval.adjustments[1, "GG eps"]), huynhFeldt = unname(s$pval.adjustments[1, "HF eps"]))
+    result$corrected <- lapply(rownames(s$pval.adjustments), function(term) list(term = term, pGreenhouseGeisser = unname(s$pval.adjustments[term, "Pr(>F[GG])"]), pHuynhFeldt = unname(s$pval.adjustments[term, "Pr(>F[HF])"])))
+  }
+  result
+}
+
+analyse_ancova <- function(case) {
+  obs <- case$observations
+  d <- case_frame(case)
+  d$value <- as.numeric(column(obs, "value"))
+  d$x <- as.numeric(column(obs, "covariate"))
+  terms <- switch(case$design, crd = "x + treatment", rcbd = "blk + x + treatment", "multisite-rcbd" = "site + site:block + x + treatment + site:treatment")
+  # keep.order: R would otherwise move site:block behind the covariate and treatment.
+  m <- lm(terms(as.formula(paste("value ~", terms)), keep.order = TRUE), data = d)
+  a <- anova(m)
+  rows <- lapply(seq_len(nrow(a) - 1), function(i) list(term = trimws(rownames(a)[i]), df = a$Df[i], ss = a[["Sum Sq"]][i], f = a[["F value"]][i], p = a[["Pr(>F)"]][i]))
+  # The covariate adjusted for every other term (type II), as textbook ANCOVA tables give the regression.
+  dx <- drop1(m, scope = ~ x, test = "F")
+  rows[[which(vapply(rows, function(r) r$term == "x", TRUE))]] <- list(term = "x", df = dx$Df[2], ss = dx[["Sum of Sq"]][2], f = dx[["F value"]][2], p = dx[["Pr(>F)"]][2])
+  emm <- if (case$design == "multisite-rcbd") emmeans(m, ~ treatment, nesting = "block %in% site") else emmeans(m, ~ treatment)
+  es <- as.data.frame(summary(emm))
+  tukey <- as.data.frame(summary(pairs(emm, adjust = "tukey")))
+  slopes <- anova(m, update(m, . ~ . + x:treatment))
+  base <- switch(case$design, crd = "1", rcbd = "blk", "multisite-rcbd" = "site + site:block")
+  baseline <- anova(lm(as.formula(paste("x ~", base)), data = d), lm(as.formula(paste("x ~", base, "+ treatment")), data = d))
+  co <- summary(m)$coefficients["x", ]
+  list(anova = rows, errorDf = df.residual(m), errorSs = deviance(m),
+    means = lapply(seq_len(nrow(es)), function(i) list(treatment = as.character(es$treatment[i]), mean = es$emmean[i], se = es$SE[i])),
+    tukeyP = unname(tukey$p.value), slopes = list(f = slopes$F[2], p = slopes[["Pr(>F)"]][2], df1 = slopes$Df[2]),
+    baseline = list(f = baseline$F[2], p = baseline[["Pr(>F)"]][2]), slope = list(estimate = unname(co[1]), se = unname(co[2]), t = unname(co[3]), p = unname(co[4])),
+    standardizedResiduals = unname(rstandard(m)))
+}
+
+analyse <- function(case) switch(case$family, ancova = analyse_ancova(case), repeated = analyse_repeated(case), censored = analyse_censored(case), ordinal = analyse_ordinal(case), counts = analyse_counts(case))
 
 results <- lapply(cases, analyse)
 versions <- sapply(c("survival", "nlme", "emmeans", "MASS", "car", "multcomp"), function(p) tryCatch(as.character(packageVersion(p)), error = function(e) NA))

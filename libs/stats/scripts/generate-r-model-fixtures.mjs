@@ -90,9 +90,41 @@ function countCase(id, design, overdispersed) {
   return { id, family: 'counts', design, control: 'CTRL', observations };
 }
 
+/** Rounds over time: a plot effect, AR-like errors over unequally spaced days, treatment courses; a value or two missing. */
+function repeatedCase(id, design, structure) {
+  const plots = layout(design, { maxTreatments: 4 });
+  const days = design === 'crd' ? [0, 14, 28] : [0, 14, 28, 56];
+  const slopes = new Map();
+  const observations = [];
+  plots.forEach(({ effect, ...labels }, plot) => {
+    if (!slopes.has(labels.treatment)) slopes.set(labels.treatment, labels.treatment === 'CTRL' ? 0 : gauss() * 0.02);
+    const plotEffect = gauss() * 1.2;
+    let error = gauss();
+    days.forEach((day, k) => {
+      if (k > 0) error = Math.pow(0.97, day - days[k - 1]) * error + Math.sqrt(1 - Math.pow(0.97, 2 * (day - days[k - 1]))) * gauss();
+      if (plot === 2 && k === days.length - 1 && design !== 'crd') return; // one plot misses its last round
+      const value = 20 + 3 * effect + slopes.get(labels.treatment) * day + plotEffect + error;
+      observations.push({ ...labels, round: `Day ${day}`, time: day, value: round(value, 2) });
+    });
+  });
+  return { id, family: 'repeated', design, covariance: structure, control: 'CTRL', observations };
+}
+
+/** A baseline (day-0) value per plot and a later value that follows it, with treatment and block effects. */
+function ancovaCase(id, design) {
+  const plots = layout(design);
+  const observations = plots.map(({ effect, ...labels }) => {
+    const baseline = 30 + 4 * gauss() + (design === 'multisite-rcbd' ? 0 : effect);
+    return { ...labels, value: round(12 + 0.6 * baseline + 3 * effect + gauss(), 2), covariate: round(baseline, 2) };
+  });
+  return { id, family: 'ancova', design, control: 'CTRL', sitesAre: 'fixed', observations };
+}
+
 const families = {
   ordinal: (i) => ordinalCase(`ordinal-${String(i + 1).padStart(2, '0')}`, DESIGNS[i % DESIGNS.length]),
   counts: (i) => countCase(`counts-${String(i + 1).padStart(2, '0')}`, DESIGNS[i % DESIGNS.length], i % 2 === 1),
+  repeated: (i) => repeatedCase(`repeated-${String(i + 1).padStart(2, '0')}`, DESIGNS[i % DESIGNS.length], ['cs', 'ar1', 'unstructured'][(i + Math.floor(i / 3)) % 3]),
+  ancova: (i) => ancovaCase(`ancova-${String(i + 1).padStart(2, '0')}`, DESIGNS[i % DESIGNS.length]),
   censored: (i) => censoredCase(`censored-${String(i + 1).padStart(2, '0')}`, DESIGNS[i % DESIGNS.length], ['weibull', 'lognormal', 'loglogistic'][(i + Math.floor(i / 3)) % 3]),
 };
 

@@ -1,3 +1,4 @@
+import { analyseWithCovariate } from './analysis-of-covariance';
 import { bartlettFromVariances } from './bartlett';
 import { brownForsythe } from './brown-forsythe';
 import { fitTrialDesign, type DesignFit, type TrialDesign, type TrialLayout } from './design-fit';
@@ -261,6 +262,8 @@ function meanEntries(
  *   // { term: 'treatment', df: 3, ss: 0.385, ms: 0.128333, f: 14.4375, p: 0.000871 }
  */
 export function analyseTrial(request: TrialAnalysisRequest): TrialAnalysis {
+  // A baseline covariate on the observations makes it an analysis of covariance (analysis-of-covariance.ts).
+  if (request.observations?.some((o) => o.covariate !== undefined)) return analyseWithCovariate(request);
   const { alpha, methods } = validateRequest(request);
   const transformed = transformedValues(request);
   const prepared = prepareTrialLayout(request.design, request.observations, transformed.values, request.factorNames);

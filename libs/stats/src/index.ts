@@ -36,3 +36,17 @@ export { fitPoissonLogLinear, type PoissonFit } from './poisson-regression';
 export { analyseCounts, type CountFamily, type CountObservation, type CountsAnalysis, type CountsRequest, type CountTermTest } from './count-analysis';
 export { layoutGrid, type LayoutGrid } from './model-layout';
 export { maximizeByNewton, type LikelihoodState, type NewtonResult } from './newton-raphson';
+export { compoundSymmetry, continuousAr1, unstructured, type RepeatedStructure, type RepeatedStructureName } from './repeated-covariance';
+export { designOfMatrix, repeatedRemlProblem, type RepeatedRemlData } from './repeated-reml-problem';
+export { splitPlotInTime, type Sphericity, type SplitPlotInTime, type SplitPlotRow } from './split-plot-in-time';
+export {
+  analyseRepeatedMeasures,
+  repeatedMeasuresFits,
+  type RepeatedStructureFit,
+  type CovarianceFitSummary,
+  type RepeatedCovarianceChoice,
+  type RepeatedMeasuresAnalysis,
+  type RepeatedMeasuresRequest,
+  type RepeatedObservation,
+  type RepeatedTermTest,
+} from './repeated-measures';

@@ -2,9 +2,13 @@ import { existsSync, readFileSync } from 'node:fs';
 import path from 'node:path';
 import { describe, expect, it } from 'vitest';
 import type { AftDistribution } from './accelerated-failure-time';
+import { analyseTrial } from './analyse-trial';
 import { analyseCensoredTimes, type CensoredObservation } from './censored-times';
 import { analyseCounts } from './count-analysis';
 import { analyseOrdinalScores } from './ordinal-scores';
+import { analyseRepeatedMeasures, repeatedMeasuresFits, type RepeatedObservation } from './repeated-measures';
+import type { RepeatedStructureName } from './repeated-covariance';
+import { factorSymmetric } from './symmetric-factor';
 import { relativeError } from './test-support/reference-files';
 
 // Expected values: datasets/reference/r-model-fixtures.json, made by libs/stats/scripts/generate-r-model-fixtures.mjs
@@ -194,6 +198,166 @@ describe('counts against R glm (poisson, quasipoisson), anova(test = "Chisq" | "
         close(mine.ratio, Math.exp(ratio.estimate), 1e-7, `rate ratio ${ratio.treatment}`);
         simultaneous(mine, ratio);
       }
+    });
+  }
+});
+
+describe('rounds over time against R nlme 3.1 gls, lme4 + pbkrtest (Kenward–Roger), emmeans and car (split plot in time)', () => {
+  const cases = fixture.cases.filter((c) => c.family === 'repeated');
+  it('has the repeated-measures cases, each structure at least once', () => {
+    expect(cases.length).toBeGreaterThanOrEqual(6);
+    expect(new Set(cases.map((c) => c.covariance))).toEqual(new Set(['cs', 'ar1', 'unstructured']));
+  });
+  /** Car's names for Friable's terms (blocks are `blk` in the R data frame; nested blocks `site:block`). */
+  const carName = (term: string) => term.replace(/^blk/, 'block').replace('site:block', 'block:site');
+
+  for (const entry of cases) {
+    it(`${entry.id}: ${entry.design}, ${entry.covariance}`, () => {
+      const expected = entry.expected;
+      const request = { design: entry.design, covariance: entry.covariance as RepeatedStructureName, control: entry.control, observations: entry.observations as RepeatedObservation[] };
+      const { chosen, cells, matrix, data } = repeatedMeasuresFits(request);
+      const result = analyseRepeatedMeasures(request);
+      const fit = chosen.fit;
+      const p = matrix.columnCount;
+      // gls(method = "REML", glsControl(tolerance = 1e-10)): REML log-likelihood and AIC 1e-7 relative; nlme's
+      // optimizer stops short of the core's, so covariance parameters to 1e-4 relative.
+      close(result.covariance.logLik, expected.logLik, 1e-7, 'REML logLik');
+      close(result.covariance.aic, expected.aic, 1e-7, 'AIC');
+      if (expected.phi !== null) close(result.covariance.parameters.phi, expected.phi, 1e-4, 'phi (correlation per day)');
+      // getVarCov(g, individual = a plot seen at every round) against V of that plot.
+      const plotOf = Array.from(data.plotOf);
+      const full = [...new Set(plotOf)].map((plot) => Int32Array.from(plotOf.flatMap((g, i) => (g === plot ? [i] : [])))).find((rows) => rows.length === data.rounds.length)!;
+      const v = chosen.structure.block(999, full, fit.theta).covariance;
+      ([] as number[]).concat(expected.covariance).forEach((value, k) => within(v[k]!, value, 1e-4 * Math.abs(expected.covariance[0]), `V[${k}]`));
+      // emmeans(g, ~ treatment * round, mode = "df.error"): means 1e-6 relative, model SEs √(l'Φl) 1e-4 relative.
+      for (const mean of expected.means) {
+        const t = data.layout.treatments.indexOf(mean.treatment);
+        const r = data.rounds.findIndex((round) => round.round === mean.round);
+        const l = cells[t * data.rounds.length + r]!;
+        let estimate = 0;
+        let variance = 0;
+        for (let i = 0; i < p; i++) {
+          estimate += l[i]! * fit.beta[i]!;
+          for (let j = 0; j < p; j++) variance += l[i]! * fit.covariance[i * p + j]! * l[j]!;
+        }
+        close(estimate, mean.mean, 1e-6, `mean ${mean.treatment} ${mean.round}`);
+        close(Math.sqrt(variance), mean.se, 1e-4, `model SE ${mean.treatment} ${mean.round}`);
+        close(result.means.find((m) => m.treatment === mean.treatment && m.round === mean.round)!.mean, mean.mean, 1e-6, 'reported mean');
+      }
+      // anova(g, type = "marginal") with contr.sum: the Wald F of each term (before Kenward–Roger), 1e-4 relative.
+      const waldRows = (term: string) => {
+        const T = data.layout.treatments.length;
+        const R = data.rounds.length;
+        const cell = (t: number, r: number) => cells[t * R + r]!;
+        const avg = (rows: Float64Array[]) => Float64Array.from(rows[0]!, (_, j) => rows.reduce((sum, row) => sum + row[j]!, 0) / rows.length);
+        const minus = (a: Float64Array, b: Float64Array) => Float64Array.from(a, (x, j) => x - b[j]!);
+        const tMean = (t: number) => avg(Array.from({ length: R }, (_, r) => cell(t, r)));
+        const rMean = (r: number) => avg(Array.from({ length: T }, (_, t) => cell(t, r)));
+        if (term === 'treatment') return Array.from({ length: T - 1 }, (_, t) => minus(tMean(t + 1), tMean(0)));
+        if (term === 'round') return Array.from({ length: R - 1 }, (_, r) => minus(rMean(r + 1), rMean(0)));
+        return Array.from({ length: (T - 1) * (R - 1) }, (_, k) => {
+          const t = 1 + Math.floor(k / (R - 1));
+          const r = 1 + (k % (R - 1));
+          return minus(minus(cell(t, r), cell(0, r)), minus(cell(t, 0), cell(0, 0)));
+        });
+      };
+      for (const row of expected.wald) {
+        const rows = waldRows(row.term);
+        const q = rows.length;
+        const lb = rows.map((l) => l.reduce((sum, value, j) => sum + value * fit.beta[j]!, 0));
+        const middle = new Float64Array(q * q);
+        rows.forEach((a, i) => rows.forEach((b, k) => (middle[i * q + k] = a.reduce((sum, x, u) => sum + x * b.reduce((inner, y, w) => inner + fit.covariance[u * p + w]! * y, 0), 0))));
+        const solved = factorSymmetric(middle, q, 1e-14).solve(Float64Array.from(lb));
+        const wald = lb.reduce((sum, x, i) => sum + x * solved[i]!, 0) / q;
+        expect(q, `${row.term} df`).toBe(row.numDf);
+        close(wald, row.f, 1e-4, `Wald F ${row.term}`);
+      }
+      if (entry.covariance === 'cs') {
+        // lmer(… + (1 | plot)): same REML fit; pbkrtest KRmodcomp on the same hypotheses, emmeans with lmer.df = "kenward-roger":
+        // F, df 1e-5 relative, p 1e-6 absolute; means, SEs and df 1e-5 relative.
+        close(result.covariance.logLik, expected.lmerLogLik, 1e-7, 'lmer logLik');
+        for (const test of expected.kenwardRoger) {
+          const mine = result.anova.find((a) => a.term === test.term)!;
+          expect(mine.numDf).toBe(test.numDf);
+          close(mine.denDf, test.denDf, 1e-5, `${test.term} KR df`);
+          close(mine.f, test.f, 1e-5, `${test.term} KR F`);
+          within(mine.p, test.p, 1e-6, `${test.term} KR p`);
+        }
+        for (const test of expected.byRound) {
+          const mine = result.byRound.find((b) => b.round === test.round)!;
+          close(mine.denDf, test.denDf, 1e-5, `treatment in ${test.round} KR df`);
+          close(mine.f, test.f, 1e-5, `treatment in ${test.round} KR F`);
+        }
+        for (const mean of expected.krMeans) {
+          const mine = result.means.find((m) => m.treatment === mean.treatment && m.round === mean.round)!;
+          close(mine.se, mean.se, 1e-5, `KR SE ${mean.treatment} ${mean.round}`);
+          close(mine.df, mean.df, 1e-5, `KR df ${mean.treatment} ${mean.round}`);
+        }
+      }
+      // car::Anova(mlm, idata, idesign = ~ round, type = 2) and summary(multivariate = FALSE): 1e-9 relative.
+      const table = result.splitPlot!.table;
+      for (const row of expected.splitPlot) {
+        const mine = table.find((r) => r.term === carName(row.term))!;
+        expect(mine, `split-plot row ${row.term}`).toBeDefined();
+        expect(mine.df).toBe(row.df);
+        close(mine.ss, row.ss, 1e-9, `${row.term} SS`);
+        close(mine.f, row.f, 1e-9, `${row.term} F`);
+        within(mine.p as number, row.p, 1e-12, `${row.term} p`);
+      }
+      if (expected.sphericity) {
+        close(result.sphericity!.mauchlyW, expected.sphericity.mauchlyW, 1e-9, 'Mauchly W');
+        within(result.sphericity!.p as number, expected.sphericity.p, 1e-9, 'Mauchly p');
+        close(result.sphericity!.greenhouseGeisser, expected.sphericity.greenhouseGeisser, 1e-9, 'Greenhouse–Geisser');
+        close(result.sphericity!.huynhFeldt, expected.sphericity.huynhFeldt, 1e-9, 'Huynh–Feldt');
+        for (const row of expected.corrected) {
+          const mine = table.find((r) => r.term === carName(row.term))!;
+          within(mine.pGreenhouseGeisser as number, row.pGreenhouseGeisser, 1e-10, `${row.term} GG p`);
+          within(mine.pHuynhFeldt as number, row.pHuynhFeldt, 1e-10, `${row.term} HF p`);
+        }
+      }
+    });
+  }
+});
+
+describe('baseline covariate against R lm (anova, type I with the covariate before treatment), emmeans and rstandard', () => {
+  const cases = fixture.cases.filter((c) => c.family === 'ancova');
+  it('has the covariate cases', () => expect(cases.length).toBeGreaterThanOrEqual(6));
+  const rName = (term: string) => (term === 'blk' ? 'block' : term === 'x' ? 'covariate' : term === 'site:block' ? 'block:site' : term);
+
+  for (const entry of cases) {
+    it(`${entry.id}: ${entry.design}`, () => {
+      const expected = entry.expected;
+      // Through the same entry point as POST /api/stats/anova: observations with a covariate.
+      const result = analyseTrial({ design: entry.design, sitesAre: 'fixed', control: entry.control, meanSeparation: ['tukey'], observations: entry.observations }) as ReturnType<typeof analyseTrial> & {
+        slopes: { f: number; p: number; df1: number };
+        baseline: { f: number; p: number };
+        covariate: { slope: number; se: number; t: number; p: number };
+      };
+      // anova(lm(value ~ blocks + x + treatment)): SS and F 1e-9 relative, p 1e-10 absolute.
+      for (const row of expected.anova) {
+        const mine = result.anova.find((r) => r.term === rName(row.term))!;
+        expect(mine, `row ${row.term}`).toBeDefined();
+        expect(mine.df).toBe(row.df);
+        close(mine.ss, row.ss, 1e-9, `${row.term} SS`);
+        close(mine.f, row.f, 1e-9, `${row.term} F`);
+        within(mine.p as number, row.p, 1e-10, `${row.term} p`);
+      }
+      expect(result.summary.errorDf).toBe(expected.errorDf);
+      // emmeans(fit, ~ treatment): adjusted means and SEs 1e-9 relative; Tukey p 1e-6 absolute.
+      for (const mean of expected.means) {
+        const mine = result.means.find((m) => m.treatment === mean.treatment)!;
+        close(mine.mean, mean.mean, 1e-9, `adjusted mean ${mean.treatment}`);
+        close(mine.se, mean.se, 1e-9, `SE ${mean.treatment}`);
+      }
+      ([] as number[]).concat(expected.tukeyP).forEach((p, k) => within(result.comparisons.tukey!.pairs[k]!.p, p, 1e-6, `Tukey pair ${k + 1}`));
+      // anova(fit, update(fit, . ~ . + x:treatment)) and anova(lm(x ~ blocks), lm(x ~ blocks + treatment)): 1e-9 relative.
+      close(result.slopes.f, expected.slopes.f, 1e-9, 'equal slopes F');
+      expect(result.slopes.df1).toBe(expected.slopes.df1);
+      close(result.baseline.f, expected.baseline.f, 1e-9, 'baseline F');
+      close(result.covariate.slope, expected.slope.estimate, 1e-9, 'common slope');
+      close(result.covariate.se, expected.slope.se, 1e-9, 'slope SE');
+      // rstandard(fit): 1e-8 relative.
+      ([] as number[]).concat(expected.standardizedResiduals).forEach((value, i) => within(result.diagnostics.residuals[i]!.standardized as number, value, 1e-8 * Math.max(1, Math.abs(value)), `standardized residual ${i + 1}`));
     });
   }
 });

@@ -13,6 +13,8 @@ export interface TrialObservation {
   readonly site?: string;
   /** A JSON number or decimal text such as "1000000000000.4". */
   readonly value: number | string;
+  /** A baseline covariate (e.g. the day-0 value of the plot): the analysis becomes an analysis of covariance. */
+  readonly covariate?: number | string;
 }
 
 /** A layout ready for fitting, with the exact centre of its values. */

@@ -28,6 +28,26 @@ const insects = readFileSync(resolve(__dirname, '../../../../datasets/reference/
 const crumble: Record<string, number[]> = { CTRL: [2, 3, 3, 1, 2, 3, 4, 2], GYP: [2, 3, 4, 2, 3, 3, 3, 5], CMP: [4, 3, 5, 4, 2, 5, 4, 3] };
 const crumbleObservations = Object.entries(crumble).flatMap(([treatment, values]) => values.map((value, b) => ({ treatment, block: String(b + 1), value })));
 
+// Potthoff & Roy (1964) dental growth, datasets/reference/dental-growth.csv: 27 children at ages 8, 10, 12, 14.
+const dental = readFileSync(resolve(__dirname, '../../../../datasets/reference/dental-growth.csv'), 'utf8')
+  .trim()
+  .split('\n')
+  .slice(1)
+  .map((line) => {
+    const [subject, sex, age, distance] = line.split(',');
+    return { treatment: sex!, block: subject!, round: `Age ${age}`, time: Number(age), value: distance! };
+  });
+
+// Montgomery's fiber strength with the diameter as covariate (datasets/reference/fiber-strength.csv).
+const fiber = readFileSync(resolve(__dirname, '../../../../datasets/reference/fiber-strength.csv'), 'utf8')
+  .trim()
+  .split('\n')
+  .slice(1)
+  .map((line) => {
+    const [machine, strength, diameter] = line.split(',');
+    return { treatment: `machine ${machine}`, value: strength!, covariate: diameter! };
+  });
+
 describe('the measurement-model endpoints', () => {
   let t: TestApp;
   let token: string;
@@ -153,6 +173,76 @@ describe('the measurement-model endpoints', () => {
       const family = await t.http.post('/api/stats/counts').set(bearer(token)).send({ design: 'crd', family: 'binomial', observations: insects });
       expect(family.status).toBe(422);
       expect(family.body.message).toMatch(/family must be one of auto, poisson, quasipoisson/);
+    });
+  });
+
+  describe('POST /api/stats/repeated', () => {
+    it('needs a signed-in person', async () => {
+      expect((await t.http.post('/api/stats/repeated').send({ design: 'crd', covariance: 'auto', observations: dental })).status).toBe(401);
+    });
+
+    it('chooses the covariance by AIC, tests with Kenward–Roger and gives sphericity and means, in the contract’s shape', async () => {
+      const response = await t.http.post('/api/stats/repeated').set(bearer(token)).send({ design: 'crd', covariance: 'auto', control: 'Male', observations: dental });
+      expect(response.status).toBe(200);
+      const body = response.body;
+      expect(Object.keys(body)).toEqual(expect.arrayContaining(['covariance', 'anova', 'sphericity', 'means']));
+      // R 4.2.2: gls(distance ~ Sex * round, corCompSymm(~ 1 | Subject), method = "REML"): logLik −211.70426641383415, AIC
+      // 443.4085328276683 (the lowest of cs, ar1 and unstructured); pbkrtest KRmodcomp for sex: F 9.2920988261153141 on 1 and 25 df;
+      // car: Mauchly W 0.735333448044886, GG 0.86719743560054308, HF 0.97687598862627201 (1e-6 relative).
+      expect(body.covariance.structure).toBe('cs');
+      expect(Math.abs(body.covariance.logLik / -211.70426641383415 - 1)).toBeLessThan(1e-7);
+      expect(Math.abs(body.covariance.aic / 443.4085328276683 - 1)).toBeLessThan(1e-7);
+      expect(body.candidates.map((c: { structure: string }) => c.structure)).toEqual(['cs', 'ar1', 'unstructured']);
+      const sex = body.anova.find((row: { term: string }) => row.term === 'treatment');
+      expect(Math.abs(sex.f / 9.2920988261153141 - 1)).toBeLessThan(1e-6);
+      expect(Math.abs(sex.denDf / 25 - 1)).toBeLessThan(1e-6);
+      expect(body.anova.map((row: { term: string }) => row.term)).toEqual(['treatment', 'round', 'treatment:round']);
+      expect(Math.abs(body.sphericity.mauchlyW / 0.735333448044886 - 1)).toBeLessThan(1e-6);
+      expect(Math.abs(body.sphericity.greenhouseGeisser / 0.86719743560054308 - 1)).toBeLessThan(1e-9);
+      expect(Math.abs(body.sphericity.huynhFeldt / 0.97687598862627201 - 1)).toBeLessThan(1e-9);
+      expect(body.means).toHaveLength(8);
+      expect(body.means[0]).toEqual({ treatment: 'Male', round: 'Age 8', mean: expect.any(Number), se: expect.any(Number), df: expect.any(Number) });
+      expect(Math.abs(body.means[0].mean - 22.875)).toBeLessThan(1e-9);
+    });
+
+    it('refuses what it cannot take, naming the field or row', async () => {
+      const post = (body: object) => t.http.post('/api/stats/repeated').set(bearer(token)).send(body);
+      const noRound = await post({ design: 'crd', covariance: 'auto', observations: [{ treatment: 'A', block: '1', time: 0, value: 1 }] });
+      expect(noRound.status).toBe(422);
+      expect(noRound.body.message).toMatch(/observations\[0\]\.round is needed/);
+      const badCovariance = await post({ design: 'crd', covariance: 'toeplitz', observations: dental });
+      expect(badCovariance.status).toBe(422);
+      expect(badCovariance.body.message).toMatch(/covariance must be one of cs, ar1, unstructured, auto/);
+      const twoDays = await post({ design: 'crd', covariance: 'cs', observations: [...dental.slice(0, 4), { ...dental[0], block: 'X', time: 9 }] });
+      expect(twoDays.status).toBe(422);
+      expect(twoDays.body.message).toMatch(/round Age 8 is given at day 8 and at day 9 \(row 5\)/);
+    });
+  });
+
+  describe('POST /api/stats/anova with a covariate', () => {
+    it('answers the analysis of covariance: a covariate row, adjusted means and the equal-slopes test', async () => {
+      const response = await t.http.post('/api/stats/anova').set(bearer(token)).send({ design: 'crd', meanSeparation: ['tukey'], observations: fiber });
+      expect(response.status).toBe(200);
+      const body = response.body;
+      // Montgomery's ANCOVA table (from memory, 2 decimals): regression 178.01, machines 13.28, error 27.99 on 11 df;
+      // R: anova(lm(strength ~ diameter + machine)), emmeans 40.38, 41.42, 38.80.
+      const row = (term: string) => body.anova.find((r: { term: string }) => r.term === term);
+      expect(row('covariate').ss).toBeCloseTo(178.01, 2);
+      expect(row('treatment').ss).toBeCloseTo(13.28, 2);
+      expect(row('error').df).toBe(11);
+      expect(body.means.map((m: { mean: number }) => Number(m.mean.toFixed(2)))).toEqual([40.38, 41.42, 38.8]);
+      expect(body.slopes).toEqual({ f: expect.any(Number), p: expect.any(Number), df1: 2, df2: 9 });
+      expect(body.covariate.slope).toBeCloseTo(0.954, 3);
+      expect(body.baseline.df1).toBe(2);
+    });
+
+    it('refuses a covariate that is not a number, naming the row', async () => {
+      const response = await t.http
+        .post('/api/stats/anova')
+        .set(bearer(token))
+        .send({ design: 'crd', observations: fiber.map((o, i) => (i === 2 ? { ...o, covariate: 'thick' } : o)) });
+      expect(response.status).toBe(422);
+      expect(response.body.message).toMatch(/observations\[2\]\.covariate must be a finite number or a decimal string/);
     });
   });
 });

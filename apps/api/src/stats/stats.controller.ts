@@ -7,6 +7,8 @@ import { CensoredRequestDto } from './dto/censored-request.dto';
 import { CountsAnswerDto } from './dto/counts-answer.dto';
 import { CountsRequestDto, OrdinalRequestDto } from './dto/labelled-value-request.dto';
 import { OrdinalAnswerDto } from './dto/ordinal-answer.dto';
+import { RepeatedAnswerDto } from './dto/repeated-answer.dto';
+import { RepeatedRequestDto } from './dto/repeated-request.dto';
 import { PowerRequestDto } from './dto/power-request.dto';
 import { RankTestRequestDto } from './dto/rank-test-request.dto';
 import { StatsService } from './stats.service';
@@ -50,6 +52,24 @@ export class StatsController {
   @ApiUnprocessableEntityResponse({ description: 'A malformed body (naming the field) or data the analysis cannot take (the engine’s sentence).' })
   censored(@Body() body: CensoredRequestDto) {
     return this.stats.censored(body);
+  }
+
+  @Post('repeated')
+  @SignedIn()
+  @HttpCode(200)
+  @ApiOperation({
+    summary: 'One measure over several rounds on the same plots: REML with a within-plot covariance, Kenward–Roger tests, means per round, split plot in time',
+    description:
+      'Blocks (and sites), treatment, round and treatment × round fitted by REML with compound symmetry, continuous-time AR(1) on the day offsets ' +
+      '(unequal spacing honoured) or unstructured covariance — auto: every one that applies, the lowest AIC chosen and shown beside the others; ' +
+      'Kenward–Roger F tests of treatment, round and their interaction and of treatment within each round; least-squares means per treatment and ' +
+      'round with Kenward–Roger SEs. Beside it the classical split plot in time on the plots seen at every round, with Mauchly’s test and the ' +
+      'Greenhouse–Geisser and Huynh–Feldt corrections.',
+  })
+  @ApiOkResponse({ type: RepeatedAnswerDto })
+  @ApiUnprocessableEntityResponse({ description: 'A malformed body (naming the field) or data the analysis cannot take (the engine’s sentence).' })
+  repeated(@Body() body: RepeatedRequestDto) {
+    return this.stats.repeated(body);
   }
 
   @Post('ordinal')

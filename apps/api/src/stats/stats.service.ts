@@ -1,9 +1,10 @@
 import { Injectable, UnprocessableEntityException } from '@nestjs/common';
-import type { CensoredAnswer, CountsAnswer, OrdinalAnswer } from '@friable/contracts';
-import { analyseCensoredTimes, analyseCounts, analyseOrdinalScores, analyseTrial, blocksForPower, friedman, kruskalWallis, rcbdPower, type TrialAnalysis, type TrialAnalysisRequest } from '@friable/stats';
+import type { CensoredAnswer, CountsAnswer, OrdinalAnswer, RepeatedAnswer } from '@friable/contracts';
+import { analyseCensoredTimes, analyseCounts, analyseOrdinalScores, analyseRepeatedMeasures, analyseTrial, blocksForPower, friedman, kruskalWallis, rcbdPower, type TrialAnalysis, type TrialAnalysisRequest } from '@friable/stats';
 import type { AnovaRequestDto } from './dto/anova-request.dto';
 import type { CensoredRequestDto } from './dto/censored-request.dto';
 import type { CountsRequestDto, OrdinalRequestDto } from './dto/labelled-value-request.dto';
+import type { RepeatedRequestDto } from './dto/repeated-request.dto';
 import type { PowerRequestDto } from './dto/power-request.dto';
 import type { RankTestRequestDto } from './dto/rank-test-request.dto';
 
@@ -37,6 +38,10 @@ export class StatsService {
 
   censored(request: CensoredRequestDto): CensoredAnswer {
     return engine(() => plain(analyseCensoredTimes(request)));
+  }
+
+  repeated(request: RepeatedRequestDto): RepeatedAnswer {
+    return engine(() => plain(analyseRepeatedMeasures(request)));
   }
 
   ordinal(request: OrdinalRequestDto): OrdinalAnswer {

@@ -18,6 +18,8 @@ export class ObservationDto {
   site?: string;
   @ApiProperty({ oneOf: [{ type: 'number' }, { type: 'string' }], example: '12.3', description: 'A JSON number, or decimal text (analysed exactly).' })
   value: number | string;
+  @ApiPropertyOptional({ oneOf: [{ type: 'number' }, { type: 'string' }], example: '10.8', description: 'A baseline covariate (e.g. the plot’s day-0 value): the answer becomes an analysis of covariance (covariate row, adjusted means, slopes).' })
+  covariate?: number | string;
 }
 
 export class AnovaRequestDto {
@@ -62,6 +64,6 @@ export class AnovaRequestDto {
 
   @ApiProperty({ type: [ObservationDto] })
   @ArrayMaxSize(MAX_OBSERVATIONS, { message: `observations must hold at most ${MAX_OBSERVATIONS} rows` })
-  @IsObservationList()
+  @IsObservationList(undefined, { covariate: 'decimal' })
   observations: ObservationDto[];
 }
