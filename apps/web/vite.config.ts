@@ -30,5 +30,7 @@ export default defineConfig({
     environment: 'jsdom',
     setupFiles: ['src/test-setup.ts'],
     css: false,
+    // Typing through user-event is slow on a busy two-core CI machine; 5 s timed out there.
+    testTimeout: 20_000,
   },
 });

@@ -1,23 +1,37 @@
 import { NestFactory } from '@nestjs/core';
 import type { NestExpressApplication } from '@nestjs/platform-express';
-import { DocumentBuilder, SwaggerModule } from '@nestjs/swagger';
+import { DocumentBuilder, SwaggerModule, type OpenAPIObject } from '@nestjs/swagger';
+import cookieParser from 'cookie-parser';
 import express, { type NextFunction, type Request, type Response } from 'express';
 import { existsSync } from 'node:fs';
 import { join } from 'node:path';
 import { AppModule } from './app.module';
 import { toProblem } from './common/filters/problem.filter';
+import { boundedJson } from './common/input/bounded-json';
 import { createValidationPipe } from './common/pipes/validation.pipe';
+import { securityHeaders } from './common/security/security-headers';
 import { readAppConfig } from './config/app.config';
+import { readAuthConfig } from './config/auth.config';
+import { databaseGate } from './health/database-gate';
+import { DatabaseWatchService } from './health/database-watch.service';
+import { MAX_OBSERVATIONS } from './stats/dto/anova-request.dto';
 
 /** Everything main.ts and the end-to-end tests share: prefix, validation, OpenAPI page, the built web app. */
 export function configureApp(app: NestExpressApplication): NestExpressApplication {
   app.setGlobalPrefix('api');
+  app.use(securityHeaders());
+  // While the database does not answer, API requests are answered 503 at once (health/database-gate.ts).
+  app.use(databaseGate(app.get(DatabaseWatchService)));
   app.useGlobalPipes(createValidationPipe());
-  app.set('trust proxy', 'loopback');
+  // X-Forwarded-For counts only from the proxies TRUST_PROXY names (none by default), so a client cannot
+  // choose the address that sign-in lockouts and rate limits count by.
+  app.set('trust proxy', readAuthConfig().trustProxy);
+  app.use(cookieParser());
   app.disable('x-powered-by');
-  // Analysis requests carry whole data sets; everything else stays small.
-  app.use('/api/stats', express.json({ limit: '25mb' }));
-  app.use(express.json({ limit: '2mb' }));
+  // Analysis requests carry whole data sets; everything else stays small. Depth, list length and
+  // numbers are bounded on the raw bytes before JSON.parse (common/input/bounded-json.ts).
+  app.use('/api/stats', boundedJson({ limit: '25mb', maxItems: MAX_OBSERVATIONS }));
+  app.use(boundedJson({ limit: '2mb' }));
   // Body-parser failures are answered here, in the API's own words, before they reach a route.
   app.use((error: unknown, _request: Request, response: Response, next: NextFunction) => {
     if (!error) return next();
@@ -26,18 +40,10 @@ export function configureApp(app: NestExpressApplication): NestExpressApplicatio
   });
   app.enableShutdownHooks();
 
-  const document = SwaggerModule.createDocument(
-    app,
-    new DocumentBuilder()
-      .setTitle('Friable API')
-      .setDescription('Replicated garden-treatment trials: protocol, sites, plots, observations and findings.')
-      .setVersion('0.1.0')
-      .addBearerAuth()
-      .build(),
-  );
-  SwaggerModule.setup('api/docs', app, document, { jsonDocumentUrl: 'api/docs/openapi.json' });
+  const { webDistDir, apiDocsPublic } = readAppConfig();
+  // The OpenAPI page is public only when API_DOCS_PUBLIC=true; otherwise it is not served at all.
+  if (apiDocsPublic) SwaggerModule.setup('api/docs', app, createOpenApiDocument(app), { jsonDocumentUrl: 'api/docs/openapi.json' });
 
-  const { webDistDir } = readAppConfig();
   const indexHtml = join(webDistDir, 'index.html');
   if (existsSync(indexHtml)) {
     app.use(express.static(webDistDir, { index: false, maxAge: '1h' }));
@@ -49,6 +55,19 @@ export function configureApp(app: NestExpressApplication): NestExpressApplicatio
     });
   }
   return app;
+}
+
+/** The OpenAPI document of every route (served at /api/docs when configured; read by tests). */
+export function createOpenApiDocument(app: NestExpressApplication): OpenAPIObject {
+  return SwaggerModule.createDocument(
+    app,
+    new DocumentBuilder()
+      .setTitle('Friable API')
+      .setDescription('Replicated garden-treatment trials: protocol, sites, plots, observations and findings.')
+      .setVersion('0.1.0')
+      .addBearerAuth()
+      .build(),
+  );
 }
 
 export async function createApp(): Promise<NestExpressApplication> {

@@ -12,7 +12,8 @@ const usage = `usage: node dist/cli.js migrate up|down|down-all|status
        node dist/cli.js demo load`;
 
 async function main(args: string[]): Promise<void> {
-  const sequelize = new Sequelize({ ...sequelizeOptions(readDatabaseConfig()), models: allModels });
+  // Migrations may run one long statement (an index on a big table): no socket timeout here.
+  const sequelize = new Sequelize({ ...sequelizeOptions({ ...readDatabaseConfig(), socketTimeoutMs: 0 }), models: allModels });
   try {
     const [area, action] = args;
     if (area === 'migrate') {

@@ -6,7 +6,8 @@ async function main(): Promise<void> {
   const config = readAppConfig();
   const app = await createApp();
   await app.listen(config.port, config.host);
-  process.stdout.write(`Friable API listening on http://${config.host}:${config.port} (OpenAPI page at /api/docs)\n`);
+  const docs = config.apiDocsPublic ? ' (OpenAPI page at /api/docs)' : '';
+  process.stdout.write(`Friable API listening on http://${config.host}:${config.port}${docs}\n`);
 }
 
 main().catch((error: unknown) => {

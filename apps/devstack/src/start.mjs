@@ -8,6 +8,7 @@ import { repoRoot } from './env.mjs';
 import { apiCommand, appEnvironment, buildWebApp, compileTypeScript, ensureDependencies, startDatabase } from './prepare.mjs';
 import { startMailSink } from './mail-sink.mjs';
 import { log } from './run.mjs';
+import { supervise } from './supervise.mjs';
 
 ensureDependencies();
 const env = appEnvironment();
@@ -20,14 +21,11 @@ function stopAll(code) {
   if (stopping) return;
   stopping = true;
   log('stopping…');
-  if (api && api.exitCode === null) api.kill('SIGTERM');
   mail?.close();
-  const finish = () => {
+  (api ? api.stop() : Promise.resolve()).then(() => {
     db.stop();
     process.exit(code);
-  };
-  if (api && api.exitCode === null) api.once('exit', finish);
-  else finish();
+  });
 }
 process.on('SIGINT', () => stopAll(0));
 process.on('SIGTERM', () => stopAll(0));
@@ -44,9 +42,11 @@ try {
 }
 
 if (!stopping) {
-  api = spawn(process.execPath, [resolve(repoRoot, 'apps/api/dist/main.js')], { stdio: 'inherit', env, cwd: repoRoot });
-  api.on('exit', (code) => {
-    if (!stopping) stopAll(code ?? 1);
+  // A crashed API is started again (growing pauses; given up after 5 quick deaths in a row).
+  api = supervise({
+    start: () => spawn(process.execPath, [resolve(repoRoot, 'apps/api/dist/main.js')], { stdio: 'inherit', env, cwd: repoRoot }),
+    log,
+    onGiveUp: (code) => stopAll(code ?? 1),
   });
   await announceWhenReady();
 }

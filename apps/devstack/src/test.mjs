@@ -43,6 +43,7 @@ mkdirSync(resultsDir, { recursive: true });
 const suites = [
   { name: 'stats library', cwd: 'libs/stats', args: [] },
   { name: 'field library', cwd: 'libs/field', args: [] },
+  { name: 'devstack', cwd: 'apps/devstack', args: [] },
   { name: 'API unit', cwd: 'apps/api', args: [] },
   { name: 'API end-to-end', cwd: 'apps/api', args: ['--config', 'vitest.e2e.config.ts'] },
   { name: 'web components', cwd: 'apps/web', args: [] },

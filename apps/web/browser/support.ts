@@ -37,12 +37,25 @@ export function forbidOutsideRequests(page: Page, seen: string[]): void {
   });
 }
 
+/**
+ * Collects what Chromium reports in the console when the Content-Security-Policy blocks something
+ * (an inline script or style, an eval, a request to another origin); it should stay empty.
+ */
+export function watchContentSecurityPolicy(page: Page, seen: string[]): void {
+  page.on('console', (message) => {
+    const text = message.text();
+    if (/Content Security Policy|Refused to (load|apply|execute|evaluate|connect|frame|create)/i.test(text)) seen.push(`${page.url()}: ${text}`);
+  });
+}
+
 export interface BrowserSession {
   browser: Browser;
   context: BrowserContext;
   page: Page;
   /** Requests to any host other than the app's own, seen on `page` (should stay empty). */
   outside: string[];
+  /** Content-Security-Policy violations reported on `page`: a test fails when there is any. */
+  cspViolations: string[];
 }
 
 /** One browser for the test file and a fresh laptop-sized context and page per test. */
@@ -56,8 +69,13 @@ export function useBrowserSession(contextOptions: BrowserContextOptions = {}): B
     session.context = await session.browser.newContext({ viewport: { width: 1280, height: 800 }, ...contextOptions });
     session.page = await session.context.newPage();
     session.outside = [];
+    session.cspViolations = [];
     forbidOutsideRequests(session.page, session.outside);
+    watchContentSecurityPolicy(session.page, session.cspViolations);
   });
-  afterEach(() => session.context.close());
+  afterEach(async () => {
+    await session.context.close();
+    if (session.cspViolations.length > 0) throw new Error(`the Content-Security-Policy blocked something:\n${session.cspViolations.join('\n')}`);
+  });
   return session;
 }

@@ -61,15 +61,22 @@ describe('inviting a collaborator from the Team page', () => {
     await session.page.getByRole('region', { name: 'Pending invitations' }).getByText(invitee).waitFor();
     await screenshot(session.page, 'team-investigator');
 
-    await session.page.getByRole('link', { name: 'Outbox' }).click();
-    const card = session.page.locator('.fr-outbox__message').filter({ hasText: invitee }).first();
+    // The Outbox holds every invitation link, so only an administrator has it (the investigator has no link to it).
+    expect(await session.page.getByRole('link', { name: 'Outbox' }).count()).toBe(0);
+    const administrator = await session.browser.newContext({ viewport: { width: 1280, height: 900 } });
+    const adminPage = await administrator.newPage();
+    forbidOutsideRequests(adminPage, session.outside);
+    await signIn(adminPage, 'admin@example.org');
+    await adminPage.getByRole('link', { name: 'Outbox' }).click();
+    const card = adminPage.locator('.fr-outbox__message').filter({ hasText: invitee }).first();
     await card.waitFor();
     const show = card.getByRole('button', { name: /^Show/ });
     if (await show.count()) await show.click();
     await expect(card.getByText(trialTitle).first().isVisible()).resolves.toBe(true);
-    await screenshot(session.page, 'outbox');
+    await screenshot(adminPage, 'outbox');
     const link = await card.getByRole('link', { name: /\/invitations\// }).getAttribute('href');
     expect(link).toMatch(new RegExp(`^${baseUrl()}/invitations/[A-Za-z0-9_-]{43}$`));
+    await administrator.close();
 
     // The invitee, in a browser of their own, not signed in.
     const theirs = await session.browser.newContext({ viewport: { width: 390, height: 844 }, isMobile: true });

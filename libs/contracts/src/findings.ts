@@ -1,7 +1,17 @@
 // Findings (the analysis of one measure and round), saved analyses with review, exports and the report.
 import type { AssessmentRound, Measure, MeasureKind, Site, TrialDetail } from './protocol';
 
-export const ANALYSIS_DESIGNS = ['crd', 'rcbd', 'factorial-rcbd', 'multisite-rcbd'] as const;
+export const ANALYSIS_DESIGNS = [
+  'crd',
+  'rcbd',
+  'factorial-crd',
+  'factorial-rcbd',
+  'split-plot',
+  'split-split-plot',
+  'multisite-rcbd',
+  'multisite-factorial-rcbd',
+  'multisite-split-plot',
+] as const;
 export type AnalysisDesign = (typeof ANALYSIS_DESIGNS)[number];
 
 export const ANALYSIS_TRANSFORMS = ['none', 'log', 'sqrt', 'arcsine-sqrt'] as const;
@@ -209,6 +219,8 @@ export interface FindingsContext {
   /** The exact options given to the engine beside the observations (POST /api/stats/anova body without observations). */
   engineRequest: {
     design: AnalysisDesign;
+    /** Factorial and split designs: the factor names (a split plot's from the whole-plot factor down). */
+    factorNames?: string[];
     alpha: number;
     sitesAre?: 'random' | 'fixed';
     control?: string;

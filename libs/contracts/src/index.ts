@@ -14,7 +14,11 @@ export type TrialRole = (typeof TRIAL_ROLES)[number];
 export const TRIAL_STATUSES = ['draft', 'active', 'locked', 'archived'] as const;
 export type TrialStatus = (typeof TRIAL_STATUSES)[number];
 
-export const TRIAL_DESIGNS = ['crd', 'rcbd', 'factorial-rcbd'] as const;
+/**
+ * One treatment factor: completely randomized (crd) or in complete blocks (rcbd). Factorials of 2–4 factors,
+ * completely randomized or in blocks. Split plot and split-split plot, in blocks. Any of them at one site or several.
+ */
+export const TRIAL_DESIGNS = ['crd', 'rcbd', 'factorial-crd', 'factorial-rcbd', 'split-plot', 'split-split-plot'] as const;
 export type TrialDesign = (typeof TRIAL_DESIGNS)[number];
 
 /** What the API says about a person: never the password hash. */
@@ -25,6 +29,12 @@ export interface PublicUser {
   isAdmin: boolean;
   isActive: boolean;
   createdAt: string;
+  /** BCP 47 tag for numbers and dates (e.g. `de-DE`, decimal comma); null means the browser's own. */
+  locale: string | null;
+  emailReminders: boolean;
+  emailReceipts: boolean;
+  /** When the person last signed in; null if never. */
+  lastSignInAt: string | null;
 }
 
 export interface LoginRequest {
@@ -61,3 +71,6 @@ export * from './protocol';
 export * from './team';
 export * from './intake';
 export * from './findings';
+export * from './models';
+export * from './accounts';
+export * from './review';

@@ -10,21 +10,13 @@ export type RateUnitId = (typeof RATE_UNIT_IDS)[number];
 export const RATE_BASES = ['area', 'concentration'] as const;
 export type RateBasis = (typeof RATE_BASES)[number];
 
-export interface Factor {
-  id: number;
-  /** 1 = factor A, 2 = factor B. */
-  position: 1 | 2;
-  name: string;
-  levels: Array<{ id: number; code: string; name: string }>;
-}
+/** The unit a factor's levels are applied to: the plot, or a stratum of a split plot. */
+export const APPLIED_UNITS = ['plot', 'whole plot', 'sub plot', 'sub-sub plot'] as const;
+export type AppliedUnit = (typeof APPLIED_UNITS)[number];
 
-export interface Treatment {
-  id: number;
-  code: string;
-  name: string;
-  description: string | null;
-  isControl: boolean;
-  /** null for an untreated control or a treatment without an applied material. */
+/** The stated rate of what is applied and its material: a treatment's, or a factor level's. */
+export interface MaterialRate {
+  /** null for an untreated control (or level) without an applied material. */
   rateValue: number | null;
   rateUnit: RateUnitId | null;
   rateBasis: RateBasis;
@@ -38,7 +30,34 @@ export interface Treatment {
   /** Water share of the as-is product for a dry-basis rate, [0, 1). */
   moistureFraction: number | null;
   materialKind: 'gypsum' | 'other';
-  /** For factorial trials: the level of each factor. */
+}
+
+/** What a level of a factor is: its own code, name and (when something is applied) its rate and material. */
+export interface FactorLevel extends MaterialRate {
+  id: number;
+  /** 1 to 6 letters or digits, unique within the factor; treatment codes join the level codes. */
+  code: string;
+  name: string;
+  description: string | null;
+}
+
+export interface Factor {
+  id: number;
+  /** 1 to 4 in the order given; a split plot's whole-plot factor is 1, its sub-plot factor 2, its sub-sub-plot factor 3. */
+  position: 1 | 2 | 3 | 4;
+  name: string;
+  /** Where the levels go on: every plot, or a split plot's whole plots, sub plots or sub-sub plots. */
+  appliedTo: AppliedUnit;
+  levels: FactorLevel[];
+}
+
+export interface Treatment extends MaterialRate {
+  id: number;
+  code: string;
+  name: string;
+  description: string | null;
+  isControl: boolean;
+  /** Factorial and split-plot trials: the level of each factor, in the factors' order. */
   factorLevelIds: number[];
   position: number;
 }
@@ -108,11 +127,27 @@ export interface Site extends PlotGeometryInput {
   /** Plots at the site, 0 until randomized. */
   plotCount: number;
   hasObservations: boolean;
-  /** Guardrail sentences: fewer than 4 blocks, error df below 12, one treatment. */
+  /** Guardrail sentences: fewer than 4 blocks, error df below 12 in any stratum, one treatment. */
   warnings: string[];
+  /** The error strata of the design at this site: each error line, its df and the terms tested against it. */
+  strata: ErrorStratum[];
 }
 
-export type SiteInput = Omit<Site, 'id' | 'areaM2' | 'leadName' | 'randomizedAt' | 'randomizationSeed' | 'plotCount' | 'hasObservations' | 'warnings'>;
+/** One error line of the design's ANOVA at a site (a split plot has a whole-plot and a sub-plot error). */
+export interface ErrorStratum {
+  unit: AppliedUnit;
+  /** 'Error', 'Whole-plot error', 'Sub-plot error' or 'Sub-sub-plot error'. */
+  name: string;
+  errorDf: number;
+  /** How the df are counted, in words: '(2 blocks − 1) × (2 levels of Amendment − 1)'. */
+  arithmetic: string;
+  /** Terms tested against it: factor names joined by ':' (as the analysis names them), or 'treatment'. */
+  terms: string[];
+  /** The F the first term must exceed at p = 0.05; null with no error df. */
+  criticalF: number | null;
+}
+
+export type SiteInput = Omit<Site, 'id' | 'areaM2' | 'leadName' | 'randomizedAt' | 'randomizationSeed' | 'plotCount' | 'hasObservations' | 'warnings' | 'strata'>;
 
 export interface Plot {
   id: number;
@@ -123,12 +158,22 @@ export interface Plot {
   position: number;
   treatmentId: number;
   treatmentCode: string;
+  /** Split designs: the whole plot within its block, from 1 (null otherwise). */
+  wholePlot: number | null;
+  /** Split designs: the sub plot within its whole plot, from 1 (null otherwise). */
+  subPlot: number | null;
+  /** Split-split plot: the sub-sub plot within its sub plot, from 1 (null otherwise). */
+  subSubPlot: number | null;
+  /** Split designs: the label of the whole plot the plot lies in, e.g. `HL-B2-W3` (null otherwise). */
+  wholePlotLabel: string | null;
 }
 
 export interface ActivationCheck {
   ready: boolean;
   /** Each failed check in words, e.g. "Site Millbrook is not randomized yet." */
   problems: string[];
+  /** What does not stop the trial but should be read before it starts (the design's guardrails per site), in words. */
+  warnings: string[];
 }
 
 /** GET /api/trials/:trialId: the whole protocol. */
@@ -172,9 +217,16 @@ export type TrialUpdateInput = Partial<Omit<TrialCreateInput, 'code'>> & {
   status?: TrialStatus;
 };
 
-/** PUT /api/trials/:trialId/factors (factorial-rcbd): treatments become every combination. */
+/** A level as PUT …/factors takes it: code and name, and optionally its rate and material. */
+export type FactorLevelInput = Pick<FactorLevel, 'code' | 'name'> & Partial<Omit<FactorLevel, 'id' | 'code' | 'name'>>;
+
+/**
+ * PUT /api/trials/:trialId/factors: 2 to 4 factors for a factorial, exactly 2 for a split plot (the whole-plot
+ * factor first) and 3 for a split-split plot. The treatments become every combination of the levels. When the
+ * factors and their level codes stay as they are, names and rates change in place and the layouts stay.
+ */
 export interface FactorsInput {
-  factors: Array<{ name: string; levels: Array<{ code: string; name: string }> }>;
+  factors: Array<{ name: string; levels: FactorLevelInput[] }>;
 }
 
 /** GET /api/trials/:trialId/amounts: how much of each treatment's material goes on one plot at each site. */
@@ -186,6 +238,31 @@ export interface PlotAmount {
   perPlot: DoseAnswer | null;
   /** All the site's plots of this treatment, with the margin. */
   siteTotal: { grams: number | null; litres: number | null } | null;
+}
+
+/**
+ * GET /api/trials/:trialId/level-amounts (factorial and split-plot trials): how much of each factor level's material
+ * goes on one unit it is applied to (a whole plot for a split plot's whole-plot factor), and on all of them at a site.
+ */
+export interface LevelAmount {
+  siteId: number;
+  factorId: number;
+  factorName: string;
+  levelId: number;
+  levelCode: string;
+  levelName: string;
+  appliedTo: AppliedUnit;
+  /** Measured plots one unit covers (sub plots side by side in a whole plot); 1 for a plot. */
+  plotsPerUnit: number;
+  /** Surface of one unit: the site's plot area × plotsPerUnit. */
+  unitAreaM2: number;
+  /** Units of this level at the site (planned from the blocks before randomizing). */
+  units: number;
+  perUnit: DoseAnswer | null;
+  /** All the site's units of this level, with the margin. */
+  siteTotal: { grams: number | null; litres: number | null } | null;
+  /** Why no amount could be worked out (a rate the site's geometry cannot take). */
+  problem: string | null;
 }
 
 /** POST /api/rates/dose */

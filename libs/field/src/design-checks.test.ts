@@ -41,6 +41,40 @@ describe('designWarnings (DOMAIN.md "Design rules of thumb")', () => {
     expect(() => designWarnings({ design: 'rcbd', treatments: [], blocks: 4, sites: 1 })).toThrow(/treatments/);
     expect(() => designWarnings({ design: 'rcbd', treatments: 4, blocks: 0, sites: 1 })).toThrow(/blocks/);
     expect(() => designWarnings({ design: 'rcbd', treatments: 4, blocks: 4, sites: 0 })).toThrow(/sites/);
-    expect(() => designWarnings({ design: 'split-plot' as never, treatments: 4, blocks: 4, sites: 1 })).toThrow(/design/);
+    expect(() => designWarnings({ design: 'latin-square' as never, treatments: 4, blocks: 4, sites: 1 })).toThrow(/design/);
+  });
+});
+
+describe('designWarnings for split plots and factorials (each error stratum)', () => {
+  const amendmentMulch = [
+    { name: 'Amendment', levels: 2 },
+    { name: 'Mulch', levels: 3 },
+  ];
+
+  it('says plainly that a split plot in 2 blocks has 1 df of whole-plot error and what that means', () => {
+    // Whole-plot error (2−1)(2−1) = 1 (R: aov(y ~ A*B + Error(block/A)) on 2 blocks); qf(0.95, 1, 1) = 161.4.
+    // 12 df need (r−1)·1 ≥ 12, r = 13. Sub-plot error 2·(2−1)(3−1) = 4; 12 need 2(r−1)·2 ≥ 12, r = 4.
+    expect(designWarnings({ design: 'split-plot', factors: amendmentMulch, blocks: 2, sites: 2 })).toEqual([
+      '2 blocks per site is fewer than the 4 replicates the PNW on-farm testing guide recommends.',
+      'Whole-plot error has only 1 degree of freedom at each of the 2 sites ((2 blocks − 1) × (2 levels of Amendment − 1)), fewer than the 12 EPPO PP 1/152 asks for. ' +
+        'Amendment is tested against it: at p = 0.05 the F of Amendment must exceed 161.4, so only a very large difference could show. 13 blocks would give 12.',
+      'Sub-plot error has only 4 degrees of freedom at each of the 2 sites (2 levels of Amendment × (2 blocks − 1) × (3 levels of Mulch − 1)), fewer than the 12 EPPO PP 1/152 asks for. ' +
+        'Mulch and Amendment × Mulch are tested against it: at p = 0.05 the F of Mulch must exceed 6.94. 4 blocks would give 12.',
+    ]);
+  });
+
+  it('a split plot in one block cannot test the whole-plot factor at all', () => {
+    const warnings = designWarnings({ design: 'split-plot', factors: amendmentMulch, blocks: 1, sites: 1 });
+    expect(warnings).toContain('Whole-plot error has no degrees of freedom with 1 block at the site: Amendment cannot be tested. 13 blocks would give 12.');
+  });
+
+  it('no stratum warning once every stratum has 12 df (split plot 4 × 3 in 5 blocks: 12 and 24)', () => {
+    expect(designWarnings({ design: 'split-plot', factors: [{ name: 'A', levels: 4 }, { name: 'B', levels: 3 }], blocks: 5, sites: 1 })).toEqual([]);
+  });
+
+  it('a factorial from its factors counts the combinations: 2 × 2 in 4 blocks leaves 9', () => {
+    expect(designWarnings({ design: 'factorial-rcbd', factors: [{ name: 'A', levels: 2 }, { name: 'B', levels: 2 }], blocks: 4, sites: 1 })).toEqual([
+      '4 combinations × 4 blocks leave 9 error degrees of freedom at the site, fewer than the 12 EPPO PP 1/152 asks for; 5 blocks would give 12.',
+    ]);
   });
 });

@@ -1,10 +1,13 @@
 import { requirePositiveInteger } from './checks';
-import { requireTrialDesign, type TrialDesign } from './randomize';
+import { errorStrata, type ErrorStratum, type StratumFactor } from './design-strata';
+import { DESIGN_RULES, requireTrialDesign, type TrialDesign } from './trial-designs';
 
 export interface DesignCheckInput {
   readonly design: TrialDesign;
-  /** Treatment codes, or their number; for a factorial, the combinations. */
-  readonly treatments: number | readonly string[];
+  /** Treatment codes, or their number; for a factorial without `factors`, the combinations. */
+  readonly treatments?: number | readonly string[];
+  /** Factorial and split designs: each factor's name and number of levels (a split plot's whole-plot factor first). */
+  readonly factors?: readonly StratumFactor[];
   /** Blocks per site (replicates for `crd`). */
   readonly blocks: number;
   readonly sites: number;
@@ -20,39 +23,69 @@ export const DESIGN_MINIMUMS = Object.freeze({
 
 const FUNCTION_NAME = 'designWarnings';
 
-/** Error df at one site: (t−1)(b−1) for block designs, t(r−1) for a completely randomized one. */
-function siteErrorDegreesOfFreedom(design: TrialDesign, treatments: number, blocks: number): number {
-  return design === 'crd' ? treatments * (blocks - 1) : (treatments - 1) * (blocks - 1);
+/** The fewest blocks that give the stratum 12 error df (each extra block adds at least one). */
+function blocksNeeded(strataAt: (blocks: number) => readonly ErrorStratum[], index: number): { blocks: number; errorDf: number } {
+  let blocks = 2;
+  while (strataAt(blocks)[index]!.errorDf < DESIGN_MINIMUMS.errorDegreesOfFreedom) blocks += 1;
+  return { blocks, errorDf: strataAt(blocks)[index]!.errorDf };
 }
 
-function blocksNeeded(design: TrialDesign, treatments: number): number {
-  let blocks = 2;
-  while (siteErrorDegreesOfFreedom(design, treatments, blocks) < DESIGN_MINIMUMS.errorDegreesOfFreedom) blocks += 1;
-  return blocks;
+/** 161.4476 → '161.4', 18.5128 → '18.5', 4.7472 → '4.75'. */
+function formatF(value: number): string {
+  return value >= 100 ? value.toFixed(1) : value.toPrecision(3);
+}
+
+function listed(terms: readonly string[]): string {
+  const words = terms.map((term) => term.split(':').join(' × '));
+  return words.length <= 1 ? (words[0] ?? '') : `${words.slice(0, -1).join(', ')} and ${words[words.length - 1]}`;
+}
+
+const degrees = (df: number) => `${df} degree${df === 1 ? '' : 's'} of freedom`;
+
+/** The plain sentence about a split plot's stratum with too few error df. */
+function splitStratumWarning(stratum: ErrorStratum, where: string, blocks: number, needed: { blocks: number; errorDf: number }): string {
+  const first = stratum.terms[0]!.split(':').join(' × ');
+  const more = `${needed.blocks} blocks would give ${needed.errorDf}.`;
+  if (stratum.errorDf === 0) {
+    return `${stratum.name} has no degrees of freedom with ${blocks} block ${where}: ${listed(stratum.terms)} cannot be tested. ${more}`;
+  }
+  const verb = stratum.terms.length === 1 ? 'is' : 'are';
+  const critical = stratum.criticalF === null ? '' : `: at p = 0.05 the F of ${first} must exceed ${formatF(stratum.criticalF)}`;
+  const plainly = stratum.errorDf <= 2 ? ', so only a very large difference could show' : '';
+  return (
+    `${stratum.name} has only ${degrees(stratum.errorDf)} ${where} (${stratum.arithmetic}), fewer than the ${DESIGN_MINIMUMS.errorDegreesOfFreedom} EPPO PP 1/152 asks for. ` +
+    `${listed(stratum.terms)} ${verb} tested against it${critical}${plainly}. ${more}`
+  );
 }
 
 /**
  * Design warnings — plain sentences about a trial design too small to say much.
  *
- * Purpose: shown on the Protocol and Planner before plots are laid out. Each site is
- * analysed on its own before any combined analysis, so the checks apply per site.
+ * Purpose: shown on the Protocol, the Sites page, the activation check and the Planner before
+ * plots are laid out. Each site is analysed on its own before any combined analysis, so the
+ * checks apply per site.
  * - Fewer than 4 blocks (replicates) per site: PNW on-farm testing guide.
- * - Fewer than 12 error degrees of freedom at one site, (t−1)(b−1) for block designs and
- *   t(r−1) for `crd`: EPPO PP 1/152. 4 treatments × 5 blocks give 12; × 4 blocks only 9.
+ * - Fewer than 12 error degrees of freedom in any error stratum at one site: EPPO PP 1/152.
+ *   One error for completely randomized, block and factorial designs, (t−1)(b−1) or t(r−1);
+ *   4 treatments × 5 blocks give 12, × 4 blocks only 9. A split plot's whole-plot error has
+ *   (r−1)(a−1): with 2 blocks and 2 whole-plot levels only 1 df, and the sentence says what that
+ *   means for the F test (the F the whole-plot factor must exceed at p = 0.05).
  * - Only one treatment: nothing to compare (an untreated control is needed for any claim).
- * Reference: DOMAIN.md, "Design rules of thumb".
+ * Reference: DOMAIN.md, "Design rules of thumb"; Gomez & Gomez (1984), 2nd ed., Tables 3.8 and 3.13.
  * Throws: RangeError naming the field for fewer than 1 treatment, block or site, or a
- * fractional count, or an unknown design.
+ * fractional count, an unknown design, or factors the design does not take.
  * Example: `designWarnings({ design: 'rcbd', treatments: 4, blocks: 4, sites: 1 })` → one
  * sentence: "4 treatments × 4 blocks leave 9 error degrees of freedom at the site, …"
  */
 export function designWarnings(input: DesignCheckInput): readonly string[] {
   const design = requireTrialDesign(FUNCTION_NAME, input.design);
-  const treatmentCount = typeof input.treatments === 'number' ? input.treatments : input.treatments.length;
+  const rule = DESIGN_RULES[design];
+  const withFactors = rule.maxFactors > 0 && input.factors !== undefined;
+  const treatmentCount = withFactors ? input.factors!.reduce((product, f) => product * f.levels, 1) : typeof input.treatments === 'number' ? input.treatments : input.treatments?.length;
   const treatments = requirePositiveInteger(FUNCTION_NAME, 'treatments', treatmentCount);
   const blocks = requirePositiveInteger(FUNCTION_NAME, 'blocks', input.blocks);
   const sites = requirePositiveInteger(FUNCTION_NAME, 'sites', input.sites);
-  const blockWord = design === 'crd' ? 'replicates' : 'blocks';
+  const blockWord = rule.blocked ? 'blocks' : 'replicates';
   const where = sites === 1 ? 'at the site' : `at each of the ${sites} sites`;
   const warnings: string[] = [];
 
@@ -64,14 +97,21 @@ export function designWarnings(input: DesignCheckInput): readonly string[] {
       `${blocks} ${blockWord} per site is fewer than the ${DESIGN_MINIMUMS.replicates} replicates the PNW on-farm testing guide recommends.`,
     );
   }
-  const errorDf = siteErrorDegreesOfFreedom(design, treatments, blocks);
-  if (treatments >= 2 && errorDf < DESIGN_MINIMUMS.errorDegreesOfFreedom) {
-    const needed = blocksNeeded(design, treatments);
+  if (treatments < 2) return Object.freeze(warnings);
+  const strataAt = (b: number) => errorStrata({ design, blocks: b, ...(withFactors ? { factors: input.factors } : { treatments }) });
+  strataAt(blocks).forEach((stratum, index) => {
+    if (stratum.errorDf >= DESIGN_MINIMUMS.errorDegreesOfFreedom) return;
+    const needed = blocksNeeded(strataAt, index);
+    if (stratum.unit !== 'plot') {
+      warnings.push(splitStratumWarning(stratum, where, blocks, needed));
+      return;
+    }
+    const what = withFactors ? `${treatments} combinations` : `${treatments} treatments`;
     warnings.push(
-      `${treatments} treatments × ${blocks} ${blockWord} leave ${errorDf} error degrees of freedom ${where}, ` +
+      `${what} × ${blocks} ${blockWord} leave ${stratum.errorDf} error degrees of freedom ${where}, ` +
         `fewer than the ${DESIGN_MINIMUMS.errorDegreesOfFreedom} EPPO PP 1/152 asks for; ` +
-        `${needed} ${blockWord} would give ${siteErrorDegreesOfFreedom(design, treatments, needed)}.`,
+        `${needed.blocks} ${blockWord} would give ${needed.errorDf}.`,
     );
-  }
+  });
   return Object.freeze(warnings);
 }

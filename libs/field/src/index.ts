@@ -30,13 +30,25 @@ export {
 } from './rates';
 export { infiltrationRate, type InfiltrationInput, type InfiltrationRate } from './infiltration';
 export {
+  DESIGN_RULES,
   TRIAL_DESIGNS,
+  appliedUnit,
+  isFactorDesign,
+  plotsPerAppliedUnit,
+  requireTrialDesign,
+  type AppliedUnit,
+  type DesignRule,
+  type TrialDesign,
+} from './trial-designs';
+export { factorCombinations, type CombinationLevel, type FactorCombination } from './factor-combinations';
+export {
   plotLabelPrefix,
   randomizeSite,
   seedFromText,
   type PlotAssignment,
+  type RandomizationFactor,
   type SiteRandomizationInput,
-  type TrialDesign,
 } from './randomize';
+export { criticalFAt05, errorStrata, factorialTerms, type ErrorStratum, type StrataInput, type StratumFactor } from './design-strata';
 export { DESIGN_MINIMUMS, designWarnings, type DesignCheckInput } from './design-checks';
 export { DATA_COLUMNS, IDENTITY_COLUMNS, RECORD_COLUMNS, dataColumnOfHeader, normaliseHeader, type DataColumn } from './data-columns';

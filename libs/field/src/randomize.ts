@@ -1,17 +1,14 @@
-import { MersenneTwister19937, shuffle } from 'random-js';
+import { MersenneTwister19937, shuffle, type Engine } from 'random-js';
 import { invalidInput, requirePositiveInteger, requireText } from './checks';
+import { factorCombinations } from './factor-combinations';
+import { DESIGN_RULES, requireFactorCount, requireTrialDesign, type TrialDesign } from './trial-designs';
 
-export type TrialDesign = 'crd' | 'rcbd' | 'factorial-rcbd';
+export { TRIAL_DESIGNS, requireTrialDesign, type TrialDesign } from './trial-designs';
 
-/** The designs Friable lays out: completely randomized, randomized complete block, two-factor factorial in blocks. */
-export const TRIAL_DESIGNS: readonly TrialDesign[] = Object.freeze(['crd', 'rcbd', 'factorial-rcbd']);
-
-/** Throws the shared RangeError when `design` is not one of `TRIAL_DESIGNS`. */
-export function requireTrialDesign(functionName: string, design: unknown): TrialDesign {
-  if (!TRIAL_DESIGNS.includes(design as TrialDesign)) {
-    throw invalidInput(functionName, 'design', `one of ${TRIAL_DESIGNS.map((d) => `"${d}"`).join(', ')}`, design);
-  }
-  return design as TrialDesign;
+/** A factor as the randomization needs it: its name (for messages) and its level codes in order. */
+export interface RandomizationFactor {
+  readonly name: string;
+  readonly levels: readonly string[];
 }
 
 export interface SiteRandomizationInput {
@@ -20,8 +17,10 @@ export interface SiteRandomizationInput {
   /** A stable key for the site (its id, not its editable name). */
   readonly siteKey: string;
   readonly design: TrialDesign;
-  /** Treatment codes; for a factorial, the combination codes (e.g. `G1C0`). */
-  readonly treatments: readonly string[];
+  /** One-factor designs: the treatment codes. A factorial may give its combination codes here instead of `factors`. */
+  readonly treatments?: readonly string[];
+  /** Factorial and split designs: the factors in order (a split plot's whole-plot factor first), with their level codes. */
+  readonly factors?: readonly RandomizationFactor[];
   /** Blocks per site (replicates for a completely randomized design). */
   readonly blocks: number;
   /** Label prefix for the site, e.g. from `plotLabelPrefix`. */
@@ -31,11 +30,20 @@ export interface SiteRandomizationInput {
 export interface PlotAssignment {
   /** Block number from 1; for `crd`, the replicate group (layout row of t plots). */
   readonly block: number;
-  /** Position from 1: within the block, or over the whole site for `crd`. */
+  /** Position from 1: within the block, or over the whole site for `crd`. Split designs: whole plots in order, sub plots side by side inside them. */
   readonly position: number;
+  /** The treatment code; with factors, the combination code (level codes joined). */
   readonly treatmentCode: string;
-  /** Printed plot label: `GH-B2-P07`, or `GH-P07` for `crd`. */
+  /** Printed plot label: `GH-B2-P07`, `GH-P07` for `crd`, `GH-B2-W3-S2` for a split plot, `GH-B2-W3-S2-SS1` for a split-split plot. */
   readonly label: string;
+  /** Split designs: the whole plot within its block, from 1; null otherwise. */
+  readonly wholePlot: number | null;
+  /** Split designs: the sub plot within its whole plot, from 1; null otherwise. */
+  readonly subPlot: number | null;
+  /** Split-split plot: the sub-sub plot within its sub plot, from 1; null otherwise. */
+  readonly subSubPlot: number | null;
+  /** The level code of each factor, in the factors' order; empty for one-factor designs. */
+  readonly levels: readonly string[];
 }
 
 /** Bumped if the layout algorithm ever changes, so old seeds cannot silently give new maps. */
@@ -64,21 +72,74 @@ export function seedFromText(text: string): readonly number[] {
   return Object.freeze([bytes.length, ...words]);
 }
 
-function checkTreatments(treatments: readonly string[]): readonly string[] {
-  if (!Array.isArray(treatments) || treatments.length < 2) {
-    throw invalidInput(FUNCTION_NAME, 'treatments', 'a list of at least 2 treatment codes', treatments);
-  }
+function positionText(position: number, plotsInRun: number): string {
+  return String(position).padStart(Math.max(2, String(plotsInRun).length), '0');
+}
+
+/** A unit number in a label (`W3`, `S12`): padded only as wide as the largest number of its run. */
+function unitText(unit: number, unitsInRun: number): string {
+  return String(unit).padStart(String(unitsInRun).length, '0');
+}
+
+interface Treatment {
+  readonly code: string;
+  readonly levels: readonly string[];
+}
+
+/** The factors' level codes checked: the count the design allows, 2 levels or more, distinct codes and combinations. */
+function checkFactors(design: TrialDesign, factors: readonly RandomizationFactor[] | undefined): readonly RandomizationFactor[] {
+  requireFactorCount(FUNCTION_NAME, design, factors).forEach((factor, index) => {
+    requireText(FUNCTION_NAME, `factors[${index}].name`, factor?.name);
+    checkCodes(`factors[${index}].levels`, factor.levels, 'level codes');
+  });
+  return factors!;
+}
+
+function checkCodes(field: string, codes: readonly string[] | undefined, what: string): readonly string[] {
+  if (!Array.isArray(codes) || codes.length < 2) throw invalidInput(FUNCTION_NAME, field, `a list of at least 2 ${what}`, codes);
   const seen = new Set<string>();
-  for (const code of treatments) {
-    requireText(FUNCTION_NAME, 'treatments[]', code);
-    if (seen.has(code)) throw invalidInput(FUNCTION_NAME, 'treatments', 'distinct codes', `${code} twice`);
+  for (const code of codes) {
+    requireText(FUNCTION_NAME, `${field}[]`, code);
+    if (seen.has(code)) throw invalidInput(FUNCTION_NAME, field, 'distinct codes', `${code} twice`);
     seen.add(code);
   }
+  return codes;
+}
+
+/** The treatments to lay out: the given codes, or every combination of the factors' levels (first factor outermost). */
+function treatmentsOf(input: SiteRandomizationInput, design: TrialDesign): readonly Treatment[] {
+  const rule = DESIGN_RULES[design];
+  if (rule.maxFactors === 0 || (!rule.split && input.factors === undefined)) {
+    return checkCodes('treatments', input.treatments, 'treatment codes').map((code) => ({ code, levels: [] }));
+  }
+  const factors = checkFactors(design, input.factors);
+  const combinations = factorCombinations(factors.map((factor) => factor.levels.map((code) => ({ code, name: code }))));
+  const treatments = combinations.map((combination) => ({ code: combination.code, levels: combination.levels.map((level) => level.code) }));
+  checkCodes('factors', treatments.map((treatment) => treatment.code), 'combination codes (level codes that join uniquely)');
   return treatments;
 }
 
-function positionText(position: number, plotsInRun: number): string {
-  return String(position).padStart(Math.max(2, String(plotsInRun).length), '0');
+/** A split plot's block: whole-plot levels shuffled over the whole plots, then each lower factor shuffled inside its unit. */
+function splitBlock(engine: Engine, factors: readonly RandomizationFactor[], block: number, labelPrefix: string): PlotAssignment[] {
+  const plots: PlotAssignment[] = [];
+  const counts = factors.map((factor) => factor.levels.length);
+  const place = (levels: readonly string[], units: readonly number[]) => {
+    const [wholePlot, subPlot, subSubPlot = null] = units as [number, number, number?];
+    const parts = [`${labelPrefix}-B${block}`, `W${unitText(wholePlot, counts[0]!)}`, `S${unitText(subPlot, counts[1]!)}`];
+    if (subSubPlot !== null) parts.push(`SS${unitText(subSubPlot, counts[2]!)}`);
+    plots.push(
+      Object.freeze({ block, position: plots.length + 1, treatmentCode: levels.join(''), label: parts.join('-'), wholePlot, subPlot, subSubPlot, levels: Object.freeze([...levels]) }),
+    );
+  };
+  const nest = (depth: number, levels: readonly string[], units: readonly number[]) => {
+    if (depth === factors.length) {
+      place(levels, units);
+      return;
+    }
+    shuffle(engine, [...factors[depth]!.levels]).forEach((level, index) => nest(depth + 1, [...levels, level], [...units, index + 1]));
+  };
+  nest(0, [], []);
+  return plots;
 }
 
 /**
@@ -86,18 +147,25 @@ function positionText(position: number, plotsInRun: number): string {
  *
  * Purpose: give every site its own reproducible randomization: the same seed and site key
  * always give the same layout, another site gets an independent one.
- * - `rcbd` and `factorial-rcbd`: every treatment once in every block, shuffled separately in
- *   each block. Blocks are shuffled in order from one engine, so adding a block later leaves
- *   the existing blocks unchanged.
- * - `crd`: all treatments × blocks plots shuffled together over positions 1…t·b; `block` is
- *   then only the replicate group, i.e. the layout row of t consecutive positions, and has no
- *   role in the analysis.
+ * - `rcbd`, `factorial-rcbd`: every treatment (factor combination) once in every block, shuffled
+ *   separately in each block. Blocks are shuffled in order from one engine, so adding a block
+ *   later leaves the existing blocks unchanged.
+ * - `crd`, `factorial-crd`: all treatments × blocks plots shuffled together over positions
+ *   1…t·b; `block` is then only the replicate group, i.e. the layout row of t consecutive
+ *   positions, and has no role in the analysis.
+ * - `split-plot`, `split-split-plot`: in each block the whole-plot factor's levels are shuffled
+ *   over the block's whole plots; inside each whole plot the sub-plot factor's levels are
+ *   shuffled over its sub plots; inside each sub plot (split-split) the sub-sub-plot levels over
+ *   its sub-sub plots. These are the restrictions of the split-plot randomization: a whole-plot
+ *   level covers a whole plot, and a lower factor never leaves its unit.
  * The engine is MT19937 seeded with [layout version, seedFromText(seed), seedFromText(siteKey)];
  * shuffling is random-js's Fisher–Yates with unbiased integers.
  * Reference: Fisher & Yates (1938) / Durstenfeld (1964) shuffle; Matsumoto & Nishimura (1998);
- * DOMAIN.md "Design rules of thumb" (randomize separately in each block, keep the seed).
+ * Gomez & Gomez (1984), Statistical Procedures for Agricultural Research, 2nd ed., §3.4.1 and
+ * §3.5.1 (randomization of split and split-split plots); DOMAIN.md "Design rules of thumb".
  * Throws: RangeError naming the field for an empty seed, site key or prefix, an unknown
- * design, fewer than 1 block, fewer than 2 treatments, or duplicate treatment codes.
+ * design, fewer than 1 block, fewer than 2 treatments or levels, duplicate codes, or a number of
+ * factors the design does not take.
  * Example: `randomizeSite({ seed: 'clay-2025', siteKey: 'site-1', design: 'rcbd', treatments: ['C', 'G', 'K'], blocks: 2, labelPrefix: 'GH' })[0].label`
  * → 'GH-B1-P01'
  */
@@ -107,23 +175,25 @@ export function randomizeSite(input: SiteRandomizationInput): readonly PlotAssig
   const labelPrefix = requireText(FUNCTION_NAME, 'labelPrefix', input.labelPrefix);
   const design = requireTrialDesign(FUNCTION_NAME, input.design);
   const blocks = requirePositiveInteger(FUNCTION_NAME, 'blocks', input.blocks);
-  const treatments = checkTreatments(input.treatments);
+  const treatments = treatmentsOf(input, design);
   const engine = MersenneTwister19937.seedWithArray([LAYOUT_KEY_VERSION, ...seedFromText(seed), ...seedFromText(siteKey)]);
   const plots: PlotAssignment[] = [];
+  const plain = (block: number, position: number, treatment: Treatment, label: string): PlotAssignment =>
+    Object.freeze({ block, position, treatmentCode: treatment.code, label, wholePlot: null, subPlot: null, subSubPlot: null, levels: Object.freeze([...treatment.levels]) });
 
-  if (design === 'crd') {
+  if (DESIGN_RULES[design].split) {
+    for (let block = 1; block <= blocks; block += 1) plots.push(...splitBlock(engine, input.factors!, block, labelPrefix));
+  } else if (!DESIGN_RULES[design].blocked) {
     const all = shuffle(engine, Array.from({ length: blocks }, () => treatments).flat());
-    all.forEach((treatmentCode, index) => {
+    all.forEach((treatment, index) => {
       const position = index + 1;
-      const label = `${labelPrefix}-P${positionText(position, all.length)}`;
-      plots.push(Object.freeze({ block: Math.ceil(position / treatments.length), position, treatmentCode, label }));
+      plots.push(plain(Math.ceil(position / treatments.length), position, treatment, `${labelPrefix}-P${positionText(position, all.length)}`));
     });
   } else {
     for (let block = 1; block <= blocks; block += 1) {
-      shuffle(engine, [...treatments]).forEach((treatmentCode, index) => {
+      shuffle(engine, [...treatments]).forEach((treatment, index) => {
         const position = index + 1;
-        const label = `${labelPrefix}-B${block}-P${positionText(position, treatments.length)}`;
-        plots.push(Object.freeze({ block, position, treatmentCode, label }));
+        plots.push(plain(block, position, treatment, `${labelPrefix}-B${block}-P${positionText(position, treatments.length)}`));
       });
     }
   }

@@ -10,6 +10,7 @@ import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
+import { seededRandom } from './seeded-random.mjs';
 
 const here = path.dirname(fileURLToPath(import.meta.url));
 const textArgument = (name) => {
@@ -24,19 +25,8 @@ const output = path.resolve(textArgument('output') ?? path.resolve(here, '../../
 const caseCount = argument('cases', 96);
 const seed = argument('seed', 20240611);
 
-/** Mulberry32: a small deterministic 32-bit generator, so the fixtures regenerate identically. */
-function generator(state) {
-  return () => {
-    state = (state + 0x6d2b79f5) | 0;
-    let t = Math.imul(state ^ (state >>> 15), 1 | state);
-    t = (t + Math.imul(t ^ (t >>> 7), 61 | t)) ^ t;
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
-const random = generator(seed);
-const integer = (low, high) => low + Math.floor(random() * (high - low + 1));
+const { random, integer, gauss } = seededRandom(seed);
 const pick = (items) => items[integer(0, items.length - 1)];
-const gauss = () => Math.sqrt(-2 * Math.log(1 - random())) * Math.cos(2 * Math.PI * random());
 
 /** Decimal text of units × 10^−decimals, from a BigInt, so large values keep every digit. */
 function decimalText(units, decimals) {

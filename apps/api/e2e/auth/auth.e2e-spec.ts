@@ -16,7 +16,7 @@ describe('sign-in', () => {
     expect(response.status).toBe(200);
     expect(response.body.tokenType).toBe('Bearer');
     expect(response.body.accessToken).toMatch(/^[\w-]+\.[\w-]+\.[\w-]+$/);
-    expect(response.body.expiresIn).toBe(8 * 3600);
+    expect(response.body.expiresIn).toBe(900);
     expect(response.body.user).toEqual({
       id: person.id,
       email: person.email,
@@ -24,6 +24,10 @@ describe('sign-in', () => {
       isAdmin: false,
       isActive: true,
       createdAt: person.createdAt.toISOString(),
+      locale: null,
+      emailReminders: true,
+      emailReceipts: true,
+      lastSignInAt: expect.stringMatching(/^\d{4}-\d\d-\d\dT/),
     });
     expect(JSON.stringify(response.body)).not.toContain('$2');
   });
@@ -75,6 +79,19 @@ describe('sign-in', () => {
     expect(after.body.message).toBe('Your session has ended. Please sign in again.');
     const login = await t.http.post('/api/auth/login').send({ email: person.email, password: TEST_PASSWORD });
     expect(login.status).toBe(401);
+    expect(login.body.message).toBe('This account is deactivated. Ask your Friable administrator to reactivate it.');
+  });
+
+  it('starts a reactivated account with no valid session: its old token stays dead', async () => {
+    const adminToken = await tokenFor(t, await createPerson({ isAdmin: true }));
+    const person = await createPerson();
+    const token = await tokenFor(t, person);
+    expect((await t.http.post(`/api/users/${person.id}/deactivate`).set(bearer(adminToken))).status).toBe(200);
+    expect((await t.http.post(`/api/users/${person.id}/reactivate`).set(bearer(adminToken))).status).toBe(200);
+    expect((await t.http.get('/api/auth/me').set(bearer(token))).status).toBe(401);
+    expect((await t.http.get('/api/trials').set(bearer(token))).status).toBe(401);
+    const fresh = await tokenFor(t, person);
+    expect((await t.http.get('/api/auth/me').set(bearer(fresh))).status).toBe(200);
   });
 });
 

@@ -35,6 +35,7 @@ describe('migrations', () => {
     expect(applied.map((m) => m.name)).toEqual(migrations.map(([name]) => name));
     expect(await tables()).toEqual([
       'activity_entries',
+      'analysis_sign_offs',
       'analysis_snapshots',
       'assessment_rounds',
       'factor_levels',
@@ -45,17 +46,23 @@ describe('migrations', () => {
       'measures',
       'observation_changes',
       'observations',
+      'password_resets',
       'plot_photos',
       'plots',
+      'review_requests',
       'round_measures',
       'round_reminders',
       'schema_migrations',
+      'sign_in_lockouts',
       'sites',
+      'snapshot_comment_revisions',
       'snapshot_comments',
       'treatments',
+      'trial_departures',
       'trial_factors',
       'trial_memberships',
       'trials',
+      'user_sessions',
       'users',
     ]);
 

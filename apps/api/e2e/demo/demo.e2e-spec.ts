@@ -31,7 +31,7 @@ describe('the demo scenario', () => {
     const trial = await Trial.findOne({ where: { code: 'FW-CLAY-26' } });
     expect(trial).toMatchObject({ id: 1, title: 'Heavy-clay amendments across three Fernwick gardens', status: 'active', seed: 'fernwick-clay-2026' });
     const detail: TrialDetail = await t.app.get(TrialsService).get({ trialId: 1, roles: ['investigator'], siteIds: [], adminReadOnly: false });
-    expect(detail.activation).toEqual({ ready: true, problems: [] });
+    expect(detail.activation).toEqual({ ready: true, problems: [], warnings: [] });
     expect(detail.treatments.map((x) => x.code)).toEqual(['CTL', 'GYP', 'CMP', 'SHL', 'LFM']);
     expect(detail.treatments.filter((x) => x.isControl).map((x) => x.code)).toEqual(['CTL']);
     expect(detail.measures.map((m) => [m.code, m.kind, m.unit])).toEqual([

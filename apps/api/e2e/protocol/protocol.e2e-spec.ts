@@ -112,7 +112,15 @@ describe('a full protocol built through the API', () => {
 
   it('says in words what stops activation before randomizing', async () => {
     const detail = await expectStatus<TrialDetail>(t.http.get(base).set(auth), 200);
-    expect(detail.activation).toEqual({ ready: false, problems: ['Site Hollow Lane is not randomized yet.', 'Site Quarry Pots is not randomized yet.'] });
+    expect(detail.activation).toEqual({
+      ready: false,
+      problems: ['Site Hollow Lane is not randomized yet.', 'Site Quarry Pots is not randomized yet.'],
+      // The sites' guardrails are read before the trial starts, without stopping it.
+      warnings: detail.sites.flatMap((s) => s.warnings.map((w) => `${s.name}: ${w}`)),
+    });
+    expect(detail.activation.warnings).toContain(
+      'Quarry Pots: 5 treatments × 3 blocks leave 8 error degrees of freedom at the site, fewer than the 12 EPPO PP 1/152 asks for; 4 blocks would give 12.',
+    );
     const refused = await t.http.patch(base).set(auth).send({ status: 'active' });
     expect(refused.status).toBe(422);
     expect(refused.body.errors).toEqual([

@@ -101,7 +101,7 @@ describe('protocol input checks, locking and factorial treatments', () => {
     // Treatments of a factorial come from its factors only.
     const direct = await t.http.post(`${factorialBase}/treatments`).set(auth).send({ code: 'X', name: 'Loose' });
     expect(direct.status).toBe(409);
-    expect(direct.body.message).toBe("A factorial trial's treatments are every combination of its factor levels; change the factors instead.");
+    expect(direct.body.message).toBe('The treatments of a factorial or split-plot trial are every combination of its factor levels; change the factors instead.');
     const notFactorial = await t.http.put(`${base}/factors`).set(auth).send(body);
     expect(notFactorial.status).toBe(409);
   });

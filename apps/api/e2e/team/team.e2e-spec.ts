@@ -259,16 +259,18 @@ describe('the Team: members, invitations by e-mail, accepting', () => {
     expect(short.status).toBe(422);
     expect(short.body.errors).toEqual([
       { field: 'name', message: 'name must not be empty' },
-      { field: 'password', message: 'password must be at least 10 characters long' },
+      { field: 'password', message: 'The password must be at least 12 characters long; it has 5.' },
     ]);
     expect(await User.count({ where: { email } })).toBe(0);
     expect((await t.http.get(`/api/invitations/${token}`)).status).toBe(200);
     expect((await t.http.get('/api/invitations/not-a-real-token-at-all')).status).toBe(404);
   });
 
-  it('shows caught e-mails, newest first, in the development Outbox', async () => {
+  it('shows caught e-mails, newest first, in the development Outbox (administrators only)', async () => {
     const { email } = await inviteCollaborator();
-    const outbox = await t.http.get('/api/dev/outbox').set(bearer(collaboratorToken));
+    expect((await t.http.get('/api/dev/outbox').set(bearer(collaboratorToken))).status).toBe(403);
+    const adminToken = await tokenFor(t, await createPerson({ isAdmin: true, name: 'Outbox reader' }));
+    const outbox = await t.http.get('/api/dev/outbox').set(bearer(adminToken));
     expect(outbox.status).toBe(200);
     const times = outbox.body.map((m: { receivedAt: string }) => m.receivedAt);
     expect(times).toEqual([...times].sort().reverse());

@@ -17,7 +17,7 @@ describe('user management by the instance administrator', () => {
     const response = await t.http.get('/api/users').set(bearer(adminToken));
     expect(response.status).toBe(200);
     expect(response.body.length).toBeGreaterThanOrEqual(2);
-    for (const person of response.body) expect(Object.keys(person).sort()).toEqual(['createdAt', 'email', 'id', 'isActive', 'isAdmin', 'name']);
+    for (const person of response.body) expect(Object.keys(person).sort()).toEqual(['createdAt', 'email', 'emailReceipts', 'emailReminders', 'id', 'isActive', 'isAdmin', 'lastSignInAt', 'locale', 'name']);
   });
 
   it('creates a person who can then sign in, storing only a hash', async () => {
@@ -29,7 +29,7 @@ describe('user management by the instance administrator', () => {
     expect(response.status).toBe(201);
     expect(response.body).toMatchObject({ email, name: 'New Person', isAdmin: false, isActive: true });
     const row = await User.findOne({ where: { email } });
-    expect(row?.passwordHash).toMatch(/^\$2[aby]\$10\$/);
+    expect(row?.passwordHash).toMatch(/^\$2[aby]\$12\$/);
     const login = await t.http.post('/api/auth/login').send({ email, password: 'a long passphrase' });
     expect(login.status).toBe(200);
   });
@@ -43,10 +43,15 @@ describe('user management by the instance administrator', () => {
     expect(await User.count()).toBe(before);
   });
 
-  it('refuses a short password with 422 naming the field', async () => {
-    const response = await t.http.post('/api/users').set(bearer(adminToken)).send({ email: 'short-pw@example.org', name: 'S', password: 'short' });
-    expect(response.status).toBe(422);
-    expect(response.body.errors).toEqual([{ field: 'password', message: 'password must be at least 10 characters long' }]);
+  it('refuses a short or common password with 422 naming the field, and writes nothing', async () => {
+    const before = await User.count();
+    const short = await t.http.post('/api/users').set(bearer(adminToken)).send({ email: 'short-pw@example.org', name: 'S', password: '1234567890' });
+    expect(short.status).toBe(422);
+    expect(short.body.errors).toEqual([{ field: 'password', message: 'The password must be at least 12 characters long; it has 10.' }]);
+    const common = await t.http.post('/api/users').set(bearer(adminToken)).send({ email: 'common-pw@example.org', name: 'C', password: 'qwerty123456' });
+    expect(common.status).toBe(422);
+    expect(common.body.errors[0].message).toMatch(/most common passwords/);
+    expect(await User.count()).toBe(before);
   });
 
   it('deactivates and reactivates a person, and refuses to deactivate oneself', async () => {

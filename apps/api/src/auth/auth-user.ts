@@ -7,6 +7,8 @@ export interface AuthUser {
   email: string;
   name: string;
   isAdmin: boolean;
+  /** The sign-in session of the request; absent for work done outside a request (the demo loader). */
+  sessionId?: string;
 }
 
 export interface TrialAccessContext {

@@ -1,6 +1,6 @@
 import { registerAs } from '@nestjs/config';
 import { resolve } from 'node:path';
-import { requireInteger, requireText } from './validate-environment';
+import { requireFlag, requireInteger, requireText } from './validate-environment';
 
 export interface AppConfig {
   host: string;
@@ -8,6 +8,8 @@ export interface AppConfig {
   appUrl: string;
   webDistDir: string;
   nodeEnv: string;
+  /** API_DOCS_PUBLIC: serve the OpenAPI page and document at /api/docs to anyone (off unless set). */
+  apiDocsPublic: boolean;
 }
 
 export function readAppConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
@@ -19,6 +21,7 @@ export function readAppConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
     appUrl: requireText(env, 'APP_URL', `http://${host}:${port}`).replace(/\/$/, ''),
     webDistDir: resolve(requireText(env, 'WEB_DIST_DIR', resolve(__dirname, '../../../web/dist'))),
     nodeEnv: requireText(env, 'NODE_ENV', 'development'),
+    apiDocsPublic: requireFlag(env, 'API_DOCS_PUBLIC', false),
   };
 }
 

@@ -8,6 +8,12 @@ export interface DatabaseConfig {
   username: string;
   password: string;
   poolMax: number;
+  /** Longest wait for a pooled connection before the request is answered 503 (DB_ACQUIRE_TIMEOUT_MS). */
+  acquireTimeoutMs: number;
+  /** Longest wait for a new connection's handshake (DB_CONNECT_TIMEOUT_MS). */
+  connectTimeoutMs: number;
+  /** Longest silence on a connection in use before it is given up (DB_SOCKET_TIMEOUT_MS): bounds a query sent to a frozen server. */
+  socketTimeoutMs: number;
 }
 
 export function readDatabaseConfig(env: NodeJS.ProcessEnv = process.env): DatabaseConfig {
@@ -18,6 +24,9 @@ export function readDatabaseConfig(env: NodeJS.ProcessEnv = process.env): Databa
     username: requireText(env, 'DB_USER'),
     password: requireText(env, 'DB_PASSWORD'),
     poolMax: requireInteger(env, 'DB_POOL_MAX', 10, 1, 200),
+    acquireTimeoutMs: requireInteger(env, 'DB_ACQUIRE_TIMEOUT_MS', 1_000, 100, 600_000),
+    connectTimeoutMs: requireInteger(env, 'DB_CONNECT_TIMEOUT_MS', 1_000, 100, 600_000),
+    socketTimeoutMs: requireInteger(env, 'DB_SOCKET_TIMEOUT_MS', 60_000, 1_000, 3_600_000),
   };
 }
 

@@ -18,6 +18,9 @@ import { ObservationRow } from '../observations/models/observation.model';
 import { PlotPhotoRow } from '../photos/models/plot-photo.model';
 import { AnalysisSnapshotRow } from '../analyses/models/analysis-snapshot.model';
 import { SnapshotCommentRow } from '../analyses/models/snapshot-comment.model';
+import { UserSession } from '../auth/models/user-session.model';
+import { SignInLockout } from '../auth/models/sign-in-lockout.model';
+import { PasswordReset } from '../auth/models/password-reset.model';
 import { IntakeImportRow } from '../intake/models/intake-import.model';
 import { IntakeColumnChoiceRow } from '../intake/models/intake-column-choice.model';
 
@@ -43,6 +46,9 @@ export const allModels = [
   PlotPhotoRow,
   AnalysisSnapshotRow,
   SnapshotCommentRow,
+  UserSession,
+  SignInLockout,
+  PasswordReset,
   IntakeImportRow,
   IntakeColumnChoiceRow,
 ];

@@ -3,7 +3,7 @@ import type { SequelizeOptions } from 'sequelize-typescript';
 import type { DatabaseConfig } from '../config/database.config';
 import { openLocalInfile } from './local-infile';
 
-/** Connection options shared by the Nest module, the command line and the tests. */
+/** Connection options shared by the Nest module, the command line and the tests (a socket timeout of 0 means none). */
 export function sequelizeOptions(config: DatabaseConfig): SequelizeOptions {
   return {
     dialect: 'mariadb',
@@ -15,10 +15,18 @@ export function sequelizeOptions(config: DatabaseConfig): SequelizeOptions {
     username: config.username,
     password: config.password,
     logging: false,
-    pool: { max: config.poolMax, min: 0, idle: 10_000 },
+    // Short waits, so that a database that is gone is answered 503 within a second (see
+    // common/filters/problem.filter.ts) rather than holding requests; the socket timeout bounds a
+    // query sent to a server that froze (a paused server never closes the connection).
+    pool: { max: config.poolMax, min: 0, idle: 10_000, acquire: config.acquireTimeoutMs, evict: 1_000 },
     define: { underscored: true, timestamps: true },
     // LOAD DATA LOCAL INFILE (Intake's bulk load) reads only streams this process registered; see local-infile.ts.
-    dialectOptions: { connectTimeout: 5_000, permitLocalInfile: true, infileStreamFactory: openLocalInfile },
+    dialectOptions: {
+      connectTimeout: config.connectTimeoutMs,
+      socketTimeout: config.socketTimeoutMs,
+      permitLocalInfile: true,
+      infileStreamFactory: openLocalInfile,
+    },
     timezone: '+00:00',
   };
 }

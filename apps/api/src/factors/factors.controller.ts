@@ -14,13 +14,13 @@ export class FactorsController {
   @Get()
   @AnyTrialMember()
   list(@CurrentTrialAccess() access: TrialAccessContext) {
-    return this.factors.list(access.trialId);
+    return this.factors.listForTrial(access.trialId);
   }
 
   @Put()
   @TrialAccess('investigator')
-  @ApiUnprocessableEntityResponse({ description: 'Not exactly two factors, a factor with fewer than two levels, or repeated level codes.' })
-  @ApiConflictResponse({ description: 'The trial is locked, is not factorial, or a site has observations.' })
+  @ApiUnprocessableEntityResponse({ description: 'A number of factors the design does not take, a factor with fewer than two levels, repeated level codes, or a level rate without its unit.' })
+  @ApiConflictResponse({ description: 'The trial is locked, is neither factorial nor split plot, or changing the level codes would clear the layout of a site with observations.' })
   replace(@CurrentTrialAccess() access: TrialAccessContext, @CurrentUser() user: AuthUser, @Body() body: FactorsDto) {
     return this.factors.replace(access.trialId, user, body);
   }

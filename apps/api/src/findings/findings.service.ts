@@ -10,6 +10,7 @@ import type {
   Observation,
   TrialDetail,
 } from '@friable/contracts';
+import { DESIGN_RULES } from '@friable/field';
 import { Injectable, UnprocessableEntityException } from '@nestjs/common';
 import { InjectConnection } from '@nestjs/sequelize';
 import { QueryTypes } from 'sequelize';
@@ -18,6 +19,7 @@ import { ObservationQueryService } from '../observations/observation-query.servi
 import type { AnovaRequestDto, ObservationDto } from '../stats/dto/anova-request.dto';
 import { StatsService } from '../stats/stats.service';
 import { TrialsService } from '../trials/trials.service';
+import { analysisDesign } from './analysis-design';
 import { canonicalHash } from './canonical-hash';
 import type { FindingsQueryDto } from './dto/findings-query.dto';
 import { engineVersion } from './engine-version';
@@ -26,6 +28,8 @@ import { notDrainedCurves } from './not-drained-curve';
 /** The observations of one measure, round and scope, shaped for the engine, with what the context needs. */
 interface PreparedData {
   design: AnalysisDesign;
+  /** Factorial and split designs analysed on their factors: the factor names in order; empty otherwise. */
+  factorNames: string[];
   engineObservations: ObservationDto[];
   rows: FindingsObservationRow[];
   missing: Observation[];
@@ -90,7 +94,7 @@ export class FindingsService {
     const scopeLabel = site ? site.name : 'all sites combined';
     if (data.engineObservations.length === 0) refuse(`There are no values of ${measure.name} in ${round.label} at ${scopeLabel} yet.`);
     const request = this.engineRequest(data, choices);
-    const analysis = plainCopy(this.stats.anova({ ...request, observations: data.engineObservations })) as AnovaAnswer;
+    const analysis = plainCopy(this.stats.anova({ ...request, observations: data.engineObservations } as AnovaRequestDto)) as AnovaAnswer;
 
     const controlMean = data.controlLabel === null ? undefined : analysis.means.find((m) => m.treatment === data.controlLabel);
     const shown = (m: { mean: number; backTransformedMean?: number }) => m.backTransformedMean ?? m.mean;
@@ -163,8 +167,9 @@ export class FindingsService {
   private engineRequest(data: PreparedData, choices: FindingsChoices): FindingsContext['engineRequest'] {
     return {
       design: data.design,
+      ...(data.factorNames.length ? { factorNames: data.factorNames } : {}),
       alpha: choices.alpha,
-      ...(data.design === 'multisite-rcbd' ? { sitesAre: choices.sitesAre } : {}),
+      ...(data.design.startsWith('multisite-') ? { sitesAre: choices.sitesAre } : {}),
       ...(data.controlLabel !== null ? { control: data.controlLabel } : {}),
       transform: choices.transform,
       meanSeparation: [choices.method],
@@ -177,16 +182,12 @@ export class FindingsService {
     const valued = all.filter((o) => o.valueText !== null);
     const missing = all.filter((o) => o.valueText === null);
     const siteNames = [...new Set(valued.map((o) => o.siteName))];
-    const factorial = trial.design === 'factorial-rcbd' && trial.factors.length === 2;
-    let design: AnalysisDesign;
-    if (siteNames.length > 1) {
-      if (trial.design === 'crd') refuse('Sites can be combined only for blocked designs; choose one site for a completely randomized trial.');
-      design = 'multisite-rcbd';
-    } else {
-      design = trial.design === 'factorial-rcbd' && !factorial ? 'rcbd' : trial.design;
-    }
+    const choice = analysisDesign(trial.design, siteNames.length, trial.factors.length);
+    if ('refusal' in choice) refuse(choice.refusal);
+    const { design, withFactors } = choice;
+    const factorNames = withFactors ? trial.factors.map((f) => f.name) : [];
     const factorsOf = new Map<string, Record<string, string>>();
-    if (design === 'factorial-rcbd') {
+    if (withFactors) {
       const levelCode = new Map(trial.factors.flatMap((f) => f.levels.map((l) => [l.id, { factor: f.name, code: l.code }] as const)));
       for (const t of trial.treatments) {
         const levels = t.factorLevelIds.map((id) => levelCode.get(id)).filter((l) => l !== undefined);
@@ -197,15 +198,13 @@ export class FindingsService {
       const factors = factorsOf.get(code);
       return factors ? trial.factors.map((f) => factors[f.name] ?? '?').join(' × ') : code;
     };
-    const engineObservations: ObservationDto[] = valued.map((o) => {
-      const base = design === 'factorial-rcbd' ? { factors: factorsOf.get(o.treatmentCode) ?? {} } : { treatment: o.treatmentCode };
-      return {
-        ...base,
-        ...(design === 'crd' ? {} : { block: String(o.block) }),
-        ...(design === 'multisite-rcbd' ? { site: o.siteName } : {}),
-        value: o.valueText!,
-      };
-    });
+    const blocked = DESIGN_RULES[trial.design].blocked;
+    const engineObservations: ObservationDto[] = valued.map((o) => ({
+      ...(withFactors ? { factors: factorsOf.get(o.treatmentCode) ?? {} } : { treatment: o.treatmentCode }),
+      ...(blocked ? { block: String(o.block) } : {}),
+      ...(siteNames.length > 1 ? { site: o.siteName } : {}),
+      value: o.valueText!,
+    }));
     const rows = valued.map((o) => ({
       observationId: o.id,
       plotLabel: o.plotLabel,
@@ -220,6 +219,7 @@ export class FindingsService {
     const plotCount = await this.plotCount(trial.id, choices.siteId);
     return {
       design,
+      factorNames,
       engineObservations,
       rows,
       missing,
@@ -239,7 +239,7 @@ export class FindingsService {
   }
 
   private rankTest(data: PreparedData): FindingsRankTest {
-    const blocked = data.design !== 'crd';
+    const blocked = data.engineObservations.some((o) => o.block !== undefined);
     const test = blocked ? 'friedman' : 'kruskal-wallis';
     const observations = data.engineObservations.map((o, i) => ({
       treatment: o.treatment ?? data.rows[i]!.treatment,

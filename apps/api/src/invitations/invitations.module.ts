@@ -1,8 +1,6 @@
 import { Module } from '@nestjs/common';
-import type { ConfigType } from '@nestjs/config';
-import { JwtModule } from '@nestjs/jwt';
 import { SequelizeModule } from '@nestjs/sequelize';
-import { authConfig } from '../config/auth.config';
+import { AuthModule } from '../auth/auth.module';
 import { MailModule } from '../mail/mail.module';
 import { TeamModule } from '../team/team.module';
 import { Trial } from '../trials/models/trial.model';
@@ -11,7 +9,6 @@ import { User } from '../users/models/user.model';
 import { InvitationsController } from './invitations.controller';
 import { InvitationsService } from './invitations.service';
 import { TrialInvitation } from './models/trial-invitation.model';
-import { OptionalCallerService } from './optional-caller.service';
 import { TrialInvitationsController } from './trial-invitations.controller';
 
 @Module({
@@ -19,12 +16,9 @@ import { TrialInvitationsController } from './trial-invitations.controller';
     SequelizeModule.forFeature([TrialInvitation, TrialMembership, Trial, User]),
     MailModule,
     TeamModule,
-    JwtModule.registerAsync({
-      inject: [authConfig.KEY],
-      useFactory: (config: ConfigType<typeof authConfig>) => ({ secret: config.jwtSecret }),
-    }),
+    AuthModule,
   ],
   controllers: [TrialInvitationsController, InvitationsController],
-  providers: [InvitationsService, OptionalCallerService],
+  providers: [InvitationsService],
 })
 export class InvitationsModule {}

@@ -8,14 +8,15 @@ import {
   UnprocessableEntityException,
 } from '@nestjs/common';
 import type { ConfigType } from '@nestjs/config';
-import { JwtService } from '@nestjs/jwt';
 import { InjectConnection, InjectModel } from '@nestjs/sequelize';
-import bcrypt from 'bcryptjs';
 import { Op, type Transaction } from 'sequelize';
 import type { Sequelize } from 'sequelize-typescript';
 import { ActivityService } from '../activity/activity.service';
 import type { AuthUser } from '../auth/auth-user';
-import { authConfig } from '../config/auth.config';
+import { PasswordHasher } from '../auth/password-hasher.service';
+import { passwordProblem } from '../auth/password-policy';
+import { SessionsService, type StartedSession } from '../auth/sessions.service';
+import { SignInLockoutService } from '../auth/sign-in-lockout.service';
 import { mailConfig } from '../config/mail.config';
 import { MailService } from '../mail/mail.service';
 import { SiteNamesService } from '../team/site-names.service';
@@ -51,11 +52,12 @@ export class InvitationsService {
     @InjectModel(User) private readonly users: typeof User,
     @InjectConnection() private readonly sequelize: Sequelize,
     @Inject(mailConfig.KEY) private readonly mailSettings: ConfigType<typeof mailConfig>,
-    @Inject(authConfig.KEY) private readonly authSettings: ConfigType<typeof authConfig>,
     private readonly mail: MailService,
     private readonly activity: ActivityService,
     private readonly siteNames: SiteNamesService,
-    private readonly jwt: JwtService,
+    private readonly sessions: SessionsService,
+    private readonly hasher: PasswordHasher,
+    private readonly lockout: SignInLockoutService,
   ) {}
 
   /** Every invitation of the trial, newest first, with its status now. */
@@ -185,11 +187,16 @@ export class InvitationsService {
    * account, or a name and password for a new account. The membership, the used link and the activity
    * entry are written together; the answer signs the person in.
    */
-  async accept(token: string, input: AcceptInvitationDto, caller: AuthUser | null): Promise<{ created: boolean; response: InvitationAcceptResponse }> {
+  async accept(
+    token: string,
+    input: AcceptInvitationDto,
+    caller: AuthUser | null,
+    client: { address: string; userAgent?: string },
+  ): Promise<{ created: boolean; started: StartedSession; response: InvitationAcceptResponse }> {
     return this.sequelize.transaction(async (transaction) => {
       // Locked so two simultaneous uses of one link cannot both succeed.
       const row = await this.usableInvitation(token, transaction);
-      const { user, created } = await this.accountFor(row, input, caller, transaction);
+      const { user, created } = await this.accountFor(row, input, caller, client, transaction);
       const [membership] = await this.memberships.findOrCreate({
         where: { trialId: row.trialId, userId: user.id, role: row.role, siteId: row.siteId },
         defaults: { trialId: row.trialId, userId: user.id, role: row.role, siteId: row.siteId },
@@ -207,13 +214,18 @@ export class InvitationsService {
         summary: `${user.name} joined as ${row.role}${siteName ? ` at ${siteName}` : ''}${created ? ' with a new account' : ''}.`,
         details: { invitationId: row.id, membershipId: membership.id, role: row.role, siteId: row.siteId, newAccount: created },
       });
-      const expiresIn = this.authSettings.tokenTtlSeconds;
-      const accessToken = await this.jwt.signAsync({ sub: user.id }, { expiresIn });
-      return { created, response: { accessToken, tokenType: 'Bearer', expiresIn, user: toPublicUser(user), trialId: row.trialId } };
+      user.lastSignInAt = new Date();
+      await user.save({ transaction });
+      const started = await this.sessions.start(user, client, transaction);
+      return {
+        created,
+        started,
+        response: { accessToken: started.accessToken, tokenType: 'Bearer', expiresIn: started.expiresIn, user: toPublicUser(user), trialId: row.trialId },
+      };
     });
   }
 
-  private async accountFor(row: TrialInvitation, input: AcceptInvitationDto, caller: AuthUser | null, transaction: Transaction) {
+  private async accountFor(row: TrialInvitation, input: AcceptInvitationDto, caller: AuthUser | null, client: { address: string }, transaction: Transaction) {
     if (caller && caller.email.toLowerCase() === row.email) {
       return { user: await this.users.findByPk(caller.id, { transaction, rejectOnEmpty: true }), created: false };
     }
@@ -224,20 +236,21 @@ export class InvitationsService {
         throw fieldError('password', `password of the Friable account ${row.email} is required`);
       }
       // 403, not 401: a wrong password here must not end the session of whoever is signed in on this browser.
-      if (!(await bcrypt.compare(input.password, existing.passwordHash))) {
+      // Counted like a sign-in, so an invitation link cannot be used to guess the account's password.
+      await this.lockout.admit(row.email, client.address);
+      if (!(await this.hasher.matches(input.password, existing.passwordHash))) {
         throw new ForbiddenException(`The password is not right for the Friable account ${row.email}.`);
       }
+      await this.lockout.succeeded(row.email, client.address);
       if (!existing.isActive) throw new ForbiddenException(`The account ${row.email} is deactivated; ask the administrator to reactivate it.`);
       return { user: existing, created: false };
     }
     const name = input.name?.trim() ?? '';
-    const errors = [
-      ...(name === '' ? [{ field: 'name', message: 'name must not be empty' }] : []),
-      ...((input.password ?? '').length < 10 ? [{ field: 'password', message: 'password must be at least 10 characters long' }] : []),
-    ];
+    const weak = passwordProblem(input.password ?? '', { email: row.email, name });
+    const errors = [...(name === '' ? [{ field: 'name', message: 'name must not be empty' }] : []), ...(weak ? [{ field: 'password', message: weak }] : [])];
     if (errors.length) throw new UnprocessableEntityException({ message: `Please correct: ${errors.map((e) => e.message).join('; ')}.`, errors });
     const user = await this.users.create(
-      { email: row.email, name, passwordHash: await bcrypt.hash(input.password as string, 10), isAdmin: false, isActive: true },
+      { email: row.email, name, passwordHash: await this.hasher.hash(input.password as string), isAdmin: false, isActive: true },
       { transaction },
     );
     return { user, created: true };

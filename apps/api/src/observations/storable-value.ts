@@ -1,4 +1,4 @@
-import Decimal from 'decimal.js';
+import { MeasurementDecimal } from '../common/input/measurement-decimal';
 
 /** Longest value text the observations table keeps (value_text VARCHAR(40)). */
 export const VALUE_TEXT_MAX_CHARACTERS = 40;
@@ -24,7 +24,7 @@ export function storableValue(valueText: string): StorableValue {
   if (valueText.length > VALUE_TEXT_MAX_CHARACTERS) {
     return Object.freeze({ ok: false, message: `"${valueText.slice(0, 20)}…" has ${valueText.length} characters; values of up to ${VALUE_TEXT_MAX_CHARACTERS} are kept.` });
   }
-  const value = new Decimal(valueText).toDecimalPlaces(FRACTION_DIGITS, Decimal.ROUND_HALF_UP);
+  const value = new MeasurementDecimal(valueText).toDecimalPlaces(FRACTION_DIGITS, MeasurementDecimal.ROUND_HALF_UP);
   const whole = value.abs().truncated().toFixed();
   if (whole.length > WHOLE_DIGITS) {
     return Object.freeze({ ok: false, message: `${valueText} has more than ${WHOLE_DIGITS} digits before the decimal point; it cannot be a reading.` });

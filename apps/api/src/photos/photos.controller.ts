@@ -1,8 +1,9 @@
-import { Controller, Delete, Get, HttpCode, Param, ParseIntPipe, Put, StreamableFile, UploadedFile, UseInterceptors } from '@nestjs/common';
+import { Controller, Delete, Get, Header, HttpCode, Param, ParseIntPipe, Put, StreamableFile, UploadedFile, UseInterceptors } from '@nestjs/common';
 import { ApiBody, ApiConflictResponse, ApiConsumes, ApiNoContentResponse, ApiOkResponse, ApiPayloadTooLargeResponse, ApiTags, ApiUnprocessableEntityResponse } from '@nestjs/swagger';
 import type { AuthUser, TrialAccessContext } from '../auth/auth-user';
 import { AnyTrialMember, TrialAccess } from '../common/decorators/access.decorator';
 import { CurrentTrialAccess, CurrentUser } from '../common/decorators/current-user.decorator';
+import { DOWNLOAD_POLICY } from '../common/security/security-headers';
 import { SingleFileUpload } from '../storage/single-file-upload.interceptor';
 import { photosConfig } from './photos.config';
 import { PhotosService } from './photos.service';
@@ -14,10 +15,14 @@ export class PhotosController {
 
   @Get()
   @AnyTrialMember()
-  @ApiOkResponse({ description: 'The image (image/jpeg or image/png).' })
+  // A photo is someone's upload: served as a download under a sandbox, never sniffed, so bytes
+  // hidden after the image (a script, say) cannot run in Friable's origin.
+  @Header('Content-Security-Policy', DOWNLOAD_POLICY)
+  @ApiOkResponse({ description: 'The image (image/jpeg or image/png), as an attachment named after the plot and round.' })
   async get(@CurrentTrialAccess() access: TrialAccessContext, @Param('plotId', ParseIntPipe) plotId: number, @Param('roundId', ParseIntPipe) roundId: number) {
     const { photo, bytes } = await this.photos.get(access.trialId, plotId, roundId);
-    return new StreamableFile(bytes, { type: photo.contentType, length: bytes.length, disposition: 'inline' });
+    const fileName = await this.photos.downloadName(access.trialId, plotId, roundId, photo);
+    return new StreamableFile(bytes, { type: photo.contentType, length: bytes.length, disposition: `attachment; filename="${fileName}"` });
   }
 
   @Put()

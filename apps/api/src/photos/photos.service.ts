@@ -65,6 +65,13 @@ export class PhotosService {
     return { photo: present(row), bytes };
   }
 
+  /** The name a downloaded photo gets: the plot's label and the round's, "TG-B1-P01 Day 0.png". */
+  async downloadName(trialId: number, plotId: number, roundId: number, photo: PlotPhoto): Promise<string> {
+    const { plot, round } = await this.place(trialId, plotId, roundId);
+    const name = `${plot.label} ${round.label}`.replace(/[^\p{L}\p{N} ._-]+/gu, '-').slice(0, 100);
+    return `${name}.${photo.contentType === 'image/png' ? 'png' : 'jpg'}`;
+  }
+
   async put(access: TrialAccessContext, user: AuthUser, plotId: number, roundId: number, bytes: Buffer | undefined): Promise<PlotPhoto> {
     const { plot, round } = await this.openForWrite(access, plotId, roundId);
     if (!bytes || bytes.length === 0) throw new UnprocessableEntityException('Send the photo as multipart/form-data in the form field "file".');

@@ -8,8 +8,10 @@ export function containerSoilVolumeL(geometry: PlotGeometryInput, areaM2: number
   return geometry.containerDepthCm !== null ? areaM2 * geometry.containerDepthCm * 10 : undefined;
 }
 
-/** The Rate calculator's input for one treatment on one site's plot, or null for a treatment without a rate. */
-export function doseInputFor(treatment: Treatment, geometry: PlotGeometryInput, areaM2: number): DoseInput | null {
+type RateFields = Pick<Treatment, 'rateValue' | 'rateUnit' | 'rateBasis' | 'incorporationDepthCm' | 'purity' | 'moistureBasis' | 'moistureFraction' | 'materialKind'>;
+
+/** The Rate calculator's input for one treatment (or factor level) on one site's plot, or null for one without a rate. */
+export function doseInputFor(treatment: RateFields, geometry: PlotGeometryInput, areaM2: number): DoseInput | null {
   if (treatment.rateValue === null || treatment.rateUnit === null) return null;
   return {
     rate: treatment.rateValue,
@@ -38,17 +40,39 @@ export function plotAmount(
   marginPercent: number,
 ): PlotAmount & { problem?: string } {
   const base = { siteId: site.id, treatmentId: treatment.id, treatmentCode: treatment.code, plots };
-  const input = doseInputFor(treatment, site, site.areaM2);
-  if (!input) return { ...base, perPlot: null, siteTotal: null };
+  const { perUnit: perPlot, siteTotal, problem } = unitAmount(doseInputFor(treatment, site, site.areaM2), plots, marginPercent);
+  return { ...base, perPlot, siteTotal, ...(problem ? { problem } : {}) };
+}
+
+/**
+ * Unit amount — the Rate calculator's answer for one unit (a plot, or a split plot's whole plot) and for `units`
+ * of them with the margin; null amounts for nothing to apply, and the calculator's sentence when it cannot work.
+ */
+export function unitAmount(input: DoseInput | null, units: number, marginPercent: number): { perUnit: DoseAnswer | null; siteTotal: PlotAmount['siteTotal']; problem?: string } {
+  if (!input) return { perUnit: null, siteTotal: null };
   let dose;
   try {
     dose = computeDose(input);
   } catch (error) {
-    return { ...base, perPlot: null, siteTotal: null, problem: error instanceof Error ? error.message : String(error) };
+    return { perUnit: null, siteTotal: null, problem: error instanceof Error ? error.message : String(error) };
   }
-  const perPlot: DoseAnswer = { ...dose, ratePerM2: { ...dose.ratePerM2 }, warnings: [...dose.warnings] };
-  if (plots < 1) return { ...base, perPlot, siteTotal: null };
-  const grams = dose.grams === null ? null : trialTotal({ dosePerPlotGrams: dose.grams, plots, marginPercent }).grams;
-  const litres = dose.litres === null ? null : dose.litres * plots * (1 + marginPercent / 100);
-  return { ...base, perPlot, siteTotal: { grams, litres } };
+  const perUnit: DoseAnswer = { ...dose, ratePerM2: { ...dose.ratePerM2 }, warnings: [...dose.warnings] };
+  if (units < 1) return { perUnit, siteTotal: null };
+  const grams = dose.grams === null ? null : trialTotal({ dosePerPlotGrams: dose.grams, plots: units, marginPercent }).grams;
+  const litres = dose.litres === null ? null : dose.litres * units * (1 + marginPercent / 100);
+  return { perUnit, siteTotal: { grams, litres } };
+}
+
+/**
+ * The dose input for a factor level on its applied unit: `plotsPerUnit` plots side by side (a whole plot of a split
+ * plot holds its sub plots), so the surface (and a container's soil volume) is the plot's times that many.
+ */
+export function levelDoseInput(level: RateFields, site: { areaM2: number } & PlotGeometryInput, plotsPerUnit: number): DoseInput | null {
+  const input = doseInputFor(level, site, site.areaM2);
+  if (!input || plotsPerUnit === 1) return input;
+  return {
+    ...input,
+    geometry: { areaM2: site.areaM2 * plotsPerUnit },
+    ...(input.soilVolumeL !== undefined ? { soilVolumeL: input.soilVolumeL * plotsPerUnit } : {}),
+  };
 }

@@ -26,6 +26,16 @@ export class PlotsController {
     return this.plots.amounts(access.trialId, query.marginPercent ?? 10);
   }
 
+  @Get('level-amounts')
+  @AnyTrialMember()
+  @ApiOkResponse({
+    description:
+      'LevelAmount[] (factorial and split-plot trials): per site and factor level, the amount for one unit the level is applied to (a plot, or a whole plot of a split plot) and for all of them with the margin. Empty for one-factor designs.',
+  })
+  levelAmounts(@CurrentTrialAccess() access: TrialAccessContext, @Query() query: AmountsQueryDto) {
+    return this.plots.levelAmounts(access.trialId, query.marginPercent ?? 10);
+  }
+
   @Get('sites/:siteId/rounds/:roundId/template.csv')
   @AnyTrialMember()
   @ApiProduces('text/csv')

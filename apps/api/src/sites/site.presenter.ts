@@ -1,5 +1,5 @@
 import type { PlotGeometryInput, Site, TrialDesign } from '@friable/contracts';
-import { designWarnings, plotSurfaceAreaM2, type PlotGeometry } from '@friable/field';
+import { DESIGN_RULES, designWarnings, errorStrata, plotSurfaceAreaM2, type PlotGeometry, type StratumFactor } from '@friable/field';
 import { decimalToNumber } from '../common/decimal';
 import type { FieldProblem } from '../common/exceptions/field-problems.exception';
 import type { SiteRow } from './models/site.model';
@@ -34,8 +34,25 @@ export function geometryProblems(g: PlotGeometryInput): FieldProblem[] {
 export interface SiteContext {
   design: TrialDesign;
   treatmentCount: number;
+  /** The trial's factors (name and number of levels), in order; empty for a one-factor design. */
+  factors: StratumFactor[];
   plotCount: number;
   hasObservations: boolean;
+}
+
+/**
+ * The design's guardrails at a site of `blocks` blocks: its warnings and its error strata. A factorial or split
+ * plot is judged on its factors once they fit the design; until then a factorial on its combinations, a split
+ * plot not at all (its strata need the factors).
+ */
+export function siteGuardrails(context: Pick<SiteContext, 'design' | 'treatmentCount' | 'factors'>, blocks: number): Pick<Site, 'warnings' | 'strata'> {
+  const rule = DESIGN_RULES[context.design];
+  const factorsFit = rule.maxFactors > 0 && context.factors.length >= rule.minFactors && context.factors.length <= rule.maxFactors;
+  if (rule.split && !factorsFit) return { warnings: [], strata: [] };
+  if (!factorsFit && context.treatmentCount === 0) return { warnings: [], strata: [] };
+  const input = factorsFit ? { design: context.design, factors: context.factors, blocks } : { design: context.design, treatments: context.treatmentCount, blocks };
+  const strata = errorStrata(input).map((stratum) => ({ ...stratum, terms: [...stratum.terms] }));
+  return { warnings: [...designWarnings({ ...input, sites: 1 })], strata };
 }
 
 /** A site row as the API answers it, with its area and design guardrails. */
@@ -56,9 +73,6 @@ export function presentSite(row: SiteRow, context: SiteContext): Site {
     randomizationSeed: row.randomizationSeed,
     plotCount: context.plotCount,
     hasObservations: context.hasObservations,
-    warnings:
-      context.treatmentCount === 0
-        ? []
-        : [...designWarnings({ design: context.design, treatments: context.treatmentCount, blocks: row.blocks, sites: 1 })],
+    ...siteGuardrails(context, row.blocks),
   };
 }

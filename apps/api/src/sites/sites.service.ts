@@ -1,5 +1,5 @@
 import type { Site } from '@friable/contracts';
-import { plotLabelPrefix, randomizeSite } from '@friable/field';
+import { DESIGN_RULES, isFactorDesign, plotLabelPrefix, randomizeSite, type PlotAssignment } from '@friable/field';
 import { ConflictException, Injectable, NotFoundException } from '@nestjs/common';
 import { InjectConnection, InjectModel } from '@nestjs/sequelize';
 import { fn, col, type Transaction } from 'sequelize';
@@ -11,7 +11,11 @@ import { throwIfProblems, type FieldProblem } from '../common/exceptions/field-p
 import { takenInTrial } from '../common/taken-in-trial';
 import { ObservationsGuardService } from '../common/protocol/observations-guard.service';
 import { ProtocolGateService } from '../common/protocol/protocol-gate.service';
+import { factorCountProblem } from '../factors/factor-count';
+import { FactorLevel } from '../factors/models/factor-level.model';
+import { TrialFactor } from '../factors/models/trial-factor.model';
 import { PlotRow } from '../plots/models/plot.model';
+import { levelIdsOf } from '../treatments/factor-level-columns';
 import { TreatmentRow } from '../treatments/models/treatment.model';
 import { Trial } from '../trials/models/trial.model';
 import { TrialMembership } from '../trials/models/trial-membership.model';
@@ -32,6 +36,7 @@ export class SitesService {
     @InjectModel(TreatmentRow) private readonly treatments: typeof TreatmentRow,
     @InjectModel(TrialMembership) private readonly memberships: typeof TrialMembership,
     @InjectModel(Trial) private readonly trials: typeof Trial,
+    @InjectModel(TrialFactor) private readonly factors: typeof TrialFactor,
     @InjectConnection() private readonly sequelize: Sequelize,
     private readonly gate: ProtocolGateService,
     private readonly observations: ObservationsGuardService,
@@ -52,9 +57,17 @@ export class SitesService {
     const plotCount = new Map(counts.map((c) => [Number(c.siteId), Number(c.plots)]));
     const observed = new Set(await this.observations.sitesWithObservations(trialId));
     const treatmentCount = await this.treatments.count({ where: { trialId }, transaction });
+    const factors = (await this.factorsOf(trialId, transaction)).map((factor) => ({ name: factor.name, levels: factor.levels!.length }));
     return rows.map((row) =>
-      presentSite(row, { design: trial.design, treatmentCount, plotCount: plotCount.get(row.id) ?? 0, hasObservations: observed.has(row.id) }),
+      presentSite(row, { design: trial.design, treatmentCount, factors, plotCount: plotCount.get(row.id) ?? 0, hasObservations: observed.has(row.id) }),
     );
+  }
+
+  /** The trial's factors in order, each with its levels in order. */
+  private async factorsOf(trialId: number, transaction?: Transaction): Promise<TrialFactor[]> {
+    const factors = await this.factors.findAll({ where: { trialId }, include: [FactorLevel], order: [['position', 'ASC']], transaction });
+    for (const factor of factors) factor.levels = [...(factor.levels ?? [])].sort((a, b) => a.position - b.position);
+    return factors;
   }
 
   async one(trialId: number, id: number, transaction?: Transaction): Promise<Site> {
@@ -182,6 +195,30 @@ export class SitesService {
     });
   }
 
+  /**
+   * The site's layout from the seed, each plot with its treatment's id. Factorial and split designs lay out their
+   * factors' levels (a split plot restricted to whole plots within blocks, sub plots within whole plots) and find
+   * each plot's treatment by its level ids; a one-factor design lays out the treatment codes.
+   */
+  private async layout(trial: Trial, site: SiteRow, treatments: TreatmentRow[], seed: string, transaction: Transaction): Promise<Array<{ plot: PlotAssignment; treatmentId: number }>> {
+    const base = { seed, siteKey: siteKey(site.id), design: trial.design, blocks: site.blocks, labelPrefix: site.labelPrefix };
+    if (!isFactorDesign(trial.design)) {
+      const idByCode = new Map(treatments.map((t) => [t.code, t.id]));
+      return randomizeSite({ ...base, treatments: treatments.map((t) => t.code) }).map((plot) => ({ plot, treatmentId: idByCode.get(plot.treatmentCode)! }));
+    }
+    const factors = await this.factorsOf(trial.id, transaction);
+    const countProblem = factors.length === 0 ? `The ${DESIGN_RULES[trial.design].name} design needs its factors before a site can be randomized.` : factorCountProblem(trial.design, factors.length);
+    if (countProblem) throw new ConflictException(countProblem);
+    const levelIds = factors.map((factor) => new Map(factor.levels!.map((level) => [level.code, level.id])));
+    const treatmentByLevels = new Map(treatments.map((t) => [levelIdsOf(t).join(','), t.id]));
+    const layout = randomizeSite({ ...base, factors: factors.map((factor) => ({ name: factor.name, levels: factor.levels!.map((level) => level.code) })) });
+    return layout.map((plot) => {
+      const treatmentId = treatmentByLevels.get(plot.levels.map((code, index) => levelIds[index]!.get(code)).join(','));
+      if (treatmentId === undefined) throw new ConflictException(`No treatment is the combination ${plot.treatmentCode}; save the factors again to rebuild the treatments.`);
+      return { plot, treatmentId };
+    });
+  }
+
   /** Lays out the site's plots from the seed (the trial's unless given); refused once the site has observations. */
   async randomize(trialId: number, id: number, user: AuthUser, seedText?: string): Promise<Site> {
     return this.sequelize.transaction(async (transaction) => {
@@ -191,20 +228,23 @@ export class SitesService {
       const treatments = await this.treatments.findAll({ where: { trialId }, order: [['position', 'ASC'], ['id', 'ASC']], transaction });
       if (treatments.length < 2) throw new ConflictException('A site can be randomized once the trial has at least two treatments.');
       const seed = seedText ?? trial.seed;
-      const layout = randomizeSite({
-        seed,
-        siteKey: siteKey(id),
-        design: trial.design,
-        treatments: treatments.map((t) => t.code),
-        blocks: row.blocks,
-        labelPrefix: row.labelPrefix,
-      });
-      const idByCode = new Map(treatments.map((t) => [t.code, t.id]));
+      const placed = await this.layout(trial, row, treatments, seed, transaction);
       const previous = await this.plots.destroy({ where: { siteId: id }, transaction });
       await this.plots.bulkCreate(
-        layout.map((plot) => ({ trialId, siteId: id, block: plot.block, position: plot.position, treatmentId: idByCode.get(plot.treatmentCode), label: plot.label })),
+        placed.map(({ plot, treatmentId }) => ({
+          trialId,
+          siteId: id,
+          block: plot.block,
+          position: plot.position,
+          wholePlot: plot.wholePlot,
+          subPlot: plot.subPlot,
+          subSubPlot: plot.subSubPlot,
+          treatmentId,
+          label: plot.label,
+        })),
         { transaction },
       );
+      const layout = placed.map(({ plot }) => plot);
       row.randomizedAt = new Date();
       row.randomizationSeed = seed;
       await row.save({ transaction });

@@ -2,6 +2,11 @@ import { Body, Controller, HttpCode, Post } from '@nestjs/common';
 import { ApiOkResponse, ApiOperation, ApiTags, ApiUnprocessableEntityResponse } from '@nestjs/swagger';
 import { SignedIn } from '../common/decorators/access.decorator';
 import { AnovaRequestDto } from './dto/anova-request.dto';
+import { CensoredAnswerDto } from './dto/censored-answer.dto';
+import { CensoredRequestDto } from './dto/censored-request.dto';
+import { CountsAnswerDto } from './dto/counts-answer.dto';
+import { CountsRequestDto, OrdinalRequestDto } from './dto/labelled-value-request.dto';
+import { OrdinalAnswerDto } from './dto/ordinal-answer.dto';
 import { PowerRequestDto } from './dto/power-request.dto';
 import { RankTestRequestDto } from './dto/rank-test-request.dto';
 import { StatsService } from './stats.service';
@@ -25,6 +30,56 @@ export class StatsController {
   @ApiUnprocessableEntityResponse({ description: 'A malformed body (naming the field) or a statistically impossible request (the engine’s sentence).' })
   anova(@Body() body: AnovaRequestDto) {
     return this.stats.anova(body);
+  }
+
+  @Post('censored')
+  @SignedIn()
+  @HttpCode(200)
+  @ApiOperation({
+    summary: 'Drain times with a cut-off: not-drained curves, stratified log-rank test and time ratios to the control',
+    description:
+      'Product-limit curves per treatment with 95 % log-scale bands and medians (null: not reached), per site too; the log-rank test stratified by block ' +
+      '(site × block with several sites); an accelerated-failure-time model (weibull, lognormal or loglogistic) with blocks and sites as terms, a ' +
+      'likelihood-ratio test of each term by dropping it (a site with its blocks), and time ratios to the control with simultaneous 95 % limits and ' +
+      'single-step (Dunnett-type) adjusted p-values. A block where nothing drained is left out of the model; a treatment that never drained leaves ' +
+      'the model out (warnings say so).',
+  })
+  @ApiOkResponse({ type: CensoredAnswerDto })
+  @ApiUnprocessableEntityResponse({ description: 'A malformed body (naming the field) or data the analysis cannot take (the engine’s sentence).' })
+  censored(@Body() body: CensoredRequestDto) {
+    return this.stats.censored(body);
+  }
+
+  @Post('ordinal')
+  @SignedIn()
+  @HttpCode(200)
+  @ApiOperation({
+    summary: 'Scores on an ordered scale: proportional-odds model with blocks, odds ratios to the control, predicted shares, rank test',
+    description:
+      'A cumulative-logit (proportional-odds) model with the design’s blocks and sites; a likelihood-ratio test of each term by dropping it; each ' +
+      'treatment’s odds of a higher score against the control with simultaneous 95 % limits and single-step adjusted p-values; the predicted share of ' +
+      'each score per treatment averaged over blocks; and the rank test beside it (Friedman with blocks, else Kruskal–Wallis).',
+  })
+  @ApiOkResponse({ type: OrdinalAnswerDto })
+  @ApiUnprocessableEntityResponse({ description: 'A malformed body (naming the field) or data the analysis cannot take (the engine’s sentence).' })
+  ordinal(@Body() body: OrdinalRequestDto) {
+    return this.stats.ordinal(body);
+  }
+
+  @Post('counts')
+  @SignedIn()
+  @HttpCode(200)
+  @ApiOperation({
+    summary: 'Counts per plot: Poisson log-linear model with blocks, overdispersion check, quasi-Poisson when needed, rate ratios to the control',
+    description:
+      'A Poisson log-linear model with the design’s blocks and sites; overdispersion judged by Pearson’s χ² on the residual df, and when present ' +
+      '(family auto) a quasi-Poisson fit: standard errors × √dispersion, F tests of each term, t-based limits. Rate ratios to the control with ' +
+      'simultaneous 95 % limits and single-step adjusted p-values, and the model’s count per plot for each treatment.',
+  })
+  @ApiOkResponse({ type: CountsAnswerDto })
+  @ApiUnprocessableEntityResponse({ description: 'A malformed body (naming the field) or data the analysis cannot take (the engine’s sentence).' })
+  counts(@Body() body: CountsRequestDto) {
+    return this.stats.counts(body);
   }
 
   @Post('friedman')

@@ -1,6 +1,9 @@
 import { Injectable, UnprocessableEntityException } from '@nestjs/common';
-import { analyseTrial, blocksForPower, friedman, kruskalWallis, rcbdPower, type TrialAnalysis, type TrialAnalysisRequest } from '@friable/stats';
+import type { CensoredAnswer, CountsAnswer, OrdinalAnswer } from '@friable/contracts';
+import { analyseCensoredTimes, analyseCounts, analyseOrdinalScores, analyseTrial, blocksForPower, friedman, kruskalWallis, rcbdPower, type TrialAnalysis, type TrialAnalysisRequest } from '@friable/stats';
 import type { AnovaRequestDto } from './dto/anova-request.dto';
+import type { CensoredRequestDto } from './dto/censored-request.dto';
+import type { CountsRequestDto, OrdinalRequestDto } from './dto/labelled-value-request.dto';
 import type { PowerRequestDto } from './dto/power-request.dto';
 import type { RankTestRequestDto } from './dto/rank-test-request.dto';
 
@@ -21,12 +24,27 @@ function requireLabel(value: string | undefined, row: number, field: string): st
   return value;
 }
 
+/** The engine's frozen result as plain JSON data (NaN and ±Infinity become null, as JSON writes them). */
+const plain = <T>(value: unknown): T => JSON.parse(JSON.stringify(value)) as T;
+
 const toNumber = (value: number | string) => (typeof value === 'number' ? value : Number(value));
 
 @Injectable()
 export class StatsService {
   anova(request: AnovaRequestDto): TrialAnalysis {
     return engine(() => analyseTrial(request as TrialAnalysisRequest));
+  }
+
+  censored(request: CensoredRequestDto): CensoredAnswer {
+    return engine(() => plain(analyseCensoredTimes(request)));
+  }
+
+  ordinal(request: OrdinalRequestDto): OrdinalAnswer {
+    return engine(() => plain(analyseOrdinalScores(request)));
+  }
+
+  counts(request: CountsRequestDto): CountsAnswer {
+    return engine(() => plain(analyseCounts(request)));
   }
 
   friedman(request: RankTestRequestDto) {

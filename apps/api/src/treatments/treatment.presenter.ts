@@ -1,17 +1,15 @@
-import type { Treatment } from '@friable/contracts';
+import type { MaterialRate, Treatment } from '@friable/contracts';
 import { findRateUnit } from '@friable/field';
 import type { FieldProblem } from '../common/exceptions/field-problems.exception';
 import { decimalToNumber } from '../common/decimal';
+import { levelIdsOf } from './factor-level-columns';
 import type { TreatmentRow } from './models/treatment.model';
 
-/** A treatment row as the API answers it. */
-export function presentTreatment(row: TreatmentRow): Treatment {
+type RateColumns = Pick<TreatmentRow, 'rateValue' | 'rateUnit' | 'rateBasis' | 'incorporationDepthCm' | 'product' | 'purity' | 'moistureBasis' | 'moistureFraction' | 'materialKind'>;
+
+/** The rate and material columns of a treatment or factor level row, DECIMAL text turned into numbers. */
+export function presentMaterialRate(row: RateColumns): MaterialRate {
   return {
-    id: row.id,
-    code: row.code,
-    name: row.name,
-    description: row.description,
-    isControl: row.isControl,
     rateValue: decimalToNumber(row.rateValue),
     rateUnit: row.rateUnit,
     rateBasis: row.rateBasis,
@@ -21,7 +19,19 @@ export function presentTreatment(row: TreatmentRow): Treatment {
     moistureBasis: row.moistureBasis,
     moistureFraction: decimalToNumber(row.moistureFraction),
     materialKind: row.materialKind,
-    factorLevelIds: [row.factorLevelAId, row.factorLevelBId].filter((id): id is number => id !== null),
+  };
+}
+
+/** A treatment row as the API answers it. */
+export function presentTreatment(row: TreatmentRow): Treatment {
+  return {
+    id: row.id,
+    code: row.code,
+    name: row.name,
+    description: row.description,
+    isControl: row.isControl,
+    ...presentMaterialRate(row),
+    factorLevelIds: levelIdsOf(row),
     position: row.position,
   };
 }

@@ -1,4 +1,5 @@
 import type { Treatment } from '@friable/contracts';
+import { isFactorDesign } from '@friable/field';
 import { ConflictException, Injectable, NotFoundException } from '@nestjs/common';
 import { InjectConnection, InjectModel } from '@nestjs/sequelize';
 import type { Sequelize } from 'sequelize-typescript';
@@ -12,10 +13,11 @@ import { ProtocolGateService } from '../common/protocol/protocol-gate.service';
 import type { Trial } from '../trials/models/trial.model';
 import type { CreateTreatmentDto } from './dto/create-treatment.dto';
 import type { UpdateTreatmentDto } from './dto/update-treatment.dto';
+import { levelIdColumns } from './factor-level-columns';
 import { TreatmentRow } from './models/treatment.model';
 import { presentTreatment, treatmentRateProblems } from './treatment.presenter';
 
-const factorialRefusal = "A factorial trial's treatments are every combination of its factor levels; change the factors instead.";
+const factorialRefusal = "The treatments of a factorial or split-plot trial are every combination of its factor levels; change the factors instead.";
 
 @Injectable()
 export class TreatmentsService {
@@ -45,7 +47,7 @@ export class TreatmentsService {
   async create(trialId: number, user: AuthUser, input: CreateTreatmentDto): Promise<Treatment> {
     return this.sequelize.transaction(async (transaction) => {
       const trial = await this.gate.openForWrite(trialId, transaction);
-      if (trial.design === 'factorial-rcbd') throw new ConflictException(factorialRefusal);
+      if (isFactorDesign(trial.design)) throw new ConflictException(factorialRefusal);
       const row = await this.insert(trial, user, input, transaction);
       await this.gate.clearLayouts(trialId, 'all', { userId: user.id, what: `Adding treatment ${row.code}` }, transaction);
       return presentTreatment(row);
@@ -53,7 +55,7 @@ export class TreatmentsService {
   }
 
   /** Writes one treatment after its checks; shared with factor-generated combinations. */
-  async insert(trial: Trial, user: AuthUser, input: CreateTreatmentDto & { factorLevelAId?: number | null; factorLevelBId?: number | null }, transaction: Transaction): Promise<TreatmentRow> {
+  async insert(trial: Trial, user: AuthUser, input: CreateTreatmentDto & { factorLevelIds?: readonly number[] }, transaction: Transaction): Promise<TreatmentRow> {
     await this.checkCode(trial.id, input.code, null, transaction);
     const values = {
       trialId: trial.id,
@@ -70,8 +72,7 @@ export class TreatmentsService {
       moistureBasis: input.moistureBasis ?? 'as-is',
       moistureFraction: input.moistureFraction ?? null,
       materialKind: input.materialKind ?? 'other',
-      factorLevelAId: input.factorLevelAId ?? null,
-      factorLevelBId: input.factorLevelBId ?? null,
+      ...levelIdColumns(input.factorLevelIds ?? []),
       position: input.position ?? ((await this.treatments.max<number, TreatmentRow>('position', { where: { trialId: trial.id }, transaction })) ?? 0) + 1,
     };
     throwIfProblems(treatmentRateProblems(values));
@@ -112,7 +113,7 @@ export class TreatmentsService {
   async remove(trialId: number, id: number, user: AuthUser): Promise<void> {
     await this.sequelize.transaction(async (transaction) => {
       const trial = await this.gate.openForWrite(trialId, transaction);
-      if (trial.design === 'factorial-rcbd') throw new ConflictException(factorialRefusal);
+      if (isFactorDesign(trial.design)) throw new ConflictException(factorialRefusal);
       const row = await this.find(trialId, id, transaction);
       await this.gate.clearLayouts(trialId, 'all', { userId: user.id, what: `Deleting treatment ${row.code}` }, transaction);
       await row.destroy({ transaction });

@@ -1,4 +1,5 @@
 import type { TrialDetail, TrialSummary } from '@friable/contracts';
+import { isFactorDesign } from '@friable/field';
 import { ConflictException, Injectable, NotFoundException } from '@nestjs/common';
 import { InjectConnection, InjectModel } from '@nestjs/sequelize';
 import { randomBytes } from 'node:crypto';
@@ -100,7 +101,7 @@ export class TrialsService {
     const trial = await this.trials.findByPk(access.trialId, { transaction });
     if (!trial) throw new NotFoundException('No such trial.');
     const [factors, treatments, measures, rounds, sites] = [
-      await this.factorService.list(trial.id, transaction),
+      await this.factorService.list(trial.id, trial.design, transaction),
       await this.treatments.list(trial.id, transaction),
       await this.measures.list(trial.id, transaction),
       await this.rounds.list(trial.id, transaction),
@@ -142,7 +143,9 @@ export class TrialsService {
         await this.gate.openForWrite(trial.id, transaction);
         if (fields.design !== undefined && fields.design !== trial.design) {
           await this.gate.clearLayouts(trial.id, 'all', { userId: user.id, what: `Changing the design from ${trial.design} to ${fields.design}` }, transaction);
-          if (trial.design === 'factorial-rcbd') await this.factors.destroy({ where: { trialId: trial.id }, transaction });
+          // Between factorial and split designs the factors stay (the activation check says when their number no longer fits);
+          // a one-factor design has none.
+          if (isFactorDesign(trial.design) && !isFactorDesign(fields.design)) await this.factors.destroy({ where: { trialId: trial.id }, transaction });
         }
         trial.set({
           ...fields,

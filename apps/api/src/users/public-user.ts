@@ -11,5 +11,9 @@ export function toPublicUser(user: User): PublicUser {
     isAdmin: user.isAdmin,
     isActive: user.isActive,
     createdAt: user.createdAt.toISOString(),
+    locale: user.locale ?? null,
+    emailReminders: user.emailReminders ?? true,
+    emailReceipts: user.emailReceipts ?? true,
+    lastSignInAt: user.lastSignInAt ? user.lastSignInAt.toISOString() : null,
   };
 }

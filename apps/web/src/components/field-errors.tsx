@@ -1,7 +1,8 @@
 import { Callout, FormGroup } from '@blueprintjs/core';
 import type { ReactNode } from 'react';
 import { ApiError } from '../lib/api-client';
-import { parseNumberInput } from '../lib/format';
+import { readNumber } from '../lib/number-reading';
+import { personLocale } from '../lib/person-locale';
 
 /** The server's messages about one field (from a 422 answer), joined into one sentence. */
 export function fieldError(error: unknown, field: string): string | undefined {
@@ -72,9 +73,10 @@ export function parseNumberFields<K extends string>(texts: Record<K, string>, la
   const values = {} as Record<K, number | null>;
   const details: Array<{ field: string; message: string }> = [];
   for (const field of Object.keys(texts) as K[]) {
-    const value = parseNumberInput(texts[field]);
-    if (Number.isNaN(value)) details.push({ field, message: `${labels[field]} must be a number, e.g. 12.5` });
-    values[field] = value;
+    const reading = readNumber(texts[field], personLocale());
+    if (reading.kind === 'invalid') details.push({ field, message: `${labels[field]} must be a number, e.g. 12.5` });
+    if (reading.kind === 'ambiguous') details.push({ field, message: `${labels[field]}: say which number “${texts[field].trim()}” means (choose under the box)` });
+    values[field] = reading.kind === 'number' ? reading.value : reading.kind === 'empty' ? null : Number.NaN;
   }
   return { values, error: details.length ? new ApiError(422, 'Some numbers could not be read; see the fields marked below.', details) : null };
 }

@@ -1,3 +1,6 @@
+import { numberOrNull, writeNumber } from './number-reading';
+import { personLocale } from './person-locale';
+
 /** "rcbd" → "Randomized complete block", for people rather than machines. */
 export const designLabels: Record<string, string> = {
   crd: 'Completely randomized',
@@ -26,12 +29,16 @@ export function formatDate(iso: string): string {
 
 const numberFormats = new Map<string, Intl.NumberFormat>();
 
-/** A number for people: grouped thousands, at most `maxDecimals` decimals (trailing zeros dropped). */
+/**
+ * A number for people, in their locale: grouped thousands, at most `maxDecimals` decimals (trailing
+ * zeros dropped): "1,234.5" for en-US, "1.234,5" for de-DE.
+ */
 export function formatNumber(value: number, maxDecimals = 2, minDecimals = 0): string {
-  const key = `${minDecimals}:${maxDecimals}`;
+  const locale = personLocale();
+  const key = `${locale}:${minDecimals}:${maxDecimals}`;
   let format = numberFormats.get(key);
   if (!format) {
-    format = new Intl.NumberFormat('en-US', { minimumFractionDigits: minDecimals, maximumFractionDigits: maxDecimals });
+    format = new Intl.NumberFormat(locale, { minimumFractionDigits: minDecimals, maximumFractionDigits: maxDecimals });
     numberFormats.set(key, format);
   }
   return format.format(value);
@@ -93,19 +100,19 @@ export const measureKindLabels: Record<string, string> = {
 };
 
 /**
- * What a person typed into a number box: null when left empty, NaN when it is not a number
- * (commas as thousands separators and spaces are allowed: "1,200" → 1200).
+ * What a person typed into a number box, read by the one shared reading (lib/number-reading) in
+ * their locale: null when left empty, NaN when it is not a number or is still ambiguous
+ * ("1,000" with a decimal point locale: the box asks which was meant).
  */
 export function parseNumberInput(text: string): number | null {
-  const cleaned = text.replace(/[\s,]/g, '');
-  if (cleaned === '') return null;
-  const value = Number(cleaned);
-  return Number.isFinite(value) ? value : Number.NaN;
+  return numberOrNull(text, personLocale());
 }
 
-/** The text a number box starts with. */
+/** The text a number box starts with, written with the person's decimal mark and no grouping. */
 export function numberInputText(value: number | null | undefined): string {
-  return value === null || value === undefined ? '' : String(value);
+  if (value === null || value === undefined || !Number.isFinite(value)) return '';
+  const plain = /e/i.test(String(value)) ? value.toLocaleString('en-US', { useGrouping: false, maximumFractionDigits: 20 }) : String(value);
+  return writeNumber(plain, personLocale());
 }
 
 /** The amount for one plot in both unit systems: "290 g (10.2 oz)", or "24.5 L (6.47 gal)" for a layer. */

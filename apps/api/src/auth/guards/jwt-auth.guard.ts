@@ -1,19 +1,40 @@
-import { Injectable, UnauthorizedException, type ExecutionContext } from '@nestjs/common';
+import { ForbiddenException, Injectable, UnauthorizedException, type ExecutionContext } from '@nestjs/common';
 import { Reflector } from '@nestjs/core';
 import { AuthGuard } from '@nestjs/passport';
 import { ACCESS_RULE, type AccessRule } from '../../common/decorators/access.decorator';
+import type { AuthenticatedRequest } from '../auth-user';
+import { CSRF_HEADER, SESSION_COOKIE } from '../session-cookie';
+import { SessionsService } from '../sessions.service';
 
-/** Requires a valid bearer token on every route not marked @Public(). */
+const SAFE_METHODS = new Set(['GET', 'HEAD', 'OPTIONS']);
+
+/**
+ * Requires a signed-in person on every route not marked @Public(): a bearer access token (API clients), or
+ * else the browser's session cookie, in which case a request that changes something must carry the
+ * X-Friable-CSRF header.
+ */
 @Injectable()
 export class JwtAuthGuard extends AuthGuard('jwt') {
-  constructor(private readonly reflector: Reflector) {
+  constructor(
+    private readonly reflector: Reflector,
+    private readonly sessions: SessionsService,
+  ) {
     super();
   }
 
-  override canActivate(context: ExecutionContext) {
+  override async canActivate(context: ExecutionContext): Promise<boolean> {
     const rule = this.reflector.getAllAndOverride<AccessRule | undefined>(ACCESS_RULE, [context.getHandler(), context.getClass()]);
     if (rule?.kind === 'public') return true;
-    return super.canActivate(context);
+    const request = context.switchToHttp().getRequest<AuthenticatedRequest>();
+    const cookie = (request.cookies as Record<string, string> | undefined)?.[SESSION_COOKIE];
+    if (!request.headers.authorization && cookie) {
+      request.user = await this.sessions.userForCookie(cookie);
+      if (!SAFE_METHODS.has(request.method) && request.headers[CSRF_HEADER] !== '1') {
+        throw new ForbiddenException('This request did not come from a Friable page (its X-Friable-CSRF header is missing), so it was refused. Reload the page and try again.');
+      }
+      return true;
+    }
+    return (await super.canActivate(context)) as boolean;
   }
 
   override handleRequest<TUser>(error: unknown, user: TUser | false, info: unknown): TUser {

@@ -7,7 +7,7 @@ export interface FieldProblem {
 
 /** 422 in the same shape as the validation pipe's answer, for checks that need the stored rows. */
 export class FieldProblemsException extends UnprocessableEntityException {
-  constructor(problems: FieldProblem[], message = `Please correct: ${problems.map((p) => p.message).join('; ')}.`) {
+  constructor(problems: FieldProblem[], message = `Please correct: ${problems.map((p) => p.message.replace(/\.$/, '')).join('; ')}.`) {
     super({ statusCode: 422, error: 'Unprocessable Entity', message, errors: problems });
   }
 }

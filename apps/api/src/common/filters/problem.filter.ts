@@ -1,6 +1,6 @@
 import { ArgumentsHost, Catch, HttpException, HttpStatus, Logger, type ExceptionFilter } from '@nestjs/common';
 import type { Response } from 'express';
-import { UniqueConstraintError, ValidationError as SequelizeValidationError } from 'sequelize';
+import { ConnectionError, DatabaseError, UniqueConstraintError, ValidationError as SequelizeValidationError } from 'sequelize';
 import type { ProblemBody } from '@friable/contracts';
 
 const reasonPhrases: Record<number, string> = {
@@ -19,6 +19,25 @@ const reasonPhrases: Record<number, string> = {
 
 function problem(statusCode: number, message: string, extra: Partial<ProblemBody> = {}): ProblemBody {
   return { statusCode, error: reasonPhrases[statusCode] ?? 'Error', message, ...extra };
+}
+
+/** Seconds a client is asked to wait (Retry-After) when the database cannot be reached. */
+export const RETRY_AFTER_SECONDS = 5;
+
+/** The answer while the database cannot be reached. */
+export const databaseUnavailable = (): ProblemBody =>
+  problem(503, 'The database cannot be reached just now, so nothing was read or saved. Please try again in a few seconds.');
+
+/**
+ * Whether an error means the database is out of reach: no connection could be made or had in
+ * time (Sequelize's ConnectionError family, the pool's acquire timeout among them), or the
+ * connection broke mid-query (the driver marks such errors fatal; SQLSTATE class 08).
+ */
+export function isDatabaseUnavailable(exception: unknown): boolean {
+  if (exception instanceof ConnectionError) return true;
+  if (!(exception instanceof DatabaseError)) return false;
+  const cause = exception.parent as { fatal?: boolean; sqlState?: string } | undefined;
+  return cause?.fatal === true || (typeof cause?.sqlState === 'string' && cause.sqlState.startsWith('08'));
 }
 
 /** Turns every error into a plain answer: no stack trace, SQL text or internal path reaches a client. */
@@ -43,6 +62,7 @@ export function toProblem(exception: unknown): ProblemBody {
       errors: exception.errors.map((e) => ({ field: e.path ?? undefined, message: e.message })),
     });
   }
+  if (isDatabaseUnavailable(exception)) return databaseUnavailable();
   const type = (exception as { type?: string } | null)?.type;
   if (type === 'entity.parse.failed') return problem(400, 'The request body is not valid JSON.');
   if (type === 'entity.too.large') return problem(413, 'The request body is too large.');
@@ -60,6 +80,13 @@ export class ProblemFilter implements ExceptionFilter {
       this.logger.error(exception instanceof Error ? (exception.stack ?? exception.message) : String(exception));
     }
     if (response.headersSent) return;
+    if (body.statusCode === HttpStatus.SERVICE_UNAVAILABLE) response.setHeader('Retry-After', String(RETRY_AFTER_SECONDS));
+    if (body.statusCode === HttpStatus.TOO_MANY_REQUESTS) {
+      // Every 429 says when to come back: the lockout's own time, the throttler's, or a minute.
+      const own = (exception as { retryAfterSeconds?: unknown }).retryAfterSeconds;
+      if (typeof own === 'number') response.setHeader('Retry-After', String(own));
+      else if (!response.getHeader('Retry-After')) response.setHeader('Retry-After', '60');
+    }
     response.status(body.statusCode).json(body);
   }
 }

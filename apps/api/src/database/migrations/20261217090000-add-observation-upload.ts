@@ -1,4 +1,4 @@
-import { DataTypes, type QueryInterface } from 'sequelize';
+import { DataTypes, QueryTypes, type QueryInterface } from 'sequelize';
 
 // Which upload last wrote a value (null after an edit in the Ledger). Intake writes a whole file's
 // values with one bulk statement and then records their history in one statement too, finding
@@ -9,5 +9,6 @@ export async function up({ context: queryInterface }: { context: QueryInterface 
 }
 
 export async function down({ context: queryInterface }: { context: QueryInterface }): Promise<void> {
-  await queryInterface.removeColumn('observations', 'upload_id');
+  // An explicit query type: removeColumn's untyped query trips over the mariadb driver's result meta.
+  await queryInterface.sequelize.query('ALTER TABLE observations DROP COLUMN upload_id', { type: QueryTypes.RAW });
 }

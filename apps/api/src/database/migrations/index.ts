@@ -18,9 +18,20 @@ import * as createObservationChanges from './20261204090200-create-observation-c
 import * as createPlotPhotos from './20261204090300-create-plot-photos';
 import * as createAnalysisSnapshots from './20261205090000-create-analysis-snapshots';
 import * as createSnapshotComments from './20261205090100-create-snapshot-comments';
+import * as createUserSessions from './20261213090000-create-user-sessions';
+import * as createSignInLockouts from './20261213090100-create-sign-in-lockouts';
+import * as extendUsersForAccounts from './20261213090200-extend-users-for-accounts';
+import * as createPasswordResets from './20261213090300-create-password-resets';
+import * as createTrialDepartures from './20261213090400-create-trial-departures';
+import * as createAnalysisSignOffs from './20261213090500-create-analysis-sign-offs';
+import * as extendSnapshotComments from './20261213090600-extend-snapshot-comments';
+import * as createReviewRequests from './20261213090700-create-review-requests';
 import * as addObservationUpload from './20261217090000-add-observation-upload';
 import * as createIntakeImports from './20261217090100-create-intake-imports';
 import * as createIntakeColumnChoices from './20261217090200-create-intake-column-choices';
+import * as factorLevelRates from './20261218090000-factor-level-rates';
+import * as fourFactorTreatments from './20261218090100-four-factor-treatments';
+import * as plotUnits from './20261218090200-plot-units';
 
 export interface MigrationModule {
   up(params: { context: QueryInterface }): Promise<void>;
@@ -48,7 +59,18 @@ export const migrations: ReadonlyArray<readonly [name: string, module: Migration
   ['20261204090300-create-plot-photos', createPlotPhotos],
   ['20261205090000-create-analysis-snapshots', createAnalysisSnapshots],
   ['20261205090100-create-snapshot-comments', createSnapshotComments],
+  ['20261213090000-create-user-sessions', createUserSessions],
+  ['20261213090100-create-sign-in-lockouts', createSignInLockouts],
+  ['20261213090200-extend-users-for-accounts', extendUsersForAccounts],
+  ['20261213090300-create-password-resets', createPasswordResets],
+  ['20261213090400-create-trial-departures', createTrialDepartures],
+  ['20261213090500-create-analysis-sign-offs', createAnalysisSignOffs],
+  ['20261213090600-extend-snapshot-comments', extendSnapshotComments],
+  ['20261213090700-create-review-requests', createReviewRequests],
   ['20261217090000-add-observation-upload', addObservationUpload],
   ['20261217090100-create-intake-imports', createIntakeImports],
   ['20261217090200-create-intake-column-choices', createIntakeColumnChoices],
+  ['20261218090000-factor-level-rates', factorLevelRates],
+  ['20261218090100-four-factor-treatments', fourFactorTreatments],
+  ['20261218090200-plot-units', plotUnits],
 ];

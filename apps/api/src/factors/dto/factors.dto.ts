@@ -1,8 +1,10 @@
-import { ApiProperty } from '@nestjs/swagger';
+import { ApiProperty, OmitType } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
 import { ArrayMaxSize, ArrayMinSize, IsArray, IsString, Matches, MaxLength, MinLength, ValidateNested } from 'class-validator';
+import { CreateTreatmentDto } from '../../treatments/dto/create-treatment.dto';
 
-export class FactorLevelDto {
+/** A level: its code and name, and (optional) the rate and material of what is applied, as a treatment's. */
+export class FactorLevelDto extends OmitType(CreateTreatmentDto, ['code', 'name', 'isControl', 'position'] as const) {
   @ApiProperty({ example: 'G1', description: '1 to 6 letters or digits, unique within the factor.' })
   @IsString({ message: 'code must be 1 to 6 letters or digits' })
   @Matches(/^[A-Za-z0-9]{1,6}$/, { message: 'code must be 1 to 6 letters or digits' })
@@ -32,10 +34,15 @@ export class FactorDto {
 }
 
 export class FactorsDto {
-  @ApiProperty({ type: [FactorDto], description: 'Exactly two factors; the treatments become every combination of their levels.' })
-  @IsArray({ message: 'factors must list exactly two factors' })
-  @ArrayMinSize(2, { message: 'factors must list exactly two factors' })
-  @ArrayMaxSize(2, { message: 'factors must list exactly two factors' })
+  @ApiProperty({
+    type: [FactorDto],
+    description:
+      'A factorial takes 2 to 4 factors; a split plot exactly 2 (the whole-plot factor first), a split-split plot 3 (whole plot, sub plot, sub-sub plot). ' +
+      'The treatments become every combination of their levels. Same factors and level codes as before: names and rates change in place and the plot layouts stay.',
+  })
+  @IsArray({ message: 'factors must list 2 to 4 factors' })
+  @ArrayMinSize(2, { message: 'factors must list 2 to 4 factors' })
+  @ArrayMaxSize(4, { message: 'factors must list 2 to 4 factors' })
   @ValidateNested({ each: true })
   @Type(() => FactorDto)
   factors: FactorDto[];

@@ -11,9 +11,9 @@ export class TrialFactor extends Model {
   @Column({ type: DataType.INTEGER.UNSIGNED, allowNull: false, field: 'trial_id' })
   declare trialId: number;
 
-  /** 1 = factor A, 2 = factor B. */
+  /** 1 to 4; a split plot's whole-plot factor is 1, its sub-plot factor 2, its sub-sub-plot factor 3. */
   @Column({ type: DataType.TINYINT.UNSIGNED, allowNull: false })
-  declare position: 1 | 2;
+  declare position: 1 | 2 | 3 | 4;
 
   @Column({ type: DataType.STRING(80), allowNull: false })
   declare name: string;

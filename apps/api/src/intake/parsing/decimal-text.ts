@@ -1,7 +1,8 @@
-import Decimal from 'decimal.js';
+import { MeasurementDecimal } from '../../common/input/measurement-decimal';
+import { checkNumberText, type NumberBoundProblem } from '../../common/input/number-bounds';
 
 /** Why a cell is not a decimal number in this file's convention. */
-export type DecimalTextProblem = 'not-a-number' | 'comma-in-point-file' | 'point-in-comma-file';
+export type DecimalTextProblem = 'not-a-number' | 'comma-in-point-file' | 'point-in-comma-file' | NumberBoundProblem;
 
 export type DecimalTextReading =
   | { readonly ok: true; readonly text: string; readonly decimals: number }
@@ -30,6 +31,8 @@ export const COMMA_DECIMAL_CELL = /^(?:>=|[>≥])?\s*[+-]?\d*,\d+$/;
  */
 export function readDecimalText(raw: string, decimalComma: boolean): DecimalTextReading {
   const text = raw.trim();
+  const bound = checkNumberText(text, decimalComma);
+  if (!bound.ok) return Object.freeze({ ok: false, problem: bound.problem });
   const match = (decimalComma ? commaNumber : pointNumber).exec(text);
   if (match && (match[2] !== '' || (match[3] ?? '') !== '')) {
     const [, sign, whole, fraction = ''] = match;
@@ -39,7 +42,7 @@ export function readDecimalText(raw: string, decimalComma: boolean): DecimalText
     return Object.freeze({ ok: true, text: canonical, decimals: fraction.length });
   }
   if (!decimalComma && exponentNumber.test(text)) {
-    const value = new Decimal(text);
+    const value = new MeasurementDecimal(text);
     return Object.freeze({ ok: true, text: value.isZero() ? '0' : value.toFixed(), decimals: Math.max(0, value.decimalPlaces()) });
   }
   const otherMatch = (decimalComma ? pointNumber : commaNumber).exec(text);

@@ -1,6 +1,8 @@
 import type { Measure } from '@friable/contracts';
 import { findUnit } from '@friable/field';
-import Decimal from 'decimal.js';
+import type Decimal from 'decimal.js';
+import { MeasurementDecimal } from '../../common/input/measurement-decimal';
+import { numberBoundMessage, shownNumber } from '../../common/input/number-bounds';
 import { readDecimalText, type DecimalTextProblem } from './decimal-text';
 import { looksLikeFormula } from './neutralise-formula';
 import { convertDecimalText } from './unit-factor';
@@ -33,6 +35,7 @@ const leftCensoredPrefix = /^(?:<=|<|≤)/;
 const freezeError = (message: string): CellValue => Object.freeze({ kind: 'error', message });
 
 function notANumber(typed: string, problem: DecimalTextProblem): string {
+  if (problem === 'too-large' || problem === 'too-small' || problem === 'too-many-digits') return numberBoundMessage(`"${shownNumber(typed)}"`, problem);
   if (problem === 'comma-in-point-file') {
     return `"${typed}" is not a number here: this file uses a point as the decimal mark (write ${typed.replace(',', '.')}) and no thousands separators.`;
   }
@@ -75,7 +78,7 @@ function isShortDecimal(text: string): boolean {
  * a limit is then exact, and a million cells cost no decimal objects), else a Decimal.
  */
 function comparableValue(valueText: string): Comparable {
-  if (!isShortDecimal(valueText)) return new Decimal(valueText);
+  if (!isShortDecimal(valueText)) return new MeasurementDecimal(valueText);
   const number = Number(valueText);
   return {
     lt: (other) => number < Number(other),

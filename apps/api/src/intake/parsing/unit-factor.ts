@@ -1,5 +1,6 @@
 import { findUnit, findUnitByText } from '@friable/field';
-import Decimal from 'decimal.js';
+import type Decimal from 'decimal.js';
+import { MeasurementDecimal } from '../../common/input/measurement-decimal';
 
 export type UnitFactor =
   /** `factor`: the multiplier as decimal text, shown to the uploader ("60"); it and `headerUnitId` are null when nothing is converted. */
@@ -8,7 +9,7 @@ export type UnitFactor =
 
 /** The unit table's sizes are binary numbers; 15 significant digits recover the defined decimals (28.316846592000005 → 28.316846592). */
 const SIGNIFICANT_DIGITS = 15;
-const WideDecimal = Decimal.clone({ precision: 40 });
+const WideDecimal = MeasurementDecimal.clone({ precision: 40 });
 
 function unitSize(unitId: string): Decimal {
   const unit = findUnit(unitId);

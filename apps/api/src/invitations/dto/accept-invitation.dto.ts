@@ -10,7 +10,7 @@ export class AcceptInvitationDto implements InvitationAcceptInput {
   name?: string;
 
   @ApiPropertyOptional({
-    description: 'A new password (at least 10 characters) for a new account, or the existing account’s password. Not needed with the bearer token of the invited person.',
+    description: 'A new password (at least 12 characters, not a common one) for a new account, or the existing account’s password. Not needed with the bearer token of the invited person.',
   })
   @IsOptional()
   @IsString({ message: 'password must be text' })

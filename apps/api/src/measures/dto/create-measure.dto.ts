@@ -5,6 +5,9 @@ import { IsBoolean, IsIn, IsInt, IsNumber, IsOptional, IsString, Matches, Max, M
 
 export const MEASURE_UNIT_IDS = MEASURE_UNITS.map((unit) => unit.id);
 const finite = { allowNaN: false, allowInfinity: false };
+/** The measures table keeps limits as DECIMAL(18,6): at most 12 digits before the point. */
+const LIMIT = 999_999_999_999;
+const withinLimit = (field: string) => `${field} must be a number from -999,999,999,999 to 999,999,999,999`;
 
 export class CreateMeasureDto {
   @ApiProperty({ example: 'DRAIN', description: 'Unique in the trial: 1 to 12 letters, digits or dashes.' })
@@ -30,37 +33,50 @@ export class CreateMeasureDto {
   @ApiPropertyOptional({ nullable: true, description: 'Lowest score (kind score).' })
   @IsOptional()
   @IsNumber(finite, { message: 'scaleMin must be a number' })
+  @Min(-LIMIT, { message: withinLimit('scaleMin') })
+  @Max(LIMIT, { message: withinLimit('scaleMin') })
   scaleMin?: number | null;
 
   @ApiPropertyOptional({ nullable: true, description: 'Highest score (kind score).' })
   @IsOptional()
   @IsNumber(finite, { message: 'scaleMax must be a number' })
+  @Min(-LIMIT, { message: withinLimit('scaleMax') })
+  @Max(LIMIT, { message: withinLimit('scaleMax') })
   scaleMax?: number | null;
 
   @ApiPropertyOptional({ nullable: true, description: 'Cut-off in the unit (kind time-with-cutoff).' })
   @IsOptional()
   @IsNumber(finite, { message: 'cutoff must be a number above 0' })
   @Min(0.000001, { message: 'cutoff must be a number above 0' })
+  @Max(LIMIT, { message: 'cutoff must be at most 999,999,999,999' })
   cutoff?: number | null;
 
   @ApiPropertyOptional({ nullable: true, description: 'Below: a warning.' })
   @IsOptional()
   @IsNumber(finite, { message: 'plausibleMin must be a number' })
+  @Min(-LIMIT, { message: withinLimit('plausibleMin') })
+  @Max(LIMIT, { message: withinLimit('plausibleMin') })
   plausibleMin?: number | null;
 
   @ApiPropertyOptional({ nullable: true, description: 'Above: a warning.' })
   @IsOptional()
   @IsNumber(finite, { message: 'plausibleMax must be a number' })
+  @Min(-LIMIT, { message: withinLimit('plausibleMax') })
+  @Max(LIMIT, { message: withinLimit('plausibleMax') })
   plausibleMax?: number | null;
 
   @ApiPropertyOptional({ nullable: true, description: 'Below: an error.' })
   @IsOptional()
   @IsNumber(finite, { message: 'hardMin must be a number' })
+  @Min(-LIMIT, { message: withinLimit('hardMin') })
+  @Max(LIMIT, { message: withinLimit('hardMin') })
   hardMin?: number | null;
 
   @ApiPropertyOptional({ nullable: true, description: 'Above: an error.' })
   @IsOptional()
   @IsNumber(finite, { message: 'hardMax must be a number' })
+  @Min(-LIMIT, { message: withinLimit('hardMax') })
+  @Max(LIMIT, { message: withinLimit('hardMax') })
   hardMax?: number | null;
 
   @ApiPropertyOptional({ default: 1, minimum: 0, maximum: 6 })

@@ -22,11 +22,23 @@ export class PlotRow extends Model {
   @Column({ type: DataType.SMALLINT.UNSIGNED, allowNull: false })
   declare position: number;
 
+  /** Split designs: the whole plot within the block, from 1; null otherwise. */
+  @Column({ type: DataType.SMALLINT.UNSIGNED, allowNull: true, field: 'whole_plot' })
+  declare wholePlot: number | null;
+
+  /** Split designs: the sub plot within the whole plot, from 1; null otherwise. */
+  @Column({ type: DataType.SMALLINT.UNSIGNED, allowNull: true, field: 'sub_plot' })
+  declare subPlot: number | null;
+
+  /** Split-split plot: the sub-sub plot within the sub plot, from 1; null otherwise. */
+  @Column({ type: DataType.SMALLINT.UNSIGNED, allowNull: true, field: 'sub_sub_plot' })
+  declare subSubPlot: number | null;
+
   @ForeignKey(() => TreatmentRow)
   @Column({ type: DataType.INTEGER.UNSIGNED, allowNull: false, field: 'treatment_id' })
   declare treatmentId: number;
 
-  @Column({ type: DataType.STRING(20), allowNull: false })
+  @Column({ type: DataType.STRING(32), allowNull: false })
   declare label: string;
 
   @BelongsTo(() => SiteRow)

@@ -1,11 +1,27 @@
 import { registerDecorator, type ValidationArguments, type ValidationOptions } from 'class-validator';
+import { checkNumber, checkNumberText, numberBoundMessage, shownNumber } from '../../common/input/number-bounds';
 
 const decimalText = /^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/;
 const MAX_LABEL = 100;
 const MAX_REPORTED = 5;
 
+const isNumeric = (v: unknown) => (typeof v === 'number' && Number.isFinite(v)) || (typeof v === 'string' && decimalText.test(v.trim()));
+
+/** A number field of a row: within the shared bounds (checked before anything parses it), then numeric. */
+function decimalProblem(row: number, field: string, v: unknown): string | null {
+  const bound = typeof v === 'number' ? checkNumber(v) : typeof v === 'string' ? checkNumberText(v) : null;
+  if (bound && !bound.ok) {
+    const shown = typeof v === 'string' ? `"${shownNumber(v)}"` : shownNumber(String(v));
+    return numberBoundMessage(`observations[${row}].${field} ${shown}`, bound.problem).replace(/\.$/, '');
+  }
+  return isNumeric(v) ? null : `observations[${row}].${field} must be a finite number or a decimal string`;
+}
+
+/** Fields some analyses add to an observation, and what each must hold. */
+export type ExtraObservationFields = Readonly<Record<string, 'boolean' | 'label' | 'decimal' | 'required-boolean' | 'required-label' | 'required-decimal'>>;
+
 /** The problems of an observation list, each naming the row and field (at most a few, then a count). */
-export function observationProblems(value: unknown): string[] {
+export function observationProblems(value: unknown, extra: ExtraObservationFields = {}): string[] {
   if (!Array.isArray(value)) return ['observations must be a list'];
   if (value.length === 0) return ['observations must not be empty'];
   const problems: string[] = [];
@@ -23,7 +39,18 @@ export function observationProblems(value: unknown): string[] {
     }
     const o = item as Record<string, unknown>;
     for (const key of Object.keys(o)) {
-      if (!['treatment', 'factors', 'block', 'site', 'value'].includes(key)) problems.push(`observations[${row}].${key} is not a known field`);
+      if (!['treatment', 'factors', 'block', 'site', 'value'].includes(key) && !(key in extra)) problems.push(`observations[${row}].${key} is not a known field`);
+    }
+    for (const [key, kind] of Object.entries(extra)) {
+      const field = o[key];
+      if (field === undefined || field === null) {
+        if (kind.startsWith('required-')) problems.push(`observations[${row}].${key} is needed`);
+        continue;
+      }
+      if (kind.endsWith('boolean') && typeof field !== 'boolean') problems.push(`observations[${row}].${key} must be true or false`);
+      if (kind.endsWith('label')) label(row, key, field);
+      const fieldProblem = kind.endsWith('decimal') ? decimalProblem(row, key, field) : null;
+      if (fieldProblem) problems.push(fieldProblem);
     }
     label(row, 'treatment', o.treatment);
     label(row, 'block', o.block);
@@ -32,16 +59,15 @@ export function observationProblems(value: unknown): string[] {
       if (typeof o.factors !== 'object' || o.factors === null || Array.isArray(o.factors)) problems.push(`observations[${row}].factors must be an object of factor name to level`);
       else for (const [name, level] of Object.entries(o.factors)) label(row, `factors.${name}`, level);
     }
-    const v = o.value;
-    const numeric = (typeof v === 'number' && Number.isFinite(v)) || (typeof v === 'string' && decimalText.test(v.trim()));
-    if (!numeric) problems.push(`observations[${row}].value must be a finite number or a decimal string`);
+    const valueProblem = decimalProblem(row, 'value', o.value);
+    if (valueProblem) problems.push(valueProblem);
   });
   if (problems.length > MAX_REPORTED) return [...problems.slice(0, MAX_REPORTED), `and more problems after observations[${MAX_REPORTED}]`];
   return problems;
 }
 
 /** Checks a (possibly very long) list of observations in one pass, faster than nested DTO classes. */
-export function IsObservationList(options?: ValidationOptions) {
+export function IsObservationList(options?: ValidationOptions, extra: ExtraObservationFields = {}) {
   return (target: object, propertyName: string) =>
     registerDecorator({
       name: 'isObservationList',
@@ -49,8 +75,8 @@ export function IsObservationList(options?: ValidationOptions) {
       propertyName,
       options,
       validator: {
-        validate: (value: unknown) => observationProblems(value).length === 0,
-        defaultMessage: (args: ValidationArguments) => observationProblems(args.value).join('; '),
+        validate: (value: unknown) => observationProblems(value, extra).length === 0,
+        defaultMessage: (args: ValidationArguments) => observationProblems(args.value, extra).join('; '),
       },
     });
 }

@@ -13,7 +13,7 @@ export class TreatmentRow extends Model {
   @Column({ type: DataType.INTEGER.UNSIGNED, allowNull: false, field: 'trial_id' })
   declare trialId: number;
 
-  @Column({ type: DataType.STRING(12), allowNull: false })
+  @Column({ type: DataType.STRING(24), allowNull: false })
   declare code: string;
 
   @Column({ type: DataType.STRING(120), allowNull: false })
@@ -59,6 +59,14 @@ export class TreatmentRow extends Model {
   @ForeignKey(() => FactorLevel)
   @Column({ type: DataType.INTEGER.UNSIGNED, allowNull: true, field: 'factor_level_b_id' })
   declare factorLevelBId: number | null;
+
+  @ForeignKey(() => FactorLevel)
+  @Column({ type: DataType.INTEGER.UNSIGNED, allowNull: true, field: 'factor_level_c_id' })
+  declare factorLevelCId: number | null;
+
+  @ForeignKey(() => FactorLevel)
+  @Column({ type: DataType.INTEGER.UNSIGNED, allowNull: true, field: 'factor_level_d_id' })
+  declare factorLevelDId: number | null;
 
   @Column({ type: DataType.SMALLINT.UNSIGNED, allowNull: false, defaultValue: 0 })
   declare position: number;

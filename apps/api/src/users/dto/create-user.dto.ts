@@ -13,10 +13,9 @@ export class CreateUserDto {
   @MaxLength(120)
   name: string;
 
-  @ApiProperty({ minLength: 10, example: 'a long passphrase' })
-  @IsString()
-  @MinLength(10, { message: 'password must be at least 10 characters long' })
-  @MaxLength(200)
+  @ApiProperty({ minLength: 12, maxLength: 64, example: 'a long passphrase', description: 'At least 12 characters; not a common password.' })
+  @IsString({ message: 'password must be text' })
+  @MaxLength(200, { message: 'password must be at most 64 characters long' })
   password: string;
 
   @ApiPropertyOptional({ default: false })

@@ -20,6 +20,22 @@ export class User extends Model {
   @Column({ type: DataType.BOOLEAN, allowNull: false, defaultValue: true, field: 'is_active' })
   declare isActive: boolean;
 
+  /** BCP 47 tag for numbers and dates (e.g. `de-DE`); null uses the browser's own. */
+  @Column({ type: DataType.STRING(20), allowNull: true })
+  declare locale: string | null;
+
+  @Column({ type: DataType.BOOLEAN, allowNull: false, defaultValue: true, field: 'email_reminders' })
+  declare emailReminders: boolean;
+
+  @Column({ type: DataType.BOOLEAN, allowNull: false, defaultValue: true, field: 'email_receipts' })
+  declare emailReceipts: boolean;
+
+  @Column({ type: DataType.DATE(3), allowNull: true, field: 'last_sign_in_at' })
+  declare lastSignInAt: Date | null;
+
+  @Column({ type: DataType.DATE(3), allowNull: true, field: 'password_changed_at' })
+  declare passwordChangedAt: Date | null;
+
   declare createdAt: Date;
   declare updatedAt: Date;
 }

@@ -8,8 +8,9 @@ import { useOutboxAvailable } from '../../features/outbox/api/get-outbox';
 export function AppLayout() {
   const { user, signOut } = useAuth();
   const navigate = useNavigate();
-  // The API answers the Outbox only outside production; the link appears when it does.
-  const outbox = useOutboxAvailable(Boolean(user));
+  // The API answers the Outbox only outside production and only to administrators (it holds every
+  // invitation link); the link appears when it does.
+  const outbox = useOutboxAvailable(Boolean(user?.isAdmin));
   return (
     <div className="fr-app">
       <Navbar className="fr-topbar">

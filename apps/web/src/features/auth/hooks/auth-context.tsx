@@ -2,6 +2,7 @@ import type { LoginResponse, PublicUser } from '@friable/contracts';
 import { useQueryClient } from '@tanstack/react-query';
 import { createContext, useCallback, useContext, useEffect, useMemo, useState, type ReactNode } from 'react';
 import { onUnauthorized, tokenStore } from '../../../lib/api-client';
+import { setAccountLocale } from '../../../lib/person-locale';
 import { useMe } from '../api/get-me';
 
 interface AuthState {
@@ -42,6 +43,12 @@ export function AuthProvider({ children }: { children: ReactNode }) {
     },
     [queryClient],
   );
+
+  // Numbers are read and written the person's way: their account's locale once it says one, else the browser's.
+  const user = me.data as (PublicUser & { locale?: string | null }) | undefined;
+  useEffect(() => {
+    setAccountLocale(user?.locale);
+  }, [user?.locale]);
 
   useEffect(() => {
     onUnauthorized(() => signOut('Your session has ended. Please sign in again.'));

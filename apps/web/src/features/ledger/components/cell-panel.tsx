@@ -2,9 +2,9 @@ import { Button, Callout, FormGroup, InputGroup } from '@blueprintjs/core';
 import type { Measure, Observation, Plot } from '@friable/contracts';
 import { useState, type FormEvent } from 'react';
 import type { CellRefusal } from '../hooks/use-cell-save';
-import { cellLook, cellText } from './ledger-cells';
-import { formatMoment } from './format-moment';
-import { measureHeading } from './measure-heading';
+import { cellLook, cellText } from '../../../lib/observation-text';
+import { formatMoment } from '../../../lib/format-moment';
+import { measureHeading } from '../../../lib/measure-heading';
 
 const lookWords = { empty: 'no value yet', measured: 'measured', censored: 'censored: not reached by the cut-off', missing: 'missing' } as const;
 

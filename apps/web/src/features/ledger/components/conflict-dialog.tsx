@@ -1,7 +1,7 @@
 import { Button, Dialog, DialogBody, DialogFooter } from '@blueprintjs/core';
 import type { CellConflict } from '../hooks/use-cell-save';
-import { cellText } from './ledger-cells';
-import { formatMoment } from './format-moment';
+import { cellText } from '../../../lib/observation-text';
+import { formatMoment } from '../../../lib/format-moment';
 
 /** Someone else changed the value meanwhile: both values side by side, and the person chooses. */
 export function ConflictDialog({ conflict, onKeepMine, onTakeCurrent }: { conflict: CellConflict | null; onKeepMine: () => void; onTakeCurrent: () => void }) {

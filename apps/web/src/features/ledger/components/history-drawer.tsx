@@ -1,7 +1,7 @@
 import { Drawer, HTMLTable } from '@blueprintjs/core';
 import { EmptyState, ErrorState, LoadingState } from '../../../components/states';
 import { useObservationHistory } from '../api/get-observation-history';
-import { formatMoment } from './format-moment';
+import { formatMoment } from '../../../lib/format-moment';
 
 /** Every change of one value, newest first: who, when, the old and the new value, by upload or by edit. */
 export function HistoryDrawer({ trialId, observationId, title, onClose }: { trialId: number; observationId: number | null; title: string; onClose: () => void }) {

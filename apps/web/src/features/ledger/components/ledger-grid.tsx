@@ -3,8 +3,9 @@ import { Button } from '@blueprintjs/core';
 import { Cell, Column, EditableCell, Table2, type FocusedCellCoordinates } from '@blueprintjs/table';
 import type { Measure, Observation, Plot } from '@friable/contracts';
 import type { CellRefusal } from '../hooks/use-cell-save';
-import { cellKey, cellLook, cellText } from './ledger-cells';
-import { measureHeading } from './measure-heading';
+import { cellLook, cellText } from '../../../lib/observation-text';
+import { cellKey } from './ledger-cells';
+import { measureHeading } from '../../../lib/measure-heading';
 
 const fixedColumns = 3;
 

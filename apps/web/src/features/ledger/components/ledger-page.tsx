@@ -5,6 +5,9 @@ import { useSearchParams } from 'react-router-dom';
 import { ConfirmButton } from '../../../components/confirm-button';
 import { EmptyState, ErrorState, LoadingState } from '../../../components/states';
 import { formatNumber } from '../../../lib/format';
+import { personLocale } from '../../../lib/person-locale';
+import { readValueText } from '../../../lib/value-reading';
+import { writeNumber } from '../../../lib/number-reading';
 import { useObservations } from '../api/get-observations';
 import { useSitePlots } from '../api/get-site-plots';
 import { useSetTrialStatus } from '../api/set-trial-status';
@@ -12,11 +15,11 @@ import { useCellSave } from '../hooks/use-cell-save';
 import { CellPanel } from './cell-panel';
 import { ConflictDialog } from './conflict-dialog';
 import { HistoryDrawer } from './history-drawer';
-import { ledgerAccess } from './ledger-access';
+import { valueAccess } from '../../../lib/value-access';
 import { cellKey, ledgerModel } from './ledger-cells';
 import { LedgerGrid } from './ledger-grid';
 import { LedgerLegend } from './ledger-legend';
-import { measureHeading } from './measure-heading';
+import { measureHeading } from '../../../lib/measure-heading';
 import { PhotoDialog } from './photo-dialog';
 
 /** Ledger: per site and round, every plot's values in an editable grid, with history, photos and the trial lock. */
@@ -28,7 +31,7 @@ export function LedgerPage({ trial }: { trial: TrialDetail }) {
   const round = rounds.find((r) => r.id === Number(params.get('round'))) ?? rounds[0];
   const plots = useSitePlots(trial.id, site?.randomizedAt ? site.id : undefined);
   const observations = useObservations(trial.id, site?.randomizedAt ? site.id : undefined, round?.id);
-  const access = ledgerAccess(trial, site?.id);
+  const access = valueAccess(trial, site?.id);
   const cells = useCellSave(trial.id, site?.id ?? 0, round?.id ?? 0);
   const lock = useSetTrialStatus(trial.id);
   const [focused, setFocused] = useState<{ plot: Plot; measure: Measure } | null>(null);
@@ -48,10 +51,22 @@ export function LedgerPage({ trial }: { trial: TrialDetail }) {
 
   function edit(plot: Plot, measure: Measure, text: string, extra: { missingReason?: string | null; notes?: string | null } = {}) {
     const seen = model.values.get(cellKey(plot.id, measure.id));
-    void cells.saveCell(
-      { plotId: plot.id, plotLabel: plot.label, measureId: measure.id, measureName: measureHeading(measure), seen },
-      { value: text, missingReason: extra.missingReason ?? seen?.missingReason ?? null, notes: extra.notes ?? seen?.notes ?? null },
-    );
+    const target = { plotId: plot.id, plotLabel: plot.label, measureId: measure.id, measureName: measureHeading(measure), seen };
+    // A decimal comma reaches the server as a point; a number that could be read two ways is asked about, not sent.
+    const reading = readValueText(text, personLocale());
+    if (reading.kind === 'ambiguous') {
+      const sign = reading.censored ? '>' : '';
+      const locale = personLocale();
+      const thousands = `${sign}${reading.thousands.decimalText}`;
+      const decimal = `${sign}${writeNumber(reading.decimal.decimalText, locale)}`;
+      cells.refuse(target, text, `“${text.trim()}” could mean ${thousands} or ${decimal}: type the one you mean.`);
+      return;
+    }
+    void cells.saveCell(target, {
+      value: reading.kind === 'value' ? reading.text : text,
+      missingReason: extra.missingReason ?? seen?.missingReason ?? null,
+      notes: extra.notes ?? seen?.notes ?? null,
+    });
   }
 
   const refusedCells = [...cells.refusals.entries()];

@@ -99,6 +99,8 @@ export function useCellSave(trialId: number, siteId: number, roundId: number) {
     /** The other person's value stays (it is already shown). */
     takeCurrent: () => setConflict(null),
     forget: (key: string) => setRefusal(key, null),
+    /** A value refused before it is sent (a number that could be read two ways), in words. */
+    refuse: (target: CellTarget, text: string, message: string) => setRefusal(cellKey(target.plotId, target.measureId), { text, message, warning: false }),
     /** Sends a value refused only as unusual again, this time accepted on purpose. */
     keepUnusual: (target: CellTarget, refusal: CellRefusal) => send(target, { ...(refusal.edit ?? { value: refusal.text }), acceptWarnings: true }, target.seen),
   };

@@ -4,9 +4,9 @@ import { afterEach, describe, expect, it, vi } from 'vitest';
 import { mockApi, renderWithApp } from '../../../test/render';
 import { PeoplePage } from './people-page';
 
-const admin = { id: 1, email: 'admin@example.org', name: 'Avery Quill', isAdmin: true, isActive: true, createdAt: '2026-12-01T00:00:00.000Z' };
-const grower = { id: 7, email: 'grower@example.org', name: 'Gale Moss', isAdmin: false, isActive: true, createdAt: '2026-11-20T00:00:00.000Z' };
-const gone = { id: 8, email: 'gone@example.org', name: 'Former Member', isAdmin: false, isActive: false, createdAt: '2026-10-02T00:00:00.000Z' };
+const admin = { id: 1, email: 'admin@example.org', name: 'Avery Quill', isAdmin: true, isActive: true, createdAt: '2026-12-01T00:00:00.000Z', locale: null, emailReminders: true, emailReceipts: true, lastSignInAt: null };
+const grower = { id: 7, email: 'grower@example.org', name: 'Gale Moss', isAdmin: false, isActive: true, createdAt: '2026-11-20T00:00:00.000Z', locale: null, emailReminders: true, emailReceipts: true, lastSignInAt: null };
+const gone = { id: 8, email: 'gone@example.org', name: 'Former Member', isAdmin: false, isActive: false, createdAt: '2026-10-02T00:00:00.000Z', locale: null, emailReminders: true, emailReceipts: true, lastSignInAt: null };
 
 describe('PeoplePage', () => {
   afterEach(() => vi.unstubAllGlobals());

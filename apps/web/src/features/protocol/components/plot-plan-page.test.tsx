@@ -31,6 +31,8 @@ describe('PlotPlanPage', () => {
     // 281.2 g = 9.92 oz = 0.620 lb (NIST SP 811 pound 453.59237 g).
     expect(within(g40).getByText('281 g · 9.92 oz')).toBeInTheDocument();
     expect(within(g40).getByText('0.281 kg · 0.62 lb')).toBeInTheDocument();
+    // 4 plots × 281.2 g = 1,124.8 g net; with the 10 % allowance 1,237 g.
+    expect(within(g40).getByText('1.12 kg')).toBeInTheDocument();
     expect(within(g40).getByText('1.24 kg')).toBeInTheDocument();
     const c2 = within(table).getByText('C2').closest('tr')!;
     expect(within(c2).getByText('73.2 L · 19.3 gal')).toBeInTheDocument();
@@ -47,6 +49,21 @@ describe('PlotPlanPage', () => {
     expect(screen.getByText(/written “>600”/)).toBeInTheDocument();
     expect(screen.getByText('Plot labels')).toBeInTheDocument();
     expect(screen.getAllByText('CLAY-T · Hollow Lane · block 1')).toHaveLength(3);
+  });
+
+  it('shows the allowance on site totals as a line the person can change', async () => {
+    mockApi(base);
+    renderWithApp(<PlotPlanPage trial={makeTrial()} />);
+    const table = await screen.findByRole('table', { name: 'Amounts per plot at Hollow Lane' });
+    expect(within(table).getByRole('columnheader', { name: 'With 10 % allowance' })).toBeInTheDocument();
+    const box = screen.getByLabelText('Allowance for spills and weighing');
+    await userEvent.clear(box);
+    await userEvent.type(box, '0');
+    const g40 = within(table).getByText('G40').closest('tr')!;
+    // No allowance: both columns say 1,124.8 g → "1.12 kg"; 4 × 73.2 L = 292.8 L → "293 L".
+    expect(within(g40).getAllByText('1.12 kg')).toHaveLength(2);
+    expect(within(within(table).getByText('C2').closest('tr')!).getAllByText('293 L')).toHaveLength(2);
+    expect(within(table).getByRole('columnheader', { name: 'With 0 % allowance' })).toBeInTheDocument();
   });
 
   it('says a site is not randomized yet instead of showing an empty map', () => {

@@ -1,14 +1,32 @@
 import { HTMLTable } from '@blueprintjs/core';
 import type { PlotAmount, Site, TrialDetail } from '@friable/contracts';
-import { formatAmount, formatNumber, formatRate } from '../../../lib/format';
+import { useState } from 'react';
+import { NumberText } from '../../../components/number-text';
+import { formatAmount, formatNumber, formatRate, parseNumberInput } from '../../../lib/format';
+
+/** "1.24 kg · 14.4 L" for an amount in grams and/or litres. */
+function siteAmount(grams: number | null, litres: number | null): string {
+  return (
+    [grams !== null ? formatAmount(grams >= 1000 ? grams / 1000 : grams, grams >= 1000 ? 'kg' : 'g') : null, litres !== null ? formatAmount(litres, 'L') : null]
+      .filter(Boolean)
+      .join(' · ') || '—'
+  );
+}
 
 function both(metric: number | null | undefined, metricUnit: string, us: number | null | undefined, usUnit: string): string {
   if (metric === null || metric === undefined) return '—';
   return `${formatAmount(metric, metricUnit)} · ${formatAmount(us, usUnit)}`;
 }
 
-/** How much of each treatment's material goes on one plot at this site, and on all its plots. */
+/**
+ * How much of each treatment's material goes on one plot at this site, and on all its plots: the
+ * net amount, then with an allowance for spills and weighing that the person sets (10 % to start),
+ * so nothing is added silently.
+ */
 export function SiteAmounts({ trial, site, amounts }: { trial: TrialDetail; site: Site; amounts: PlotAmount[] }) {
+  const [allowanceText, setAllowanceText] = useState('10');
+  const allowanceValue = parseNumberInput(allowanceText);
+  const allowance = allowanceValue !== null && Number.isFinite(allowanceValue) && allowanceValue >= 0 ? allowanceValue : 0;
   const rows = trial.treatments.map((treatment) => ({ treatment, amount: amounts.find((a) => a.siteId === site.id && a.treatmentId === treatment.id) }));
   const litres = rows.some((r) => r.amount?.perPlot?.litres !== null && r.amount?.perPlot?.litres !== undefined);
   return (
@@ -22,13 +40,17 @@ export function SiteAmounts({ trial, site, amounts }: { trial: TrialDetail; site
             <th>Per plot (kg · lb)</th>
             {litres && <th>Per plot (L · gal)</th>}
             <th>Plots</th>
-            <th>All plots at this site</th>
+            <th>All plots (net)</th>
+            <th>With {formatNumber(allowance, 1)} % allowance</th>
           </tr>
         </thead>
         <tbody>
           {rows.map(({ treatment, amount }) => {
             const dose = amount?.perPlot ?? null;
-            const total = amount?.siteTotal ?? null;
+            const plots = amount?.plots ?? 0;
+            const netGrams = dose?.grams !== null && dose?.grams !== undefined && plots > 0 ? dose.grams * plots : null;
+            const netLitres = dose?.litres !== null && dose?.litres !== undefined && plots > 0 ? dose.litres * plots : null;
+            const withAllowance = (net: number | null) => (net === null ? null : net * (1 + allowance / 100));
             return (
               <tr key={treatment.id}>
                 <td data-label="Treatment">
@@ -39,18 +61,18 @@ export function SiteAmounts({ trial, site, amounts }: { trial: TrialDetail; site
                 <td data-label="Per plot (kg · lb)">{dose ? both(dose.kilograms, 'kg', dose.pounds, 'lb') : '—'}</td>
                 {litres && <td data-label="Per plot (L · gal)">{dose ? both(dose.litres, 'L', dose.gallons, 'gal') : '—'}</td>}
                 <td data-label="Plots">{amount ? formatNumber(amount.plots, 0) : '—'}</td>
-                <td data-label="All plots at this site">
-                  {total
-                    ? [total.grams !== null ? formatAmount(total.grams >= 1000 ? total.grams / 1000 : total.grams, total.grams >= 1000 ? 'kg' : 'g') : null, total.litres !== null ? formatAmount(total.litres, 'L') : null]
-                        .filter(Boolean)
-                        .join(' · ') || '—'
-                    : '—'}
-                </td>
+                <td data-label="All plots (net)">{siteAmount(netGrams, netLitres)}</td>
+                <td data-label="With allowance">{siteAmount(withAllowance(netGrams), withAllowance(netLitres))}</td>
               </tr>
             );
           })}
         </tbody>
       </HTMLTable>
+      <div className="fr-allowance-line">
+        <label htmlFor={`fr-allowance-${site.id}`}>Allowance for spills and weighing</label>
+        <NumberText id={`fr-allowance-${site.id}`} value={allowanceText} onChange={setAllowanceText} unit="%" />
+        <span className="fr-muted fr-small">Added to the site totals only; the amount per plot stays as the rate gives it.</span>
+      </div>
       {rows.some((r) => r.amount?.perPlot?.warnings.length) && (
         <ul className="fr-warning-list">
           {rows.flatMap(({ treatment, amount }) => (amount?.perPlot?.warnings ?? []).map((w) => <li key={`${treatment.id}-${w}`}>{`${treatment.code}: ${w}`}</li>))}

@@ -44,6 +44,7 @@ const site = (id: number, name: string, labelPrefix: string, extra: Partial<Site
   plotCount: 12,
   hasObservations: false,
   warnings: ['Error degrees of freedom are 6, below the 12 usually advised; add blocks or treatments.'],
+  strata: [{ unit: 'plot', name: 'Error', errorDf: 6, arithmetic: '(3 treatments − 1) × (4 blocks − 1)', terms: ['treatment'], criticalF: 5.143 }],
   ...extra,
 });
 
@@ -90,7 +91,7 @@ export function makeTrial(extra: Partial<TrialDetail> = {}): TrialDetail {
     ],
     rounds: [{ id: 21, label: 'Week 2', dayOffset: 14, dueDate: '2027-03-15', measureIds: [11] }],
     sites: [site(31, 'Hollow Lane', 'HL'), site(32, 'Millbrook', 'MB', { randomizedAt: null, randomizationSeed: null, plotCount: 0 })],
-    activation: { ready: false, problems: ['Site Millbrook is not randomized yet.'] },
+    activation: { ready: false, problems: ['Site Millbrook is not randomized yet.'], warnings: [] },
     ...extra,
   };
 }
@@ -133,6 +134,10 @@ export function plotsFor(siteId: number, prefix: string): Plot[] {
       position: p + 1,
       treatmentId,
       treatmentCode: codes[treatmentId],
+      wholePlot: null,
+      subPlot: null,
+      subSubPlot: null,
+      wholePlotLabel: null,
     })),
   );
 }

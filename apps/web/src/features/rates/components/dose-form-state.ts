@@ -1,8 +1,16 @@
 import type { DoseRequest, RateBasis, RateUnitId } from '@friable/contracts';
-import { computeDose, type DoseInput, type PlotGeometry } from '@friable/field';
+import { computeDose, EXACT_FACTORS, type DoseInput, type PlotGeometry } from '@friable/field';
 import { parseNumberInput } from '../../../lib/format';
 
 export type GeometryMode = 'area' | 'rectangle' | 'round';
+/** Plot sides in metres or feet; container diameters in centimetres or inches; areas in m² or ft². */
+export type LengthUnit = 'm' | 'ft';
+export type DiameterUnit = 'cm' | 'in';
+export type AreaUnit = 'm2' | 'ft2';
+
+const metresPer: Record<LengthUnit, number> = { m: 1, ft: EXACT_FACTORS.metresPerFoot };
+const centimetresPer: Record<DiameterUnit, number> = { cm: 1, in: 2.54 };
+const squareMetresPer: Record<AreaUnit, number> = { m2: 1, ft2: EXACT_FACTORS.squareMetresPerSquareFoot };
 
 /** What the Rate calculator's boxes hold, as typed. */
 export interface DoseFormState {
@@ -11,10 +19,13 @@ export interface DoseFormState {
   basis: RateBasis;
   depthCm: string;
   geometry: GeometryMode;
-  areaM2: string;
-  lengthM: string;
-  widthM: string;
-  diameterCm: string;
+  area: string;
+  areaUnit: AreaUnit;
+  length: string;
+  width: string;
+  lengthUnit: LengthUnit;
+  diameter: string;
+  diameterUnit: DiameterUnit;
   soilVolumeL: string;
   purityPercent: string;
   moisturePercent: string;
@@ -29,10 +40,13 @@ export const initialDoseForm: DoseFormState = {
   basis: 'area',
   depthCm: '15',
   geometry: 'rectangle',
-  areaM2: '',
-  lengthM: '1.2',
-  widthM: '1.2',
-  diameterCm: '30',
+  area: '',
+  areaUnit: 'm2',
+  length: '1.2',
+  width: '1.2',
+  lengthUnit: 'm',
+  diameter: '30',
+  diameterUnit: 'cm',
   soilVolumeL: '',
   purityPercent: '',
   moisturePercent: '',
@@ -49,22 +63,23 @@ const positive = (value: number | null): value is number => value !== null && Nu
  */
 export function doseRequestFrom(form: DoseFormState): { request: DoseRequest | null; missing: string | null } {
   const rate = parseNumberInput(form.rate);
-  if (rate === null || !Number.isFinite(rate)) return { request: null, missing: 'Type a rate.' };
+  if (rate === null) return { request: null, missing: 'Type a rate.' };
+  if (!Number.isFinite(rate)) return { request: null, missing: 'Check the rate box: see the note under it.' };
   const request: DoseRequest = { rate, unit: form.unit, basis: form.basis, materialKind: form.materialKind };
   if (form.geometry === 'area') {
-    const area = parseNumberInput(form.areaM2);
+    const area = parseNumberInput(form.area);
     if (!positive(area)) return { request: null, missing: 'Type the plot’s surface area.' };
-    request.areaM2 = area;
+    request.areaM2 = area * squareMetresPer[form.areaUnit];
   } else if (form.geometry === 'rectangle') {
-    const length = parseNumberInput(form.lengthM);
-    const width = parseNumberInput(form.widthM);
+    const length = parseNumberInput(form.length);
+    const width = parseNumberInput(form.width);
     if (!positive(length) || !positive(width)) return { request: null, missing: 'Type the plot’s length and width.' };
-    request.lengthM = length;
-    request.widthM = width;
+    request.lengthM = length * metresPer[form.lengthUnit];
+    request.widthM = width * metresPer[form.lengthUnit];
   } else {
-    const diameter = parseNumberInput(form.diameterCm);
+    const diameter = parseNumberInput(form.diameter);
     if (!positive(diameter)) return { request: null, missing: 'Type the container’s inside diameter.' };
-    request.diameterCm = diameter;
+    request.diameterCm = diameter * centimetresPer[form.diameterUnit];
   }
   if (form.basis === 'concentration') {
     const depth = parseNumberInput(form.depthCm);
@@ -78,9 +93,9 @@ export function doseRequestFrom(form: DoseFormState): { request: DoseRequest | n
   const moisture = parseNumberInput(form.moisturePercent);
   if (moisture !== null) request.moistureFraction = moisture / 100;
   const plots = parseNumberInput(form.plots);
-  if (plots !== null) request.plots = plots;
+  if (plots !== null && Number.isFinite(plots)) request.plots = plots;
   const margin = parseNumberInput(form.marginPercent);
-  if (margin !== null) request.marginPercent = margin;
+  if (margin !== null && Number.isFinite(margin)) request.marginPercent = margin;
   return { request, missing: null };
 }
 

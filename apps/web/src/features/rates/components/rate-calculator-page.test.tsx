@@ -25,14 +25,78 @@ describe('RateCalculatorPage', () => {
     renderWithApp(<RateCalculatorPage />);
     await userEvent.click(screen.getByLabelText('Round (inside diameter)'));
     await setBox('Inside diameter', '30');
-    await setBox('Margin', '');
+    await setBox('Allowance', '');
     // DOMAIN.md worked example: 40 lb/1000 ft² = 195.3 g/m² → 13.8 g for a 30 cm pot; 13.8 g = 0.487 oz.
     expect(result().getByText('13.8 g')).toBeInTheDocument();
     expect(result().getByText('0.014 kg')).toBeInTheDocument();
     expect(result().getByText('0.487 oz')).toBeInTheDocument();
     expect(result().getByText('0.03 lb')).toBeInTheDocument();
-    // 4 plots × 13.80 g = 55.2 g = 0.122 lb.
-    expect(result().getByText('55.2 g (0.122 lb)')).toBeInTheDocument();
+    // 4 plots × 13.80 g = 55.2 g = 0.122 lb; no allowance, so the sum is the same.
+    const totals = within(result().getByRole('table', { name: 'Amount for all plots' }));
+    expect(totals.getByRole('row', { name: /For all 4 plots/ })).toHaveTextContent('55.2 g (0.122 lb)');
+    expect(totals.getByRole('row', { name: /To weigh out in all/ })).toHaveTextContent('55.2 g (0.122 lb)');
+  });
+
+  it('reads 0,5 and 0.5 as the same rate', async () => {
+    mockApi({ 'GET /api/auth/me': { status: 200, body: person } });
+    renderWithApp(<RateCalculatorPage />);
+    await userEvent.selectOptions(screen.getByLabelText('Unit'), 'kg/m2');
+    // 0.5 kg/m² × 1.44 m² = 720 g (arithmetic).
+    await setBox('Rate', '0,5');
+    expect(result().getByText('720 g')).toBeInTheDocument();
+    await setBox('Rate', '0.5');
+    expect(result().getByText('720 g')).toBeInTheDocument();
+    // Never ten times the amount: 5 kg/m² would be 7,200 g.
+    expect(result().queryByText('7.2 kg')).not.toBeInTheDocument();
+  });
+
+  it('asks whether 1,000 is a thousand or one, and shows no amount until answered', async () => {
+    mockApi({ 'GET /api/auth/me': { status: 200, body: person } });
+    renderWithApp(<RateCalculatorPage />);
+    await userEvent.selectOptions(screen.getByLabelText('Unit'), 'g/m2');
+    await setBox('Rate', '1,000');
+    expect(result().getByText('Check the rate box: see the note under it.')).toBeInTheDocument();
+    const question = screen.getByRole('group', { name: 'What does 1,000 mean?' });
+    await userEvent.click(within(question).getByRole('button', { name: '1,000 (thousands)' }));
+    expect(screen.getByLabelText('Rate')).toHaveValue('1000');
+    // 1,000 g/m² × 1.44 m² = 1,440 g.
+    expect(result().getByText('1,440 g')).toBeInTheDocument();
+    await setBox('Rate', '1,000');
+    await userEvent.click(within(screen.getByRole('group', { name: 'What does 1,000 mean?' })).getByRole('button', { name: '1.000 (decimals)' }));
+    expect(screen.getByLabelText('Rate')).toHaveValue('1.000');
+    expect(result().getByText('1.44 g')).toBeInTheDocument();
+  });
+
+  it('takes plot sides in feet and container diameters in inches', async () => {
+    mockApi({ 'GET /api/auth/me': { status: 200, body: person } });
+    renderWithApp(<RateCalculatorPage />);
+    await setBox('Length', '4');
+    await setBox('Width', '4');
+    await userEvent.selectOptions(screen.getByLabelText('Length unit'), 'ft');
+    // DOMAIN.md worked example: a 16 ft² plot at 40 lb/1000 ft² = 0.64 lb = 290 g.
+    expect(result().getByText('290 g')).toBeInTheDocument();
+    expect(result().getByText('0.64 lb')).toBeInTheDocument();
+    await userEvent.click(screen.getByLabelText('Round (inside diameter)'));
+    await setBox('Inside diameter', '11,811');
+    await userEvent.click(within(screen.getByRole('group', { name: 'What does 11,811 mean?' })).getByRole('button', { name: '11.811 (decimals)' }));
+    await userEvent.selectOptions(screen.getByLabelText('Diameter unit'), 'in');
+    // 11.811 in = 30.0 cm (× 2.54), so the DOMAIN.md pot example again: 13.8 g.
+    expect(result().getByText('13.8 g')).toBeInTheDocument();
+  });
+
+  it('shows the allowance as its own line, which the person can change', async () => {
+    mockApi({ 'GET /api/auth/me': { status: 200, body: person } });
+    renderWithApp(<RateCalculatorPage />);
+    await userEvent.click(screen.getByLabelText('Round (inside diameter)'));
+    await setBox('Inside diameter', '30');
+    const totals = () => within(result().getByRole('table', { name: 'Amount for all plots' }));
+    // 4 × 13.80 g = 55.2 g; 10 % of it = 5.52 g; 60.7 g in all (0.134 lb).
+    expect(totals().getByRole('row', { name: /Allowance/ })).toHaveTextContent('+ 5.52 g');
+    expect(totals().getByRole('row', { name: /To weigh out in all/ })).toHaveTextContent('60.7 g (0.134 lb)');
+    await setBox('Allowance', '25');
+    // 25 % of 55.2 g = 13.8 g; 69.0 g in all.
+    expect(totals().getByRole('row', { name: /Allowance/ })).toHaveTextContent('+ 13.8 g');
+    expect(totals().getByRole('row', { name: /To weigh out in all/ })).toHaveTextContent('69 g');
   });
 
   it('gives 646 g for 2 short tons per acre on a 1.2 m × 1.2 m plot, and the total with a margin', async () => {

@@ -7,7 +7,40 @@ import { SafetyCautions } from '../../../components/safety-cautions';
 import { formatAmount, formatArea, formatNumber, isVolumeRateUnit, parseNumberInput, rateUnitLabels } from '../../../lib/format';
 import { useServerDose } from '../api/compute-dose';
 import { useDebouncedValue } from '../hooks/use-debounced-value';
-import { doseRequestFrom, initialDoseForm, localDose, type DoseFormState, type GeometryMode } from './dose-form-state';
+import { doseRequestFrom, initialDoseForm, localDose, type AreaUnit, type DiameterUnit, type DoseFormState, type GeometryMode, type LengthUnit } from './dose-form-state';
+
+const lengthUnits = [
+  { value: 'm', label: 'm' },
+  { value: 'ft', label: 'ft' },
+];
+const diameterUnits = [
+  { value: 'cm', label: 'cm' },
+  { value: 'in', label: 'in' },
+];
+const areaUnits = [
+  { value: 'm2', label: 'm²' },
+  { value: 'ft2', label: 'ft²' },
+];
+
+type Amounts = { grams: number | null; kilograms: number | null; pounds: number | null; litres: number | null; gallons: number | null };
+
+const scaled = (amounts: Amounts, factor: number): Amounts => ({
+  grams: amounts.grams === null ? null : amounts.grams * factor,
+  kilograms: amounts.kilograms === null ? null : amounts.kilograms * factor,
+  pounds: amounts.pounds === null ? null : amounts.pounds * factor,
+  litres: amounts.litres === null ? null : amounts.litres * factor,
+  gallons: amounts.gallons === null ? null : amounts.gallons * factor,
+});
+
+/** "55.2 g (0.122 lb)", "2.84 kg (6.26 lb)", "14.4 L (3.8 gal)". */
+function amountLine(amounts: Amounts): string {
+  return [
+    amounts.grams !== null ? `${amounts.grams < 1000 ? formatAmount(amounts.grams, 'g') : formatAmount(amounts.kilograms, 'kg')} (${formatAmount(amounts.pounds, 'lb')})` : null,
+    amounts.litres !== null ? `${formatAmount(amounts.litres, 'L')} (${formatAmount(amounts.gallons, 'gal')})` : null,
+  ]
+    .filter(Boolean)
+    .join(' · ');
+}
 
 /** Rate calculator: a rate as printed on a bag or in a protocol becomes the amount to weigh out for each plot. */
 export function RateCalculatorPage() {
@@ -20,11 +53,12 @@ export function RateCalculatorPage() {
   const serverIsCurrent = server.data !== undefined && !server.isPlaceholderData && JSON.stringify(settled) === JSON.stringify(request);
   const volume = isVolumeRateUnit(form.unit);
   const plots = parseNumberInput(form.plots);
-  const margin = parseNumberInput(form.marginPercent) ?? 0;
+  const allowance = parseNumberInput(form.marginPercent);
+  const allowancePercent = allowance !== null && Number.isFinite(allowance) && allowance >= 0 ? allowance : 0;
 
   const answer = serverIsCurrent ? server.data : local && !('error' in local) ? local : null;
-  const localTotal = answer && plots !== null && plots >= 1 ? (amount: number | null) => (amount === null ? null : amount * plots * (1 + margin / 100)) : null;
-  const total = serverIsCurrent && server.data?.total ? server.data.total : localTotal && answer ? { grams: localTotal(answer.grams), kilograms: localTotal(answer.kilograms), pounds: localTotal(answer.pounds), litres: localTotal(answer.litres), gallons: localTotal(answer.gallons) } : null;
+  // The net amount for every plot, the allowance on its own line (the person sets it), then the sum.
+  const net = answer && plots !== null && Number.isFinite(plots) && plots >= 1 ? scaled(answer, plots) : null;
   const error = server.isError && JSON.stringify(settled) === JSON.stringify(request) ? server.error : null;
   const problem = missing ?? (local && 'error' in local ? (error?.message ?? local.error) : null);
 
@@ -82,21 +116,41 @@ export function RateCalculatorPage() {
           {form.geometry === 'rectangle' && (
             <div className="fr-form-row">
               <Field label="Length" field="lengthM" error={error}>
-                <NumberText id="fr-field-lengthM" value={form.lengthM} onChange={set('lengthM')} unit="m" />
+                <NumberText
+                  id="fr-field-lengthM"
+                  value={form.length}
+                  onChange={set('length')}
+                  unitChoice={{ label: 'Length unit', value: form.lengthUnit, options: lengthUnits, onChange: (unit) => set('lengthUnit')(unit as LengthUnit) }}
+                />
               </Field>
               <Field label="Width" field="widthM" error={error}>
-                <NumberText id="fr-field-widthM" value={form.widthM} onChange={set('widthM')} unit="m" />
+                <NumberText
+                  id="fr-field-widthM"
+                  value={form.width}
+                  onChange={set('width')}
+                  unitChoice={{ label: 'Width unit', value: form.lengthUnit, options: lengthUnits, onChange: (unit) => set('lengthUnit')(unit as LengthUnit) }}
+                />
               </Field>
             </div>
           )}
           {form.geometry === 'round' && (
             <Field label="Inside diameter" field="diameterCm" error={error} help="Inside the pot, at the soil surface.">
-              <NumberText id="fr-field-diameterCm" value={form.diameterCm} onChange={set('diameterCm')} unit="cm" />
+              <NumberText
+                id="fr-field-diameterCm"
+                value={form.diameter}
+                onChange={set('diameter')}
+                unitChoice={{ label: 'Diameter unit', value: form.diameterUnit, options: diameterUnits, onChange: (unit) => set('diameterUnit')(unit as DiameterUnit) }}
+              />
             </Field>
           )}
           {form.geometry === 'area' && (
             <Field label="Surface area" field="areaM2" error={error}>
-              <NumberText id="fr-field-areaM2" value={form.areaM2} onChange={set('areaM2')} unit="m²" />
+              <NumberText
+                id="fr-field-areaM2"
+                value={form.area}
+                onChange={set('area')}
+                unitChoice={{ label: 'Area unit', value: form.areaUnit, options: areaUnits, onChange: (unit) => set('areaUnit')(unit as AreaUnit) }}
+              />
             </Field>
           )}
           {!volume && (
@@ -114,11 +168,8 @@ export function RateCalculatorPage() {
           )}
           <H3>How many</H3>
           <div className="fr-form-row">
-            <Field label="Plots" field="plots" error={error}>
+            <Field label="Plots" field="plots" error={error} help="Plots or containers that get this rate.">
               <NumberText id="fr-field-plots" value={form.plots} onChange={set('plots')} />
-            </Field>
-            <Field label="Margin" field="marginPercent" error={error} help="Extra for spills and weighing.">
-              <NumberText id="fr-field-marginPercent" value={form.marginPercent} onChange={set('marginPercent')} unit="%" />
             </Field>
           </div>
         </Card>
@@ -167,18 +218,28 @@ export function RateCalculatorPage() {
                     </>
                   )}
                 </dl>
-                {total && plots !== null && (
-                  <p className="fr-result-card__total">
-                    For all {formatNumber(plots, 0)} plots{margin ? ` with ${formatNumber(margin, 1)}% extra` : ''}:{' '}
-                    <strong>
-                      {[
-                        total.grams !== null ? `${total.grams < 1000 ? formatAmount(total.grams, 'g') : formatAmount(total.kilograms, 'kg')} (${formatAmount(total.pounds, 'lb')})` : null,
-                        total.litres !== null ? `${formatAmount(total.litres, 'L')} (${formatAmount(total.gallons, 'gal')})` : null,
-                      ]
-                        .filter(Boolean)
-                        .join(' · ')}
-                    </strong>
-                  </p>
+                {net && plots !== null && (
+                  <table className="fr-totals" aria-label="Amount for all plots">
+                    <tbody>
+                      <tr>
+                        <th scope="row">For all {formatNumber(plots, 0)} plots</th>
+                        <td>{amountLine(net)}</td>
+                      </tr>
+                      <tr className="fr-totals__allowance">
+                        <th scope="row">
+                          <label htmlFor="fr-field-marginPercent">Allowance for spills and weighing</label>
+                          <NumberText id="fr-field-marginPercent" value={form.marginPercent} onChange={set('marginPercent')} unit="%" ariaLabel="Allowance" />
+                        </th>
+                        <td>+ {amountLine(scaled(net, allowancePercent / 100))}</td>
+                      </tr>
+                      <tr className="fr-totals__sum">
+                        <th scope="row">To weigh out in all</th>
+                        <td>
+                          <strong>{amountLine(scaled(net, 1 + allowancePercent / 100))}</strong>
+                        </td>
+                      </tr>
+                    </tbody>
+                  </table>
                 )}
                 {answer.warnings.length > 0 && (
                   <Callout intent="warning" icon="warning-sign" compact title="Check this rate" className="fr-gap">

@@ -1,7 +1,7 @@
 import type { TrialDetail } from '@friable/contracts';
 
 /** Whether this person may change values at this site now, and why not, in words. */
-export function ledgerAccess(trial: TrialDetail, siteId: number | undefined): { canEdit: boolean; reason: string | null } {
+export function valueAccess(trial: TrialDetail, siteId: number | undefined): { canEdit: boolean; reason: string | null } {
   if (trial.status === 'locked') return { canEdit: false, reason: 'This trial is locked for analysis; the investigator can unlock it.' };
   if (trial.status === 'archived') return { canEdit: false, reason: 'This trial is archived: its values can be read, not changed.' };
   if (trial.status === 'draft') return { canEdit: false, reason: 'Values can be entered once the investigator activates the trial.' };

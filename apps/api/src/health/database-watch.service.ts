@@ -1,0 +1,98 @@
+import { Inject, Injectable, Logger, type OnApplicationShutdown, type OnModuleInit } from '@nestjs/common';
+import type { ConfigType } from '@nestjs/config';
+import * as mariadb from 'mariadb';
+import { databaseConfig } from '../config/database.config';
+
+/** How often the database is asked whether it is there, and how long an answer may take. */
+const INTERVAL_MS = 500;
+const ANSWER_MS = 1_000;
+
+/**
+ * Database watch — knows within about a second and a half whether the database answers, so that
+ * requests are refused at once with 503 while it does not (see database-gate.ts) and served again
+ * as soon as it does, without a restart.
+ *
+ * Purpose: a stopped server refuses connections at once, but a frozen one (paused, or cut off by
+ * the network) accepts them and never answers, so requests would wait on it. The watch keeps its
+ * own connection outside the pool and sends `SELECT 1` every half second; no answer within a
+ * second marks the database down (the connection is dropped and made anew on the next tick).
+ * Throws: nothing; a failed check is a state, logged once per change.
+ */
+@Injectable()
+export class DatabaseWatchService implements OnModuleInit, OnApplicationShutdown {
+  private readonly logger = new Logger('Database');
+  private connection: mariadb.Connection | null = null;
+  private timer: NodeJS.Timeout | null = null;
+  private checking = false;
+  private up = true;
+
+  constructor(@Inject(databaseConfig.KEY) private readonly config: ConfigType<typeof databaseConfig>) {}
+
+  /** False from the first unanswered check until the next answered one. */
+  get isUp(): boolean {
+    return this.up;
+  }
+
+  onModuleInit(): void {
+    this.timer = setInterval(() => void this.check(), INTERVAL_MS);
+    this.timer.unref();
+  }
+
+  async onApplicationShutdown(): Promise<void> {
+    if (this.timer) clearInterval(this.timer);
+    this.timer = null;
+    this.drop();
+  }
+
+  /** One check: answered within ANSWER_MS or not. Also run by the health route. */
+  async check(): Promise<boolean> {
+    if (this.checking) return this.up;
+    this.checking = true;
+    let timeout: NodeJS.Timeout | undefined;
+    try {
+      const answered = this.ping();
+      answered.catch(() => undefined); // a late failure, after the race was lost, is no news
+      const late = new Promise<never>((_, reject) => {
+        timeout = setTimeout(() => reject(new Error(`no answer within ${ANSWER_MS} ms`)), ANSWER_MS);
+      });
+      await Promise.race([answered, late]);
+      this.mark(true);
+    } catch (error) {
+      this.drop();
+      this.mark(false, error);
+    } finally {
+      clearTimeout(timeout);
+      this.checking = false;
+    }
+    return this.up;
+  }
+
+  private async ping(): Promise<void> {
+    if (!this.connection) {
+      const connection = await mariadb.createConnection({
+        host: this.config.host,
+        port: this.config.port,
+        user: this.config.username,
+        password: this.config.password,
+        database: this.config.database,
+        connectTimeout: ANSWER_MS,
+      });
+      if (this.connection) connection.destroy();
+      else this.connection = connection;
+    }
+    await this.connection!.query('SELECT 1');
+  }
+
+  private drop(): void {
+    const connection = this.connection;
+    this.connection = null;
+    if (connection) connection.destroy();
+  }
+
+  private mark(up: boolean, error?: unknown): void {
+    if (up === this.up) return;
+    this.up = up;
+    if (up) this.logger.warn('The database answers again; requests are served.');
+    else this.logger.error(`The database does not answer (${error instanceof Error ? error.message : String(error)}); requests are answered 503 until it does.`);
+  }
+}

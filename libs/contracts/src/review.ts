@@ -1,0 +1,68 @@
+// Review of a saved analysis: requests, sign-offs and comment threads.
+import type { TrialRole } from './index';
+
+export const SIGN_OFF_STATES = ['current', 'data-changed'] as const;
+/** `data-changed`: the trial's data moved on after this sign-off (its data hash no longer matches). */
+export type SignOffState = (typeof SIGN_OFF_STATES)[number];
+
+export interface SignOff {
+  id: number;
+  analysisId: number;
+  userId: number | null;
+  name: string;
+  role: TrialRole;
+  statement: string;
+  signedAt: string;
+  dataHash: string;
+  engineVersion: string;
+  state: SignOffState;
+}
+
+/** POST /api/trials/:trialId/analyses/:analysisId/sign-offs. */
+export interface SignOffInput {
+  statement: string;
+}
+
+/** Who is expected to sign a saved analysis, and how far they are. */
+export interface ReviewStatus {
+  /** The trial's reviewers, or its investigators when it has no reviewer. */
+  expectedRole: 'reviewer' | 'investigator';
+  expected: number;
+  signed: number;
+  /** E.g. "Awaiting 2 reviewers" or "Signed by 1 of 2 reviewers". */
+  label: string;
+  /** Names of expected signers who have not signed yet. */
+  awaiting: string[];
+  lastRequestedAt: string | null;
+}
+
+/** POST /api/trials/:trialId/analyses/:analysisId/review-requests. */
+export interface ReviewRequestInput {
+  message?: string | null;
+}
+
+export interface ReviewRequestAnswer {
+  /** The reviewers who were e-mailed. */
+  notified: string[];
+  requestedAt: string;
+}
+
+/** POST /api/trials/:trialId/analyses/:analysisId/comments body; `parentId` makes it a reply. */
+export interface CommentInput {
+  body: string;
+  parentId?: number | null;
+}
+
+/** PATCH /api/trials/:trialId/analyses/:analysisId/comments/:commentId. */
+export interface CommentUpdateInput {
+  body?: string;
+  resolved?: boolean;
+}
+
+export interface CommentRevision {
+  kind: 'edited' | 'deleted';
+  /** The text as it was before this change. */
+  body: string;
+  at: string;
+  byName: string | null;
+}
