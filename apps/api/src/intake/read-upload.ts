@@ -61,8 +61,11 @@ export interface OpenedUpload {
   readonly format: UploadFormat;
   /** Numbers written with a decimal comma (`;` CSV files whose number cells mostly use it). */
   readonly decimalComma: boolean;
-  /** Reads every row in file order; `onProgress` gets the bytes read so far (CSV). */
-  read(onRow: (row: SourceRow) => void, onProgress: (bytesRead: number) => void): Promise<UploadReading>;
+  /**
+   * Reads every row in file order; `onProgress` gets the bytes read so far (CSV); `pause` is
+   * awaited between chunks (every 1,000 rows of a sheet), so a slower consumer holds the reading back.
+   */
+  read(onRow: (row: SourceRow) => void, onProgress: (bytesRead: number) => void, pause: () => Promise<void>): Promise<UploadReading>;
 }
 
 async function sha256Of(source: UploadSource): Promise<string> {
@@ -114,9 +117,14 @@ export async function openUpload(source: UploadSource, sheetName: string | null)
     return {
       format,
       decimalComma: false,
-      async read(onRow) {
+      async read(onRow, _onProgress, pause) {
         const input = 'bytes' in source ? { bytes: source.bytes } : { path: source.path };
-        const reading = await readWorkbookRows(input, sheetName, onRow);
+        let rows = 0;
+        const reading = await readWorkbookRows(input, sheetName, async (row) => {
+          onRow(row);
+          rows += 1;
+          if (rows % 1000 === 0) await pause();
+        });
         return { sha256: await sha256Of(source), merged: reading.merged, sheet: reading.sheet, sheets: reading.sheets, readAs: `the sheet "${reading.sheet}"` };
       },
     };
@@ -125,7 +133,7 @@ export async function openUpload(source: UploadSource, sheetName: string | null)
   return {
     format,
     decimalComma,
-    async read(onRow, onProgress) {
+    async read(onRow, onProgress, pause) {
       const hash = createHash('sha256');
       const reader = new CsvReader((row) => onRow({ cells: row.cells, rowNumber: row.rowNumber }));
       let bytesRead = 0;
@@ -134,6 +142,7 @@ export async function openUpload(source: UploadSource, sheetName: string | null)
         reader.push(chunk);
         bytesRead += chunk.length;
         onProgress(bytesRead);
+        await pause();
       }
       reader.end();
       return { sha256: hash.digest('hex'), merged: [], sheet: null, sheets: [], readAs: delimiterWords[reader.delimiter] ?? 'comma-separated' };

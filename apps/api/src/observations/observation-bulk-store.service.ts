@@ -1,19 +1,13 @@
 import { Injectable } from '@nestjs/common';
 import type { Transaction } from 'sequelize';
-import { connectionOf, loadSpool, type BulkLoadMethod } from './spool-loader';
-
-/** A spool file written by Intake: `seq, plot_id, measure_id, value_text, value_decimal, censored, missing_reason, notes`. */
-export interface SpoolFile {
-  readonly path: string;
-  readonly lines: number;
-}
+import { connectionOf, openBulkStream, type BulkLoadMethod, type BulkStream } from './bulk-stream';
 
 export interface BulkWriteContext {
   readonly trialId: number;
   readonly siteId: number;
   readonly roundId: number;
   readonly userId: number | null;
-  /** The intake_uploads row of a commit; null for a dry run. */
+  /** The intake_uploads row of a commit; null for a dry run (then nothing may be written to observations). */
   readonly uploadId: number | null;
   readonly at: Date;
   /** False when the file has no notes column: stored notes are kept and not compared. */
@@ -42,7 +36,8 @@ export interface BulkComparison {
 const KIND = { unchanged: 0, new: 1, changed: 2, skipped: 3 } as const;
 const kindName = { 0: 'unchanged', 1: 'new', 2: 'changed' } as const;
 
-const SPOOL_FIELDS = ['seq', 'plot_id', 'measure_id', 'value_text', 'value_decimal', 'censored', 'missing_reason', 'notes'] as const;
+/** The fields of the lines Intake streams: `seq, plot_id, measure_id, value_text, value_decimal, censored, missing_reason, notes, blank`. */
+const LINE_FIELDS = ['seq', 'plot_id', 'measure_id', 'value_text', 'value_decimal', 'censored', 'missing_reason', 'notes', 'blank'] as const;
 const HISTORY_COLUMNS =
   'observation_id, trial_id, at, user_id, source, upload_id, had_before, before_text, before_censored, before_missing_reason, after_text, after_censored, after_missing_reason';
 
@@ -75,16 +70,18 @@ interface ListedRow {
  * set-based statements inside the caller's transaction, after comparing them with what is stored
  * in the database itself.
  *
- * Purpose: Intake at the database's own speed. A site and round without values takes the values
- * straight from the spool by `LOAD DATA LOCAL INFILE` into observations; otherwise the spool goes
- * into a temporary staging table, one statement marks each value new, changed or unchanged against
- * the stored one (exact text, censoring, the reason of a missing value, and the notes when the file
- * has them), and four more write the history of the changed values, replace them (version + 1),
- * add the new ones and write their history. Values an upload does not mention are never touched.
+ * Purpose: Intake at the database's own speed. Values are streamed in while the file is still
+ * being checked (`LOAD DATA LOCAL INFILE` from a registered stream). A site and round without
+ * values takes them straight into observations, and one statement then writes their history;
+ * otherwise they go into a temporary staging table, one statement marks each value new, changed or
+ * unchanged against the stored one (exact text, censoring, the reason of a missing value, and the
+ * notes when the file has them), and four more write the history of the changed values, replace
+ * them (version + 1), add the new ones and write their history. Values an upload does not mention
+ * are never touched; a refused file is rolled back with the caller's transaction.
  * Reference: MariaDB, LOAD DATA INFILE, https://mariadb.com/kb/en/load-data-infile/; multi-table
  * UPDATE, https://mariadb.com/kb/en/update/.
  * Throws: Error when a bulk load loses or alters a row (the transaction must then roll back).
- * Example: `await bulk.insertFresh(transaction, context, spool.values)` → 100000
+ * Example: `const stream = await bulk.openFresh(transaction, context); stream.write(line); await stream.end(); await bulk.recordNewHistory(transaction, context)`
  */
 @Injectable()
 export class ObservationBulkStore {
@@ -109,16 +106,19 @@ export class ObservationBulkStore {
     return Number(rows[0]!.n);
   }
 
-  /** Adds every value of the spool as new (none may exist yet) and records each one's first history row. */
-  async insertFresh(transaction: Transaction, context: BulkWriteContext, values: SpoolFile): Promise<number> {
+  /**
+   * Starts adding values straight to observations as they are checked (none may be stored yet
+   * for the site and round; a value written meanwhile by someone else makes `end` fail). Empty
+   * cells without a reason must not be written to it. Call `recordNewHistory` once it has ended.
+   */
+  async openFresh(transaction: Transaction, context: BulkWriteContext): Promise<BulkStream> {
+    if (context.uploadId === null) throw new RangeError('openFresh: a dry run writes nothing to observations');
     const at = sqlTime(context.at);
-    await loadSpool(
+    return openBulkStream(
       transaction,
       {
-        file: values.path,
-        lines: values.lines,
         table: 'observations',
-        fields: SPOOL_FIELDS.map((field) => (field === 'seq' ? null : field)),
+        fields: LINE_FIELDS.map((field) => (field === 'seq' || field === 'blank' ? null : field)),
         constants: {
           trial_id: context.trialId,
           round_id: context.roundId,
@@ -133,14 +133,10 @@ export class ObservationBulkStore {
       },
       context.method,
     );
-    const H0 = performance.now();
-    await this.recordNewHistory(transaction, context);
-    console.error(`[t] history ${(performance.now() - H0).toFixed(0)}`);
-    return values.lines;
   }
 
-  /** Loads the spool into a temporary staging table and marks each value new, changed, unchanged or skipped. */
-  async stage(transaction: Transaction, context: BulkWriteContext, spool: { values: SpoolFile; blanks: SpoolFile }): Promise<void> {
+  /** Creates the temporary staging table (it lives on the transaction's connection) and starts loading values into it. */
+  async openStaging(transaction: Transaction, context: BulkWriteContext): Promise<BulkStream> {
     const connection = connectionOf(transaction);
     await connection.query('DROP TEMPORARY TABLE IF EXISTS intake_staging');
     await connection.query(
@@ -158,10 +154,12 @@ export class ObservationBulkStore {
          observation_id INT UNSIGNED NULL
        ) ENGINE=InnoDB DEFAULT CHARSET=utf8mb4 COLLATE=utf8mb4_nopad_bin`,
     );
-    for (const [file, blank] of [[spool.values, 0], [spool.blanks, 1]] as const) {
-      await loadSpool(transaction, { file: file.path, lines: file.lines, table: 'intake_staging', fields: [...SPOOL_FIELDS], constants: { blank } }, context.method);
-    }
-    await connection.query(
+    return openBulkStream(transaction, { table: 'intake_staging', fields: [...LINE_FIELDS], constants: {} }, context.method);
+  }
+
+  /** Marks each staged value new, changed, unchanged or skipped (an empty cell where nothing is stored) against the stored one. */
+  async classify(transaction: Transaction, context: BulkWriteContext): Promise<void> {
+    await connectionOf(transaction).query(
       `UPDATE intake_staging s
          LEFT JOIN observations o ON o.trial_id = ? AND o.plot_id = s.plot_id AND o.round_id = ? AND o.measure_id = s.measure_id
           SET s.observation_id = o.id,
@@ -242,13 +240,12 @@ export class ObservationBulkStore {
   }
 
   /** The first history row of every value this upload created (found by upload and version within the round). */
-  private async recordNewHistory(transaction: Transaction, context: BulkWriteContext): Promise<void> {
+  async recordNewHistory(transaction: Transaction, context: BulkWriteContext): Promise<void> {
     await connectionOf(transaction).query(
       `INSERT INTO observation_changes (${HISTORY_COLUMNS})
        SELECT o.id, o.trial_id, o.recorded_at, o.recorded_by, 'upload', o.upload_id, 0, NULL, 0, NULL, o.value_text, o.censored, o.missing_reason
          FROM observations o
-        WHERE o.trial_id = ? AND o.round_id = ? AND o.upload_id = ? AND o.version = 1
-        ORDER BY o.id`,
+        WHERE o.trial_id = ? AND o.round_id = ? AND o.upload_id = ? AND o.version = 1`,
       [context.trialId, context.roundId, context.uploadId],
     );
   }

@@ -56,19 +56,21 @@ function detectLayout(text: string, complete: boolean): { delimiter: CsvDelimite
   let inQuotes = false;
   let seenText = false;
   let newline: Newline | null = null;
-  for (let index = 0; index < text.length; index += 1) {
+  let lineEnded = false;
+  for (let index = 0; index < text.length && !lineEnded; index += 1) {
     const character = text[index]!;
     if (character === '"') inQuotes = !inQuotes;
     else if (!inQuotes && (character === '\n' || character === '\r')) {
-      newline ??= character === '\r' ? (text[index + 1] === '\n' ? '\r\n' : index + 1 < text.length || complete ? '\r' : null) : '\n';
-      if (character === '\r' && newline === null) return null;
-      if (seenText) break;
+      // A \r at the very end may be the first half of \r\n: wait for the next chunk.
+      if (character === '\r' && index + 1 === text.length && !complete) return null;
+      newline ??= character === '\r' ? (text[index + 1] === '\n' ? '\r\n' : '\r') : '\n';
+      lineEnded = seenText;
     } else if (!inQuotes && counts.has(character as CsvDelimiter)) {
       counts.set(character as CsvDelimiter, counts.get(character as CsvDelimiter)! + 1);
     }
     if (character.trim() !== '') seenText = true;
-    if (index === text.length - 1 && !complete) return null;
   }
+  if (!lineEnded && !complete) return null;
   const delimiter = candidateDelimiters.reduce((best, candidate) => (counts.get(candidate)! > counts.get(best)! ? candidate : best));
   return { delimiter, newline: newline ?? '\n' };
 }

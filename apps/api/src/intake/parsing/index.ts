@@ -1,6 +1,7 @@
 // Intake's pure core: reading, mapping and checking an uploaded CSV file (no database, no Nest).
 export { IntakeFileError, type IntakeFileStatus } from './intake-file.error';
 export { CsvReader, type RawRow } from './csv-reader';
+export { SitePlotIndex, plotLabelKey } from './site-plot-index';
 export { HEADER_SEARCH_ROWS, readHeaderCells, TableRows, type SourceRow, type TableHeader, type TableRow } from './table-rows';
 export { readDecimalText, type DecimalTextProblem, type DecimalTextReading } from './decimal-text';
 export { DecimalMarkCount, INTAKE_MAX_BYTES, INTAKE_MAX_CELL_CHARACTERS, INTAKE_MAX_COLUMNS, readCsvFile, tooLarge, type CsvDelimiter, type CsvFile } from './read-csv-file';
@@ -21,8 +22,6 @@ export { parseCellValue, type CellOptions, type CellValue } from './parse-value'
 export {
   INTAKE_PROBLEM_CAP,
   IntakeChecker,
-  SitePlotIndex,
-  plotLabelKey,
   validateIntake,
   type IntakeCheckerOptions,
   type OtherSiteLookup,

@@ -4,6 +4,7 @@ import type { ColumnMapping, MeasureColumn } from './map-columns';
 import { templateHeader } from './map-columns';
 import { parseCellValue } from './parse-value';
 import type { CsvFile } from './read-csv-file';
+import { SitePlotIndex, plotLabelKey } from './site-plot-index';
 import type { TableRow } from './table-rows';
 
 /** Most errors (and, apart, warnings) listed; one more line says how many were left out. */
@@ -61,60 +62,6 @@ export interface IntakeValidation {
   readonly warnings: readonly IntakeProblem[];
 }
 
-export const plotLabelKey = (label: string): string => {
-  const trimmed = label.trim();
-  const upper = trimmed.toUpperCase();
-  return upper === trimmed ? trimmed : upper;
-};
-
-/**
- * The plots of one site by label, kept column by column so a site of a million plots fits in
- * a few tens of megabytes.
- */
-export class SitePlotIndex {
-  private readonly byKey = new Map<string, number>();
-  readonly ids: number[] = [];
-  readonly labels: string[] = [];
-  readonly blocks: number[] = [];
-  readonly treatmentCodes: string[] = [];
-  private readonly identities: Array<Readonly<Record<string, string>> | undefined> = [];
-  private readonly codes = new Map<string, string>();
-
-  static of(plots: readonly SitePlot[]): SitePlotIndex {
-    const index = new SitePlotIndex();
-    for (const plot of plots) index.add(plot);
-    return index;
-  }
-
-  get size(): number {
-    return this.ids.length;
-  }
-
-  add(plot: SitePlot): void {
-    const position = this.ids.length;
-    this.byKey.set(plotLabelKey(plot.label), position);
-    this.ids.push(plot.id);
-    this.labels.push(plot.label);
-    this.blocks.push(plot.block);
-    // One string per treatment code, however many plots share it.
-    if (!this.codes.has(plot.treatmentCode)) this.codes.set(plot.treatmentCode, plot.treatmentCode);
-    this.treatmentCodes.push(this.codes.get(plot.treatmentCode)!);
-    if (plot.identity || this.identities.length > 0) {
-      this.identities.length = position;
-      this.identities.push(plot.identity);
-    }
-  }
-
-  /** The position of the plot with this label (case and surrounding spaces aside), or −1. */
-  find(label: string): number {
-    return this.byKey.get(label) ?? this.byKey.get(plotLabelKey(label)) ?? -1;
-  }
-
-  identity(position: number, role: string): string | undefined {
-    return this.identities[position]?.[role];
-  }
-}
-
 /** Where a label the site does not have belongs instead: the other site's name by label key, or nothing. */
 export type OtherSiteLookup = ReadonlyMap<string, string>;
 
@@ -127,15 +74,15 @@ const blockPattern = /^(?:block\s*|b)?(\d+)$/i;
 
 /** An identity column's check against the plot plan: the sentence for a disagreement, or null. */
 function identityProblem(role: string, typed: string, plots: SitePlotIndex, position: number): string | null {
-  const label = plots.labels[position]!;
+  const label = plots.label(position);
   if (role === 'block') {
     const match = blockPattern.exec(typed);
     if (!match) return `"${typed}" is not a block number.`;
-    const block = plots.blocks[position]!;
+    const block = plots.block(position);
     return Number(match[1]) === block ? null : `plot ${label} is in block ${block} in the plot plan, not ${typed}.`;
   }
   if (role === 'treatment') {
-    const code = plots.treatmentCodes[position]!;
+    const code = plots.treatmentCode(position);
     return typed.toUpperCase() === code.toUpperCase() ? null : `plot ${label} is treatment ${code} in the plot plan, not ${typed}.`;
   }
   const planned = plots.identity(position, role);
@@ -310,7 +257,7 @@ export class IntakeChecker {
     }
     const firstRow = this.firstRowOf[position]!;
     if (firstRow !== 0) {
-      this.errors.add(this.problemAt(row, column, `plot ${plots.labels[position]} is also on row ${firstRow}; each plot may appear once in a file.`));
+      this.errors.add(this.problemAt(row, column, `plot ${plots.label(position)} is also on row ${firstRow}; each plot may appear once in a file.`));
       return -1;
     }
     this.firstRowOf[position] = row.rowNumber;
@@ -362,8 +309,8 @@ export class IntakeChecker {
       if (position < 0) continue;
       this.valuesRead += 1;
       this.options.onValue({
-        plotId: plots.ids[position]!,
-        plotLabel: plots.labels[position]!,
+        plotId: plots.id(position),
+        plotLabel: plots.label(position),
         measureId: column.measureId,
         measureCode: column.measureCode,
         valueText: cell.kind === 'value' ? cell.valueText : null,
