@@ -333,6 +333,26 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/stats/repeated": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * One measure over several rounds on the same plots: REML with a within-plot covariance, Kenward–Roger tests, means per round, split plot in time
+         * @description Blocks (and sites), treatment, round and treatment × round fitted by REML with compound symmetry, continuous-time AR(1) on the day offsets (unequal spacing honoured) or unstructured covariance — auto: every one that applies, the lowest AIC chosen and shown beside the others; Kenward–Roger F tests of treatment, round and their interaction and of treatment within each round; least-squares means per treatment and round with Kenward–Roger SEs. Beside it the classical split plot in time on the plots seen at every round, with Mauchly’s test and the Greenhouse–Geisser and Huynh–Feldt corrections.
+         */
+        post: operations["StatsController_repeated"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/api/trials": {
         parameters: {
             query?: never;
@@ -1384,6 +1404,26 @@ export interface components {
             /** @example treatment */
             term: string;
         };
+        CovarianceChoiceDto: {
+            /** @description −2 logLik + 2 (fixed effects + covariance parameters). */
+            aic: number;
+            /** @description REML log-likelihood (nlme’s and lme4’s convention, R’s default treatment contrasts). */
+            logLik: number;
+            /**
+             * @description cs: plotVariance, residualVariance, correlation; ar1: variance, phi (correlation a day apart); unstructured: variance[round], covariance[round,round].
+             * @example {
+             *       "variance": 4.1,
+             *       "phi": 0.97
+             *     }
+             */
+            parameters: {
+                [key: string]: number;
+            };
+            /** @enum {string} */
+            structure: "cs" | "ar1" | "unstructured";
+            /** @description Why this structure could not be fitted (then the other fields are absent). */
+            unavailable?: string;
+        };
         CreateAnalysisDto: {
             /** @default 0.05 */
             alpha?: number;
@@ -2275,6 +2315,11 @@ export interface components {
              */
             block?: string;
             /**
+             * @description A baseline covariate (e.g. the plot’s day-0 value): the answer becomes an analysis of covariance (covariate row, adjusted means, slopes).
+             * @example 10.8
+             */
+            covariate?: number | string;
+            /**
              * @description factorial-rcbd: the level of each factor, in place of treatment
              * @example {
              *       "A": "a1",
@@ -2561,6 +2606,63 @@ export interface components {
             valueText: string | null;
             version: number;
         };
+        RepeatedAnswerDto: {
+            anova: components["schemas"]["TermTestDto"][];
+            byRound: components["schemas"]["RoundTestDto"][];
+            candidates: components["schemas"]["CovarianceChoiceDto"][];
+            covariance: components["schemas"]["CovarianceChoiceDto"];
+            means: components["schemas"]["RepeatedMeanDto"][];
+            plots: number;
+            rounds: components["schemas"]["RoundDto"][];
+            sphericity: components["schemas"]["SphericityDto"] | null;
+            splitPlot: components["schemas"]["SplitPlotDto"] | null;
+            warnings: string[];
+        };
+        RepeatedMeanDto: {
+            df: number;
+            mean: number;
+            /** @example Day 14 */
+            round: string;
+            /** @description Kenward–Roger standard error. */
+            se: number;
+            /** @example GYP */
+            treatment: string;
+        };
+        RepeatedObservationDto: {
+            /**
+             * @description Block label, nested within its site; in a crd it names the replicate. A plot is site + block + treatment.
+             * @example 1
+             */
+            block?: string;
+            /** @example Day 14 */
+            round: string;
+            /** @example Hollow Lane */
+            site?: string;
+            /**
+             * @description The round’s day offset.
+             * @example 14
+             */
+            time: number | string;
+            /** @example GYP */
+            treatment: string;
+            /** @example 212.5 */
+            value: number | string;
+        };
+        RepeatedRequestDto: {
+            /**
+             * @description Listed first; default the first treatment.
+             * @example CTRL
+             */
+            control?: string;
+            /**
+             * @description Within-plot covariance: compound symmetry, continuous-time AR(1) on the day offsets, unstructured, or auto (lowest AIC).
+             * @enum {string}
+             */
+            covariance: "cs" | "ar1" | "unstructured" | "auto";
+            /** @enum {string} */
+            design: "crd" | "rcbd" | "multisite-rcbd";
+            observations: components["schemas"]["RepeatedObservationDto"][];
+        };
         ReportMeanDto: {
             /** @description With a transform: the mean back on the original scale. */
             backTransformedMean?: number;
@@ -2598,10 +2700,33 @@ export interface components {
             /** @description Null for a plot with leverage 1. */
             standardized: number | null;
         };
+        RoundDto: {
+            /** @example Day 14 */
+            round: string;
+            /** @example 14 */
+            time: number;
+        };
         RoundRefDto: {
             dayOffset: number;
             id: number;
             label: string;
+        };
+        RoundTestDto: {
+            /**
+             * @description Kenward–Roger denominator df.
+             * @example 104.3
+             */
+            denDf: number;
+            /** @example 2.4 */
+            f: number;
+            /** @example 8 */
+            numDf: number;
+            /** @example 0.02 */
+            p: number;
+            /** @example Day 14 */
+            round: string;
+            /** @example treatment:round */
+            term: string;
         };
         /** @enum {string} */
         SeparationMethod: "lsd" | "tukey" | "dunnett" | "bonferroni" | "holm";
@@ -2663,6 +2788,53 @@ export interface components {
             /** Format: date-time */
             createdAt: string;
             id: number;
+        };
+        SphericityDto: {
+            chiSquare: number | null;
+            df: number | null;
+            /** @example 0.87 */
+            greenhouseGeisser: number;
+            /**
+             * @description Lecoutre’s form, as car; above 1 it is used as 1.
+             * @example 0.98
+             */
+            huynhFeldt: number;
+            /** @description Null with two rounds. */
+            mauchlyW: number | null;
+            p: number | null;
+        };
+        SplitPlotDto: {
+            plotsLeftOut: number;
+            plotsUsed: number;
+            table: components["schemas"]["SplitPlotRowDto"][];
+        };
+        SplitPlotRowDto: {
+            df: number;
+            f: number | null;
+            ms: number;
+            p: number | null;
+            pGreenhouseGeisser?: number | null;
+            pHuynhFeldt?: number | null;
+            ss: number;
+            /** @enum {string} */
+            stratum: "between plots" | "within plots";
+            /** @example treatment:round */
+            term: string;
+        };
+        TermTestDto: {
+            /**
+             * @description Kenward–Roger denominator df.
+             * @example 104.3
+             */
+            denDf: number;
+            /** @example 2.4 */
+            f: number;
+            /** @example 8 */
+            numDf: number;
+            /** @example 0.02 */
+            p: number;
+            /** @example treatment:round */
+            term: string;
         };
         ThresholdDto: {
             /**
@@ -3742,6 +3914,47 @@ export interface operations {
             };
             /** @description No valid token. */
             401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+        };
+    };
+    StatsController_repeated: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["RepeatedRequestDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["RepeatedAnswerDto"];
+                };
+            };
+            /** @description No valid token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description A malformed body (naming the field) or data the analysis cannot take (the engine’s sentence). */
+            422: {
                 headers: {
                     [name: string]: unknown;
                 };
