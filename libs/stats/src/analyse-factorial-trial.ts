@@ -21,6 +21,9 @@ export interface FactorialMean {
   readonly backTransformedMean?: number;
 }
 
+/** A mean with the linear function that gives it and its value on the centred scale. */
+type Entry = FactorialMean & { readonly contrast: Float64Array; readonly centred: number };
+
 /** The least-squares means of one term (a factor or an interaction). */
 export interface TermMeans {
   readonly term: string;
@@ -171,7 +174,7 @@ export function analyseFactorialTrial(request: FactorialRequest): FactorialTrial
   const { alpha, back } = request;
   const centre = layout.centreValue;
   const names = layout.factors.map((factor) => factor.name);
-  const entry = (which: readonly number[], levels: readonly number[]): FactorialMean & { contrast: Float64Array } => {
+  const entry = (which: readonly number[], levels: readonly number[]): Entry => {
     const contrast = fit.mean(which, levels);
     const estimate = fit.estimate(contrast);
     const labels = which.map((f, j) => layout.factors[f]!.levels[levels[j]!]!);
@@ -184,12 +187,13 @@ export function analyseFactorialTrial(request: FactorialRequest): FactorialTrial
       se: Math.sqrt(estimate.variance),
       ...(back ? { backTransformedMean: back(mean) } : {}),
       contrast,
+      centred: estimate.value,
     };
   };
-  const strip = ({ contrast: _contrast, ...rest }: FactorialMean & { contrast: Float64Array }): FactorialMean => Object.freeze(rest);
+  const strip = ({ contrast: _contrast, centred: _centred, ...rest }: Entry): FactorialMean => Object.freeze(rest);
   const difference = (a: Float64Array, b: Float64Array) => Float64Array.from(a, (value, i) => value - b[i]!);
 
-  const compare = (entries: readonly (FactorialMean & { contrast: Float64Array })[], methods: readonly MeanSeparationMethod[], control?: string): StratumComparisons => {
+  const compare = (entries: readonly Entry[], methods: readonly MeanSeparationMethod[], control?: string): StratumComparisons => {
     const k = entries.length;
     const covariance = new Float64Array(k * k);
     for (let i = 0; i < k; i++) for (let j = i; j < k; j++) covariance[i * k + j] = covariance[j * k + i] = fit.covariance(entries[i]!.contrast, entries[j]!.contrast);
@@ -197,7 +201,8 @@ export function analyseFactorialTrial(request: FactorialRequest): FactorialTrial
     const df = fit.estimate(first).df;
     const separation = separateMeans({
       treatments: entries.map((e) => e.treatment),
-      means: entries.map((e) => e.mean - centre),
+      // Centred means: at 1e12 the shifted means have lost the digits their differences need.
+      means: entries.map((e) => e.centred),
       covariance,
       df,
       alpha,
@@ -362,8 +367,8 @@ function sliceTests(
   anova: readonly FactorialAnovaRow[],
   alpha: number,
   methods: readonly MeanSeparationMethod[],
-  entry: (which: readonly number[], levels: readonly number[]) => FactorialMean & { contrast: Float64Array },
-  compare: (entries: readonly (FactorialMean & { contrast: Float64Array })[], methods: readonly MeanSeparationMethod[]) => StratumComparisons,
+  entry: (which: readonly number[], levels: readonly number[]) => Entry,
+  compare: (entries: readonly Entry[], methods: readonly MeanSeparationMethod[]) => StratumComparisons,
 ): SliceTest[] {
   const slices: SliceTest[] = [];
   const names = layout.factors.map((factor) => factor.name);
@@ -387,7 +392,7 @@ function sliceTests(
             p: test.p,
             ...separated,
             df: test.denDf,
-            means: Object.freeze(entries.map(({ contrast: _contrast, ...rest }) => Object.freeze(rest))),
+            means: Object.freeze(entries.map(({ contrast: _contrast, centred: _centred, ...rest }) => Object.freeze(rest))),
           }),
         );
       });

@@ -85,7 +85,14 @@ export function remlFactorialFit(layout: FactorialLayout, options: FactorialReml
     });
   });
   const residualDf = n - p;
-  if (leastSquares) anova.push(Object.freeze({ term: 'error', df: residualDf, ss: residualVariance * residualDf, ms: residualVariance, f: null, p: null, errorTerm: null }));
+  if (leastSquares) {
+    let mean = 0;
+    for (const value of layout.y) mean += value / n;
+    let totalSs = 0;
+    for (const value of layout.y) totalSs += (value - mean) ** 2;
+    anova.push(Object.freeze({ term: 'error', df: residualDf, ss: residualVariance * residualDf, ms: residualVariance, f: null, p: null, errorTerm: null }));
+    anova.push(Object.freeze({ term: 'total', df: n - 1, ss: totalSs, ms: null, f: null, p: null, errorTerm: null }));
+  }
   // Fitted values with the random effects' best linear unbiased predictions (lme4's fitted()).
   const marginal = new Float64Array(n);
   for (let i = 0; i < n; i++) {
@@ -101,6 +108,14 @@ export function remlFactorialFit(layout: FactorialLayout, options: FactorialReml
     for (let i = 0; i < n; i++) fitted[i]! += fit.theta[k]! * sums.get(term.codes[i]!)!;
   });
   const residuals = Float64Array.from(layout.y, (value, i) => value - fitted[i]!);
+  // Least squares: the hat matrix diagonal x_i'(X'X)⁻¹x_i = x_i'Φx_i / σ² (for rstandard); a mixed model has none.
+  const leverage = new Float64Array(n);
+  if (leastSquares && residualVariance > 0) {
+    for (let i = 0; i < n; i++) {
+      const row = coding.design.rows.subarray(coding.design.rowOf[i]! * p, (coding.design.rowOf[i]! + 1) * p);
+      leverage[i] = bilinearForm(row, fit.covariance, row, p) / residualVariance;
+    }
+  }
   const estimate = (contrast: Float64Array) => {
     const result = kenwardRogerEstimate(adjustment, contrast);
     return { value: result.estimate, variance: result.se * result.se, df: result.df };
@@ -113,7 +128,7 @@ export function remlFactorialFit(layout: FactorialLayout, options: FactorialReml
     residualMs: residualVariance,
     fitted,
     residuals,
-    leverage: new Float64Array(n),
+    leverage,
     varianceComponents: Object.freeze(fit.parameterNames.map((name, k) => Object.freeze({ name: name === 'residual' ? 'error' : name, variance: fit.theta[k]! }))),
     mean: (which: readonly number[], levels: readonly number[]) => coding.marginalMeanRow(which, levels),
     estimate,
