@@ -174,9 +174,9 @@ export function analyseFactorialTrial(request: FactorialRequest): FactorialTrial
   const { alpha, back } = request;
   const centre = layout.centreValue;
   const names = layout.factors.map((factor) => factor.name);
-  const entry = (which: readonly number[], levels: readonly number[]): Entry => {
-    const contrast = fit.mean(which, levels);
-    const estimate = fit.estimate(contrast);
+  const entry = (which: readonly number[], levels: readonly number[], by: FactorialFit = fit): Entry => {
+    const contrast = by.mean(which, levels);
+    const estimate = by.estimate(contrast);
     const labels = which.map((f, j) => layout.factors[f]!.levels[levels[j]!]!);
     const mean = estimate.value + centre;
     return {
@@ -193,12 +193,12 @@ export function analyseFactorialTrial(request: FactorialRequest): FactorialTrial
   const strip = ({ contrast: _contrast, centred: _centred, ...rest }: Entry): FactorialMean => Object.freeze(rest);
   const difference = (a: Float64Array, b: Float64Array) => Float64Array.from(a, (value, i) => value - b[i]!);
 
-  const compare = (entries: readonly Entry[], methods: readonly MeanSeparationMethod[], control?: string): StratumComparisons => {
+  const compare = (entries: readonly Entry[], methods: readonly MeanSeparationMethod[], control?: string, by: FactorialFit = fit): StratumComparisons => {
     const k = entries.length;
     const covariance = new Float64Array(k * k);
-    for (let i = 0; i < k; i++) for (let j = i; j < k; j++) covariance[i * k + j] = covariance[j * k + i] = fit.covariance(entries[i]!.contrast, entries[j]!.contrast);
+    for (let i = 0; i < k; i++) for (let j = i; j < k; j++) covariance[i * k + j] = covariance[j * k + i] = by.covariance(entries[i]!.contrast, entries[j]!.contrast);
     const first = difference(entries[1]!.contrast, entries[0]!.contrast);
-    const df = fit.estimate(first).df;
+    const df = by.estimate(first).df;
     const separation = separateMeans({
       treatments: entries.map((e) => e.treatment),
       // Centred means: at 1e12 the shifted means have lost the digits their differences need.
@@ -209,7 +209,7 @@ export function analyseFactorialTrial(request: FactorialRequest): FactorialTrial
       methods: control !== undefined && entries.some((e) => e.treatment === control) ? methods : methods.filter((m) => m !== 'dunnett'),
       ...(control !== undefined ? { control } : {}),
     });
-    return Object.freeze({ ...separation, errorTerm: fit.errorOf(first), df });
+    return Object.freeze({ ...separation, errorTerm: by.errorOf(first), df });
   };
 
   const all = names.map((_, f) => f);
@@ -227,7 +227,15 @@ export function analyseFactorialTrial(request: FactorialRequest): FactorialTrial
   const factorComparisons = Object.fromEntries(all.map((f) => [names[f]!, compare(marginal.find((m) => m.set.length === 1 && m.set[0] === f)!.entries, methods.filter((m) => m !== 'dunnett'))]));
 
   const differences = differenceErrors(layout, fit, alpha);
-  const slices = sliceTests(layout, fit, anova, alpha, methods.filter((m) => m !== 'dunnett'), entry, compare);
+  // A slice whose differences mix strata (a whole-plot factor within a sub-plot level) has no classical F: it is
+  // tested on the mixed model with blocks fixed and whole plots random, by Kenward–Roger, as lmer + emmeans would.
+  let mixed: FactorialFit | null = null;
+  const sliceFit = (contrast: Float64Array): FactorialFit => {
+    if (!classical || sitesRandom || !fit.errorOf(contrast).includes('(Satterthwaite)')) return fit;
+    mixed ??= remlFactorialFit(layout, { sitesRandom: false, blocksFixed: true });
+    return mixed;
+  };
+  const slices = sliceTests(layout, fit, sliceFit, anova, alpha, methods.filter((m) => m !== 'dunnett'), entry, compare);
 
   // Small error degrees of freedom, stratum by stratum.
   if (classical) {
@@ -364,11 +372,12 @@ function differenceErrors(layout: FactorialLayout, fit: FactorialFit, alpha: num
 function sliceTests(
   layout: FactorialLayout,
   fit: FactorialFit,
+  sliceFit: (contrast: Float64Array) => FactorialFit,
   anova: readonly FactorialAnovaRow[],
   alpha: number,
   methods: readonly MeanSeparationMethod[],
-  entry: (which: readonly number[], levels: readonly number[]) => Entry,
-  compare: (entries: readonly Entry[], methods: readonly MeanSeparationMethod[]) => StratumComparisons,
+  entry: (which: readonly number[], levels: readonly number[], by?: FactorialFit) => Entry,
+  compare: (entries: readonly Entry[], methods: readonly MeanSeparationMethod[], control?: string, by?: FactorialFit) => StratumComparisons,
 ): SliceTest[] {
   const slices: SliceTest[] = [];
   const names = layout.factors.map((factor) => factor.name);
@@ -377,10 +386,12 @@ function sliceTests(
     if (!row || row.p === null || row.p >= alpha) continue;
     for (const [f, g] of [set, [...set].reverse()] as [number, number][]) {
       layout.factors[g]!.levels.forEach((level, l) => {
-        const entries = layout.factors[f]!.levels.map((label, a) => ({ ...entry(set, f < g ? [a, l] : [l, a]), treatment: label }));
+        const levelsAt = (a: number) => (f < g ? [a, l] : [l, a]);
+        const by = sliceFit(Float64Array.from(fit.mean(set, levelsAt(1)), (value, i) => value - fit.mean(set, levelsAt(0))[i]!));
+        const entries = layout.factors[f]!.levels.map((label, a) => ({ ...entry(set, levelsAt(a), by), treatment: label }));
         const rows = entries.slice(1).map((e) => Float64Array.from(e.contrast, (value, i) => value - entries[0]!.contrast[i]!));
-        const test = fit.test(rows);
-        const separated = compare(entries, methods);
+        const test = by.test(rows);
+        const separated = compare(entries, methods, undefined, by);
         slices.push(
           Object.freeze({
             factor: names[f]!,
