@@ -1,11 +1,12 @@
-import { Button, HTMLSelect, InputGroup } from '@blueprintjs/core';
-import { RATE_UNIT_IDS, type FactorLevel, type FactorLevelInput, type FactorsInput, type RateUnitId, type TrialDetail } from '@friable/contracts';
+import { Button, InputGroup } from '@blueprintjs/core';
+import { type FactorLevel, type FactorLevelInput, type FactorsInput, type RateUnitId, type TrialDetail } from '@friable/contracts';
 import { appliedUnit, DESIGN_RULES } from '@friable/field';
 import { useState } from 'react';
 import { NumberText } from '../../../components/number-text';
 import { Field } from '../../../components/field-errors';
 import { FormDialog } from '../../../components/form-dialog';
-import { numberInputText, parseNumberInput, rateUnitLabels } from '../../../lib/format';
+import { RateUnitSelect } from '../../../components/rate-unit-select';
+import { numberInputText, parseNumberInput } from '../../../lib/format';
 import { usePutFactors } from '../api/put-factors';
 import { appliedToWords, factorRole, orderedFactors } from './factor-roles';
 
@@ -88,14 +89,7 @@ export function FactorsDialog({ trial, onClose }: { trial: TrialDetail; onClose:
                   <NumberText id={`fr-field-${at}.rateValue`} value={level.rateText} onChange={(text) => changeLevel(index, levelIndex, { rateText: text })} placeholder="none" />
                 </Field>
                 <Field label={`Level ${levelIndex + 1} rate unit`} field={`${at}.rateUnit`} error={put.error}>
-                  <HTMLSelect id={`fr-field-${at}.rateUnit`} value={level.rateUnit} onChange={(e) => changeLevel(index, levelIndex, { rateUnit: e.target.value as RateUnitId | '' })} fill>
-                    <option value="">no rate</option>
-                    {RATE_UNIT_IDS.map((unit) => (
-                      <option key={unit} value={unit}>
-                        {rateUnitLabels[unit]}
-                      </option>
-                    ))}
-                  </HTMLSelect>
+                  <RateUnitSelect<RateUnitId | ''> id={`fr-field-${at}.rateUnit`} value={level.rateUnit} onChange={(unit) => changeLevel(index, levelIndex, { rateUnit: unit })} noneText="no rate" />
                 </Field>
               </div>
             );
