@@ -43,17 +43,21 @@ export function LevelAmounts({ trial, site, amounts }: { trial: TrialDetail; sit
             return (
               <tr key={level.id}>
                 <td data-label="Level">
-                  <span className="fr-muted">{factor.name}:</span> <span className="fr-code">{level.code}</span> {level.name}
+                  <span>
+                    <span className="fr-muted">{factor.name}:</span> <span className="fr-code">{level.code}</span> {level.name}
+                  </span>
                 </td>
                 <td data-label="Rate">{formatRate(level.rateValue, level.rateUnit)}</td>
                 <td data-label="Goes on">
-                  {unit === 'plot' ? 'each plot' : `each ${unit}`}
-                  {amount && amount.plotsPerUnit > 1 && (
-                    <span className="fr-muted">
-                      {' '}
-                      ({formatNumber(amount.plotsPerUnit, 0)} plots, {formatArea(amount.unitAreaM2)})
-                    </span>
-                  )}
+                  <span>
+                    {unit === 'plot' ? 'each plot' : `each ${unit}`}
+                    {amount && amount.plotsPerUnit > 1 && (
+                      <span className="fr-muted">
+                        {' '}
+                        ({formatNumber(amount.plotsPerUnit, 0)} plots, {formatArea(amount.unitAreaM2)})
+                      </span>
+                    )}
+                  </span>
                 </td>
                 {grams && <td data-label="Per unit (g · oz)">{dose ? both(dose.grams, 'g', dose.ounces, 'oz') : <span className="fr-muted">nothing to apply</span>}</td>}
                 {litres && <td data-label="Per unit (L · gal)">{dose ? both(dose.litres, 'L', dose.gallons, 'gal') : <span className="fr-muted">nothing to apply</span>}</td>}
