@@ -12,11 +12,12 @@ import { PlotLegend, PlotMap } from './plot-map';
 export function SiteSheets({ trial, site, plots, swatches }: { trial: TrialDetail; site: Site; plots: Plot[]; swatches: Map<number, TreatmentSwatch> }) {
   const ordered = [...plots].sort((a, b) => a.block - b.block || a.position - b.position);
   const treatmentName = (id: number) => trial.treatments.find((t) => t.id === id)?.name ?? '';
+  const units = unitColumns(plots);
   return (
     <div className="fr-sheets">
       <section className="fr-sheet">
         <SheetHeading trial={trial} site={site} title="Plot plan" />
-        <PlotMap plots={plots} treatments={trial.treatments} swatches={swatches} siteName={site.name} printed />
+        <PlotMap plots={plots} treatments={trial.treatments} factors={trial.factors} swatches={swatches} siteName={site.name} printed />
         <PlotLegend treatments={trial.treatments} swatches={swatches} />
         {trial.safetyNotes && <p className="fr-sheet__safety">Safety: {trial.safetyNotes}</p>}
       </section>
@@ -37,6 +38,9 @@ export function SiteSheets({ trial, site, plots, swatches }: { trial: TrialDetai
                   <tr>
                     <th>Plot</th>
                     <th>Block</th>
+                    {units.map((unit) => (
+                      <th key={unit.key}>{unit.header}</th>
+                    ))}
                     <th>Treatment</th>
                     {measures.map((m) => (
                       <th key={m.id}>
@@ -55,6 +59,9 @@ export function SiteSheets({ trial, site, plots, swatches }: { trial: TrialDetai
                     <tr key={plot.id}>
                       <td className="fr-sheet__plot">{plot.label}</td>
                       <td>{plot.block}</td>
+                      {units.map((unit) => (
+                        <td key={unit.key}>{unit.value(plot)}</td>
+                      ))}
                       <td>{plot.treatmentCode}</td>
                       {measures.map((m) => (
                         <td key={m.id} className="fr-sheet__blank" />
@@ -83,6 +90,12 @@ export function SiteSheets({ trial, site, plots, swatches }: { trial: TrialDetai
               <span className="fr-label__treatment">
                 {plot.treatmentCode} · {treatmentName(plot.treatmentId)}
               </span>
+              {plot.wholePlotLabel && (
+                <span className="fr-label__unit">
+                  whole plot {plot.wholePlotLabel} · sub plot {plot.subPlot}
+                  {plot.subSubPlot !== null ? ` · sub-sub plot ${plot.subSubPlot}` : ''}
+                </span>
+              )}
               <span className="fr-label__where">
                 {trial.code} · {site.name} · block {plot.block}
               </span>
@@ -92,6 +105,16 @@ export function SiteSheets({ trial, site, plots, swatches }: { trial: TrialDetai
       </section>
     </div>
   );
+}
+
+/** A split plot's identity columns on the data sheet, as the CSV template has them: whole plot, sub plot (and sub-sub plot). */
+function unitColumns(plots: Plot[]): Array<{ key: string; header: string; value: (plot: Plot) => string }> {
+  if (!plots.some((p) => p.wholePlot !== null)) return [];
+  return [
+    { key: 'whole', header: 'Whole plot', value: (p) => p.wholePlotLabel ?? '' },
+    { key: 'sub', header: 'Sub plot', value: (p) => String(p.subPlot ?? '') },
+    ...(plots.some((p) => p.subSubPlot !== null) ? [{ key: 'subsub', header: 'Sub-sub plot', value: (p: Plot) => String(p.subSubPlot ?? '') }] : []),
+  ];
 }
 
 function SheetHeading({ trial, site, title }: { trial: TrialDetail; site: Site; title: string }) {
