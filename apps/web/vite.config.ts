@@ -1,11 +1,24 @@
 import react from '@vitejs/plugin-react';
 import { fileURLToPath } from 'node:url';
+import { compression, defineAlgorithm } from 'vite-plugin-compression2';
+import { constants } from 'node:zlib';
 import { defineConfig } from 'vitest/config';
 
 const lib = (name: string) => fileURLToPath(new URL(`../../libs/${name}/src/index.ts`, import.meta.url));
 
 export default defineConfig({
-  plugins: [react()],
+  plugins: [
+    react(),
+    // Brotli and gzip copies beside every text file of the build (x.js.br, x.js.gz), made once here at
+    // the highest levels and served by the API (apps/api/src/common/web/web-app.ts). Source maps are not served.
+    compression({
+      algorithms: [defineAlgorithm('brotliCompress', { params: { [constants.BROTLI_PARAM_QUALITY]: 11 } }), defineAlgorithm('gzip', { level: 9 })],
+      include: /\.(js|mjs|css|html|svg|json|webmanifest|txt)$/,
+      exclude: /\.map$/,
+      threshold: 1024,
+      logLevel: 'silent',
+    }),
+  ],
   resolve: {
     // The shared libraries are compiled from source into the app, not from their CommonJS builds.
     alias: {
@@ -22,7 +35,8 @@ export default defineConfig({
   build: {
     outDir: 'dist',
     emptyOutDir: true,
-    sourcemap: true,
+    // Built for error triage, never referenced from the files and never served in production.
+    sourcemap: 'hidden',
     chunkSizeWarningLimit: 1500,
   },
   test: {
