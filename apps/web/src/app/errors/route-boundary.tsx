@@ -2,7 +2,7 @@ import { Button, NonIdealState } from '@blueprintjs/core';
 import { QueryErrorResetBoundary } from '@tanstack/react-query';
 import { Suspense, useState, type ReactNode } from 'react';
 import { ErrorBoundary, type FallbackProps } from 'react-error-boundary';
-import { useLocation, useRouteError } from 'react-router-dom';
+import { useLocation } from 'react-router-dom';
 import { LoadingState } from '../../components/states';
 import { browserPage, isStaleChunkError, reloadOnceForNewVersion } from './stale-chunk';
 
@@ -49,8 +49,3 @@ export function RouteFailure({ error, resetErrorBoundary }: FallbackProps) {
   );
 }
 
-/** The router's own last resort (a failure outside every page's boundary, in a layout): the same words, and a reload to try again. */
-export function RouterFailure() {
-  const error = useRouteError();
-  return <RouteFailure error={error} resetErrorBoundary={() => browserPage.reload()} />;
-}
