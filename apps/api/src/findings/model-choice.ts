@@ -96,9 +96,10 @@ export function chooseModel(facts: ModelFacts, requested?: FindingsAnalysis): Mo
   const defaultChoice = defaultAnalysis(facts);
   const analysis = requested ?? defaultChoice;
   const options = FINDINGS_ANALYSES.map((a) => optionOf(a, facts, a === defaultChoice));
+  const sentence = (text: string) => text.charAt(0).toUpperCase() + text.slice(1);
   const why =
     analysis === defaultChoice
-      ? whyOf(analysis, facts)
-      : `${whyOf(analysis, facts)} The analysis made for this measure is ${LABELS[defaultChoice].toLowerCase()}: ${whyOf(defaultChoice, facts)}`;
+      ? sentence(whyOf(analysis, facts))
+      : `${sentence(whyOf(analysis, facts))} The analysis made for this measure is ${LABELS[defaultChoice].toLowerCase()}: ${whyOf(defaultChoice, facts)}`;
   return { analysis, defaultAnalysis: defaultChoice, why, options };
 }

@@ -8,6 +8,9 @@ const withAlpha = (hex: string, alpha: number) => {
   return `rgba(${(n >> 16) & 255}, ${(n >> 8) & 255}, ${n & 255}, ${alpha})`;
 };
 
+// The legend sits under the axis title, not on it.
+const BELOW = { height: 380, margin: { l: 56, r: 16, t: 40, b: 64 }, legend: { orientation: 'h' as const, y: -0.3, yanchor: 'top' as const } };
+
 /** A step curve per treatment with its band shaded between the limits (hv steps, as the estimate is right-continuous). */
 function curveTraces(spec: Extract<ModelChartSpec, { chart: 'not-drained' }>, styles: ReadonlyMap<string, TreatmentStyle>): Data[] {
   return spec.curves.flatMap((curve) => {
@@ -55,7 +58,7 @@ export default function ModelChart({ spec, styles }: { spec: ModelChartSpec; sty
           label={spec.title}
           title={spec.title}
           data={curveTraces(spec, styles)}
-          layout={{ xaxis: { title: { text: `Time (${spec.unit})` }, rangemode: 'tozero' }, yaxis: { title: { text: 'Share not yet drained' }, tickformat: '.0%', range: [0, 1.05] } }}
+          layout={{ ...BELOW, xaxis: { title: { text: `Time (${spec.unit})` }, rangemode: 'tozero' }, yaxis: { title: { text: 'Share not yet drained' }, tickformat: '.0%', range: [0, 1.05] } }}
         />
       );
     case 'ratios':
@@ -106,7 +109,7 @@ export default function ModelChart({ spec, styles }: { spec: ModelChartSpec; sty
               error_y: { type: 'data', array: series.points.map((p) => p.se), visible: true, thickness: 1, color: style.colour },
             } as Data;
           })}
-          layout={{ xaxis: { title: { text: 'Day' }, tickvals: spec.days, ticktext: spec.dayLabels }, yaxis: { title: { text: spec.axis } } }}
+          layout={{ ...BELOW, xaxis: { title: { text: 'Day' }, tickvals: spec.days, ticktext: spec.dayLabels }, yaxis: { title: { text: spec.axis } } }}
         />
       );
     case 'shares':

@@ -81,7 +81,7 @@ export function LikelihoodRatioTable({ tests, label }: { tests: LikelihoodRatioT
 /** Ratios of each treatment to the control with simultaneous 95 % limits and adjusted p-values. */
 export function RatioTable({ ratios, names, label, adjustment }: { ratios: ControlRatio[]; names: Record<string, string>; label: string; adjustment: string }) {
   return (
-    <>
+    <div>
       <ModelTable label={label} head={['Treatment', label, '95 % interval', 'p (adjusted)', '']}>
         {ratios.map((row) => (
           <tr key={row.treatment}>
@@ -95,7 +95,7 @@ export function RatioTable({ ratios, names, label, adjustment }: { ratios: Contr
         ))}
       </ModelTable>
       <p className="fr-muted fr-small">{adjustment}</p>
-    </>
+    </div>
   );
 }
 
