@@ -79,7 +79,7 @@ describe('Findings: the model made for each measure', () => {
 
       // Water retained has a day-0 baseline: adjusted for it by default; crumble score by proportional odds.
       await page.getByLabel('Measure').selectOption({ label: 'water retained' });
-      await page.getByRole('heading', { name: 'The baseline' }).waitFor();
+      await page.getByRole('heading', { name: 'The baseline', exact: true }).waitFor();
       expect(await page.getByText('Equal slopes across treatments').isVisible()).toBe(true);
       await page.getByRole('table', { name: 'Treatment means' }).waitFor();
       await screenshot(page, `findings-ancova-${viewport.name}`);
