@@ -24,6 +24,7 @@ import { authConfig } from './config/auth.config';
 import { databaseConfig } from './config/database.config';
 import { mailConfig } from './config/mail.config';
 import { sequelizeOptions } from './database/sequelize-options';
+import { DataStampsModule } from './data-stamps/data-stamps.module';
 import { DevModule } from './dev/dev.module';
 import { HealthModule } from './health/health.module';
 import { InvitationsModule } from './invitations/invitations.module';
@@ -62,6 +63,7 @@ import { ReportsModule } from './reports/reports.module';
         errorMessage: 'Too many requests from this address. Please wait a minute and try again.',
       }),
     }),
+    DataStampsModule,
     AuthModule,
     UsersModule,
     StatsModule,
