@@ -7,9 +7,12 @@ import './styles/field.css';
 import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
 import { App } from './app/app';
+import { registerServiceWorker } from './lib/service-worker';
 
 createRoot(document.getElementById('root') as HTMLElement).render(
   <StrictMode>
     <App />
   </StrictMode>,
 );
+
+registerServiceWorker();

@@ -10,7 +10,7 @@ import { FindingsRoute, QuickAnalysisRoute, ReportRoute } from './routes/finding
 import { NotFoundRoute } from './routes/not-found';
 import { PlannerRoute } from './routes/planner';
 import { SignInRoute } from './routes/sign-in';
-import { AcceptInvitationRoute, IntakeRoute, LedgerRoute, PlotPlanRoute, ProtocolRoute, SitesRoute, TeamRoute } from './routes/trial-sections';
+import { AcceptInvitationRoute, IntakeRoute, LedgerRoute, PlotPlanRoute, ProtocolRoute, SitesRoute, TeamRoute, WalkRoute } from './routes/trial-sections';
 import { TrialsRoute } from './routes/trials';
 import { PeopleRoute } from './routes/people';
 
@@ -39,9 +39,9 @@ export const routes: RouteObject[] = [
           { path: paths.trialTeam.path, element: <TeamRoute /> },
           { path: paths.trialIntake.path, element: <IntakeRoute /> },
           { path: paths.trialLedger.path, element: <LedgerRoute /> },
+          { path: paths.trialWalk.path, element: <WalkRoute /> },
           { path: paths.trialFindings.path, element: <FindingsRoute /> },
           { path: paths.trialReport.path, element: <ReportRoute /> },
-          { path: paths.trialActivity.path, element: <ActivityRoute /> },
           { path: paths.trialActivity.path, element: <ActivityRoute /> },
         ],
       },
