@@ -7,9 +7,12 @@ const lib = (name: string) => fileURLToPath(new URL(`../../libs/${name}/src/inde
 
 /**
  * The service worker that keeps the app shell on the phone, so the Round walk opens without signal:
- * every built script, style and font is precached, a page address is answered with index.html, and
- * /api is never cached (values wait in IndexedDB instead). Registered by lib/service-worker.ts (no
- * inline script, so the Content-Security-Policy stays as it is; worker-src 'self' allows it).
+ * every built script, style and font is precached and a page address is answered with index.html.
+ * Of the API only what the Round walk reads is kept (who is signed in, the trial, its plots and
+ * values), network first, so a walk reloaded without signal still opens with the last known data;
+ * nothing written is cached (entries wait in IndexedDB), and signing out deletes the cache
+ * (lib/session.ts). Registered by lib/service-worker.ts (no inline script, so the
+ * Content-Security-Policy stays as it is; worker-src 'self' allows it).
  */
 const serviceWorker = VitePWA({
   injectRegister: null,
@@ -22,6 +25,19 @@ const serviceWorker = VitePWA({
     navigateFallback: '/index.html',
     navigateFallbackDenylist: [/^\/api\//],
     cleanupOutdatedCaches: true,
+    runtimeCaching: [
+      {
+        urlPattern: ({ url, request }) =>
+          request.method === 'GET' && /^\/api\/(auth\/me|trials|trials\/\d+|trials\/\d+\/(plots|observations))$/.test(url.pathname),
+        handler: 'NetworkFirst',
+        options: {
+          cacheName: 'friable-walk-data',
+          networkTimeoutSeconds: 6,
+          expiration: { maxEntries: 200, maxAgeSeconds: 14 * 24 * 3600 },
+          cacheableResponse: { statuses: [200] },
+        },
+      },
+    ],
     clientsClaim: true,
     skipWaiting: true,
   },

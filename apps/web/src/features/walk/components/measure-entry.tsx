@@ -106,6 +106,7 @@ export function MeasureEntry({
       <div className="fr-walk-measure__row">
         <InputGroup
           id={id}
+          aria-label={heading}
           size="large"
           className="fr-walk-measure__input"
           inputMode="decimal"

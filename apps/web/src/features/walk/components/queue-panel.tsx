@@ -7,11 +7,14 @@ import type { SenderState } from '../hooks/use-sender';
 const entries = (n: number) => `${formatNumber(n, 0)} ${n === 1 ? 'entry' : 'entries'}`;
 
 /** "3 entries waiting to be sent", whether there is a connection, and the last try in words. */
-export function QueueStatus({ waiting, sender }: { waiting: number; sender: SenderState }) {
+export function QueueStatus({ waiting, needYou, sender }: { waiting: number; needYou: number; sender: SenderState }) {
   const stopped = sender.last?.stopped && waiting > 0;
   return (
-    <div className={`fr-walk-status${waiting > 0 ? ' fr-walk-status--waiting' : ''}`} role="status" aria-live="polite">
-      <span className="fr-walk-status__count">{waiting === 0 ? 'Everything is sent' : `${entries(waiting)} waiting to be sent`}</span>
+    <div className={`fr-walk-status${waiting + needYou > 0 ? ' fr-walk-status--waiting' : ''}`} role="status" aria-live="polite">
+      <span className="fr-walk-status__count">
+        {waiting === 0 && needYou === 0 ? 'Everything is sent' : waiting > 0 ? `${entries(waiting)} waiting to be sent` : ''}
+        {needYou > 0 ? `${waiting > 0 ? ' · ' : ''}${entries(needYou)} need${needYou === 1 ? 's' : ''} you (below)` : ''}
+      </span>
       <span className="fr-muted fr-small">
         {!sender.online || stopped ? 'No connection: entries stay on this phone and go when the connection returns.' : sender.sending ? 'Sending…' : ''}
       </span>

@@ -1,8 +1,8 @@
 import { Button, Callout, HTMLSelect, ProgressBar, Tag } from '@blueprintjs/core';
 import type { AssessmentRound, Measure, Observation, Plot, Site, TrialDetail } from '@friable/contracts';
 import { findUnit } from '@friable/field';
-import { useQueries } from '@tanstack/react-query';
-import { useMemo, useRef } from 'react';
+import { useQueries, useQueryClient } from '@tanstack/react-query';
+import { useEffect, useMemo, useRef } from 'react';
 import { useSearchParams } from 'react-router-dom';
 import { EmptyState, ErrorState, LoadingState } from '../../../components/states';
 import { formatNumber } from '../../../lib/format';
@@ -10,6 +10,7 @@ import { measureHeading } from '../../../lib/measure-heading';
 import { cellText } from '../../../lib/observation-text';
 import { observationsQueryOptions, useObservations } from '../../../lib/api/get-observations';
 import { useSitePlots } from '../../../lib/api/get-site-plots';
+import { onServiceWorkerControl } from '../../../lib/service-worker';
 import { valueAccess } from '../../../lib/value-access';
 import { useDrainTimers } from '../hooks/use-drain-timers';
 import { useFieldQueue } from '../hooks/use-field-queue';
@@ -44,6 +45,9 @@ function chooseRound(rounds: AssessmentRound[], requested: string | null): Asses
  */
 export function WalkPage({ trial }: { trial: TrialDetail }) {
   const [params, setParams] = useSearchParams();
+  const queryClient = useQueryClient();
+  // Once the offline helper runs, what the walk shows is loaded again through it, so it is kept for a walk without signal.
+  useEffect(() => onServiceWorkerControl(() => void queryClient.invalidateQueries()), [queryClient]);
   const rounds = useMemo(() => [...trial.rounds].sort((a, b) => a.dayOffset - b.dayOffset), [trial.rounds]);
   const site = chooseSite(trial, params.get('site'));
   const round = chooseRound(rounds, params.get('round'));
@@ -177,7 +181,7 @@ function SiteRoundWalk({
           </HTMLSelect>
         </label>
       </div>
-      <QueueStatus waiting={queue.waiting} sender={sender} />
+      <QueueStatus waiting={queue.waiting} needYou={queue.values.filter((v) => v.state !== 'waiting').length + queue.photos.filter((p) => p.state === 'refused').length} sender={sender} />
       <QueueProblems values={queue.values} photos={queue.photos} onSettled={() => void sender.send()} />
       <RunningTimers
         timers={timers.timers}
