@@ -1,9 +1,10 @@
-import { Button, Callout, HTMLSelect, ProgressBar, Tag } from '@blueprintjs/core';
+import { Button, Callout, ProgressBar, Tag } from '@blueprintjs/core';
 import type { AssessmentRound, Measure, Observation, Plot, Site, TrialDetail } from '@friable/contracts';
 import { findUnit } from '@friable/field';
 import { useQueries, useQueryClient } from '@tanstack/react-query';
 import { useEffect, useMemo, useRef } from 'react';
 import { useSearchParams } from 'react-router-dom';
+import { RoundPicker, SitePicker } from '../../../components/site-round-pickers';
 import { EmptyState, ErrorState, LoadingState } from '../../../components/states';
 import { formatNumber } from '../../../lib/format';
 import { measureHeading } from '../../../lib/measure-heading';
@@ -159,27 +160,8 @@ function SiteRoundWalk({
   return (
     <div className="fr-walk">
       <div className="fr-walk__pickers">
-        <label className="fr-site-picker">
-          <span>Site</span>
-          <HTMLSelect aria-label="Site" value={site.id} onChange={(event) => pick({ site: Number(event.target.value) })}>
-            {trial.sites.map((s) => (
-              <option key={s.id} value={s.id}>
-                {s.name}
-                {trial.mySiteIds.includes(s.id) ? ' (your site)' : ''}
-              </option>
-            ))}
-          </HTMLSelect>
-        </label>
-        <label className="fr-site-picker">
-          <span>Round</span>
-          <HTMLSelect aria-label="Round" value={round.id} onChange={(event) => pick({ round: Number(event.target.value) })}>
-            {rounds.map((r) => (
-              <option key={r.id} value={r.id}>
-                {r.label}
-              </option>
-            ))}
-          </HTMLSelect>
-        </label>
+        <SitePicker trial={trial} value={site.id} onChange={(siteId) => pick({ site: siteId })} />
+        <RoundPicker rounds={rounds} value={round.id} onChange={(roundId) => pick({ round: roundId ?? undefined })} />
       </div>
       <QueueStatus waiting={queue.waiting} needYou={queue.values.filter((v) => v.state !== 'waiting').length + queue.photos.filter((p) => p.state === 'refused').length} sender={sender} />
       <QueueProblems values={queue.values} photos={queue.photos} onSettled={() => void sender.send()} />
