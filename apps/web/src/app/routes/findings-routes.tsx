@@ -1,5 +1,6 @@
 import { lazy, Suspense } from 'react';
 import { LoadingState } from '../../components/states';
+import { useAuth } from '../../features/auth/hooks/auth-context';
 import { useTrialOutlet } from '../layouts/trial-layout';
 
 // The Findings pages load with their route (their plots load later still, only when drawn).
@@ -17,9 +18,10 @@ export function QuickAnalysisRoute() {
 
 export function FindingsRoute() {
   const { trial } = useTrialOutlet();
+  const { user } = useAuth();
   return (
     <Suspense fallback={<LoadingState what="the Findings" />}>
-      <FindingsPage trial={trial} />
+      <FindingsPage trial={trial} meId={user?.id} />
     </Suspense>
   );
 }
