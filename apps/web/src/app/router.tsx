@@ -5,6 +5,7 @@ import { OutboxPage } from '../features/outbox/components/outbox-page';
 import { RateCalculatorPage } from '../features/rates/components/rate-calculator-page';
 import { AppLayout } from './layouts/app-layout';
 import { TrialLayout } from './layouts/trial-layout';
+import { AccountRoute, ForgotPasswordRoute, ResetPasswordRoute } from './routes/account';
 import { ActivityRoute } from './routes/activity';
 import { FindingsRoute, QuickAnalysisRoute, ReportRoute } from './routes/findings-routes';
 import { NotFoundRoute } from './routes/not-found';
@@ -18,6 +19,8 @@ export const routes: RouteObject[] = [
   { path: paths.signIn.path, element: <SignInRoute /> },
   // Opened from an e-mail by someone who may not have an account yet.
   { path: paths.acceptInvitation.path, element: <AcceptInvitationRoute /> },
+  { path: paths.forgotPassword.path, element: <ForgotPasswordRoute /> },
+  { path: paths.resetPassword.path, element: <ResetPasswordRoute /> },
   {
     path: paths.home.path,
     element: (
@@ -50,6 +53,7 @@ export const routes: RouteObject[] = [
       { path: paths.planner.path, element: <PlannerRoute /> },
       { path: paths.outbox.path, element: <OutboxPage /> },
       { path: paths.people.path, element: <PeopleRoute /> },
+      { path: paths.account.path, element: <AccountRoute /> },
       { path: '*', element: <NotFoundRoute /> },
     ],
   },

@@ -1,7 +1,7 @@
-import { Checkbox, HTMLSelect } from '@blueprintjs/core';
+import { Checkbox, FormGroup, HTMLSelect } from '@blueprintjs/core';
 import type { TrialDetail, TrialRole } from '@friable/contracts';
 import { useState } from 'react';
-import { Field } from '../../../components/field-errors';
+import { fieldError } from '../../../components/field-errors';
 import { FormDialog } from '../../../components/form-dialog';
 import { roleLabels } from '../../../lib/format';
 import { useUpdateMember } from '../api/change-member';
@@ -25,23 +25,24 @@ export function MemberDialog({ trial, person, onClose }: { trial: TrialDetail; p
       shownFields={['role', 'siteIds']}
     >
       <p className="fr-muted">The change takes effect at once, and {person.name} gets an e-mail saying what changed.</p>
-      <Field label="Role" field="role" error={update.error}>
-        <HTMLSelect id="fr-field-role" value={role} onChange={(e) => setRole(e.currentTarget.value as TrialRole)} fill>
+      {/* Own ids: the invitation form on the same page has a role field of its own. */}
+      <FormGroup label="Role" labelFor="fr-member-role" helperText={fieldError(update.error, 'role')} intent={fieldError(update.error, 'role') ? 'danger' : 'none'}>
+        <HTMLSelect id="fr-member-role" value={role} onChange={(e) => setRole(e.currentTarget.value as TrialRole)} fill>
           {(['investigator', 'collaborator', 'reviewer'] as const).map((r) => (
             <option key={r} value={r}>
               {roleLabels[r]}
             </option>
           ))}
         </HTMLSelect>
-      </Field>
+      </FormGroup>
       {role === 'collaborator' && (
-        <Field label="Sites" field="siteIds" error={update.error} help="A collaborator records data at the sites ticked here.">
-          <div id="fr-field-siteIds" role="group" aria-label="Sites">
+        <FormGroup label="Sites" helperText={fieldError(update.error, 'siteIds') ?? 'A collaborator records data at the sites ticked here.'} intent={fieldError(update.error, 'siteIds') ? 'danger' : 'none'}>
+          <div role="group" aria-label="Sites">
             {trial.sites.map((site) => (
               <Checkbox key={site.id} label={site.name} checked={siteIds.includes(site.id)} onChange={() => toggle(site.id)} />
             ))}
           </div>
-        </Field>
+        </FormGroup>
       )}
     </FormDialog>
   );
