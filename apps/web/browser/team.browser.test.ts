@@ -55,7 +55,7 @@ describe('inviting a collaborator from the Team page', () => {
     await session.page.goto(`${baseUrl()}/trials/${trialId}/team`);
     await session.page.getByRole('table', { name: 'Members' }).waitFor();
     await session.page.getByLabel('E-mail').fill(invitee);
-    await session.page.getByLabel('Site').selectOption({ label: siteName });
+    await session.page.getByLabel('Site', { exact: true }).selectOption({ label: siteName });
     await session.page.getByRole('button', { name: 'Send invitation' }).click();
     await session.page.getByText(`Invitation sent to ${invitee}.`).waitFor();
     await session.page.getByRole('region', { name: 'Pending invitations' }).getByText(invitee).waitFor();
