@@ -12,7 +12,7 @@ const base = {
 };
 
 describe('PlotPlanPage', () => {
-  beforeEach(() => window.localStorage.setItem('friable.accessToken', 'token'));
+  beforeEach(() => window.localStorage.setItem('friable.signedIn', '1'));
   afterEach(() => vi.unstubAllGlobals());
 
   it('starts a collaborator on their own site, with the map, legend and amounts per plot', async () => {
