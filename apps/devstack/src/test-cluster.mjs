@@ -14,5 +14,5 @@ ensureDebianPackages(['galera-4', 'redis-server', 'rsync'], {
   probe: () => existsSync('/usr/lib/galera/libgalera_smm.so') && existsSync('/usr/bin/redis-server') && commandExists('rsync'),
 });
 compileTypeScript();
-const code = await runAsync('npm', ['exec', '--', 'vitest', 'run', '--config', 'vitest.cluster.config.mjs', ...process.argv.slice(2)], { cwd: resolve(repoRoot, 'apps/devstack') });
+const code = await runAsync('npm', ['exec', '--', 'vitest', 'run', '--config', 'vitest.cluster.config.mjs', 'cluster/cluster.test.mjs', ...process.argv.slice(2)], { cwd: resolve(repoRoot, 'apps/devstack') });
 process.exit(code);
