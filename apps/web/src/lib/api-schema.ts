@@ -558,7 +558,7 @@ export interface paths {
         };
         /**
          * The analysis of one measure and round, at one site or all sites combined
-         * @description The same body as POST /api/stats/anova on the stored decimal text (design from the trial; several sites combined: multisite-rcbd), plus `context`: the observations in the order given to the engine (residual index), censoring, missing values, % of control, the rank test (Friedman for blocked designs, blocks = site × block when sites are combined; Kruskal–Wallis otherwise), the not-drained curve for a time with a cut-off, the means over time and the data hash.
+         * @description The same body as POST /api/stats/anova on the stored decimal text (design from the trial; several sites combined: multisite-rcbd), plus `context`: the observations in the order given to the engine (residual index), censoring, missing values, % of control, the rank test (Friedman for blocked designs, blocks = site × block when sites are combined; Kruskal–Wallis otherwise), the not-drained curve for a time with a cut-off, the means over time and the data hash. Answers are kept until the next write to the trial (through any API instance).
          */
         get: operations["FindingsController_get"];
         put?: never;
