@@ -114,6 +114,8 @@ describe('an investigator designs a split plot in the browser', () => {
     await small.getByText(oneDf, { exact: false }).waitFor();
     await expect(page.getByRole('list', { name: 'Error strata at Ashgrove plots' }).getByText('Whole-plot error: 1 df').isVisible()).resolves.toBe(true);
     await expect(page.getByRole('list', { name: 'Error strata at Tannery Row beds' }).getByText('Whole-plot error: 3 df').isVisible()).resolves.toBe(true);
+    // A whole plot is its 3 sub plots side by side: 3 × 1 m².
+    await expect(small.getByText('3 plots side by side, 3 m²', { exact: false }).isVisible()).resolves.toBe(true);
 
     for (const name of ['Tannery Row beds', 'Ashgrove plots']) {
       await page.getByRole('button', { name: `Randomize ${name}`, exact: true }).click();
@@ -174,7 +176,8 @@ describe('an investigator designs a split plot in the browser', () => {
     expect(await sideways(phonePage)).toBeLessThanOrEqual(0);
     await screenshot(phonePage, 'split-plot-protocol-phone');
     await phone.close();
-  });
+    // The whole design by hand, twice over (laptop and phone): more than the default minute on a loaded machine.
+  }, 150_000);
 
   it('shows the demo split plot FW-MULCH-27 to its reviewer, whole plots outlined at both gardens', async () => {
     await signIn(session.page, 'reviewer@example.org');
