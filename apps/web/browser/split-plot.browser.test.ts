@@ -127,6 +127,8 @@ describe('an investigator designs a split plot in the browser', () => {
     // The guardrail stands on the Protocol before the trial starts.
     await page.getByRole('link', { name: 'Protocol', exact: true }).click();
     await page.getByRole('list', { name: 'Design warnings' }).getByText(`Ashgrove plots: ${oneDf}`, { exact: false }).waitFor();
+    // Each level's amount per unit it goes on, at each site: 2.5 cm over 3 m² = 75 L per whole plot.
+    await page.getByLabel('Factors', { exact: true }).getByText('at Tannery Row beds: 75 L (19.8 gal) per whole plot', { exact: false }).waitFor();
     await screenshot(page, 'split-plot-protocol');
 
     // Plot plan: whole plots outlined, each holding one sub plot of every mulch under one compost level.
