@@ -7,7 +7,9 @@ import './styles/field.css';
 import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
 import { App } from './app/app';
+import { configureIcons } from './app/icons';
 
+configureIcons();
 createRoot(document.getElementById('root') as HTMLElement).render(
   <StrictMode>
     <App />

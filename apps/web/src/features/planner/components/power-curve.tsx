@@ -1,8 +1,6 @@
-import Plotly from 'plotly.js-dist-min';
-import createPlotlyComponent from 'react-plotly.js/factory';
+import { Plot } from '../../../lib/plotly';
 
-// The minified Plotly bundle is large: this file is only ever loaded lazily, by the Planner.
-const Plot = createPlotlyComponent(Plotly);
+// Plotly is large: this file is only ever loaded lazily, by the Planner.
 
 const clay = '#b5603d';
 const sage = '#7d9470';
