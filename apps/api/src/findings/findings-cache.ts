@@ -1,4 +1,4 @@
-import type { Findings } from '@friable/contracts';
+import type { FindingsAnswer } from '@friable/contracts';
 import { Injectable } from '@nestjs/common';
 import { LRUCache } from 'lru-cache';
 import { requireInteger } from '../config/validate-environment';
@@ -11,7 +11,7 @@ interface CachedFindings {
   stamp: string;
   /** The snapshot hash of the analysed data (context.dataHash). */
   dataHash: string;
-  answer: Findings;
+  answer: FindingsAnswer;
 }
 
 /** The cache key: trial, measure, round, site and every analysis option (choices left out stay out). */
@@ -35,13 +35,13 @@ export class FindingsCache {
     maxSize: requireInteger(process.env, 'FINDINGS_CACHE_MB', 64, 1, 4096) * 1_048_576,
     sizeCalculation: (entry) => Math.max(1, JSON.stringify(entry.answer).length),
   });
-  private readonly pending = new Map<string, Promise<Findings>>();
+  private readonly pending = new Map<string, Promise<FindingsAnswer>>();
   /** Hits and misses since start (read by the benchmark through the log, and by tests). */
   readonly counts = { hits: 0, misses: 0 };
 
   constructor(private readonly stamps: DataStampsService) {}
 
-  async answer(trialId: number, query: FindingsQueryDto, compute: () => Promise<Findings>): Promise<Findings> {
+  async answer(trialId: number, query: FindingsQueryDto, compute: () => Promise<FindingsAnswer>): Promise<FindingsAnswer> {
     const key = findingsKey(trialId, query);
     // The stamp is read before the data: an answer is never stored under a stamp newer than its data.
     const stamp = await this.stamps.read(trialId);

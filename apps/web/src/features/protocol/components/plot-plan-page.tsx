@@ -1,9 +1,10 @@
-import { Button, Callout, HTMLSelect, Section, SectionCard } from '@blueprintjs/core';
+import { Button, Callout, Section, SectionCard } from '@blueprintjs/core';
 import type { Site, TrialDetail } from '@friable/contracts';
 import { isFactorDesign } from '@friable/field';
 import { useMemo, useState } from 'react';
 import { useSearchParams } from 'react-router-dom';
 import { SafetyCautions } from '../../../components/safety-cautions';
+import { RoundPicker, SitePicker } from '../../../components/site-round-pickers';
 import { EmptyState, ErrorState, LoadingState } from '../../../components/states';
 import { formatArea, formatNumber } from '../../../lib/format';
 import { useAmounts } from '../api/get-amounts';
@@ -32,6 +33,9 @@ export function PlotPlanPage({ trial }: { trial: TrialDetail }) {
   const levelAmounts = useLevelAmounts(trial.id, factorDesign);
   const swatches = useMemo(() => treatmentSwatches(trial.treatments), [trial.treatments]);
   const [printLayout, setPrintLayout] = useState(false);
+  const rounds = useMemo(() => [...trial.rounds].sort((a, b) => a.dayOffset - b.dayOffset), [trial.rounds]);
+  const sheetRound = params.get('round');
+  const sheetRounds = sheetRound ? rounds.filter((r) => r.id === Number(sheetRound)) : rounds;
 
   if (!site) return <EmptyState title="No sites yet" description="Once the investigator adds a site and randomizes it, its plot plan appears here." />;
   const mine = trial.mySiteIds.includes(site.id);
@@ -39,22 +43,19 @@ export function PlotPlanPage({ trial }: { trial: TrialDetail }) {
   return (
     <div className={printLayout ? 'fr-plot-plan fr-plot-plan--print-layout' : 'fr-plot-plan'}>
       <div className="fr-plot-plan__bar fr-screen-only">
-        <label className="fr-site-picker">
-          <span>Site</span>
-          <HTMLSelect value={site.id} onChange={(e) => setParams({ site: e.target.value }, { replace: true })} aria-label="Site">
-            {trial.sites.map((s) => (
-              <option key={s.id} value={s.id}>
-                {s.name}
-                {trial.mySiteIds.includes(s.id) ? ' (your site)' : ''}
-              </option>
-            ))}
-          </HTMLSelect>
-        </label>
+        <SitePicker trial={trial} value={site.id} onChange={(siteId) => setParams({ site: String(siteId) }, { replace: true })} />
         <span className="fr-muted">
           {formatNumber(site.blocks, 0)} blocks · {formatArea(site.areaM2)} per plot{mine ? ' · your site' : ''}
         </span>
         {plots.data && plots.data.length > 0 && (
           <span className="fr-plot-plan__print">
+            <RoundPicker
+              label="Sheets for"
+              every="Every round"
+              rounds={rounds}
+              value={sheetRound ? Number(sheetRound) : null}
+              onChange={(roundId) => setParams(roundId ? { site: String(site.id), round: String(roundId) } : { site: String(site.id) }, { replace: true })}
+            />
             <Button icon={printLayout ? 'eye-open' : 'document'} text={printLayout ? 'Back to the plan' : 'Show Sheets'} onClick={() => setPrintLayout((on) => !on)} />
             <Button icon="print" intent="primary" text="Print Sheets" onClick={() => window.print()} />
           </span>
@@ -80,7 +81,7 @@ export function PlotPlanPage({ trial }: { trial: TrialDetail }) {
             </Section>
           </div>
           <div className="fr-print-only">
-            <SiteSheets trial={trial} site={site} plots={plots.data} swatches={swatches} />
+            <SiteSheets trial={trial} site={site} plots={plots.data} swatches={swatches} amounts={amounts.data ?? []} rounds={sheetRounds} />
           </div>
         </>
       )}
