@@ -74,7 +74,7 @@ describe('Ledger: observations, edits with versions, history', () => {
       [{ version: 1, value: '7' }, /^value 7 is not on the scale/],
       [{ version: 1, value: '=1+1' }, /looks like a spreadsheet formula/],
       [{ version: 1, value: '>3' }, /only a time with a cut-off can be written as >N/],
-      [{ version: 1, value: '3', missingReason: 'eaten' }, /^missingReason goes only with a missing value/],
+      [{ version: 1, value: '3', missingReason: 'eaten' }, /^reason the value is missing goes only with a missing value/],
       [{ value: '3' }, /^version must be a whole number/],
     ];
     for (const [body, message] of refusals) {

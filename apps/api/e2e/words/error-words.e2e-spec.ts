@@ -3,8 +3,8 @@ import { createOpenApiDocument } from '../../src/bootstrap';
 import { buildIntakeTrial, intakePath, upload, type IntakeTrial } from '../intake/intake-support';
 import { bearer, createTestApp, type TestApp } from '../support/test-app';
 
-/** An identifier written the way code names things: a lower-case word followed by a capital ("siteId", "scaleMin"). */
-const CAMEL_CASE = /\b[a-z]+[A-Z][a-zA-Z]*\b/;
+/** An identifier written the way code names things: a lower-case word followed by a capital ("siteId", "scaleMin"); unit symbols such as mL or kPa are not. */
+const CAMEL_CASE = /\b[a-z]{2,}[A-Z][a-zA-Z0-9]*\b/;
 /** A row or index counted from zero ("row 0", "index 0", "[0]"). */
 const ZERO_BASED = /\b(row|line|index|item|entry)\s+0\b|\[0\]/i;
 

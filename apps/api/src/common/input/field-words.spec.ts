@@ -20,5 +20,7 @@ describe('field words', () => {
     expect(inPeoplesWords('scaleMin must be below scaleMax')).toBe('lowest score must be below highest score');
     expect(inPeoplesWords('observations.0.plotLabel must be text')).toBe('plot label of item 1 of observations must be text');
     expect(inPeoplesWords('Row 3 of your file: drain time is not a number.')).toBe('Row 3 of your file: drain time is not a number.');
+    // Unit symbols are people's words already.
+    expect(inPeoplesWords('450 mL is above 400 mL; 3 kPa; 2 dS/m')).toBe('450 mL is above 400 mL; 3 kPa; 2 dS/m');
   });
 });

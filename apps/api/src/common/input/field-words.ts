@@ -62,8 +62,11 @@ export function fieldWords(identifier: string): string {
   return `${words.join(' ')}${unit}`;
 }
 
-/** An identifier written the way code names things: a lower-case word, then capitals ("siteId", "areaM2"). */
-const CODE_NAME = /\b[a-z]+(?:[A-Z][a-z0-9]*)+\b/g;
+/**
+ * An identifier written the way code names things: a lower-case word, then capitals ("siteId",
+ * "areaM2"). Unit symbols ("mL", "kPa", "dS/m") have one letter before their capital and stay.
+ */
+const CODE_NAME = /\b[a-z]{2,}(?:[A-Z][a-z0-9]*)+\b/g;
 
 /** A message with every code-style field name in it put in people's words (and a field path's dots and indexes too). */
 export function inPeoplesWords(message: string): string {
