@@ -1,23 +1,9 @@
 import type { AnovaAnswer, CensoredAnswer, Findings, ModelFindings, OrdinalAnswer, RepeatedAnswer, TrialDetail } from '@friable/contracts';
-import { spawnSync } from 'node:child_process';
-import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
-import { tmpdir } from 'node:os';
-import { join } from 'node:path';
-import JSZip from 'jszip';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { Trial } from '../../src/trials/models/trial.model';
 import { TrialMembership } from '../../src/trials/models/trial-membership.model';
 import { bearer, createPerson, createTestApp, tokenFor, type TestApp } from '../support/test-app';
-
-type RResults = Record<string, unknown> & {
-  anova?: Array<{ term: string; df: number; f: number | null }>;
-  means?: Array<{ treatment: string; round?: string; emmean: number; SE: number }>;
-  timeRatios?: Array<{ treatment: string; ratio: number; lower: number; upper: number }>;
-  oddsRatios?: Array<{ treatment: string; ratio: number }>;
-};
-
-/** Relative closeness: |a − b| ≤ tolerance × max(1, |b|). */
-const close = (actual: number, expected: number, tolerance: number) => expect(Math.abs(actual - expected)).toBeLessThanOrEqual(tolerance * Math.max(1, Math.abs(expected)));
+import { close, removeBundleFolders, runBundle } from './bundle-support';
 
 /**
  * Findings bundles: data.csv, analysis.R, friable.json and a README. A sample of the scripts is run with R from
@@ -30,36 +16,6 @@ describe('Findings bundles: the analysis reproduced by R', () => {
   let protocol: TrialDetail;
   const measure = (code: string) => protocol.measures.find((m) => m.code === code)!.id;
   const round = (label: string) => protocol.rounds.find((r) => r.label === label)!.id;
-  const directories: string[] = [];
-
-  /** Downloads the bundle, runs its script with Rscript in a scratch folder, and returns Friable's answer and R's numbers. */
-  async function runBundle<T>(query: string): Promise<{ friable: T; r: RResults; files: string[]; csv: string }> {
-    const response = await t.http
-      .get(`${base}/findings/bundle?${query}`)
-      .set(bearer(token))
-      .buffer(true)
-      .parse((res, done) => {
-        const chunks: Buffer[] = [];
-        res.on('data', (chunk: Buffer) => chunks.push(chunk));
-        res.on('end', () => done(null, Buffer.concat(chunks)));
-      });
-    expect(response.status).toBe(200);
-    expect(response.headers['content-type']).toBe('application/zip');
-    expect(response.headers['content-disposition']).toMatch(/^attachment; filename="FW-CLAY-26-[A-Z]+-Day-\d+-[a-z]+\.zip"$/);
-    const zip = await JSZip.loadAsync(response.body as Buffer);
-    const files = Object.keys(zip.files).sort();
-    const directory = mkdtempSync(join(tmpdir(), 'friable-bundle-'));
-    directories.push(directory);
-    for (const name of files) writeFileSync(join(directory, name), await zip.file(name)!.async('nodebuffer'));
-    const run = spawnSync('Rscript', ['analysis.R'], { cwd: directory, encoding: 'utf8', timeout: 120_000 });
-    if (run.status !== 0) expect.fail(`Rscript analysis.R failed (status ${run.status}; install r-base-core and the packages the README names):\n${run.stderr}`);
-    return {
-      friable: JSON.parse(readFileSync(join(directory, 'friable.json'), 'utf8')) as T,
-      r: JSON.parse(readFileSync(join(directory, 'r-results.json'), 'utf8')) as RResults,
-      files,
-      csv: readFileSync(join(directory, 'data.csv'), 'utf8'),
-    };
-  }
 
   beforeAll(async () => {
     t = await createTestApp();
@@ -71,13 +27,14 @@ describe('Findings bundles: the analysis reproduced by R', () => {
     protocol = (await t.http.get(base).set(bearer(token))).body as TrialDetail;
   });
   afterAll(async () => {
-    if (!process.env.FRIABLE_KEEP_BUNDLES) for (const directory of directories) rmSync(directory, { recursive: true, force: true });
+    removeBundleFolders();
     await t.close();
   });
 
   it('drain time (censored, all sites): survdiff with strata, survreg + drop1 and multcomp Dunnett time ratios give Friable’s numbers', async () => {
-    const { friable, r, files, csv } = await runBundle<CensoredAnswer & ModelFindings>(`measureId=${measure('DRAIN')}&roundId=${round('Day 14')}`);
+    const { friable, r, files, csv, filename } = await runBundle<CensoredAnswer & ModelFindings>(t, token, `${base}/findings/bundle?measureId=${measure('DRAIN')}&roundId=${round('Day 14')}`);
     expect(files).toEqual(['README.txt', 'analysis.R', 'data.csv', 'friable.json']);
+    expect(filename).toBe('FW-CLAY-26-DRAIN-Day-14-censored.zip');
     expect(csv.split('\n')[0]).toBe('treatment,block,site,value,censored');
     expect(csv.trim().split('\n')).toHaveLength(friable.context.engineObservations.length + 1);
     // R: survdiff(Surv(value, drained) ~ treatment + strata(site, block)) — 1e-8 relative.
@@ -96,7 +53,7 @@ describe('Findings bundles: the analysis reproduced by R', () => {
 
   it('crumble score (one site): MASS::polr gives Friable’s likelihood-ratio test and odds ratios', async () => {
     const site = protocol.sites[0]!.id;
-    const { friable, r } = await runBundle<OrdinalAnswer & ModelFindings>(`measureId=${measure('CRUMB')}&roundId=${round('Day 14')}&siteId=${site}`);
+    const { friable, r } = await runBundle<OrdinalAnswer & ModelFindings>(t, token, `${base}/findings/bundle?measureId=${measure('CRUMB')}&roundId=${round('Day 14')}&siteId=${site}`);
     // R: anova(polr(score ~ block), polr(score ~ block + treatment)) — 1e-4 relative (both fits iterate to R's tolerance).
     close((r.treatmentTest as { chiSquare: number }).chiSquare, friable.tests.find((row) => row.term === 'treatment')!.chiSquare, 1e-4);
     for (const ratio of friable.oddsRatios) close(r.oddsRatios!.find((row) => row.treatment === ratio.treatment)!.ratio, ratio.ratio, 1e-3);
@@ -104,7 +61,7 @@ describe('Findings bundles: the analysis reproduced by R', () => {
 
   it('water retained (one site, day-0 baseline): lm, anova and emmeans give Friable’s analysis of covariance', async () => {
     const site = protocol.sites[1]!.id;
-    const { friable, r } = await runBundle<AnovaAnswer & ModelFindings>(`measureId=${measure('WATER')}&roundId=${round('Day 14')}&siteId=${site}`);
+    const { friable, r } = await runBundle<AnovaAnswer & ModelFindings>(t, token, `${base}/findings/bundle?measureId=${measure('WATER')}&roundId=${round('Day 14')}&siteId=${site}`);
     expect(friable.analysis).toBe('ancova');
     // R: anova(lm(value ~ block + covariate + treatment)); emmeans(fit, ~ treatment) — 1e-8 relative.
     for (const row of friable.anova.filter((a) => a.f !== null)) close(r.anova!.find((a) => a.term === row.term)!.f!, row.f!, 1e-8);
@@ -114,7 +71,7 @@ describe('Findings bundles: the analysis reproduced by R', () => {
   }, 180_000);
 
   it('crust resistance (the classical ANOVA, all sites, sites random): lm with treatment tested against site × treatment', async () => {
-    const { friable, r } = await runBundle<Findings>(`measureId=${measure('CRUST')}&roundId=${round('Day 0')}&analysis=anova`);
+    const { friable, r } = await runBundle<Findings>(t, token, `${base}/findings/bundle?measureId=${measure('CRUST')}&roundId=${round('Day 0')}&analysis=anova`);
     // R: anova(lm(value ~ site + site:block + treatment + site:treatment)), treatment F = MS(treatment) / MS(site:treatment) — 1e-8 relative.
     close(r.anova!.find((a) => a.term === 'treatment')!.f!, friable.anova.find((a) => a.term === 'treatment')!.f!, 1e-8);
     for (const mean of friable.means) close(r.means!.find((m) => m.treatment === mean.treatment)!.emmean, mean.mean, 1e-8);
@@ -122,10 +79,12 @@ describe('Findings bundles: the analysis reproduced by R', () => {
 
   it('drain time over rounds (one site): nlme::gls with the chosen covariance gives Friable’s means per round', async () => {
     const site = protocol.sites[2]!.id;
-    const { friable, r } = await runBundle<RepeatedAnswer & ModelFindings>(`measureId=${measure('DRAIN')}&siteId=${site}&analysis=repeated&covariance=cs`);
+    const { friable, r } = await runBundle<RepeatedAnswer & ModelFindings>(t, token, `${base}/findings/bundle?measureId=${measure('DRAIN')}&siteId=${site}&analysis=repeated&covariance=cs`);
     expect(r.structure).toBe('cs');
     // R: emmeans(gls(value ~ block + treatment * round, correlation = corCompSymm(form = ~ 1 | plot), method = "REML"), ~ treatment | round) — 1e-6 relative.
     for (const mean of friable.means) close(r.means!.find((m) => m.treatment === mean.treatment && m.round === mean.round)!.emmean, mean.mean, 1e-6);
-    close(r.logLik as number, friable.covariance.logLik, 1e-5);
+    // The log-likelihoods are not compared: the demo's rounds are nearly uncorrelated, and there Friable's compound
+    // symmetry stops at a plot variance of 0 while nlme's corCompSymm goes on to a negative correlation.
+    expect(r.logLik as number).toBeGreaterThanOrEqual(friable.covariance.logLik - 1e-6);
   }, 180_000);
 });

@@ -55,6 +55,9 @@ function anovaScript(input: ScriptInput): string {
 d$covariate <- as.numeric(d$covariate)
 fit <- lm(in_order(with_blocks("value", "covariate", "treatment")), data = d)
 table <- anova(fit)
+# The covariate's row is adjusted for every other term (treatment included), as drop1 gives it.
+adjusted <- drop1(fit, test = "F")
+table["covariate", c("Sum Sq", "F value", "Pr(>F)")] <- adjusted["covariate", c("Sum of Sq", "F value", "Pr(>F)")]
 results$anova <- data.frame(term = rownames(table), df = table$Df, ss = table[["Sum Sq"]], f = table[["F value"]], p = table[["Pr(>F)"]])
 results$slope <- unname(coef(fit)["covariate"])
 slopes <- anova(fit, lm(in_order(with_blocks("value", "covariate", "treatment", "covariate:treatment")), data = d))
@@ -119,21 +122,24 @@ function repeatedScript(input: ScriptInput): string {
   return `${preamble(input, ['nlme', 'emmeans'])}d$time <- as.numeric(d$time)
 d$round <- factor(d$round, levels = unique(d$round[order(d$time)]))
 d$plot <- factor(paste(d$site, d$block, d$treatment))
-# The within-plot covariance Friable chose (see friable.json, covariance.structure), fitted by REML.
-fit_with <- function(structure) {
-  correlation <- switch(structure, cs = corCompSymm(form = ~ 1 | plot), ar1 = corCAR1(form = ~ time | plot), unstructured = corSymm(form = ~ as.integer(round) | plot))
-  weights <- if (structure == "unstructured") varIdent(form = ~ 1 | round) else NULL
-  gls(with_blocks("value", "treatment * round"), data = d, correlation = correlation, weights = weights, method = "REML", na.action = na.omit)
-}
+# The within-plot covariance Friable chose (friable.json, covariance.structure), fitted by REML.
+# (Built at the top level: emmeans re-reads the call, so every name in it must be found here.)
 friable <- fromJSON("friable.json")
-fit <- fit_with(friable$covariance$structure)
+structure <- friable$covariance$structure
+model_formula <- with_blocks("value", "treatment * round")
+correlation <- switch(structure, cs = corCompSymm(form = ~ 1 | plot), ar1 = corCAR1(form = ~ time | plot), unstructured = corSymm(form = ~ as.integer(round) | plot))
+fit <- if (structure == "unstructured") {
+  gls(model_formula, data = d, correlation = correlation, weights = varIdent(form = ~ 1 | round), method = "REML")
+} else {
+  gls(model_formula, data = d, correlation = correlation, method = "REML")
+}
 results$structure <- friable$covariance$structure
 results$logLik <- as.numeric(logLik(fit))
 print(anova(fit, type = "marginal"))
-means <- emmeans(fit, ~ treatment | round, mode = "df.error")
+means <- emmeans(fit, ~ treatment | round, mode = "df.error", data = d)
 print(means)
 results$means <- as.data.frame(summary(means))[, c("treatment", "round", "emmean", "SE")]
-print(joint_tests(fit, by = "round", mode = "df.error"))
+print(joint_tests(fit, by = "round", mode = "df.error", data = d))
 ${finish}`;
 }
 
