@@ -19,6 +19,7 @@ import { Link, useSearchParams } from 'react-router-dom';
 import { EmptyState, ErrorState, LoadingState } from '../../../components/states';
 import { paths } from '../../../config/paths';
 import { ApiError } from '../../../lib/api-client';
+import { useDownloadBundle } from '../api/download-bundle';
 import { useDownloadExport } from '../api/download-export';
 import { findingsQueryOptions, getAnovaFindings, useFindings } from '../api/get-findings';
 import { useSiteRounds } from '../hooks/use-site-rounds';
@@ -111,6 +112,7 @@ export function FindingsPage({ trial }: { trial: TrialDetail }) {
     trial.sites,
   );
   const download = useDownloadExport();
+  const bundle = useDownloadBundle();
   const treatmentNames = useMemo(() => Object.fromEntries(trial.treatments.map((t) => [t.code, t.name])), [trial.treatments]);
 
   function choose(
@@ -209,13 +211,24 @@ export function FindingsPage({ trial }: { trial: TrialDetail }) {
       <div className="fr-findings-actions">
         <Button icon="download" text="Tidy CSV" loading={download.isPending && download.variables?.kind === 'csv'} onClick={() => download.mutate({ trialId: trial.id, kind: 'csv', fallbackName: `${trial.code}.csv` })} />
         <Button icon="th" text="Workbook" loading={download.isPending && download.variables?.kind === 'xlsx'} onClick={() => download.mutate({ trialId: trial.id, kind: 'xlsx', fallbackName: `${trial.code}.xlsx` })} />
+        <Button
+          icon="archive"
+          text="Analysis with R script"
+          title="This analysis as a zip: the data it used, an R script that reproduces its tables, and Friable's answer"
+          disabled={!query || !findings.data}
+          loading={bundle.isPending}
+          onClick={() =>
+            query &&
+            bundle.mutate({ trialId: trial.id, query: { ...query, ...(analysedRoundId ? { roundId: analysedRoundId } : {}), analysis: shownAnalysis }, fallbackName: `${trial.code}-analysis.zip` })
+          }
+        />
         <Link to={paths.trialReport.href(trial.id)} className="bp6-button fr-findings-report-link">
           <span className="bp6-button-text">Printable report</span>
         </Link>
       </div>
-      {download.error && (
+      {(download.error ?? bundle.error) && (
         <p className="fr-error-line" role="alert">
-          {download.error.message}
+          {(download.error ?? bundle.error)!.message}
         </p>
       )}
       {findings.isPending ? (
