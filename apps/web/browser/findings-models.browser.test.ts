@@ -89,7 +89,11 @@ describe('Findings: the model made for each measure', () => {
       await page.getByRole('heading', { name: 'The baseline', exact: true }).waitFor();
       expect(await page.getByText('Equal slopes across treatments').isVisible()).toBe(true);
       await page.getByRole('table', { name: 'Treatment means' }).waitFor();
+      expect(await page.getByLabel('Baseline', { exact: true }).locator('option:checked').innerText()).toBe('water retained at Day 0');
       await screenshot(page, `findings-ancova-${viewport.name}`);
+      // Any measure's earlier round can be the baseline.
+      await page.getByLabel('Baseline', { exact: true }).selectOption({ label: 'crust resistance at Day 0' });
+      await page.getByText('The covariate is crust resistance at Day 0: each plot\'s value is adjusted for its own baseline.').waitFor();
       await page.getByLabel('Measure').selectOption({ label: 'crumble score' });
       await page.getByRole('table', { name: 'Predicted share of plots in each score' }).waitFor();
       expect(await page.getByRole('table', { name: 'Odds ratio' }).locator('tbody tr').count()).toBe(4);
