@@ -1985,6 +1985,7 @@ export interface components {
             observations: components["schemas"]["FindingsObservationRowDto"][];
             percentOfControl: components["schemas"]["PercentOfControlDto"][];
             rankTest: components["schemas"]["FindingsRankTestDto"];
+            /** @description The round analysed (rounds over time: the latest used). */
             round: components["schemas"]["RoundRefDto"];
             scope: components["schemas"]["FindingsScopeDto"];
             trialCode: string;
@@ -2427,6 +2428,7 @@ export interface components {
             censored: components["schemas"]["CensoredSummaryDto"];
             choices: components["schemas"]["ModelChoicesDto"];
             controlCode: string | null;
+            /** @description SHA-256 (hex) of the canonical JSON of the observations sent to the engine. */
             dataHash: string;
             /** @description The observations sent, in the engine’s order. */
             engineObservations: {
