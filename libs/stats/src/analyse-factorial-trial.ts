@@ -356,7 +356,8 @@ function differenceErrors(layout: FactorialLayout, fit: FactorialFit, alpha: num
     let critical = 0;
     let errorTerm = '';
     for (const [a, b] of pairs) {
-      const contrast = Float64Array.from(fit.mean(kind.which, a), (value, i) => value - fit.mean(kind.which, b)[i]!);
+      const other = fit.mean(kind.which, b);
+      const contrast = Float64Array.from(fit.mean(kind.which, a), (value, i) => value - other[i]!);
       const estimate = fit.estimate(contrast);
       variance += estimate.variance;
       df += estimate.df;
@@ -387,7 +388,8 @@ function sliceTests(
     for (const [f, g] of [set, [...set].reverse()] as [number, number][]) {
       layout.factors[g]!.levels.forEach((level, l) => {
         const levelsAt = (a: number) => (f < g ? [a, l] : [l, a]);
-        const by = sliceFit(Float64Array.from(fit.mean(set, levelsAt(1)), (value, i) => value - fit.mean(set, levelsAt(0))[i]!));
+        const base = fit.mean(set, levelsAt(0));
+        const by = sliceFit(Float64Array.from(fit.mean(set, levelsAt(1)), (value, i) => value - base[i]!));
         const entries = layout.factors[f]!.levels.map((label, a) => ({ ...entry(set, levelsAt(a), by), treatment: label }));
         const rows = entries.slice(1).map((e) => Float64Array.from(e.contrast, (value, i) => value - entries[0]!.contrast[i]!));
         const test = by.test(rows);
