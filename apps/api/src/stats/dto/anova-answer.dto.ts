@@ -316,6 +316,30 @@ export class VarianceComponentDto {
   variance: number;
 }
 
+export class CovariateSlopeDto {
+  @ApiProperty()
+  mean: number;
+  @ApiProperty()
+  slope: number;
+  @ApiProperty()
+  se: number;
+  @ApiProperty()
+  t: number;
+  @ApiProperty()
+  p: number;
+}
+
+export class FTestDto {
+  @ApiProperty()
+  f: number;
+  @ApiProperty()
+  p: number;
+  @ApiProperty()
+  df1: number;
+  @ApiProperty()
+  df2: number;
+}
+
 /** The answer of POST /api/stats/anova, exactly as the engine gives it. */
 @ApiExtraModels(LsMeanDto, StratumComparisonSetDto)
 export class AnovaAnswerDto implements AnovaAnswer {
@@ -371,6 +395,15 @@ export class AnovaAnswerDto implements AnovaAnswer {
 
   @ApiPropertyOptional({ type: [VarianceComponentDto], description: 'REML: the variance of each random term and of the error.' })
   varianceComponents?: VarianceComponentDto[];
+
+  @ApiPropertyOptional({ type: CovariateSlopeDto, description: 'With a covariate (analysis of covariance): the common slope, with the covariate’s mean.' })
+  covariate?: CovariateSlopeDto;
+
+  @ApiPropertyOptional({ type: FTestDto, description: 'With a covariate: the test of equal slopes across treatments.' })
+  slopes?: FTestDto;
+
+  @ApiPropertyOptional({ type: FTestDto, description: 'With a covariate: the covariate itself between treatments (a baseline should not differ).' })
+  baseline?: FTestDto;
 }
 
 /** POST /api/stats/friedman and /api/stats/kruskal answers. */
