@@ -210,7 +210,7 @@ export interface paths {
         put?: never;
         /**
          * ANOVA, least-squares means, mean separation, letters and diagnostics
-         * @description Designs: crd (treatment), rcbd (block, treatment), factorial-rcbd (block, A, B, A:B), multisite-rcbd (site, block:site, treatment, site:treatment). Sums of squares are sequential in that order. With sites random (the default) treatment is tested against site:treatment and site against block:site.
+         * @description Designs: crd (treatment), rcbd (block, treatment), multisite-rcbd (site, block:site, treatment, site:treatment): sums of squares sequential in that order; with sites random (the default) treatment is tested against site:treatment and site against block:site. factorial-crd, factorial-rcbd, multisite-factorial-rcbd (2–4 factors), split-plot, multisite-split-plot (2 factors, whole-plot first) and split-split-plot (3): factorNames and observations with factors {name: level}; every main effect and interaction (terms are factor names joined by ":" in the order of factorNames). model: anova (classical; each term tested against its stratum error — block:A for the whole-plot factor — or, with random sites, its site interaction; an unbalanced factorial gets the type III least-squares ANOVA) or reml (blocks, whole plots, sites and site interactions random; Kenward–Roger F tests, rows with numDf and denDf, ss and ms null). Default: anova when every plot is present, else reml; the answer says which (model) and why. Each anova row names its errorTerm. The answer adds strata, least-squares means of every term (marginalMeans), each factor compared in its own stratum (factorComparisons), standard errors of a difference by kind (differences: a split plot’s four, with the weighted t where strata mix) and, for significant two-factor interactions, slices with letters inside each.
          */
         post: operations["StatsController_anova"];
         delete?: never;
@@ -1168,6 +1168,12 @@ export interface components {
         };
         /** @enum {string} */
         AnalysisDesign: "crd" | "rcbd" | "factorial-crd" | "factorial-rcbd" | "split-plot" | "split-split-plot" | "multisite-rcbd" | "multisite-factorial-rcbd" | "multisite-split-plot";
+        AnalysisModelDto: {
+            /** @enum {string} */
+            kind: "anova" | "reml";
+            /** @description Why this model was used, in a sentence. */
+            reason: string;
+        };
         AnalysisOptionDto: {
             analysis: components["schemas"]["FindingsAnalysis"];
             available: boolean;
@@ -1228,6 +1234,16 @@ export interface components {
             title: string;
             trialId: number;
         };
+        AnalysisStratumDto: {
+            df: number;
+            /** @description The ANOVA row that is this stratum's error, e.g. 'block:Amendment' or 'error'. */
+            errorTerm: string;
+            ms: number;
+            /** @description 'plot', 'whole plot', 'sub plot' or 'sub-sub plot'. */
+            stratum: string;
+            /** @description The terms tested against this error. */
+            terms: string[];
+        };
         /** @enum {string} */
         AnalysisTransform: "none" | "log" | "sqrt" | "arcsine-sqrt";
         AncovaFindingsDto: {
@@ -1241,16 +1257,32 @@ export interface components {
             /** @description With a covariate (analysis of covariance): the common slope, with the covariate’s mean. */
             covariate?: components["schemas"]["CovariateSlopeDto"];
             diagnostics: components["schemas"]["DiagnosticsDto"];
+            /** @description Factorials and split plots: standard errors of a difference by kind. */
+            differences?: components["schemas"]["DifferenceErrorDto"][];
+            /** @description Factorials and split plots: each factor's level means compared in its own stratum, by factor name. */
+            factorComparisons?: {
+                [key: string]: components["schemas"]["StratumComparisonSetDto"];
+            };
             /** @description Factorial only: LS means of each factor's levels, by factor name. */
             factorMeans?: {
                 [key: string]: components["schemas"]["LsMeanDto"][];
             };
             /** @description Per method, treatment → compact letters. */
             letters: components["schemas"]["LettersByMethodDto"];
+            /** @description Factorials and split plots: least-squares means of every main effect and interaction. */
+            marginalMeans?: components["schemas"]["TermMeansDto"][];
             means: components["schemas"]["LsMeanDto"][];
+            /** @description Factorials and split plots: the model used and why. */
+            model?: components["schemas"]["AnalysisModelDto"];
+            /** @description Factorials and split plots: each factor within each level of another, for significant two-factor interactions. */
+            slices?: components["schemas"]["SliceTestDto"][];
             /** @description With a covariate: the test of equal slopes across treatments. */
             slopes?: components["schemas"]["FTestDto"];
+            /** @description Classical factorials and split plots: the error strata, whole plot first. */
+            strata?: components["schemas"]["AnalysisStratumDto"][];
             summary: components["schemas"]["AnovaSummaryDto"];
+            /** @description REML: the variance of each random term and of the error. */
+            varianceComponents?: components["schemas"]["VarianceComponentDto"][];
             /** @description Plain sentences from the engine. */
             warnings: string[];
         };
@@ -1262,16 +1294,32 @@ export interface components {
             /** @description With a covariate (analysis of covariance): the common slope, with the covariate’s mean. */
             covariate?: components["schemas"]["CovariateSlopeDto"];
             diagnostics: components["schemas"]["DiagnosticsDto"];
+            /** @description Factorials and split plots: standard errors of a difference by kind. */
+            differences?: components["schemas"]["DifferenceErrorDto"][];
+            /** @description Factorials and split plots: each factor's level means compared in its own stratum, by factor name. */
+            factorComparisons?: {
+                [key: string]: components["schemas"]["StratumComparisonSetDto"];
+            };
             /** @description Factorial only: LS means of each factor's levels, by factor name. */
             factorMeans?: {
                 [key: string]: components["schemas"]["LsMeanDto"][];
             };
             /** @description Per method, treatment → compact letters. */
             letters: components["schemas"]["LettersByMethodDto"];
+            /** @description Factorials and split plots: least-squares means of every main effect and interaction. */
+            marginalMeans?: components["schemas"]["TermMeansDto"][];
             means: components["schemas"]["LsMeanDto"][];
+            /** @description Factorials and split plots: the model used and why. */
+            model?: components["schemas"]["AnalysisModelDto"];
+            /** @description Factorials and split plots: each factor within each level of another, for significant two-factor interactions. */
+            slices?: components["schemas"]["SliceTestDto"][];
             /** @description With a covariate: the test of equal slopes across treatments. */
             slopes?: components["schemas"]["FTestDto"];
+            /** @description Classical factorials and split plots: the error strata, whole plot first. */
+            strata?: components["schemas"]["AnalysisStratumDto"][];
             summary: components["schemas"]["AnovaSummaryDto"];
+            /** @description REML: the variance of each random term and of the error. */
+            varianceComponents?: components["schemas"]["VarianceComponentDto"][];
             /** @description Plain sentences from the engine. */
             warnings: string[];
         };
@@ -1284,7 +1332,15 @@ export interface components {
              */
             control?: string;
             /** @enum {string} */
-            design: "crd" | "rcbd" | "factorial-rcbd" | "multisite-rcbd";
+            design: "crd" | "rcbd" | "factorial-crd" | "factorial-rcbd" | "split-plot" | "split-split-plot" | "multisite-rcbd" | "multisite-factorial-rcbd" | "multisite-split-plot";
+            /**
+             * @description Factorials and split plots: the factor names (a split plot’s from the whole-plot factor down); default: the keys of the first observation’s factors.
+             * @example [
+             *       "Amendment",
+             *       "Mulch"
+             *     ]
+             */
+            factorNames?: string[];
             /**
              * @description Show Fisher’s LSD even when the treatment F test is not significant.
              * @default false
@@ -1296,6 +1352,11 @@ export interface components {
              *     ]
              */
             meanSeparation?: ("lsd" | "tukey" | "dunnett" | "bonferroni" | "holm")[];
+            /**
+             * @description Factorials and split plots: the classical ANOVA or REML (Kenward–Roger). Default: anova when every plot is present, else reml; the answer says which and why.
+             * @enum {string}
+             */
+            model?: "anova" | "reml";
             observations: components["schemas"]["ObservationDto"][];
             /**
              * @default random
@@ -1317,12 +1378,19 @@ export interface components {
             rootMse: number;
         };
         AnovaTableRowDto: {
+            /** @description REML rows: Kenward–Roger denominator degrees of freedom. */
+            denDf?: number;
             df: number;
+            /** @description The row the term was tested against ('error', 'block:A', 'site:treatment', 'kenward-roger'); null when not tested. */
+            errorTerm?: string | null;
             f: number | null;
             /** @description Null where the term is not tested. */
             ms: number | null;
+            /** @description REML rows: numerator degrees of freedom. */
+            numDf?: number;
             p: number | null;
-            ss: number;
+            /** @description Null for a REML row. */
+            ss: number | null;
             /** @description 'block', 'treatment', 'site', 'block:site', 'site:treatment', factor names and 'A:B', 'error', 'total'. */
             term: string;
         };
@@ -1874,6 +1942,21 @@ export interface components {
             /** @description Null outside 3..5000 residuals. */
             shapiroWilk: components["schemas"]["ShapiroWilkDto"] | null;
         };
+        DifferenceErrorDto: {
+            /** @description t at α (two-sided); the weighted t where strata mix. */
+            critical: number;
+            /** @example Two Amendment (whole-plot) means at the same or different levels of Mulch */
+            description: string;
+            /** @description Degrees of freedom (Satterthwaite's where strata mix; Kenward–Roger for REML). */
+            df: number;
+            errorTerm: string;
+            /** @example Amendment within Mulch */
+            kind: string;
+            /** @description critical × se. */
+            lsd: number;
+            /** @description Standard error of the difference. */
+            se: number;
+        };
         DoseAnswerDto: {
             areaM2: number;
             basis: components["schemas"]["RateBasis"];
@@ -1980,6 +2063,18 @@ export interface components {
             /** @example Gypsum */
             name: string;
         };
+        FactorialMeanDto: {
+            /** @description With a transform: the mean back on the original scale. */
+            backTransformedMean?: number;
+            /** @description Level of each factor of the term, by factor name. */
+            levels: {
+                [key: string]: string;
+            };
+            mean: number;
+            n: number;
+            se: number;
+            treatment: string;
+        };
         FactorLevelDto: {
             /**
              * @description 1 to 6 letters or digits, unique within the factor.
@@ -2077,16 +2172,32 @@ export interface components {
             /** @description With a covariate (analysis of covariance): the common slope, with the covariate’s mean. */
             covariate?: components["schemas"]["CovariateSlopeDto"];
             diagnostics: components["schemas"]["DiagnosticsDto"];
+            /** @description Factorials and split plots: standard errors of a difference by kind. */
+            differences?: components["schemas"]["DifferenceErrorDto"][];
+            /** @description Factorials and split plots: each factor's level means compared in its own stratum, by factor name. */
+            factorComparisons?: {
+                [key: string]: components["schemas"]["StratumComparisonSetDto"];
+            };
             /** @description Factorial only: LS means of each factor's levels, by factor name. */
             factorMeans?: {
                 [key: string]: components["schemas"]["LsMeanDto"][];
             };
             /** @description Per method, treatment → compact letters. */
             letters: components["schemas"]["LettersByMethodDto"];
+            /** @description Factorials and split plots: least-squares means of every main effect and interaction. */
+            marginalMeans?: components["schemas"]["TermMeansDto"][];
             means: components["schemas"]["LsMeanDto"][];
+            /** @description Factorials and split plots: the model used and why. */
+            model?: components["schemas"]["AnalysisModelDto"];
+            /** @description Factorials and split plots: each factor within each level of another, for significant two-factor interactions. */
+            slices?: components["schemas"]["SliceTestDto"][];
             /** @description With a covariate: the test of equal slopes across treatments. */
             slopes?: components["schemas"]["FTestDto"];
+            /** @description Classical factorials and split plots: the error strata, whole plot first. */
+            strata?: components["schemas"]["AnalysisStratumDto"][];
             summary: components["schemas"]["AnovaSummaryDto"];
+            /** @description REML: the variance of each random term and of the error. */
+            varianceComponents?: components["schemas"]["VarianceComponentDto"][];
             /** @description Plain sentences from the engine. */
             warnings: string[];
         };
@@ -3175,6 +3286,23 @@ export interface components {
             grams: number | null;
             litres: number | null;
         };
+        SliceTestDto: {
+            comparisons: components["schemas"]["ComparisonsByMethodDto"];
+            denDf: number;
+            df: number;
+            /** @description The error the differences are judged against: 'block:A', 'error', 'block:A and error (Satterthwaite)', 'Kenward–Roger'. */
+            errorTerm: string;
+            f: number;
+            /** @description The factor tested. */
+            factor: string;
+            letters: components["schemas"]["LettersByMethodDto"];
+            level: string;
+            means: components["schemas"]["FactorialMeanDto"][];
+            numDf: number;
+            p: number;
+            /** @description The factor whose level is held. */
+            within: string;
+        };
         SnapshotCommentDto: {
             analysisId: number;
             authorId: number | null;
@@ -3226,6 +3354,19 @@ export interface components {
             /** @enum {string} */
             stratum: "between plots" | "within plots";
             /** @example treatment:round */
+            term: string;
+        };
+        StratumComparisonSetDto: {
+            comparisons: components["schemas"]["ComparisonsByMethodDto"];
+            df: number;
+            /** @description The error the differences are judged against: 'block:A', 'error', 'block:A and error (Satterthwaite)', 'Kenward–Roger'. */
+            errorTerm: string;
+            letters: components["schemas"]["LettersByMethodDto"];
+        };
+        TermMeansDto: {
+            factors: string[];
+            means: components["schemas"]["FactorialMeanDto"][];
+            /** @example Amendment:Mulch */
             term: string;
         };
         TermTestDto: {
@@ -3575,6 +3716,11 @@ export interface components {
              * @example Robin Ash
              */
             name?: string;
+        };
+        VarianceComponentDto: {
+            /** @example block:Amendment */
+            name: string;
+            variance: number;
         };
     };
     responses: never;
