@@ -1,8 +1,9 @@
-import { Button, Callout, HTMLSelect } from '@blueprintjs/core';
+import { Button, Callout } from '@blueprintjs/core';
 import type { Measure, Observation, Plot, TrialDetail } from '@friable/contracts';
 import { useMemo, useState } from 'react';
 import { useSearchParams } from 'react-router-dom';
 import { ConfirmButton } from '../../../components/confirm-button';
+import { IdPicker } from '../../../components/id-picker';
 import { EmptyState, ErrorState, LoadingState } from '../../../components/states';
 import { formatNumber } from '../../../lib/format';
 import { personLocale } from '../../../lib/person-locale';
@@ -75,27 +76,13 @@ export function LedgerPage({ trial }: { trial: TrialDetail }) {
   return (
     <div className="fr-ledger">
       <div className="fr-ledger__bar">
-        <label className="fr-site-picker">
-          <span>Site</span>
-          <HTMLSelect aria-label="Site" value={site.id} onChange={(event) => pick({ site: Number(event.target.value) })}>
-            {trial.sites.map((s) => (
-              <option key={s.id} value={s.id}>
-                {s.name}
-                {trial.mySiteIds.includes(s.id) ? ' (your site)' : ''}
-              </option>
-            ))}
-          </HTMLSelect>
-        </label>
-        <label className="fr-site-picker">
-          <span>Round</span>
-          <HTMLSelect aria-label="Round" value={round.id} onChange={(event) => pick({ round: Number(event.target.value) })}>
-            {rounds.map((r) => (
-              <option key={r.id} value={r.id}>
-                {r.label}
-              </option>
-            ))}
-          </HTMLSelect>
-        </label>
+        <IdPicker
+          label="Site"
+          value={site.id}
+          options={trial.sites.map((s) => ({ id: s.id, text: `${s.name}${trial.mySiteIds.includes(s.id) ? ' (your site)' : ''}` }))}
+          onPick={(id) => pick({ site: id })}
+        />
+        <IdPicker label="Round" value={round.id} options={rounds.map((r) => ({ id: r.id, text: r.label }))} onPick={(id) => pick({ round: id })} />
         {investigator && trial.status === 'active' && (
           <ConfirmButton
             text="Lock the trial"
