@@ -8,6 +8,7 @@ import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
 import { App } from './app/app';
 import { configureIcons } from './app/icons';
+import { registerServiceWorker } from './lib/service-worker';
 
 configureIcons();
 createRoot(document.getElementById('root') as HTMLElement).render(
@@ -15,3 +16,5 @@ createRoot(document.getElementById('root') as HTMLElement).render(
     <App />
   </StrictMode>,
 );
+
+registerServiceWorker();

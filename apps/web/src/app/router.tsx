@@ -20,6 +20,7 @@ const PlotPlanRoute = lazyPage(() => import('./routes/trial-sections'), 'PlotPla
 const TeamRoute = lazyPage(() => import('./routes/trial-sections'), 'TeamRoute');
 const IntakeRoute = lazyPage(() => import('./routes/trial-sections'), 'IntakeRoute');
 const LedgerRoute = lazyPage(() => import('./routes/ledger'), 'LedgerRoute');
+const WalkRoute = lazyPage(() => import('./routes/walk'), 'WalkRoute');
 const AcceptInvitationRoute = lazyPage(() => import('./routes/trial-sections'), 'AcceptInvitationRoute');
 const FindingsRoute = lazyPage(() => import('./routes/findings-routes'), 'FindingsRoute');
 const QuickAnalysisRoute = lazyPage(() => import('./routes/findings-routes'), 'QuickAnalysisRoute');
@@ -72,6 +73,7 @@ export const routes: RouteObject[] = [
           { path: paths.trialTeam.path, element: <TeamRoute /> },
           { path: paths.trialIntake.path, element: <IntakeRoute /> },
           { path: paths.trialLedger.path, element: <LedgerRoute /> },
+          { path: paths.trialWalk.path, element: <WalkRoute /> },
           { path: paths.trialFindings.path, element: <FindingsRoute /> },
           { path: paths.trialReport.path, element: <ReportRoute /> },
           { path: paths.trialActivity.path, element: <ActivityRoute /> },

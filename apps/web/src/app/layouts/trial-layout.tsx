@@ -25,6 +25,8 @@ const sections: Array<{ label: string; href: (id: number) => string; shownTo?: (
   // Reviewers write no data, so they get no Intake tab.
   { label: 'Intake', href: (id: number) => paths.trialIntake.href(id), shownTo: (t: TrialDetail) => t.myRoles.some((role) => role !== 'reviewer') },
   { label: 'Ledger', href: (id: number) => paths.trialLedger.href(id) },
+  // Plot by plot on a phone, for those who record values.
+  { label: 'Round walk', href: (id: number) => paths.trialWalk.href(id), shownTo: (t: TrialDetail) => t.myRoles.some((role) => role !== 'reviewer') },
   { label: 'Findings', href: paths.trialFindings.href },
   { label: 'Activity', href: paths.trialActivity.href },
 ];

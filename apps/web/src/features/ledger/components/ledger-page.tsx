@@ -3,7 +3,7 @@ import type { Measure, Observation, Plot, TrialDetail } from '@friable/contracts
 import { useMemo, useState } from 'react';
 import { useSearchParams } from 'react-router-dom';
 import { ConfirmButton } from '../../../components/confirm-button';
-import { IdPicker } from '../../../components/id-picker';
+import { RoundPicker, SitePicker } from '../../../components/site-round-pickers';
 import { EmptyState, ErrorState, LoadingState } from '../../../components/states';
 import { formatNumber } from '../../../lib/format';
 import { personLocale } from '../../../lib/person-locale';
@@ -76,13 +76,8 @@ export function LedgerPage({ trial }: { trial: TrialDetail }) {
   return (
     <div className="fr-ledger">
       <div className="fr-ledger__bar">
-        <IdPicker
-          label="Site"
-          value={site.id}
-          options={trial.sites.map((s) => ({ id: s.id, text: `${s.name}${trial.mySiteIds.includes(s.id) ? ' (your site)' : ''}` }))}
-          onPick={(id) => pick({ site: id })}
-        />
-        <IdPicker label="Round" value={round.id} options={rounds.map((r) => ({ id: r.id, text: r.label }))} onPick={(id) => pick({ round: id })} />
+        <SitePicker trial={trial} value={site.id} onChange={(siteId) => pick({ site: siteId })} />
+        <RoundPicker rounds={rounds} value={round.id} onChange={(roundId) => pick({ round: roundId ?? undefined })} />
         {investigator && trial.status === 'active' && (
           <ConfirmButton
             text="Lock the trial"

@@ -1,4 +1,5 @@
 import { Plot } from '../../../lib/plotly';
+import { plotlyConfig } from '../../../lib/plotly-config';
 
 // Plotly is large: this file is only ever loaded lazily, by the Planner.
 
@@ -53,7 +54,7 @@ export default function PowerCurve({ points, targetPower, recommended }: { point
       className="fr-planner__plot"
       data={data}
       layout={layout}
-      config={{ displayModeBar: false, responsive: true }}
+      config={{ ...plotlyConfig, displayModeBar: false }}
       useResizeHandler
       style={{ width: '100%', height: 320 }}
     />
