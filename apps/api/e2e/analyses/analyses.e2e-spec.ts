@@ -33,7 +33,7 @@ describe('Saved analyses: frozen results, data changes, comments', () => {
 
   it('saves the analysis (investigators and reviewers) with the data hash, engine version and full result', async () => {
     const query = new URLSearchParams(Object.entries(choices).map(([k, v]) => [k, String(v)])).toString();
-    const findings = (await t.http.get(`${base}/findings?${query}`).set(bearer(built.tokens.reviewer))).body as Findings;
+    const findings = (await t.http.get(`${base}/findings?analysis=anova&${query}`).set(bearer(built.tokens.reviewer))).body as Findings;
     const response = await t.http.post(`${base}/analyses`).set(bearer(built.tokens.reviewer)).send({ ...choices, title: 'Water retained, Day 0, Test Garden' });
     expect(response.status).toBe(201);
     saved = response.body as AnalysisSnapshot;
@@ -76,7 +76,7 @@ describe('Saved analyses: frozen results, data changes, comments', () => {
     expect(reopened.body.dataHash).toBe(saved.dataHash);
     expect(reopened.body.dataChanged).toBe(true);
     expect(reopened.body.currentDataHash).not.toBe(saved.dataHash);
-    const now = (await t.http.get(`${base}/findings?measureId=${built.measures.WR}&roundId=${built.roundId}&siteId=${built.siteId}`).set(bearer(built.tokens.reviewer))).body as Findings;
+    const now = (await t.http.get(`${base}/findings?analysis=anova&measureId=${built.measures.WR}&roundId=${built.roundId}&siteId=${built.siteId}`).set(bearer(built.tokens.reviewer))).body as Findings;
     expect(now.context.dataHash).toBe(reopened.body.currentDataHash);
     expect(now.summary.grandMean).not.toBe(saved.result.summary.grandMean);
     expect((await t.http.get(`${base}/analyses/999999`).set(bearer(built.tokens.reviewer))).status).toBe(404);

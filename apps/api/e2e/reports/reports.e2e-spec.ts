@@ -32,7 +32,7 @@ describe('Report: what the printable report page needs', () => {
     for (const entry of report.measures) {
       // The demo has Day 0 and Day 14 at every garden; Day 28 is still empty.
       expect(entry.round!.label).toBe('Day 14');
-      const findings = (await t.http.get(`${base}/findings?measureId=${entry.measure.id}&roundId=${entry.round!.id}`).set(bearer(token))).body as Findings;
+      const findings = (await t.http.get(`${base}/findings?analysis=anova&measureId=${entry.measure.id}&roundId=${entry.round!.id}`).set(bearer(token))).body as Findings;
       expect(entry.anova).toEqual(findings.anova);
       expect(entry.summary).toEqual(findings.summary);
       expect(entry.means.map((m) => [m.treatment, m.mean, m.se, m.letters, m.percentOfControl])).toEqual(

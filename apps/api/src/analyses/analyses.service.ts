@@ -38,7 +38,7 @@ export class AnalysesService {
 
   async create(trialId: number, user: AuthUser, input: CreateAnalysisDto): Promise<AnalysisSnapshot> {
     const { title, ...query } = input;
-    const result = await this.findings.findings(trialId, query);
+    const result = await this.findings.anovaFindings(trialId, query);
     const id = await this.sequelize.transaction(async (transaction) => {
       const row = await this.snapshots.create(
         {

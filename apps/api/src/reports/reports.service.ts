@@ -39,7 +39,7 @@ export class ReportsService {
       }
       let result: Findings;
       try {
-        result = await this.findings.findings(trialId, { measureId: measure.id, roundId: round.id, method: METHOD, alpha: ALPHA }, protocol);
+        result = await this.findings.anovaFindings(trialId, { measureId: measure.id, roundId: round.id, method: METHOD, alpha: ALPHA }, protocol);
       } catch (error) {
         if (!(error instanceof UnprocessableEntityException)) throw error;
         measures.push({ ...base, ...empty, unavailable: (error.getResponse() as { message: string }).message });

@@ -593,8 +593,8 @@ export interface paths {
             cookie?: never;
         };
         /**
-         * The analysis of one measure and round, at one site or all sites combined
-         * @description The same body as POST /api/stats/anova on the stored decimal text (design from the trial; several sites combined: multisite-rcbd), plus `context`: the observations in the order given to the engine (residual index), censoring, missing values, % of control, the rank test (Friedman for blocked designs, blocks = site × block when sites are combined; Kruskal–Wallis otherwise), the not-drained curve for a time with a cut-off, the means over time and the data hash.
+         * The analysis of one measure and round, at one site or all sites combined: the model made for the measure, or the one asked for
+         * @description `analysis` left out: the model made for the measure — censored (a time with a cut-off: POST /api/stats/censored), ordinal (a score: /api/stats/ordinal), counts (a count: /api/stats/counts), and for a measured number ancova (a day-0 baseline and one later round: /api/stats/anova with the baseline as covariate), repeated (two or more rounds: /api/stats/repeated) or else anova. A model answers with the stateless endpoint’s body, `analysis`, and `context` (the request and observations sent, which model and why, the options on offer). `analysis=anova`: the same body as POST /api/stats/anova on the stored decimal text (design from the trial; several sites combined: multisite-rcbd), plus `context`: the observations in the order given to the engine (residual index), censoring, missing values, % of control, the rank test (Friedman for blocked designs, blocks = site × block when sites are combined; Kruskal–Wallis otherwise), the not-drained curve for a time with a cut-off, the means over time and the data hash. Answers are kept until the next write to the trial (through any API instance).
          */
         get: operations["FindingsController_get"];
         put?: never;
@@ -1148,6 +1148,16 @@ export interface components {
         };
         /** @enum {string} */
         AnalysisDesign: "crd" | "rcbd" | "factorial-crd" | "factorial-rcbd" | "split-plot" | "split-split-plot" | "multisite-rcbd" | "multisite-factorial-rcbd" | "multisite-split-plot";
+        AnalysisOptionDto: {
+            analysis: components["schemas"]["FindingsAnalysis"];
+            available: boolean;
+            /** @description The analysis made for this measure. */
+            isDefault: boolean;
+            /** @example Not-drained curves and time ratios */
+            label: string;
+            /** @description Why it is not available, or the caution it carries. */
+            note: string | null;
+        };
         AnalysisSnapshotDto: {
             choices: components["schemas"]["FindingsChoicesDto"];
             commentCount: number;
@@ -1200,9 +1210,16 @@ export interface components {
         };
         /** @enum {string} */
         AnalysisTransform: "none" | "log" | "sqrt" | "arcsine-sqrt";
-        AnovaAnswerDto: {
+        AncovaFindingsDto: {
+            /** @enum {string} */
+            analysis: "ancova";
             anova: components["schemas"]["AnovaTableRowDto"][];
+            /** @description With a covariate: the covariate itself between treatments (a baseline should not differ). */
+            baseline?: components["schemas"]["FTestDto"];
             comparisons: components["schemas"]["ComparisonsByMethodDto"];
+            context: components["schemas"]["ModelFindingsContextDto"];
+            /** @description With a covariate (analysis of covariance): the common slope, with the covariate’s mean. */
+            covariate?: components["schemas"]["CovariateSlopeDto"];
             diagnostics: components["schemas"]["DiagnosticsDto"];
             /** @description Factorial only: LS means of each factor's levels, by factor name. */
             factorMeans?: {
@@ -1211,6 +1228,29 @@ export interface components {
             /** @description Per method, treatment → compact letters. */
             letters: components["schemas"]["LettersByMethodDto"];
             means: components["schemas"]["LsMeanDto"][];
+            /** @description With a covariate: the test of equal slopes across treatments. */
+            slopes?: components["schemas"]["FTestDto"];
+            summary: components["schemas"]["AnovaSummaryDto"];
+            /** @description Plain sentences from the engine. */
+            warnings: string[];
+        };
+        AnovaAnswerDto: {
+            anova: components["schemas"]["AnovaTableRowDto"][];
+            /** @description With a covariate: the covariate itself between treatments (a baseline should not differ). */
+            baseline?: components["schemas"]["FTestDto"];
+            comparisons: components["schemas"]["ComparisonsByMethodDto"];
+            /** @description With a covariate (analysis of covariance): the common slope, with the covariate’s mean. */
+            covariate?: components["schemas"]["CovariateSlopeDto"];
+            diagnostics: components["schemas"]["DiagnosticsDto"];
+            /** @description Factorial only: LS means of each factor's levels, by factor name. */
+            factorMeans?: {
+                [key: string]: components["schemas"]["LsMeanDto"][];
+            };
+            /** @description Per method, treatment → compact letters. */
+            letters: components["schemas"]["LettersByMethodDto"];
+            means: components["schemas"]["LsMeanDto"][];
+            /** @description With a covariate: the test of equal slopes across treatments. */
+            slopes?: components["schemas"]["FTestDto"];
             summary: components["schemas"]["AnovaSummaryDto"];
             /** @description Plain sentences from the engine. */
             warnings: string[];
@@ -1313,6 +1353,32 @@ export interface components {
             bySite?: components["schemas"]["SiteCurvesDto"][];
             /** @description Log-time coefficients (treatment contrasts against the control). */
             coefficients: components["schemas"]["ModelCoefficientDto"][];
+            /** @example CTRL */
+            control: string;
+            curves: components["schemas"]["CurveDto"][];
+            /** @enum {string} */
+            distribution: "weibull" | "lognormal" | "loglogistic";
+            /** @description Null when the time-ratio model could not be fitted (warnings say why). */
+            logLik: number | null;
+            logRank: components["schemas"]["LogRankDto"];
+            medians: components["schemas"]["MedianTimeDto"][];
+            scale: number | null;
+            tests: components["schemas"]["LikelihoodRatioTestDto"][];
+            /** @description Typical drain time relative to the control’s (below 1: faster). */
+            timeRatios: components["schemas"]["ControlRatioDto"][];
+            treatments: components["schemas"]["TreatmentCountDto"][];
+            warnings: string[];
+        };
+        CensoredFindingsDto: {
+            /** @description How the comparisons with the control are adjusted, in words. */
+            adjustment: string;
+            /** @enum {string} */
+            analysis: "censored";
+            /** @description With several sites: each site’s curves and medians. */
+            bySite?: components["schemas"]["SiteCurvesDto"][];
+            /** @description Log-time coefficients (treatment contrasts against the control). */
+            coefficients: components["schemas"]["ModelCoefficientDto"][];
+            context: components["schemas"]["ModelFindingsContextDto"];
             /** @example CTRL */
             control: string;
             curves: components["schemas"]["CurveDto"][];
@@ -1451,6 +1517,32 @@ export interface components {
             tests: components["schemas"]["CountTermTestDto"][];
             warnings: string[];
         };
+        CountsFindingsDto: {
+            adjustment: string;
+            /** @enum {string} */
+            analysis: "counts";
+            /** @description Log-rate coefficients (treatment contrasts against the control). */
+            coefficients: components["schemas"]["ModelCoefficientDto"][];
+            context: components["schemas"]["ModelFindingsContextDto"];
+            /** @example CTRL */
+            control: string;
+            deviance: number;
+            /**
+             * @description Pearson χ² / residual df of the Poisson fit.
+             * @example 1.5
+             */
+            dispersion: number;
+            /** @enum {string} */
+            family: "poisson" | "quasipoisson";
+            logLik: number;
+            overdispersion: components["schemas"]["OverdispersionDto"];
+            /** @description Count rate relative to the control’s. */
+            rateRatios: components["schemas"]["ControlRatioDto"][];
+            rates: components["schemas"]["CountRateDto"][];
+            residualDf: number;
+            tests: components["schemas"]["CountTermTestDto"][];
+            warnings: string[];
+        };
         CountsRequestDto: {
             /**
              * @description The reference of the odds ratios; default the first treatment.
@@ -1504,6 +1596,13 @@ export interface components {
             structure: "cs" | "ar1" | "unstructured";
             /** @description Why this structure could not be fitted (then the other fields are absent). */
             unavailable?: string;
+        };
+        CovariateSlopeDto: {
+            mean: number;
+            p: number;
+            se: number;
+            slope: number;
+            t: number;
         };
         CreateAnalysisDto: {
             /** @default 0.05 */
@@ -1906,6 +2005,11 @@ export interface components {
             factors: components["schemas"]["TrialFactorDto"][];
             treatments: components["schemas"]["TreatmentDto"][];
         };
+        /**
+         * @description The analysis of this answer.
+         * @enum {string}
+         */
+        FindingsAnalysis: "anova" | "censored" | "repeated" | "ancova" | "ordinal" | "counts";
         FindingsChoicesDto: {
             alpha: number;
             forceLsd: boolean;
@@ -1929,6 +2033,8 @@ export interface components {
             meansOverTime: components["schemas"]["MeansOverTimePointDto"][];
             measure: components["schemas"]["FindingsMeasureDto"];
             missing: components["schemas"]["MissingSummaryDto"];
+            /** @description Which model this is (the ANOVA), the one made for the measure and the others on offer. */
+            modelChoice?: components["schemas"]["ModelChoiceDto"];
             /** @description Time-with-cutoff measures only. */
             notDrained?: components["schemas"]["NotDrainedCurveDto"][];
             notices: string[];
@@ -1943,8 +2049,12 @@ export interface components {
         };
         FindingsDto: {
             anova: components["schemas"]["AnovaTableRowDto"][];
+            /** @description With a covariate: the covariate itself between treatments (a baseline should not differ). */
+            baseline?: components["schemas"]["FTestDto"];
             comparisons: components["schemas"]["ComparisonsByMethodDto"];
             context: components["schemas"]["FindingsContextDto"];
+            /** @description With a covariate (analysis of covariance): the common slope, with the covariate’s mean. */
+            covariate?: components["schemas"]["CovariateSlopeDto"];
             diagnostics: components["schemas"]["DiagnosticsDto"];
             /** @description Factorial only: LS means of each factor's levels, by factor name. */
             factorMeans?: {
@@ -1953,6 +2063,8 @@ export interface components {
             /** @description Per method, treatment → compact letters. */
             letters: components["schemas"]["LettersByMethodDto"];
             means: components["schemas"]["LsMeanDto"][];
+            /** @description With a covariate: the test of equal slopes across treatments. */
+            slopes?: components["schemas"]["FTestDto"];
             summary: components["schemas"]["AnovaSummaryDto"];
             /** @description Plain sentences from the engine. */
             warnings: string[];
@@ -1995,6 +2107,12 @@ export interface components {
             siteId: number | null;
             siteName: string | null;
             siteNames: string[];
+        };
+        FTestDto: {
+            df1: number;
+            df2: number;
+            f: number;
+            p: number;
         };
         HealthReportDto: {
             /** @enum {string} */
@@ -2329,6 +2447,31 @@ export interface components {
             count: number;
             reasons: components["schemas"]["MissingReasonCountDto"][];
         };
+        ModelChoiceDto: {
+            /** @description The analysis of this answer. */
+            analysis: components["schemas"]["FindingsAnalysis"];
+            /** @description The analysis made for the measure. */
+            defaultAnalysis: components["schemas"]["FindingsAnalysis"];
+            options: components["schemas"]["AnalysisOptionDto"][];
+            /** @description Which model and why, in plain words. */
+            why: string;
+        };
+        ModelChoicesDto: {
+            alpha: number;
+            analysis: components["schemas"]["FindingsAnalysis"];
+            /** @enum {string} */
+            covariance?: "cs" | "ar1" | "unstructured" | "auto";
+            covariateMeasureId?: number;
+            covariateRoundId?: number;
+            /** @enum {string} */
+            distribution?: "weibull" | "lognormal" | "loglogistic";
+            /** @enum {string} */
+            family?: "auto" | "poisson" | "quasipoisson";
+            measureId: number;
+            method: components["schemas"]["SeparationMethod"];
+            roundId: number;
+            siteId: number | null;
+        };
         ModelCoefficientDto: {
             /** @example -0.21 */
             estimate: number;
@@ -2336,6 +2479,49 @@ export interface components {
             se: number;
             /** @example treatment[GYP] */
             term: string;
+        };
+        ModelFindingsContextDto: {
+            censored: components["schemas"]["CensoredSummaryDto"];
+            choices: components["schemas"]["ModelChoicesDto"];
+            controlCode: string | null;
+            dataHash: string;
+            /** @description The observations sent, in the engine’s order. */
+            engineObservations: {
+                [key: string]: unknown;
+            }[];
+            /** @description The body sent to the stateless endpoint, without observations. */
+            engineRequest: {
+                [key: string]: unknown;
+            };
+            engineVersion: string;
+            measure: components["schemas"]["FindingsMeasureDto"];
+            missing: components["schemas"]["MissingSummaryDto"];
+            modelChoice: components["schemas"]["ModelChoiceDto"];
+            notices: string[];
+            /** @description The rows behind engineObservations, in the same order. */
+            observations: components["schemas"]["ModelObservationRowDto"][];
+            /** @description The round analysed (rounds over time: the latest used). */
+            round: components["schemas"]["RoundRefDto"];
+            /** @description Rounds over time: the rounds used, in time order. */
+            rounds?: components["schemas"]["RoundRefDto"][];
+            scope: components["schemas"]["FindingsScopeDto"];
+            trialCode: string;
+            trialId: number;
+        };
+        ModelObservationRowDto: {
+            block: number;
+            censored: boolean;
+            /** @description Analysis of covariance: the plot’s covariate (stored decimal text). */
+            covariate?: string;
+            observationId: number;
+            plotLabel: string;
+            /** @description Rounds over time: the round of the value. */
+            roundLabel?: string;
+            siteName: string;
+            /** @description Treatment code (the label the engine sees). */
+            treatment: string;
+            /** @description The stored decimal text (censored values: the cut-off value). */
+            value: string;
         };
         ModelRankTestDto: {
             df: number | null;
@@ -2439,6 +2625,34 @@ export interface components {
             categories: string[];
             /** @description Log-odds of a higher score (treatment contrasts against the control). */
             coefficients: components["schemas"]["ModelCoefficientDto"][];
+            /** @example CTRL */
+            control: string;
+            logLik: number;
+            /** @description Odds of a higher score than the control’s. */
+            oddsRatios: components["schemas"]["ControlRatioDto"][];
+            probabilities: components["schemas"]["CategoryShareDto"][];
+            rankTest: components["schemas"]["ModelRankTestDto"];
+            tests: components["schemas"]["LikelihoodRatioTestDto"][];
+            thresholds: components["schemas"]["ThresholdDto"][];
+            warnings: string[];
+        };
+        OrdinalFindingsDto: {
+            adjustment: string;
+            /** @enum {string} */
+            analysis: "ordinal";
+            /**
+             * @example [
+             *       "1",
+             *       "2",
+             *       "3",
+             *       "4",
+             *       "5"
+             *     ]
+             */
+            categories: string[];
+            /** @description Log-odds of a higher score (treatment contrasts against the control). */
+            coefficients: components["schemas"]["ModelCoefficientDto"][];
+            context: components["schemas"]["ModelFindingsContextDto"];
             /** @example CTRL */
             control: string;
             logLik: number;
@@ -2687,6 +2901,21 @@ export interface components {
             anova: components["schemas"]["TermTestDto"][];
             byRound: components["schemas"]["RoundTestDto"][];
             candidates: components["schemas"]["CovarianceChoiceDto"][];
+            covariance: components["schemas"]["CovarianceChoiceDto"];
+            means: components["schemas"]["RepeatedMeanDto"][];
+            plots: number;
+            rounds: components["schemas"]["RoundDto"][];
+            sphericity: components["schemas"]["SphericityDto"] | null;
+            splitPlot: components["schemas"]["SplitPlotDto"] | null;
+            warnings: string[];
+        };
+        RepeatedFindingsDto: {
+            /** @enum {string} */
+            analysis: "repeated";
+            anova: components["schemas"]["TermTestDto"][];
+            byRound: components["schemas"]["RoundTestDto"][];
+            candidates: components["schemas"]["CovarianceChoiceDto"][];
+            context: components["schemas"]["ModelFindingsContextDto"];
             covariance: components["schemas"]["CovarianceChoiceDto"];
             means: components["schemas"]["RepeatedMeanDto"][];
             plots: number;
@@ -5238,6 +5467,18 @@ export interface operations {
         parameters: {
             query: {
                 alpha?: number;
+                /** @description Leave out for the model made for the measure: censored (time with a cut-off), ordinal (score), counts (count); a number: ancova with a day-0 baseline and one later round, repeated with two or more rounds, else anova. */
+                analysis?: "anova" | "censored" | "repeated" | "ancova" | "ordinal" | "counts";
+                /** @description repeated: the within-plot covariance (auto: lowest AIC). */
+                covariance?: "cs" | "ar1" | "unstructured" | "auto";
+                /** @description ancova: the measure whose values are the covariate; default the analysed measure. */
+                covariateMeasureId?: number;
+                /** @description ancova: the round whose values are the covariate; default the day-0 round (else the earliest earlier round with values). */
+                covariateRoundId?: number;
+                /** @description censored: the time-ratio model’s distribution. */
+                distribution?: "weibull" | "lognormal" | "loglogistic";
+                /** @description counts: auto takes quasi-Poisson when the counts are overdispersed. */
+                family?: "auto" | "poisson" | "quasipoisson";
                 /** @description Compute Fisher’s LSD even when the treatment F test is not significant. */
                 forceLsd?: boolean;
                 /** @description The measure to analyse. */
@@ -5261,13 +5502,13 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
-            /** @description Findings: AnovaAnswer & {context}. */
+            /** @description Findings (the ANOVA: AnovaAnswer & {context}) or a model’s answer & {analysis, context}. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": components["schemas"]["FindingsDto"];
+                    "application/json": components["schemas"]["FindingsDto"] | components["schemas"]["CensoredFindingsDto"] | components["schemas"]["RepeatedFindingsDto"] | components["schemas"]["AncovaFindingsDto"] | components["schemas"]["OrdinalFindingsDto"] | components["schemas"]["CountsFindingsDto"];
                 };
             };
             /** @description No valid token. */

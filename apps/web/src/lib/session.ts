@@ -27,6 +27,8 @@ export const session = {
   /** Forgets the session (signing out, or after the API refused it). */
   close(): void {
     window.localStorage.removeItem(MARKER_KEY);
+    // What the service worker kept for a Round walk without signal (vite.config.ts) goes with the session.
+    if ('caches' in window) void window.caches.delete('friable-walk-data');
   },
 
   /** The headers a request to the API carries (also used by the upload's XMLHttpRequest). */

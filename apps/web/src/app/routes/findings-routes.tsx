@@ -1,4 +1,4 @@
-import { lazy, Suspense } from 'react';
+import { lazy, Suspense, useEffect } from 'react';
 import { LoadingState } from '../../components/states';
 import { useAuth } from '../../features/auth/hooks/auth-context';
 import { useTrialOutlet } from '../layouts/trial-layout';
@@ -16,9 +16,15 @@ export function QuickAnalysisRoute() {
   );
 }
 
+/** The Findings plots' code (with the charting library), asked for as the page opens, while its analysis is computed. */
+const loadFindingsPlots = () => import('../../features/findings/components/findings-plots');
+
 export function FindingsRoute() {
   const { trial } = useTrialOutlet();
   const { user } = useAuth();
+  useEffect(() => {
+    void loadFindingsPlots();
+  }, []);
   return (
     <Suspense fallback={<LoadingState what="the Findings" />}>
       <FindingsPage trial={trial} meId={user?.id} />

@@ -93,7 +93,7 @@ export function ReportPage({ trial }: { trial: TrialDetail }) {
         </HTMLTable>
       </div>
       {r.measures.map((m) => (
-        <ReportMeasureSection key={m.measure.id} entry={m} treatmentOrder={p.treatments.map((t) => t.code)} />
+        <ReportMeasureSection key={m.measure.id} entry={m} treatmentOrder={p.treatments.map((t) => t.code)} control={p.treatments.find((t) => t.isControl)?.code} />
       ))}
       <ReportReviews reviews={r.reviews} />
       <section className="fr-report__measure">
@@ -119,7 +119,7 @@ export function ReportPage({ trial }: { trial: TrialDetail }) {
   );
 }
 
-function ReportMeasureSection({ entry, treatmentOrder }: { entry: ReportMeasure; treatmentOrder: string[] }) {
+function ReportMeasureSection({ entry, treatmentOrder, control }: { entry: ReportMeasure; treatmentOrder: string[]; control?: string }) {
   const { measure } = entry;
   const means = inProtocolOrder(entry.means, treatmentOrder);
   const headingId = `fr-report-measure-${measure.id}`;
@@ -166,7 +166,7 @@ function ReportMeasureSection({ entry, treatmentOrder }: { entry: ReportMeasure;
           </p>
           {entry.rankTest && <RankTestPanel kind={entry.rankTest.test} answer={entry.rankTest} />}
           <Suspense fallback={<LoadingState what="the plot" />}>
-            <ReportMeansPlot means={means} measureName={measure.name} unit={measure.unit} />
+            <ReportMeansPlot means={means} measureName={measure.name} unit={measure.unit} treatmentOrder={treatmentOrder} control={control} />
           </Suspense>
           {entry.warnings.length > 0 && (
             <ul className="fr-findings-checks">
