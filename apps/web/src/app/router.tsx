@@ -5,6 +5,9 @@ import { RouteBoundary } from './errors/route-boundary';
 import { AppLayout } from './layouts/app-layout';
 import { TrialLayout } from './layouts/trial-layout';
 import { lazyPage } from './lazy-page';
+const AccountRoute = lazyPage(() => import('./routes/account'), 'AccountRoute');
+const ForgotPasswordRoute = lazyPage(() => import('./routes/account'), 'ForgotPasswordRoute');
+const ResetPasswordRoute = lazyPage(() => import('./routes/account'), 'ResetPasswordRoute');
 import { SignInRoute } from './routes/sign-in';
 
 // Every page but sign-in loads with its route (its own chunk): the first screen carries only the
@@ -28,9 +31,6 @@ const ReportRoute = lazyPage(() => import('./routes/findings-routes'), 'ReportRo
 const ActivityRoute = lazyPage(() => import('./routes/activity'), 'ActivityRoute');
 const PlannerRoute = lazyPage(() => import('./routes/planner'), 'PlannerRoute');
 const PeopleRoute = lazyPage(() => import('./routes/people'), 'PeopleRoute');
-const AccountRoute = lazyPage(() => import('./routes/account'), 'AccountRoute');
-const ForgotPasswordRoute = lazyPage(() => import('./routes/account'), 'ForgotPasswordRoute');
-const ResetPasswordRoute = lazyPage(() => import('./routes/account'), 'ResetPasswordRoute');
 const RateCalculatorPage = lazyPage(() => import('../features/rates/components/rate-calculator-page'), 'RateCalculatorPage');
 const OutboxPage = lazyPage(() => import('../features/outbox/components/outbox-page'), 'OutboxPage');
 const NotFoundRoute = lazyPage(() => import('./routes/not-found'), 'NotFoundRoute');
@@ -53,7 +53,6 @@ export const routes: RouteObject[] = [
       </RouteBoundary>
     ),
   },
-  // A forgotten password, and the page of the e-mailed reset link.
   {
     path: paths.forgotPassword.path,
     element: (
