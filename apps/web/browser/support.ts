@@ -30,7 +30,7 @@ export async function signIn(page: Page, email: string, password = demoPassword)
   await page.getByRole('button', { name: 'Sign in' }).click();
 }
 
-/** Calls the API as the signed-in person of this page (the token the app keeps). */
+/** Calls the API as the signed-in person of this page (its session cookie, with the header writes need). */
 export async function api<T>(page: Page, path: string, init?: { method: string; json: unknown }): Promise<T> {
   return page.evaluate(
     async ({ address, request }) => {
