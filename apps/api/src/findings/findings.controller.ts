@@ -6,6 +6,7 @@ import { CurrentTrialAccess } from '../common/decorators/current-user.decorator'
 import { ApiFileResponse } from '../common/openapi/file-response.decorator';
 import { findingsBundle } from './bundle/findings-bundle';
 import { FindingsQueryDto } from './dto/findings-query.dto';
+import { FindingsCache } from './findings-cache';
 import { FindingsService } from './findings.service';
 import { FindingsDto } from './dto/findings.dto';
 import { AncovaFindingsDto, CensoredFindingsDto, CountsFindingsDto, OrdinalFindingsDto, RepeatedFindingsDto } from './dto/model-findings.dto';
@@ -16,7 +17,10 @@ const ANSWERS = [FindingsDto, CensoredFindingsDto, RepeatedFindingsDto, AncovaFi
 @ApiExtraModels(...ANSWERS)
 @Controller('trials/:trialId/findings')
 export class FindingsController {
-  constructor(private readonly findings: FindingsService) {}
+  constructor(
+    private readonly findings: FindingsService,
+    private readonly cache: FindingsCache,
+  ) {}
 
   @Get()
   @AnyTrialMember()
@@ -30,12 +34,13 @@ export class FindingsController {
       '`analysis=anova`: the same body as POST /api/stats/anova on the stored decimal text (design from the trial; several sites combined: multisite-rcbd), ' +
       'plus `context`: the observations in the order given to the engine (residual index), censoring, missing values, % of control, ' +
       'the rank test (Friedman for blocked designs, blocks = site × block when sites are combined; Kruskal–Wallis otherwise), ' +
-      'the not-drained curve for a time with a cut-off, the means over time and the data hash.',
+      'the not-drained curve for a time with a cut-off, the means over time and the data hash. ' +
+      'Answers are kept until the next write to the trial (through any API instance).',
   })
   @ApiOkResponse({ schema: { anyOf: ANSWERS.map((answer) => ({ $ref: getSchemaPath(answer) })) }, description: 'Findings (the ANOVA: AnovaAnswer & {context}) or a model’s answer & {analysis, context}.' })
   @ApiUnprocessableEntityResponse({ description: 'An unknown measure, round or site, no data yet, or the engine’s sentence.' })
   get(@CurrentTrialAccess() access: TrialAccessContext, @Query() query: FindingsQueryDto) {
-    return this.findings.findings(access.trialId, query);
+    return this.cache.answer(access.trialId, query, () => this.findings.findings(access.trialId, query));
   }
 
   @Get('bundle')

@@ -42,7 +42,7 @@ function curveTraces(spec: Extract<ModelChartSpec, { chart: 'not-drained' }>, st
         legendgroup: curve.treatment,
         x,
         y: curve.points.map((p) => p.notDrained),
-        line: { color: style.colour, width: 2, shape: 'hv', dash: style.dash },
+        line: { color: style.colour, width: 2, shape: 'hv', dash: style.isControl ? 'dot' : 'solid' },
         marker: { color: style.colour, symbol: style.marker, size: 6 },
       } as Data,
     ];
@@ -104,7 +104,7 @@ export default function ModelChart({ spec, styles }: { spec: ModelChartSpec; sty
               x: series.points.map((p) => p.day),
               y: series.points.map((p) => p.mean),
               text: series.points.map((p) => p.round),
-              line: { color: style.colour, width: 2, dash: style.dash },
+              line: { color: style.colour, width: 2, dash: style.isControl ? 'dot' : 'solid' },
               marker: { color: style.colour, symbol: style.marker, size: 8 },
               error_y: { type: 'data', array: series.points.map((p) => p.se), visible: true, thickness: 1, color: style.colour },
             } as Data;
