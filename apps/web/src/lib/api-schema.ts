@@ -605,6 +605,26 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/trials/{trialId}/findings/bundle": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /**
+         * The same analysis as a small bundle anyone can check: data.csv, analysis.R, friable.json, README.txt
+         * @description Takes the query of GET /findings. analysis.R reproduces the tables from data.csv with R’s standard packages (emmeans, survival, multcomp, nlme, MASS) and writes r-results.json beside friable.json, Friable’s own answer.
+         */
+        get: operations["FindingsController_bundle"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/api/trials/{trialId}/intake-columns": {
         parameters: {
             query?: never;
@@ -2137,6 +2157,7 @@ export interface components {
             observations: components["schemas"]["FindingsObservationRowDto"][];
             percentOfControl: components["schemas"]["PercentOfControlDto"][];
             rankTest: components["schemas"]["FindingsRankTestDto"];
+            /** @description The round analysed (rounds over time: the latest used). */
             round: components["schemas"]["RoundRefDto"];
             scope: components["schemas"]["FindingsScopeDto"];
             trialCode: string;
@@ -2595,6 +2616,7 @@ export interface components {
             censored: components["schemas"]["CensoredSummaryDto"];
             choices: components["schemas"]["ModelChoicesDto"];
             controlCode: string | null;
+            /** @description SHA-256 (hex) of the canonical JSON of the observations sent to the engine. */
             dataHash: string;
             /** @description The observations sent, in the engine’s order. */
             engineObservations: {
@@ -5685,6 +5707,92 @@ export interface operations {
                 };
             };
             /** @description An unknown measure, round or site, no data yet, or the engine’s sentence. */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+        };
+    };
+    FindingsController_bundle: {
+        parameters: {
+            query: {
+                alpha?: number;
+                /** @description Leave out for the model made for the measure: censored (time with a cut-off), ordinal (score), counts (count); a number: ancova with a day-0 baseline and one later round, repeated with two or more rounds, else anova. */
+                analysis?: "anova" | "censored" | "repeated" | "ancova" | "ordinal" | "counts";
+                /** @description repeated: the within-plot covariance (auto: lowest AIC). */
+                covariance?: "cs" | "ar1" | "unstructured" | "auto";
+                /** @description ancova: the measure whose values are the covariate; default the analysed measure. */
+                covariateMeasureId?: number;
+                /** @description ancova: the round whose values are the covariate; default the day-0 round (else the earliest earlier round with values). */
+                covariateRoundId?: number;
+                /** @description censored: the time-ratio model’s distribution. */
+                distribution?: "weibull" | "lognormal" | "loglogistic";
+                /** @description counts: auto takes quasi-Poisson when the counts are overdispersed. */
+                family?: "auto" | "poisson" | "quasipoisson";
+                /** @description Compute Fisher’s LSD even when the treatment F test is not significant. */
+                forceLsd?: boolean;
+                /** @description The measure to analyse. */
+                measureId: number;
+                /** @description Mean separation method. */
+                method?: "lsd" | "tukey" | "dunnett" | "bonferroni" | "holm";
+                /** @description The assessment round to analyse; leave out for the latest round holding values of the measure in this scope. */
+                roundId?: number;
+                /** @description One site; leave out for all sites combined. */
+                siteId?: number;
+                /** @description With all sites combined: random tests treatment against site × treatment. */
+                sitesAre?: "random" | "fixed";
+                transform?: "none" | "log" | "sqrt" | "arcsine-sqrt";
+            };
+            header?: never;
+            path: {
+                /** @description The trial. */
+                trialId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description A zip named after the trial, measure, round and analysis. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/zip": string;
+                };
+            };
+            /** @description No valid token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description Needs one of these roles on the trial: investigator, collaborator, reviewer. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description No such trial, or you are not a member of it. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description As GET /findings. */
             422: {
                 headers: {
                     [name: string]: unknown;
