@@ -343,7 +343,7 @@ export class IntakeService {
     }
     if (checked.valueWarnings > 0 && !options.dryRun && !options.acceptWarnings) {
       throw refusal(
-        `Nothing was written: ${plural(checked.valueWarnings, 'warning needs', 'warnings need')} your decision. Check the values, then send the file again with acceptWarnings=true to keep them as typed.`,
+        `Nothing was written: ${plural(checked.valueWarnings, 'warning needs', 'warnings need')} your decision. Check the values; if they are right, confirm them and send the file again to keep them as typed.`,
         checked.warnings.filter((warning) => warning.row !== null),
       );
     }
@@ -365,7 +365,7 @@ export class IntakeService {
       await this.bulk.classify(transaction, context);
       comparison = await this.bulk.compareStaged(transaction, INTAKE_CHANGE_LIST_CAP);
     }
-    const warned = checked.valueWarnings ? ` ${plural(checked.valueWarnings, 'warning needs', 'warnings need')} acceptWarnings=true.` : '';
+    const warned = checked.valueWarnings ? ` ${plural(checked.valueWarnings, 'warning needs', 'warnings need')} your confirmation.` : '';
     const message = identical
       ? this.identicalMessage(resolved, previous!)
       : `Nothing was written (dry run). Committing would add ${plural(comparison.created, 'new value', 'new values')}, change ${count(comparison.updated)} and leave ${count(comparison.unchanged)} unchanged.${warned}`;
@@ -459,9 +459,11 @@ export class IntakeService {
     return `This file is byte for byte the one committed for ${resolved.site.name}, ${resolved.round.label} on ${previous.createdAt.toISOString().slice(0, 10)}; nothing was changed.`;
   }
 
-  /** The receipt goes after the commit; a mail server that is down does not undo the upload. */
+  /** The receipt goes after the commit, unless the uploader turned receipts off; a mail server that is down does not undo the upload. */
   private async sendReceipt(resolved: Resolved, user: AuthUser, upload: IntakeUpload, outcome: Outcome): Promise<void> {
     const { result } = outcome;
+    const [wanted] = await this.sequelize.query<{ receipts: number }>('SELECT email_receipts AS receipts FROM users WHERE id = ?', { replacements: [user.id], type: QueryTypes.SELECT });
+    if (!wanted || !Number(wanted.receipts)) return;
     try {
       await this.mail.send(
         intakeReceiptEmail({

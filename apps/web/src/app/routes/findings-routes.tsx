@@ -1,4 +1,5 @@
 import { useEffect } from 'react';
+import { useAuth } from '../../features/auth/hooks/auth-context';
 import { FindingsPage } from '../../features/findings/components/findings-page';
 import { QuickAnalysisPage } from '../../features/findings/components/quick-analysis-page';
 import { ReportPage } from '../../features/findings/components/report-page';
@@ -16,10 +17,11 @@ const loadFindingsPlots = () => import('../../features/findings/components/findi
 
 export function FindingsRoute() {
   const { trial } = useTrialOutlet();
+  const { user } = useAuth();
   useEffect(() => {
     void loadFindingsPlots();
   }, []);
-  return <FindingsPage trial={trial} />;
+  return <FindingsPage trial={trial} meId={user?.id} />;
 }
 
 export function ReportRoute() {

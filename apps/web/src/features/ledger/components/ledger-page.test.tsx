@@ -67,7 +67,7 @@ async function typeInto(cellText: string, text: string) {
 }
 
 describe('LedgerPage', () => {
-  beforeEach(() => window.localStorage.setItem('friable.accessToken', 'token'));
+  beforeEach(() => window.localStorage.setItem('friable.signedIn', '1'));
   afterEach(() => vi.unstubAllGlobals());
 
   it('shows a row per plot and a column per measure, censored and missing values marked apart, with a legend', async () => {
@@ -105,7 +105,7 @@ describe('LedgerPage', () => {
     const api = replies();
     api['PATCH /api/trials/3/observations/500'] = {
       status: 422,
-      body: { statusCode: 422, error: 'Unprocessable Entity', message: 'Not saved: 3 is below the plausible 5 s. Send acceptWarnings: true to keep it.', errors: [] },
+      body: { statusCode: 422, error: 'Unprocessable Entity', message: 'Not saved: 3 is below the plausible 5 s. If the value is right, confirm it to keep it.', errors: [{ field: 'value', message: 'value 3 is below the plausible 5 s.' }, { field: 'acceptWarnings', message: 'confirm the value is right to keep it' }] },
     };
     const calls = mockApi(api);
     renderWithApp(<LedgerPage trial={activeTrial()} />);
@@ -174,7 +174,13 @@ describe('LedgerPage', () => {
     doubleClick(within(mainGrid()).getByText('412'));
     expect(within(mainGrid()).queryByDisplayValue('412')).not.toBeInTheDocument();
     await userEvent.click(screen.getByRole('button', { name: 'Unlock the trial' }));
-    await waitFor(() => expect(calls.find((c) => c.method === 'PATCH')).toMatchObject({ method: 'PATCH', path: '/api/trials/3', body: { status: 'active' } }));
+    const dialog = await screen.findByRole('dialog');
+    expect(dialog).toHaveTextContent('Data changed after sign-off');
+    await userEvent.type(within(dialog).getByLabelText(/Why unlock/), 'A slipped decimal at plot 3.');
+    await userEvent.click(within(dialog).getByRole('button', { name: 'Unlock' }));
+    await waitFor(() =>
+      expect(calls.find((c) => c.method === 'PATCH')).toMatchObject({ method: 'PATCH', path: '/api/trials/3', body: { status: 'active', reason: 'A slipped decimal at plot 3.' } }),
+    );
   });
 
   it('lets a collaborator read another site without editing, and offers no lock', async () => {
