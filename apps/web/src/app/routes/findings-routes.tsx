@@ -1,8 +1,8 @@
 import { useEffect } from 'react';
+import { useAuth } from '../../features/auth/hooks/auth-context';
 import { FindingsPage } from '../../features/findings/components/findings-page';
 import { QuickAnalysisPage } from '../../features/findings/components/quick-analysis-page';
 import { ReportPage } from '../../features/findings/components/report-page';
-import { useAuth } from '../../features/auth/hooks/auth-context';
 import { useTrialOutlet } from '../layouts/trial-layout';
 
 // This module is the Findings pages' chunk, loaded with their route (router.tsx); their plots load
