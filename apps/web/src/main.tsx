@@ -7,8 +7,10 @@ import './styles/field.css';
 import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
 import { App } from './app/app';
+import { configureIcons } from './app/icons';
 import { registerServiceWorker } from './lib/service-worker';
 
+configureIcons();
 createRoot(document.getElementById('root') as HTMLElement).render(
   <StrictMode>
     <App />

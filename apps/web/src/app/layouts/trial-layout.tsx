@@ -6,6 +6,7 @@ import { TrialStatusTag } from '../../components/trial-status-tag';
 import { paths } from '../../config/paths';
 import { designLabels, roleLabels } from '../../lib/format';
 import { useTrial } from '../../lib/api/get-trial';
+import { RouteBoundary } from '../errors/route-boundary';
 
 export interface TrialOutletContext {
   trial: TrialDetail;
@@ -58,7 +59,9 @@ export function TrialLayout() {
           </NavLink>
         ))}
       </nav>
-      <Outlet context={{ trial: t } satisfies TrialOutletContext} />
+      <RouteBoundary>
+        <Outlet context={{ trial: t } satisfies TrialOutletContext} />
+      </RouteBoundary>
     </div>
   );
 }

@@ -1,10 +1,8 @@
-import Plotly from 'plotly.js-dist-min';
-import createPlotlyComponent from 'react-plotly.js/factory';
 import type { Data, Layout } from 'plotly.js-dist-min';
+import { Plot } from '../../../lib/plotly';
 import { plotlyConfig } from '../../../lib/plotly-config';
 
-// This module (and so Plotly, about 1.4 MB) is only ever reached through React.lazy from pages that draw plots.
-const Plot = createPlotlyComponent(Plotly);
+// This module (and so Plotly) is only ever reached through React.lazy from pages that draw plots.
 
 const baseLayout: Partial<Layout> = {
   autosize: true,

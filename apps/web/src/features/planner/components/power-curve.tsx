@@ -1,9 +1,7 @@
-import Plotly from 'plotly.js-dist-min';
-import createPlotlyComponent from 'react-plotly.js/factory';
+import { Plot } from '../../../lib/plotly';
 import { plotlyConfig } from '../../../lib/plotly-config';
 
-// The minified Plotly bundle is large: this file is only ever loaded lazily, by the Planner.
-const Plot = createPlotlyComponent(Plotly);
+// Plotly is large: this file is only ever loaded lazily, by the Planner.
 
 const clay = '#b5603d';
 const sage = '#7d9470';

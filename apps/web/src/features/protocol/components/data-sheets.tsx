@@ -17,11 +17,6 @@ export interface SheetIdentityColumn {
   cell: (plot: Plot) => ReactNode;
 }
 
-/** The whole plot column, shown when the design has whole plots. */
-function defaultIdentityColumns(plots: Plot[]): SheetIdentityColumn[] {
-  return plots.some((p) => p.wholePlotLabel) ? [{ heading: 'Whole plot', cell: (plot) => plot.wholePlotLabel ?? '' }] : [];
-}
-
 /** The Round walk's address of one plot, absolute, for its QR code. */
 const walkAddress = (trial: TrialDetail, site: Site, round: AssessmentRound | undefined, plot: Plot) =>
   `${window.location.origin}${paths.trialWalk.href(trial.id, site.id, round?.id, plot.id)}`;
@@ -54,7 +49,7 @@ export function SiteSheets({
   const ordered = [...plots].sort((a, b) => a.block - b.block || a.position - b.position);
   const treatmentName = (id: number) => trial.treatments.find((t) => t.id === id)?.name ?? '';
   const amountOf = (treatmentId: number) => amounts.find((a) => a.siteId === site.id && a.treatmentId === treatmentId);
-  const columns = identityColumns ?? defaultIdentityColumns(plots);
+  const columns = identityColumns ?? splitPlotColumns(plots);
   const labelRound = rounds[0];
   const addresses = [...new Set([...rounds.flatMap((round) => ordered.map((plot) => walkAddress(trial, site, round, plot))), ...ordered.map((plot) => walkAddress(trial, site, labelRound, plot))])];
   const qr = useQrCodes(addresses);
@@ -67,7 +62,7 @@ export function SiteSheets({
     <div className="fr-sheets">
       <section className="fr-sheet">
         <SheetHeading trial={trial} site={site} title="Plot plan" />
-        <PlotMap plots={plots} treatments={trial.treatments} swatches={swatches} siteName={site.name} printed />
+        <PlotMap plots={plots} treatments={trial.treatments} factors={trial.factors} swatches={swatches} siteName={site.name} printed />
         <PlotLegend treatments={trial.treatments} swatches={swatches} />
         <table className="fr-sheet__table fr-sheet__amounts" aria-label={`Amount per plot at ${site.name}`}>
           <thead>
@@ -172,6 +167,12 @@ export function SiteSheets({
               <span className="fr-label__treatment">
                 {plot.treatmentCode} · {treatmentName(plot.treatmentId)}
               </span>
+              {plot.wholePlotLabel && (
+                <span className="fr-label__unit">
+                  whole plot {plot.wholePlotLabel} · sub plot {plot.subPlot}
+                  {plot.subSubPlot !== null ? ` · sub-sub plot ${plot.subSubPlot}` : ''}
+                </span>
+              )}
               <span className="fr-label__where">
                 {trial.code} · {site.name} · block {plot.block}
               </span>
@@ -182,6 +183,16 @@ export function SiteSheets({
       </section>
     </div>
   );
+}
+
+/** A split plot's identity columns on the data sheet, as the CSV template has them: whole plot, sub plot (and sub-sub plot). */
+function splitPlotColumns(plots: Plot[]): SheetIdentityColumn[] {
+  if (!plots.some((p) => p.wholePlot !== null)) return [];
+  return [
+    { heading: 'Whole plot', cell: (p) => p.wholePlotLabel ?? '' },
+    { heading: 'Sub plot', cell: (p) => String(p.subPlot ?? '') },
+    ...(plots.some((p) => p.subSubPlot !== null) ? [{ heading: 'Sub-sub plot', cell: (p: Plot) => String(p.subSubPlot ?? '') }] : []),
+  ];
 }
 
 /** The cautions printed on every sheet, with the trial's own safety notes. */

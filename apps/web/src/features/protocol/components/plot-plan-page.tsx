@@ -1,5 +1,6 @@
 import { Button, Callout, Section, SectionCard } from '@blueprintjs/core';
 import type { Site, TrialDetail } from '@friable/contracts';
+import { isFactorDesign } from '@friable/field';
 import { useMemo, useState } from 'react';
 import { useSearchParams } from 'react-router-dom';
 import { SafetyCautions } from '../../../components/safety-cautions';
@@ -7,9 +8,11 @@ import { RoundPicker, SitePicker } from '../../../components/site-round-pickers'
 import { EmptyState, ErrorState, LoadingState } from '../../../components/states';
 import { formatArea, formatNumber } from '../../../lib/format';
 import { useAmounts } from '../api/get-amounts';
+import { useLevelAmounts } from '../api/get-level-amounts';
 import { useSitePlots } from '../../../lib/api/get-site-plots';
 import { SiteSheets } from './data-sheets';
 import { PlotLegend, PlotMap } from './plot-map';
+import { LevelAmounts } from './level-amounts';
 import { SiteAmounts } from './site-amounts';
 import { TemplateDownloads } from './template-downloads';
 import { treatmentSwatches } from './treatment-palette';
@@ -25,7 +28,9 @@ export function PlotPlanPage({ trial }: { trial: TrialDetail }) {
   const [params, setParams] = useSearchParams();
   const site = chooseSite(trial, params.get('site'));
   const plots = useSitePlots(trial.id, site?.randomizedAt ? site.id : undefined);
+  const factorDesign = isFactorDesign(trial.design);
   const amounts = useAmounts(trial.id);
+  const levelAmounts = useLevelAmounts(trial.id, factorDesign);
   const swatches = useMemo(() => treatmentSwatches(trial.treatments), [trial.treatments]);
   const [printLayout, setPrintLayout] = useState(false);
   const rounds = useMemo(() => [...trial.rounds].sort((a, b) => a.dayOffset - b.dayOffset), [trial.rounds]);
@@ -70,7 +75,7 @@ export function PlotPlanPage({ trial }: { trial: TrialDetail }) {
           <div className="fr-screen-only fr-plot-plan__screen">
             <Section title={`Plot plan — ${site.name}`} icon="grid-view" className="fr-section" subtitle={`Seed ${site.randomizationSeed ?? trial.seed}`}>
               <SectionCard>
-                <PlotMap plots={plots.data} treatments={trial.treatments} swatches={swatches} siteName={site.name} />
+                <PlotMap plots={plots.data} treatments={trial.treatments} factors={trial.factors} swatches={swatches} siteName={site.name} />
                 <PlotLegend treatments={trial.treatments} swatches={swatches} />
               </SectionCard>
             </Section>
@@ -82,9 +87,22 @@ export function PlotPlanPage({ trial }: { trial: TrialDetail }) {
       )}
 
       <div className="fr-screen-only">
-        <Section title="Amount per plot" icon="shopping-cart" className="fr-section" subtitle={`For ${formatArea(site.areaM2)} of surface per plot`}>
+        <Section
+          title={factorDesign ? 'Amount per unit each factor goes on' : 'Amount per plot'}
+          icon="shopping-cart"
+          className="fr-section"
+          subtitle={factorDesign ? `${formatArea(site.areaM2)} of surface per plot; a whole plot holds its sub plots` : `For ${formatArea(site.areaM2)} of surface per plot`}
+        >
           <SectionCard>
-            {amounts.isPending ? (
+            {factorDesign ? (
+              levelAmounts.isPending ? (
+                <LoadingState what="the amounts" />
+              ) : levelAmounts.isError ? (
+                <ErrorState title="The amounts could not be worked out" error={levelAmounts.error} onRetry={() => levelAmounts.refetch()} />
+              ) : (
+                <LevelAmounts trial={trial} site={site} amounts={levelAmounts.data} />
+              )
+            ) : amounts.isPending ? (
               <LoadingState what="the amounts" />
             ) : amounts.isError ? (
               <ErrorState title="The amounts could not be worked out" error={amounts.error} onRetry={() => amounts.refetch()} />
