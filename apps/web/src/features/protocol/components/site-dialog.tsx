@@ -8,6 +8,7 @@ import { NumberText } from '../../../components/number-text';
 import { formatArea, numberInputText, parseNumberInput } from '../../../lib/format';
 import { useMembers } from '../../../lib/api/get-members';
 import { useSaveSite } from '../api/save-site';
+import { plotsPerWholePlot } from './factor-roles';
 
 const shownFields = ['name', 'location', 'soilDescription', 'shape', 'lengthM', 'widthM', 'diameterCm', 'containerDepthCm', 'soilVolumeL', 'blocks', 'labelPrefix', 'leadUserId'];
 const labels = { lengthM: 'Length', widthM: 'Width', diameterCm: 'Inside diameter', containerDepthCm: 'Container depth', soilVolumeL: 'Soil volume', blocks: 'Blocks' };
@@ -30,6 +31,7 @@ function previewArea(shape: 'rectangle' | 'round', length: string, width: string
 export function SiteDialog({ trial, site, onClose }: { trial: TrialDetail; site: Site | null; onClose: () => void }) {
   const save = useSaveSite(trial.id);
   const members = useMembers(trial.id);
+  const perWholePlot = plotsPerWholePlot(trial);
   const [localError, setLocalError] = useState<Error | null>(null);
   const [name, setName] = useState(site?.name ?? '');
   const [location, setLocation] = useState(site?.location ?? '');
@@ -90,6 +92,11 @@ export function SiteDialog({ trial, site, onClose }: { trial: TrialDetail; site:
           </Field>
           <fieldset className="fr-fieldset">
             <legend>Each plot</legend>
+            {perWholePlot !== null && (
+              <p className="fr-muted fr-small">
+                In a split plot this is one sub plot, the unit that is measured; a whole plot is {perWholePlot} of them side by side.
+              </p>
+            )}
             <Field label="Shape" field="shape" error={error}>
               <RadioGroup inline selectedValue={shape} onChange={(e) => setShape(e.currentTarget.value as 'rectangle' | 'round')}>
                 <Radio value="rectangle" label="Rectangle (bed or plot)" />

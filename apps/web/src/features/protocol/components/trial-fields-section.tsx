@@ -3,7 +3,7 @@ import { TRIAL_DESIGNS, type TrialDesign, type TrialDetail } from '@friable/cont
 import { useState } from 'react';
 import { Field } from '../../../components/field-errors';
 import { FormDialog } from '../../../components/form-dialog';
-import { designLabels, formatDate, statusLabels } from '../../../lib/format';
+import { designHelp, designLabels, formatDate, statusLabels } from '../../../lib/format';
 import { useUpdateTrial } from '../api/update-trial';
 
 const shownFields = ['title', 'question', 'design', 'startDate', 'seed', 'safetyNotes', 'noControlReason'];
@@ -85,7 +85,7 @@ function TrialFieldsDialog({ trial, onClose }: { trial: TrialDetail; onClose: ()
           <Field label="Question" field="question" error={update.error} help="What the trial should find out, e.g. “Does gypsum at 40 lb/1,000 ft² shorten drain time on heavy clay?”">
             <TextArea id="fr-field-question" value={question} onChange={(e) => setQuestion(e.target.value)} fill autoResize />
           </Field>
-          <Field label="Design" field="design" error={update.error} help="Randomized complete block puts every treatment once in each block.">
+          <Field label="Design" field="design" error={update.error} help={designHelp[design]}>
             <HTMLSelect id="fr-field-design" value={design} onChange={(e) => setDesign(e.target.value as TrialDesign)} fill>
               {TRIAL_DESIGNS.map((d) => (
                 <option key={d} value={d}>
