@@ -149,16 +149,16 @@ async function readMarks(page, timeoutMs = 30_000) {
   return page.evaluate(() => ({ table: window.__friableMarks?.table ?? null, chart: window.__friableMarks?.chart ?? null }));
 }
 
-async function signedInContext(browser, token) {
-  const context = await browser.newContext({ viewport: { width: 1280, height: 800 } });
-  await context.addInitScript((value) => localStorage.setItem('friable.accessToken', value), token);
+/** A new context (empty cache) holding the signed-in session: its cookie and the page's marker (storageState). */
+async function signedInContext(browser, signedIn) {
+  const context = await browser.newContext({ viewport: { width: 1280, height: 800 }, storageState: signedIn });
   await context.addInitScript(installMarks);
   return context;
 }
 
 /** The demo trial's Findings page by its address, in a new context (empty cache): the whole app loads. */
-async function findingsByAddress(browser, token, origin, trialId) {
-  const context = await signedInContext(browser, token);
+async function findingsByAddress(browser, signedIn, origin, trialId) {
+  const context = await signedInContext(browser, signedIn);
   try {
     const page = await context.newPage();
     await page.goto(`${origin}/trials/${trialId}/findings`, { waitUntil: 'commit' });
@@ -169,8 +169,8 @@ async function findingsByAddress(browser, token, origin, trialId) {
 }
 
 /** The Findings tab clicked from the trial's Protocol page, in a new context (the Findings code not yet loaded). */
-async function findingsByTab(browser, token, origin, trialId) {
-  const context = await signedInContext(browser, token);
+async function findingsByTab(browser, signedIn, origin, trialId) {
+  const context = await signedInContext(browser, signedIn);
   try {
     const page = await context.newPage();
     await page.goto(`${origin}/trials/${trialId}/protocol`);
@@ -210,15 +210,15 @@ async function measure(base) {
     await settle(page);
     const firstScreen = await assetsSoFar();
 
-    const token = await page.evaluate(() => localStorage.getItem('friable.accessToken'));
-    const trials = await page.evaluate(async (value) => (await fetch('/api/trials', { headers: { Authorization: `Bearer ${value}` } })).json(), token);
+    const signedIn = await context.storageState();
+    const trials = await page.evaluate(async () => (await fetch('/api/trials')).json());
     await context.close();
     const demo = Array.isArray(trials) ? trials.find((trial) => trial.code === DEMO_CODE) : undefined;
     const runs = { address: [], tab: [] };
     if (demo) {
       for (let run = 0; run < TIMED_RUNS; run += 1) {
-        runs.address.push(await findingsByAddress(browser, token, origin, demo.id));
-        runs.tab.push(await findingsByTab(browser, token, origin, demo.id));
+        runs.address.push(await findingsByAddress(browser, signedIn, origin, demo.id));
+        runs.tab.push(await findingsByTab(browser, signedIn, origin, demo.id));
       }
     }
     return { database, webDist, signIn, firstScreen, demo, runs };

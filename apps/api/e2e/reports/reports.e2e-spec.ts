@@ -65,7 +65,10 @@ describe('Report: what the printable report page needs', () => {
     expect(methods('/api/trials/{trialId}/analyses')).toEqual(['get', 'post']);
     expect(methods('/api/trials/{trialId}/analyses/{analysisId}')).toEqual(['get']);
     expect(methods('/api/trials/{trialId}/analyses/{analysisId}/comments')).toEqual(['get', 'post']);
-    expect(methods('/api/trials/{trialId}/analyses/{analysisId}/sign-off')).toEqual(['post']);
+    expect(methods('/api/trials/{trialId}/analyses/{analysisId}/sign-offs')).toEqual(['post']);
+    expect(methods('/api/trials/{trialId}/analyses/{analysisId}/review-requests')).toEqual(['post']);
+    expect(methods('/api/trials/{trialId}/analyses/{analysisId}/comments/{commentId}')).toEqual(['delete', 'patch']);
+    expect(methods('/api/trials/{trialId}/members/{userId}')).toEqual(['delete', 'patch']);
     for (const file of ['export.csv', 'export-dictionary.csv', 'export.xlsx', 'report']) expect(methods(`/api/trials/{trialId}/${file}`)).toEqual(['get']);
   });
 });

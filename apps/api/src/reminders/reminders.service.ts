@@ -46,7 +46,7 @@ const DUE_SQL = `
     JOIN trials t ON t.id = r.trial_id AND t.status = 'active' AND t.start_date IS NOT NULL
     JOIN sites s ON s.trial_id = t.id
     JOIN trial_memberships m ON m.trial_id = t.id AND m.role = 'collaborator' AND m.site_id = s.id
-    JOIN users u ON u.id = m.user_id AND u.is_active = 1
+    JOIN users u ON u.id = m.user_id AND u.is_active = 1 AND u.email_reminders = 1
    WHERE DATE_ADD(t.start_date, INTERVAL r.day_offset DAY) = :dueDate
      AND NOT EXISTS (SELECT 1 FROM round_reminders rr
                       WHERE rr.round_id = r.id AND rr.site_id = s.id AND rr.user_id = u.id AND rr.due_date = :dueDate)

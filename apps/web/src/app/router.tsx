@@ -5,6 +5,9 @@ import { RouteBoundary } from './errors/route-boundary';
 import { AppLayout } from './layouts/app-layout';
 import { TrialLayout } from './layouts/trial-layout';
 import { lazyPage } from './lazy-page';
+const AccountRoute = lazyPage(() => import('./routes/account'), 'AccountRoute');
+const ForgotPasswordRoute = lazyPage(() => import('./routes/account'), 'ForgotPasswordRoute');
+const ResetPasswordRoute = lazyPage(() => import('./routes/account'), 'ResetPasswordRoute');
 import { SignInRoute } from './routes/sign-in';
 
 // Every page but sign-in loads with its route (its own chunk): the first screen carries only the
@@ -51,6 +54,22 @@ export const routes: RouteObject[] = [
     ),
   },
   {
+    path: paths.forgotPassword.path,
+    element: (
+      <RouteBoundary what="the password reset">
+        <ForgotPasswordRoute />
+      </RouteBoundary>
+    ),
+  },
+  {
+    path: paths.resetPassword.path,
+    element: (
+      <RouteBoundary what="the password reset">
+        <ResetPasswordRoute />
+      </RouteBoundary>
+    ),
+  },
+  {
     path: paths.home.path,
     element: (
       <RouteBoundary>
@@ -84,6 +103,7 @@ export const routes: RouteObject[] = [
       { path: paths.planner.path, element: <PlannerRoute /> },
       { path: paths.outbox.path, element: <OutboxPage /> },
       { path: paths.people.path, element: <PeopleRoute /> },
+      { path: paths.account.path, element: <AccountRoute /> },
       { path: '*', element: <NotFoundRoute /> },
     ],
   },

@@ -43,4 +43,8 @@ export const paths = {
   acceptInvitation: { path: '/invitations/:token', href: (token: string) => `/invitations/${token}` },
   outbox: { path: '/outbox', href: () => '/outbox' },
   people: { path: '/people', href: () => '/people' },
+  account: { path: '/account', href: () => '/account' },
+  forgotPassword: { path: '/forgot-password', href: () => '/forgot-password' },
+  /** The e-mailed link is APP_URL/reset-password/<token> (the API writes it). */
+  resetPassword: { path: '/reset-password/:token', href: (token: string) => `/reset-password/${token}` },
 } as const;

@@ -457,16 +457,16 @@ export interface paths {
             path?: never;
             cookie?: never;
         };
-        get: operations["AnalysesController_comments"];
+        get: operations["AnalysesController_listComments"];
         put?: never;
-        post: operations["AnalysesController_comment"];
+        post: operations["AnalysesController_addComment"];
         delete?: never;
         options?: never;
         head?: never;
         patch?: never;
         trace?: never;
     };
-    "/api/trials/{trialId}/analyses/{analysisId}/sign-off": {
+    "/api/trials/{trialId}/analyses/{analysisId}/comments/{commentId}": {
         parameters: {
             query?: never;
             header?: never;
@@ -475,6 +475,42 @@ export interface paths {
         };
         get?: never;
         put?: never;
+        post?: never;
+        /** Delete one’s own comment: it shows as deleted, its text kept in history; replies stay */
+        delete: operations["AnalysesController_deleteComment"];
+        options?: never;
+        head?: never;
+        /** Edit one’s own comment (the old text kept as "edited"), or mark a thread resolved / open again */
+        patch: operations["AnalysesController_updateComment"];
+        trace?: never;
+    };
+    "/api/trials/{trialId}/analyses/{analysisId}/review-requests": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** Ask the trial’s reviewers to review a saved analysis: each gets an e-mail with a link to it */
+        post: operations["AnalysesController_requestReview"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/trials/{trialId}/analyses/{analysisId}/sign-offs": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** Sign off a saved analysis of a locked trial with a short statement (a reviewer; an investigator when the trial has no reviewer) */
         post: operations["AnalysesController_signOff"];
         delete?: never;
         options?: never;
@@ -727,6 +763,24 @@ export interface paths {
         options?: never;
         head?: never;
         patch?: never;
+        trace?: never;
+    };
+    "/api/trials/{trialId}/members/{userId}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post?: never;
+        /** Remove a member: their old session gets 403 at once; what they recorded stays under their name; e-mailed to them */
+        delete: operations["MembersController_remove"];
+        options?: never;
+        head?: never;
+        /** Change a member's role and (for a collaborator) sites; takes effect on their next request; e-mailed to them */
+        patch: operations["MembersController_update"];
         trace?: never;
     };
     "/api/trials/{trialId}/observations": {
@@ -1119,12 +1173,15 @@ export interface components {
             id: number;
             measureName: string;
             result: components["schemas"]["FindingsDto"];
+            review: components["schemas"]["ReviewStatusDto"];
             roundLabel: string;
             scopeLabel: string;
             /** Format: date-time */
             signedOffAt: string | null;
             signedOffBy: string | null;
             signedOffById: number | null;
+            /** @description Every sign-off, oldest first. */
+            signOffs: components["schemas"]["SignOffDto"][];
             title: string;
             trialId: number;
         };
@@ -1139,12 +1196,15 @@ export interface components {
             engineVersion: string;
             id: number;
             measureName: string;
+            review: components["schemas"]["ReviewStatusDto"];
             roundLabel: string;
             scopeLabel: string;
             /** Format: date-time */
             signedOffAt: string | null;
             signedOffBy: string | null;
             signedOffById: number | null;
+            /** @description Every sign-off, oldest first. */
+            signOffs: components["schemas"]["SignOffDto"][];
             title: string;
             trialId: number;
         };
@@ -1378,6 +1438,27 @@ export interface components {
             count: number;
             cutoff: number | null;
         };
+        CommentInputDto: {
+            /** @example The gypsum plots at Quarry Hill drained oddly fast; worth a look at the plot notes. */
+            body: string;
+            /** @description The comment this one answers. */
+            parentId?: number | null;
+        };
+        CommentRevisionDto: {
+            /** Format: date-time */
+            at: string;
+            /** @description The text as it was before this change. */
+            body: string;
+            byName: string | null;
+            /** @enum {string} */
+            kind: "edited" | "deleted";
+        };
+        CommentUpdateDto: {
+            /** @description New text (the author only); the old text is kept as "edited". */
+            body?: string;
+            /** @description Mark the thread resolved, or open it again. */
+            resolved?: boolean;
+        };
         ComparisonsByMethodDto: {
             bonferroni?: components["schemas"]["MethodComparisonSetDto"];
             dunnett?: components["schemas"]["MethodComparisonSetDto"];
@@ -1556,10 +1637,6 @@ export interface components {
              * @enum {string}
              */
             transform?: "none" | "log" | "sqrt" | "arcsine-sqrt";
-        };
-        CreateCommentDto: {
-            /** @example The gypsum plots at Quarry Hill drained oddly fast; worth a look at the plot notes. */
-            body: string;
         };
         CreateInvitationDto: {
             /** @example robin.ash@example.org */
@@ -2919,6 +2996,24 @@ export interface components {
             /** @description Engine warnings and notices of this measure. */
             warnings: string[];
         };
+        ReportOpenCommentDto: {
+            authorName: string | null;
+            body: string;
+            /** Format: date-time */
+            createdAt: string;
+            id: number;
+            replyCount: number;
+        };
+        ReportReviewDto: {
+            analysisId: number;
+            measureName: string;
+            openComments: components["schemas"]["ReportOpenCommentDto"][];
+            review: components["schemas"]["ReviewStatusDto"];
+            roundLabel: string;
+            scopeLabel: string;
+            signOffs: components["schemas"]["SignOffDto"][];
+            title: string;
+        };
         ResidualPointDto: {
             fitted: number;
             /** @description |standardized| > 3. */
@@ -2928,6 +3023,30 @@ export interface components {
             residual: number;
             /** @description Null for a plot with leverage 1. */
             standardized: number | null;
+        };
+        ReviewRequestAnswerDto: {
+            /** @description The reviewers who were e-mailed. */
+            notified: string[];
+            /** Format: date-time */
+            requestedAt: string;
+        };
+        ReviewRequestInputDto: {
+            /** @description A note for the reviewers, included in the e-mail. */
+            message?: string | null;
+        };
+        ReviewStatusDto: {
+            awaiting: string[];
+            expected: number;
+            /**
+             * @description The trial’s reviewers sign; its investigators when it has no reviewer.
+             * @enum {string}
+             */
+            expectedRole: "reviewer" | "investigator";
+            /** @example Signed by 1 of 2 reviewers */
+            label: string;
+            /** Format: date-time */
+            lastRequestedAt: string | null;
+            signed: number;
         };
         RoundDto: {
             /** @example Day 14 */
@@ -2967,6 +3086,31 @@ export interface components {
             p: number;
             w: number;
         };
+        SignOffDto: {
+            analysisId: number;
+            /** @description SHA-256 of the data the analysis used when signed. */
+            dataHash: string;
+            engineVersion: string;
+            id: number;
+            /** @description The signer’s name when they signed. */
+            name: string;
+            role: components["schemas"]["TrialRole"];
+            /** Format: date-time */
+            signedAt: string;
+            /** @description `data-changed`: the trial’s data moved on after this sign-off. */
+            state: components["schemas"]["SignOffState"];
+            statement: string;
+            userId: number | null;
+        };
+        SignOffInputDto: {
+            /** @example I checked the layout, the data at both sites and the model; the conclusions follow from them. */
+            statement: string;
+        };
+        /**
+         * @description `data-changed`: the trial’s data moved on after this sign-off.
+         * @enum {string}
+         */
+        SignOffState: "current" | "data-changed";
         SiteCurvesDto: {
             curves: components["schemas"]["CurveDto"][];
             medians: components["schemas"]["MedianTimeDto"][];
@@ -3013,10 +3157,22 @@ export interface components {
             analysisId: number;
             authorId: number | null;
             authorName: string | null;
+            /** @description Empty once deleted (the earlier text stays in revisions). */
             body: string;
             /** Format: date-time */
             createdAt: string;
+            /** Format: date-time */
+            deletedAt: string | null;
+            /** Format: date-time */
+            editedAt: string | null;
             id: number;
+            /** @description The comment this one replies to. */
+            parentId: number | null;
+            /** Format: date-time */
+            resolvedAt: string | null;
+            resolvedByName: string | null;
+            /** @description Earlier texts, oldest first. */
+            revisions: components["schemas"]["CommentRevisionDto"][];
         };
         SphericityDto: {
             chiSquare: number | null;
@@ -3203,6 +3359,8 @@ export interface components {
             generatedAt: string;
             measures: components["schemas"]["ReportMeasureDto"][];
             protocol: components["schemas"]["TrialProtocolDto"];
+            /** @description Saved analyses with sign-offs (statements and states) or open comments, oldest first. */
+            reviews: components["schemas"]["ReportReviewDto"][];
             sites: components["schemas"]["SiteDto"][];
         };
         /**
@@ -3258,6 +3416,12 @@ export interface components {
              * @enum {string}
              */
             unit?: "s" | "min" | "h" | "mm" | "cm" | "m" | "in" | "ft" | "mL" | "L" | "gal" | "ft3" | "yd3" | "g" | "kg" | "oz" | "lb" | "m2" | "ft2" | "kPa" | "MPa" | "psi" | "kgf/cm2" | "tsf" | "mm/h" | "in/h" | "g/cm3" | "lb/ft3" | "dS/m" | "mS/cm" | "mmho/cm" | "µS/cm" | "score" | "count" | "%" | "ratio";
+        };
+        UpdateMemberDto: {
+            /** @description The one role the person holds on the trial from now on. */
+            role: components["schemas"]["TrialRole"];
+            /** @description The sites of a collaborator (one or more); leave out for other roles. */
+            siteIds?: number[];
         };
         UpdateRoundDto: {
             /**
@@ -3350,6 +3514,8 @@ export interface components {
             noControlReason?: string | null;
             /** @description The question or hypothesis the trial answers. */
             question?: string | null;
+            /** @description Why a locked trial is unlocked (status active); required when any of its saved analyses is signed off. Kept in the activity trail. */
+            reason?: string | null;
             safetyNotes?: string | null;
             /**
              * @description Randomization seed text; a random one when left out.
@@ -4508,7 +4674,7 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
-            /** @description AnalysisSnapshotSummary[], newest first (without the result). */
+            /** @description AnalysisSnapshotSummary[], newest first (without the result), each with its sign-offs and review status. */
             200: {
                 headers: {
                     [name: string]: unknown;
@@ -4660,7 +4826,7 @@ export interface operations {
             };
         };
     };
-    AnalysesController_comments: {
+    AnalysesController_listComments: {
         parameters: {
             query?: never;
             header?: never;
@@ -4673,7 +4839,7 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
-            /** @description SnapshotComment[], oldest first. */
+            /** @description SnapshotComment[], oldest first; replies carry parentId; deleted ones keep their place with an empty body. */
             200: {
                 headers: {
                     [name: string]: unknown;
@@ -4711,7 +4877,7 @@ export interface operations {
             };
         };
     };
-    AnalysesController_comment: {
+    AnalysesController_addComment: {
         parameters: {
             query?: never;
             header?: never;
@@ -4724,11 +4890,11 @@ export interface operations {
         };
         requestBody: {
             content: {
-                "application/json": components["schemas"]["CreateCommentDto"];
+                "application/json": components["schemas"]["CommentInputDto"];
             };
         };
         responses: {
-            /** @description SnapshotComment; recorded in the activity log. */
+            /** @description SnapshotComment; a reply is e-mailed to the reviewers and the thread’s author; recorded in the activity trail. */
             201: {
                 headers: {
                     [name: string]: unknown;
@@ -4764,9 +4930,141 @@ export interface operations {
                     "application/json": components["schemas"]["ProblemDto"];
                 };
             };
+            /** @description body empty or too long, or parentId not a comment of this analysis. */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
         };
     };
-    AnalysesController_signOff: {
+    AnalysesController_deleteComment: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                analysisId: number;
+                commentId: number;
+                /** @description The trial. */
+                trialId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description Deleted. */
+            204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description No valid token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description Needs one of these roles on the trial: investigator, collaborator, reviewer. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description No such trial, or you are not a member of it. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description Already deleted. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+        };
+    };
+    AnalysesController_updateComment: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                analysisId: number;
+                commentId: number;
+                /** @description The trial. */
+                trialId: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["CommentUpdateDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["SnapshotCommentDto"];
+                };
+            };
+            /** @description No valid token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description Needs one of these roles on the trial: investigator, collaborator, reviewer. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description No such trial, or you are not a member of it. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description The comment was deleted. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+        };
+    };
+    AnalysesController_requestReview: {
         parameters: {
             query?: never;
             header?: never;
@@ -4777,15 +5075,18 @@ export interface operations {
             };
             cookie?: never;
         };
-        requestBody?: never;
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["ReviewRequestInputDto"];
+            };
+        };
         responses: {
-            /** @description AnalysisSnapshot with signedOffAt and signedOffBy; recorded in the activity log. */
-            200: {
+            201: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": components["schemas"]["AnalysisSnapshotDto"];
+                    "application/json": components["schemas"]["ReviewRequestAnswerDto"];
                 };
             };
             /** @description No valid token. */
@@ -4815,7 +5116,71 @@ export interface operations {
                     "application/json": components["schemas"]["ProblemDto"];
                 };
             };
-            /** @description The trial is not locked, or the analysis is already signed off (a sentence). */
+            /** @description The trial has no reviewer yet. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+        };
+    };
+    AnalysesController_signOff: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                analysisId: number;
+                /** @description The trial. */
+                trialId: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["SignOffInputDto"];
+            };
+        };
+        responses: {
+            /** @description SignOff: name, role, time, statement, data hash and engine version; recorded in the activity trail. */
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["SignOffDto"];
+                };
+            };
+            /** @description No valid token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description Needs one of these roles on the trial: investigator, reviewer. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description No such trial, or you are not a member of it. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description The trial is not locked, the data changed since the analysis was saved, or you already signed it (a sentence). */
             409: {
                 headers: {
                     [name: string]: unknown;
@@ -5990,6 +6355,145 @@ export interface operations {
             };
             /** @description No such trial, or you are not a member of it. */
             404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+        };
+    };
+    MembersController_remove: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                /** @description The trial. */
+                trialId: number;
+                userId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description Removed. */
+            204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description No valid token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description Needs one of these roles on the trial: investigator. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /**
+             * @description The person is not on this trial.
+             *
+             *     No such trial, or you are not a member of it.
+             */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description The change would leave the trial without an investigator. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+        };
+    };
+    MembersController_update: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                /** @description The trial. */
+                trialId: number;
+                userId: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["UpdateMemberDto"];
+            };
+        };
+        responses: {
+            /** @description Member[]: the whole team after the change. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["MemberDto"][];
+                };
+            };
+            /** @description No valid token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description Needs one of these roles on the trial: investigator. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /**
+             * @description The person is not on this trial.
+             *
+             *     No such trial, or you are not a member of it.
+             */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description The change would leave the trial without an investigator. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description role or siteIds wrong (named). */
+            422: {
                 headers: {
                     [name: string]: unknown;
                 };

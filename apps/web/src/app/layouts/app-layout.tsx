@@ -47,10 +47,10 @@ export function AppLayout() {
           )}
         </NavbarGroup>
         <NavbarGroup align={Alignment.END}>
-          <span className="fr-person" aria-label="Signed in as">
+          <Link to={paths.account.href()} className="fr-person" aria-label={`Your account: ${user?.name ?? ''}`} title="Your account: name, numbers, e-mails, password">
             <span className="fr-person__name">{user?.name}</span>
             <span className="fr-person__email">{user?.email}</span>
-          </span>
+          </Link>
           <Button
             variant="minimal"
             icon="log-out"

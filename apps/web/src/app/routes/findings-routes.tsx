@@ -1,5 +1,6 @@
 import { lazy, Suspense, useEffect } from 'react';
 import { LoadingState } from '../../components/states';
+import { useAuth } from '../../features/auth/hooks/auth-context';
 import { useTrialOutlet } from '../layouts/trial-layout';
 
 // The Findings pages load with their route (their plots load later still, only when drawn).
@@ -20,12 +21,13 @@ const loadFindingsPlots = () => import('../../features/findings/components/findi
 
 export function FindingsRoute() {
   const { trial } = useTrialOutlet();
+  const { user } = useAuth();
   useEffect(() => {
     void loadFindingsPlots();
   }, []);
   return (
     <Suspense fallback={<LoadingState what="the Findings" />}>
-      <FindingsPage trial={trial} />
+      <FindingsPage trial={trial} meId={user?.id} />
     </Suspense>
   );
 }

@@ -55,7 +55,7 @@ function readChoices(params: URLSearchParams): Partial<FindingsModelsQuery> & An
 }
 
 /** Findings: one measure and round analysed at one site or all sites combined, with plots, saved analyses and exports. */
-export function FindingsPage({ trial }: { trial: TrialDetail }) {
+export function FindingsPage({ trial, meId }: { trial: TrialDetail; meId?: number }) {
   const [params, setParams] = useSearchParams();
   const choices = readChoices(params);
   const measures = useMemo(() => [...trial.measures].sort((a, b) => a.position - b.position), [trial.measures]);
@@ -127,7 +127,7 @@ export function FindingsPage({ trial }: { trial: TrialDetail }) {
   if (!measure) return <EmptyState title="No measures yet" description="The protocol needs a measure before there is anything to analyse." />;
   if (!round) return <EmptyState title="No rounds for this measure" description={`No assessment round records ${measure.name} yet.`} />;
   const openAnalysis = Number(params.get('analysis')) || null;
-  if (openAnalysis) return <SnapshotView trial={trial} analysisId={openAnalysis} treatmentNames={treatmentNames} onClose={() => choose({ analysis: undefined })} />;
+  if (openAnalysis) return <SnapshotView trial={trial} analysisId={openAnalysis} treatmentNames={treatmentNames} meId={meId} onClose={() => choose({ analysis: undefined })} />;
   const data = findings.data;
   const dunnettAllowed = trial.treatments.some((t) => t.isControl);
 

@@ -22,6 +22,7 @@ import { LedgerGrid } from './ledger-grid';
 import { LedgerLegend } from './ledger-legend';
 import { measureHeading } from '../../../lib/measure-heading';
 import { PhotoDialog } from './photo-dialog';
+import { UnlockButton } from './unlock-dialog';
 
 /** Ledger: per site and round, every plot's values in an editable grid, with history, photos and the trial lock. */
 export function LedgerPage({ trial }: { trial: TrialDetail }) {
@@ -88,7 +89,7 @@ export function LedgerPage({ trial }: { trial: TrialDetail }) {
             onConfirm={() => lock.mutate('locked')}
           />
         )}
-        {investigator && trial.status === 'locked' && <Button icon="unlock" text="Unlock the trial" loading={lock.isPending} onClick={() => lock.mutate('active')} />}
+        {investigator && trial.status === 'locked' && <UnlockButton lock={lock} />}
       </div>
       {lock.error && (
         <Callout intent="danger" compact role="alert">

@@ -102,7 +102,7 @@ const api = {
 };
 
 describe('PlotPlanPage for a split plot', () => {
-  beforeEach(() => window.localStorage.setItem('friable.accessToken', 'token'));
+  beforeEach(() => window.localStorage.setItem('friable.signedIn', '1'));
   afterEach(() => vi.unstubAllGlobals());
 
   it('draws each whole plot as a group holding its sub plots, named by its label and compost level', async () => {
