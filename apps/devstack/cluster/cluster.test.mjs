@@ -138,8 +138,9 @@ describe('Friable on a three-node Galera cluster with two API instances', () => 
   it('node 1 (the writer) killed during uploads through B: each upload committed whole or refused, no row lost, both instances serve on', async () => {
     const before = photoRows(node2);
     const targets = plots.slice(1, 13);
-    const uploads = targets.map((plotId, i) => sleep(i * 60).then(() => upload('B', plotId)));
-    await sleep(200);
+    const uploads = targets.map((plotId, i) => sleep(i * 80).then(() => upload('B', plotId)));
+    // The kill lands once the first upload is through (so both outcomes can occur), while the others are in flight.
+    await Promise.race([Promise.any(uploads.map((u) => u.then((a) => (a.status === 200 ? a : Promise.reject(a))))), sleep(5000)]).catch(() => undefined);
     const killedAt = Date.now();
     cluster.kill(node1);
     const answers = await Promise.all(uploads);

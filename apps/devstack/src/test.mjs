@@ -62,7 +62,6 @@ const suites = [
   { name: 'web components', cwd: 'apps/web', args: [] },
   { name: 'browser', cwd: 'apps/web', args: ['--config', 'vitest.browser.config.ts'] },
   { name: 'cluster', cwd: 'apps/devstack', args: ['--config', 'vitest.cluster.config.mjs'] },
-  { name: 'devstack', cwd: 'apps/devstack', args: [] },
 ];
 const tally = { passed: 0, failed: 0, skipped: 0 };
 const problems = [];
