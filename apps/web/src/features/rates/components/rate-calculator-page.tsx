@@ -32,7 +32,10 @@ export function RateCalculatorPage() {
   return (
     <section className="fr-rates" aria-labelledby="rates-heading">
       <H2 id="rates-heading">Rate calculator</H2>
-      <p className="fr-muted">A per-area rate becomes a quantity for one plot or container, in metric and US units. Nothing here is saved.</p>
+      <p className="fr-muted">
+        A per-area rate becomes a quantity for one plot or container, in metric and US units. Nothing here is saved. In a split plot, a whole-plot factor goes on
+        the whole plot: give the area of its sub plots together (a trial’s Plot plan works this out for every level).
+      </p>
       <div className="fr-rates__layout">
         <RateForm control={control} form={form} volume={isVolumeRateUnit(form.unit)} error={error} />
         <div className="fr-rates__result" aria-live="polite">
