@@ -2,7 +2,7 @@ import type { AnalysisSnapshot, Findings, Observation, SnapshotComment } from '@
 import { QueryTypes } from 'sequelize';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { buildIntakeTrial, intakePath, upload, type IntakeTrial } from '../intake/intake-support';
-import { bearer, createTestApp, type TestApp } from '../support/test-app';
+import { bearer, createTestApp, type TestApp, patchCurrent } from '../support/test-app';
 
 describe('Saved analyses: frozen results, data changes, comments and sign-off', () => {
   let t: TestApp;
@@ -112,7 +112,7 @@ describe('Saved analyses: frozen results, data changes, comments and sign-off', 
     expect(unlocked.status).toBe(409);
     expect(unlocked.body.message).toBe('Lock the trial before signing off an analysis, so its data cannot change after the sign-off.');
     expect(await activityKinds('analysis.signed-off')).toHaveLength(0);
-    expect((await t.http.patch(base).set(bearer(built.tokens.investigator)).send({ status: 'locked' })).status).toBe(200);
+    expect((await patchCurrent(t, base, bearer(built.tokens.investigator), { status: 'locked' })).status).toBe(200);
     const signed = await t.http.post(path).set(bearer(built.tokens.investigator));
     expect(signed.status).toBe(200);
     expect(signed.body).toMatchObject({ id: saved.id, signedOffBy: 'Intake investigator', signedOffById: built.ids.investigator, signedOffAt: expect.any(String) });

@@ -2,7 +2,7 @@ import type { Observation } from '@friable/contracts';
 import { QueryTypes } from 'sequelize';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { buildIntakeTrial, intakePath, rowCounts, upload, type IntakeTrial } from '../intake/intake-support';
-import { bearer, createTestApp, type TestApp } from '../support/test-app';
+import { bearer, createTestApp, type TestApp, patchCurrent } from '../support/test-app';
 
 // Each of these once froze the API (1e20000000: 8 s and a 40 MB answer; 1e300000000: 103 s, then the
 // process died out of memory). A timeout of a few seconds is a hang detector here, not a speed target:
@@ -137,7 +137,7 @@ describe('hostile input: text fields refuse NUL and unpaired surrogates', () => 
     ['an unpaired surrogate', 'Clay trial \ud800 half an emoji', 'title must not hold half of a character pair (an unpaired surrogate)'],
   ])('a trial title with %s answers 422 naming title, nothing written', async (_what, title, message) => {
     const before = await t.sequelize.query<{ title: string }>('SELECT title FROM trials WHERE id = ?', { replacements: [built.trialId], type: QueryTypes.SELECT });
-    const response = await t.http.patch(`/api/trials/${built.trialId}`).set(bearer(built.tokens.investigator)).send({ title });
+    const response = await patchCurrent(t, `/api/trials/${built.trialId}`, bearer(built.tokens.investigator), { title });
     expect(response.status).toBe(422);
     expect(response.body.errors).toEqual([{ field: 'title', message }]);
     const after = await t.sequelize.query<{ title: string }>('SELECT title FROM trials WHERE id = ?', { replacements: [built.trialId], type: QueryTypes.SELECT });

@@ -32,6 +32,7 @@ import * as createIntakeColumnChoices from './20261217090200-create-intake-colum
 import * as factorLevelRates from './20261218090000-factor-level-rates';
 import * as fourFactorTreatments from './20261218090100-four-factor-treatments';
 import * as plotUnits from './20261218090200-plot-units';
+import * as protocolVersions from './20261214090000-protocol-versions';
 
 export interface MigrationModule {
   up(params: { context: QueryInterface }): Promise<void>;
@@ -73,4 +74,5 @@ export const migrations: ReadonlyArray<readonly [name: string, module: Migration
   ['20261218090000-factor-level-rates', factorLevelRates],
   ['20261218090100-four-factor-treatments', fourFactorTreatments],
   ['20261218090200-plot-units', plotUnits],
+  ['20261214090000-protocol-versions', protocolVersions],
 ];
