@@ -103,10 +103,10 @@ export function LedgerPage({ trial }: { trial: TrialDetail }) {
             intent="warning"
             loading={lock.isPending}
             question="Lock the trial for analysis? Nobody can change its protocol or values until you unlock it."
-            onConfirm={() => lock.mutate('locked')}
+            onConfirm={() => lock.mutate({ status: 'locked', version: trial.version })}
           />
         )}
-        {investigator && trial.status === 'locked' && <Button icon="unlock" text="Unlock the trial" loading={lock.isPending} onClick={() => lock.mutate('active')} />}
+        {investigator && trial.status === 'locked' && <Button icon="unlock" text="Unlock the trial" loading={lock.isPending} onClick={() => lock.mutate({ status: 'active', version: trial.version })} />}
       </div>
       {lock.error && (
         <Callout intent="danger" compact role="alert">

@@ -33,7 +33,7 @@ export function ActivationPanel({ trial, canEdit }: { trial: TrialDetail; canEdi
           icon="play"
           text="Activate trial"
           loading={update.isPending}
-          onClick={() => update.mutate({ status: 'active' })}
+          onClick={() => update.mutate({ status: 'active', version: trial.version })}
         />
       )}
     </Callout>
