@@ -188,7 +188,7 @@ export class SitesService {
       const row = await this.find(trialId, id, transaction);
       const archived = await this.one(trialId, id, transaction);
       // An archived site keeps no layout (refused when it holds observations), and stays on record.
-      await this.gate.clearLayouts(trialId, [id], { userId: user.id, what: `Archiving site ${row.name}` }, transaction);
+      await this.gate.clearLayouts(trialId, [id], { userId: user.id, what: `Deleting site ${row.name}` }, transaction);
       await row.reload({ transaction });
       await row.destroy({ transaction });
       await this.activity.record(transaction, {

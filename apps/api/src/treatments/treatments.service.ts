@@ -118,7 +118,7 @@ export class TreatmentsService {
       const trial = await this.gate.openForWrite(trialId, transaction);
       if (isFactorDesign(trial.design)) throw new ConflictException(factorialRefusal);
       const row = await this.find(trialId, id, transaction);
-      await this.gate.clearLayouts(trialId, 'all', { userId: user.id, what: `Archiving treatment ${row.code}` }, transaction);
+      await this.gate.clearLayouts(trialId, 'all', { userId: user.id, what: `Deleting treatment ${row.code}` }, transaction);
       // Archived, not deleted (a paranoid model): the row stays for the record.
       await row.destroy({ transaction });
       await this.activity.record(transaction, {
