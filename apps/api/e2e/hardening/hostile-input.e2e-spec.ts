@@ -1,4 +1,5 @@
 import type { Observation } from '@friable/contracts';
+import ExcelJS from 'exceljs';
 import { QueryTypes } from 'sequelize';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { buildIntakeTrial, intakePath, rowCounts, upload, type IntakeTrial } from '../intake/intake-support';
@@ -60,6 +61,25 @@ describe('hostile input: numbers bounded before they are parsed', () => {
       { row: 3, column: 'water retained (mL)', message: expect.stringMatching(/^Row 3, water retained \(mL\): "1e-300000000" is too small to be a reading/) },
     ]);
     expect(JSON.stringify(response.body).length).toBeLessThan(2_000);
+    expect(await rowCounts(t.sequelize, built.trialId)).toEqual(before);
+  }, HANG);
+
+  it('a workbook cell of 1e300 (a number) or "1e300000000" (text) answers 422 by row and column, nothing written', async () => {
+    const before = await rowCounts(t.sequelize, built.trialId);
+    const workbook = new ExcelJS.Workbook();
+    const sheet = workbook.addWorksheet('Day 0');
+    sheet.addRows([
+      ['plot label', 'drain time (s)', 'water retained (mL)'],
+      ['TG-B1-P02', 30, 100],
+      ['TG-B1-P03', 1e300, '1e300000000'],
+    ]);
+    const file = Buffer.from(await workbook.xlsx.writeBuffer());
+    const response = await upload(t, built.tokens.collaborator, intakePath(built), file, 'day0.xlsx');
+    expect(response.status).toBe(422);
+    expect(response.body.errors).toEqual([
+      { row: 3, column: 'drain time (s)', message: expect.stringMatching(/^Row 3, drain time \(s\): "1e\+?300" is too large to be a reading/) },
+      { row: 3, column: 'water retained (mL)', message: expect.stringMatching(/^Row 3, water retained \(mL\): "1e300000000" is too large to be a reading/) },
+    ]);
     expect(await rowCounts(t.sequelize, built.trialId)).toEqual(before);
   }, HANG);
 
