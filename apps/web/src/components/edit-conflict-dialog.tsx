@@ -16,6 +16,7 @@ export function EditConflictDialog({
   intro,
   rows,
   takeText = 'Take the stored values',
+  labelled = rows.length > 1,
   onKeepMine,
   onTakeStored,
 }: {
@@ -23,6 +24,8 @@ export function EditConflictDialog({
   intro: ReactNode;
   rows: ConflictRow[];
   takeText?: string;
+  /** Name each field above its pair (always for more than one). */
+  labelled?: boolean;
   onKeepMine: () => void;
   onTakeStored: () => void;
 }) {
@@ -33,7 +36,7 @@ export function EditConflictDialog({
         <dl className="fr-ledger-conflict">
           {rows.map((row) => (
             <div key={row.label} className="fr-ledger-conflict__pair" role="group" aria-label={row.label}>
-              {rows.length > 1 && <dt className="fr-ledger-conflict__field">{row.label}</dt>}
+              {labelled && <dt className="fr-ledger-conflict__field">{row.label}</dt>}
               <dt>Yours</dt>
               <dd className="fr-ledger-conflict__value">{row.mine}</dd>
               <dt>Stored now</dt>

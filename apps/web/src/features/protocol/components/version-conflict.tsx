@@ -34,6 +34,7 @@ export function VersionConflict<TMine extends object>({
       title={`Someone else changed ${what}`}
       intro={<>While you were editing {what}, someone else saved it.{rows.length === 0 && ' The fields you sent already hold your values.'}</>}
       rows={rows}
+      labelled
       onKeepMine={onKeepMine}
       onTakeStored={onTakeStored}
     />
