@@ -6,7 +6,7 @@ import { baseUrl, screenshot, signIn, useBrowserSession } from './support';
 async function api<T = { id: number; version: number }>(page: Page, method: string, path: string, body?: unknown): Promise<{ status: number; body: T }> {
   return page.evaluate(
     async ({ method, path, body }) => {
-      const headers: Record<string, string> = { 'X-Friable-CSRF': '1' };
+      const headers: Record<string, string> = { Authorization: `Bearer ${localStorage.getItem('friable.accessToken')}` };
       if (body !== undefined) headers['Content-Type'] = 'application/json';
       const response = await fetch(`/api${path}`, { method, headers, body: body === undefined ? undefined : JSON.stringify(body) });
       return { status: response.status, body: (await response.json().catch(() => null)) as unknown };

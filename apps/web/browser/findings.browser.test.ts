@@ -19,7 +19,7 @@ const hardness = [
 
 async function trialId(page: Page, code: string): Promise<number> {
   const trials = await page.evaluate(async () => {
-    const response = await fetch('/api/trials', { headers: { 'X-Friable-CSRF': '1' } });
+    const response = await fetch('/api/trials', { headers: { Authorization: `Bearer ${localStorage.getItem('friable.accessToken')}` } });
     return response.json();
   });
   return (trials as TrialSummary[]).find((t) => t.code === code)!.id;

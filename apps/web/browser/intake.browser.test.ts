@@ -3,10 +3,10 @@ import type { Browser, BrowserContext, Page } from 'playwright-core';
 import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
 import { baseUrl, forbidOutsideRequests, launchBrowser, screenshot, signIn } from './support';
 
-/** Calls the API as the signed-in person of this page (its session cookie goes by itself). */
+/** Calls the API as the signed-in person of this page (the token the app keeps). */
 async function api<T>(page: Page, path: string): Promise<T> {
   return page.evaluate(async (address) => {
-    const response = await fetch(`/api${address}`, { headers: { 'X-Friable-CSRF': '1' } });
+    const response = await fetch(`/api${address}`, { headers: { Authorization: `Bearer ${localStorage.getItem('friable.accessToken')}` } });
     if (!response.ok) throw new Error(`${address}: ${response.status}`);
     return response.headers.get('Content-Type')?.includes('json') ? response.json() : response.text();
   }, path) as Promise<T>;

@@ -7,7 +7,7 @@ import { baseUrl, launchBrowser, screenshot, signIn } from './support';
 async function api<T>(page: Page, path: string, init?: { method: string; json: unknown }): Promise<T> {
   return page.evaluate(
     async ({ address, request }) => {
-      const headers: Record<string, string> = { 'X-Friable-CSRF': '1' };
+      const headers: Record<string, string> = { Authorization: `Bearer ${localStorage.getItem('friable.accessToken')}` };
       if (request) headers['Content-Type'] = 'application/json';
       const response = await fetch(`/api${address}`, { method: request?.method ?? 'GET', headers, body: request ? JSON.stringify(request.json) : undefined });
       if (!response.ok) throw new Error(`${address}: ${response.status} ${await response.text()}`);

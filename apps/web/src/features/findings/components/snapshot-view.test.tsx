@@ -44,7 +44,7 @@ const snapshot = (extra: Partial<AnalysisSnapshot>) =>
   ({ id: 9, trialId: 3, title: 'Week 4 yield', result, dataChanged: false, createdBy: 'Ines', createdAt: '2026-12-01T10:00:00.000Z', signedOffAt: null, signedOffBy: null, ...extra }) as AnalysisSnapshot;
 
 describe('SnapshotView', () => {
-  beforeEach(() => window.localStorage.setItem('friable.session', 'open'));
+  beforeEach(() => window.localStorage.setItem('friable.accessToken', 'token'));
   afterEach(() => vi.unstubAllGlobals());
 
   it('shows the stored numbers with a notice that the data changed, and the comments', async () => {

@@ -70,7 +70,7 @@ async function chooseFile(text = template) {
 
 describe('IntakePage', () => {
   beforeEach(() => {
-    window.localStorage.setItem('friable.session', 'open');
+    window.localStorage.setItem('friable.accessToken', 'token');
     FakeUpload.sent = [];
     FakeUpload.replies = [];
     vi.stubGlobal('XMLHttpRequest', FakeUpload);
@@ -140,8 +140,7 @@ describe('IntakePage', () => {
 
     const first = FakeUpload.sent[0]!;
     expect(first.url).toBe('/api/trials/3/sites/31/rounds/21/intake?dryRun=true');
-    expect(first.headers['X-Friable-CSRF']).toBe('1');
-    expect(first.headers.Authorization).toBeUndefined();
+    expect(first.headers.Authorization).toBe('Bearer token');
     expect(first.form?.get('mapping')).toBe(JSON.stringify({ notes: null }));
     expect(first.form?.get('acceptWarnings')).toBe('false');
     expect((first.form?.get('file') as File).name).toBe('hollow-lane-week-2.csv');

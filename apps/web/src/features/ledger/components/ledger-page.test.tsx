@@ -67,7 +67,7 @@ async function typeInto(cellText: string, text: string) {
 }
 
 describe('LedgerPage', () => {
-  beforeEach(() => window.localStorage.setItem('friable.session', 'open'));
+  beforeEach(() => window.localStorage.setItem('friable.accessToken', 'token'));
   afterEach(() => vi.unstubAllGlobals());
 
   it('shows a row per plot and a column per measure, censored and missing values marked apart, with a legend', async () => {

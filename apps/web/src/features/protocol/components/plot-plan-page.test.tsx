@@ -12,7 +12,7 @@ const base = {
 };
 
 describe('PlotPlanPage', () => {
-  beforeEach(() => window.localStorage.setItem('friable.session', 'open'));
+  beforeEach(() => window.localStorage.setItem('friable.accessToken', 'token'));
   afterEach(() => vi.unstubAllGlobals());
 
   it('starts a collaborator on their own site, with the map, legend and amounts per plot', async () => {
@@ -72,7 +72,7 @@ describe('PlotPlanPage', () => {
     expect(screen.getByText('Millbrook is not randomized yet')).toBeInTheDocument();
   });
 
-  it('downloads the CSV template with the session (its cookie and the CSRF header) and saves it through a Blob', async () => {
+  it('downloads the CSV template with the session’s token and saves it through a Blob', async () => {
     const calls = mockApi({ ...base, 'GET /api/trials/3/sites/31/rounds/21/template.csv': { status: 200, body: 'plot,block,treatment,DRAIN (s)\n' } });
     const createObjectURL = vi.fn(() => 'blob:template');
     vi.stubGlobal('URL', Object.assign(URL, { createObjectURL, revokeObjectURL: vi.fn() }));
@@ -84,8 +84,7 @@ describe('PlotPlanPage', () => {
     await userEvent.click(await screen.findByRole('button', { name: 'CSV template — Week 2' }));
     await vi.waitFor(() => expect(createObjectURL).toHaveBeenCalled());
     const asked = calls.find((c) => c.path === '/api/trials/3/sites/31/rounds/21/template.csv');
-    expect(asked?.headers.get('X-Friable-CSRF')).toBe('1');
-    expect(asked?.headers.get('Authorization')).toBeNull();
+    expect(asked?.headers.get('Authorization')).toBe('Bearer token');
     expect(saved).toBe('CLAY-T_HL_Week-2.csv');
     click.mockRestore();
   });

@@ -25,7 +25,7 @@ const pending = {
 };
 
 describe('TeamPage', () => {
-  beforeEach(() => window.localStorage.setItem('friable.session', 'open'));
+  beforeEach(() => window.localStorage.setItem('friable.accessToken', 'token'));
   afterEach(() => vi.unstubAllGlobals());
 
   it('shows members with role and site, and the investigator’s pending invitations', async () => {
