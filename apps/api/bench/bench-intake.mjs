@@ -18,6 +18,7 @@ import { performance } from 'node:perf_hooks';
 import { setTimeout as sleep } from 'node:timers/promises';
 import { repoRoot } from '../../devstack/src/env.mjs';
 import { apiCommand, appEnvironment, startDatabase } from '../../devstack/src/prepare.mjs';
+import { waitForApi as waitForApiAt } from '../../devstack/src/wait-for-api.mjs';
 
 const SIZES = process.env.BENCH_ROWS ? [Number(process.env.BENCH_ROWS)] : [100_000, 1_000_000];
 const REPEAT = Number(process.env.BENCH_REPEAT ?? 3);
@@ -70,17 +71,7 @@ function peakMemory() {
   return Number(/VmHWM:\s+(\d+) kB/.exec(status)[1]) * 1024;
 }
 
-async function waitForApi() {
-  for (let attempt = 0; attempt < 240; attempt += 1) {
-    try {
-      if ((await fetch(`${url}/api/health`)).ok) return;
-    } catch {
-      // not listening yet
-    }
-    await sleep(250);
-  }
-  throw new Error('the API did not start');
-}
+const waitForApi = () => waitForApiAt(url);
 
 async function scratchTrial(size, tag) {
   const now = new Date();

@@ -19,11 +19,14 @@ import { TreatmentsModule } from './treatments/treatments.module';
 import { AccessGuard } from './auth/guards/access.guard';
 import { JwtAuthGuard } from './auth/guards/jwt-auth.guard';
 import { ProblemFilter } from './common/filters/problem.filter';
+import { RateLimitsModule } from './common/security/rate-limits.module';
+import { SharedThrottlerStorage } from './common/security/shared-throttler-storage';
 import { appConfig } from './config/app.config';
 import { authConfig } from './config/auth.config';
 import { databaseConfig } from './config/database.config';
 import { mailConfig } from './config/mail.config';
 import { sequelizeOptions } from './database/sequelize-options';
+import { DataStampsModule } from './data-stamps/data-stamps.module';
 import { DevModule } from './dev/dev.module';
 import { HealthModule } from './health/health.module';
 import { InvitationsModule } from './invitations/invitations.module';
@@ -54,14 +57,18 @@ import { ReportsModule } from './reports/reports.module';
         synchronize: false,
       }),
     }),
-    // Flood protection per client address (@nestjs/throttler); sign-in has its own, tighter limit.
+    // Flood protection per client address (@nestjs/throttler); sign-in has its own, tighter limit. The counters
+    // are shared by every API instance through Redis when REDIS_URL is set (common/security/shared-throttler-storage.ts).
     ThrottlerModule.forRootAsync({
-      inject: [authConfig.KEY],
-      useFactory: (config: ConfigType<typeof authConfig>) => ({
+      imports: [RateLimitsModule],
+      inject: [authConfig.KEY, SharedThrottlerStorage],
+      useFactory: (config: ConfigType<typeof authConfig>, storage: SharedThrottlerStorage) => ({
+        storage,
         throttlers: [{ name: 'default', ttl: 60_000, limit: config.requestsPerMinute }],
         errorMessage: 'Too many requests from this address. Please wait a minute and try again.',
       }),
     }),
+    DataStampsModule,
     AuthModule,
     UsersModule,
     StatsModule,

@@ -2,14 +2,13 @@ import { NestFactory } from '@nestjs/core';
 import type { NestExpressApplication } from '@nestjs/platform-express';
 import { SwaggerModule } from '@nestjs/swagger';
 import cookieParser from 'cookie-parser';
-import express, { type NextFunction, type Request, type Response } from 'express';
-import { existsSync } from 'node:fs';
-import { join } from 'node:path';
+import type { NextFunction, Request, Response } from 'express';
 import { AppModule } from './app.module';
 import { toProblem } from './common/filters/problem.filter';
 import { boundedJson } from './common/input/bounded-json';
 import { createValidationPipe } from './common/pipes/validation.pipe';
 import { securityHeaders } from './common/security/security-headers';
+import { compressAnswers, serveWebApp } from './common/web/web-app';
 import { readAppConfig } from './config/app.config';
 import { createOpenApiDocument } from './openapi/openapi-document';
 import { readAuthConfig } from './config/auth.config';
@@ -21,6 +20,8 @@ import { MAX_OBSERVATIONS } from './stats/dto/anova-request.dto';
 export function configureApp(app: NestExpressApplication): NestExpressApplication {
   app.setGlobalPrefix('api');
   app.use(securityHeaders());
+  // Answers of 1 kB or more go out compressed (brotli or gzip); the web app's files are compressed at build.
+  app.use(compressAnswers());
   // While the database does not answer, API requests are answered 503 at once (health/database-gate.ts).
   app.use(databaseGate(app.get(DatabaseWatchService)));
   app.useGlobalPipes(createValidationPipe());
@@ -41,20 +42,12 @@ export function configureApp(app: NestExpressApplication): NestExpressApplicatio
   });
   app.enableShutdownHooks();
 
-  const { webDistDir, apiDocsPublic } = readAppConfig();
+  const { webDistDir, apiDocsPublic, nodeEnv } = readAppConfig();
   // The OpenAPI page is public only when API_DOCS_PUBLIC=true; otherwise it is not served at all.
   if (apiDocsPublic) SwaggerModule.setup('api/docs', app, createOpenApiDocument(app), { jsonDocumentUrl: 'api/docs/openapi.json' });
 
-  const indexHtml = join(webDistDir, 'index.html');
-  if (existsSync(indexHtml)) {
-    app.use(express.static(webDistDir, { index: false, maxAge: '1h' }));
-    // Client-side routes: any GET outside /api gets the app's page.
-    app.use((request: Request, response: Response, next: NextFunction) => {
-      if (request.method !== 'GET' || request.path.startsWith('/api')) return next();
-      response.setHeader('Cache-Control', 'no-cache');
-      response.sendFile(indexHtml);
-    });
-  }
+  // The built web app (common/web/web-app.ts): precompressed files, immutable hashed assets, the page for every app route.
+  for (const handler of serveWebApp(webDistDir, { production: nodeEnv === 'production' })) app.use(handler);
   return app;
 }
 

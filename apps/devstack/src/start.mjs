@@ -7,6 +7,7 @@ import { setTimeout as sleep } from 'node:timers/promises';
 import { repoRoot } from './env.mjs';
 import { apiCommand, appEnvironment, buildWebApp, compileTypeScript, ensureDependencies, startDatabase } from './prepare.mjs';
 import { startMailSink } from './mail-sink.mjs';
+import { startObjectStore } from './object-store.mjs';
 import { log } from './run.mjs';
 import { supervise } from './supervise.mjs';
 
@@ -15,6 +16,7 @@ const env = appEnvironment();
 const db = await startDatabase(env, [env.DB_NAME]);
 let api;
 let mail;
+let objects;
 let stopping = false;
 
 function stopAll(code) {
@@ -22,7 +24,8 @@ function stopAll(code) {
   stopping = true;
   log('stopping…');
   mail?.close();
-  (api ? api.stop() : Promise.resolve()).then(() => {
+  (api ? api.stop() : Promise.resolve()).then(async () => {
+    await objects?.close();
     db.stop();
     process.exit(code);
   });
@@ -36,6 +39,7 @@ try {
   apiCommand(env, ['demo', 'load']);
   buildWebApp();
   mail = await startMailSink(env);
+  objects = await startObjectStore(env);
 } catch (error) {
   process.stderr.write(`[friable] ${error.message}\n`);
   stopAll(1);

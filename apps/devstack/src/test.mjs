@@ -5,6 +5,7 @@ import { existsSync, mkdirSync, readFileSync, rmSync } from 'node:fs';
 import { resolve } from 'node:path';
 import { repoRoot } from './env.mjs';
 import { startMailSink } from './mail-sink.mjs';
+import { startObjectStore, testObjectStoreEnv } from './object-store.mjs';
 import { apiCommand, appEnvironment, buildWebApp, compileTypeScript, ensureDependencies, startDatabase } from './prepare.mjs';
 import { commandExists, ensureDebianPackages, log, runAsync, runOrThrow } from './run.mjs';
 
@@ -16,6 +17,15 @@ ensureDebianPackages(['r-base-core', 'r-cran-emmeans', 'r-cran-multcomp', 'r-cra
   reason: 'R with emmeans, multcomp and car (the statistics reference implementation)',
   probe: () => commandExists('Rscript') && spawnSync('Rscript', ['-e', 'suppressMessages({library(emmeans); library(multcomp); library(jsonlite)})'], { stdio: 'ignore' }).status === 0,
 });
+ensureDebianPackages(['r-cran-lme4', 'r-cran-pbkrtest'], {
+  reason: 'R with lme4 and pbkrtest (the mixed-model reference for factorials and split plots)',
+  probe: () => commandExists('Rscript') && spawnSync('Rscript', ['-e', 'suppressMessages({library(lme4); library(pbkrtest)})'], { stdio: 'ignore' }).status === 0,
+});
+
+ensureDebianPackages(['redis-server', 'galera-4', 'rsync'], {
+  reason: "Redis and MariaDB's Galera library (shared rate limits; the three-node cluster test)",
+  probe: () => existsSync('/usr/bin/redis-server') && existsSync('/usr/lib/galera/libgalera_smm.so') && commandExists('rsync'),
+});
 
 const base = appEnvironment();
 const env = appEnvironment({
@@ -26,6 +36,7 @@ const env = appEnvironment({
   SMTP_PORT: base.TEST_SMTP_PORT || '2526',
   MAIL_OUTBOX_DIR: '.data/test-outbox',
   DEMO_PASSWORD: 'friable-demo',
+  ...testObjectStoreEnv(base),
 });
 const scratchDatabase = `${env.DB_NAME}_migrations`;
 const db = await startDatabase(env, []);
@@ -34,7 +45,9 @@ db.dropDatabase(scratchDatabase);
 db.ensureDatabase(env.DB_NAME, env.DB_USER, env.DB_PASSWORD);
 db.ensureDatabase(scratchDatabase, env.DB_USER, env.DB_PASSWORD);
 rmSync(resolve(repoRoot, env.MAIL_OUTBOX_DIR), { recursive: true, force: true });
+rmSync(resolve(repoRoot, env.S3_DATA_DIR), { recursive: true, force: true });
 const mail = await startMailSink(env);
+const objects = await startObjectStore(env);
 
 const resultsDir = resolve(repoRoot, '.data/test-results');
 rmSync(resultsDir, { recursive: true, force: true });
@@ -88,6 +101,7 @@ try {
   tally.failed += 1;
 } finally {
   mail.close();
+  await objects.close();
   db.stop();
 }
 

@@ -48,7 +48,7 @@ describe('every page under the Content-Security-Policy', () => {
   });
 
   it('signed out: every page loads with no violation', async () => {
-    for (const page of [paths.signIn.href(), paths.acceptInvitation.href('not-a-real-invitation-token')]) {
+    for (const page of [paths.signIn.href(), paths.acceptInvitation.href('not-a-real-invitation-token'), paths.forgotPassword.href(), paths.resetPassword.href('not-a-real-reset-token')]) {
       expect(await visit(session.page, page)).toContain("frame-ancestors 'none'");
     }
     expect(session.cspViolations).toEqual([]);

@@ -2,11 +2,11 @@ import type { Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
 import { baseUrl, screenshot, signIn, useBrowserSession } from './support';
 
-/** A call to the API as the signed-in page makes it (its own session), answering status and body. */
+/** A call to the API as the signed-in page makes it (its session cookie), answering status and body, refusals included. */
 async function api<T = { id: number; version: number }>(page: Page, method: string, path: string, body?: unknown): Promise<{ status: number; body: T }> {
   return page.evaluate(
     async ({ method, path, body }) => {
-      const headers: Record<string, string> = { Authorization: `Bearer ${localStorage.getItem('friable.accessToken')}` };
+      const headers: Record<string, string> = { 'X-Friable-CSRF': '1' };
       if (body !== undefined) headers['Content-Type'] = 'application/json';
       const response = await fetch(`/api${path}`, { method, headers, body: body === undefined ? undefined : JSON.stringify(body) });
       return { status: response.status, body: (await response.json().catch(() => null)) as unknown };

@@ -19,7 +19,7 @@ const hardness = [
 
 async function trialId(page: Page, code: string): Promise<number> {
   const trials = await page.evaluate(async () => {
-    const response = await fetch('/api/trials', { headers: { Authorization: `Bearer ${localStorage.getItem('friable.accessToken')}` } });
+    const response = await fetch('/api/trials', { headers: { 'X-Friable-CSRF': '1' } });
     return response.json();
   });
   return (trials as TrialSummary[]).find((t) => t.code === code)!.id;
@@ -49,7 +49,7 @@ describe('Findings and Quick analysis', () => {
     await signIn(page, 'reviewer@example.org');
     await page.getByRole('heading', { name: 'Trials', exact: true }).waitFor();
     const id = await trialId(page, 'FW-CLAY-26');
-    await page.goto(`${baseUrl()}/trials/${id}/findings`);
+    await page.goto(`${baseUrl()}/trials/${id}/findings?model=anova`);
     await page.getByRole('table', { name: 'Analysis of variance' }).waitFor();
     const title = `Reviewer check ${Date.now()}`;
     await page.getByLabel('Title of the saved analysis').fill(title);
@@ -92,7 +92,7 @@ describe('Findings and Quick analysis', () => {
       await signIn(page, 'reviewer@example.org');
       await page.getByRole('heading', { name: 'Trials', exact: true }).waitFor();
       const id = await trialId(page, 'FW-CLAY-26');
-      await page.goto(`${baseUrl()}/trials/${id}/findings`);
+      await page.goto(`${baseUrl()}/trials/${id}/findings?model=anova`);
       await page.getByRole('table', { name: 'Analysis of variance' }).waitFor();
       expect(await page.getByRole('group', { name: 'Analysis choices' }).getByLabel('Scope').inputValue()).toBe('');
       expect(await page.getByRole('table', { name: 'Analysis of variance' }).innerText()).toContain('Site × treatment');
@@ -110,6 +110,8 @@ describe('Findings and Quick analysis', () => {
       const measure = page.getByLabel('Measure');
       const options = await measure.locator('option').allInnerTexts();
       await measure.selectOption({ label: options[1]! });
+      // A score gets its own model by default; the classical ANOVA is one click away.
+      await page.getByRole('button', { name: 'Classical ANOVA' }).click();
       const scope = page.getByLabel('Scope');
       const siteLabel = (await scope.locator('option').allInnerTexts())[1]!;
       await scope.selectOption({ label: siteLabel });

@@ -6,7 +6,7 @@ import { baseUrl, forbidOutsideRequests, launchBrowser, screenshot, signIn } fro
 /** Calls the API as the signed-in person of this page (the token the app keeps). */
 async function api<T>(page: Page, path: string): Promise<T> {
   return page.evaluate(async (address) => {
-    const response = await fetch(`/api${address}`, { headers: { Authorization: `Bearer ${localStorage.getItem('friable.accessToken')}` } });
+    const response = await fetch(`/api${address}`, { headers: { 'X-Friable-CSRF': '1' } });
     if (!response.ok) throw new Error(`${address}: ${response.status}`);
     return response.headers.get('Content-Type')?.includes('json') ? response.json() : response.text();
   }, path) as Promise<T>;

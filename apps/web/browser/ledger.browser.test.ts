@@ -1,21 +1,7 @@
 import type { Observation, TrialDetail, TrialSummary } from '@friable/contracts';
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { baseUrl, launchBrowser, screenshot, signIn } from './support';
-
-/** Calls the API as the signed-in person of this page (the token the app keeps). */
-async function api<T>(page: Page, path: string, init?: { method: string; json: unknown }): Promise<T> {
-  return page.evaluate(
-    async ({ address, request }) => {
-      const headers: Record<string, string> = { Authorization: `Bearer ${localStorage.getItem('friable.accessToken')}` };
-      if (request) headers['Content-Type'] = 'application/json';
-      const response = await fetch(`/api${address}`, { method: request?.method ?? 'GET', headers, body: request ? JSON.stringify(request.json) : undefined });
-      if (!response.ok) throw new Error(`${address}: ${response.status} ${await response.text()}`);
-      return response.json();
-    },
-    { address: path, request: init },
-  ) as Promise<T>;
-}
+import { api, baseUrl, launchBrowser, screenshot, signIn } from './support';
 
 /** Double-clicks a grid cell (row, column of the main part), types a value and saves it with Enter. */
 async function typeInCell(page: Page, row: number, col: number, text: string) {

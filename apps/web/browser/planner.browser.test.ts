@@ -13,7 +13,7 @@ const viewports = [
 async function api<T>(page: Page, path: string, json?: unknown): Promise<T> {
   return page.evaluate(
     async ({ address, body }) => {
-      const headers: Record<string, string> = { Authorization: `Bearer ${localStorage.getItem('friable.accessToken')}` };
+      const headers: Record<string, string> = { 'X-Friable-CSRF': '1' };
       if (body !== undefined) headers['Content-Type'] = 'application/json';
       const response = await fetch(`/api${address}`, { method: body === undefined ? 'GET' : 'POST', headers, body: body === undefined ? undefined : JSON.stringify(body) });
       if (!response.ok) throw new Error(`${address}: ${response.status} ${await response.text()}`);

@@ -142,7 +142,7 @@ describe('an investigator designs a two-site trial in the browser', () => {
     await session.page.getByRole('button', { name: 'Activate trial' }).click();
     await session.page.getByText('Active', { exact: true }).first().waitFor();
     const status = await session.page.evaluate(async (id) => {
-      const response = await fetch(`/api/trials/${id}`, { headers: { Authorization: `Bearer ${localStorage.getItem('friable.accessToken')}` } });
+      const response = await fetch(`/api/trials/${id}`, { headers: { 'X-Friable-CSRF': '1' } });
       return ((await response.json()) as { status: string }).status;
     }, trialId);
     expect(status).toBe('active');

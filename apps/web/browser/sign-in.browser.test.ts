@@ -42,10 +42,21 @@ describe('signing in to the built app', () => {
     await expect(session.page.getByText('Reviewer').first().isVisible()).resolves.toBe(true);
   });
 
-  it('signs the person out when the API stops accepting their token', async () => {
+  it('keeps the session in an httpOnly cookie, and signs the person out when it is ended elsewhere', async () => {
     await signIn(session.page, 'hollow.lane@example.org');
     await session.page.getByRole('heading', { name: 'Trials', exact: true }).waitFor();
-    await session.page.evaluate(() => window.localStorage.setItem('friable.accessToken', 'expired.or.revoked'));
+    const cookies = await session.context.cookies();
+    expect(cookies.find((c) => c.name === 'friable_session')).toMatchObject({ httpOnly: true, sameSite: 'Strict', path: '/api' });
+    expect(await session.page.evaluate(() => JSON.stringify(window.localStorage))).not.toMatch(/ey[A-Za-z0-9_-]{10,}\./);
+    // The same person signs out everywhere from another device: this browser's session ends on its next request.
+    const login = await fetch(`${baseUrl()}/api/auth/login`, {
+      method: 'POST',
+      headers: { 'Content-Type': 'application/json' },
+      body: JSON.stringify({ email: 'hollow.lane@example.org', password: 'friable-demo' }),
+    });
+    const { accessToken } = (await login.json()) as { accessToken: string };
+    const ended = await fetch(`${baseUrl()}/api/auth/logout-all`, { method: 'POST', headers: { Authorization: `Bearer ${accessToken}` } });
+    expect(ended.status).toBe(200);
     await session.page.reload();
     await session.page.getByRole('heading', { name: 'Sign in to Friable' }).waitFor();
     await session.page.getByText('Your session has ended. Please sign in again.').waitFor();

@@ -29,6 +29,20 @@ export async function signIn(page: Page, email: string, password = demoPassword)
   await page.getByRole('button', { name: 'Sign in' }).click();
 }
 
+/** Calls the API as the signed-in person of this page (the token the app keeps). */
+export async function api<T>(page: Page, path: string, init?: { method: string; json: unknown }): Promise<T> {
+  return page.evaluate(
+    async ({ address, request }) => {
+      const headers: Record<string, string> = { 'X-Friable-CSRF': '1' };
+      if (request) headers['Content-Type'] = 'application/json';
+      const response = await fetch(`/api${address}`, { method: request?.method ?? 'GET', headers, body: request ? JSON.stringify(request.json) : undefined });
+      if (!response.ok) throw new Error(`${address}: ${response.status} ${await response.text()}`);
+      return response.json();
+    },
+    { address: path, request: init },
+  ) as Promise<T>;
+}
+
 /** Fails the test on any request to a host other than the app's own (no CDN, fonts or analytics). */
 export function forbidOutsideRequests(page: Page, seen: string[]): void {
   page.on('request', (request) => {

@@ -55,7 +55,7 @@ describe('inviting a collaborator from the Team page', () => {
     await session.page.goto(`${baseUrl()}/trials/${trialId}/team`);
     await session.page.getByRole('table', { name: 'Members' }).waitFor();
     await session.page.getByLabel('E-mail').fill(invitee);
-    await session.page.getByLabel('Site').selectOption({ label: siteName });
+    await session.page.getByLabel('Site', { exact: true }).selectOption({ label: siteName });
     await session.page.getByRole('button', { name: 'Send invitation' }).click();
     await session.page.getByText(`Invitation sent to ${invitee}.`).waitFor();
     await session.page.getByRole('region', { name: 'Pending invitations' }).getByText(invitee).waitFor();
@@ -104,6 +104,20 @@ describe('inviting a collaborator from the Team page', () => {
     await session.page.getByRole('table', { name: 'Members' }).getByText('Quinn Quarry').waitFor();
     await expect(session.page.getByRole('table', { name: 'Members' }).getByText(siteName).isVisible()).resolves.toBe(true);
     await screenshot(session.page, 'team-after-joining');
+
+    // The investigator makes Quinn a reviewer, then removes her after a question that says what happens.
+    await session.page.getByRole('button', { name: 'Change the role and sites of Quinn Quarry' }).click();
+    const dialog = session.page.getByRole('dialog');
+    await dialog.getByLabel('Role').selectOption('reviewer');
+    await dialog.getByRole('button', { name: 'Save the change' }).click();
+    const quinn = session.page.getByRole('table', { name: 'Members' }).getByRole('row').filter({ hasText: 'Quinn Quarry' });
+    await quinn.getByText('Reviewer').waitFor();
+    await session.page.getByRole('button', { name: 'Remove Quinn Quarry from the trial' }).click();
+    await session.page.getByText(/They lose access at once and get an e-mail saying so/).waitFor();
+    await screenshot(session.page, 'team-remove-question');
+    await session.page.getByRole('button', { name: 'Remove Quinn Quarry', exact: true }).click();
+    await quinn.waitFor({ state: 'detached' });
+    expect(await session.page.getByRole('table', { name: 'Members' }).getByText('Quinn Quarry').count()).toBe(0);
     expect(session.outside).toEqual([]);
   });
 });

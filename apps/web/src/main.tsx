@@ -7,9 +7,14 @@ import './styles/field.css';
 import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
 import { App } from './app/app';
+import { configureIcons } from './app/icons';
+import { registerServiceWorker } from './lib/service-worker';
 
+configureIcons();
 createRoot(document.getElementById('root') as HTMLElement).render(
   <StrictMode>
     <App />
   </StrictMode>,
 );
+
+registerServiceWorker();

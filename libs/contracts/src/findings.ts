@@ -1,5 +1,6 @@
 // Findings (the analysis of one measure and round), saved analyses with review, exports and the report.
 import type { AssessmentRound, Measure, MeasureKind, Site, TrialDetail } from './protocol';
+import type { CommentRevision, ReportReview, ReviewStatus, SignOff } from './review';
 
 export const ANALYSIS_DESIGNS = [
   'crd',
@@ -283,6 +284,10 @@ export interface AnalysisSnapshotSummary {
   signedOffById: number | null;
   signedOffBy: string | null;
   commentCount: number;
+  /** Every sign-off, oldest first, each marked when the data changed after it. */
+  signOffs: SignOff[];
+  /** Who is expected to sign and how far they are ("Signed by 1 of 2 reviewers"). */
+  review: ReviewStatus;
 }
 
 /** GET /api/trials/:trialId/analyses/:analysisId — the stored result, never recomputed. */
@@ -296,10 +301,19 @@ export interface AnalysisSnapshot extends AnalysisSnapshotSummary {
 export interface SnapshotComment {
   id: number;
   analysisId: number;
+  /** The comment this one replies to; null for a comment that opens a thread. */
+  parentId: number | null;
+  /** The text; empty once deleted (the earlier text stays in `revisions`). */
   body: string;
   authorId: number | null;
   authorName: string | null;
   createdAt: string;
+  editedAt: string | null;
+  deletedAt: string | null;
+  resolvedAt: string | null;
+  resolvedByName: string | null;
+  /** Earlier texts, oldest first: one per edit, and the deletion. */
+  revisions: CommentRevision[];
 }
 
 /** POST /api/trials/:trialId/analyses/:analysisId/comments body. */
@@ -375,4 +389,6 @@ export interface TrialReport {
   cautions: string[];
   /** A short plain paragraph on what the statistics do and do not show. */
   explanation: string;
+  /** Saved analyses with sign-offs or open comments, oldest first. */
+  reviews: ReportReview[];
 }

@@ -1,6 +1,6 @@
 // The models made for each kind of measurement: censored drain times, rounds over time, scores and counts
 // (POST /api/stats/censored, /repeated, /ordinal, /counts), and the analysis choice of Findings.
-import type { AnovaAnswer, FindingsChoices, FindingsContext, FindingsObservationRow } from './findings';
+import type { AnovaAnswer, Findings, FindingsChoices, FindingsContext, FindingsObservationRow, FindingsQuery } from './findings';
 import type { MeasureKind } from './protocol';
 
 /** Layouts the measurement models accept (a plot is site + block + treatment). */
@@ -263,7 +263,6 @@ export interface RepeatedAnswer {
 
 // ---------------------------------------------------------------- Findings: the model made for each measure
 
-
 /** The analyses Findings offers (`analysis=`). */
 export const FINDINGS_ANALYSES = ['anova', 'censored', 'repeated', 'ancova', 'ordinal', 'counts'] as const;
 export type FindingsAnalysis = (typeof FINDINGS_ANALYSES)[number];
@@ -344,6 +343,15 @@ export type ModelFindings =
   | (AnovaAnswer & { analysis: 'ancova'; context: ModelFindingsContext })
   | (OrdinalAnswer & { analysis: 'ordinal'; context: ModelFindingsContext })
   | (CountsAnswer & { analysis: 'counts'; context: ModelFindingsContext });
+
+/** GET /api/trials/:trialId/findings answers the classical ANOVA (Findings) or a model (ModelFindings). */
+export type FindingsAnswer = Findings | ModelFindings;
+
+/** The query of GET /api/trials/:trialId/findings: the ANOVA's choices and the models'. */
+export type FindingsModelsQuery = FindingsQuery & FindingsModelQuery;
+
+/** True for a model's answer (it names its analysis); the classical ANOVA keeps the stateless endpoint's body. */
+export const isModelFindings = (answer: FindingsAnswer): answer is ModelFindings => 'analysis' in answer;
 
 /** The analysis made for each kind of measure. */
 export const DEFAULT_ANALYSIS: Record<MeasureKind, FindingsAnalysis> = {

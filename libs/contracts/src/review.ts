@@ -66,3 +66,21 @@ export interface CommentRevision {
   at: string;
   byName: string | null;
 }
+
+/** A saved analysis in the printable report: its sign-offs with their states, and the comments still open. */
+export interface ReportReview {
+  analysisId: number;
+  title: string;
+  measureName: string;
+  roundLabel: string;
+  scopeLabel: string;
+  review: ReviewStatus;
+  signOffs: SignOff[];
+  /** Top-level comments neither resolved nor deleted, oldest first, with how many replies each has. */
+  openComments: Array<{ id: number; authorName: string | null; body: string; createdAt: string; replyCount: number }>;
+}
+
+/** PATCH /api/trials/:trialId: unlocking a trial whose analyses are signed off needs a reason. */
+export interface UnlockReason {
+  reason?: string | null;
+}

@@ -56,16 +56,26 @@ describe('designWarnings for split plots and factorials (each error stratum)', (
     // 12 df need (r−1)·1 ≥ 12, r = 13. Sub-plot error 2·(2−1)(3−1) = 4; 12 need 2(r−1)·2 ≥ 12, r = 4.
     expect(designWarnings({ design: 'split-plot', factors: amendmentMulch, blocks: 2, sites: 2 })).toEqual([
       '2 blocks per site is fewer than the 4 replicates the PNW on-farm testing guide recommends.',
-      'Whole-plot error has only 1 degree of freedom at each of the 2 sites ((2 blocks − 1) × (2 levels of Amendment − 1)), fewer than the 12 EPPO PP 1/152 asks for. ' +
+      'A split plot with 2 blocks has only 1 degree of freedom for whole-plot error at each of the 2 sites ((2 blocks − 1) × (2 levels of Amendment − 1)), fewer than the 12 EPPO PP 1/152 asks for. ' +
         'Amendment is tested against it: at p = 0.05 the F of Amendment must exceed 161.4, so only a very large difference could show. 13 blocks would give 12.',
-      'Sub-plot error has only 4 degrees of freedom at each of the 2 sites (2 levels of Amendment × (2 blocks − 1) × (3 levels of Mulch − 1)), fewer than the 12 EPPO PP 1/152 asks for. ' +
+      'A split plot with 2 blocks has only 4 degrees of freedom for sub-plot error at each of the 2 sites (2 levels of Amendment × (2 blocks − 1) × (3 levels of Mulch − 1)), fewer than the 12 EPPO PP 1/152 asks for. ' +
         'Mulch and Amendment × Mulch are tested against it: at p = 0.05 the F of Mulch must exceed 6.94. 4 blocks would give 12.',
     ]);
   });
 
   it('a split plot in one block cannot test the whole-plot factor at all', () => {
     const warnings = designWarnings({ design: 'split-plot', factors: amendmentMulch, blocks: 1, sites: 1 });
-    expect(warnings).toContain('Whole-plot error has no degrees of freedom with 1 block at the site: Amendment cannot be tested. 13 blocks would give 12.');
+    expect(warnings).toContain('A split plot with 1 block has no degrees of freedom for whole-plot error at the site: Amendment cannot be tested. 13 blocks would give 12.');
+  });
+
+  it('names a split-split plot as such, stratum by stratum', () => {
+    // Whole-plot error (2−1)(2−1) = 1; sub-plot error 2·(2−1)(2−1) = 2; sub-sub-plot error 2·2·(2−1)(2−1) = 4, from (r−1)(a−1), a(r−1)(b−1) and ab(r−1)(c−1).
+    const warnings = designWarnings({ design: 'split-split-plot', factors: [{ name: 'A', levels: 2 }, { name: 'B', levels: 2 }, { name: 'C', levels: 2 }], blocks: 2, sites: 1 });
+    expect(warnings.slice(1).map((w) => w.split(' at the site')[0])).toEqual([
+      'A split-split plot with 2 blocks has only 1 degree of freedom for whole-plot error',
+      'A split-split plot with 2 blocks has only 2 degrees of freedom for sub-plot error',
+      'A split-split plot with 2 blocks has only 4 degrees of freedom for sub-sub-plot error',
+    ]);
   });
 
   it('no stratum warning once every stratum has 12 df (split plot 4 × 3 in 5 blocks: 12 and 24)', () => {

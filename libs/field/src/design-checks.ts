@@ -42,18 +42,26 @@ function listed(terms: readonly string[]): string {
 
 const degrees = (df: number) => `${df} degree${df === 1 ? '' : 's'} of freedom`;
 
-/** The plain sentence about a split plot's stratum with too few error df. */
-function splitStratumWarning(stratum: ErrorStratum, where: string, blocks: number, needed: { blocks: number; errorDf: number }): string {
+/** 'split plot' or 'split-split plot', as the sentence names the design. */
+const splitDesignWords = (design: TrialDesign) => (design === 'split-split-plot' ? 'split-split plot' : 'split plot');
+
+/**
+ * The plain sentence about a split plot's stratum with too few error df, opening with what the
+ * investigator chose: "A split plot with 2 blocks has only 1 degree of freedom for whole-plot error …".
+ */
+function splitStratumWarning(design: TrialDesign, stratum: ErrorStratum, where: string, blocks: number, needed: { blocks: number; errorDf: number }): string {
   const first = stratum.terms[0]!.split(':').join(' × ');
   const more = `${needed.blocks} blocks would give ${needed.errorDf}.`;
+  const opening = `A ${splitDesignWords(design)} with ${blocks} block${blocks === 1 ? '' : 's'} has`;
+  const errorName = stratum.name.charAt(0).toLowerCase() + stratum.name.slice(1);
   if (stratum.errorDf === 0) {
-    return `${stratum.name} has no degrees of freedom with ${blocks} block ${where}: ${listed(stratum.terms)} cannot be tested. ${more}`;
+    return `${opening} no degrees of freedom for ${errorName} ${where}: ${listed(stratum.terms)} cannot be tested. ${more}`;
   }
   const verb = stratum.terms.length === 1 ? 'is' : 'are';
   const critical = stratum.criticalF === null ? '' : `: at p = 0.05 the F of ${first} must exceed ${formatF(stratum.criticalF)}`;
   const plainly = stratum.errorDf <= 2 ? ', so only a very large difference could show' : '';
   return (
-    `${stratum.name} has only ${degrees(stratum.errorDf)} ${where} (${stratum.arithmetic}), fewer than the ${DESIGN_MINIMUMS.errorDegreesOfFreedom} EPPO PP 1/152 asks for. ` +
+    `${opening} only ${degrees(stratum.errorDf)} for ${errorName} ${where} (${stratum.arithmetic}), fewer than the ${DESIGN_MINIMUMS.errorDegreesOfFreedom} EPPO PP 1/152 asks for. ` +
     `${listed(stratum.terms)} ${verb} tested against it${critical}${plainly}. ${more}`
   );
 }
@@ -103,7 +111,7 @@ export function designWarnings(input: DesignCheckInput): readonly string[] {
     if (stratum.errorDf >= DESIGN_MINIMUMS.errorDegreesOfFreedom) return;
     const needed = blocksNeeded(strataAt, index);
     if (stratum.unit !== 'plot') {
-      warnings.push(splitStratumWarning(stratum, where, blocks, needed));
+      warnings.push(splitStratumWarning(design, stratum, where, blocks, needed));
       return;
     }
     const what = withFactors ? `${treatments} combinations` : `${treatments} treatments`;

@@ -123,16 +123,20 @@ function ancovaCase(id, design) {
 const families = {
   ordinal: (i) => ordinalCase(`ordinal-${String(i + 1).padStart(2, '0')}`, DESIGNS[i % DESIGNS.length]),
   counts: (i) => countCase(`counts-${String(i + 1).padStart(2, '0')}`, DESIGNS[i % DESIGNS.length], i % 2 === 1),
+  censored: (i) => censoredCase(`censored-${String(i + 1).padStart(2, '0')}`, DESIGNS[i % DESIGNS.length], ['weibull', 'lognormal', 'loglogistic'][(i + Math.floor(i / 3)) % 3]),
   repeated: (i) => repeatedCase(`repeated-${String(i + 1).padStart(2, '0')}`, DESIGNS[i % DESIGNS.length], ['cs', 'ar1', 'unstructured'][(i + Math.floor(i / 3)) % 3]),
   ancova: (i) => ancovaCase(`ancova-${String(i + 1).padStart(2, '0')}`, DESIGNS[i % DESIGNS.length]),
-  censored: (i) => censoredCase(`censored-${String(i + 1).padStart(2, '0')}`, DESIGNS[i % DESIGNS.length], ['weibull', 'lognormal', 'loglogistic'][(i + Math.floor(i / 3)) % 3]),
 };
+
+// Each family's stream number is fixed here, not taken from the order above, so adding or moving a family never
+// changes another family's layouts.
+const STREAMS = { ordinal: 1, counts: 2, censored: 3, repeated: 4, ancova: 5 };
 
 const cases = Object.entries(families)
   .filter(([family]) => onlyFamily === undefined || family === onlyFamily)
   .flatMap(([family, make]) =>
     Array.from({ length: casesPerFamily }, (_, i) => {
-      reseed(Object.keys(families).indexOf(family) + 1, i);
+      reseed(STREAMS[family], i);
       return make(i);
     }),
   );

@@ -1,4 +1,7 @@
+import { analyseFactorialTrial, type DifferenceError, type SliceTest, type StratumComparisons, type TermMeans } from './analyse-factorial-trial';
 import { analyseWithCovariate } from './analysis-of-covariance';
+import type { ErrorStratum } from './error-strata';
+import { isFactorialDesign, type FactorialDesign } from './factorial-layout';
 import { bartlettFromVariances } from './bartlett';
 import { brownForsythe } from './brown-forsythe';
 import { fitTrialDesign, type DesignFit, type TrialDesign, type TrialLayout } from './design-fit';
@@ -14,7 +17,9 @@ export type TrialTransform = 'none' | 'log' | 'sqrt' | 'arcsine-sqrt';
 
 /** What `analyseTrial` is asked to do. */
 export interface TrialAnalysisRequest {
-  readonly design: TrialDesign;
+  readonly design: TrialDesign | FactorialDesign;
+  /** Factorials and split plots: `anova` (classical) or `reml`; default anova when balanced, else reml. */
+  readonly model?: 'anova' | 'reml';
   /** Significance level, 0 < alpha < 1; default 0.05. */
   readonly alpha?: number;
   /** Multisite only: random (default) tests treatment against site × treatment; fixed tests all against error. */
@@ -26,8 +31,8 @@ export interface TrialAnalysisRequest {
   readonly meanSeparation?: readonly MeanSeparationMethod[];
   /** Compute Fisher's LSD even when the treatment F test is not significant. */
   readonly forceLsd?: boolean;
-  /** The two factor names of a factorial (default: the keys of the first observation's factors). */
-  readonly factorNames?: readonly [string, string];
+  /** The factor names of a factorial (2–4) or split plot (whole-plot factor first); default: the keys of the first observation's factors. */
+  readonly factorNames?: readonly string[];
   readonly observations: readonly TrialObservation[];
 }
 
@@ -35,10 +40,16 @@ export interface TrialAnalysisRequest {
 export interface AnovaRow {
   readonly term: string;
   readonly df: number;
-  readonly ss: number;
+  /** Null for a REML row. */
+  readonly ss: number | null;
   readonly ms: number | null;
   readonly f: number | null;
   readonly p: number | null;
+  /** The row the term was tested against ('error', 'block:A', 'site:treatment', 'kenward-roger'); null when not tested. */
+  readonly errorTerm?: string | null;
+  /** REML rows: numerator and denominator degrees of freedom. */
+  readonly numDf?: number;
+  readonly denDf?: number;
 }
 
 /** A treatment (or factor level) least-squares mean. */
@@ -81,6 +92,20 @@ export interface TrialAnalysis {
     readonly residuals: readonly ResidualDiagnostic[];
   };
   readonly warnings: readonly string[];
+  /** Factorials and split plots: the model used and why. */
+  readonly model?: { readonly kind: 'anova' | 'reml'; readonly reason: string };
+  /** Classical split plots and factorials: the error strata with the terms tested in each. */
+  readonly strata?: readonly (ErrorStratum & { readonly terms: readonly string[] })[];
+  /** Factorials and split plots: least-squares means of every main effect and interaction. */
+  readonly marginalMeans?: readonly TermMeans[];
+  /** Factorials and split plots: each factor's means compared in its own stratum. */
+  readonly factorComparisons?: Readonly<Record<string, StratumComparisons>>;
+  /** Factorials and split plots: standard errors of a difference by kind. */
+  readonly differences?: readonly DifferenceError[];
+  /** Factorials and split plots: each factor within each level of another, for significant two-factor interactions. */
+  readonly slices?: readonly SliceTest[];
+  /** REML: variance of each random term and of the error. */
+  readonly varianceComponents?: readonly { readonly name: string; readonly variance: number }[];
 }
 
 const METHODS: readonly MeanSeparationMethod[] = ['lsd', 'tukey', 'dunnett', 'bonferroni', 'holm'];
@@ -124,15 +149,15 @@ function anovaTable(fit: DesignFit, y: Float64Array, request: TrialAnalysisReque
     const testable = ms !== null && denominator.ms !== null && denominator.ms > 0 && denominator.df > 0;
     const f = testable ? ms / denominator.ms! : null;
     const p = f === null ? null : fUpperTailProbability(f, row.df, denominator.df);
-    return Object.freeze({ term: row.term, df: row.df, ss: row.ss, ms, f, p });
+    return Object.freeze({ term: row.term, df: row.df, ss: row.ss, ms, f, p, errorTerm: f === null ? null : denominatorOf(row.term, request) });
   });
   let mean = 0;
   for (const value of y) mean += value;
   mean /= y.length;
   let totalSs = 0;
   for (const value of y) totalSs += (value - mean) ** 2;
-  rows.push(Object.freeze({ term: 'error', df: fit.residualDf, ss: fit.residualSs, ms: errorMs, f: null, p: null }));
-  rows.push(Object.freeze({ term: 'total', df: y.length - 1, ss: totalSs, ms: null, f: null, p: null }));
+  rows.push(Object.freeze({ term: 'error', df: fit.residualDf, ss: fit.residualSs, ms: errorMs, f: null, p: null, errorTerm: null }));
+  rows.push(Object.freeze({ term: 'total', df: y.length - 1, ss: totalSs, ms: null, f: null, p: null, errorTerm: null }));
   return rows;
 }
 
@@ -266,6 +291,25 @@ export function analyseTrial(request: TrialAnalysisRequest): TrialAnalysis {
   if (request.observations?.some((o) => o.covariate !== undefined)) return analyseWithCovariate(request);
   const { alpha, methods } = validateRequest(request);
   const transformed = transformedValues(request);
+  if (isFactorialDesign(request.design)) {
+    if (request.model !== undefined && request.model !== 'anova' && request.model !== 'reml') {
+      throw new StatsInputError('invalid model', `model must be "anova" or "reml", got ${JSON.stringify(request.model)}`);
+    }
+    return analyseFactorialTrial({
+      design: request.design,
+      observations: request.observations,
+      values: transformed.values,
+      ...(request.factorNames ? { factorNames: request.factorNames } : {}),
+      ...(request.model ? { model: request.model } : {}),
+      ...(request.sitesAre ? { sitesAre: request.sitesAre } : {}),
+      ...(request.control !== undefined ? { control: request.control } : {}),
+      ...(request.forceLsd !== undefined ? { forceLsd: request.forceLsd } : {}),
+      alpha,
+      methods,
+      back: transformed.note === null ? null : (mean: number): number => backTransform(mean, request.transform!, transformed.offset),
+      transformNote: transformed.note,
+    });
+  }
   const prepared = prepareTrialLayout(request.design, request.observations, transformed.values, request.factorNames);
   const { layout, centreValue } = prepared;
   const labels = layout.treatment.levels;

@@ -27,6 +27,7 @@ export { MODEL_DESIGNS, modelLayout, type LabelledPlot, type LayoutTerm, type Mo
 export { dropTermTests, type LikelihoodRatioRow } from './likelihood-ratio';
 export { manyToControl, manyToControlStatement, type ControlContrast, type ManyToControl } from './many-to-control';
 export { productLimitCurve, type CurveMedian, type ProductLimitCurve, type ProductLimitPoint, type TimedValue } from './product-limit';
+export { notDrainedCurves, type NotDrainedCurve, type NotDrainedStep, type TimedPlot } from './not-drained-curves';
 export { logRank, type LogRankResult, type StratifiedTime } from './log-rank';
 export { AFT_DISTRIBUTIONS, fitAcceleratedFailureTime, type AftDistribution, type AftFit } from './accelerated-failure-time';
 export { analyseCensoredTimes, type CensoredObservation, type CensoredTimesAnalysis, type CensoredTimesRequest, type TreatmentCurve, type TreatmentMedian } from './censored-times';

@@ -80,10 +80,15 @@ describe('agreement with R on random trial layouts', () => {
   for (const entry of fixture.cases) {
     const label = `${entry.id} ${entry.design}, ${entry.observations.length} plots, ${entry.missingPlots} missing, scale ${entry.scale}`;
     it(label, () => {
-      const fixed = analyseTrial(request(entry, { sitesAre: 'fixed' }));
+      // Since issue #10 an unbalanced factorial is analysed by REML unless the least-squares ANOVA is asked for, and
+      // that ANOVA is type III (car::Anova, checked in r-design-reference.test.ts); the fixture's sequential rows
+      // agree with it for the interaction and the error only, while means, pairs and residuals are the same fit.
+      const leastSquaresFactorial = entry.design === 'factorial-rcbd' && entry.missingPlots > 0;
+      const fixed = analyseTrial(request(entry, { sitesAre: 'fixed', ...(leastSquaresFactorial ? { model: 'anova' as const } : {}) }));
       const rRows = entry.expected.anova;
       rRows.forEach((rRow, i) => {
         const row = fixed.anova[i]!;
+        if (leastSquaresFactorial && i < rRows.length - 2) return;
         expect(row.term).toBe(R_TERM_NAMES[rRow.term] ?? rRow.term);
         expect(row.df, `${rRow.term} df`).toBe(rRow.df);
         expectRelative(row.ss, rRow.ss, 1e-9, `${rRow.term} SS`);

@@ -70,7 +70,7 @@ describe('split-plot and factorial designs through the API', () => {
       ['Sub-plot error', 3, ['Mulch', 'Amendment:Mulch']],
     ]);
     expect(quarry.warnings).toContain(
-      'Whole-plot error has only 2 degrees of freedom at the site ((2 blocks − 1) × (3 levels of Amendment − 1)), fewer than the 12 EPPO PP 1/152 asks for. ' +
+      'A split plot with 2 blocks has only 2 degrees of freedom for whole-plot error at the site ((2 blocks − 1) × (3 levels of Amendment − 1)), fewer than the 12 EPPO PP 1/152 asks for. ' +
         'Amendment is tested against it: at p = 0.05 the F of Amendment must exceed 19.0, so only a very large difference could show. 7 blocks would give 12.',
     );
     expect(split.detail.activation.warnings).toContain(`Quarry Hill: ${quarry.warnings[1]}`);
@@ -89,7 +89,7 @@ describe('split-plot and factorial designs through the API', () => {
       randomize: false,
     });
     const sentence =
-      'Whole-plot error has only 1 degree of freedom at the site ((2 blocks − 1) × (2 levels of Amendment − 1)), fewer than the 12 EPPO PP 1/152 asks for. ' +
+      'A split plot with 2 blocks has only 1 degree of freedom for whole-plot error at the site ((2 blocks − 1) × (2 levels of Amendment − 1)), fewer than the 12 EPPO PP 1/152 asks for. ' +
       'Amendment is tested against it: at p = 0.05 the F of Amendment must exceed 161.4, so only a very large difference could show. 13 blocks would give 12.';
     expect(small.detail.sites[0]!.warnings).toContain(sentence);
     expect(small.detail.activation.warnings).toContain(`Tiny Garden: ${sentence}`);

@@ -41,7 +41,7 @@ describe('Findings: the analysis of stored data through the engine', () => {
     it(`${code} at ${label} (${combined ? 'all sites combined' : 'one site'}) equals POST /api/stats/anova on the same observations`, async () => {
       const site = protocol.sites[0]!;
       const query = `measureId=${measure(code).id}&roundId=${round(label).id}${combined ? '' : `&siteId=${site.id}`}`;
-      const findings = await get(`${base}/findings?${query}`);
+      const findings = await get(`${base}/findings?analysis=anova&${query}`);
       expect(findings.status).toBe(200);
       const observations = (await get(`${base}/observations?${query}`)).body as Observation[];
       const sent = engineObservations(observations, combined);
@@ -84,7 +84,7 @@ describe('Findings: the analysis of stored data through the engine', () => {
 
   it('counts censored plots, explains them beside the ANOVA, and draws the not-drained curve as a hand count', async () => {
     const query = `measureId=${measure('DRAIN').id}&roundId=${round('Day 0').id}`;
-    const findings = (await get(`${base}/findings?${query}`)).body as Findings;
+    const findings = (await get(`${base}/findings?analysis=anova&${query}`)).body as Findings;
     const observations = ((await get(`${base}/observations?${query}`)).body as Observation[]).filter((o) => o.valueText !== null);
     const censored = observations.filter((o) => o.censored);
     expect(censored.length).toBeGreaterThan(0);
@@ -108,9 +108,9 @@ describe('Findings: the analysis of stored data through the engine', () => {
 
   it('follows the treatment means over the rounds that have data, with the same choices', async () => {
     const query = `measureId=${measure('WATER').id}&roundId=${round('Day 0').id}`;
-    const findings = (await get(`${base}/findings?${query}`)).body as Findings;
+    const findings = (await get(`${base}/findings?analysis=anova&${query}`)).body as Findings;
     expect(findings.context.meansOverTime.map((p) => p.roundLabel)).toEqual(['Day 0', 'Day 14']);
-    const day14 = (await get(`${base}/findings?measureId=${measure('WATER').id}&roundId=${round('Day 14').id}`)).body as Findings;
+    const day14 = (await get(`${base}/findings?analysis=anova&measureId=${measure('WATER').id}&roundId=${round('Day 14').id}`)).body as Findings;
     expect(findings.context.meansOverTime[1]!.means).toEqual(day14.means);
     expect(findings.context.meansOverTime[0]!.means).toEqual(findings.means);
     expect(findings.context.missing.count).toBe(0);
@@ -119,21 +119,21 @@ describe('Findings: the analysis of stored data through the engine', () => {
 
   it('uses the choices: fixed sites, LSD forced, α, a transform; Dunnett against the control', async () => {
     const query = `measureId=${measure('CRUST').id}&roundId=${round('Day 14').id}&sitesAre=fixed&method=lsd&forceLsd=true&alpha=0.1&transform=log`;
-    const findings = (await get(`${base}/findings?${query}`)).body as Findings;
+    const findings = (await get(`${base}/findings?analysis=anova&${query}`)).body as Findings;
     expect(findings.context.choices).toMatchObject({ sitesAre: 'fixed', method: 'lsd', forceLsd: true, alpha: 0.1, transform: 'log', siteId: null });
     expect(findings.context.engineRequest).toMatchObject({ design: 'multisite-rcbd', sitesAre: 'fixed', meanSeparation: ['lsd'], alpha: 0.1, transform: 'log' });
     expect(findings.comparisons.lsd).toBeDefined();
     expect(findings.means[0]!.backTransformedMean).toEqual(expect.any(Number));
-    const dunnett = (await get(`${base}/findings?measureId=${measure('CRUST').id}&roundId=${round('Day 14').id}&method=dunnett`)).body as Findings;
+    const dunnett = (await get(`${base}/findings?analysis=anova&measureId=${measure('CRUST').id}&roundId=${round('Day 14').id}&method=dunnett`)).body as Findings;
     expect(dunnett.comparisons.dunnett!.pairs.every((p) => p.b === 'CTL' || p.a === 'CTL')).toBe(true);
   });
 
   it('without a round, analyses the latest round holding values and says which (the same numbers as asking for it)', async () => {
-    const latest = await get(`${base}/findings?measureId=${measure('DRAIN').id}`);
+    const latest = await get(`${base}/findings?analysis=anova&measureId=${measure('DRAIN').id}`);
     expect(latest.status).toBe(200);
     // The demo holds values for Day 0 and Day 14; Day 28 is still to be measured.
     expect(latest.body.context.choices.roundId).toBe(round('Day 14').id);
-    const asked = await get(`${base}/findings?measureId=${measure('DRAIN').id}&roundId=${round('Day 14').id}`);
+    const asked = await get(`${base}/findings?analysis=anova&measureId=${measure('DRAIN').id}&roundId=${round('Day 14').id}`);
     const { context: latestContext, ...latestAnalysis } = latest.body as Findings;
     const { context: askedContext, ...askedAnalysis } = asked.body as Findings;
     expect(latestAnalysis).toEqual(askedAnalysis);
@@ -141,16 +141,16 @@ describe('Findings: the analysis of stored data through the engine', () => {
   });
 
   it('refuses unknown choices by name, no data by a sentence, and non-members with 404', async () => {
-    const bad = await get(`${base}/findings?measureId=${measure('CRUST').id}&roundId=${round('Day 0').id}&method=scheffe&alpha=2`);
+    const bad = await get(`${base}/findings?analysis=anova&measureId=${measure('CRUST').id}&roundId=${round('Day 0').id}&method=scheffe&alpha=2`);
     expect(bad.status).toBe(422);
     expect(bad.body.errors.map((e: { field: string }) => e.field).sort()).toEqual(['alpha', 'method']);
-    const unknown = await get(`${base}/findings?measureId=999999&roundId=${round('Day 0').id}`);
+    const unknown = await get(`${base}/findings?analysis=anova&measureId=999999&roundId=${round('Day 0').id}`);
     expect(unknown.status).toBe(422);
     expect(unknown.body.message).toBe('measureId 999999 is not a measure of this trial.');
-    const empty = await get(`${base}/findings?measureId=${measure('CRUST').id}&roundId=${round('Day 28').id}`);
+    const empty = await get(`${base}/findings?analysis=anova&measureId=${measure('CRUST').id}&roundId=${round('Day 28').id}`);
     expect(empty.status).toBe(422);
     expect(empty.body.message).toBe('There are no values of crust resistance in Day 28 at all sites combined yet.');
     const stranger = await tokenFor(t, await createPerson());
-    expect((await t.http.get(`${base}/findings?measureId=1&roundId=1`).set(bearer(stranger))).status).toBe(404);
+    expect((await t.http.get(`${base}/findings?analysis=anova&measureId=1&roundId=1`).set(bearer(stranger))).status).toBe(404);
   });
 });

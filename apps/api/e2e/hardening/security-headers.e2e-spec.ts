@@ -3,22 +3,7 @@ import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { buildIntakeTrial, type IntakeTrial } from '../intake/intake-support';
-import { bearer, createPerson, createTestApp, tokenFor, type TestApp } from '../support/test-app';
-
-/** Creates the app with these environment variables set, and puts them back afterwards. */
-async function appWith(variables: Record<string, string | undefined>): Promise<TestApp> {
-  const saved = Object.fromEntries(Object.keys(variables).map((name) => [name, process.env[name]]));
-  Object.assign(process.env, variables);
-  for (const [name, value] of Object.entries(variables)) if (value === undefined) delete process.env[name];
-  try {
-    return await createTestApp();
-  } finally {
-    for (const [name, value] of Object.entries(saved)) {
-      if (value === undefined) delete process.env[name];
-      else process.env[name] = value;
-    }
-  }
-}
+import { bearer, createPerson, createTestApp, createTestAppWith, tokenFor, type TestApp } from '../support/test-app';
 
 /** The directives of a Content-Security-Policy header, by name. */
 function directives(header: string | undefined): Record<string, string[]> {
@@ -40,7 +25,7 @@ describe('security headers on every answer', () => {
     webDir = mkdtempSync(join(tmpdir(), 'friable-web-'));
     writeFileSync(join(webDir, 'index.html'), '<!doctype html><title>Friable</title><div id="root"></div><script type="module" src="/assets/app.js"></script>');
     writeFileSync(join(webDir, 'app.js'), 'console.log(1);');
-    t = await appWith({ WEB_DIST_DIR: webDir });
+    t = await createTestAppWith({ WEB_DIST_DIR: webDir });
   });
   afterAll(async () => {
     await t.close();
@@ -93,14 +78,14 @@ describe('plot photos are served as attachments under a sandbox', () => {
 
 describe('the OpenAPI page and the development Outbox', () => {
   it('/api/docs is not served unless API_DOCS_PUBLIC=true', async () => {
-    const closed = await appWith({ API_DOCS_PUBLIC: undefined });
+    const closed = await createTestAppWith({ API_DOCS_PUBLIC: undefined });
     try {
       expect((await closed.http.get('/api/docs')).status).toBe(404);
       expect((await closed.http.get('/api/docs/openapi.json')).status).toBe(404);
     } finally {
       await closed.close();
     }
-    const open = await appWith({ API_DOCS_PUBLIC: 'true' });
+    const open = await createTestAppWith({ API_DOCS_PUBLIC: 'true' });
     try {
       const page = await open.http.get('/api/docs/');
       expect(page.status).toBe(200);

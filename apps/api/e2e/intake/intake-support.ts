@@ -17,8 +17,8 @@ export interface IntakeTrial {
   measures: { DT: number; CS: number; WR: number };
   plots: Record<string, number>;
   tokens: { investigator: string; collaborator: string; otherCollaborator: string; reviewer: string; nonMember: string };
-  emails: { investigator: string; collaborator: string };
-  ids: { investigator: number; collaborator: number };
+  emails: { investigator: string; collaborator: string; reviewer: string };
+  ids: { investigator: number; collaborator: number; reviewer: number };
 }
 
 /**
@@ -76,8 +76,8 @@ export async function buildIntakeTrial(t: TestApp): Promise<IntakeTrial> {
       reviewer: await tokenFor(t, reviewer),
       nonMember: await tokenFor(t, await createPerson({ name: 'Intake stranger' })),
     },
-    emails: { investigator: investigator.email, collaborator: collaborator.email },
-    ids: { investigator: investigator.id, collaborator: collaborator.id },
+    emails: { investigator: investigator.email, collaborator: collaborator.email, reviewer: reviewer.email },
+    ids: { investigator: investigator.id, collaborator: collaborator.id, reviewer: reviewer.id },
   };
 }
 

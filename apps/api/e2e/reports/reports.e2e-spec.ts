@@ -32,7 +32,7 @@ describe('Report: what the printable report page needs', () => {
     for (const entry of report.measures) {
       // The demo has Day 0 and Day 14 at every garden; Day 28 is still empty.
       expect(entry.round!.label).toBe('Day 14');
-      const findings = (await t.http.get(`${base}/findings?measureId=${entry.measure.id}&roundId=${entry.round!.id}`).set(bearer(token))).body as Findings;
+      const findings = (await t.http.get(`${base}/findings?analysis=anova&measureId=${entry.measure.id}&roundId=${entry.round!.id}`).set(bearer(token))).body as Findings;
       expect(entry.anova).toEqual(findings.anova);
       expect(entry.summary).toEqual(findings.summary);
       expect(entry.means.map((m) => [m.treatment, m.mean, m.se, m.letters, m.percentOfControl])).toEqual(
@@ -65,7 +65,10 @@ describe('Report: what the printable report page needs', () => {
     expect(methods('/api/trials/{trialId}/analyses')).toEqual(['get', 'post']);
     expect(methods('/api/trials/{trialId}/analyses/{analysisId}')).toEqual(['get']);
     expect(methods('/api/trials/{trialId}/analyses/{analysisId}/comments')).toEqual(['get', 'post']);
-    expect(methods('/api/trials/{trialId}/analyses/{analysisId}/sign-off')).toEqual(['post']);
+    expect(methods('/api/trials/{trialId}/analyses/{analysisId}/sign-offs')).toEqual(['post']);
+    expect(methods('/api/trials/{trialId}/analyses/{analysisId}/review-requests')).toEqual(['post']);
+    expect(methods('/api/trials/{trialId}/analyses/{analysisId}/comments/{commentId}')).toEqual(['delete', 'patch']);
+    expect(methods('/api/trials/{trialId}/members/{userId}')).toEqual(['delete', 'patch']);
     for (const file of ['export.csv', 'export-dictionary.csv', 'export.xlsx', 'report']) expect(methods(`/api/trials/{trialId}/${file}`)).toEqual(['get']);
   });
 });

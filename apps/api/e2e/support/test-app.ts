@@ -30,6 +30,23 @@ export async function createTestApp(): Promise<TestApp> {
   return { app, http: request(app.getHttpServer()), sequelize, close: () => app.close() };
 }
 
+/** The whole API created with these environment variables set (undefined: unset), which are put back afterwards. */
+export async function createTestAppWith(variables: Record<string, string | undefined>): Promise<TestApp> {
+  const saved = Object.fromEntries(Object.keys(variables).map((name) => [name, process.env[name]]));
+  const apply = (values: Record<string, string | undefined>) => {
+    for (const [name, value] of Object.entries(values)) {
+      if (value === undefined) delete process.env[name];
+      else process.env[name] = value;
+    }
+  };
+  apply(variables);
+  try {
+    return await createTestApp();
+  } finally {
+    apply(saved);
+  }
+}
+
 // One hash for every test person keeps bcrypt out of the test time.
 const passwordHash = bcrypt.hashSync(TEST_PASSWORD, 4);
 

@@ -1,17 +1,31 @@
-import { Body, Controller, Get, HttpCode, Param, ParseIntPipe, Post } from '@nestjs/common';
-import { ApiConflictResponse, ApiCreatedResponse, ApiOkResponse, ApiOperation, ApiTags, ApiUnprocessableEntityResponse } from '@nestjs/swagger';
+import { Body, Controller, Delete, Get, HttpCode, Param, ParseIntPipe, Patch, Post } from '@nestjs/common';
+import {
+  ApiConflictResponse,
+  ApiCreatedResponse,
+  ApiNoContentResponse,
+  ApiOkResponse,
+  ApiOperation,
+  ApiTags,
+  ApiUnprocessableEntityResponse,
+} from '@nestjs/swagger';
 import type { AuthUser, TrialAccessContext } from '../auth/auth-user';
 import { AnyTrialMember, TrialAccess } from '../common/decorators/access.decorator';
 import { CurrentTrialAccess, CurrentUser } from '../common/decorators/current-user.decorator';
 import { AnalysesService } from './analyses.service';
+import { CommentsService } from './comments.service';
 import { CreateAnalysisDto } from './dto/create-analysis.dto';
-import { CreateCommentDto } from './dto/create-comment.dto';
 import { AnalysisSnapshotDto, AnalysisSnapshotSummaryDto, SnapshotCommentDto } from './dto/analysis-snapshot.dto';
+import { CommentInputDto, CommentUpdateDto, ReviewRequestAnswerDto, ReviewRequestInputDto, SignOffDto, SignOffInputDto } from './dto/review.dto';
+import { ReviewService } from './review.service';
 
 @ApiTags('analyses')
 @Controller('trials/:trialId/analyses')
 export class AnalysesController {
-  constructor(private readonly analyses: AnalysesService) {}
+  constructor(
+    private readonly analyses: AnalysesService,
+    private readonly review: ReviewService,
+    private readonly comments: CommentsService,
+  ) {}
 
   @Post()
   @TrialAccess('investigator', 'reviewer')
@@ -24,7 +38,7 @@ export class AnalysesController {
 
   @Get()
   @AnyTrialMember()
-  @ApiOkResponse({ type: [AnalysisSnapshotSummaryDto], description: 'AnalysisSnapshotSummary[], newest first (without the result).' })
+  @ApiOkResponse({ type: [AnalysisSnapshotSummaryDto], description: 'AnalysisSnapshotSummary[], newest first (without the result), each with its sign-offs and review status.' })
   list(@CurrentTrialAccess() access: TrialAccessContext) {
     return this.analyses.list(access.trialId);
   }
@@ -36,31 +50,81 @@ export class AnalysesController {
     return this.analyses.get(access.trialId, analysisId);
   }
 
+  @Post(':analysisId/sign-offs')
+  @TrialAccess('investigator', 'reviewer')
+  @ApiOperation({ summary: 'Sign off a saved analysis of a locked trial with a short statement (a reviewer; an investigator when the trial has no reviewer)' })
+  @ApiCreatedResponse({ type: SignOffDto, description: 'SignOff: name, role, time, statement, data hash and engine version; recorded in the activity trail.' })
+  @ApiConflictResponse({ description: 'The trial is not locked, the data changed since the analysis was saved, or you already signed it (a sentence).' })
+  signOff(
+    @CurrentTrialAccess() access: TrialAccessContext,
+    @CurrentUser() user: AuthUser,
+    @Param('analysisId', ParseIntPipe) analysisId: number,
+    @Body() body: SignOffInputDto,
+  ) {
+    return this.review.signOff(access, analysisId, user, body.statement);
+  }
+
+  @Post(':analysisId/review-requests')
+  @TrialAccess('investigator')
+  @ApiOperation({ summary: 'Ask the trial’s reviewers to review a saved analysis: each gets an e-mail with a link to it' })
+  @ApiCreatedResponse({ type: ReviewRequestAnswerDto })
+  @ApiConflictResponse({ description: 'The trial has no reviewer yet.' })
+  requestReview(
+    @CurrentTrialAccess() access: TrialAccessContext,
+    @CurrentUser() user: AuthUser,
+    @Param('analysisId', ParseIntPipe) analysisId: number,
+    @Body() body: ReviewRequestInputDto,
+  ) {
+    return this.review.requestReview(access.trialId, analysisId, user, body.message);
+  }
+
   @Get(':analysisId/comments')
   @AnyTrialMember()
-  @ApiOkResponse({ type: [SnapshotCommentDto], description: 'SnapshotComment[], oldest first.' })
-  comments(@CurrentTrialAccess() access: TrialAccessContext, @Param('analysisId', ParseIntPipe) analysisId: number) {
-    return this.analyses.listComments(access.trialId, analysisId);
+  @ApiOkResponse({ type: [SnapshotCommentDto], description: 'SnapshotComment[], oldest first; replies carry parentId; deleted ones keep their place with an empty body.' })
+  listComments(@CurrentTrialAccess() access: TrialAccessContext, @Param('analysisId', ParseIntPipe) analysisId: number) {
+    return this.comments.list(access.trialId, analysisId);
   }
 
   @Post(':analysisId/comments')
   @AnyTrialMember()
-  @ApiCreatedResponse({ type: SnapshotCommentDto, description: 'SnapshotComment; recorded in the activity log.' })
-  comment(
+  @ApiCreatedResponse({ type: SnapshotCommentDto, description: 'SnapshotComment; a reply is e-mailed to the reviewers and the thread’s author; recorded in the activity trail.' })
+  @ApiUnprocessableEntityResponse({ description: 'body empty or too long, or parentId not a comment of this analysis.' })
+  addComment(
     @CurrentTrialAccess() access: TrialAccessContext,
     @CurrentUser() user: AuthUser,
     @Param('analysisId', ParseIntPipe) analysisId: number,
-    @Body() body: CreateCommentDto,
+    @Body() body: CommentInputDto,
   ) {
-    return this.analyses.comment(access.trialId, analysisId, user, body.body);
+    return this.comments.add(access.trialId, analysisId, user, body);
   }
 
-  @Post(':analysisId/sign-off')
-  @TrialAccess('investigator')
-  @HttpCode(200)
-  @ApiOkResponse({ type: AnalysisSnapshotDto, description: 'AnalysisSnapshot with signedOffAt and signedOffBy; recorded in the activity log.' })
-  @ApiConflictResponse({ description: 'The trial is not locked, or the analysis is already signed off (a sentence).' })
-  signOff(@CurrentTrialAccess() access: TrialAccessContext, @CurrentUser() user: AuthUser, @Param('analysisId', ParseIntPipe) analysisId: number) {
-    return this.analyses.signOff(access.trialId, analysisId, user);
+  @Patch(':analysisId/comments/:commentId')
+  @AnyTrialMember()
+  @ApiOperation({ summary: 'Edit one’s own comment (the old text kept as "edited"), or mark a thread resolved / open again' })
+  @ApiOkResponse({ type: SnapshotCommentDto })
+  @ApiConflictResponse({ description: 'The comment was deleted.' })
+  updateComment(
+    @CurrentTrialAccess() access: TrialAccessContext,
+    @CurrentUser() user: AuthUser,
+    @Param('analysisId', ParseIntPipe) analysisId: number,
+    @Param('commentId', ParseIntPipe) commentId: number,
+    @Body() body: CommentUpdateDto,
+  ) {
+    return this.comments.update(access, analysisId, commentId, user, body);
+  }
+
+  @Delete(':analysisId/comments/:commentId')
+  @AnyTrialMember()
+  @HttpCode(204)
+  @ApiOperation({ summary: 'Delete one’s own comment: it shows as deleted, its text kept in history; replies stay' })
+  @ApiNoContentResponse({ description: 'Deleted.' })
+  @ApiConflictResponse({ description: 'Already deleted.' })
+  async deleteComment(
+    @CurrentTrialAccess() access: TrialAccessContext,
+    @CurrentUser() user: AuthUser,
+    @Param('analysisId', ParseIntPipe) analysisId: number,
+    @Param('commentId', ParseIntPipe) commentId: number,
+  ): Promise<void> {
+    await this.comments.remove(access.trialId, analysisId, commentId, user);
   }
 }

@@ -1,47 +1,44 @@
-import type { AnalysisSnapshot, AnalysisSnapshotSummary, FindingsChoices, Findings, SnapshotComment } from '@friable/contracts';
+import type { AnalysisSnapshot, AnalysisSnapshotSummary, FindingsChoices, Findings, ReviewStatus, SignOff } from '@friable/contracts';
 import { Injectable, NotFoundException } from '@nestjs/common';
 import { InjectConnection, InjectModel } from '@nestjs/sequelize';
 import type { Sequelize } from 'sequelize-typescript';
 import { ActivityService } from '../activity/activity.service';
 import type { AuthUser } from '../auth/auth-user';
 import { FindingsService } from '../findings/findings.service';
-import { Trial } from '../trials/models/trial.model';
 import { User } from '../users/models/user.model';
 import type { CreateAnalysisDto } from './dto/create-analysis.dto';
 import { AnalysisSnapshotRow } from './models/analysis-snapshot.model';
 import { SnapshotCommentRow } from './models/snapshot-comment.model';
-import { SignOffRefusedException } from './sign-off-refused.exception';
+import { AnalysisSignOffRow } from './models/analysis-sign-off.model';
+import { ReviewService } from './review.service';
 
-/** The people a saved analysis names: who saved it and who signed it off. */
-const people = () => [
-  { model: User, as: 'creator', attributes: ['id', 'name'] },
-  { model: User, as: 'signer', attributes: ['id', 'name'] },
-];
+/** The person a saved analysis names: who saved it. */
+const people = () => [{ model: User, as: 'creator', attributes: ['id', 'name'] }];
 
-function presentComment(row: SnapshotCommentRow): SnapshotComment {
-  return { id: row.id, analysisId: row.snapshotId, body: row.body, authorId: row.authorId, authorName: row.author?.name ?? null, createdAt: row.createdAt.toISOString() };
-}
+type Review = { signOffs: SignOff[]; review: ReviewStatus };
+
 
 /**
  * Saved analyses — "Save this analysis" freezes the choices, the data hash, the engine version and the full
- * Findings; reopening shows the stored numbers with `dataChanged` when today's data hash differs. Comments and
- * the investigator's sign-off (locked trials only) go to the activity log in the same transaction.
- * Throws: 404 for an analysis not in the trial, 409 SignOffRefusedException, 422 from Findings.
+ * Findings; reopening shows the stored numbers with `dataChanged` when today's data hash differs. Each carries its
+ * sign-offs and review status (ReviewService); comments live in CommentsService.
+ * Throws: 404 for an analysis not in the trial, 422 from Findings.
  */
 @Injectable()
 export class AnalysesService {
   constructor(
     @InjectModel(AnalysisSnapshotRow) private readonly snapshots: typeof AnalysisSnapshotRow,
     @InjectModel(SnapshotCommentRow) private readonly comments: typeof SnapshotCommentRow,
-    @InjectModel(Trial) private readonly trials: typeof Trial,
+    @InjectModel(AnalysisSignOffRow) private readonly signOffs: typeof AnalysisSignOffRow,
     @InjectConnection() private readonly sequelize: Sequelize,
     private readonly findings: FindingsService,
     private readonly activity: ActivityService,
+    private readonly review: ReviewService,
   ) {}
 
   async create(trialId: number, user: AuthUser, input: CreateAnalysisDto): Promise<AnalysisSnapshot> {
     const { title, ...query } = input;
-    const result = await this.findings.findings(trialId, query);
+    const result = await this.findings.anovaFindings(trialId, query);
     const id = await this.sequelize.transaction(async (transaction) => {
       const row = await this.snapshots.create(
         {
@@ -78,70 +75,24 @@ export class AnalysesService {
       order: [['id', 'DESC']],
     });
     const counts = await this.commentCounts(rows.map((r) => r.id));
-    return rows.map((row) => this.summary(row, counts.get(row.id) ?? 0));
+    const reviews = await this.reviews(trialId, rows);
+    return rows.map((row) => this.summary(row, counts.get(row.id) ?? 0, reviews.get(row.id)!));
   }
 
   async get(trialId: number, analysisId: number): Promise<AnalysisSnapshot> {
     const row = await this.find(trialId, analysisId);
     const counts = await this.commentCounts([row.id]);
-    const choices = JSON.parse(row.choices) as FindingsChoices;
-    let currentDataHash: string | null;
-    try {
-      currentDataHash = await this.findings.currentDataHash(trialId, choices);
-    } catch {
-      currentDataHash = null;
-    }
-    return { ...this.summary(row, counts.get(row.id) ?? 0), result: JSON.parse(row.result) as Findings, dataChanged: currentDataHash !== row.dataHash, currentDataHash };
+    const currentDataHash = await this.review.currentHash(trialId, row);
+    const reviews = await this.review.forSnapshots(trialId, [row], new Map([[row.id, currentDataHash]]));
+    return { ...this.summary(row, counts.get(row.id) ?? 0, reviews.get(row.id)!), result: JSON.parse(row.result) as Findings, dataChanged: currentDataHash !== row.dataHash, currentDataHash };
   }
 
   /** Every saved analysis with its stored result (the workbook export). */
   async all(trialId: number): Promise<Array<AnalysisSnapshotSummary & { result: Findings }>> {
     const rows = await this.snapshots.findAll({ where: { trialId }, include: people(), order: [['id', 'ASC']] });
     const counts = await this.commentCounts(rows.map((r) => r.id));
-    return rows.map((row) => ({ ...this.summary(row, counts.get(row.id) ?? 0), result: JSON.parse(row.result) as Findings }));
-  }
-
-  async listComments(trialId: number, analysisId: number): Promise<SnapshotComment[]> {
-    const snapshot = await this.find(trialId, analysisId);
-    const rows = await this.comments.findAll({ where: { snapshotId: snapshot.id }, include: [{ model: User, as: 'author', attributes: ['id', 'name'] }], order: [['id', 'ASC']] });
-    return rows.map(presentComment);
-  }
-
-  async comment(trialId: number, analysisId: number, user: AuthUser, body: string): Promise<SnapshotComment> {
-    const snapshot = await this.find(trialId, analysisId);
-    const id = await this.sequelize.transaction(async (transaction) => {
-      const row = await this.comments.create({ trialId, snapshotId: snapshot.id, body: body.trim(), authorId: user.id }, { transaction });
-      await this.activity.record(transaction, {
-        trialId,
-        userId: user.id,
-        kind: 'analysis.commented',
-        summary: `Commented on the analysis "${snapshot.title}".`,
-        details: { analysisId: snapshot.id, commentId: row.id, body: row.body.slice(0, 1000) },
-      });
-      return row.id;
-    });
-    return presentComment((await this.comments.findByPk(id, { include: [{ model: User, as: 'author', attributes: ['id', 'name'] }] }))!);
-  }
-
-  async signOff(trialId: number, analysisId: number, user: AuthUser): Promise<AnalysisSnapshot> {
-    await this.sequelize.transaction(async (transaction) => {
-      const trial = await this.trials.findByPk(trialId, { transaction, lock: transaction.LOCK.UPDATE });
-      const snapshot = await this.snapshots.findOne({ where: { id: analysisId, trialId }, include: [{ model: User, as: 'signer', attributes: ['id', 'name'] }], transaction, lock: true });
-      if (!snapshot) throw new NotFoundException('No such saved analysis in this trial.');
-      if (snapshot.signedOffAt) throw new SignOffRefusedException('already', snapshot.signer?.name, snapshot.signedOffAt);
-      if (trial?.status !== 'locked') throw new SignOffRefusedException('not-locked');
-      snapshot.signedOffAt = new Date();
-      snapshot.signedOffById = user.id;
-      await snapshot.save({ transaction });
-      await this.activity.record(transaction, {
-        trialId,
-        userId: user.id,
-        kind: 'analysis.signed-off',
-        summary: `Signed off the analysis "${snapshot.title}".`,
-        details: { analysisId: snapshot.id, dataHash: snapshot.dataHash },
-      });
-    });
-    return this.get(trialId, analysisId);
+    const reviews = await this.reviews(trialId, rows);
+    return rows.map((row) => ({ ...this.summary(row, counts.get(row.id) ?? 0, reviews.get(row.id)!), result: JSON.parse(row.result) as Findings }));
   }
 
   private async find(trialId: number, analysisId: number): Promise<AnalysisSnapshotRow> {
@@ -153,13 +104,24 @@ export class AnalysesService {
     return row;
   }
 
+  /** Sign-offs and review status; today's data hash is computed only for analyses someone signed. */
+  async reviews(trialId: number, rows: AnalysisSnapshotRow[]): Promise<Map<number, Review>> {
+    const signed = new Set(
+      rows.length ? (await this.signOffs.findAll({ where: { snapshotId: rows.map((r) => r.id) }, attributes: ['snapshotId'] })).map((s) => s.snapshotId) : [],
+    );
+    const hashes = new Map<number, string | null>();
+    for (const row of rows) if (signed.has(row.id)) hashes.set(row.id, await this.review.currentHash(trialId, row));
+    return this.review.forSnapshots(trialId, rows, hashes);
+  }
+
   private async commentCounts(ids: number[]): Promise<Map<number, number>> {
     if (ids.length === 0) return new Map();
-    const rows = (await this.comments.count({ where: { snapshotId: ids }, group: ['snapshot_id'] })) as unknown as Array<{ snapshot_id?: number; snapshotId?: number; count: number }>;
+    const rows = (await this.comments.count({ where: { snapshotId: ids, deletedAt: null }, group: ['snapshot_id'] })) as unknown as Array<{ snapshot_id?: number; snapshotId?: number; count: number }>;
     return new Map(rows.map((r) => [Number(r.snapshotId ?? r.snapshot_id), Number(r.count)]));
   }
 
-  private summary(row: AnalysisSnapshotRow, commentCount: number): AnalysisSnapshotSummary {
+  private summary(row: AnalysisSnapshotRow, commentCount: number, review: Review): AnalysisSnapshotSummary {
+    const last = review.signOffs.at(-1);
     return {
       id: row.id,
       trialId: row.trialId,
@@ -173,10 +135,12 @@ export class AnalysesService {
       createdById: row.createdById,
       createdBy: row.creator?.name ?? null,
       createdAt: row.createdAt.toISOString(),
-      signedOffAt: row.signedOffAt ? row.signedOffAt.toISOString() : null,
-      signedOffById: row.signedOffById,
-      signedOffBy: row.signer?.name ?? null,
+      signedOffAt: last?.signedAt ?? null,
+      signedOffById: last?.userId ?? null,
+      signedOffBy: last?.name ?? null,
       commentCount,
+      signOffs: review.signOffs,
+      review: review.review,
     };
   }
 }

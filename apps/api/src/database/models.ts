@@ -18,6 +18,10 @@ import { ObservationRow } from '../observations/models/observation.model';
 import { PlotPhotoRow } from '../photos/models/plot-photo.model';
 import { AnalysisSnapshotRow } from '../analyses/models/analysis-snapshot.model';
 import { SnapshotCommentRow } from '../analyses/models/snapshot-comment.model';
+import { SnapshotCommentRevisionRow } from '../analyses/models/snapshot-comment-revision.model';
+import { AnalysisSignOffRow } from '../analyses/models/analysis-sign-off.model';
+import { ReviewRequestRow } from '../analyses/models/review-request.model';
+import { TrialDeparture } from '../trials/models/trial-departure.model';
 import { UserSession } from '../auth/models/user-session.model';
 import { SignInLockout } from '../auth/models/sign-in-lockout.model';
 import { PasswordReset } from '../auth/models/password-reset.model';
@@ -46,6 +50,10 @@ export const allModels = [
   PlotPhotoRow,
   AnalysisSnapshotRow,
   SnapshotCommentRow,
+  SnapshotCommentRevisionRow,
+  AnalysisSignOffRow,
+  ReviewRequestRow,
+  TrialDeparture,
   UserSession,
   SignInLockout,
   PasswordReset,

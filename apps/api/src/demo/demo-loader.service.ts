@@ -1,4 +1,4 @@
-import type { MeasureKind, RateBasis, RateUnitId, TrialStatus } from '@friable/contracts';
+import type { FactorsInput, MeasureKind, RateBasis, RateUnitId, TrialStatus } from '@friable/contracts';
 import { Injectable, Logger } from '@nestjs/common';
 import { InjectConnection } from '@nestjs/sequelize';
 import { readFileSync } from 'node:fs';
@@ -24,7 +24,8 @@ interface DemoProtocol {
   startDate: string | null;
   seed: string;
   safetyNotes: string | null;
-  factors?: Array<{ name: string; levels: Array<{ code: string; name: string }> }>;
+  /** Factorial and split-plot trials: the factors from the whole plot down, levels with their rates. */
+  factors?: FactorsInput['factors'];
   treatments?: Array<{ code: string; name: string; isControl?: boolean; description?: string; rateValue?: number; rateUnit?: RateUnitId; rateBasis?: RateBasis; product?: string; materialKind?: 'gypsum' | 'other' }>;
   measures: Array<{ code: string; name: string; unit: string; kind: MeasureKind } & Record<string, number | string | boolean>>;
   rounds: Array<{ label: string; dayOffset: number; measures: string[] }>;

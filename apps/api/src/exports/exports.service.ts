@@ -79,8 +79,11 @@ export class ExportsService {
         ['engine version', snapshot.engineVersion],
         ['saved by', snapshot.createdBy],
         ['saved at', snapshot.createdAt],
-        ['signed off by', snapshot.signedOffBy],
-        ['signed off at', snapshot.signedOffAt],
+        ['review', snapshot.review.label],
+        ...snapshot.signOffs.map((s, i): [string, string] => [
+          `sign-off ${i + 1}`,
+          `${s.name} (${s.role}), ${s.signedAt}: "${s.statement}"${s.state === 'data-changed' ? ' — data changed after sign-off' : ''}`,
+        ]),
       ]);
       this.analysisTables(sheet, snapshot.result);
     }

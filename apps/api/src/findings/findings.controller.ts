@@ -1,30 +1,43 @@
 import { Controller, Get, Query } from '@nestjs/common';
-import { ApiOkResponse, ApiOperation, ApiTags, ApiUnprocessableEntityResponse } from '@nestjs/swagger';
+import { ApiExtraModels, ApiOkResponse, ApiOperation, ApiTags, ApiUnprocessableEntityResponse, getSchemaPath } from '@nestjs/swagger';
 import type { TrialAccessContext } from '../auth/auth-user';
 import { AnyTrialMember } from '../common/decorators/access.decorator';
 import { CurrentTrialAccess } from '../common/decorators/current-user.decorator';
 import { FindingsQueryDto } from './dto/findings-query.dto';
+import { FindingsCache } from './findings-cache';
 import { FindingsService } from './findings.service';
 import { FindingsDto } from './dto/findings.dto';
+import { AncovaFindingsDto, CensoredFindingsDto, CountsFindingsDto, OrdinalFindingsDto, RepeatedFindingsDto } from './dto/model-findings.dto';
+
+const ANSWERS = [FindingsDto, CensoredFindingsDto, RepeatedFindingsDto, AncovaFindingsDto, OrdinalFindingsDto, CountsFindingsDto];
 
 @ApiTags('findings')
+@ApiExtraModels(...ANSWERS)
 @Controller('trials/:trialId/findings')
 export class FindingsController {
-  constructor(private readonly findings: FindingsService) {}
+  constructor(
+    private readonly findings: FindingsService,
+    private readonly cache: FindingsCache,
+  ) {}
 
   @Get()
   @AnyTrialMember()
   @ApiOperation({
-    summary: 'The analysis of one measure and round, at one site or all sites combined',
+    summary: 'The analysis of one measure and round, at one site or all sites combined: the model made for the measure, or the one asked for',
     description:
-      'The same body as POST /api/stats/anova on the stored decimal text (design from the trial; several sites combined: multisite-rcbd), ' +
+      '`analysis` left out: the model made for the measure — censored (a time with a cut-off: POST /api/stats/censored), ordinal (a score: ' +
+      '/api/stats/ordinal), counts (a count: /api/stats/counts), and for a measured number ancova (a day-0 baseline and one later round: ' +
+      '/api/stats/anova with the baseline as covariate), repeated (two or more rounds: /api/stats/repeated) or else anova. A model answers with ' +
+      'the stateless endpoint’s body, `analysis`, and `context` (the request and observations sent, which model and why, the options on offer). ' +
+      '`analysis=anova`: the same body as POST /api/stats/anova on the stored decimal text (design from the trial; several sites combined: multisite-rcbd), ' +
       'plus `context`: the observations in the order given to the engine (residual index), censoring, missing values, % of control, ' +
       'the rank test (Friedman for blocked designs, blocks = site × block when sites are combined; Kruskal–Wallis otherwise), ' +
-      'the not-drained curve for a time with a cut-off, the means over time and the data hash.',
+      'the not-drained curve for a time with a cut-off, the means over time and the data hash. ' +
+      'Answers are kept until the next write to the trial (through any API instance).',
   })
-  @ApiOkResponse({ type: FindingsDto, description: 'Findings: AnovaAnswer & {context}.' })
+  @ApiOkResponse({ schema: { anyOf: ANSWERS.map((answer) => ({ $ref: getSchemaPath(answer) })) }, description: 'Findings (the ANOVA: AnovaAnswer & {context}) or a model’s answer & {analysis, context}.' })
   @ApiUnprocessableEntityResponse({ description: 'An unknown measure, round or site, no data yet, or the engine’s sentence.' })
   get(@CurrentTrialAccess() access: TrialAccessContext, @Query() query: FindingsQueryDto) {
-    return this.findings.findings(access.trialId, query);
+    return this.cache.answer(access.trialId, query, () => this.findings.findings(access.trialId, query));
   }
 }

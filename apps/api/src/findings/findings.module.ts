@@ -2,6 +2,7 @@ import { Module } from '@nestjs/common';
 import { ObservationsModule } from '../observations/observations.module';
 import { StatsModule } from '../stats/stats.module';
 import { TrialsModule } from '../trials/trials.module';
+import { FindingsCache } from './findings-cache';
 import { FindingsController } from './findings.controller';
 import { FindingsService } from './findings.service';
 
@@ -9,7 +10,7 @@ import { FindingsService } from './findings.service';
 @Module({
   imports: [TrialsModule, ObservationsModule, StatsModule],
   controllers: [FindingsController],
-  providers: [FindingsService],
+  providers: [FindingsService, FindingsCache],
   exports: [FindingsService],
 })
 export class FindingsModule {}

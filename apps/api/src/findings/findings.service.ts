@@ -2,15 +2,21 @@ import type {
   AnalysisDesign,
   AnovaAnswer,
   Findings,
+  FindingsAnswer,
   FindingsChoices,
   FindingsContext,
   FindingsObservationRow,
   FindingsRankTest,
   MeansOverTimePoint,
+  ModelChoice,
+  ModelFindings,
+  ModelFindingsContext,
+  NotDrainedCurve,
   Observation,
   TrialDetail,
 } from '@friable/contracts';
 import { DESIGN_RULES } from '@friable/field';
+import { notDrainedCurves } from '@friable/stats';
 import { Injectable, UnprocessableEntityException } from '@nestjs/common';
 import { InjectConnection } from '@nestjs/sequelize';
 import { QueryTypes } from 'sequelize';
@@ -23,7 +29,9 @@ import { analysisDesign } from './analysis-design';
 import { canonicalHash } from './canonical-hash';
 import type { FindingsQueryDto } from './dto/findings-query.dto';
 import { engineVersion } from './engine-version';
-import { notDrainedCurves } from './not-drained-curve';
+import { baselineRound, chooseModel } from './model-choice';
+import { modelRequest, type ModelScene } from './model-requests';
+
 
 /** The observations of one measure, round and scope, shaped for the engine, with what the context needs. */
 interface PreparedData {
@@ -38,6 +46,31 @@ interface PreparedData {
   treatmentOrder: string[];
   siteNames: string[];
 }
+
+/** Everything one analysis is about, read once: the protocol, the choices, the analysed round's data, the model chosen. */
+interface AnalysisScene {
+  trial: TrialDetail;
+  measure: TrialDetail['measures'][number];
+  round: TrialDetail['rounds'][number];
+  site: TrialDetail['sites'][number] | null;
+  scopeLabel: string;
+  choices: FindingsChoices;
+  data: PreparedData;
+  /** Rounds holding values of the measure in the scope, up to the analysed one, in time order. */
+  roundsUpTo: TrialDetail['rounds'];
+  modelChoice: ModelChoice;
+}
+
+const measureRef = (measure: TrialDetail['measures'][number]): FindingsContext['measure'] => ({
+  id: measure.id,
+  code: measure.code,
+  name: measure.name,
+  unit: measure.unit,
+  kind: measure.kind,
+  higherIsBetter: measure.higherIsBetter,
+  cutoff: measure.cutoff,
+  decimals: measure.decimals,
+});
 
 function refuse(message: string): never {
   throw new UnprocessableEntityException({ statusCode: 422, error: 'Unprocessable Entity', message });
@@ -80,19 +113,41 @@ export class FindingsService {
     return this.trials.get({ trialId, roles: [], siteIds: [], adminReadOnly: false });
   }
 
-  async findings(trialId: number, query: FindingsQueryDto, protocol?: TrialDetail): Promise<Findings> {
+  /**
+   * The one computation behind GET /findings (a cache may wrap it): the analysis asked for, or the model made for
+   * the measure, of one measure and round at one site or all sites combined.
+   */
+  async findings(trialId: number, query: FindingsQueryDto, protocol?: TrialDetail): Promise<FindingsAnswer> {
     const trial = protocol ?? (await this.protocol(trialId));
     const measure = trial.measures.find((m) => m.id === query.measureId) ?? refuse(`measureId ${query.measureId} is not a measure of this trial.`);
-    const roundId =
-      query.roundId ??
-      (await this.latestRoundWithValues(trial, measure.id, query.siteId ?? null)) ??
-      refuse(`There are no values of ${measure.name} ${query.siteId ? 'at this site' : 'at any site'} yet.`);
+    const siteId = query.siteId ?? null;
+    const withValues = await this.roundsWithValues(trial, measure.id, siteId);
+    const roundId = query.roundId ?? withValues.at(-1)?.id ?? refuse(`There are no values of ${measure.name} ${siteId ? 'at this site' : 'at any site'} yet.`);
     const choices = resolveChoices(query, roundId);
     const round = trial.rounds.find((r) => r.id === choices.roundId) ?? refuse(`roundId ${choices.roundId} is not an assessment round of this trial.`);
     const site = choices.siteId === null ? null : (trial.sites.find((s) => s.id === choices.siteId) ?? refuse(`siteId ${choices.siteId} is not a site of this trial.`));
     const data = await this.prepare(trial, choices, choices.roundId);
     const scopeLabel = site ? site.name : 'all sites combined';
     if (data.engineObservations.length === 0) refuse(`There are no values of ${measure.name} in ${round.label} at ${scopeLabel} yet.`);
+    const roundsUpTo = withValues.filter((r) => r.dayOffset < round.dayOffset || r.id === round.id);
+    const modelChoice = chooseModel(
+      { measureName: measure.name, kind: measure.kind, unit: measure.unit, cutoff: measure.cutoff, rounds: roundsUpTo, censoredCount: data.rows.filter((r) => r.censored).length },
+      query.analysis,
+    );
+    const option = modelChoice.options.find((o) => o.analysis === modelChoice.analysis)!;
+    const covariateChosen = modelChoice.analysis === 'ancova' && (query.covariateMeasureId !== undefined || query.covariateRoundId !== undefined);
+    if (!option.available && !covariateChosen) refuse(`${option.label} is not available for ${measure.name} here: ${option.note ?? ''}`);
+    const scene: AnalysisScene = { trial, measure, round, site, scopeLabel, choices, data, roundsUpTo, modelChoice };
+    return modelChoice.analysis === 'anova' ? this.anovaFindingsOf(scene) : this.modelFindings(scene, query);
+  }
+
+  /** The classical ANOVA of the measure and round (saved analyses and the report), through the same computation. */
+  async anovaFindings(trialId: number, query: FindingsQueryDto, protocol?: TrialDetail): Promise<Findings> {
+    return (await this.findings(trialId, { ...query, analysis: 'anova' }, protocol)) as Findings;
+  }
+
+  private async anovaFindingsOf(scene: AnalysisScene): Promise<Findings> {
+    const { trial, measure, round, site, scopeLabel, choices, data } = scene;
     const request = this.engineRequest(data, choices);
     const analysis = plainCopy(this.stats.anova({ ...request, observations: data.engineObservations } as AnovaRequestDto)) as AnovaAnswer;
 
@@ -120,16 +175,7 @@ export class FindingsService {
       trialCode: trial.code,
       choices,
       engineRequest: request,
-      measure: {
-        id: measure.id,
-        code: measure.code,
-        name: measure.name,
-        unit: measure.unit,
-        kind: measure.kind,
-        higherIsBetter: measure.higherIsBetter,
-        cutoff: measure.cutoff,
-        decimals: measure.decimals,
-      },
+      measure: measureRef(measure),
       round: { id: round.id, label: round.label, dayOffset: round.dayOffset },
       scope: { siteId: site?.id ?? null, siteName: site?.name ?? null, label: scopeLabel, siteNames: data.siteNames },
       observations: data.rows,
@@ -139,22 +185,126 @@ export class FindingsService {
       percentOfControl,
       rankTest: this.rankTest(data),
       ...(measure.kind === 'time-with-cutoff'
-        ? { notDrained: notDrainedCurves(data.rows.map((r, i) => ({ treatment: data.engineObservations[i]!.treatment ?? r.treatment, time: Number(r.value), censored: r.censored })), data.treatmentOrder) }
+        ? { notDrained: plainCopy(notDrainedCurves(data.rows.map((r, i) => ({ treatment: data.engineObservations[i]!.treatment ?? r.treatment, time: Number(r.value), censored: r.censored })), data.treatmentOrder)) as NotDrainedCurve[] }
         : {}),
       meansOverTime: await this.meansOverTime(trial, choices, analysis),
       notices,
+      modelChoice: scene.modelChoice,
       dataHash: canonicalHash(data.engineObservations),
       engineVersion: engineVersion(),
     };
     return { ...analysis, context };
   }
 
-  /** The latest round (by day) that holds a value of the measure in the scope, when none was chosen. */
-  private async latestRoundWithValues(trial: TrialDetail, measureId: number, siteId: number | null): Promise<number | null> {
+  /** The rounds (in time order) that hold a value of the measure in the scope. */
+  private async roundsWithValues(trial: TrialDetail, measureId: number, siteId: number | null): Promise<TrialDetail['rounds']> {
     const stored = await this.observations.list(trial.id, { measureId, ...(siteId !== null ? { siteId } : {}) });
     const withValues = new Set(stored.filter((o) => o.valueText !== null).map((o) => o.roundId));
-    const latest = trial.rounds.filter((r) => withValues.has(r.id)).sort((a, b) => b.dayOffset - a.dayOffset || b.id - a.id)[0];
-    return latest?.id ?? null;
+    return trial.rounds.filter((r) => withValues.has(r.id)).sort((a, b) => a.dayOffset - b.dayOffset || a.id - b.id);
+  }
+
+  /**
+   * A model made for the measure (censored, repeated, ancova, ordinal, counts): the stateless endpoint's answer on
+   * the observations it was given, which the context lists with the request, so anyone can post them again.
+   */
+  private async modelFindings(scene: AnalysisScene, query: FindingsQueryDto): Promise<ModelFindings> {
+    const { trial, measure, round, site, scopeLabel, choices, data, modelChoice } = scene;
+    const analysis = modelChoice.analysis as ModelFindings['analysis'];
+    const prepared = analysis === 'repeated' ? await this.roundsData(scene) : [{ round, data }];
+    const covariate = analysis === 'ancova' ? await this.covariateData(scene, query) : null;
+    const modelScene: ModelScene = {
+      analysis,
+      design: data.design,
+      blocked: DESIGN_RULES[trial.design].blocked,
+      combined: data.siteNames.length > 1,
+      control: data.controlLabel === null ? null : (trial.treatments.find((t) => t.isControl)?.code ?? null),
+      choices: { ...choices, distribution: query.distribution, covariance: query.covariance, family: query.family },
+      rounds: prepared.map(({ round: r, data: d }) => ({ label: r.label, dayOffset: r.dayOffset, rows: d.rows })),
+      covariate: covariate && { label: covariate.label, values: covariate.values },
+    };
+    const { request, observations, rows, notices } = modelRequest(modelScene);
+    const body = { ...request, observations } as never;
+    const answer =
+      analysis === 'censored'
+        ? this.stats.censored(body)
+        : analysis === 'repeated'
+          ? this.stats.repeated(body)
+          : analysis === 'ordinal'
+            ? this.stats.ordinal(body)
+            : analysis === 'counts'
+              ? this.stats.counts(body)
+              : (plainCopy(this.stats.anova(body)) as AnovaAnswer);
+    const missing = prepared.reduce((sum, p) => sum + p.data.missing.length + p.data.notRecorded, 0);
+    const reasons = new Map<string, number>();
+    for (const p of prepared) {
+      for (const o of p.data.missing) reasons.set(o.missingReason ?? 'no reason given', (reasons.get(o.missingReason ?? 'no reason given') ?? 0) + 1);
+      if (p.data.notRecorded > 0) reasons.set('not recorded', (reasons.get('not recorded') ?? 0) + p.data.notRecorded);
+    }
+    if (missing > 0) notices.push(`${missing} ${missing === 1 ? 'value is' : 'values are'} missing and left out of the analysis.`);
+    const context: ModelFindingsContext = {
+      trialId: trial.id,
+      trialCode: trial.code,
+      choices: {
+        measureId: choices.measureId,
+        roundId: choices.roundId,
+        siteId: choices.siteId,
+        alpha: choices.alpha,
+        method: choices.method,
+        analysis,
+        ...(analysis === 'censored' ? { distribution: query.distribution ?? 'weibull' } : {}),
+        ...(analysis === 'repeated' ? { covariance: query.covariance ?? 'auto' } : {}),
+        ...(analysis === 'counts' ? { family: query.family ?? 'auto' } : {}),
+        ...(covariate ? { covariateMeasureId: covariate.measureId, covariateRoundId: covariate.roundId } : {}),
+      },
+      modelChoice,
+      engineRequest: request,
+      engineObservations: observations,
+      measure: measureRef(measure),
+      round: { id: round.id, label: round.label, dayOffset: round.dayOffset },
+      ...(analysis === 'repeated' ? { rounds: prepared.map((p) => ({ id: p.round.id, label: p.round.label, dayOffset: p.round.dayOffset })) } : {}),
+      scope: { siteId: site?.id ?? null, siteName: site?.name ?? null, label: scopeLabel, siteNames: data.siteNames },
+      observations: rows,
+      censored: { count: rows.filter((r) => r.censored).length, cutoff: measure.cutoff },
+      missing: { count: missing, reasons: [...reasons].map(([reason, count]) => ({ reason, count })) },
+      controlCode: modelScene.control,
+      notices,
+      dataHash: canonicalHash(observations),
+      engineVersion: engineVersion(),
+    };
+    return { ...(answer as object), analysis, context } as ModelFindings;
+  }
+
+  /** Each round of the measure with values in the scope, up to the analysed one (rounds over time). */
+  private async roundsData(scene: AnalysisScene): Promise<Array<{ round: TrialDetail['rounds'][number]; data: PreparedData }>> {
+    const out = [];
+    for (const round of scene.roundsUpTo) {
+      out.push({ round, data: round.id === scene.round.id ? scene.data : await this.prepare(scene.trial, scene.choices, round.id) });
+    }
+    return out;
+  }
+
+  /** The covariate of the analysis of covariance: each plot's value of the chosen measure at the chosen (default: baseline) round. */
+  private async covariateData(scene: AnalysisScene, query: FindingsQueryDto) {
+    const { trial, measure } = scene;
+    const covariateMeasure =
+      query.covariateMeasureId === undefined
+        ? measure
+        : (trial.measures.find((m) => m.id === query.covariateMeasureId) ?? refuse(`covariateMeasureId ${query.covariateMeasureId} is not a measure of this trial.`));
+    let covariateRound: TrialDetail['rounds'][number];
+    if (query.covariateRoundId !== undefined) {
+      covariateRound = trial.rounds.find((r) => r.id === query.covariateRoundId) ?? refuse(`covariateRoundId ${query.covariateRoundId} is not an assessment round of this trial.`);
+    } else {
+      const rounds =
+        covariateMeasure.id === measure.id
+          ? scene.roundsUpTo
+          : [...(await this.roundsWithValues(trial, covariateMeasure.id, scene.choices.siteId)).filter((r) => r.dayOffset < scene.round.dayOffset), scene.round];
+      covariateRound = baselineRound(rounds) ?? refuse(`There is no earlier round with values of ${covariateMeasure.name} to take as the baseline.`);
+    }
+    if (covariateRound.id === scene.round.id && covariateMeasure.id === measure.id) refuse('The covariate must be another round or another measure than the one analysed.');
+    const data = await this.prepare(trial, { ...scene.choices, measureId: covariateMeasure.id }, covariateRound.id);
+    if (data.rows.length === 0) refuse(`There are no values of ${covariateMeasure.name} in ${covariateRound.label} at ${scene.scopeLabel} to take as the covariate.`);
+    const values = new Map(data.rows.map((r) => [r.plotLabel, { value: r.value, censored: r.censored }]));
+    return { measureId: covariateMeasure.id, roundId: covariateRound.id, label: `${covariateMeasure.name} at ${covariateRound.label}`, values };
   }
 
   /** The hash of the data the choices would analyse now (null when there are none). */

@@ -6,16 +6,27 @@ import { databaseConfig } from '../config/database.config';
 /** How often the database is asked whether it is there, and how long an answer may take. */
 const INTERVAL_MS = 500;
 const ANSWER_MS = 1_000;
+/** Slow answers in a row that mark the database down (one slow answer can be a busy machine). */
+const SLOW_CHECKS_DOWN = 2;
+
+/** The driver's "could not connect in time" (errno 45012), or our own deadline: slow, not refused. */
+function isSlow(error: unknown): boolean {
+  return error instanceof WatchDeadline || (error as { errno?: number } | null)?.errno === 45012;
+}
+
+class WatchDeadline extends Error {}
 
 /**
- * Database watch — knows within about a second and a half whether the database answers, so that
+ * Database watch — knows within a second whether the database refuses connections, and within about two and a half
+ * seconds whether it has stopped answering, so that
  * requests are refused at once with 503 while it does not (see database-gate.ts) and served again
  * as soon as it does, without a restart.
  *
  * Purpose: a stopped server refuses connections at once, but a frozen one (paused, or cut off by
  * the network) accepts them and never answers, so requests would wait on it. The watch keeps its
  * own connection outside the pool and sends `SELECT 1` every half second; no answer within a
- * second marks the database down (the connection is dropped and made anew on the next tick).
+ * second twice in a row marks the database down (the connection is dropped and made anew on the next tick);
+ * a refused or broken connection marks it down at once.
  * Throws: nothing; a failed check is a state, logged once per change.
  */
 @Injectable()
@@ -25,6 +36,7 @@ export class DatabaseWatchService implements OnModuleInit, OnApplicationShutdown
   private timer: NodeJS.Timeout | null = null;
   private checking = false;
   private up = true;
+  private slowChecks = 0;
 
   constructor(@Inject(databaseConfig.KEY) private readonly config: ConfigType<typeof databaseConfig>) {}
 
@@ -53,13 +65,15 @@ export class DatabaseWatchService implements OnModuleInit, OnApplicationShutdown
       const answered = this.ping();
       answered.catch(() => undefined); // a late failure, after the race was lost, is no news
       const late = new Promise<never>((_, reject) => {
-        timeout = setTimeout(() => reject(new Error(`no answer within ${ANSWER_MS} ms`)), ANSWER_MS);
+        timeout = setTimeout(() => reject(new WatchDeadline(`no answer within ${ANSWER_MS} ms`)), ANSWER_MS);
       });
       await Promise.race([answered, late]);
+      this.slowChecks = 0;
       this.mark(true);
     } catch (error) {
       this.drop();
-      this.mark(false, error);
+      this.slowChecks = isSlow(error) ? this.slowChecks + 1 : SLOW_CHECKS_DOWN;
+      if (this.slowChecks >= SLOW_CHECKS_DOWN) this.mark(false, error);
     } finally {
       clearTimeout(timeout);
       this.checking = false;
@@ -76,6 +90,11 @@ export class DatabaseWatchService implements OnModuleInit, OnApplicationShutdown
         password: this.config.password,
         database: this.config.database,
         connectTimeout: ANSWER_MS,
+      });
+      // A connection that breaks while idle emits 'error': it is forgotten here (the next tick
+      // connects anew) instead of becoming an uncaught exception.
+      connection.on('error', () => {
+        if (this.connection === connection) this.connection = null;
       });
       if (this.connection) connection.destroy();
       else this.connection = connection;

@@ -459,9 +459,11 @@ export class IntakeService {
     return `This file is byte for byte the one committed for ${resolved.site.name}, ${resolved.round.label} on ${previous.createdAt.toISOString().slice(0, 10)}; nothing was changed.`;
   }
 
-  /** The receipt goes after the commit; a mail server that is down does not undo the upload. */
+  /** The receipt goes after the commit, unless the uploader turned receipts off; a mail server that is down does not undo the upload. */
   private async sendReceipt(resolved: Resolved, user: AuthUser, upload: IntakeUpload, outcome: Outcome): Promise<void> {
     const { result } = outcome;
+    const [wanted] = await this.sequelize.query<{ receipts: number }>('SELECT email_receipts AS receipts FROM users WHERE id = ?', { replacements: [user.id], type: QueryTypes.SELECT });
+    if (!wanted || !Number(wanted.receipts)) return;
     try {
       await this.mail.send(
         intakeReceiptEmail({

@@ -40,6 +40,17 @@ export class MailService implements OnModuleDestroy {
     }
   }
 
+  /** Sends a notice whose cause is already committed: a failure is logged, not thrown; answers whether it went. */
+  async sendOrLog(mail: OutgoingMail): Promise<boolean> {
+    try {
+      await this.send(mail);
+      return true;
+    } catch {
+      // send() has logged where it was going and why it failed.
+      return false;
+    }
+  }
+
   onModuleDestroy(): void {
     this.transport.close();
   }

@@ -4,11 +4,12 @@ import { SequelizeModule } from '@nestjs/sequelize';
 import { MailModule } from '../mail/mail.module';
 import { RoundReminder } from './models/round-reminder.model';
 import { RemindersService } from './reminders.service';
+import { SchedulerLease } from './scheduler-lease';
 
 /** The daily job that e-mails collaborators the day before a round is due at their site. */
 @Module({
   imports: [ScheduleModule.forRoot(), SequelizeModule.forFeature([RoundReminder]), MailModule],
-  providers: [RemindersService],
+  providers: [RemindersService, SchedulerLease],
   exports: [RemindersService],
 })
 export class RemindersModule {}

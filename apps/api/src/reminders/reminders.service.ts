@@ -11,6 +11,10 @@ import { MailService } from '../mail/mail.service';
 import { calendarDate } from './calendar-date';
 import { RoundReminder } from './models/round-reminder.model';
 import { reminderEmail } from './reminder-email';
+import { SchedulerLease } from './scheduler-lease';
+
+/** How long the elected instance holds the daily run: longer than a run takes, far shorter than a day. */
+const LEASE_SECONDS = 15 * 60;
 
 interface DueRow {
   roundId: number;
@@ -42,7 +46,7 @@ const DUE_SQL = `
     JOIN trials t ON t.id = r.trial_id AND t.status = 'active' AND t.start_date IS NOT NULL
     JOIN sites s ON s.trial_id = t.id AND s.deleted_at IS NULL
     JOIN trial_memberships m ON m.trial_id = t.id AND m.role = 'collaborator' AND m.site_id = s.id
-    JOIN users u ON u.id = m.user_id AND u.is_active = 1
+    JOIN users u ON u.id = m.user_id AND u.is_active = 1 AND u.email_reminders = 1
    WHERE DATE_ADD(t.start_date, INTERVAL r.day_offset DAY) = :dueDate AND r.deleted_at IS NULL
      AND NOT EXISTS (SELECT 1 FROM round_reminders rr
                       WHERE rr.round_id = r.id AND rr.site_id = s.id AND rr.user_id = u.id AND rr.due_date = :dueDate)
@@ -60,22 +64,30 @@ export class RemindersService implements OnApplicationBootstrap {
     @Inject(appConfig.KEY) private readonly app: ConfigType<typeof appConfig>,
     private readonly mail: MailService,
     private readonly scheduler: SchedulerRegistry,
+    private readonly lease: SchedulerLease,
   ) {}
 
   /**
-   * Schedules the daily run at REMINDER_HOUR (local time); test runs call sendDueReminders themselves,
-   * and instances with SCHEDULER_ENABLED=false leave it to the one that runs it.
+   * Schedules the daily run at REMINDER_HOUR (local time) on every instance; at each tick one instance is
+   * elected through a database lease (scheduler-lease.ts) and runs it. Test runs call sendDueReminders
+   * themselves; SCHEDULER_ENABLED=false keeps an instance out of the election altogether.
    */
   onApplicationBootstrap(): void {
     if (this.app.nodeEnv === 'test' || !this.mailSettings.schedulerEnabled) return;
     const job = CronJob.from({
       cronTime: `0 0 ${this.mailSettings.reminderHour} * * *`,
       onTick: () => {
-        this.sendDueReminders(new Date()).catch((error: unknown) => this.logger.error(`reminder run failed: ${String(error)}`));
+        this.runIfElected(new Date()).catch((error: unknown) => this.logger.error(`reminder run failed: ${String(error)}`));
       },
       start: true,
     });
     this.scheduler.addCronJob('round-reminders', job);
+  }
+
+  /** The scheduled run: sends the reminders when this instance wins the lease, else leaves them (null). */
+  async runIfElected(now: Date): Promise<ReminderRun | null> {
+    if (!(await this.lease.acquire('round-reminders', LEASE_SECONDS))) return null;
+    return this.sendDueReminders(now);
   }
 
   /**

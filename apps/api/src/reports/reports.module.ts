@@ -1,4 +1,5 @@
 import { Module } from '@nestjs/common';
+import { AnalysesModule } from '../analyses/analyses.module';
 import { FindingsModule } from '../findings/findings.module';
 import { ObservationsModule } from '../observations/observations.module';
 import { ReportsController } from './reports.controller';
@@ -6,7 +7,7 @@ import { ReportsService } from './reports.service';
 
 /** The printable trial report's data. */
 @Module({
-  imports: [FindingsModule, ObservationsModule],
+  imports: [FindingsModule, ObservationsModule, AnalysesModule],
   controllers: [ReportsController],
   providers: [ReportsService],
 })

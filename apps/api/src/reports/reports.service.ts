@@ -1,5 +1,7 @@
-import type { Findings, ReportMeasure, TrialReport } from '@friable/contracts';
+import type { Findings, ReportMeasure, ReportReview, TrialReport } from '@friable/contracts';
 import { Injectable, UnprocessableEntityException } from '@nestjs/common';
+import { AnalysesService } from '../analyses/analyses.service';
+import { CommentsService } from '../analyses/comments.service';
 import { engineVersion } from '../findings/engine-version';
 import { FindingsService } from '../findings/findings.service';
 import { ObservationQueryService } from '../observations/observation-query.service';
@@ -18,6 +20,8 @@ export class ReportsService {
   constructor(
     private readonly findings: FindingsService,
     private readonly observations: ObservationQueryService,
+    private readonly analyses: AnalysesService,
+    private readonly comments: CommentsService,
   ) {}
 
   async report(trialId: number): Promise<TrialReport> {
@@ -35,7 +39,7 @@ export class ReportsService {
       }
       let result: Findings;
       try {
-        result = await this.findings.findings(trialId, { measureId: measure.id, roundId: round.id, method: METHOD, alpha: ALPHA }, protocol);
+        result = await this.findings.anovaFindings(trialId, { measureId: measure.id, roundId: round.id, method: METHOD, alpha: ALPHA }, protocol);
       } catch (error) {
         if (!(error instanceof UnprocessableEntityException)) throw error;
         measures.push({ ...base, ...empty, unavailable: (error.getResponse() as { message: string }).message });
@@ -62,6 +66,22 @@ export class ReportsService {
       measures,
       cautions: measures.flatMap((m) => (m.unavailable ? [`${m.measure.name}: ${m.unavailable}`] : m.warnings.map((w) => `${m.measure.name}, ${m.round!.label}: ${w}`))),
       explanation: reportExplanation(ALPHA, 'Tukey'),
+      reviews: await this.reviews(trialId),
     };
+  }
+
+  /** Saved analyses with sign-offs or open comments: each sign-off with its statement and state, each open thread. */
+  private async reviews(trialId: number): Promise<ReportReview[]> {
+    const saved = (await this.analyses.list(trialId)).reverse();
+    const comments = await this.comments.forSnapshots(saved.map((s) => s.id));
+    return saved.flatMap((analysis): ReportReview[] => {
+      const mine = comments.filter((c) => c.analysisId === analysis.id);
+      const openComments = mine
+        .filter((c) => c.parentId === null && !c.deletedAt && !c.resolvedAt)
+        .map((c) => ({ id: c.id, authorName: c.authorName, body: c.body, createdAt: c.createdAt, replyCount: mine.filter((r) => r.parentId === c.id && !r.deletedAt).length }));
+      if (analysis.signOffs.length === 0 && openComments.length === 0) return [];
+      const { id, title, measureName, roundLabel, scopeLabel, review, signOffs } = analysis;
+      return [{ analysisId: id, title, measureName, roundLabel, scopeLabel, review, signOffs, openComments }];
+    });
   }
 }

@@ -1,24 +1,43 @@
-import { Inject, Injectable } from '@nestjs/common';
+import { Inject, Injectable, type OnApplicationShutdown } from '@nestjs/common';
 import type { ConfigType } from '@nestjs/config';
 import { mkdir, readFile, rename, rm, writeFile } from 'node:fs/promises';
 import { dirname, resolve, sep } from 'node:path';
+import { ObjectStore } from './object-store';
 import { storageConfig } from './storage.config';
 
 /** Keys are relative paths of letters, digits, dots, hyphens and underscores, e.g. `photos/12/345-7.jpg`. */
 const keyPattern = /^(?:[A-Za-z0-9_-][A-Za-z0-9._-]*\/)*[A-Za-z0-9_-][A-Za-z0-9._-]*$/;
 
+const contentTypes: Record<string, string> = { jpg: 'image/jpeg', jpeg: 'image/jpeg', png: 'image/png' };
+
 /**
- * Storage service — keeps uploaded files (plot photos) by key, on the local disk under STORAGE_DIR.
+ * Storage service — keeps uploaded files (plot photos) by key: in S3-compatible object storage
+ * (STORAGE_BACKEND=s3, the default: every API instance sees the same files; s3rver stands in locally), or on
+ * the local disk under STORAGE_DIR (STORAGE_BACKEND=disk, one machine only).
  *
- * Purpose: the one place bytes are written, so another backend (an object store) can replace it
- * without touching the features. Writes go to a temporary file first and are renamed into place,
- * so a reader never sees half a file.
+ * Purpose: the one place bytes are written, so the features never know the backend. On disk, writes go to
+ * a temporary file first and are renamed into place; an object PUT is atomic by itself. Either way a reader
+ * never sees half a file.
  * Throws: RangeError for a key that is not a plain relative path; the file system's errors otherwise.
  * Example: `await storage.put('photos/1/2-3.jpg', bytes)`; `await storage.get('photos/1/2-3.jpg')` → the bytes, or null.
  */
 @Injectable()
-export class StorageService {
-  constructor(@Inject(storageConfig.KEY) private readonly config: ConfigType<typeof storageConfig>) {}
+export class StorageService implements OnApplicationShutdown {
+  private readonly objects: ObjectStore | null;
+
+  constructor(@Inject(storageConfig.KEY) private readonly config: ConfigType<typeof storageConfig>) {
+    this.objects = config.backend === 's3' ? new ObjectStore(config.s3) : null;
+  }
+
+  onApplicationShutdown(): void {
+    this.objects?.close();
+  }
+
+  /** The key itself once it is a plain relative path (the same rule for both backends). */
+  private checked(key: string): string {
+    this.pathOf(key);
+    return key;
+  }
 
   private pathOf(key: string): string {
     if (!keyPattern.test(key) || key.split('/').some((part) => part === '..' || part === '.')) {
@@ -31,6 +50,7 @@ export class StorageService {
 
   async put(key: string, bytes: Buffer): Promise<void> {
     const path = this.pathOf(key);
+    if (this.objects) return this.objects.put(key, bytes, contentTypes[key.split('.').pop()!.toLowerCase()] ?? 'application/octet-stream');
     await mkdir(dirname(path), { recursive: true });
     const temporary = `${path}.${process.pid}.${Date.now()}.part`;
     await writeFile(temporary, bytes);
@@ -39,6 +59,7 @@ export class StorageService {
 
   /** The stored bytes, or null when nothing is stored under the key. */
   async get(key: string): Promise<Buffer | null> {
+    if (this.objects) return this.objects.get(this.checked(key));
     try {
       return await readFile(this.pathOf(key));
     } catch (error) {
@@ -48,6 +69,7 @@ export class StorageService {
   }
 
   async delete(key: string): Promise<void> {
+    if (this.objects) return this.objects.delete(this.checked(key));
     await rm(this.pathOf(key), { force: true });
   }
 }

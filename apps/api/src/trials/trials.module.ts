@@ -7,13 +7,14 @@ import { RoundsModule } from '../rounds/rounds.module';
 import { SitesModule } from '../sites/sites.module';
 import { TreatmentsModule } from '../treatments/treatments.module';
 import { Trial } from './models/trial.model';
+import { TrialDeparture } from './models/trial-departure.model';
 import { TrialMembership } from './models/trial-membership.model';
 import { TrialMembershipsService } from './trial-memberships.service';
 import { TrialsController } from './trials.controller';
 import { TrialsService } from './trials.service';
 
 @Module({
-  imports: [SequelizeModule.forFeature([Trial, TrialMembership, TrialFactor]), TreatmentsModule, MeasuresModule, RoundsModule, SitesModule, FactorsModule],
+  imports: [SequelizeModule.forFeature([Trial, TrialMembership, TrialFactor, TrialDeparture]), TreatmentsModule, MeasuresModule, RoundsModule, SitesModule, FactorsModule],
   controllers: [TrialsController],
   providers: [TrialsService, TrialMembershipsService],
   exports: [TrialMembershipsService, TrialsService],

@@ -3,7 +3,7 @@ import { isFactorDesign } from '@friable/field';
 import { ConflictException, Injectable, NotFoundException } from '@nestjs/common';
 import { InjectConnection, InjectModel } from '@nestjs/sequelize';
 import { randomBytes } from 'node:crypto';
-import type { Transaction } from 'sequelize';
+import { QueryTypes, type Transaction } from 'sequelize';
 import type { Sequelize } from 'sequelize-typescript';
 import { ActivityService } from '../activity/activity.service';
 import { definedOnly } from '../common/defined-only';
@@ -140,7 +140,7 @@ export class TrialsService {
       const trial = await this.trials.findByPk(access.trialId, { transaction, lock: transaction.LOCK.UPDATE });
       if (!trial) throw new NotFoundException('No such trial.');
       await refuseStaleEdit(`trial ${trial.code}`, trial.version, sent.version, () => this.get(access, transaction));
-      const { status, ...fields } = input;
+      const { status, reason, ...fields } = input;
       const fieldNames = (Object.keys(fields) as Array<keyof typeof fields>).filter((key) => fields[key] !== undefined);
       if (fieldNames.length) {
         await this.gate.openForWrite(trial.id, transaction);
@@ -168,14 +168,20 @@ export class TrialsService {
           details: { version: { from: version, to: trial.version }, ...changeDetails(before, trial.get({ plain: true }) as Record<string, unknown>, fieldNames) },
         });
       }
-      if (status !== undefined && status !== trial.status) await this.changeStatus(trial, status, access, user, transaction);
+      if (status !== undefined && status !== trial.status) await this.changeStatus(trial, status, access, user, transaction, reason?.trim() || null);
       return this.get(access, transaction);
     });
   }
 
-  private async changeStatus(trial: Trial, status: Trial['status'], access: TrialAccessContext, user: AuthUser, transaction: Transaction): Promise<void> {
+  private async changeStatus(trial: Trial, status: Trial['status'], access: TrialAccessContext, user: AuthUser, transaction: Transaction, reason: string | null): Promise<void> {
     const refusal = statusTransitionRefusal(trial.status, status, await this.observations.trialHasObservations(trial.id));
     if (refusal) throw trial.status === 'locked' ? new TrialLockedException('locked') : new ConflictException(refusal);
+    const signOffs = trial.status === 'locked' ? await this.signOffCount(trial.id, transaction) : 0;
+    if (signOffs > 0 && !reason) {
+      throw new FieldProblemsException([
+        { field: 'reason', message: `reason is required to unlock this trial: its analyses carry ${signOffs} sign-off${signOffs === 1 ? '' : 's'}, which will show "data changed after sign-off" if the data change` },
+      ]);
+    }
     if (status === 'active' && trial.status === 'draft') {
       const { activation } = await this.get(access, transaction);
       if (!activation.ready) {
@@ -192,8 +198,18 @@ export class TrialsService {
       trialId: trial.id,
       userId: user.id,
       kind: 'trial.status-changed',
-      summary: `Changed the trial from ${from} to ${status}.`,
-      details: { from, to: status },
+      summary: `Changed the trial from ${from} to ${status}${reason ? `: ${reason}` : '.'}`,
+      details: { from, to: status, ...(reason ? { reason } : {}), ...(signOffs ? { signOffs } : {}) },
     });
+  }
+
+  /** Sign-offs of the trial's saved analyses (the review feature owns the table). */
+  private async signOffCount(trialId: number, transaction: Transaction): Promise<number> {
+    const [row] = await this.sequelize.query<{ n: number | string }>('SELECT COUNT(*) AS n FROM analysis_sign_offs WHERE trial_id = ?', {
+      replacements: [trialId],
+      type: QueryTypes.SELECT,
+      transaction,
+    });
+    return Number(row?.n ?? 0);
   }
 }

@@ -1,13 +1,13 @@
-import { useState } from 'react';
-import { RouterProvider } from 'react-router-dom';
+import { BrowserRouter } from 'react-router-dom';
 import { AppProviders } from './providers';
-import { createRouter } from './router';
+import { AppRoutes } from './router';
 
 export function App() {
-  const [router] = useState(createRouter);
   return (
     <AppProviders>
-      <RouterProvider router={router} />
+      <BrowserRouter>
+        <AppRoutes />
+      </BrowserRouter>
     </AppProviders>
   );
 }

@@ -1,29 +1,82 @@
-import { createBrowserRouter, Navigate, type RouteObject } from 'react-router-dom';
+import { Navigate, useRoutes, type RouteObject } from 'react-router-dom';
 import { paths } from '../config/paths';
 import { RequireAuth } from '../features/auth/components/require-auth';
-import { OutboxPage } from '../features/outbox/components/outbox-page';
-import { RateCalculatorPage } from '../features/rates/components/rate-calculator-page';
+import { RouteBoundary } from './errors/route-boundary';
 import { AppLayout } from './layouts/app-layout';
 import { TrialLayout } from './layouts/trial-layout';
-import { ActivityRoute } from './routes/activity';
-import { FindingsRoute, QuickAnalysisRoute, ReportRoute } from './routes/findings-routes';
-import { NotFoundRoute } from './routes/not-found';
-import { PlannerRoute } from './routes/planner';
+import { lazyPage } from './lazy-page';
+const AccountRoute = lazyPage(() => import('./routes/account'), 'AccountRoute');
+const ForgotPasswordRoute = lazyPage(() => import('./routes/account'), 'ForgotPasswordRoute');
+const ResetPasswordRoute = lazyPage(() => import('./routes/account'), 'ResetPasswordRoute');
 import { SignInRoute } from './routes/sign-in';
-import { AcceptInvitationRoute, IntakeRoute, LedgerRoute, PlotPlanRoute, ProtocolRoute, SitesRoute, TeamRoute } from './routes/trial-sections';
-import { TrialsRoute } from './routes/trials';
-import { PeopleRoute } from './routes/people';
+
+// Every page but sign-in loads with its route (its own chunk): the first screen carries only the
+// app's frame, sign-in and the trials list. The layouts put each page in a RouteBoundary.
+//
+// The routes are matched by useRoutes inside a <BrowserRouter> (app.tsx), not by a data router
+// (createBrowserRouter): the data router's code is 15 kB of the first screen's 160 kB budget and
+// Friable uses none of it (loaders, actions, fetchers, useBlocker). Load data with react-query.
+const TrialsRoute = lazyPage(() => import('./routes/trials'), 'TrialsRoute');
+const ProtocolRoute = lazyPage(() => import('./routes/trial-sections'), 'ProtocolRoute');
+const SitesRoute = lazyPage(() => import('./routes/trial-sections'), 'SitesRoute');
+const PlotPlanRoute = lazyPage(() => import('./routes/trial-sections'), 'PlotPlanRoute');
+const TeamRoute = lazyPage(() => import('./routes/trial-sections'), 'TeamRoute');
+const IntakeRoute = lazyPage(() => import('./routes/trial-sections'), 'IntakeRoute');
+const LedgerRoute = lazyPage(() => import('./routes/trial-sections'), 'LedgerRoute');
+const WalkRoute = lazyPage(() => import('./routes/trial-sections'), 'WalkRoute');
+const AcceptInvitationRoute = lazyPage(() => import('./routes/trial-sections'), 'AcceptInvitationRoute');
+const FindingsRoute = lazyPage(() => import('./routes/findings-routes'), 'FindingsRoute');
+const QuickAnalysisRoute = lazyPage(() => import('./routes/findings-routes'), 'QuickAnalysisRoute');
+const ReportRoute = lazyPage(() => import('./routes/findings-routes'), 'ReportRoute');
+const ActivityRoute = lazyPage(() => import('./routes/activity'), 'ActivityRoute');
+const PlannerRoute = lazyPage(() => import('./routes/planner'), 'PlannerRoute');
+const PeopleRoute = lazyPage(() => import('./routes/people'), 'PeopleRoute');
+const RateCalculatorPage = lazyPage(() => import('../features/rates/components/rate-calculator-page'), 'RateCalculatorPage');
+const OutboxPage = lazyPage(() => import('../features/outbox/components/outbox-page'), 'OutboxPage');
+const NotFoundRoute = lazyPage(() => import('./routes/not-found'), 'NotFoundRoute');
 
 export const routes: RouteObject[] = [
-  { path: paths.signIn.path, element: <SignInRoute /> },
+  {
+    path: paths.signIn.path,
+    element: (
+      <RouteBoundary>
+        <SignInRoute />
+      </RouteBoundary>
+    ),
+  },
   // Opened from an e-mail by someone who may not have an account yet.
-  { path: paths.acceptInvitation.path, element: <AcceptInvitationRoute /> },
+  {
+    path: paths.acceptInvitation.path,
+    element: (
+      <RouteBoundary what="the invitation">
+        <AcceptInvitationRoute />
+      </RouteBoundary>
+    ),
+  },
+  {
+    path: paths.forgotPassword.path,
+    element: (
+      <RouteBoundary what="the password reset">
+        <ForgotPasswordRoute />
+      </RouteBoundary>
+    ),
+  },
+  {
+    path: paths.resetPassword.path,
+    element: (
+      <RouteBoundary what="the password reset">
+        <ResetPasswordRoute />
+      </RouteBoundary>
+    ),
+  },
   {
     path: paths.home.path,
     element: (
-      <RequireAuth>
-        <AppLayout />
-      </RequireAuth>
+      <RouteBoundary>
+        <RequireAuth>
+          <AppLayout />
+        </RequireAuth>
+      </RouteBoundary>
     ),
     children: [
       { index: true, element: <Navigate to={paths.trials.href()} replace /> },
@@ -39,9 +92,9 @@ export const routes: RouteObject[] = [
           { path: paths.trialTeam.path, element: <TeamRoute /> },
           { path: paths.trialIntake.path, element: <IntakeRoute /> },
           { path: paths.trialLedger.path, element: <LedgerRoute /> },
+          { path: paths.trialWalk.path, element: <WalkRoute /> },
           { path: paths.trialFindings.path, element: <FindingsRoute /> },
           { path: paths.trialReport.path, element: <ReportRoute /> },
-          { path: paths.trialActivity.path, element: <ActivityRoute /> },
           { path: paths.trialActivity.path, element: <ActivityRoute /> },
         ],
       },
@@ -50,11 +103,13 @@ export const routes: RouteObject[] = [
       { path: paths.planner.path, element: <PlannerRoute /> },
       { path: paths.outbox.path, element: <OutboxPage /> },
       { path: paths.people.path, element: <PeopleRoute /> },
+      { path: paths.account.path, element: <AccountRoute /> },
       { path: '*', element: <NotFoundRoute /> },
     ],
   },
 ];
 
-export function createRouter() {
-  return createBrowserRouter(routes);
+/** The page at the current address. */
+export function AppRoutes() {
+  return useRoutes(routes);
 }

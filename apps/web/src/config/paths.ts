@@ -26,6 +26,14 @@ export const paths = {
   trialTeam: { path: '/trials/:trialId/team', href: (trialId: number) => `/trials/${trialId}/team` },
   trialIntake: { path: '/trials/:trialId/intake', href: (trialId: number, siteId?: number, roundId?: number) => siteRoundHref(trialId, 'intake', siteId, roundId) },
   trialLedger: { path: '/trials/:trialId/ledger', href: (trialId: number, siteId?: number, roundId?: number) => siteRoundHref(trialId, 'ledger', siteId, roundId) },
+  /** The Round walk: one site and round, plot by plot; `plot` opens that plot (the Sheets' QR codes point here). */
+  trialWalk: {
+    path: '/trials/:trialId/walk',
+    href: (trialId: number, siteId?: number, roundId?: number, plotId?: number) => {
+      const href = siteRoundHref(trialId, 'walk', siteId, roundId);
+      return plotId ? `${href}${href.includes('?') ? '&' : '?'}plot=${plotId}` : href;
+    },
+  },
   trialFindings: { path: '/trials/:trialId/findings', href: (trialId: number) => `/trials/${trialId}/findings` },
   trialReport: { path: '/trials/:trialId/report', href: (trialId: number) => `/trials/${trialId}/report` },
   trialActivity: { path: '/trials/:trialId/activity', href: (trialId: number) => `/trials/${trialId}/activity` },
@@ -35,4 +43,8 @@ export const paths = {
   acceptInvitation: { path: '/invitations/:token', href: (token: string) => `/invitations/${token}` },
   outbox: { path: '/outbox', href: () => '/outbox' },
   people: { path: '/people', href: () => '/people' },
+  account: { path: '/account', href: () => '/account' },
+  forgotPassword: { path: '/forgot-password', href: () => '/forgot-password' },
+  /** The e-mailed link is APP_URL/reset-password/<token> (the API writes it). */
+  resetPassword: { path: '/reset-password/:token', href: (token: string) => `/reset-password/${token}` },
 } as const;

@@ -457,16 +457,16 @@ export interface paths {
             path?: never;
             cookie?: never;
         };
-        get: operations["AnalysesController_comments"];
+        get: operations["AnalysesController_listComments"];
         put?: never;
-        post: operations["AnalysesController_comment"];
+        post: operations["AnalysesController_addComment"];
         delete?: never;
         options?: never;
         head?: never;
         patch?: never;
         trace?: never;
     };
-    "/api/trials/{trialId}/analyses/{analysisId}/sign-off": {
+    "/api/trials/{trialId}/analyses/{analysisId}/comments/{commentId}": {
         parameters: {
             query?: never;
             header?: never;
@@ -475,6 +475,42 @@ export interface paths {
         };
         get?: never;
         put?: never;
+        post?: never;
+        /** Delete one’s own comment: it shows as deleted, its text kept in history; replies stay */
+        delete: operations["AnalysesController_deleteComment"];
+        options?: never;
+        head?: never;
+        /** Edit one’s own comment (the old text kept as "edited"), or mark a thread resolved / open again */
+        patch: operations["AnalysesController_updateComment"];
+        trace?: never;
+    };
+    "/api/trials/{trialId}/analyses/{analysisId}/review-requests": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** Ask the trial’s reviewers to review a saved analysis: each gets an e-mail with a link to it */
+        post: operations["AnalysesController_requestReview"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/trials/{trialId}/analyses/{analysisId}/sign-offs": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** Sign off a saved analysis of a locked trial with a short statement (a reviewer; an investigator when the trial has no reviewer) */
         post: operations["AnalysesController_signOff"];
         delete?: never;
         options?: never;
@@ -557,8 +593,8 @@ export interface paths {
             cookie?: never;
         };
         /**
-         * The analysis of one measure and round, at one site or all sites combined
-         * @description The same body as POST /api/stats/anova on the stored decimal text (design from the trial; several sites combined: multisite-rcbd), plus `context`: the observations in the order given to the engine (residual index), censoring, missing values, % of control, the rank test (Friedman for blocked designs, blocks = site × block when sites are combined; Kruskal–Wallis otherwise), the not-drained curve for a time with a cut-off, the means over time and the data hash.
+         * The analysis of one measure and round, at one site or all sites combined: the model made for the measure, or the one asked for
+         * @description `analysis` left out: the model made for the measure — censored (a time with a cut-off: POST /api/stats/censored), ordinal (a score: /api/stats/ordinal), counts (a count: /api/stats/counts), and for a measured number ancova (a day-0 baseline and one later round: /api/stats/anova with the baseline as covariate), repeated (two or more rounds: /api/stats/repeated) or else anova. A model answers with the stateless endpoint’s body, `analysis`, and `context` (the request and observations sent, which model and why, the options on offer). `analysis=anova`: the same body as POST /api/stats/anova on the stored decimal text (design from the trial; several sites combined: multisite-rcbd), plus `context`: the observations in the order given to the engine (residual index), censoring, missing values, % of control, the rank test (Friedman for blocked designs, blocks = site × block when sites are combined; Kruskal–Wallis otherwise), the not-drained curve for a time with a cut-off, the means over time and the data hash. Answers are kept until the next write to the trial (through any API instance).
          */
         get: operations["FindingsController_get"];
         put?: never;
@@ -727,6 +763,24 @@ export interface paths {
         options?: never;
         head?: never;
         patch?: never;
+        trace?: never;
+    };
+    "/api/trials/{trialId}/members/{userId}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post?: never;
+        /** Remove a member: their old session gets 403 at once; what they recorded stays under their name; e-mailed to them */
+        delete: operations["MembersController_remove"];
+        options?: never;
+        head?: never;
+        /** Change a member's role and (for a collaborator) sites; takes effect on their next request; e-mailed to them */
+        patch: operations["MembersController_update"];
         trace?: never;
     };
     "/api/trials/{trialId}/observations": {
@@ -1094,6 +1148,16 @@ export interface components {
         };
         /** @enum {string} */
         AnalysisDesign: "crd" | "rcbd" | "factorial-crd" | "factorial-rcbd" | "split-plot" | "split-split-plot" | "multisite-rcbd" | "multisite-factorial-rcbd" | "multisite-split-plot";
+        AnalysisOptionDto: {
+            analysis: components["schemas"]["FindingsAnalysis"];
+            available: boolean;
+            /** @description The analysis made for this measure. */
+            isDefault: boolean;
+            /** @example Not-drained curves and time ratios */
+            label: string;
+            /** @description Why it is not available, or the caution it carries. */
+            note: string | null;
+        };
         AnalysisSnapshotDto: {
             choices: components["schemas"]["FindingsChoicesDto"];
             commentCount: number;
@@ -1109,12 +1173,15 @@ export interface components {
             id: number;
             measureName: string;
             result: components["schemas"]["FindingsDto"];
+            review: components["schemas"]["ReviewStatusDto"];
             roundLabel: string;
             scopeLabel: string;
             /** Format: date-time */
             signedOffAt: string | null;
             signedOffBy: string | null;
             signedOffById: number | null;
+            /** @description Every sign-off, oldest first. */
+            signOffs: components["schemas"]["SignOffDto"][];
             title: string;
             trialId: number;
         };
@@ -1129,20 +1196,30 @@ export interface components {
             engineVersion: string;
             id: number;
             measureName: string;
+            review: components["schemas"]["ReviewStatusDto"];
             roundLabel: string;
             scopeLabel: string;
             /** Format: date-time */
             signedOffAt: string | null;
             signedOffBy: string | null;
             signedOffById: number | null;
+            /** @description Every sign-off, oldest first. */
+            signOffs: components["schemas"]["SignOffDto"][];
             title: string;
             trialId: number;
         };
         /** @enum {string} */
         AnalysisTransform: "none" | "log" | "sqrt" | "arcsine-sqrt";
-        AnovaAnswerDto: {
+        AncovaFindingsDto: {
+            /** @enum {string} */
+            analysis: "ancova";
             anova: components["schemas"]["AnovaTableRowDto"][];
+            /** @description With a covariate: the covariate itself between treatments (a baseline should not differ). */
+            baseline?: components["schemas"]["FTestDto"];
             comparisons: components["schemas"]["ComparisonsByMethodDto"];
+            context: components["schemas"]["ModelFindingsContextDto"];
+            /** @description With a covariate (analysis of covariance): the common slope, with the covariate’s mean. */
+            covariate?: components["schemas"]["CovariateSlopeDto"];
             diagnostics: components["schemas"]["DiagnosticsDto"];
             /** @description Factorial only: LS means of each factor's levels, by factor name. */
             factorMeans?: {
@@ -1151,6 +1228,29 @@ export interface components {
             /** @description Per method, treatment → compact letters. */
             letters: components["schemas"]["LettersByMethodDto"];
             means: components["schemas"]["LsMeanDto"][];
+            /** @description With a covariate: the test of equal slopes across treatments. */
+            slopes?: components["schemas"]["FTestDto"];
+            summary: components["schemas"]["AnovaSummaryDto"];
+            /** @description Plain sentences from the engine. */
+            warnings: string[];
+        };
+        AnovaAnswerDto: {
+            anova: components["schemas"]["AnovaTableRowDto"][];
+            /** @description With a covariate: the covariate itself between treatments (a baseline should not differ). */
+            baseline?: components["schemas"]["FTestDto"];
+            comparisons: components["schemas"]["ComparisonsByMethodDto"];
+            /** @description With a covariate (analysis of covariance): the common slope, with the covariate’s mean. */
+            covariate?: components["schemas"]["CovariateSlopeDto"];
+            diagnostics: components["schemas"]["DiagnosticsDto"];
+            /** @description Factorial only: LS means of each factor's levels, by factor name. */
+            factorMeans?: {
+                [key: string]: components["schemas"]["LsMeanDto"][];
+            };
+            /** @description Per method, treatment → compact letters. */
+            letters: components["schemas"]["LettersByMethodDto"];
+            means: components["schemas"]["LsMeanDto"][];
+            /** @description With a covariate: the test of equal slopes across treatments. */
+            slopes?: components["schemas"]["FTestDto"];
             summary: components["schemas"]["AnovaSummaryDto"];
             /** @description Plain sentences from the engine. */
             warnings: string[];
@@ -1279,6 +1379,32 @@ export interface components {
             treatments: components["schemas"]["TreatmentCountDto"][];
             warnings: string[];
         };
+        CensoredFindingsDto: {
+            /** @description How the comparisons with the control are adjusted, in words. */
+            adjustment: string;
+            /** @enum {string} */
+            analysis: "censored";
+            /** @description With several sites: each site’s curves and medians. */
+            bySite?: components["schemas"]["SiteCurvesDto"][];
+            /** @description Log-time coefficients (treatment contrasts against the control). */
+            coefficients: components["schemas"]["ModelCoefficientDto"][];
+            context: components["schemas"]["ModelFindingsContextDto"];
+            /** @example CTRL */
+            control: string;
+            curves: components["schemas"]["CurveDto"][];
+            /** @enum {string} */
+            distribution: "weibull" | "lognormal" | "loglogistic";
+            /** @description Null when the time-ratio model could not be fitted (warnings say why). */
+            logLik: number | null;
+            logRank: components["schemas"]["LogRankDto"];
+            medians: components["schemas"]["MedianTimeDto"][];
+            scale: number | null;
+            tests: components["schemas"]["LikelihoodRatioTestDto"][];
+            /** @description Typical drain time relative to the control’s (below 1: faster). */
+            timeRatios: components["schemas"]["ControlRatioDto"][];
+            treatments: components["schemas"]["TreatmentCountDto"][];
+            warnings: string[];
+        };
         CensoredObservationDto: {
             /**
              * @description Block label, nested within its site (rcbd, multisite-rcbd).
@@ -1322,6 +1448,27 @@ export interface components {
             count: number;
             cutoff: number | null;
         };
+        CommentInputDto: {
+            /** @example The gypsum plots at Quarry Hill drained oddly fast; worth a look at the plot notes. */
+            body: string;
+            /** @description The comment this one answers. */
+            parentId?: number | null;
+        };
+        CommentRevisionDto: {
+            /** Format: date-time */
+            at: string;
+            /** @description The text as it was before this change. */
+            body: string;
+            byName: string | null;
+            /** @enum {string} */
+            kind: "edited" | "deleted";
+        };
+        CommentUpdateDto: {
+            /** @description New text (the author only); the old text is kept as "edited". */
+            body?: string;
+            /** @description Mark the thread resolved, or open it again. */
+            resolved?: boolean;
+        };
         ComparisonsByMethodDto: {
             bonferroni?: components["schemas"]["MethodComparisonSetDto"];
             dunnett?: components["schemas"]["MethodComparisonSetDto"];
@@ -1361,6 +1508,32 @@ export interface components {
             adjustment: string;
             /** @description Log-rate coefficients (treatment contrasts against the control). */
             coefficients: components["schemas"]["ModelCoefficientDto"][];
+            /** @example CTRL */
+            control: string;
+            deviance: number;
+            /**
+             * @description Pearson χ² / residual df of the Poisson fit.
+             * @example 1.5
+             */
+            dispersion: number;
+            /** @enum {string} */
+            family: "poisson" | "quasipoisson";
+            logLik: number;
+            overdispersion: components["schemas"]["OverdispersionDto"];
+            /** @description Count rate relative to the control’s. */
+            rateRatios: components["schemas"]["ControlRatioDto"][];
+            rates: components["schemas"]["CountRateDto"][];
+            residualDf: number;
+            tests: components["schemas"]["CountTermTestDto"][];
+            warnings: string[];
+        };
+        CountsFindingsDto: {
+            adjustment: string;
+            /** @enum {string} */
+            analysis: "counts";
+            /** @description Log-rate coefficients (treatment contrasts against the control). */
+            coefficients: components["schemas"]["ModelCoefficientDto"][];
+            context: components["schemas"]["ModelFindingsContextDto"];
             /** @example CTRL */
             control: string;
             deviance: number;
@@ -1434,6 +1607,13 @@ export interface components {
             /** @description Why this structure could not be fitted (then the other fields are absent). */
             unavailable?: string;
         };
+        CovariateSlopeDto: {
+            mean: number;
+            p: number;
+            se: number;
+            slope: number;
+            t: number;
+        };
         CreateAnalysisDto: {
             /** @default 0.05 */
             alpha?: number;
@@ -1467,10 +1647,6 @@ export interface components {
              * @enum {string}
              */
             transform?: "none" | "log" | "sqrt" | "arcsine-sqrt";
-        };
-        CreateCommentDto: {
-            /** @example The gypsum plots at Quarry Hill drained oddly fast; worth a look at the plot notes. */
-            body: string;
         };
         CreateInvitationDto: {
             /** @example robin.ash@example.org */
@@ -1844,6 +2020,11 @@ export interface components {
             factors: components["schemas"]["TrialFactorDto"][];
             treatments: components["schemas"]["TreatmentDto"][];
         };
+        /**
+         * @description The analysis of this answer.
+         * @enum {string}
+         */
+        FindingsAnalysis: "anova" | "censored" | "repeated" | "ancova" | "ordinal" | "counts";
         FindingsChoicesDto: {
             alpha: number;
             forceLsd: boolean;
@@ -1867,6 +2048,8 @@ export interface components {
             meansOverTime: components["schemas"]["MeansOverTimePointDto"][];
             measure: components["schemas"]["FindingsMeasureDto"];
             missing: components["schemas"]["MissingSummaryDto"];
+            /** @description Which model this is (the ANOVA), the one made for the measure and the others on offer. */
+            modelChoice?: components["schemas"]["ModelChoiceDto"];
             /** @description Time-with-cutoff measures only. */
             notDrained?: components["schemas"]["NotDrainedCurveDto"][];
             notices: string[];
@@ -1881,8 +2064,12 @@ export interface components {
         };
         FindingsDto: {
             anova: components["schemas"]["AnovaTableRowDto"][];
+            /** @description With a covariate: the covariate itself between treatments (a baseline should not differ). */
+            baseline?: components["schemas"]["FTestDto"];
             comparisons: components["schemas"]["ComparisonsByMethodDto"];
             context: components["schemas"]["FindingsContextDto"];
+            /** @description With a covariate (analysis of covariance): the common slope, with the covariate’s mean. */
+            covariate?: components["schemas"]["CovariateSlopeDto"];
             diagnostics: components["schemas"]["DiagnosticsDto"];
             /** @description Factorial only: LS means of each factor's levels, by factor name. */
             factorMeans?: {
@@ -1891,6 +2078,8 @@ export interface components {
             /** @description Per method, treatment → compact letters. */
             letters: components["schemas"]["LettersByMethodDto"];
             means: components["schemas"]["LsMeanDto"][];
+            /** @description With a covariate: the test of equal slopes across treatments. */
+            slopes?: components["schemas"]["FTestDto"];
             summary: components["schemas"]["AnovaSummaryDto"];
             /** @description Plain sentences from the engine. */
             warnings: string[];
@@ -1933,6 +2122,12 @@ export interface components {
             siteId: number | null;
             siteName: string | null;
             siteNames: string[];
+        };
+        FTestDto: {
+            df1: number;
+            df2: number;
+            f: number;
+            p: number;
         };
         HealthReportDto: {
             /** @enum {string} */
@@ -2277,6 +2472,31 @@ export interface components {
             count: number;
             reasons: components["schemas"]["MissingReasonCountDto"][];
         };
+        ModelChoiceDto: {
+            /** @description The analysis of this answer. */
+            analysis: components["schemas"]["FindingsAnalysis"];
+            /** @description The analysis made for the measure. */
+            defaultAnalysis: components["schemas"]["FindingsAnalysis"];
+            options: components["schemas"]["AnalysisOptionDto"][];
+            /** @description Which model and why, in plain words. */
+            why: string;
+        };
+        ModelChoicesDto: {
+            alpha: number;
+            analysis: components["schemas"]["FindingsAnalysis"];
+            /** @enum {string} */
+            covariance?: "cs" | "ar1" | "unstructured" | "auto";
+            covariateMeasureId?: number;
+            covariateRoundId?: number;
+            /** @enum {string} */
+            distribution?: "weibull" | "lognormal" | "loglogistic";
+            /** @enum {string} */
+            family?: "auto" | "poisson" | "quasipoisson";
+            measureId: number;
+            method: components["schemas"]["SeparationMethod"];
+            roundId: number;
+            siteId: number | null;
+        };
         ModelCoefficientDto: {
             /** @example -0.21 */
             estimate: number;
@@ -2284,6 +2504,49 @@ export interface components {
             se: number;
             /** @example treatment[GYP] */
             term: string;
+        };
+        ModelFindingsContextDto: {
+            censored: components["schemas"]["CensoredSummaryDto"];
+            choices: components["schemas"]["ModelChoicesDto"];
+            controlCode: string | null;
+            dataHash: string;
+            /** @description The observations sent, in the engine’s order. */
+            engineObservations: {
+                [key: string]: unknown;
+            }[];
+            /** @description The body sent to the stateless endpoint, without observations. */
+            engineRequest: {
+                [key: string]: unknown;
+            };
+            engineVersion: string;
+            measure: components["schemas"]["FindingsMeasureDto"];
+            missing: components["schemas"]["MissingSummaryDto"];
+            modelChoice: components["schemas"]["ModelChoiceDto"];
+            notices: string[];
+            /** @description The rows behind engineObservations, in the same order. */
+            observations: components["schemas"]["ModelObservationRowDto"][];
+            /** @description The round analysed (rounds over time: the latest used). */
+            round: components["schemas"]["RoundRefDto"];
+            /** @description Rounds over time: the rounds used, in time order. */
+            rounds?: components["schemas"]["RoundRefDto"][];
+            scope: components["schemas"]["FindingsScopeDto"];
+            trialCode: string;
+            trialId: number;
+        };
+        ModelObservationRowDto: {
+            block: number;
+            censored: boolean;
+            /** @description Analysis of covariance: the plot’s covariate (stored decimal text). */
+            covariate?: string;
+            observationId: number;
+            plotLabel: string;
+            /** @description Rounds over time: the round of the value. */
+            roundLabel?: string;
+            siteName: string;
+            /** @description Treatment code (the label the engine sees). */
+            treatment: string;
+            /** @description The stored decimal text (censored values: the cut-off value). */
+            value: string;
         };
         ModelRankTestDto: {
             df: number | null;
@@ -2379,6 +2642,34 @@ export interface components {
             categories: string[];
             /** @description Log-odds of a higher score (treatment contrasts against the control). */
             coefficients: components["schemas"]["ModelCoefficientDto"][];
+            /** @example CTRL */
+            control: string;
+            logLik: number;
+            /** @description Odds of a higher score than the control’s. */
+            oddsRatios: components["schemas"]["ControlRatioDto"][];
+            probabilities: components["schemas"]["CategoryShareDto"][];
+            rankTest: components["schemas"]["ModelRankTestDto"];
+            tests: components["schemas"]["LikelihoodRatioTestDto"][];
+            thresholds: components["schemas"]["ThresholdDto"][];
+            warnings: string[];
+        };
+        OrdinalFindingsDto: {
+            adjustment: string;
+            /** @enum {string} */
+            analysis: "ordinal";
+            /**
+             * @example [
+             *       "1",
+             *       "2",
+             *       "3",
+             *       "4",
+             *       "5"
+             *     ]
+             */
+            categories: string[];
+            /** @description Log-odds of a higher score (treatment contrasts against the control). */
+            coefficients: components["schemas"]["ModelCoefficientDto"][];
+            context: components["schemas"]["ModelFindingsContextDto"];
             /** @example CTRL */
             control: string;
             logLik: number;
@@ -2643,6 +2934,21 @@ export interface components {
             splitPlot: components["schemas"]["SplitPlotDto"] | null;
             warnings: string[];
         };
+        RepeatedFindingsDto: {
+            /** @enum {string} */
+            analysis: "repeated";
+            anova: components["schemas"]["TermTestDto"][];
+            byRound: components["schemas"]["RoundTestDto"][];
+            candidates: components["schemas"]["CovarianceChoiceDto"][];
+            context: components["schemas"]["ModelFindingsContextDto"];
+            covariance: components["schemas"]["CovarianceChoiceDto"];
+            means: components["schemas"]["RepeatedMeanDto"][];
+            plots: number;
+            rounds: components["schemas"]["RoundDto"][];
+            sphericity: components["schemas"]["SphericityDto"] | null;
+            splitPlot: components["schemas"]["SplitPlotDto"] | null;
+            warnings: string[];
+        };
         RepeatedMeanDto: {
             df: number;
             mean: number;
@@ -2715,6 +3021,24 @@ export interface components {
             /** @description Engine warnings and notices of this measure. */
             warnings: string[];
         };
+        ReportOpenCommentDto: {
+            authorName: string | null;
+            body: string;
+            /** Format: date-time */
+            createdAt: string;
+            id: number;
+            replyCount: number;
+        };
+        ReportReviewDto: {
+            analysisId: number;
+            measureName: string;
+            openComments: components["schemas"]["ReportOpenCommentDto"][];
+            review: components["schemas"]["ReviewStatusDto"];
+            roundLabel: string;
+            scopeLabel: string;
+            signOffs: components["schemas"]["SignOffDto"][];
+            title: string;
+        };
         ResidualPointDto: {
             fitted: number;
             /** @description |standardized| > 3. */
@@ -2724,6 +3048,30 @@ export interface components {
             residual: number;
             /** @description Null for a plot with leverage 1. */
             standardized: number | null;
+        };
+        ReviewRequestAnswerDto: {
+            /** @description The reviewers who were e-mailed. */
+            notified: string[];
+            /** Format: date-time */
+            requestedAt: string;
+        };
+        ReviewRequestInputDto: {
+            /** @description A note for the reviewers, included in the e-mail. */
+            message?: string | null;
+        };
+        ReviewStatusDto: {
+            awaiting: string[];
+            expected: number;
+            /**
+             * @description The trial’s reviewers sign; its investigators when it has no reviewer.
+             * @enum {string}
+             */
+            expectedRole: "reviewer" | "investigator";
+            /** @example Signed by 1 of 2 reviewers */
+            label: string;
+            /** Format: date-time */
+            lastRequestedAt: string | null;
+            signed: number;
         };
         RoundDto: {
             /** @example Day 14 */
@@ -2763,6 +3111,31 @@ export interface components {
             p: number;
             w: number;
         };
+        SignOffDto: {
+            analysisId: number;
+            /** @description SHA-256 of the data the analysis used when signed. */
+            dataHash: string;
+            engineVersion: string;
+            id: number;
+            /** @description The signer’s name when they signed. */
+            name: string;
+            role: components["schemas"]["TrialRole"];
+            /** Format: date-time */
+            signedAt: string;
+            /** @description `data-changed`: the trial’s data moved on after this sign-off. */
+            state: components["schemas"]["SignOffState"];
+            statement: string;
+            userId: number | null;
+        };
+        SignOffInputDto: {
+            /** @example I checked the layout, the data at both sites and the model; the conclusions follow from them. */
+            statement: string;
+        };
+        /**
+         * @description `data-changed`: the trial’s data moved on after this sign-off.
+         * @enum {string}
+         */
+        SignOffState: "current" | "data-changed";
         SiteConflict: {
             /** @description The record as it is stored now, with its version. */
             current: components["schemas"]["SiteDto"];
@@ -2819,10 +3192,22 @@ export interface components {
             analysisId: number;
             authorId: number | null;
             authorName: string | null;
+            /** @description Empty once deleted (the earlier text stays in revisions). */
             body: string;
             /** Format: date-time */
             createdAt: string;
+            /** Format: date-time */
+            deletedAt: string | null;
+            /** Format: date-time */
+            editedAt: string | null;
             id: number;
+            /** @description The comment this one replies to. */
+            parentId: number | null;
+            /** Format: date-time */
+            resolvedAt: string | null;
+            resolvedByName: string | null;
+            /** @description Earlier texts, oldest first. */
+            revisions: components["schemas"]["CommentRevisionDto"][];
         };
         SphericityDto: {
             chiSquare: number | null;
@@ -3041,6 +3426,8 @@ export interface components {
             generatedAt: string;
             measures: components["schemas"]["ReportMeasureDto"][];
             protocol: components["schemas"]["TrialProtocolDto"];
+            /** @description Saved analyses with sign-offs (statements and states) or open comments, oldest first. */
+            reviews: components["schemas"]["ReportReviewDto"][];
             sites: components["schemas"]["SiteDto"][];
         };
         /**
@@ -3101,6 +3488,12 @@ export interface components {
              * @example 1
              */
             version: number;
+        };
+        UpdateMemberDto: {
+            /** @description The one role the person holds on the trial from now on. */
+            role: components["schemas"]["TrialRole"];
+            /** @description The sites of a collaborator (one or more); leave out for other roles. */
+            siteIds?: number[];
         };
         UpdateRoundDto: {
             /**
@@ -3208,6 +3601,8 @@ export interface components {
             noControlReason?: string | null;
             /** @description The question or hypothesis the trial answers. */
             question?: string | null;
+            /** @description Why a locked trial is unlocked (status active); required when any of its saved analyses is signed off. Kept in the activity trail. */
+            reason?: string | null;
             safetyNotes?: string | null;
             /**
              * @description Randomization seed text; a random one when left out.
@@ -4371,7 +4766,7 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
-            /** @description AnalysisSnapshotSummary[], newest first (without the result). */
+            /** @description AnalysisSnapshotSummary[], newest first (without the result), each with its sign-offs and review status. */
             200: {
                 headers: {
                     [name: string]: unknown;
@@ -4523,7 +4918,7 @@ export interface operations {
             };
         };
     };
-    AnalysesController_comments: {
+    AnalysesController_listComments: {
         parameters: {
             query?: never;
             header?: never;
@@ -4536,7 +4931,7 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
-            /** @description SnapshotComment[], oldest first. */
+            /** @description SnapshotComment[], oldest first; replies carry parentId; deleted ones keep their place with an empty body. */
             200: {
                 headers: {
                     [name: string]: unknown;
@@ -4574,7 +4969,7 @@ export interface operations {
             };
         };
     };
-    AnalysesController_comment: {
+    AnalysesController_addComment: {
         parameters: {
             query?: never;
             header?: never;
@@ -4587,11 +4982,11 @@ export interface operations {
         };
         requestBody: {
             content: {
-                "application/json": components["schemas"]["CreateCommentDto"];
+                "application/json": components["schemas"]["CommentInputDto"];
             };
         };
         responses: {
-            /** @description SnapshotComment; recorded in the activity log. */
+            /** @description SnapshotComment; a reply is e-mailed to the reviewers and the thread’s author; recorded in the activity trail. */
             201: {
                 headers: {
                     [name: string]: unknown;
@@ -4627,9 +5022,141 @@ export interface operations {
                     "application/json": components["schemas"]["ProblemDto"];
                 };
             };
+            /** @description body empty or too long, or parentId not a comment of this analysis. */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
         };
     };
-    AnalysesController_signOff: {
+    AnalysesController_deleteComment: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                analysisId: number;
+                commentId: number;
+                /** @description The trial. */
+                trialId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description Deleted. */
+            204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description No valid token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description Needs one of these roles on the trial: investigator, collaborator, reviewer. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description No such trial, or you are not a member of it. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description Already deleted. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+        };
+    };
+    AnalysesController_updateComment: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                analysisId: number;
+                commentId: number;
+                /** @description The trial. */
+                trialId: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["CommentUpdateDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["SnapshotCommentDto"];
+                };
+            };
+            /** @description No valid token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description Needs one of these roles on the trial: investigator, collaborator, reviewer. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description No such trial, or you are not a member of it. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description The comment was deleted. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+        };
+    };
+    AnalysesController_requestReview: {
         parameters: {
             query?: never;
             header?: never;
@@ -4640,15 +5167,18 @@ export interface operations {
             };
             cookie?: never;
         };
-        requestBody?: never;
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["ReviewRequestInputDto"];
+            };
+        };
         responses: {
-            /** @description AnalysisSnapshot with signedOffAt and signedOffBy; recorded in the activity log. */
-            200: {
+            201: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": components["schemas"]["AnalysisSnapshotDto"];
+                    "application/json": components["schemas"]["ReviewRequestAnswerDto"];
                 };
             };
             /** @description No valid token. */
@@ -4678,7 +5208,71 @@ export interface operations {
                     "application/json": components["schemas"]["ProblemDto"];
                 };
             };
-            /** @description The trial is not locked, or the analysis is already signed off (a sentence). */
+            /** @description The trial has no reviewer yet. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+        };
+    };
+    AnalysesController_signOff: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                analysisId: number;
+                /** @description The trial. */
+                trialId: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["SignOffInputDto"];
+            };
+        };
+        responses: {
+            /** @description SignOff: name, role, time, statement, data hash and engine version; recorded in the activity trail. */
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["SignOffDto"];
+                };
+            };
+            /** @description No valid token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description Needs one of these roles on the trial: investigator, reviewer. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description No such trial, or you are not a member of it. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description The trial is not locked, the data changed since the analysis was saved, or you already signed it (a sentence). */
             409: {
                 headers: {
                     [name: string]: unknown;
@@ -4965,6 +5559,18 @@ export interface operations {
         parameters: {
             query: {
                 alpha?: number;
+                /** @description Leave out for the model made for the measure: censored (time with a cut-off), ordinal (score), counts (count); a number: ancova with a day-0 baseline and one later round, repeated with two or more rounds, else anova. */
+                analysis?: "anova" | "censored" | "repeated" | "ancova" | "ordinal" | "counts";
+                /** @description repeated: the within-plot covariance (auto: lowest AIC). */
+                covariance?: "cs" | "ar1" | "unstructured" | "auto";
+                /** @description ancova: the measure whose values are the covariate; default the analysed measure. */
+                covariateMeasureId?: number;
+                /** @description ancova: the round whose values are the covariate; default the day-0 round (else the earliest earlier round with values). */
+                covariateRoundId?: number;
+                /** @description censored: the time-ratio model’s distribution. */
+                distribution?: "weibull" | "lognormal" | "loglogistic";
+                /** @description counts: auto takes quasi-Poisson when the counts are overdispersed. */
+                family?: "auto" | "poisson" | "quasipoisson";
                 /** @description Compute Fisher’s LSD even when the treatment F test is not significant. */
                 forceLsd?: boolean;
                 /** @description The measure to analyse. */
@@ -4988,13 +5594,13 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
-            /** @description Findings: AnovaAnswer & {context}. */
+            /** @description Findings (the ANOVA: AnovaAnswer & {context}) or a model’s answer & {analysis, context}. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": components["schemas"]["FindingsDto"];
+                    "application/json": components["schemas"]["FindingsDto"] | components["schemas"]["CensoredFindingsDto"] | components["schemas"]["RepeatedFindingsDto"] | components["schemas"]["AncovaFindingsDto"] | components["schemas"]["OrdinalFindingsDto"] | components["schemas"]["CountsFindingsDto"];
                 };
             };
             /** @description No valid token. */
@@ -5841,6 +6447,145 @@ export interface operations {
             };
             /** @description No such trial, or you are not a member of it. */
             404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+        };
+    };
+    MembersController_remove: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                /** @description The trial. */
+                trialId: number;
+                userId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description Removed. */
+            204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description No valid token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description Needs one of these roles on the trial: investigator. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /**
+             * @description The person is not on this trial.
+             *
+             *     No such trial, or you are not a member of it.
+             */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description The change would leave the trial without an investigator. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+        };
+    };
+    MembersController_update: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                /** @description The trial. */
+                trialId: number;
+                userId: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["UpdateMemberDto"];
+            };
+        };
+        responses: {
+            /** @description Member[]: the whole team after the change. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["MemberDto"][];
+                };
+            };
+            /** @description No valid token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description Needs one of these roles on the trial: investigator. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /**
+             * @description The person is not on this trial.
+             *
+             *     No such trial, or you are not a member of it.
+             */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description The change would leave the trial without an investigator. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description role or siteIds wrong (named). */
+            422: {
                 headers: {
                     [name: string]: unknown;
                 };

@@ -5,7 +5,10 @@ import { personLocale } from './person-locale';
 export const designLabels: Record<string, string> = {
   crd: 'Completely randomized',
   rcbd: 'Randomized complete block',
-  'factorial-rcbd': 'Two-factor factorial in blocks',
+  'factorial-crd': 'Factorial (2–4 factors), completely randomized',
+  'factorial-rcbd': 'Factorial (2–4 factors) in blocks',
+  'split-plot': 'Split plot in blocks',
+  'split-split-plot': 'Split-split plot in blocks',
 };
 
 export const statusLabels: Record<string, string> = {

@@ -1,6 +1,7 @@
 import type { AnalysisSnapshot, AnalysisSnapshotSummary, SnapshotComment } from '@friable/contracts';
 import { ApiProperty } from '@nestjs/swagger';
 import { FindingsChoicesDto, FindingsDto } from '../../findings/dto/findings.dto';
+import { CommentRevisionDto, ReviewStatusDto, SignOffDto } from './review.dto';
 
 export class AnalysisSnapshotSummaryDto implements AnalysisSnapshotSummary {
   @ApiProperty()
@@ -50,6 +51,12 @@ export class AnalysisSnapshotSummaryDto implements AnalysisSnapshotSummary {
 
   @ApiProperty()
   commentCount: number;
+
+  @ApiProperty({ type: [SignOffDto], description: 'Every sign-off, oldest first.' })
+  signOffs: SignOffDto[];
+
+  @ApiProperty({ type: ReviewStatusDto })
+  review: ReviewStatusDto;
 }
 
 /** The stored result, never recomputed. */
@@ -71,7 +78,10 @@ export class SnapshotCommentDto implements SnapshotComment {
   @ApiProperty()
   analysisId: number;
 
-  @ApiProperty()
+  @ApiProperty({ type: Number, nullable: true, description: 'The comment this one replies to.' })
+  parentId: number | null;
+
+  @ApiProperty({ description: 'Empty once deleted (the earlier text stays in revisions).' })
   body: string;
 
   @ApiProperty({ type: Number, nullable: true })
@@ -82,4 +92,19 @@ export class SnapshotCommentDto implements SnapshotComment {
 
   @ApiProperty({ format: 'date-time' })
   createdAt: string;
+
+  @ApiProperty({ type: String, format: 'date-time', nullable: true })
+  editedAt: string | null;
+
+  @ApiProperty({ type: String, format: 'date-time', nullable: true })
+  deletedAt: string | null;
+
+  @ApiProperty({ type: String, format: 'date-time', nullable: true })
+  resolvedAt: string | null;
+
+  @ApiProperty({ type: String, nullable: true })
+  resolvedByName: string | null;
+
+  @ApiProperty({ type: [CommentRevisionDto], description: 'Earlier texts, oldest first.' })
+  revisions: CommentRevisionDto[];
 }

@@ -32,6 +32,8 @@ import * as createIntakeColumnChoices from './20261217090200-create-intake-colum
 import * as factorLevelRates from './20261218090000-factor-level-rates';
 import * as fourFactorTreatments from './20261218090100-four-factor-treatments';
 import * as plotUnits from './20261218090200-plot-units';
+import * as createDataStamps from './20261215090000-create-data-stamps';
+import * as createSchedulerLeases from './20261215090100-create-scheduler-leases';
 import * as protocolVersions from './20261214090000-protocol-versions';
 
 export interface MigrationModule {
@@ -74,5 +76,7 @@ export const migrations: ReadonlyArray<readonly [name: string, module: Migration
   ['20261218090000-factor-level-rates', factorLevelRates],
   ['20261218090100-four-factor-treatments', fourFactorTreatments],
   ['20261218090200-plot-units', plotUnits],
+  ['20261215090000-create-data-stamps', createDataStamps],
+  ['20261215090100-create-scheduler-leases', createSchedulerLeases],
   ['20261214090000-protocol-versions', protocolVersions],
 ];

@@ -1,4 +1,17 @@
-import { ANALYSIS_TRANSFORMS, SEPARATION_METHODS, type AnalysisTransform, type SeparationMethod } from '@friable/contracts';
+import {
+  AFT_DISTRIBUTIONS,
+  ANALYSIS_TRANSFORMS,
+  COUNT_FAMILIES,
+  FINDINGS_ANALYSES,
+  REPEATED_COVARIANCES,
+  SEPARATION_METHODS,
+  type AftDistribution,
+  type AnalysisTransform,
+  type CountFamilyChoice,
+  type FindingsAnalysis,
+  type RepeatedCovariance,
+  type SeparationMethod,
+} from '@friable/contracts';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { Transform, Type } from 'class-transformer';
 import { IsBoolean, IsIn, IsInt, IsNumber, IsOptional, Max, Min } from 'class-validator';
@@ -55,4 +68,42 @@ export class FindingsQueryDto {
   @Transform(booleanText)
   @IsBoolean({ message: 'forceLsd must be true or false' })
   forceLsd?: boolean;
+
+  @ApiPropertyOptional({
+    enum: FINDINGS_ANALYSES,
+    description:
+      'Leave out for the model made for the measure: censored (time with a cut-off), ordinal (score), counts (count); a number: ancova with a day-0 baseline and one later round, repeated with two or more rounds, else anova.',
+  })
+  @IsOptional()
+  @IsIn(FINDINGS_ANALYSES, { message: `analysis must be one of ${FINDINGS_ANALYSES.join(', ')}` })
+  analysis?: FindingsAnalysis;
+
+  @ApiPropertyOptional({ enum: AFT_DISTRIBUTIONS, default: 'weibull', description: 'censored: the time-ratio model’s distribution.' })
+  @IsOptional()
+  @IsIn(AFT_DISTRIBUTIONS, { message: `distribution must be one of ${AFT_DISTRIBUTIONS.join(', ')}` })
+  distribution?: AftDistribution;
+
+  @ApiPropertyOptional({ enum: REPEATED_COVARIANCES, default: 'auto', description: 'repeated: the within-plot covariance (auto: lowest AIC).' })
+  @IsOptional()
+  @IsIn(REPEATED_COVARIANCES, { message: `covariance must be one of ${REPEATED_COVARIANCES.join(', ')}` })
+  covariance?: RepeatedCovariance;
+
+  @ApiPropertyOptional({ enum: COUNT_FAMILIES, default: 'auto', description: 'counts: auto takes quasi-Poisson when the counts are overdispersed.' })
+  @IsOptional()
+  @IsIn(COUNT_FAMILIES, { message: `family must be one of ${COUNT_FAMILIES.join(', ')}` })
+  family?: CountFamilyChoice;
+
+  @ApiPropertyOptional({ description: 'ancova: the measure whose values are the covariate; default the analysed measure.' })
+  @IsOptional()
+  @Type(() => Number)
+  @IsInt({ message: 'covariateMeasureId must be a whole number' })
+  @Min(1, { message: 'covariateMeasureId must be a whole number' })
+  covariateMeasureId?: number;
+
+  @ApiPropertyOptional({ description: 'ancova: the round whose values are the covariate; default the day-0 round (else the earliest earlier round with values).' })
+  @IsOptional()
+  @Type(() => Number)
+  @IsInt({ message: 'covariateRoundId must be a whole number' })
+  @Min(1, { message: 'covariateRoundId must be a whole number' })
+  covariateRoundId?: number;
 }

@@ -19,6 +19,7 @@ import {
 } from '@friable/contracts';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { AnovaAnswerDto, LsMeanDto } from '../../stats/dto/anova-answer.dto';
+import { ModelChoiceDto } from './model-choice.dto';
 
 export class FindingsChoicesDto implements FindingsChoices {
   @ApiProperty()
@@ -292,6 +293,9 @@ export class FindingsContextDto implements FindingsContext {
 
   @ApiProperty({ type: [String] })
   notices: string[];
+
+  @ApiPropertyOptional({ type: ModelChoiceDto, description: 'Which model this is (the ANOVA), the one made for the measure and the others on offer.' })
+  modelChoice?: ModelChoiceDto;
 
   @ApiProperty({ description: 'SHA-256 (hex) of the canonical JSON of the observations sent to the engine.' })
   dataHash: string;

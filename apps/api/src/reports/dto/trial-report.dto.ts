@@ -1,5 +1,6 @@
 import { SEPARATION_METHODS, type ReportMean, type ReportMeasure, type SeparationMethod, type TrialReport } from '@friable/contracts';
 import { ApiProperty } from '@nestjs/swagger';
+import { ReportReviewDto } from '../../analyses/dto/review.dto';
 import { FindingsRankTestDto, RoundRefDto } from '../../findings/dto/findings.dto';
 import { MeasureDto } from '../../measures/dto/measure.dto';
 import { SiteDto } from '../../sites/dto/site.dto';
@@ -71,4 +72,7 @@ export class TrialReportDto implements TrialReport {
 
   @ApiProperty({ description: 'A short plain paragraph on what the statistics do and do not show.' })
   explanation: string;
+
+  @ApiProperty({ type: [ReportReviewDto], description: 'Saved analyses with sign-offs (statements and states) or open comments, oldest first.' })
+  reviews: ReportReviewDto[];
 }

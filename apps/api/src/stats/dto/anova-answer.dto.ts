@@ -180,6 +180,30 @@ export class DiagnosticsDto {
   residuals: ResidualPointDto[];
 }
 
+export class CovariateSlopeDto {
+  @ApiProperty()
+  mean: number;
+  @ApiProperty()
+  slope: number;
+  @ApiProperty()
+  se: number;
+  @ApiProperty()
+  t: number;
+  @ApiProperty()
+  p: number;
+}
+
+export class FTestDto {
+  @ApiProperty()
+  f: number;
+  @ApiProperty()
+  p: number;
+  @ApiProperty()
+  df1: number;
+  @ApiProperty()
+  df2: number;
+}
+
 /** The answer of POST /api/stats/anova, exactly as the engine gives it. */
 @ApiExtraModels(LsMeanDto)
 export class AnovaAnswerDto implements AnovaAnswer {
@@ -210,6 +234,15 @@ export class AnovaAnswerDto implements AnovaAnswer {
 
   @ApiProperty({ type: [String], description: 'Plain sentences from the engine.' })
   warnings: string[];
+
+  @ApiPropertyOptional({ type: CovariateSlopeDto, description: 'With a covariate (analysis of covariance): the common slope, with the covariate’s mean.' })
+  covariate?: CovariateSlopeDto;
+
+  @ApiPropertyOptional({ type: FTestDto, description: 'With a covariate: the test of equal slopes across treatments.' })
+  slopes?: FTestDto;
+
+  @ApiPropertyOptional({ type: FTestDto, description: 'With a covariate: the covariate itself between treatments (a baseline should not differ).' })
+  baseline?: FTestDto;
 }
 
 /** POST /api/stats/friedman and /api/stats/kruskal answers. */

@@ -15,4 +15,14 @@ export class UpdateTrialDto extends IntersectionType(PartialType(OmitType(Create
   @IsOptional()
   @IsIn(TRIAL_STATUSES, { message: `status must be one of ${TRIAL_STATUSES.join(', ')}` })
   status?: TrialStatus;
+
+  @ApiPropertyOptional({
+    type: String,
+    nullable: true,
+    description: 'Why a locked trial is unlocked (status active); required when any of its saved analyses is signed off. Kept in the activity trail.',
+  })
+  @IsOptional()
+  @IsString({ message: 'reason must be text of at most 500 characters' })
+  @MaxLength(500, { message: 'reason must be text of at most 500 characters' })
+  reason?: string | null;
 }

@@ -3,6 +3,7 @@ import { Link, NavLink, Outlet, useNavigate } from 'react-router-dom';
 import { paths } from '../../config/paths';
 import { useAuth } from '../../features/auth/hooks/auth-context';
 import { useOutboxAvailable } from '../../features/outbox/api/get-outbox';
+import { RouteBoundary } from '../errors/route-boundary';
 
 /** The frame of every signed-in page: Friable's name, the person, sign-out. */
 export function AppLayout() {
@@ -46,10 +47,10 @@ export function AppLayout() {
           )}
         </NavbarGroup>
         <NavbarGroup align={Alignment.END}>
-          <span className="fr-person" aria-label="Signed in as">
+          <Link to={paths.account.href()} className="fr-person" aria-label={`Your account: ${user?.name ?? ''}`} title="Your account: name, numbers, e-mails, password">
             <span className="fr-person__name">{user?.name}</span>
             <span className="fr-person__email">{user?.email}</span>
-          </span>
+          </Link>
           <Button
             variant="minimal"
             icon="log-out"
@@ -64,7 +65,9 @@ export function AppLayout() {
         </NavbarGroup>
       </Navbar>
       <main className="fr-main">
-        <Outlet />
+        <RouteBoundary>
+          <Outlet />
+        </RouteBoundary>
       </main>
       <footer className="fr-footer">
         Friable gives decision support, not advice. Follow product labels, local rules and your soil-testing laboratory.

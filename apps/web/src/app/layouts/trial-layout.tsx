@@ -6,6 +6,7 @@ import { TrialStatusTag } from '../../components/trial-status-tag';
 import { paths } from '../../config/paths';
 import { designLabels, roleLabels } from '../../lib/format';
 import { useTrial } from '../../lib/api/get-trial';
+import { RouteBoundary } from '../errors/route-boundary';
 
 export interface TrialOutletContext {
   trial: TrialDetail;
@@ -24,6 +25,8 @@ const sections: Array<{ label: string; href: (id: number) => string; shownTo?: (
   // Reviewers write no data, so they get no Intake tab.
   { label: 'Intake', href: (id: number) => paths.trialIntake.href(id), shownTo: (t: TrialDetail) => t.myRoles.some((role) => role !== 'reviewer') },
   { label: 'Ledger', href: (id: number) => paths.trialLedger.href(id) },
+  // Plot by plot on a phone, for those who record values.
+  { label: 'Round walk', href: (id: number) => paths.trialWalk.href(id), shownTo: (t: TrialDetail) => t.myRoles.some((role) => role !== 'reviewer') },
   { label: 'Findings', href: paths.trialFindings.href },
   { label: 'Activity', href: paths.trialActivity.href },
 ];
@@ -56,7 +59,9 @@ export function TrialLayout() {
           </NavLink>
         ))}
       </nav>
-      <Outlet context={{ trial: t } satisfies TrialOutletContext} />
+      <RouteBoundary>
+        <Outlet context={{ trial: t } satisfies TrialOutletContext} />
+      </RouteBoundary>
     </div>
   );
 }

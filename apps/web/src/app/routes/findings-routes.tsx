@@ -1,5 +1,6 @@
-import { lazy, Suspense } from 'react';
+import { lazy, Suspense, useEffect } from 'react';
 import { LoadingState } from '../../components/states';
+import { useAuth } from '../../features/auth/hooks/auth-context';
 import { useTrialOutlet } from '../layouts/trial-layout';
 
 // The Findings pages load with their route (their plots load later still, only when drawn).
@@ -15,11 +16,18 @@ export function QuickAnalysisRoute() {
   );
 }
 
+/** The Findings plots' code (with the charting library), asked for as the page opens, while its analysis is computed. */
+const loadFindingsPlots = () => import('../../features/findings/components/findings-plots');
+
 export function FindingsRoute() {
   const { trial } = useTrialOutlet();
+  const { user } = useAuth();
+  useEffect(() => {
+    void loadFindingsPlots();
+  }, []);
   return (
     <Suspense fallback={<LoadingState what="the Findings" />}>
-      <FindingsPage trial={trial} />
+      <FindingsPage trial={trial} meId={user?.id} />
     </Suspense>
   );
 }

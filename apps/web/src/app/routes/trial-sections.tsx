@@ -41,6 +41,18 @@ export function LedgerRoute() {
   );
 }
 
+// The Round walk (and its IndexedDB queue) loads when a person opens it, not with the app.
+const WalkPage = lazy(() => import('../../features/walk/components/walk-page').then((module) => ({ default: module.WalkPage })));
+
+export function WalkRoute() {
+  const { trial } = useTrialOutlet();
+  return (
+    <Suspense fallback={<LoadingState what="the Round walk" />}>
+      <WalkPage trial={trial} />
+    </Suspense>
+  );
+}
+
 export function AcceptInvitationRoute() {
   return <AcceptInvitationPage token={useParams().token ?? ''} />;
 }

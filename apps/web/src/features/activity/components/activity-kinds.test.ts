@@ -5,7 +5,9 @@ describe('activity kinds', () => {
   it('names known kinds and falls back to the group and verb', () => {
     expect(activityKindLabel('site.randomized')).toBe('Site randomized');
     expect(activityKindLabel('invitation.revoked')).toBe('Invitation withdrawn');
-    expect(activityKindLabel('analysis.signed-off')).toBe('Analyses: signed off');
+    expect(activityKindLabel('analysis.signed-off')).toBe('Analysis signed off');
+    expect(activityKindLabel('member.removed')).toBe('Member removed');
+    expect(activityKindLabel('analysis.archived')).toBe('Analyses and review: archived');
     expect(activityKindLabel('compost.spread')).toBe('compost: spread');
   });
 

@@ -15,10 +15,23 @@ export const activityGroups: ReadonlyArray<{ prefix: string; label: string; kind
     label: 'Invitations',
     kinds: { 'invitation.sent': 'Invitation sent', 'invitation.resent': 'Invitation sent again', 'invitation.revoked': 'Invitation withdrawn', 'invitation.accepted': 'Invitation accepted' },
   },
+  { prefix: 'member', label: 'Team', kinds: { 'member.changed': 'Role or sites changed', 'member.removed': 'Member removed' } },
   { prefix: 'intake', label: 'Intake uploads', kinds: { 'intake.committed': 'Upload committed' } },
   { prefix: 'observation', label: 'Values', kinds: { 'observation.created': 'Value entered', 'observation.edited': 'Value changed' } },
   { prefix: 'photo', label: 'Photos', kinds: { 'photo.added': 'Photo added', 'photo.replaced': 'Photo replaced', 'photo.removed': 'Photo removed' } },
-  { prefix: 'analysis', label: 'Analyses', kinds: {} },
+  {
+    prefix: 'analysis',
+    label: 'Analyses and review',
+    kinds: {
+      'analysis.saved': 'Analysis saved',
+      'analysis.review-requested': 'Review requested',
+      'analysis.signed-off': 'Analysis signed off',
+      'analysis.commented': 'Comment added',
+      'analysis.comment-replied': 'Reply added',
+      'analysis.comment-changed': 'Comment edited or resolved',
+      'analysis.comment-deleted': 'Comment deleted',
+    },
+  },
 ];
 
 /**

@@ -34,7 +34,7 @@ const trail: ActivityEntry[] = [
 ];
 
 describe('ActivityPage', () => {
-  beforeEach(() => window.localStorage.setItem('friable.accessToken', 'token'));
+  beforeEach(() => window.localStorage.setItem('friable.signedIn', '1'));
   afterEach(() => vi.unstubAllGlobals());
 
   it('lists the changes newest first as sentences with who, where, what kind and when', async () => {

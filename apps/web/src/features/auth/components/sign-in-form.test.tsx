@@ -30,7 +30,7 @@ describe('SignInForm', () => {
     await userEvent.click(screen.getByRole('button', { name: 'Sign in' }));
     await vi.waitFor(() => expect(onSignedIn).toHaveBeenCalledOnce());
     expect(calls[0]).toMatchObject({ method: 'POST', path: '/api/auth/login', body: { email: 'ines@example.org', password: 'friable-demo' } });
-    expect(window.localStorage.getItem('friable.accessToken')).toBe('a.b.c');
+    expect(window.localStorage.getItem('friable.signedIn')).toBe('1');
   });
 
   it('says so when the server cannot be reached', async () => {

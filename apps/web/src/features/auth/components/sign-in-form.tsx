@@ -1,5 +1,7 @@
 import { Button, Callout, Card, FormGroup, H1, InputGroup } from '@blueprintjs/core';
 import { useState, type FormEvent } from 'react';
+import { Link } from 'react-router-dom';
+import { paths } from '../../../config/paths';
 import { ApiError } from '../../../lib/api-client';
 import { useLogin } from '../api/login';
 import { useAuth } from '../hooks/auth-context';
@@ -48,6 +50,9 @@ export function SignInForm({ onSignedIn }: { onSignedIn: () => void }) {
         </FormGroup>
         <Button type="submit" intent="primary" large fill loading={login.isPending} text="Sign in" />
       </form>
+      <p className="fr-gap">
+        <Link to={paths.forgotPassword.href()}>Forgot your password?</Link>
+      </p>
     </Card>
   );
 }

@@ -4,6 +4,7 @@ import { createContext, useCallback, useContext, useEffect, useMemo, useState, t
 import { setAccountLocale } from '../../../lib/person-locale';
 import { session } from '../../../lib/session';
 import { meQueryOptions, useMe } from '../api/get-me';
+import { logout } from '../api/logout';
 
 interface AuthState {
   /** True while this browser holds a session (it may still be checked, or turn out expired). */
@@ -27,6 +28,9 @@ export function AuthProvider({ children }: { children: ReactNode }) {
 
   const signOut = useCallback(
     (reason?: string) => {
+      // Signing out by choice ends the session on the server (which clears the httpOnly cookie); a session
+      // that ended by itself has nothing left to end.
+      if (!reason && session.isOpen()) void logout().catch(() => undefined);
       session.close();
       setSignedIn(false);
       setEndedReason(reason ?? null);

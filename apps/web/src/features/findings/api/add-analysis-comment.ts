@@ -1,18 +1,39 @@
-import type { SnapshotCommentCreate } from '@friable/contracts';
+import type { CommentInput, CommentUpdateInput } from '@friable/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api, unwrap } from '../../../lib/api-client';
 import { analysesQueryOptions } from '../../../lib/api/get-analyses';
 
-/** POST /api/trials/:trialId/analyses/:analysisId/comments — a review comment on a saved analysis. */
-export function addAnalysisComment(trialId: number, analysisId: number, body: SnapshotCommentCreate) {
+const commentPath = '/api/trials/{trialId}/analyses/{analysisId}/comments/{commentId}' as const;
+
+/** POST /api/trials/:trialId/analyses/:analysisId/comments — a comment, or with `parentId` a reply. */
+export function addAnalysisComment(trialId: number, analysisId: number, body: CommentInput) {
   return unwrap(api.POST('/api/trials/{trialId}/analyses/{analysisId}/comments', { params: { path: { trialId, analysisId } }, body }));
 }
 
-export function useAddAnalysisComment(trialId: number, analysisId: number) {
+/** PATCH …/comments/:commentId — edit one's own text, or resolve / reopen the thread. */
+export function changeAnalysisComment(trialId: number, analysisId: number, commentId: number, body: CommentUpdateInput) {
+  return unwrap(api.PATCH(commentPath, { params: { path: { trialId, analysisId, commentId } }, body }));
+}
+
+/** DELETE …/comments/:commentId — delete one's own comment (its text stays in the history). */
+export function deleteAnalysisComment(trialId: number, analysisId: number, commentId: number) {
+  return unwrap(api.DELETE(commentPath, { params: { path: { trialId, analysisId, commentId } } }));
+}
+
+/** Every comment change reloads the comments and the list's counts (both under the analyses key). */
+function useCommentMutation<T>(trialId: number, run: (input: T) => Promise<unknown>) {
   const queryClient = useQueryClient();
-  return useMutation({
-    mutationFn: (body: SnapshotCommentCreate) => addAnalysisComment(trialId, analysisId, body),
-    // Reloads the comments and the list's comment counts (both under the analyses key).
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: analysesQueryOptions(trialId).queryKey }),
-  });
+  return useMutation({ mutationFn: run, onSuccess: () => queryClient.invalidateQueries({ queryKey: analysesQueryOptions(trialId).queryKey }) });
+}
+
+export function useAddAnalysisComment(trialId: number, analysisId: number) {
+  return useCommentMutation(trialId, (body: CommentInput) => addAnalysisComment(trialId, analysisId, body));
+}
+
+export function useChangeAnalysisComment(trialId: number, analysisId: number) {
+  return useCommentMutation(trialId, ({ commentId, ...body }: CommentUpdateInput & { commentId: number }) => changeAnalysisComment(trialId, analysisId, commentId, body));
+}
+
+export function useDeleteAnalysisComment(trialId: number, analysisId: number) {
+  return useCommentMutation(trialId, (commentId: number) => deleteAnalysisComment(trialId, analysisId, commentId));
 }

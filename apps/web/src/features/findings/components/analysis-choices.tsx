@@ -31,6 +31,9 @@ export function AnalysisChoices({
   showSites,
   dunnettAllowed,
   before,
+  after,
+  showTransform = true,
+  showSeparation = true,
 }: {
   options: AnalysisOptions;
   onChange: (next: AnalysisOptions) => void;
@@ -38,6 +41,11 @@ export function AnalysisChoices({
   /** Dunnett needs a control treatment. */
   dunnettAllowed: boolean;
   before?: ReactNode;
+  /** Choices of the model on screen, after the shared ones. */
+  after?: ReactNode;
+  /** The models other than the ANOVA take no transform, and some no mean separation. */
+  showTransform?: boolean;
+  showSeparation?: boolean;
 }) {
   return (
     <div className="fr-findings-choices" role="group" aria-label="Analysis choices">
@@ -50,33 +58,40 @@ export function AnalysisChoices({
           </HTMLSelect>
         </Choice>
       )}
-      <Choice label="Transform">
-        <HTMLSelect aria-label="Transform" value={options.transform} onChange={(e) => onChange({ ...options, transform: e.target.value as AnalysisTransform })}>
-          {ANALYSIS_TRANSFORMS.map((t) => (
-            <option key={t} value={t}>
-              {transformLabels[t]}
-            </option>
-          ))}
-        </HTMLSelect>
-      </Choice>
-      <Choice label="Mean separation">
-        <HTMLSelect aria-label="Mean separation" value={options.method} onChange={(e) => onChange({ ...options, method: e.target.value as SeparationMethod })}>
-          {SEPARATION_METHODS.filter((m) => m !== 'dunnett' || dunnettAllowed).map((m) => (
-            <option key={m} value={m}>
-              {methodLabels[m]}
-            </option>
-          ))}
-        </HTMLSelect>
-      </Choice>
-      <Choice label="α">
-        <HTMLSelect aria-label="Significance level α" value={options.alpha} onChange={(e) => onChange({ ...options, alpha: Number(e.target.value) })}>
-          {ALPHAS.map((a) => (
-            <option key={a} value={a}>
-              {a}
-            </option>
-          ))}
-        </HTMLSelect>
-      </Choice>
+      {showTransform && (
+        <Choice label="Transform">
+          <HTMLSelect aria-label="Transform" value={options.transform} onChange={(e) => onChange({ ...options, transform: e.target.value as AnalysisTransform })}>
+            {ANALYSIS_TRANSFORMS.map((t) => (
+              <option key={t} value={t}>
+                {transformLabels[t]}
+              </option>
+            ))}
+          </HTMLSelect>
+        </Choice>
+      )}
+      {showSeparation && (
+        <>
+          <Choice label="Mean separation">
+            <HTMLSelect aria-label="Mean separation" value={options.method} onChange={(e) => onChange({ ...options, method: e.target.value as SeparationMethod })}>
+              {SEPARATION_METHODS.filter((m) => m !== 'dunnett' || dunnettAllowed).map((m) => (
+                <option key={m} value={m}>
+                  {methodLabels[m]}
+                </option>
+              ))}
+            </HTMLSelect>
+          </Choice>
+          <Choice label="α">
+            <HTMLSelect aria-label="Significance level α" value={options.alpha} onChange={(e) => onChange({ ...options, alpha: Number(e.target.value) })}>
+              {ALPHAS.map((a) => (
+                <option key={a} value={a}>
+                  {a}
+                </option>
+              ))}
+            </HTMLSelect>
+          </Choice>
+        </>
+      )}
+      {after}
     </div>
   );
 }

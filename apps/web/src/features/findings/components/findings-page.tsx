@@ -1,22 +1,49 @@
 import { Button, Callout, HTMLSelect } from '@blueprintjs/core';
-import type { FindingsQuery, SeparationMethod, TrialDetail } from '@friable/contracts';
+import {
+  AFT_DISTRIBUTIONS,
+  COUNT_FAMILIES,
+  FINDINGS_ANALYSES,
+  REPEATED_COVARIANCES,
+  isModelFindings,
+  type AftDistribution,
+  type CountFamilyChoice,
+  type FindingsAnalysis,
+  type FindingsModelsQuery,
+  type FindingsQuery,
+  type RepeatedCovariance,
+  type SeparationMethod,
+  type TrialDetail,
+} from '@friable/contracts';
 import { useMemo } from 'react';
 import { Link, useSearchParams } from 'react-router-dom';
 import { EmptyState, ErrorState, LoadingState } from '../../../components/states';
 import { paths } from '../../../config/paths';
 import { ApiError } from '../../../lib/api-client';
 import { useDownloadExport } from '../api/download-export';
-import { findingsQueryOptions, getFindings, useFindings } from '../api/get-findings';
+import { findingsQueryOptions, getAnovaFindings, useFindings } from '../api/get-findings';
+import { useSiteRounds } from '../hooks/use-site-rounds';
 import { useSiteMeans } from '../hooks/use-site-means';
 import { AnalysisChoices, Choice, defaultAnalysisOptions, type AnalysisOptions } from './analysis-choices';
 import { FindingsCaption, FindingsResultView } from './findings-result-view';
+import { ModelFindingsView } from './models/model-findings-view';
+import { ModelPicker } from './models/model-picker';
 import { SnapshotView } from './snapshot-view';
 import { SnapshotsPanel } from './snapshots-panel';
 
+const oneOf = <T extends string>(allowed: readonly T[], value: string | null): T | undefined => (allowed.includes(value as T) ? (value as T) : undefined);
+
+const DISTRIBUTION_LABELS: Record<AftDistribution, string> = { weibull: 'Weibull', lognormal: 'Log-normal', loglogistic: 'Log-logistic' };
+const COVARIANCE_LABELS: Record<RepeatedCovariance, string> = { auto: 'Best by AIC', cs: 'Compound symmetry', ar1: 'AR(1) in days', unstructured: 'Unstructured' };
+const FAMILY_LABELS: Record<CountFamilyChoice, string> = { auto: 'Poisson, quasi if overdispersed', poisson: 'Poisson', quasipoisson: 'Quasi-Poisson' };
+
 /** The page's choices, read from the address so a view can be shared and reloaded. */
-function readChoices(params: URLSearchParams): Partial<FindingsQuery> & AnalysisOptions {
+function readChoices(params: URLSearchParams): Partial<FindingsModelsQuery> & AnalysisOptions {
   const number = (key: string) => (params.get(key) ? Number(params.get(key)) : undefined);
   return {
+    analysis: oneOf<FindingsAnalysis>(FINDINGS_ANALYSES, params.get('model')),
+    distribution: oneOf<AftDistribution>(AFT_DISTRIBUTIONS, params.get('distribution')),
+    covariance: oneOf<RepeatedCovariance>(REPEATED_COVARIANCES, params.get('covariance')),
+    family: oneOf<CountFamilyChoice>(COUNT_FAMILIES, params.get('family')),
     measureId: number('measure'),
     roundId: number('round'),
     siteId: number('site'),
@@ -28,7 +55,7 @@ function readChoices(params: URLSearchParams): Partial<FindingsQuery> & Analysis
 }
 
 /** Findings: one measure and round analysed at one site or all sites combined, with plots, saved analyses and exports. */
-export function FindingsPage({ trial }: { trial: TrialDetail }) {
+export function FindingsPage({ trial, meId }: { trial: TrialDetail; meId?: number }) {
   const [params, setParams] = useSearchParams();
   const choices = readChoices(params);
   const measures = useMemo(() => [...trial.measures].sort((a, b) => a.position - b.position), [trial.measures]);
@@ -42,7 +69,7 @@ export function FindingsPage({ trial }: { trial: TrialDetail }) {
   const combinable = trial.design !== 'crd' && trial.sites.length > 1;
   const siteId = choices.siteId ?? (combinable ? undefined : trial.sites[0]?.id);
   const options: AnalysisOptions = { method: choices.method, transform: choices.transform, alpha: choices.alpha, sitesAre: choices.sitesAre };
-  const query: FindingsQuery | null =
+  const query: FindingsModelsQuery | null =
     measure && rounds.length > 0
       ? {
           measureId: measure.id,
@@ -52,30 +79,43 @@ export function FindingsPage({ trial }: { trial: TrialDetail }) {
           transform: options.transform,
           method: options.method,
           alpha: options.alpha,
+          ...(choices.analysis ? { analysis: choices.analysis } : {}),
+          ...(choices.distribution ? { distribution: choices.distribution } : {}),
+          ...(choices.covariance ? { covariance: choices.covariance } : {}),
+          ...(choices.family ? { family: choices.family } : {}),
         }
       : null;
   const findings = useFindings(trial.id, query);
   const noData = findings.error instanceof ApiError && findings.error.status === 422 && /no values/i.test(findings.error.message);
   const analysedRoundId = findings.data?.context.choices.roundId;
   const round = chosenRound ?? rounds.find((r) => r.id === analysedRoundId) ?? rounds[0];
+  const shownAnalysis: FindingsAnalysis = findings.data ? (isModelFindings(findings.data) ? findings.data.analysis : 'anova') : (choices.analysis ?? 'anova');
   // The exact choices of the analysis on screen, round included, for saving and for the per-site plots.
-  const shownQuery: FindingsQuery | null = query && analysedRoundId ? { ...query, roundId: analysedRoundId } : query;
+  const { analysis: _analysis, distribution: _distribution, covariance: _covariance, family: _family, ...anovaQuery } = query ?? { measureId: 0 };
+  const shownQuery: FindingsQuery | null = query && analysedRoundId ? { ...anovaQuery, roundId: analysedRoundId } : query && anovaQuery;
 
   const combined = query !== null && !query.siteId && combinable;
-  // The per-site analyses feed only the interaction plot: asked once the combined one has answered,
-  // so they neither delay the first table nor run for a round that has no values.
+  // The per-site analyses feed only the interaction plot (ANOVA) and the per-site means over time (rounds over time):
+  // asked once the combined one has answered, so they neither delay the first table nor run for a round that has no values.
   const interaction = useSiteMeans(
-    combined && findings.isSuccess
+    combined && findings.isSuccess && shownAnalysis === 'anova'
       ? trial.sites.map((site) => {
           const siteQuery = { ...shownQuery!, siteId: site.id };
-          return { name: site.name, options: { queryKey: findingsQueryOptions(trial.id, siteQuery).queryKey, queryFn: () => getFindings(trial.id, siteQuery) } };
+          return { name: site.name, options: { queryKey: findingsQueryOptions(trial.id, { ...siteQuery, analysis: 'anova' }).queryKey, queryFn: () => getAnovaFindings(trial.id, siteQuery) } };
         })
       : [],
+  );
+  const siteRounds = useSiteRounds(
+    trial.id,
+    combined && findings.isSuccess && shownAnalysis === 'repeated' && query ? { ...query, ...(analysedRoundId ? { roundId: analysedRoundId } : {}), analysis: 'repeated' } : null,
+    trial.sites,
   );
   const download = useDownloadExport();
   const treatmentNames = useMemo(() => Object.fromEntries(trial.treatments.map((t) => [t.code, t.name])), [trial.treatments]);
 
-  function choose(next: Partial<Record<'measure' | 'round' | 'site' | 'sites' | 'transform' | 'method' | 'alpha' | 'analysis', string | undefined>>) {
+  function choose(
+    next: Partial<Record<'measure' | 'round' | 'site' | 'sites' | 'transform' | 'method' | 'alpha' | 'analysis' | 'model' | 'distribution' | 'covariance' | 'family', string | undefined>>,
+  ) {
     const merged = new URLSearchParams(params);
     for (const [key, value] of Object.entries(next)) {
       if (value === undefined || value === '') merged.delete(key);
@@ -87,7 +127,7 @@ export function FindingsPage({ trial }: { trial: TrialDetail }) {
   if (!measure) return <EmptyState title="No measures yet" description="The protocol needs a measure before there is anything to analyse." />;
   if (!round) return <EmptyState title="No rounds for this measure" description={`No assessment round records ${measure.name} yet.`} />;
   const openAnalysis = Number(params.get('analysis')) || null;
-  if (openAnalysis) return <SnapshotView trial={trial} analysisId={openAnalysis} treatmentNames={treatmentNames} onClose={() => choose({ analysis: undefined })} />;
+  if (openAnalysis) return <SnapshotView trial={trial} analysisId={openAnalysis} treatmentNames={treatmentNames} meId={meId} onClose={() => choose({ analysis: undefined })} />;
   const data = findings.data;
   const dunnettAllowed = trial.treatments.some((t) => t.isControl);
 
@@ -96,12 +136,47 @@ export function FindingsPage({ trial }: { trial: TrialDetail }) {
       <AnalysisChoices
         options={options}
         onChange={(next) => choose({ sites: next.sitesAre, transform: next.transform, method: next.method, alpha: String(next.alpha) })}
-        showSites={combined}
+        showSites={combined && (shownAnalysis === 'anova' || shownAnalysis === 'ancova')}
+        showTransform={shownAnalysis === 'anova'}
+        showSeparation={shownAnalysis === 'anova' || shownAnalysis === 'ancova'}
         dunnettAllowed={dunnettAllowed}
+        after={
+          shownAnalysis === 'censored' ? (
+            <Choice label="Time-ratio model">
+              <HTMLSelect aria-label="Time-ratio model" value={choices.distribution ?? 'weibull'} onChange={(e) => choose({ distribution: e.target.value })}>
+                {AFT_DISTRIBUTIONS.map((d) => (
+                  <option key={d} value={d}>
+                    {DISTRIBUTION_LABELS[d]}
+                  </option>
+                ))}
+              </HTMLSelect>
+            </Choice>
+          ) : shownAnalysis === 'repeated' ? (
+            <Choice label="Within-plot covariance">
+              <HTMLSelect aria-label="Within-plot covariance" value={choices.covariance ?? 'auto'} onChange={(e) => choose({ covariance: e.target.value })}>
+                {REPEATED_COVARIANCES.map((c) => (
+                  <option key={c} value={c}>
+                    {COVARIANCE_LABELS[c]}
+                  </option>
+                ))}
+              </HTMLSelect>
+            </Choice>
+          ) : shownAnalysis === 'counts' ? (
+            <Choice label="Count model">
+              <HTMLSelect aria-label="Count model" value={choices.family ?? 'auto'} onChange={(e) => choose({ family: e.target.value })}>
+                {COUNT_FAMILIES.map((f) => (
+                  <option key={f} value={f}>
+                    {FAMILY_LABELS[f]}
+                  </option>
+                ))}
+              </HTMLSelect>
+            </Choice>
+          ) : null
+        }
         before={
           <>
             <Choice label="Measure">
-              <HTMLSelect aria-label="Measure" value={measure.id} onChange={(e) => choose({ measure: e.target.value, round: undefined })}>
+              <HTMLSelect aria-label="Measure" value={measure.id} onChange={(e) => choose({ measure: e.target.value, round: undefined, model: undefined })}>
                 {measures.map((m) => (
                   <option key={m.id} value={m.id}>
                     {m.name}
@@ -162,8 +237,17 @@ export function FindingsPage({ trial }: { trial: TrialDetail }) {
             <FindingsCaption findings={data} />
             {findings.isFetching && <span className="fr-muted"> · updating…</span>}
           </p>
-          <FindingsResultView findings={data} treatmentNames={treatmentNames} interaction={interaction} />
-          {shownQuery && <SnapshotsPanel trial={trial} query={shownQuery} defaultTitle={`${data.context.measure.name}, ${data.context.round.label}, ${data.context.scope.label}`} onOpen={(id) => choose({ analysis: String(id) })} />}
+          {data.context.modelChoice && (
+            <ModelPicker choice={data.context.modelChoice} pending={findings.isFetching} onChoose={(analysis) => choose({ model: analysis === data.context.modelChoice!.defaultAnalysis ? undefined : analysis })} />
+          )}
+          {isModelFindings(data) ? (
+            <ModelFindingsView findings={data} treatmentNames={treatmentNames} siteRounds={siteRounds} />
+          ) : (
+            <>
+              <FindingsResultView findings={data} treatmentNames={treatmentNames} interaction={interaction} />
+              {shownQuery && <SnapshotsPanel trial={trial} query={shownQuery} defaultTitle={`${data.context.measure.name}, ${data.context.round.label}, ${data.context.scope.label}`} onOpen={(id) => choose({ analysis: String(id) })} />}
+            </>
+          )}
         </>
       ) : null}
     </div>

@@ -1,10 +1,11 @@
 import type { Data } from 'plotly.js-dist-min';
 import { probit } from 'simple-statistics';
 import type { AnovaAnswer, SeparationMethod } from '@friable/contracts';
+import { styleOf, treatmentStyles, type TreatmentStyle } from '../../../lib/treatment-style';
 import type { FindingsPlotInputs, PlotSeries } from './plot-inputs';
 import { PlotlyChart } from './plotly-chart';
 
-// Friable's earth tones, then steadier ones for many treatments or sites.
+// Friable's earth tones for what is not a treatment (sites, residuals); treatments keep their own style.
 const palette = ['#5b4332', '#b5603d', '#7d9470', '#c9a227', '#4f6d8a', '#8c5a7a', '#3f7f7a', '#a3785a', '#6b6b6b', '#d08c60'];
 
 /** Blom's plotting positions (i − 3/8)/(n + 1/4) turned into standard normal quantiles. */
@@ -12,15 +13,16 @@ function normalScores(count: number): number[] {
   return Array.from({ length: count }, (_, i) => probit((i + 1 - 0.375) / (count + 0.25)));
 }
 
-function seriesTraces(series: PlotSeries[], withErrors = false): Data[] {
+/** Lines per series: a treatment's series in its own colour and marker, a site's in the earth tones. */
+function seriesTraces(series: PlotSeries[], styles?: ReadonlyMap<string, TreatmentStyle>, withErrors = false): Data[] {
   return series.map((entry, index) => ({
     type: 'scatter',
     mode: 'lines+markers',
     name: entry.name,
     x: entry.points.map((p) => p.x),
     y: entry.points.map((p) => p.y),
-    line: { color: palette[index % palette.length], width: 2 },
-    marker: { color: palette[index % palette.length], size: 7 },
+    line: { color: styles ? styleOf(styles, entry.name).colour : palette[index % palette.length], width: 2 },
+    marker: styles ? { color: styleOf(styles, entry.name).colour, symbol: styleOf(styles, entry.name).marker, size: 8 } : { color: palette[index % palette.length], size: 7 },
     ...(withErrors && entry.points.some((p) => p.se != null)
       ? { error_y: { type: 'data', array: entry.points.map((p) => p.se ?? 0), visible: true, thickness: 1 } }
       : {}),
@@ -32,11 +34,16 @@ export interface FindingsPlotsProps extends FindingsPlotInputs {
   method: SeparationMethod;
   /** Draw only these (the report prints the means alone). */
   only?: Array<'values' | 'means'>;
+  /** The protocol's treatment codes in order and its control, so each treatment keeps its style on every chart. */
+  treatmentOrder?: string[];
+  control?: string;
 }
 
 /** Every Findings plot: values by treatment, means with SEs and letters, interaction, residuals, Q–Q, drainage, time. */
-export default function FindingsPlots({ answer, method, only, measureName, unit, values, interaction, notDrained, overTime }: FindingsPlotsProps) {
+export default function FindingsPlots({ answer, method, only, measureName, unit, values, interaction, notDrained, overTime, treatmentOrder, control }: FindingsPlotsProps) {
   const treatments = answer.means.map((m) => m.treatment);
+  const styles = treatmentStyles([...(treatmentOrder ?? []), ...treatments], control);
+  const style = (code: string) => styleOf(styles, code);
   const axisTitle = unit ? `${measureName} (${unit})` : measureName;
   const shown = (name: 'values' | 'means') => !only || only.includes(name);
   const measured = values.filter((v) => !v.censored);
@@ -56,18 +63,22 @@ export default function FindingsPlots({ answer, method, only, measureName, unit,
           label="Values by treatment"
           title="Values by treatment"
           data={[
-            {
-              type: 'box',
-              name: 'Measured',
-              x: measured.map((v) => v.treatment),
-              y: measured.map((v) => v.value),
-              boxpoints: 'all',
-              jitter: 0.35,
-              pointpos: 0,
-              marker: { color: palette[1], size: 6, opacity: 0.8 },
-              line: { color: palette[0], width: 1.5 },
-              fillcolor: 'rgba(125,148,112,0.18)',
-            },
+            ...treatments.map(
+              (code): Data => ({
+                type: 'box',
+                name: code,
+                legendgroup: 'measured',
+                showlegend: false,
+                x: measured.filter((v) => v.treatment === code).map((v) => v.treatment),
+                y: measured.filter((v) => v.treatment === code).map((v) => v.value),
+                boxpoints: 'all',
+                jitter: 0.35,
+                pointpos: 0,
+                marker: { color: style(code).colour, symbol: style(code).marker, size: 7, opacity: 0.85 },
+                line: { color: style(code).isControl ? '#5b5b5b' : style(code).colour, width: 1.5 },
+                fillcolor: 'rgba(0,0,0,0)',
+              }),
+            ),
             ...(censored.length
               ? [
                   {
@@ -96,7 +107,7 @@ export default function FindingsPlots({ answer, method, only, measureName, unit,
               x: treatments,
               y: answer.means.map((m) => m.mean),
               error_y: { type: 'data', array: answer.means.map((m) => m.se), visible: true, thickness: 1.5, color: palette[0] },
-              marker: { color: palette[1], size: 11, symbol: 'diamond' },
+              marker: { color: answer.means.map((m) => style(m.treatment).colour), size: 12, symbol: answer.means.map((m) => style(m.treatment).marker), line: { width: 1, color: '#2b2420' } },
             },
           ]}
           layout={{
@@ -154,7 +165,7 @@ export default function FindingsPlots({ answer, method, only, measureName, unit,
         <PlotlyChart
           label="Share of plots not yet drained"
           title="Share of plots not yet drained"
-          data={seriesTraces(notDrained.series).map((trace) => ({ ...trace, line: { ...(trace as { line?: object }).line, shape: 'hv' } }) as Data)}
+          data={seriesTraces(notDrained.series, styles).map((trace) => ({ ...trace, line: { ...(trace as { line?: object }).line, shape: 'hv' } }) as Data)}
           layout={{ xaxis: { title: { text: `Time (${notDrained.unit})` } }, yaxis: { title: { text: 'Share not drained' }, tickformat: '.0%', range: [0, 1.05] } }}
         />
       )}
@@ -162,7 +173,7 @@ export default function FindingsPlots({ answer, method, only, measureName, unit,
         <PlotlyChart
           label="Treatment means over time"
           title="Treatment means across rounds"
-          data={seriesTraces(overTime, true)}
+          data={seriesTraces(overTime, styles, true)}
           layout={{ xaxis: { title: { text: 'Round' }, type: 'category' }, yaxis: { title: { text: axisTitle } } }}
         />
       )}

@@ -1,4 +1,4 @@
-import type { Findings } from '@friable/contracts';
+import type { Findings, FindingsAnswer } from '@friable/contracts';
 import { contextPlots } from './context-plots';
 import { FindingsView } from './findings-view';
 import { inProtocolOrder } from './stat-format';
@@ -27,12 +27,13 @@ export function FindingsResultView({ findings, treatmentNames, interaction }: { 
   );
 }
 
-/** "drain time (s) · Day 14 · all sites combined (…)", the line above an analysis. */
-export function FindingsCaption({ findings }: { findings: Findings }) {
+/** "drain time (s) · Day 14 · all sites combined (…)", the line above an analysis (rounds over time: "Day 0 to Day 14"). */
+export function FindingsCaption({ findings }: { findings: FindingsAnswer }) {
   const { measure, round, scope } = findings.context;
+  const rounds = 'rounds' in findings.context && findings.context.rounds && findings.context.rounds.length > 1 ? findings.context.rounds : null;
   return (
     <>
-      <strong>{measure.name}</strong> ({measure.unit}) · {round.label} · {scope.label}
+      <strong>{measure.name}</strong> ({measure.unit}) · {rounds ? `${rounds[0]!.label} to ${rounds[rounds.length - 1]!.label}` : round.label} · {scope.label}
       {scope.siteNames.length > 1 ? ` (${scope.siteNames.join(', ')})` : ''}
     </>
   );

@@ -48,7 +48,7 @@ export function FindingsView(props: FindingsViewProps) {
         <h3 id="fr-plots-title" className="fr-findings-heading">
           Plots
         </h3>
-        <LazyFindingsPlots answer={answer} method={method} {...props.plots} />
+        <LazyFindingsPlots answer={answer} method={method} {...props.plots} treatmentOrder={props.treatmentNames ? Object.keys(props.treatmentNames) : undefined} control={control} />
       </section>
     </div>
   );

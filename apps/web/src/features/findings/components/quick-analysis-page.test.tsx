@@ -28,7 +28,7 @@ const answer = {
 };
 
 describe('QuickAnalysisPage', () => {
-  beforeEach(() => window.localStorage.setItem('friable.accessToken', 'token'));
+  beforeEach(() => window.localStorage.setItem('friable.signedIn', '1'));
   afterEach(() => vi.unstubAllGlobals());
 
   it('guesses the columns and design of pasted data and shows the ANOVA, letters and warnings', async () => {

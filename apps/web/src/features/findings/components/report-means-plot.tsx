@@ -1,8 +1,10 @@
 import type { ReportMean } from '@friable/contracts';
+import { styleOf, treatmentStyles } from '../../../lib/treatment-style';
 import { PlotlyChart } from './plotly-chart';
 
 /** The report's plot of one measure: least-squares means with SE bars and their letters (loaded lazily with Plotly). */
-export default function ReportMeansPlot({ means, measureName, unit }: { means: ReportMean[]; measureName: string; unit: string }) {
+export default function ReportMeansPlot({ means, measureName, unit, treatmentOrder, control }: { means: ReportMean[]; measureName: string; unit: string; treatmentOrder: string[]; control?: string }) {
+  const styles = treatmentStyles([...treatmentOrder, ...means.map((m) => m.treatment)], control);
   return (
     <div className="fr-findings-plots">
       <PlotlyChart
@@ -15,7 +17,7 @@ export default function ReportMeansPlot({ means, measureName, unit }: { means: R
             x: means.map((m) => m.treatment),
             y: means.map((m) => m.mean),
             error_y: { type: 'data', array: means.map((m) => m.se), visible: true, thickness: 1.5, color: '#5b4332' },
-            marker: { color: '#b5603d', size: 11, symbol: 'diamond' },
+            marker: { color: means.map((m) => styleOf(styles, m.treatment).colour), symbol: means.map((m) => styleOf(styles, m.treatment).marker), size: 12, line: { width: 1, color: '#2b2420' } },
           },
         ]}
         layout={{

@@ -1,5 +1,5 @@
 import { Button, Callout, H2, HTMLTable } from '@blueprintjs/core';
-import type { ReportMeasure, TrialDetail } from '@friable/contracts';
+import type { ReportMeasure, ReportReview, TrialDetail } from '@friable/contracts';
 import { lazy, Suspense } from 'react';
 import { Link } from 'react-router-dom';
 import { ErrorState, LoadingState } from '../../../components/states';
@@ -8,6 +8,7 @@ import { designLabels, formatArea, formatDate, formatRate } from '../../../lib/f
 import { useReport } from '../api/get-report';
 import { AnovaTable } from './anova-table';
 import { RankTestPanel } from './rank-test-panel';
+import { SignOffLine } from './review-panel';
 import { formatMeasureValue, methodLabels } from './stat-format';
 import { inProtocolOrder } from './stat-format';
 
@@ -92,8 +93,9 @@ export function ReportPage({ trial }: { trial: TrialDetail }) {
         </HTMLTable>
       </div>
       {r.measures.map((m) => (
-        <ReportMeasureSection key={m.measure.id} entry={m} treatmentOrder={p.treatments.map((t) => t.code)} />
+        <ReportMeasureSection key={m.measure.id} entry={m} treatmentOrder={p.treatments.map((t) => t.code)} control={p.treatments.find((t) => t.isControl)?.code} />
       ))}
+      <ReportReviews reviews={r.reviews} />
       <section className="fr-report__measure">
         <h3 className="fr-findings-heading">Cautions</h3>
         {r.cautions.length ? (
@@ -117,7 +119,7 @@ export function ReportPage({ trial }: { trial: TrialDetail }) {
   );
 }
 
-function ReportMeasureSection({ entry, treatmentOrder }: { entry: ReportMeasure; treatmentOrder: string[] }) {
+function ReportMeasureSection({ entry, treatmentOrder, control }: { entry: ReportMeasure; treatmentOrder: string[]; control?: string }) {
   const { measure } = entry;
   const means = inProtocolOrder(entry.means, treatmentOrder);
   const headingId = `fr-report-measure-${measure.id}`;
@@ -164,7 +166,7 @@ function ReportMeasureSection({ entry, treatmentOrder }: { entry: ReportMeasure;
           </p>
           {entry.rankTest && <RankTestPanel kind={entry.rankTest.test} answer={entry.rankTest} />}
           <Suspense fallback={<LoadingState what="the plot" />}>
-            <ReportMeansPlot means={means} measureName={measure.name} unit={measure.unit} />
+            <ReportMeansPlot means={means} measureName={measure.name} unit={measure.unit} treatmentOrder={treatmentOrder} control={control} />
           </Suspense>
           {entry.warnings.length > 0 && (
             <ul className="fr-findings-checks">
@@ -174,6 +176,57 @@ function ReportMeasureSection({ entry, treatmentOrder }: { entry: ReportMeasure;
             </ul>
           )}
         </>
+      )}
+    </section>
+  );
+}
+
+/** Review: each saved analysis with its sign-offs (statements and states) and the comments still open. */
+function ReportReviews({ reviews }: { reviews: ReportReview[] }) {
+  return (
+    <section className="fr-report__measure" aria-labelledby="fr-report-review">
+      <h3 id="fr-report-review" className="fr-findings-heading">
+        Review and sign-off
+      </h3>
+      {reviews.length === 0 ? (
+        <p>No saved analysis of this trial has been signed off or commented on yet.</p>
+      ) : (
+        reviews.map((review) => (
+          <div key={review.analysisId} className="fr-report__review">
+            <h4>
+              {review.title} <span className="fr-muted fr-small">({review.measureName}, {review.roundLabel}, {review.scopeLabel})</span>
+            </h4>
+            <p>
+              <strong>{review.review.label}.</strong>
+              {review.review.awaiting.length > 0 ? ` Awaiting ${review.review.awaiting.join(', ')}.` : ''}
+            </p>
+            {review.signOffs.length > 0 && (
+              <ul className="fr-sign-offs" aria-label={`Sign-offs of ${review.title}`}>
+                {review.signOffs.map((s) => (
+                  <SignOffLine key={s.id} signOff={s} />
+                ))}
+              </ul>
+            )}
+            {review.openComments.length > 0 ? (
+              <>
+                <p>Open comments:</p>
+                <ul aria-label={`Open comments on ${review.title}`}>
+                  {review.openComments.map((c) => (
+                    <li key={c.id}>
+                      <span className="fr-muted fr-small">
+                        {c.authorName ?? 'Someone'}, {formatDate(c.createdAt)}
+                        {c.replyCount > 0 ? ` (${c.replyCount} repl${c.replyCount === 1 ? 'y' : 'ies'})` : ''}:
+                      </span>{' '}
+                      {c.body}
+                    </li>
+                  ))}
+                </ul>
+              </>
+            ) : (
+              <p className="fr-muted">No open comments.</p>
+            )}
+          </div>
+        ))
       )}
     </section>
   );

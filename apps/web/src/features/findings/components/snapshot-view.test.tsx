@@ -1,5 +1,5 @@
 import type { AnalysisSnapshot, Findings, TrialDetail } from '@friable/contracts';
-import { fireEvent, screen } from '@testing-library/react';
+import { fireEvent, screen, within } from '@testing-library/react';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { mockApi, renderWithApp } from '../../../test/render';
 import { SnapshotView } from './snapshot-view';
@@ -40,38 +40,103 @@ const result = {
     missing: { count: 0, reasons: [] },
   },
 } as unknown as Findings;
+const review = { expectedRole: 'reviewer', expected: 2, signed: 1, label: 'Signed by 1 of 2 reviewers', awaiting: ['Rafe'], lastRequestedAt: null };
+const signOff = {
+  id: 1,
+  analysisId: 9,
+  userId: 11,
+  name: 'Vera',
+  role: 'reviewer',
+  statement: 'Checked the layout and the model.',
+  signedAt: '2026-12-01T12:00:00.000Z',
+  dataHash: 'a'.repeat(64),
+  engineVersion: '0.1.0',
+  state: 'data-changed',
+};
 const snapshot = (extra: Partial<AnalysisSnapshot>) =>
-  ({ id: 9, trialId: 3, title: 'Week 4 yield', result, dataChanged: false, createdBy: 'Ines', createdAt: '2026-12-01T10:00:00.000Z', signedOffAt: null, signedOffBy: null, ...extra }) as AnalysisSnapshot;
+  ({ id: 9, trialId: 3, title: 'Week 4 yield', result, dataChanged: false, createdBy: 'Ines', createdAt: '2026-12-01T10:00:00.000Z', signedOffAt: null, signedOffBy: null, signOffs: [], review, ...extra }) as AnalysisSnapshot;
+const comment = (extra: object) => ({
+  id: 1,
+  analysisId: 9,
+  parentId: null,
+  body: 'Looks sound.',
+  authorId: 8,
+  authorName: 'Rafe',
+  createdAt: '2026-12-01T11:00:00.000Z',
+  editedAt: null,
+  deletedAt: null,
+  resolvedAt: null,
+  resolvedByName: null,
+  revisions: [],
+  ...extra,
+});
+const reviewerOnLockedTrial = { ...trial, status: 'locked', myRoles: ['reviewer'] } as TrialDetail;
 
 describe('SnapshotView', () => {
-  beforeEach(() => window.localStorage.setItem('friable.accessToken', 'token'));
+  beforeEach(() => window.localStorage.setItem('friable.signedIn', '1'));
   afterEach(() => vi.unstubAllGlobals());
 
-  it('shows the stored numbers with a notice that the data changed, and the comments', async () => {
+  it('shows the stored numbers, the review status, each sign-off with its state, and the comment threads', async () => {
     mockApi({
       'GET /api/auth/me': { status: 200, body: person },
-      'GET /api/trials/3/analyses/9': { status: 200, body: snapshot({ dataChanged: true }) },
-      'GET /api/trials/3/analyses/9/comments': { status: 200, body: [{ id: 1, analysisId: 9, body: 'Looks sound.', authorId: 8, authorName: 'Rafe', createdAt: '2026-12-01T11:00:00.000Z' }] },
+      'GET /api/trials/3/analyses/9': { status: 200, body: snapshot({ dataChanged: true, signOffs: [signOff] } as never) },
+      'GET /api/trials/3/analyses/9/comments': {
+        status: 200,
+        body: [
+          comment({ editedAt: '2026-12-01T11:30:00.000Z', revisions: [{ kind: 'edited', body: 'Looks fine.', at: '2026-12-01T11:30:00.000Z', byName: 'Rafe' }] }),
+          comment({ id: 2, parentId: 1, body: 'Agreed.', authorId: 7, authorName: 'Ines' }),
+          comment({ id: 3, body: '', deletedAt: '2026-12-01T12:00:00.000Z', authorId: 7, authorName: 'Ines' }),
+        ],
+      },
     });
-    renderWithApp(<SnapshotView trial={trial} analysisId={9} onClose={() => {}} />);
+    renderWithApp(<SnapshotView trial={trial} analysisId={9} meId={7} onClose={() => {}} />);
     expect(await screen.findByText('The data have changed since this analysis was saved')).toBeInTheDocument();
     expect(screen.getByRole('table', { name: 'Treatment means' })).toHaveTextContent('111 %');
+    expect(screen.getAllByText('Signed by 1 of 2 reviewers').length).toBeGreaterThan(0);
+    expect(screen.getByRole('list', { name: 'Sign-offs' })).toHaveTextContent('Vera (Reviewer)');
+    expect(screen.getByRole('list', { name: 'Sign-offs' })).toHaveTextContent('Data changed after sign-off');
     expect(await screen.findByText('Looks sound.')).toBeInTheDocument();
+    expect(screen.getByText('edited')).toBeInTheDocument();
+    expect(within(screen.getByRole('list', { name: 'Replies' })).getByText('Agreed.')).toBeInTheDocument();
+    expect(screen.getByText(/This comment was deleted on/)).toBeInTheDocument();
+    // Only one's own live comment can be edited: Ines's reply, not Rafe's comment nor the deleted one.
+    expect(screen.getAllByRole('button', { name: 'Edit' })).toHaveLength(1);
+    fireEvent.click(screen.getAllByRole('button', { name: 'History' })[0]);
+    expect(screen.getByRole('list', { name: 'Earlier versions' })).toHaveTextContent('Looks fine.');
+    // The investigator of a trial with reviewers asks for review rather than signing.
+    expect(screen.getByRole('button', { name: 'Ask the reviewers to review' })).toBeInTheDocument();
+    expect(screen.queryByRole('button', { name: 'Sign off with this statement' })).toBeNull();
   });
 
-  it("keeps the server's sentence when the sign-off is refused", async () => {
+  it('lets a reviewer of a locked trial sign off with a statement, and keeps the server’s sentence when refused', async () => {
     const calls = mockApi({
       'GET /api/auth/me': { status: 200, body: person },
       'GET /api/trials/3/analyses/9': { status: 200, body: snapshot({}) },
       'GET /api/trials/3/analyses/9/comments': { status: 200, body: [] },
-      'POST /api/trials/3/analyses/9/sign-off': {
+      'POST /api/trials/3/analyses/9/sign-offs': {
         status: 409,
-        body: { statusCode: 409, error: 'Conflict', message: 'Lock the trial before signing off an analysis, so its data cannot change after the sign-off.' },
+        body: { statusCode: 409, error: 'Conflict', message: 'This analysis was already signed off by you on 2026-12-01.' },
       },
     });
-    renderWithApp(<SnapshotView trial={trial} analysisId={9} onClose={() => {}} />);
-    fireEvent.click(await screen.findByRole('button', { name: 'Sign off this analysis' }));
-    expect(await screen.findByRole('alert')).toHaveTextContent('Lock the trial before signing off an analysis');
-    expect(calls.some((c) => c.method === 'POST' && c.path === '/api/trials/3/analyses/9/sign-off')).toBe(true);
+    renderWithApp(<SnapshotView trial={reviewerOnLockedTrial} analysisId={9} meId={7} onClose={() => {}} />);
+    const button = await screen.findByRole('button', { name: 'Sign off with this statement' });
+    expect(button).toBeDisabled();
+    fireEvent.change(screen.getByLabelText(/Your statement/), { target: { value: 'I checked the model.' } });
+    expect(button).toBeEnabled();
+    fireEvent.click(button);
+    expect(await screen.findByRole('alert')).toHaveTextContent('This analysis was already signed off by you');
+    const sent = calls.find((c) => c.method === 'POST' && c.path === '/api/trials/3/analyses/9/sign-offs');
+    expect(sent?.body).toEqual({ statement: 'I checked the model.' });
+  });
+
+  it('tells a reviewer that sign-off waits for the lock', async () => {
+    mockApi({
+      'GET /api/auth/me': { status: 200, body: person },
+      'GET /api/trials/3/analyses/9': { status: 200, body: snapshot({}) },
+      'GET /api/trials/3/analyses/9/comments': { status: 200, body: [] },
+    });
+    renderWithApp(<SnapshotView trial={{ ...reviewerOnLockedTrial, status: 'active' }} analysisId={9} meId={7} onClose={() => {}} />);
+    expect(await screen.findByText(/Sign-off opens once the investigator locks the trial/)).toBeInTheDocument();
+    expect(screen.queryByRole('button', { name: 'Sign off with this statement' })).toBeNull();
   });
 });

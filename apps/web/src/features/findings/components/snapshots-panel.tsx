@@ -4,6 +4,7 @@ import { useState } from 'react';
 import { formatDate } from '../../../lib/format';
 import { useAnalyses } from '../../../lib/api/get-analyses';
 import { useSaveAnalysis } from '../api/save-analysis';
+import { DATA_CHANGED_WORDS } from './review-panel';
 
 /** "Save this analysis" (investigators and reviewers) and the list of saved analyses, each opened with its stored numbers. */
 export function SnapshotsPanel({ trial, query, defaultTitle, onOpen }: { trial: TrialDetail; query: FindingsQuery; defaultTitle: string; onOpen: (analysisId: number) => void }) {
@@ -49,9 +50,12 @@ export function SnapshotsPanel({ trial, query, defaultTitle, onOpen }: { trial: 
                 {a.measureName} · {a.roundLabel} · {a.scopeLabel} · saved by {a.createdBy ?? 'someone'} on {formatDate(a.createdAt)}
                 {a.commentCount > 0 ? ` · ${a.commentCount} comment${a.commentCount === 1 ? '' : 's'}` : ''}
               </span>
-              {a.signedOffAt && (
-                <Tag intent="success" minimal icon="endorsed">
-                  Signed off{a.signedOffBy ? ` by ${a.signedOffBy}` : ''}
+              <Tag intent={a.review.expected > 0 && a.review.signed >= a.review.expected ? 'success' : 'none'} minimal icon="endorsed">
+                {a.review.label}
+              </Tag>
+              {a.signOffs.some((s) => s.state === 'data-changed') && (
+                <Tag intent="warning" minimal icon="history">
+                  {DATA_CHANGED_WORDS}
                 </Tag>
               )}
             </li>

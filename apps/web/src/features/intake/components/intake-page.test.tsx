@@ -70,7 +70,7 @@ async function chooseFile(text = template) {
 
 describe('IntakePage', () => {
   beforeEach(() => {
-    window.localStorage.setItem('friable.accessToken', 'token');
+    window.localStorage.setItem('friable.signedIn', '1');
     FakeUpload.sent = [];
     FakeUpload.replies = [];
     vi.stubGlobal('XMLHttpRequest', FakeUpload);

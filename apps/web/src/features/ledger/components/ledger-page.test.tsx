@@ -67,7 +67,7 @@ async function typeInto(cellText: string, text: string) {
 }
 
 describe('LedgerPage', () => {
-  beforeEach(() => window.localStorage.setItem('friable.accessToken', 'token'));
+  beforeEach(() => window.localStorage.setItem('friable.signedIn', '1'));
   afterEach(() => vi.unstubAllGlobals());
 
   it('shows a row per plot and a column per measure, censored and missing values marked apart, with a legend', async () => {
@@ -174,7 +174,13 @@ describe('LedgerPage', () => {
     doubleClick(within(mainGrid()).getByText('412'));
     expect(within(mainGrid()).queryByDisplayValue('412')).not.toBeInTheDocument();
     await userEvent.click(screen.getByRole('button', { name: 'Unlock the trial' }));
-    await waitFor(() => expect(calls.find((c) => c.method === 'PATCH')).toMatchObject({ method: 'PATCH', path: '/api/trials/3', body: { status: 'active' } }));
+    const dialog = await screen.findByRole('dialog');
+    expect(dialog).toHaveTextContent('Data changed after sign-off');
+    await userEvent.type(within(dialog).getByLabelText(/Why unlock/), 'A slipped decimal at plot 3.');
+    await userEvent.click(within(dialog).getByRole('button', { name: 'Unlock' }));
+    await waitFor(() =>
+      expect(calls.find((c) => c.method === 'PATCH')).toMatchObject({ method: 'PATCH', path: '/api/trials/3', body: { status: 'active', reason: 'A slipped decimal at plot 3.' } }),
+    );
   });
 
   it('lets a collaborator read another site without editing, and offers no lock', async () => {

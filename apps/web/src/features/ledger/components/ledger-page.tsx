@@ -1,8 +1,9 @@
-import { Button, Callout, HTMLSelect } from '@blueprintjs/core';
+import { Button, Callout } from '@blueprintjs/core';
 import type { Measure, Observation, Plot, TrialDetail } from '@friable/contracts';
 import { useMemo, useState } from 'react';
 import { useSearchParams } from 'react-router-dom';
 import { ConfirmButton } from '../../../components/confirm-button';
+import { RoundPicker, SitePicker } from '../../../components/site-round-pickers';
 import { EmptyState, ErrorState, LoadingState } from '../../../components/states';
 import { formatNumber } from '../../../lib/format';
 import { personLocale } from '../../../lib/person-locale';
@@ -21,6 +22,7 @@ import { LedgerGrid } from './ledger-grid';
 import { LedgerLegend } from './ledger-legend';
 import { measureHeading } from '../../../lib/measure-heading';
 import { PhotoDialog } from './photo-dialog';
+import { UnlockButton } from './unlock-dialog';
 
 /** Ledger: per site and round, every plot's values in an editable grid, with history, photos and the trial lock. */
 export function LedgerPage({ trial }: { trial: TrialDetail }) {
@@ -33,7 +35,7 @@ export function LedgerPage({ trial }: { trial: TrialDetail }) {
   const observations = useObservations(trial.id, site?.randomizedAt ? site.id : undefined, round?.id);
   const access = valueAccess(trial, site?.id);
   const cells = useCellSave(trial.id, site?.id ?? 0, round?.id ?? 0);
-  const lock = useSetTrialStatus(trial.id);
+  const lock = useSetTrialStatus(trial.id, trial.version);
   const [focused, setFocused] = useState<{ plot: Plot; measure: Measure } | null>(null);
   const [historyOf, setHistoryOf] = useState<Observation | null>(null);
   const [photoOf, setPhotoOf] = useState<Plot | null>(null);
@@ -75,27 +77,8 @@ export function LedgerPage({ trial }: { trial: TrialDetail }) {
   return (
     <div className="fr-ledger">
       <div className="fr-ledger__bar">
-        <label className="fr-site-picker">
-          <span>Site</span>
-          <HTMLSelect aria-label="Site" value={site.id} onChange={(event) => pick({ site: Number(event.target.value) })}>
-            {trial.sites.map((s) => (
-              <option key={s.id} value={s.id}>
-                {s.name}
-                {trial.mySiteIds.includes(s.id) ? ' (your site)' : ''}
-              </option>
-            ))}
-          </HTMLSelect>
-        </label>
-        <label className="fr-site-picker">
-          <span>Round</span>
-          <HTMLSelect aria-label="Round" value={round.id} onChange={(event) => pick({ round: Number(event.target.value) })}>
-            {rounds.map((r) => (
-              <option key={r.id} value={r.id}>
-                {r.label}
-              </option>
-            ))}
-          </HTMLSelect>
-        </label>
+        <SitePicker trial={trial} value={site.id} onChange={(siteId) => pick({ site: siteId })} />
+        <RoundPicker rounds={rounds} value={round.id} onChange={(roundId) => pick({ round: roundId ?? undefined })} />
         {investigator && trial.status === 'active' && (
           <ConfirmButton
             text="Lock the trial"
@@ -103,10 +86,10 @@ export function LedgerPage({ trial }: { trial: TrialDetail }) {
             intent="warning"
             loading={lock.isPending}
             question="Lock the trial for analysis? Nobody can change its protocol or values until you unlock it."
-            onConfirm={() => lock.mutate({ status: 'locked', version: trial.version })}
+            onConfirm={() => lock.mutate('locked')}
           />
         )}
-        {investigator && trial.status === 'locked' && <Button icon="unlock" text="Unlock the trial" loading={lock.isPending} onClick={() => lock.mutate({ status: 'active', version: trial.version })} />}
+        {investigator && trial.status === 'locked' && <UnlockButton lock={lock} />}
       </div>
       {lock.error && (
         <Callout intent="danger" compact role="alert">

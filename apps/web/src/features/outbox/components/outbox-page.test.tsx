@@ -15,7 +15,7 @@ const mail = (id: string, subject: string, text: string) => ({
 });
 
 describe('OutboxPage', () => {
-  beforeEach(() => window.localStorage.setItem('friable.accessToken', 'token'));
+  beforeEach(() => window.localStorage.setItem('friable.signedIn', '1'));
   afterEach(() => vi.unstubAllGlobals());
 
   it('opens the newest e-mail with its link clickable, and the others on request', async () => {

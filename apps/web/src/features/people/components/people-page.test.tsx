@@ -12,7 +12,7 @@ describe('PeoplePage', () => {
   afterEach(() => vi.unstubAllGlobals());
 
   it('lists every account with its state, and nothing to do on one’s own row', async () => {
-    mockApi({ 'GET /api/users': { status: 200, body: [admin, grower, gone] } });
+    mockApi({ 'GET /api/users': { status: 200, body: [admin, { ...grower, lastSignInAt: '2026-12-01T09:30:00.000Z' }, gone] } });
     renderWithApp(<PeoplePage me={admin} />);
     const table = await screen.findByRole('table', { name: 'Accounts' });
     const rows = within(table).getAllByRole('row');
@@ -21,6 +21,9 @@ describe('PeoplePage', () => {
     expect(within(rows[1]).getByText('Administrator')).toBeInTheDocument();
     expect(within(rows[1]).getByText('you')).toBeInTheDocument();
     expect(within(rows[2]).getByRole('button', { name: 'Deactivate Gale Moss' })).toBeInTheDocument();
+    expect(within(table).getByRole('columnheader', { name: 'Last sign-in' })).toBeInTheDocument();
+    expect(within(rows[2]).getByText('1 Dec 2026')).toBeInTheDocument();
+    expect(within(rows[3]).getByText('never')).toBeInTheDocument();
     expect(within(rows[3]).getByText('Deactivated')).toBeInTheDocument();
     expect(within(rows[3]).getByRole('button', { name: 'Reactivate Former Member' })).toBeInTheDocument();
   });

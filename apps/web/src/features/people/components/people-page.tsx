@@ -38,6 +38,7 @@ export function PeoplePage({ me }: { me: PublicUser }) {
               <th>E-mail</th>
               <th>Account</th>
               <th>Since</th>
+              <th>Last sign-in</th>
               <th>
                 <span className="fr-visually-hidden">Actions</span>
               </th>
@@ -65,6 +66,7 @@ export function PeoplePage({ me }: { me: PublicUser }) {
                   )}
                 </td>
                 <td>{formatDate(person.createdAt)}</td>
+                <td>{person.lastSignInAt ? formatDate(person.lastSignInAt) : <span className="fr-muted">never</span>}</td>
                 <td className="fr-people__actions">
                   {person.id === me.id ? (
                     <span className="fr-muted">you</span>

@@ -54,7 +54,7 @@ async function fill(values: Record<string, string>) {
 }
 
 describe('PlannerPage', () => {
-  beforeEach(() => window.localStorage.setItem('friable.accessToken', 'token'));
+  beforeEach(() => window.localStorage.setItem('friable.signedIn', '1'));
   afterEach(() => vi.unstubAllGlobals());
 
   it('asks for the blocks needed, then the power at each number of blocks, and shows the recommendation and curve', async () => {

@@ -1,8 +1,7 @@
-import Plotly from 'plotly.js-dist-min';
-import createPlotlyComponent from 'react-plotly.js/factory';
+import { Plot } from '../../../lib/plotly';
+import { plotlyConfig } from '../../../lib/plotly-config';
 
-// The minified Plotly bundle is large: this file is only ever loaded lazily, by the Planner.
-const Plot = createPlotlyComponent(Plotly);
+// Plotly is large: this file is only ever loaded lazily, by the Planner.
 
 const clay = '#b5603d';
 const sage = '#7d9470';
@@ -55,7 +54,7 @@ export default function PowerCurve({ points, targetPower, recommended }: { point
       className="fr-planner__plot"
       data={data}
       layout={layout}
-      config={{ displayModeBar: false, responsive: true }}
+      config={{ ...plotlyConfig, displayModeBar: false }}
       useResizeHandler
       style={{ width: '100%', height: 320 }}
     />

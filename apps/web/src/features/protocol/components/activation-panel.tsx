@@ -27,6 +27,16 @@ export function ActivationPanel({ trial, canEdit }: { trial: TrialDetail; canEdi
           </ul>
         </>
       )}
+      {trial.activation.warnings.length > 0 && (
+        <>
+          <p className="fr-activation__warnings-title">Worth reading before the trial starts (these do not stop it):</p>
+          <ul className="fr-activation__warnings" aria-label="Design warnings">
+            {trial.activation.warnings.map((warning) => (
+              <li key={warning}>{warning}</li>
+            ))}
+          </ul>
+        </>
+      )}
       {canEdit && (
         <Button
           intent={ready ? 'success' : 'none'}

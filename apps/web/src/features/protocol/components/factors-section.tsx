@@ -1,18 +1,25 @@
-import { Button, InputGroup, Section, SectionCard } from '@blueprintjs/core';
-import type { Factor, FactorsInput, TrialDetail } from '@friable/contracts';
-import { useState } from 'react';
-import { Field } from '../../../components/field-errors';
-import { FormDialog } from '../../../components/form-dialog';
-import { usePutFactors } from '../api/put-factors';
-import { conflictCurrent, type EditConflict } from '../../../lib/edit-conflict';
-import { VersionConflict } from './version-conflict';
+import { Button, Section, SectionCard } from '@blueprintjs/core';
+import type { FactorLevel, TrialDetail } from '@friable/contracts';
+import { DESIGN_RULES } from '@friable/field';
+import { Fragment, useState } from 'react';
+import { formatRate } from '../../../lib/format';
+import { FactorsDialog } from './factors-dialog';
+import { appliedToWords, factorRole, orderedFactors } from './factor-roles';
 
-type FactorDraft = { name: string; levels: Array<{ code: string; name: string }> };
+/** "C (Compost 2.5 cm dug in, 2.5 cm deep (layer))": a level with its rate when something is applied. */
+function levelText(level: FactorLevel): string {
+  const rate = level.rateValue !== null && level.rateUnit !== null ? `, ${formatRate(level.rateValue, level.rateUnit)}` : '';
+  return `${level.code} (${level.name}${rate})`;
+}
 
-/** A factorial trial's two factors and their levels; the treatments are every combination. */
+/** A factorial's or split plot's factors, where each is applied, and their levels; the treatments are every combination. */
 export function FactorsSection({ trial, canEdit }: { trial: TrialDetail; canEdit: boolean }) {
   const [editing, setEditing] = useState(false);
-  const factors = [...trial.factors].sort((a, b) => a.position - b.position);
+  const factors = orderedFactors(trial.factors);
+  const rule = DESIGN_RULES[trial.design];
+  const example = rule.split
+    ? 'A split plot puts the whole-plot factor on whole beds (e.g. compost: none, dug in) and the sub-plot factor on parts of each bed (e.g. mulch: bare, straw, woodchip).'
+    : 'A factorial crosses two to four factors, e.g. amendment (none, gypsum) × mulch (bare, straw).';
   return (
     <Section
       title="Factors"
@@ -22,105 +29,23 @@ export function FactorsSection({ trial, canEdit }: { trial: TrialDetail; canEdit
     >
       <SectionCard>
         {factors.length === 0 ? (
-          <p className="fr-muted">No factors yet. A factorial trial crosses two factors, e.g. amendment (none, gypsum) × mulch (bare, straw).</p>
+          <p className="fr-muted">No factors yet. {example}</p>
         ) : (
-          <dl className="fr-facts-list">
-            {factors.map((factor) => (
-              <FactorFacts key={factor.id} name={`${factor.position === 1 ? 'A' : 'B'}: ${factor.name}`} levels={factor.levels} />
+          <dl className="fr-facts-list" aria-label="Factors">
+            {factors.map((factor, index) => (
+              <Fragment key={factor.id}>
+                <dt>
+                  {factorRole(trial.design, index)}: {factor.name}
+                </dt>
+                <dd>
+                  <span className="fr-muted">Applied {appliedToWords(factor.appliedTo)}.</span> {factor.levels.map(levelText).join(', ')}
+                </dd>
+              </Fragment>
             ))}
           </dl>
         )}
       </SectionCard>
       {editing && <FactorsDialog trial={trial} onClose={() => setEditing(false)} />}
     </Section>
-  );
-}
-
-function FactorFacts({ name, levels }: { name: string; levels: Array<{ code: string; name: string }> }) {
-  return (
-    <>
-      <dt>{name}</dt>
-      <dd>{levels.map((level) => `${level.code} (${level.name})`).join(', ')}</dd>
-    </>
-  );
-}
-
-const emptyFactor = (): FactorDraft => ({ name: '', levels: [{ code: '', name: '' }, { code: '', name: '' }] });
-
-function FactorsDialog({ trial, onClose }: { trial: TrialDetail; onClose: () => void }) {
-  const put = usePutFactors(trial.id);
-  const initial = [...trial.factors].sort((a, b) => a.position - b.position).map((f) => ({ name: f.name, levels: f.levels.map((l) => ({ code: l.code, name: l.name })) }));
-  const [factors, setFactors] = useState<FactorDraft[]>([initial[0] ?? emptyFactor(), initial[1] ?? emptyFactor()]);
-
-  function change(index: number, next: FactorDraft) {
-    setFactors((all) => all.map((f, i) => (i === index ? next : f)));
-  }
-  const [conflict, setConflict] = useState<EditConflict<FactorsInput, FactorsInput> | null>(null);
-  /** Each factor goes with the version of the factor stored at its place (`stored`: as read, or as a conflict answered). */
-  function send(input: FactorsInput, stored: Array<{ version: number }>) {
-    const versioned = { factors: input.factors.map((f, index) => (stored[index] ? { ...f, version: stored[index].version } : f)) };
-    put.mutate(versioned, {
-      onSuccess: onClose,
-      onError: (error) => {
-        const current = conflictCurrent<Factor[]>(error);
-        if (!current) return;
-        put.reset();
-        setConflict({ mine: input, current: { factors: current } });
-      },
-    });
-  }
-  function submit() {
-    const input: FactorsInput = {
-      factors: factors.map((f) => ({ name: f.name.trim(), levels: f.levels.filter((l) => l.code.trim() || l.name.trim()).map((l) => ({ code: l.code.trim(), name: l.name.trim() })) })),
-    };
-    send(input, [...trial.factors].sort((a, b) => a.position - b.position));
-  }
-
-  return (
-    <>
-      <FormDialog title="Factors" icon="grid" wide onClose={onClose} onSubmit={submit} submitText="Save factors" pending={put.isPending} error={put.error} shownFields={['factors']}>
-            <p className="fr-muted">Saving replaces the treatments with every combination of the levels; rates are then set per treatment.</p>
-            {factors.map((factor, index) => (
-              <fieldset key={index} className="fr-fieldset">
-                <legend>Factor {index === 0 ? 'A' : 'B'}</legend>
-                <Field label="Factor name" field={`factors.${index}.name`} error={put.error}>
-                  <InputGroup id={`fr-field-factors.${index}.name`} value={factor.name} onChange={(e) => change(index, { ...factor, name: e.target.value })} />
-                </Field>
-                {factor.levels.map((level, levelIndex) => (
-                  <div className="fr-form-row" key={levelIndex}>
-                    <Field label={`Level ${levelIndex + 1} code`} field={`factors.${index}.levels.${levelIndex}.code`} error={put.error}>
-                      <InputGroup
-                        id={`fr-field-factors.${index}.levels.${levelIndex}.code`}
-                        value={level.code}
-                        onChange={(e) => change(index, { ...factor, levels: factor.levels.map((l, i) => (i === levelIndex ? { ...l, code: e.target.value } : l)) })}
-                      />
-                    </Field>
-                    <Field label={`Level ${levelIndex + 1} name`} field={`factors.${index}.levels.${levelIndex}.name`} error={put.error}>
-                      <InputGroup
-                        id={`fr-field-factors.${index}.levels.${levelIndex}.name`}
-                        value={level.name}
-                        onChange={(e) => change(index, { ...factor, levels: factor.levels.map((l, i) => (i === levelIndex ? { ...l, name: e.target.value } : l)) })}
-                      />
-                    </Field>
-                  </div>
-                ))}
-                <Button variant="minimal" icon="add" text="Add a level" onClick={() => change(index, { ...factor, levels: [...factor.levels, { code: '', name: '' }] })} />
-              </fieldset>
-            ))}
-      </FormDialog>
-      <VersionConflict
-        what="the factors"
-        conflict={conflict}
-        onKeepMine={() => {
-          if (!conflict) return;
-          setConflict(null);
-          send(conflict.mine, conflict.current.factors as Factor[]);
-        }}
-        onTakeStored={() => {
-          setConflict(null);
-          onClose();
-        }}
-      />
-    </>
   );
 }

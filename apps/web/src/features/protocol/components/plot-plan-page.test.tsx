@@ -12,7 +12,7 @@ const base = {
 };
 
 describe('PlotPlanPage', () => {
-  beforeEach(() => window.localStorage.setItem('friable.accessToken', 'token'));
+  beforeEach(() => window.localStorage.setItem('friable.signedIn', '1'));
   afterEach(() => vi.unstubAllGlobals());
 
   it('starts a collaborator on their own site, with the map, legend and amounts per plot', async () => {
@@ -36,8 +36,9 @@ describe('PlotPlanPage', () => {
     expect(within(g40).getByText('1.24 kg')).toBeInTheDocument();
     const c2 = within(table).getByText('C2').closest('tr')!;
     expect(within(c2).getByText('73.2 L · 19.3 gal')).toBeInTheDocument();
-    expect(screen.getByText(/dust mask and eye protection/)).toBeInTheDocument();
-    expect(screen.getByText(/5-gallon bucket of wet clay is about 30 kg/)).toBeInTheDocument();
+    const screenPart = table.closest('.fr-screen-only') as HTMLElement;
+    expect(within(screenPart).getByText(/dust mask and eye protection/)).toBeInTheDocument();
+    expect(within(screenPart).getByText(/5-gallon bucket of wet clay is about 30 kg/)).toBeInTheDocument();
   });
 
   it('prints data sheets per round with a blank cell per measure and its unit, and a label per plot', async () => {
@@ -45,8 +46,22 @@ describe('PlotPlanPage', () => {
     renderWithApp(<PlotPlanPage trial={makeTrial()} />);
     await userEvent.click(await screen.findByRole('button', { name: 'Show Sheets' }));
     expect(screen.getByText('Data sheet — Week 2 (day 14, due 15 Mar 2027)')).toBeInTheDocument();
-    expect(screen.getByText('Drain time (s)')).toBeInTheDocument();
-    expect(screen.getByText(/written “>600”/)).toBeInTheDocument();
+    const sheet = screen.getByRole('table', { name: 'Data sheet Week 2 at Hollow Lane' });
+    const drain = within(sheet).getByRole('columnheader', { name: /Drain time/ });
+    expect(drain).toHaveTextContent('Drain times · cut-off 600'); // name, line break, unit and cut-off
+    expect(screen.getAllByText(/written “>600”, not 600/).length).toBeGreaterThan(0);
+    // Each plot's row carries its amount in both unit systems: 281 g of gypsum = 9.92 oz (NIST SP 811 pound).
+    const g40Row = within(sheet).getAllByText('G40')[0].closest('tr')!;
+    expect(within(g40Row).getByText('281 g (9.92 oz)')).toBeInTheDocument();
+    const compostRow = within(sheet).getAllByText('C2')[0].closest('tr')!;
+    expect(within(compostRow).getByText('73.2 L (19.3 gal)')).toBeInTheDocument();
+    // The cautions and the trial's own safety note are on the sheet itself.
+    const printed = sheet.closest('.fr-sheet') as HTMLElement;
+    expect(within(printed).getByText(/dust mask and eye protection/)).toBeInTheDocument();
+    expect(within(printed).getByText('This trial: Wear a dust mask when spreading gypsum.')).toBeInTheDocument();
+    // A QR code per plot opens it in the Round walk.
+    const qr = await within(g40Row).findByRole('img', { name: /^QR code: open HL-\d+ in the Round walk$/ });
+    expect(qr.getAttribute('src')).toMatch(/^data:image\/svg\+xml/);
     expect(screen.getByText('Plot labels')).toBeInTheDocument();
     expect(screen.getAllByText('CLAY-T · Hollow Lane · block 1')).toHaveLength(3);
   });

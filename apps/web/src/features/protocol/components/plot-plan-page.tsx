@@ -1,14 +1,18 @@
-import { Button, Callout, HTMLSelect, Section, SectionCard } from '@blueprintjs/core';
+import { Button, Callout, Section, SectionCard } from '@blueprintjs/core';
 import type { Site, TrialDetail } from '@friable/contracts';
+import { isFactorDesign } from '@friable/field';
 import { useMemo, useState } from 'react';
 import { useSearchParams } from 'react-router-dom';
 import { SafetyCautions } from '../../../components/safety-cautions';
+import { RoundPicker, SitePicker } from '../../../components/site-round-pickers';
 import { EmptyState, ErrorState, LoadingState } from '../../../components/states';
 import { formatArea, formatNumber } from '../../../lib/format';
 import { useAmounts } from '../api/get-amounts';
+import { useLevelAmounts } from '../api/get-level-amounts';
 import { useSitePlots } from '../../../lib/api/get-site-plots';
 import { SiteSheets } from './data-sheets';
 import { PlotLegend, PlotMap } from './plot-map';
+import { LevelAmounts } from './level-amounts';
 import { SiteAmounts } from './site-amounts';
 import { TemplateDownloads } from './template-downloads';
 import { treatmentSwatches } from './treatment-palette';
@@ -24,9 +28,14 @@ export function PlotPlanPage({ trial }: { trial: TrialDetail }) {
   const [params, setParams] = useSearchParams();
   const site = chooseSite(trial, params.get('site'));
   const plots = useSitePlots(trial.id, site?.randomizedAt ? site.id : undefined);
+  const factorDesign = isFactorDesign(trial.design);
   const amounts = useAmounts(trial.id);
+  const levelAmounts = useLevelAmounts(trial.id, factorDesign);
   const swatches = useMemo(() => treatmentSwatches(trial.treatments), [trial.treatments]);
   const [printLayout, setPrintLayout] = useState(false);
+  const rounds = useMemo(() => [...trial.rounds].sort((a, b) => a.dayOffset - b.dayOffset), [trial.rounds]);
+  const sheetRound = params.get('round');
+  const sheetRounds = sheetRound ? rounds.filter((r) => r.id === Number(sheetRound)) : rounds;
 
   if (!site) return <EmptyState title="No sites yet" description="Once the investigator adds a site and randomizes it, its plot plan appears here." />;
   const mine = trial.mySiteIds.includes(site.id);
@@ -34,22 +43,19 @@ export function PlotPlanPage({ trial }: { trial: TrialDetail }) {
   return (
     <div className={printLayout ? 'fr-plot-plan fr-plot-plan--print-layout' : 'fr-plot-plan'}>
       <div className="fr-plot-plan__bar fr-screen-only">
-        <label className="fr-site-picker">
-          <span>Site</span>
-          <HTMLSelect value={site.id} onChange={(e) => setParams({ site: e.target.value }, { replace: true })} aria-label="Site">
-            {trial.sites.map((s) => (
-              <option key={s.id} value={s.id}>
-                {s.name}
-                {trial.mySiteIds.includes(s.id) ? ' (your site)' : ''}
-              </option>
-            ))}
-          </HTMLSelect>
-        </label>
+        <SitePicker trial={trial} value={site.id} onChange={(siteId) => setParams({ site: String(siteId) }, { replace: true })} />
         <span className="fr-muted">
           {formatNumber(site.blocks, 0)} blocks · {formatArea(site.areaM2)} per plot{mine ? ' · your site' : ''}
         </span>
         {plots.data && plots.data.length > 0 && (
           <span className="fr-plot-plan__print">
+            <RoundPicker
+              label="Sheets for"
+              every="Every round"
+              rounds={rounds}
+              value={sheetRound ? Number(sheetRound) : null}
+              onChange={(roundId) => setParams(roundId ? { site: String(site.id), round: String(roundId) } : { site: String(site.id) }, { replace: true })}
+            />
             <Button icon={printLayout ? 'eye-open' : 'document'} text={printLayout ? 'Back to the plan' : 'Show Sheets'} onClick={() => setPrintLayout((on) => !on)} />
             <Button icon="print" intent="primary" text="Print Sheets" onClick={() => window.print()} />
           </span>
@@ -69,21 +75,34 @@ export function PlotPlanPage({ trial }: { trial: TrialDetail }) {
           <div className="fr-screen-only fr-plot-plan__screen">
             <Section title={`Plot plan — ${site.name}`} icon="grid-view" className="fr-section" subtitle={`Seed ${site.randomizationSeed ?? trial.seed}`}>
               <SectionCard>
-                <PlotMap plots={plots.data} treatments={trial.treatments} swatches={swatches} siteName={site.name} />
+                <PlotMap plots={plots.data} treatments={trial.treatments} factors={trial.factors} swatches={swatches} siteName={site.name} />
                 <PlotLegend treatments={trial.treatments} swatches={swatches} />
               </SectionCard>
             </Section>
           </div>
           <div className="fr-print-only">
-            <SiteSheets trial={trial} site={site} plots={plots.data} swatches={swatches} />
+            <SiteSheets trial={trial} site={site} plots={plots.data} swatches={swatches} amounts={amounts.data ?? []} rounds={sheetRounds} />
           </div>
         </>
       )}
 
       <div className="fr-screen-only">
-        <Section title="Amount per plot" icon="shopping-cart" className="fr-section" subtitle={`For ${formatArea(site.areaM2)} of surface per plot`}>
+        <Section
+          title={factorDesign ? 'Amount per unit each factor goes on' : 'Amount per plot'}
+          icon="shopping-cart"
+          className="fr-section"
+          subtitle={factorDesign ? `${formatArea(site.areaM2)} of surface per plot; a whole plot holds its sub plots` : `For ${formatArea(site.areaM2)} of surface per plot`}
+        >
           <SectionCard>
-            {amounts.isPending ? (
+            {factorDesign ? (
+              levelAmounts.isPending ? (
+                <LoadingState what="the amounts" />
+              ) : levelAmounts.isError ? (
+                <ErrorState title="The amounts could not be worked out" error={levelAmounts.error} onRetry={() => levelAmounts.refetch()} />
+              ) : (
+                <LevelAmounts trial={trial} site={site} amounts={levelAmounts.data} />
+              )
+            ) : amounts.isPending ? (
               <LoadingState what="the amounts" />
             ) : amounts.isError ? (
               <ErrorState title="The amounts could not be worked out" error={amounts.error} onRetry={() => amounts.refetch()} />

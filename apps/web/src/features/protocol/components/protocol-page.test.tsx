@@ -8,7 +8,7 @@ import { ProtocolPage } from './protocol-page';
 const base = { 'GET /api/auth/me': { status: 200, body: person }, 'GET /api/trials/3/amounts': { status: 200, body: amounts } };
 
 describe('ProtocolPage', () => {
-  beforeEach(() => window.localStorage.setItem('friable.accessToken', 'token'));
+  beforeEach(() => window.localStorage.setItem('friable.signedIn', '1'));
   afterEach(() => vi.unstubAllGlobals());
 
   it('shows the investigator the protocol with edit controls and each treatment’s amount per plot at each site', async () => {

@@ -1,4 +1,5 @@
 import type { TrialDetail } from '@friable/contracts';
+import { isFactorDesign } from '@friable/field';
 import { ActivationPanel } from './activation-panel';
 import { FactorsSection } from './factors-section';
 import { MeasuresSection } from './measures-section';
@@ -16,7 +17,7 @@ export function ProtocolPage({ trial }: { trial: TrialDetail }) {
       <ReadOnlyNotice access={access} locked={trial.status === 'locked'} />
       <ActivationPanel trial={trial} canEdit={access.canEdit} />
       <TrialFieldsSection trial={trial} canEdit={access.canEdit} />
-      {trial.design === 'factorial-rcbd' && <FactorsSection trial={trial} canEdit={access.canEdit} />}
+      {isFactorDesign(trial.design) && <FactorsSection trial={trial} canEdit={access.canEdit} />}
       <TreatmentsSection trial={trial} canEdit={access.canEdit} />
       <MeasuresSection trial={trial} canEdit={access.canEdit} />
       <RoundsSection trial={trial} canEdit={access.canEdit} />

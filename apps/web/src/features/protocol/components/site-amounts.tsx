@@ -5,7 +5,7 @@ import { NumberText } from '../../../components/number-text';
 import { formatAmount, formatNumber, formatRate, parseNumberInput } from '../../../lib/format';
 
 /** "1.24 kg · 14.4 L" for an amount in grams and/or litres. */
-function siteAmount(grams: number | null, litres: number | null): string {
+export function siteAmount(grams: number | null, litres: number | null): string {
   return (
     [grams !== null ? formatAmount(grams >= 1000 ? grams / 1000 : grams, grams >= 1000 ? 'kg' : 'g') : null, litres !== null ? formatAmount(litres, 'L') : null]
       .filter(Boolean)
@@ -13,7 +13,8 @@ function siteAmount(grams: number | null, litres: number | null): string {
   );
 }
 
-function both(metric: number | null | undefined, metricUnit: string, us: number | null | undefined, usUnit: string): string {
+/** "290 g · 10.2 oz": an amount in metric and US units. */
+export function both(metric: number | null | undefined, metricUnit: string, us: number | null | undefined, usUnit: string): string {
   if (metric === null || metric === undefined) return '—';
   return `${formatAmount(metric, metricUnit)} · ${formatAmount(us, usUnit)}`;
 }
@@ -24,9 +25,7 @@ function both(metric: number | null | undefined, metricUnit: string, us: number 
  * so nothing is added silently.
  */
 export function SiteAmounts({ trial, site, amounts }: { trial: TrialDetail; site: Site; amounts: PlotAmount[] }) {
-  const [allowanceText, setAllowanceText] = useState('10');
-  const allowanceValue = parseNumberInput(allowanceText);
-  const allowance = allowanceValue !== null && Number.isFinite(allowanceValue) && allowanceValue >= 0 ? allowanceValue : 0;
+  const [allowanceText, setAllowanceText, allowance] = useAllowance();
   const rows = trial.treatments.map((treatment) => ({ treatment, amount: amounts.find((a) => a.siteId === site.id && a.treatmentId === treatment.id) }));
   const litres = rows.some((r) => r.amount?.perPlot?.litres !== null && r.amount?.perPlot?.litres !== undefined);
   return (
@@ -68,16 +67,29 @@ export function SiteAmounts({ trial, site, amounts }: { trial: TrialDetail; site
           })}
         </tbody>
       </HTMLTable>
-      <div className="fr-allowance-line">
-        <label htmlFor={`fr-allowance-${site.id}`}>Allowance for spills and weighing</label>
-        <NumberText id={`fr-allowance-${site.id}`} value={allowanceText} onChange={setAllowanceText} unit="%" />
-        <span className="fr-muted fr-small">Added to the site totals only; the amount per plot stays as the rate gives it.</span>
-      </div>
+      <AllowanceLine id={`fr-allowance-${site.id}`} text={allowanceText} onChange={setAllowanceText} />
       {rows.some((r) => r.amount?.perPlot?.warnings.length) && (
         <ul className="fr-warning-list">
           {rows.flatMap(({ treatment, amount }) => (amount?.perPlot?.warnings ?? []).map((w) => <li key={`${treatment.id}-${w}`}>{`${treatment.code}: ${w}`}</li>))}
         </ul>
       )}
+    </div>
+  );
+}
+
+/** The allowance for spills and weighing as typed (10 % to start), and the share it gives (0 for a bad entry). */
+export function useAllowance(): [string, (text: string) => void, number] {
+  const [text, setText] = useState('10');
+  const value = parseNumberInput(text);
+  return [text, setText, value !== null && Number.isFinite(value) && value >= 0 ? value : 0];
+}
+
+export function AllowanceLine({ id, text, onChange }: { id: string; text: string; onChange: (text: string) => void }) {
+  return (
+    <div className="fr-allowance-line">
+      <label htmlFor={id}>Allowance for spills and weighing</label>
+      <NumberText id={id} value={text} onChange={onChange} unit="%" />
+      <span className="fr-muted fr-small">Added to the site totals only; the amount per plot stays as the rate gives it.</span>
     </div>
   );
 }

@@ -8,7 +8,7 @@ import { SitesPage } from './sites-page';
 const base = { 'GET /api/auth/me': { status: 200, body: person }, 'GET /api/trials/3/members': { status: 200, body: [] } };
 
 describe('SitesPage', () => {
-  beforeEach(() => window.localStorage.setItem('friable.accessToken', 'token'));
+  beforeEach(() => window.localStorage.setItem('friable.signedIn', '1'));
   afterEach(() => vi.unstubAllGlobals());
 
   it('shows each site’s plot size, surface area, blocks and guardrail warnings', () => {

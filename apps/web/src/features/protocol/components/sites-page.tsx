@@ -116,6 +116,7 @@ function SiteCard({
           )}
         </dd>
       </dl>
+      {site.strata.length > 0 && <StrataList site={site} />}
       {site.hasObservations && canEdit && <p className="fr-muted fr-small">Data have been recorded here, so the plot plan can no longer be randomized again.</p>}
       {site.warnings.length > 0 && (
         <Callout intent="warning" icon="warning-sign" compact className="fr-site-warnings" title="Worth a second look">
@@ -127,5 +128,25 @@ function SiteCard({
         </Callout>
       )}
     </Card>
+  );
+}
+
+/** Each error line of the design's ANOVA at the site, its df counted out, and what is tested against it. */
+function StrataList({ site }: { site: Site }) {
+  return (
+    <div className="fr-strata">
+      <div className="fr-strata__title">Error degrees of freedom at this site</div>
+      <ul aria-label={`Error strata at ${site.name}`}>
+        {site.strata.map((stratum) => (
+          <li key={stratum.name}>
+            <strong>
+              {stratum.name}: {formatNumber(stratum.errorDf, 0)} df
+            </strong>{' '}
+            <span className="fr-muted">({stratum.arithmetic})</span> — tests {stratum.terms.map((term) => term.split(':').join(' × ')).join(', ')}
+            {stratum.criticalF !== null && <span className="fr-muted">; at p = 0.05 an F above {formatNumber(stratum.criticalF, stratum.criticalF >= 100 ? 1 : 2)} is needed</span>}
+          </li>
+        ))}
+      </ul>
+    </div>
   );
 }

@@ -1,13 +1,14 @@
 import { Checkbox, HTMLSelect, InputGroup, Radio, RadioGroup, TextArea } from '@blueprintjs/core';
-import { RATE_UNIT_IDS, type RateBasis, type RateUnitId, type Treatment, type TreatmentInput, type TrialDetail } from '@friable/contracts';
+import { type RateBasis, type RateUnitId, type Treatment, type TreatmentInput, type TrialDetail } from '@friable/contracts';
 import { useState } from 'react';
 import { Field, parseNumberFields } from '../../../components/field-errors';
 import { FormDialog } from '../../../components/form-dialog';
 import { NumberText } from '../../../components/number-text';
-import { isVolumeRateUnit, numberInputText, rateUnitLabels } from '../../../lib/format';
+import { RateUnitSelect } from '../../../components/rate-unit-select';
+import { isVolumeRateUnit, numberInputText } from '../../../lib/format';
+import { useSaveTreatment } from '../api/save-treatment';
 import { useVersionedForm } from '../../../lib/edit-conflict';
 import { VersionConflict } from './version-conflict';
-import { useSaveTreatment } from '../api/save-treatment';
 
 const shownFields = ['code', 'name', 'description', 'isControl', 'rateValue', 'rateUnit', 'rateBasis', 'incorporationDepthCm', 'product', 'purity', 'moistureBasis', 'moistureFraction', 'materialKind'];
 const labels = { rateValue: 'Rate', incorporationDepthCm: 'Incorporation depth', purity: 'Purity', moistureFraction: 'Water share' };
@@ -87,13 +88,7 @@ export function TreatmentDialog({ trial, treatment, onClose }: { trial: TrialDet
                     <NumberText id="fr-field-rateValue" value={rateValue} onChange={setRateValue} />
                   </Field>
                   <Field label="Unit" field="rateUnit" error={error}>
-                    <HTMLSelect id="fr-field-rateUnit" value={rateUnit} onChange={(e) => setRateUnit(e.target.value as RateUnitId)} fill>
-                      {RATE_UNIT_IDS.map((unit) => (
-                        <option key={unit} value={unit}>
-                          {rateUnitLabels[unit]}
-                        </option>
-                      ))}
-                    </HTMLSelect>
+                    <RateUnitSelect id="fr-field-rateUnit" value={rateUnit} onChange={setRateUnit} />
                   </Field>
                 </div>
                 <Field label="Basis" field="rateBasis" error={error}>

@@ -1,11 +1,13 @@
 import { Button, HTMLTable, Section, SectionCard, Tag } from '@blueprintjs/core';
 import type { PlotAmount, Treatment, TrialDetail } from '@friable/contracts';
+import { isFactorDesign } from '@friable/field';
 import { useState } from 'react';
 import { ConfirmButton } from '../../../components/confirm-button';
 import { EmptyState } from '../../../components/states';
 import { formatDoseShort, formatNumber, formatRate } from '../../../lib/format';
 import { useDeleteProtocolItem } from '../api/delete-protocol-item';
 import { useAmounts } from '../api/get-amounts';
+import { appliedToWords } from './factor-roles';
 import { TreatmentDialog } from './treatment-dialog';
 
 /** The treatments, each with its rate and how much goes on one plot at every site. */
@@ -13,13 +15,13 @@ export function TreatmentsSection({ trial, canEdit }: { trial: TrialDetail; canE
   const [editing, setEditing] = useState<Treatment | 'new' | null>(null);
   const remove = useDeleteProtocolItem(trial.id, 'treatments');
   const amounts = useAmounts(trial.id);
-  const factorial = trial.design === 'factorial-rcbd';
+  const factorial = isFactorDesign(trial.design);
   const hasControl = trial.treatments.some((t) => t.isControl);
 
   return (
     <Section
       title="Treatments"
-      subtitle={factorial ? 'Every combination of the two factors' : undefined}
+      subtitle={factorial ? 'Every combination of the factors’ levels' : undefined}
       icon="lab-test"
       className="fr-section"
       rightElement={canEdit && !factorial ? <Button icon="add" text="Add treatment" size="small" onClick={() => setEditing('new')} /> : undefined}
@@ -28,7 +30,7 @@ export function TreatmentsSection({ trial, canEdit }: { trial: TrialDetail; canE
         {trial.treatments.length === 0 ? (
           <EmptyState
             title="No treatments yet"
-            description={factorial ? 'Name the two factors and their levels above; the treatments follow.' : 'Add an untreated control and the amendments to compare, each with its rate.'}
+            description={factorial ? 'Name the factors and their levels above; the treatments follow.' : 'Add an untreated control and the amendments to compare, each with its rate.'}
           />
         ) : (
           <div className="fr-table-scroll">
@@ -59,13 +61,23 @@ export function TreatmentsSection({ trial, canEdit }: { trial: TrialDetail; canE
                       {treatment.description && <div className="fr-muted fr-small">{treatment.description}</div>}
                     </td>
                     <td>
-                      {treatment.rateValue === null ? <span className="fr-muted">none</span> : formatRate(treatment.rateValue, treatment.rateUnit)}
+                      {factorial ? (
+                        <LevelRates trial={trial} treatment={treatment} />
+                      ) : treatment.rateValue === null ? (
+                        <span className="fr-muted">none</span>
+                      ) : (
+                        formatRate(treatment.rateValue, treatment.rateUnit)
+                      )}
                       {treatment.rateValue !== null && treatment.rateBasis === 'concentration' && (
                         <div className="fr-muted fr-small">mixed through {formatNumber(treatment.incorporationDepthCm ?? 0, 1)} cm of soil</div>
                       )}
                     </td>
                     <td>
-                      <PerSiteAmounts trial={trial} treatment={treatment} amounts={amounts.data} pending={amounts.isPending} failed={amounts.isError} />
+                      {factorial ? (
+                        <span className="fr-muted">per unit each level goes on: see the Plot plan</span>
+                      ) : (
+                        <PerSiteAmounts trial={trial} treatment={treatment} amounts={amounts.data} pending={amounts.isPending} failed={amounts.isError} />
+                      )}
                     </td>
                     {canEdit && (
                       <td className="fr-actions">
@@ -95,6 +107,22 @@ export function TreatmentsSection({ trial, canEdit }: { trial: TrialDetail; canE
       </SectionCard>
       {editing && <TreatmentDialog trial={trial} treatment={editing === 'new' ? null : editing} onClose={() => setEditing(null)} />}
     </Section>
+  );
+}
+
+/** A combination's rates are its levels': "C 2.5 cm deep (layer) on whole plots · S 5 cm deep (layer) on sub plots". */
+function LevelRates({ trial, treatment }: { trial: TrialDetail; treatment: Treatment }) {
+  const levels = trial.factors.flatMap((factor) => factor.levels.map((level) => ({ factor, level }))).filter(({ level }) => treatment.factorLevelIds.includes(level.id));
+  const applied = levels.filter(({ level }) => level.rateValue !== null && level.rateUnit !== null);
+  if (applied.length === 0) return <span className="fr-muted">none</span>;
+  return (
+    <ul className="fr-site-amounts">
+      {applied.map(({ factor, level }) => (
+        <li key={level.id}>
+          <span className="fr-code">{level.code}</span> {formatRate(level.rateValue, level.rateUnit)} <span className="fr-muted">{appliedToWords(factor.appliedTo)}</span>
+        </li>
+      ))}
+    </ul>
   );
 }
 

@@ -1,15 +1,10 @@
-import type { DoseAnswer, Plot, PlotAmount, Site, Treatment, TrialDetail } from '@friable/contracts';
+import type { DoseAnswer, MaterialRate, Plot, PlotAmount, Site, Treatment, TrialDetail } from '@friable/contracts';
 
 // An invented trial for component tests: two sites, a control and two amendments, one measure, one round.
 export const person = { id: 7, email: 'ines@example.org', name: 'Ines Marlow', isAdmin: false, isActive: true, createdAt: '2026-11-01T00:00:00.000Z' };
 
-const treatment = (id: number, code: string, name: string, extra: Partial<Treatment> = {}): Treatment => ({
-  id,
-  version: 1,
-  code,
-  name,
-  description: null,
-  isControl: false,
+/** Nothing applied: the rate and material fields of a treatment or factor level without a rate. */
+export const noMaterial: MaterialRate = {
   rateValue: null,
   rateUnit: null,
   rateBasis: 'area',
@@ -19,6 +14,16 @@ const treatment = (id: number, code: string, name: string, extra: Partial<Treatm
   moistureBasis: 'as-is',
   moistureFraction: null,
   materialKind: 'other',
+};
+
+const treatment = (id: number, code: string, name: string, extra: Partial<Treatment> = {}): Treatment => ({
+  id,
+  version: 1,
+  code,
+  name,
+  description: null,
+  isControl: false,
+  ...noMaterial,
   factorLevelIds: [],
   position: id,
   ...extra,

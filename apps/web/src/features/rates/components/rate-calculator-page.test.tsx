@@ -17,7 +17,7 @@ function result() {
 }
 
 describe('RateCalculatorPage', () => {
-  beforeEach(() => window.localStorage.setItem('friable.accessToken', 'token'));
+  beforeEach(() => window.localStorage.setItem('friable.signedIn', '1'));
   afterEach(() => vi.unstubAllGlobals());
 
   it('turns 40 lb/1,000 ft² of gypsum into 13.8 g for a pot of 30 cm inside diameter', async () => {

@@ -1,10 +1,11 @@
 import { Callout, Card, H2, H3, HTMLSelect, Radio, RadioGroup } from '@blueprintjs/core';
-import { RATE_UNIT_IDS, type RateBasis, type RateUnitId } from '@friable/contracts';
+import type { RateBasis } from '@friable/contracts';
 import { useMemo, useState } from 'react';
 import { Field } from '../../../components/field-errors';
 import { NumberText } from '../../../components/number-text';
 import { SafetyCautions } from '../../../components/safety-cautions';
-import { formatAmount, formatArea, formatNumber, isVolumeRateUnit, parseNumberInput, rateUnitLabels } from '../../../lib/format';
+import { formatAmount, formatArea, formatNumber, isVolumeRateUnit, parseNumberInput } from '../../../lib/format';
+import { RateUnitSelect } from '../../../components/rate-unit-select';
 import { useServerDose } from '../api/compute-dose';
 import { useDebouncedValue } from '../hooks/use-debounced-value';
 import { doseRequestFrom, initialDoseForm, localDose, type AreaUnit, type DiameterUnit, type DoseFormState, type GeometryMode, type LengthUnit } from './dose-form-state';
@@ -74,13 +75,7 @@ export function RateCalculatorPage() {
               <NumberText id="fr-field-rate" value={form.rate} onChange={set('rate')} />
             </Field>
             <Field label="Unit" field="unit" error={error}>
-              <HTMLSelect id="fr-field-unit" value={form.unit} onChange={(e) => set('unit')(e.target.value as RateUnitId)} fill>
-                {RATE_UNIT_IDS.map((unit) => (
-                  <option key={unit} value={unit}>
-                    {rateUnitLabels[unit]}
-                  </option>
-                ))}
-              </HTMLSelect>
+              <RateUnitSelect id="fr-field-unit" value={form.unit} onChange={set('unit')} />
             </Field>
           </div>
           <Field label="Material" field="materialKind" error={error} help="Gypsum rates are compared with common garden rates.">

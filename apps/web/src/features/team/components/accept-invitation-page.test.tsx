@@ -32,7 +32,7 @@ describe('AcceptInvitationPage', () => {
     fireEvent.change(screen.getByLabelText('Choose a password'), { target: { value: 'a long passphrase' } });
     fireEvent.click(screen.getByRole('button', { name: 'Join the trial' }));
     await vi.waitFor(() => expect(joined).toHaveBeenCalledWith('/trials/7'));
-    expect(window.localStorage.getItem('friable.accessToken')).toBe('new-token');
+    expect(window.localStorage.getItem('friable.signedIn')).toBe('1');
     expect(calls.find((c) => c.method === 'POST')?.body).toEqual({ name: 'Robin', password: 'a long passphrase' });
   });
 

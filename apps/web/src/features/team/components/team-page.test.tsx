@@ -25,7 +25,7 @@ const pending = {
 };
 
 describe('TeamPage', () => {
-  beforeEach(() => window.localStorage.setItem('friable.accessToken', 'token'));
+  beforeEach(() => window.localStorage.setItem('friable.signedIn', '1'));
   afterEach(() => vi.unstubAllGlobals());
 
   it('shows members with role and site, and the investigator’s pending invitations', async () => {
@@ -71,5 +71,34 @@ describe('TeamPage', () => {
     expect(screen.getByText('The investigator manages the team. You can see who takes part and where.')).toBeInTheDocument();
     expect(screen.queryByRole('button', { name: 'Send invitation' })).not.toBeInTheDocument();
     expect(calls.some((c) => c.path.includes('invitations'))).toBe(false);
+  });
+
+  it('lets the investigator change a collaborator’s sites and remove them after a clear question', async () => {
+    const calls = mockApi({
+      'GET /api/auth/me': { status: 200, body: person },
+      'GET /api/trials/7/members': { status: 200, body: members },
+      'GET /api/trials/7/invitations': { status: 200, body: [] },
+      'PATCH /api/trials/7/members/2': {
+        status: 200,
+        body: [members[0], { ...members[1], siteId: 11, siteName: 'Millbrook', membershipId: 3 }, { ...members[1], membershipId: 4 }],
+      },
+      'DELETE /api/trials/7/members/2': { status: 204, body: null },
+    });
+    renderWithApp(<TeamPage trial={trial(['investigator'])} />);
+    // The only investigator cannot be removed.
+    await screen.findByRole('table', { name: 'Members' });
+    expect(screen.queryByRole('button', { name: 'Remove Ines from the trial' })).toBeNull();
+    fireEvent.click(screen.getByRole('button', { name: 'Change the role and sites of Cal' }));
+    const dialog = await screen.findByRole('dialog');
+    fireEvent.click(within(dialog).getByLabelText('Millbrook'));
+    fireEvent.click(within(dialog).getByRole('button', { name: 'Save the change' }));
+    expect(await within(await screen.findByRole('table', { name: 'Members' })).findByText('Millbrook, Hollow Lane')).toBeInTheDocument();
+    const patch = calls.find((c) => c.method === 'PATCH');
+    expect(patch?.body).toEqual({ role: 'collaborator', siteIds: [12, 11] });
+
+    fireEvent.click(screen.getByRole('button', { name: 'Remove Cal from the trial' }));
+    expect(await screen.findByText(/They lose access at once/)).toBeInTheDocument();
+    fireEvent.click(screen.getByRole('button', { name: 'Remove Cal' }));
+    await vi.waitFor(() => expect(calls.some((c) => c.method === 'DELETE' && c.path === '/api/trials/7/members/2')).toBe(true));
   });
 });

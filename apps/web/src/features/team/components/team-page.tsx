@@ -1,12 +1,17 @@
-import { Callout, H3, HTMLTable, Tag } from '@blueprintjs/core';
+import { Button, Callout, H3, HTMLTable, Tag } from '@blueprintjs/core';
 import type { Member, TrialDetail } from '@friable/contracts';
+import { useState } from 'react';
+import { ConfirmButton } from '../../../components/confirm-button';
 import { EmptyState, ErrorState, LoadingState } from '../../../components/states';
 import { formatDate, roleLabels } from '../../../lib/format';
 import { useMembers } from '../../../lib/api/get-members';
+import { useRemoveMember } from '../api/change-member';
 import { InvitationsList } from './invitations-list';
+import { MemberDialog } from './member-dialog';
+import { teamPeople, type TeamPerson } from './team-people';
 import { InviteForm } from './invite-form';
 
-/** Team: who is on the trial with which role and site; the investigator also invites people and follows up. */
+/** Team: who is on the trial with which role and site; the investigator also changes roles and sites, removes people, invites and follows up. */
 export function TeamPage({ trial }: { trial: TrialDetail }) {
   const members = useMembers(trial.id);
   const manages = trial.myRoles.includes('investigator');
@@ -27,7 +32,7 @@ export function TeamPage({ trial }: { trial: TrialDetail }) {
       ) : members.data.length === 0 ? (
         <EmptyState title="Nobody on the team yet" description="Invite the people who will run the trial at each site." />
       ) : (
-        <MembersTable members={members.data} />
+        <MembersTable trial={trial} members={members.data} manages={manages} />
       )}
       {manages && (
         <>
@@ -39,9 +44,18 @@ export function TeamPage({ trial }: { trial: TrialDetail }) {
   );
 }
 
-function MembersTable({ members }: { members: Member[] }) {
+function MembersTable({ trial, members, manages }: { trial: TrialDetail; members: Member[]; manages: boolean }) {
+  const remove = useRemoveMember(trial.id);
+  const [changing, setChanging] = useState<TeamPerson | null>(null);
+  const people = teamPeople(members);
+  const investigators = people.filter((p) => p.roles.includes('investigator')).length;
   return (
     <div className="fr-team__scroll">
+      {remove.error && (
+        <Callout intent="danger" role="alert" className="fr-gap">
+          {remove.error.message}
+        </Callout>
+      )}
       <HTMLTable className="fr-team__table" compact striped aria-label="Members">
         <thead>
           <tr>
@@ -50,24 +64,55 @@ function MembersTable({ members }: { members: Member[] }) {
             <th>Role</th>
             <th>Site</th>
             <th>Since</th>
+            {manages && <th>Change</th>}
           </tr>
         </thead>
         <tbody>
-          {members.map((member) => (
-            <tr key={member.membershipId}>
-              <td>{member.name}</td>
-              <td className="fr-team__email">{member.email}</td>
-              <td>
-                <Tag minimal className={`fr-team__role fr-team__role--${member.role}`}>
-                  {roleLabels[member.role]}
-                </Tag>
-              </td>
-              <td>{member.siteName ?? (member.role === 'collaborator' ? 'No site' : '—')}</td>
-              <td>{formatDate(member.since)}</td>
-            </tr>
-          ))}
+          {people.map((person) => {
+            const lastInvestigator = person.roles.includes('investigator') && investigators <= 1;
+            return (
+              <tr key={person.userId}>
+                <td>{person.name}</td>
+                <td className="fr-team__email">{person.email}</td>
+                <td>
+                  {person.roles.map((role) => (
+                    <Tag key={role} minimal className={`fr-team__role fr-team__role--${role}`}>
+                      {roleLabels[role]}
+                    </Tag>
+                  ))}
+                </td>
+                <td>{person.siteNames.length ? person.siteNames.join(', ') : person.roles.includes('collaborator') ? 'No site' : '—'}</td>
+                <td>{formatDate(person.since)}</td>
+                {manages && (
+                  <td className="fr-team__actions">
+                    <Button variant="minimal" size="small" icon="edit" text="Role and sites" aria-label={`Change the role and sites of ${person.name}`} onClick={() => setChanging(person)} />
+                    {lastInvestigator ? (
+                      <span className="fr-muted fr-small">Only investigator</span>
+                    ) : (
+                      <ConfirmButton
+                        text="Remove"
+                        ariaLabel={`Remove ${person.name} from the trial`}
+                        confirmText={`Remove ${person.name}`}
+                        loading={remove.isPending && remove.variables === person.userId}
+                        question={
+                          <>
+                            <p>
+                              Remove <strong>{person.name}</strong> ({person.email}) from this trial?
+                            </p>
+                            <p>They lose access at once and get an e-mail saying so. Everything they recorded stays in the trial under their name. To bring them back, invite them again.</p>
+                          </>
+                        }
+                        onConfirm={() => remove.mutate(person.userId)}
+                      />
+                    )}
+                  </td>
+                )}
+              </tr>
+            );
+          })}
         </tbody>
       </HTMLTable>
+      {changing && <MemberDialog trial={trial} person={changing} onClose={() => setChanging(null)} />}
     </div>
   );
 }

@@ -6,7 +6,7 @@ import { TrialsList } from './trials-list';
 const person = { id: 5, email: 'r@example.org', name: 'Rafe', isAdmin: false, isActive: true, createdAt: '2026-12-01T00:00:00.000Z' };
 
 describe('TrialsList', () => {
-  beforeEach(() => window.localStorage.setItem('friable.accessToken', 'token'));
+  beforeEach(() => window.localStorage.setItem('friable.signedIn', '1'));
   afterEach(() => vi.unstubAllGlobals());
 
   it('lists each trial with its code, status, design and the person’s roles', async () => {

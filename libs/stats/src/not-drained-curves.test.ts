@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { notDrainedCurves } from './not-drained-curve';
+import { StatsInputError } from './errors';
+import { notDrainedCurves } from './not-drained-curves';
 
 describe('notDrainedCurves', () => {
   it('with censoring only at the cut-off is the share of plots with a longer time (hand count)', () => {
@@ -34,7 +35,7 @@ describe('notDrainedCurves', () => {
       { treatment: 'A', time: 4, censored: false },
     ])[0]!.steps;
     expect(steps.map((s) => s.share)).toEqual([1, 0.75, 0.375, 0]);
-    expect(() => notDrainedCurves([{ treatment: 'A', time: Number.NaN, censored: false }])).toThrow(RangeError);
+    expect(() => notDrainedCurves([{ treatment: 'A', time: Number.NaN, censored: false }])).toThrow(StatsInputError);
   });
 
   it('keeps the given treatment order', () => {

@@ -1,0 +1,69 @@
+import type { FindingsAnswer } from '@friable/contracts';
+import { Injectable } from '@nestjs/common';
+import { LRUCache } from 'lru-cache';
+import { requireInteger } from '../config/validate-environment';
+import { DataStampsService } from '../data-stamps/data-stamps.service';
+import { canonicalHash } from './canonical-hash';
+import type { FindingsQueryDto } from './dto/findings-query.dto';
+
+interface CachedFindings {
+  /** The data stamp read before the answer was computed (data-stamps/data-stamps.service.ts). */
+  stamp: string;
+  /** The snapshot hash of the analysed data (context.dataHash). */
+  dataHash: string;
+  answer: FindingsAnswer;
+}
+
+/** The cache key: trial, measure, round, site and every analysis option (choices left out stay out). */
+export function findingsKey(trialId: number, query: FindingsQueryDto): string {
+  return `${trialId}:${canonicalHash({ ...query })}`;
+}
+
+/**
+ * Findings cache — Findings answers kept per API instance, keyed by trial, measure, round, scope and options,
+ * each stored with the data stamp read before it was computed and with the snapshot hash of its data.
+ * An answer is served only while the stamp of its trial (and of the whole instance) is unchanged: every
+ * write through any instance replaces that stamp (DataStampsInterceptor), so one primary-key read decides.
+ * Concurrent requests for the same answer share one computation. Refusals (422) are not kept.
+ *
+ * Bounded by FINDINGS_CACHE_MB (default 64) of answer text; least recently used answers go first.
+ * Example: `cache.answer(trialId, query, () => findings.findings(trialId, query))`.
+ */
+@Injectable()
+export class FindingsCache {
+  private readonly answers = new LRUCache<string, CachedFindings>({
+    maxSize: requireInteger(process.env, 'FINDINGS_CACHE_MB', 64, 1, 4096) * 1_048_576,
+    sizeCalculation: (entry) => Math.max(1, JSON.stringify(entry.answer).length),
+  });
+  private readonly pending = new Map<string, Promise<FindingsAnswer>>();
+  /** Hits and misses since start (read by the benchmark through the log, and by tests). */
+  readonly counts = { hits: 0, misses: 0 };
+
+  constructor(private readonly stamps: DataStampsService) {}
+
+  async answer(trialId: number, query: FindingsQueryDto, compute: () => Promise<FindingsAnswer>): Promise<FindingsAnswer> {
+    const key = findingsKey(trialId, query);
+    // The stamp is read before the data: an answer is never stored under a stamp newer than its data.
+    const stamp = await this.stamps.read(trialId);
+    const cached = this.answers.get(key);
+    if (cached?.stamp === stamp) {
+      this.counts.hits += 1;
+      return cached.answer;
+    }
+    const flightKey = `${key}@${stamp}`;
+    const inFlight = this.pending.get(flightKey);
+    if (inFlight) {
+      this.counts.hits += 1;
+      return inFlight;
+    }
+    this.counts.misses += 1;
+    const computation = compute()
+      .then((answer) => {
+        this.answers.set(key, { stamp, dataHash: answer.context.dataHash, answer });
+        return answer;
+      })
+      .finally(() => this.pending.delete(flightKey));
+    this.pending.set(flightKey, computation);
+    return computation;
+  }
+}

@@ -1,0 +1,19 @@
+import type { AppliedUnit, Factor, TrialDesign } from '@friable/contracts';
+import { DESIGN_RULES } from '@friable/field';
+
+const SPLIT_ROLES = ['Whole-plot factor', 'Sub-plot factor', 'Sub-sub-plot factor'];
+
+/** How the Protocol names a factor by its place: "Factor A" in a factorial, "Whole-plot factor" in a split plot. */
+export function factorRole(design: TrialDesign, index: number): string {
+  return DESIGN_RULES[design].split ? (SPLIT_ROLES[index] ?? `Factor ${index + 1}`) : `Factor ${String.fromCharCode(65 + index)}`;
+}
+
+/** "on every plot", "on whole plots": where a factor's levels go, in words. */
+export function appliedToWords(unit: AppliedUnit): string {
+  return unit === 'plot' ? 'on every plot' : `on ${unit}s`;
+}
+
+/** The factors in their order (a split plot's whole-plot factor first). */
+export function orderedFactors(factors: readonly Factor[]): Factor[] {
+  return [...factors].sort((a, b) => a.position - b.position);
+}
