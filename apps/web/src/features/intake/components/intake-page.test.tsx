@@ -140,7 +140,7 @@ describe('IntakePage', () => {
 
     const first = FakeUpload.sent[0]!;
     expect(first.url).toBe('/api/trials/3/sites/31/rounds/21/intake?dryRun=true');
-    expect(first.headers.Authorization).toBe('Bearer token');
+    expect(first.headers['X-Friable-CSRF']).toBe('1');
     expect(first.form?.get('mapping')).toBe(JSON.stringify({ notes: null }));
     expect(first.form?.get('acceptWarnings')).toBe('false');
     expect((first.form?.get('file') as File).name).toBe('hollow-lane-week-2.csv');

@@ -105,7 +105,7 @@ describe('LedgerPage', () => {
     const api = replies();
     api['PATCH /api/trials/3/observations/500'] = {
       status: 422,
-      body: { statusCode: 422, error: 'Unprocessable Entity', message: 'Not saved: 3 is below the plausible 5 s. Send acceptWarnings: true to keep it.', errors: [] },
+      body: { statusCode: 422, error: 'Unprocessable Entity', message: 'Not saved: 3 is below the plausible 5 s. If the value is right, confirm it to keep it.', errors: [{ field: 'value', message: 'value 3 is below the plausible 5 s.' }, { field: 'acceptWarnings', message: 'confirm the value is right to keep it' }] },
     };
     const calls = mockApi(api);
     renderWithApp(<LedgerPage trial={activeTrial()} />);

@@ -76,8 +76,8 @@ export function useCellSave(trialId: number, siteId: number, roundId: number) {
         }
       } else {
         const message = error instanceof Error ? error.message : 'The value could not be saved.';
-        // The server names acceptWarnings when the value is only unusual: the person may keep it.
-        setRefusal(key, { text: mine.value, message, warning: error instanceof ApiError && error.status === 422 && message.includes('acceptWarnings'), edit: mine });
+        // The server lists acceptWarnings among the problems when the value is only unusual: the person may keep it.
+        setRefusal(key, { text: mine.value, message, warning: error instanceof ApiError && error.status === 422 && error.details?.some((d) => d.field === 'acceptWarnings') === true, edit: mine });
       }
     } finally {
       setSavingKey(null);

@@ -87,7 +87,7 @@ describe('PlotPlanPage', () => {
     expect(screen.getByText('Millbrook is not randomized yet')).toBeInTheDocument();
   });
 
-  it('downloads the CSV template with the session’s token and saves it through a Blob', async () => {
+  it('downloads the CSV template with the session’s CSRF header and saves it through a Blob', async () => {
     const calls = mockApi({ ...base, 'GET /api/trials/3/sites/31/rounds/21/template.csv': { status: 200, body: 'plot,block,treatment,DRAIN (s)\n' } });
     const createObjectURL = vi.fn(() => 'blob:template');
     vi.stubGlobal('URL', Object.assign(URL, { createObjectURL, revokeObjectURL: vi.fn() }));
@@ -99,7 +99,7 @@ describe('PlotPlanPage', () => {
     await userEvent.click(await screen.findByRole('button', { name: 'CSV template — Week 2' }));
     await vi.waitFor(() => expect(createObjectURL).toHaveBeenCalled());
     const asked = calls.find((c) => c.path === '/api/trials/3/sites/31/rounds/21/template.csv');
-    expect(asked?.headers.get('Authorization')).toBe('Bearer token');
+    expect(asked?.headers.get('X-Friable-CSRF')).toBe('1');
     expect(saved).toBe('CLAY-T_HL_Week-2.csv');
     click.mockRestore();
   });
