@@ -61,7 +61,7 @@ const suites = [
   { name: 'API end-to-end', cwd: 'apps/api', args: ['--config', 'vitest.e2e.config.ts'] },
   { name: 'web components', cwd: 'apps/web', args: [] },
   { name: 'browser', cwd: 'apps/web', args: ['--config', 'vitest.browser.config.ts'] },
-  { name: 'devstack', cwd: 'apps/devstack', args: [] },
+  { name: 'cluster', cwd: 'apps/devstack', args: ['--config', 'vitest.cluster.config.mjs'] },
 ];
 const tally = { passed: 0, failed: 0, skipped: 0 };
 const problems = [];

@@ -45,12 +45,15 @@ describe('one’s own account: settings, a forgotten password, signing out every
   it('resets a forgotten password from the e-mailed link, which works once', async () => {
     await session.page.goto(`${baseUrl()}/sign-in`);
     await session.page.getByRole('link', { name: 'Forgot your password?' }).click();
+    // The page loads with its route; the sign-in form (with its own E-mail box) stays until it has.
+    await session.page.getByRole('heading', { name: 'Forgotten password' }).waitFor();
     await session.page.getByLabel('E-mail').fill(email);
     await session.page.getByRole('button', { name: 'E-mail me a link' }).click();
     await session.page.getByRole('status').waitFor();
     const link = await resetLink();
     expect(link.startsWith(`${baseUrl()}/reset-password/`)).toBe(true);
     await session.page.goto(link);
+    await session.page.getByRole('heading', { name: 'Set a new password' }).waitFor();
     await session.page.getByLabel('New password', { exact: true }).fill(newPassword);
     await session.page.getByLabel('New password again').fill(newPassword);
     await session.page.getByRole('button', { name: 'Set the new password' }).click();
@@ -58,6 +61,7 @@ describe('one’s own account: settings, a forgotten password, signing out every
     await screenshot(session.page, 'reset-password-done');
     // Used once: the same link now says it is spent.
     await session.page.goto(link);
+    await session.page.getByRole('heading', { name: 'Set a new password' }).waitFor();
     await session.page.getByLabel('New password', { exact: true }).fill(`${newPassword} again`);
     await session.page.getByLabel('New password again').fill(`${newPassword} again`);
     await session.page.getByRole('button', { name: 'Set the new password' }).click();

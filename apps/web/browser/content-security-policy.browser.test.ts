@@ -1,27 +1,7 @@
 import type { Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
 import { paths } from '../src/config/paths';
-import { baseUrl, demoPassword, screenshot, signIn, useBrowserSession } from './support';
-
-/** The demo trial's id, read through the API as its investigator. */
-async function demoTrialId(): Promise<number> {
-  const login = await fetch(`${baseUrl()}/api/auth/login`, {
-    method: 'POST',
-    headers: { 'Content-Type': 'application/json' },
-    body: JSON.stringify({ email: 'investigator@example.org', password: demoPassword }),
-  });
-  const { accessToken } = (await login.json()) as { accessToken: string };
-  const trials = (await (await fetch(`${baseUrl()}/api/trials`, { headers: { Authorization: `Bearer ${accessToken}` } })).json()) as Array<{ id: number; code: string }>;
-  return trials.find((trial) => trial.code === 'FW-CLAY-26')!.id;
-}
-
-/** Every page of the router (config/paths.ts), with the demo trial and a made-up invitation token filled in. */
-function everyPage(trialId: number): Array<{ name: string; path: string }> {
-  return Object.entries(paths).map(([name, route]) => ({
-    name,
-    path: route.path.replace(':trialId', String(trialId)).replace(':token', 'not-a-real-invitation-token'),
-  }));
-}
+import { baseUrl, demoTrialId, everyPage, screenshot, signIn, useBrowserSession } from './support';
 
 /** Opens a page and lets it settle: its data fetched, lazy chunks (Plotly) loaded, charts drawn. */
 async function visit(page: Page, path: string): Promise<string | undefined> {

@@ -1,3 +1,4 @@
+import { readFileSync } from 'node:fs';
 import type { TrialSummary } from '@friable/contracts';
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -29,7 +30,7 @@ describe('Findings: the model made for each measure', () => {
     { name: 'phone', width: 390, height: 844 },
   ]) {
     it(`a reviewer opens drain time, sees the not-drained curves and time ratios, switches to rounds over time, then to the ANOVA fallback with its caution (${viewport.name})`, async () => {
-      const context = await browser.newContext({ viewport });
+      const context = await browser.newContext({ viewport, acceptDownloads: true });
       const page = await context.newPage();
       const blocked: string[] = [];
       watchContentSecurityPolicy(page, blocked);
@@ -54,6 +55,12 @@ describe('Findings: the model made for each measure', () => {
       expect(await page.getByRole('figure', { name: 'All sites combined' }).count()).toBe(1);
       expect(await page.getByRole('figure', { name: 'Time ratio to the control, 95 % interval' }).count()).toBe(1);
       await screenshot(page, `findings-censored-${viewport.name}`);
+      // The analysis on screen downloads as a zip with its data and an R script.
+      const downloading = page.waitForEvent('download');
+      await page.getByRole('button', { name: 'Analysis with R script' }).click();
+      const download = await downloading;
+      expect(download.suggestedFilename()).toBe('FW-CLAY-26-DRAIN-Day-14-censored.zip');
+      expect(readFileSync((await download.path())!).subarray(0, 2).toString('latin1')).toBe('PK');
 
       // Rounds over time, one click away.
       await picker.getByRole('button', { name: 'Rounds over time' }).click();
@@ -82,7 +89,11 @@ describe('Findings: the model made for each measure', () => {
       await page.getByRole('heading', { name: 'The baseline', exact: true }).waitFor();
       expect(await page.getByText('Equal slopes across treatments').isVisible()).toBe(true);
       await page.getByRole('table', { name: 'Treatment means' }).waitFor();
+      expect(await page.getByLabel('Baseline', { exact: true }).locator('option:checked').innerText()).toBe('water retained at Day 0');
       await screenshot(page, `findings-ancova-${viewport.name}`);
+      // Any measure's earlier round can be the baseline.
+      await page.getByLabel('Baseline', { exact: true }).selectOption({ label: 'crust resistance at Day 0' });
+      await page.getByText('The covariate is crust resistance at Day 0: each plot\'s value is adjusted for its own baseline.').waitFor();
       await page.getByLabel('Measure').selectOption({ label: 'crumble score' });
       await page.getByRole('table', { name: 'Predicted share of plots in each score' }).waitFor();
       expect(await page.getByRole('table', { name: 'Odds ratio' }).locator('tbody tr').count()).toBe(4);

@@ -114,6 +114,8 @@ describe('an investigator designs a split plot in the browser', () => {
     await small.getByText(oneDf, { exact: false }).waitFor();
     await expect(page.getByRole('list', { name: 'Error strata at Ashgrove plots' }).getByText('Whole-plot error: 1 df').isVisible()).resolves.toBe(true);
     await expect(page.getByRole('list', { name: 'Error strata at Tannery Row beds' }).getByText('Whole-plot error: 3 df').isVisible()).resolves.toBe(true);
+    // A whole plot is its 3 sub plots side by side: 3 × 1 m².
+    await expect(small.getByText('3 plots side by side, 3 m²', { exact: false }).isVisible()).resolves.toBe(true);
 
     for (const name of ['Tannery Row beds', 'Ashgrove plots']) {
       await page.getByRole('button', { name: `Randomize ${name}`, exact: true }).click();
@@ -125,6 +127,8 @@ describe('an investigator designs a split plot in the browser', () => {
     // The guardrail stands on the Protocol before the trial starts.
     await page.getByRole('link', { name: 'Protocol', exact: true }).click();
     await page.getByRole('list', { name: 'Design warnings' }).getByText(`Ashgrove plots: ${oneDf}`, { exact: false }).waitFor();
+    // Each level's amount per unit it goes on, at each site: 2.5 cm over 3 m² = 75 L per whole plot.
+    await page.getByLabel('Factors', { exact: true }).getByText('at Tannery Row beds: 75 L (19.8 gal) per whole plot', { exact: false }).waitFor();
     await screenshot(page, 'split-plot-protocol');
 
     // Plot plan: whole plots outlined, each holding one sub plot of every mulch under one compost level.
@@ -174,7 +178,8 @@ describe('an investigator designs a split plot in the browser', () => {
     expect(await sideways(phonePage)).toBeLessThanOrEqual(0);
     await screenshot(phonePage, 'split-plot-protocol-phone');
     await phone.close();
-  });
+    // The whole design by hand, twice over (laptop and phone): more than the default minute on a loaded machine.
+  }, 150_000);
 
   it('shows the demo split plot FW-MULCH-27 to its reviewer, whole plots outlined at both gardens', async () => {
     await signIn(session.page, 'reviewer@example.org');

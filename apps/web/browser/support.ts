@@ -3,6 +3,7 @@ import { resolve } from 'node:path';
 import { chromium, type Browser, type BrowserContext, type BrowserContextOptions, type Page } from 'playwright-core';
 import { afterAll, afterEach, beforeAll, beforeEach } from 'vitest';
 import { repoRoot } from '../../devstack/src/env.mjs';
+import { paths } from '../src/config/paths';
 
 export const baseUrl = () => process.env.FRIABLE_BROWSER_BASE_URL ?? 'http://127.0.0.1:3999';
 export const demoPassword = 'friable-demo';
@@ -29,7 +30,7 @@ export async function signIn(page: Page, email: string, password = demoPassword)
   await page.getByRole('button', { name: 'Sign in' }).click();
 }
 
-/** Calls the API as the signed-in person of this page (the token the app keeps). */
+/** Calls the API as the signed-in person of this page (its session cookie, with the header writes need). */
 export async function api<T>(page: Page, path: string, init?: { method: string; json: unknown }): Promise<T> {
   return page.evaluate(
     async ({ address, request }) => {
@@ -92,4 +93,21 @@ export function useBrowserSession(contextOptions: BrowserContextOptions = {}): B
     if (session.cspViolations.length > 0) throw new Error(`the Content-Security-Policy blocked something:\n${session.cspViolations.join('\n')}`);
   });
   return session;
+}
+
+/** The demo trial's id, read through the API as its investigator. */
+export async function demoTrialId(): Promise<number> {
+  const login = await fetch(`${baseUrl()}/api/auth/login`, {
+    method: 'POST',
+    headers: { 'Content-Type': 'application/json' },
+    body: JSON.stringify({ email: 'investigator@example.org', password: demoPassword }),
+  });
+  const { accessToken } = (await login.json()) as { accessToken: string };
+  const trials = (await (await fetch(`${baseUrl()}/api/trials`, { headers: { Authorization: `Bearer ${accessToken}` } })).json()) as Array<{ id: number; code: string }>;
+  return trials.find((trial) => trial.code === 'FW-CLAY-26')!.id;
+}
+
+/** Every page of the router (config/paths.ts), with the demo trial and a made-up invitation token filled in. */
+export function everyPage(trialId: number, token = 'not-a-real-invitation-token'): Array<{ name: string; path: string }> {
+  return Object.entries(paths).map(([name, route]) => ({ name, path: route.path.replace(':trialId', String(trialId)).replace(':token', token) }));
 }

@@ -30,10 +30,78 @@ export interface AnovaTableRow {
   /** 'block', 'treatment', 'site', 'block:site', 'site:treatment', factor names and 'A:B', 'error', 'total'. */
   term: string;
   df: number;
-  ss: number;
+  /** Null for a REML row. */
+  ss: number | null;
   ms: number | null;
   f: number | null;
   p: number | null;
+  /** The row the term was tested against ('error', 'block:A', 'site:treatment', 'kenward-roger'); null when not tested. */
+  errorTerm?: string | null;
+  /** REML rows: numerator and denominator degrees of freedom. */
+  numDf?: number;
+  denDf?: number;
+}
+
+/** An error stratum of a classical factorial or split plot, with the terms tested against it. */
+export interface ErrorStratumSummary {
+  /** 'plot', 'whole plot', 'sub plot', 'sub-sub plot'. */
+  stratum: string;
+  /** The ANOVA row that is its error, e.g. 'block:Amendment' or 'error'. */
+  errorTerm: string;
+  ms: number;
+  df: number;
+  terms: string[];
+}
+
+/** A least-squares mean of a level combination of some factors. */
+export interface FactorialMean {
+  levels: Record<string, string>;
+  /** The levels joined by " × ". */
+  treatment: string;
+  n: number;
+  mean: number;
+  se: number;
+  backTransformedMean?: number;
+}
+
+/** The least-squares means of one main effect or interaction. */
+export interface TermMeans {
+  term: string;
+  factors: string[];
+  means: FactorialMean[];
+}
+
+/** Comparisons of means against the error their differences belong to. */
+export interface StratumComparisonSet {
+  /** 'block:A', 'error', 'block:A and error (Satterthwaite)', 'Kenward–Roger'. */
+  errorTerm: string;
+  df: number;
+  comparisons: Partial<Record<SeparationMethod, MethodComparisonSet>>;
+  letters: Partial<Record<LetterMethod, Record<string, string>>>;
+}
+
+/** The standard error of a difference of one kind (a split plot's four textbook kinds among them). */
+export interface DifferenceError {
+  kind: string;
+  description: string;
+  se: number;
+  df: number;
+  /** t at α; for a difference that mixes strata, the weighted t. */
+  critical: number;
+  lsd: number;
+  errorTerm: string;
+}
+
+/** One factor tested within one level of another, with its means separated there. */
+export interface SliceTest extends StratumComparisonSet {
+  factor: string;
+  within: string;
+  level: string;
+  numDf: number;
+  denDf: number;
+  f: number;
+  p: number;
+  means: FactorialMean[];
 }
 
 export interface AnovaSummary {
@@ -113,6 +181,20 @@ export interface AnovaAnswer {
   slopes?: { f: number; p: number; df1: number; df2: number };
   /** With a covariate: the covariate itself between treatments (a baseline should not differ). */
   baseline?: { f: number; p: number; df1: number; df2: number };
+  /** Factorials and split plots: the model used ('anova' classical or least squares, 'reml') and why. */
+  model?: { kind: 'anova' | 'reml'; reason: string };
+  /** Classical factorials and split plots: the error strata, whole plot first. */
+  strata?: ErrorStratumSummary[];
+  /** Factorials and split plots: least-squares means of every main effect and interaction. */
+  marginalMeans?: TermMeans[];
+  /** Factorials and split plots: each factor's level means compared in its own stratum, by factor name. */
+  factorComparisons?: Record<string, StratumComparisonSet>;
+  /** Factorials and split plots: standard errors of a difference by kind. */
+  differences?: DifferenceError[];
+  /** Factorials and split plots: each factor within each level of another, for significant two-factor interactions. */
+  slices?: SliceTest[];
+  /** REML: the variance of each random term and of the error. */
+  varianceComponents?: { name: string; variance: number }[];
 }
 
 /** POST /api/stats/friedman and /api/stats/kruskal answers. */

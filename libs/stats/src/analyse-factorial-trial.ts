@@ -111,6 +111,7 @@ export interface FactorialRequest {
 
 const SMALL_ERROR_DF = 12;
 const MAX_PAIRS_PER_KIND = 60;
+const MAX_COMBINATIONS = 48;
 
 function chooseModel(layout: FactorialLayout, request: FactorialRequest): { kind: 'anova' | 'reml'; reason: string } {
   const missing = layout.balanced ? '' : 'the layout is unbalanced (a plot missing, a block incomplete or unequal replication)';
@@ -131,10 +132,15 @@ function combinations(layout: FactorialLayout, which: readonly number[]): number
   return which.reduce<number[][]>((acc, f) => acc.flatMap((prefix) => layout.factors[f]!.levels.map((_, l) => [...prefix, l])), [[]]);
 }
 
-function count(layout: FactorialLayout, which: readonly number[], levels: readonly number[]): number {
-  let total = 0;
-  for (let i = 0; i < layout.y.length; i++) if (which.every((f, j) => layout.factors[f]!.codes[i] === levels[j])) total++;
-  return total;
+/** Plots of each level combination of some factors, keyed by the combination's mixed-radix number. */
+function plotCounts(layout: FactorialLayout, which: readonly number[]): Map<number, number> {
+  const counts = new Map<number, number>();
+  for (let i = 0; i < layout.y.length; i++) {
+    let key = 0;
+    for (const f of which) key = key * layout.factors[f]!.levels.length + layout.factors[f]!.codes[i]!;
+    counts.set(key, (counts.get(key) ?? 0) + 1);
+  }
+  return counts;
 }
 
 /**
@@ -174,6 +180,14 @@ export function analyseFactorialTrial(request: FactorialRequest): FactorialTrial
   const { alpha, back } = request;
   const centre = layout.centreValue;
   const names = layout.factors.map((factor) => factor.name);
+  const countsByTerm = new Map<string, Map<number, number>>();
+  const countOf = (which: readonly number[], levels: readonly number[]): number => {
+    let counts = countsByTerm.get(which.join(','));
+    if (!counts) countsByTerm.set(which.join(','), (counts = plotCounts(layout, which)));
+    let key = 0;
+    which.forEach((f, j) => (key = key * layout.factors[f]!.levels.length + levels[j]!));
+    return counts.get(key) ?? 0;
+  };
   const entry = (which: readonly number[], levels: readonly number[], by: FactorialFit = fit): Entry => {
     const contrast = by.mean(which, levels);
     const estimate = by.estimate(contrast);
@@ -182,7 +196,7 @@ export function analyseFactorialTrial(request: FactorialRequest): FactorialTrial
     return {
       levels: Object.freeze(Object.fromEntries(which.map((f, j) => [names[f]!, labels[j]!]))),
       treatment: labels.join(' × '),
-      n: count(layout, which, levels),
+      n: countOf(which, levels),
       mean,
       se: Math.sqrt(estimate.variance),
       ...(back ? { backTransformedMean: back(mean) } : {}),
@@ -223,7 +237,15 @@ export function analyseFactorialTrial(request: FactorialRequest): FactorialTrial
     warnings.push(`Fisher's LSD was not computed because no factor or interaction is significant at α = ${alpha}; set forceLsd to compute it anyway.`);
   }
   if (!anySignificant) warnings.push(`No factor or interaction is significant at α = ${alpha}, so the letters are shown for reference only.`);
-  const overall = compare(combinationEntries, methods, request.control);
+  // Every pair of, say, 144 combinations (10,296 pairs) helps no one and costs seconds: beyond MAX_COMBINATIONS the
+  // combinations are compared within slices and factor by factor only, and the answer says so.
+  const overall =
+    combinationEntries.length <= MAX_COMBINATIONS
+      ? compare(combinationEntries, methods, request.control)
+      : (warnings.push(
+          `The ${combinationEntries.length} treatment combinations are not compared pair by pair (more than ${MAX_COMBINATIONS}); compare each factor's means and, where an interaction is significant, the means within each slice.`,
+        ),
+        { comparisons: Object.freeze({}), letters: Object.freeze({}) });
   const factorComparisons = Object.fromEntries(all.map((f) => [names[f]!, compare(marginal.find((m) => m.set.length === 1 && m.set[0] === f)!.entries, methods.filter((m) => m !== 'dunnett'))]));
 
   const differences = differenceErrors(layout, fit, alpha);
@@ -356,7 +378,8 @@ function differenceErrors(layout: FactorialLayout, fit: FactorialFit, alpha: num
     let critical = 0;
     let errorTerm = '';
     for (const [a, b] of pairs) {
-      const contrast = Float64Array.from(fit.mean(kind.which, a), (value, i) => value - fit.mean(kind.which, b)[i]!);
+      const other = fit.mean(kind.which, b);
+      const contrast = Float64Array.from(fit.mean(kind.which, a), (value, i) => value - other[i]!);
       const estimate = fit.estimate(contrast);
       variance += estimate.variance;
       df += estimate.df;
@@ -387,7 +410,8 @@ function sliceTests(
     for (const [f, g] of [set, [...set].reverse()] as [number, number][]) {
       layout.factors[g]!.levels.forEach((level, l) => {
         const levelsAt = (a: number) => (f < g ? [a, l] : [l, a]);
-        const by = sliceFit(Float64Array.from(fit.mean(set, levelsAt(1)), (value, i) => value - fit.mean(set, levelsAt(0))[i]!));
+        const base = fit.mean(set, levelsAt(0));
+        const by = sliceFit(Float64Array.from(fit.mean(set, levelsAt(1)), (value, i) => value - base[i]!));
         const entries = layout.factors[f]!.levels.map((label, a) => ({ ...entry(set, levelsAt(a), by), treatment: label }));
         const rows = entries.slice(1).map((e) => Float64Array.from(e.contrast, (value, i) => value - entries[0]!.contrast[i]!));
         const test = by.test(rows);

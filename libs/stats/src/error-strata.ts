@@ -66,7 +66,9 @@ export function errorStrata(units: readonly Int32Array[], strata: readonly Error
         variance += part;
         if (strata[k]!.df > 0 && Math.abs(a) > 1e-14) denominator += (part * part) / strata[k]!.df;
       });
-      const df = denominator > 0 ? (variance * variance) / denominator : strata[strata.length - 1]!.df;
+      // One stratum alone: its own degrees of freedom exactly (Satterthwaite's ratio would carry rounding).
+      const used = coefficients.map((a, k) => (Math.abs(a) > 1e-14 ? k : -1)).filter((k) => k >= 0);
+      const df = used.length === 1 ? strata[used[0]!]!.df : denominator > 0 ? (variance * variance) / denominator : strata[strata.length - 1]!.df;
       return Object.freeze({ variance, coefficients: Object.freeze(coefficients), df });
     },
     weightedCritical(variance: StratumVariance, critical: (df: number) => number): number {

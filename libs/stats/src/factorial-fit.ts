@@ -162,6 +162,20 @@ export function classicalFactorialFit(layout: FactorialLayout, sitesRandom: bool
     }
     return known;
   };
+  const keysByTerm = new Map<string, Int32Array>();
+  // The cell of every observation in a term, as a mixed-radix number of its level codes (cached per term).
+  const cellKeys = (factors: readonly number[]): Int32Array => {
+    let keys = keysByTerm.get(factors.join(','));
+    if (!keys) {
+      keys = new Int32Array(n);
+      for (const f of factors) {
+        const { codes, levels } = layout.factors[f]!;
+        for (let i = 0; i < n; i++) keys[i] = keys[i]! * levels.length + codes[i]!;
+      }
+      keysByTerm.set(factors.join(','), keys);
+    }
+    return keys;
+  };
   const estimate = (contrast: Float64Array): FactorialEstimate => {
     let value = 0;
     for (let i = 0; i < n; i++) value += contrast[i]! * layout.y[i]!;
@@ -178,10 +192,13 @@ export function classicalFactorialFit(layout: FactorialLayout, sitesRandom: bool
     residuals: sweep.residuals,
     leverage: sweep.leverage,
     mean(factors: readonly number[], levels: readonly number[]): Float64Array {
+      const keys = cellKeys(factors);
+      let key = 0;
+      factors.forEach((f, j) => (key = key * layout.factors[f]!.levels.length + levels[j]!));
       const weights = new Float64Array(n);
       let count = 0;
       for (let i = 0; i < n; i++) {
-        if (factors.every((f, j) => layout.factors[f]!.codes[i] === levels[j])) {
+        if (keys[i] === key) {
           weights[i] = 1;
           count++;
         }

@@ -99,6 +99,19 @@ export function studentizedRangeQuantile(p: number, groups: number, df: number):
   if (!(p > 0 && p < 1)) {
     throw new StatsInputError('invalid argument', `studentizedRangeQuantile: p must be in (0, 1), got ${p}`);
   }
+  // A factorial's slices ask for the same quantile many times (one per level held): remember the last few.
+  const key = `${p}|${groups}|${df}`;
+  const known = recentQuantiles.get(key);
+  if (known !== undefined) return known;
+  const quantile = solveQuantile(p, groups, df);
+  if (recentQuantiles.size >= 64) recentQuantiles.delete(recentQuantiles.keys().next().value!);
+  recentQuantiles.set(key, quantile);
+  return quantile;
+}
+
+const recentQuantiles = new Map<string, number>();
+
+function solveQuantile(p: number, groups: number, df: number): number {
   const shortfall = (q: number): number => studentizedRangeCdf(q, groups, df) - p;
   // The range of k means is at least that of two (√2·t(1 − α/2)); Bonferroni over the
   // k(k − 1)/2 pairs bounds it above.

@@ -207,7 +207,7 @@ describe('split-plot and factorial designs through the API', () => {
     noUnit[0]!.levels[1] = { code: 'G', name: 'Gypsum', rateValue: 40 };
     const refused = await putFactorsCurrent(t, `${split.base}/factors`, split.auth, { factors: noUnit });
     expect(refused.status).toBe(422);
-    expect(refused.body.errors).toEqual([{ field: 'factors.0.levels.1.rateUnit', message: 'Amendment, level G: rateUnit is needed when a rateValue is given' }]);
+    expect(refused.body.errors).toEqual([{ field: 'factors.0.levels.1.rateUnit', message: 'Amendment, level G: rate unit is needed when a rate is given' }]);
     expect(await FactorLevel.count()).toBe(levelsBefore);
   });
 

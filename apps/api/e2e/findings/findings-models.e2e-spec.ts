@@ -4,6 +4,7 @@ import { Trial } from '../../src/trials/models/trial.model';
 import { TrialMembership } from '../../src/trials/models/trial-membership.model';
 import { expectStatus, uniqueCode } from '../protocol/protocol-builder';
 import { bearer, createPerson, createTestApp, tokenFor, type TestApp, patchCurrent } from '../support/test-app';
+import { close, removeBundleFolders, runBundle } from './bundle-support';
 
 type ModelOf<A extends ModelFindings['analysis']> = Extract<ModelFindings, { analysis: A }>;
 
@@ -214,5 +215,10 @@ describe('Findings: the model made for each measure', () => {
     expect((answer as unknown as CountsAnswer).rateRatios.map((r) => r.treatment).sort()).toEqual(['G', 'K']);
     expect(context.modelChoice).toMatchObject({ analysis: 'counts', defaultAnalysis: 'counts' });
     expect(context.modelChoice.why).toMatch(/count per plot/);
-  });
+    // Its bundle: R's glm (poisson, or quasipoisson when Pearson's χ² says so) gives the same rate ratios, 1e-6 relative.
+    const { r } = await runBundle<ModelOf<'counts'>>(t, await tokenFor(t, investigator), `${trialBase}/findings/bundle?measureId=${worms.id}`);
+    expect(r.family).toBe((answer as unknown as CountsAnswer).family);
+    for (const ratio of (answer as unknown as CountsAnswer).rateRatios) close((r.rateRatios as Array<{ treatment: string; ratio: number }>).find((row) => row.treatment === ratio.treatment)!.ratio, ratio.ratio, 1e-6);
+    removeBundleFolders();
+  }, 180_000);
 });

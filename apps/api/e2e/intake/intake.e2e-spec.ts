@@ -76,7 +76,7 @@ describe('Intake: CSV upload of one site and round', () => {
     const before = await rowCounts(t.sequelize, built.trialId);
     const refused = await upload(t, built.tokens.investigator, path, bytes);
     expect(refused.status).toBe(422);
-    expect(refused.body.message).toMatch(/^Nothing was written: 2 warnings need your decision\..*acceptWarnings=true/);
+    expect(refused.body.message).toMatch(/^Nothing was written: 2 warnings need your decision\..*if they are right, confirm them/);
     expect(refused.body.errors.map((e: { message: string }) => e.message)).toEqual([
       'Row 2, water retained (mL): 450 mL is outside the usual range of water retained (50 to 400 mL): check it, then accept the warning to keep it.',
       'Row 3, drain time (s): 3 s is outside the usual range of drain time (5 to 600 s): check it, then accept the warning to keep it.',

@@ -74,7 +74,7 @@ describe('Ledger: observations, edits with versions, history', () => {
       [{ version: 1, value: '7' }, /^value 7 is not on the scale/],
       [{ version: 1, value: '=1+1' }, /looks like a spreadsheet formula/],
       [{ version: 1, value: '>3' }, /only a time with a cut-off can be written as >N/],
-      [{ version: 1, value: '3', missingReason: 'eaten' }, /^missingReason goes only with a missing value/],
+      [{ version: 1, value: '3', missingReason: 'eaten' }, /^reason the value is missing goes only with a missing value/],
       [{ value: '3' }, /^version must be a whole number/],
     ];
     for (const [body, message] of refusals) {
@@ -85,7 +85,8 @@ describe('Ledger: observations, edits with versions, history', () => {
     const drain = await find('TG-B1-P01', 'DT');
     const warned = await t.http.patch(`${base}/observations/${drain.id}`).set(bearer(built.tokens.investigator)).send({ version: 1, value: '2' });
     expect(warned.status).toBe(422);
-    expect(warned.body.message).toMatch(/^Not saved: 2 s is outside the usual range of drain time \(5 to 600 s\).*Send acceptWarnings: true to keep it\.$/);
+    expect(warned.body.message).toMatch(/^Not saved: 2 s is outside the usual range of drain time \(5 to 600 s\).*If the value is right, confirm it to keep it\.$/);
+    expect(warned.body.errors).toContainEqual({ field: 'acceptWarnings', message: 'confirm the value is right to keep it' });
     expect(await rowCounts(t.sequelize, built.trialId)).toEqual(before);
     const accepted = await t.http.patch(`${base}/observations/${drain.id}`).set(bearer(built.tokens.investigator)).send({ version: 1, value: '2', acceptWarnings: true });
     expect(accepted.status).toBe(200);

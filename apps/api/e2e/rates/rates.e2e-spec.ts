@@ -3,6 +3,7 @@ import { computeDose } from '@friable/field';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { bearer, createPerson, createTestApp, tokenFor, type TestApp } from '../support/test-app';
 import { expectStatus } from '../protocol/protocol-builder';
+import { fieldWords } from '../../src/common/input/field-words';
 
 // Expected values are the worked examples of /work/shared/DOMAIN.md ("Rate arithmetic the Rate calculator
 // must do"), computed there from the NIST SP 811 exact factors; compared to the decimals printed there.
@@ -87,6 +88,7 @@ describe('POST /api/rates/dose', () => {
     const response = await t.http.post('/api/rates/dose').set(auth).send(body);
     expect(response.status).toBe(422);
     expect(response.body.errors[0].field).toBe(field);
-    expect(response.body.errors[0].message).toMatch(new RegExp(`^${field}`));
+    // The message names the field as people read it ("area (m²)", "diameter (cm)"), the key stays in `field`.
+    expect(response.body.errors[0].message.startsWith(fieldWords(field))).toBe(true);
   });
 });

@@ -84,6 +84,17 @@ describe('Findings cache: kept until the next write, through any instance', () =
     expect(counts().misses).toBe(before.misses + 1);
   });
 
+  it('a refused write (a stale version, 409) leaves the cached answer in place', async () => {
+    await findings();
+    const list = await one.http.get(`/api/trials/${built.trialId}/observations?measureId=${built.measures.WR}&siteId=${built.siteId}`).set(bearer(built.tokens.reviewer));
+    const cell = (list.body as Observation[])[1]!;
+    const stale = await two.http.patch(`/api/trials/${built.trialId}/observations/${cell.id}`).set(bearer(built.tokens.collaborator)).send({ version: cell.version + 5, value: '222' });
+    expect(stale.status).toBe(409);
+    const before = counts();
+    await findings();
+    expect(counts()).toEqual({ hits: before.hits + 1, misses: before.misses });
+  });
+
   it('fifty requests at once for a changed answer share one computation', async () => {
     const touch = await patchCurrent(two, `/api/trials/${built.trialId}`, bearer(built.tokens.investigator), { title: 'Retitled while cached' });
     expect(touch.status, JSON.stringify(touch.body)).toBe(200);

@@ -74,7 +74,7 @@ describe('Membership changes: role and sites, removal, the last investigator', (
   it('refuses wrong sites by field, strangers to the team, and non-investigators', async () => {
     const noSite = await change(grower.id, { role: 'collaborator', siteIds: [] });
     expect(noSite.status).toBe(422);
-    expect(noSite.body.errors).toEqual([{ field: 'siteIds', message: 'siteIds must name at least one site for a collaborator' }]);
+    expect(noSite.body.errors).toEqual([{ field: 'siteIds', message: 'sites must name at least one site for a collaborator' }]);
     const foreign = await change(grower.id, { role: 'collaborator', siteIds: [999999] });
     expect(foreign.status).toBe(422);
     expect(foreign.body.errors[0].field).toBe('siteIds');

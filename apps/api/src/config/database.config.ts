@@ -1,9 +1,15 @@
 import { registerAs } from '@nestjs/config';
+import { parseHosts, type DatabaseHost } from '../database/database-hosts';
 import { requireInteger, requireText } from './validate-environment';
 
 export interface DatabaseConfig {
+  /** The first of `hosts` (the one a single server setup has). */
   host: string;
   port: number;
+  /** DB_HOST: one server, or the nodes of a Galera cluster in order of preference (host[:port], comma-separated). */
+  hosts: DatabaseHost[];
+  /** DB_READ_HOSTS: replicas that take reads outside transactions (empty: every query goes to `hosts`). */
+  readHosts: DatabaseHost[];
   database: string;
   username: string;
   password: string;
@@ -17,9 +23,14 @@ export interface DatabaseConfig {
 }
 
 export function readDatabaseConfig(env: NodeJS.ProcessEnv = process.env): DatabaseConfig {
+  const port = requireInteger(env, 'DB_PORT', 3407, 1, 65535);
+  const hosts = parseHosts('DB_HOST', requireText(env, 'DB_HOST', '127.0.0.1'), port);
+  const readHosts = env.DB_READ_HOSTS?.trim() ? parseHosts('DB_READ_HOSTS', env.DB_READ_HOSTS, port) : [];
   return {
-    host: requireText(env, 'DB_HOST', '127.0.0.1'),
-    port: requireInteger(env, 'DB_PORT', 3407, 1, 65535),
+    host: hosts[0]!.host,
+    port: hosts[0]!.port,
+    hosts,
+    readHosts,
     database: requireText(env, 'DB_NAME'),
     username: requireText(env, 'DB_USER'),
     password: requireText(env, 'DB_PASSWORD'),

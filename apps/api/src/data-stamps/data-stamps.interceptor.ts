@@ -1,6 +1,7 @@
 import { Injectable, type CallHandler, type ExecutionContext, type NestInterceptor } from '@nestjs/common';
 import type { Request } from 'express';
 import { catchError, from, mergeMap, type Observable } from 'rxjs';
+import { toProblem } from '../common/filters/problem.filter';
 import { ALL_SCOPE, DataStampsService, trialScope } from './data-stamps.service';
 
 const SAFE_METHODS = new Set(['GET', 'HEAD', 'OPTIONS']);
@@ -17,8 +18,8 @@ export function writtenScope(method: string, path: string, trialIdParam: unknown
 /**
  * Data stamp interceptor — after every request that may write (any method but GET, HEAD and OPTIONS),
  * replaces the stamp of the trial it names (or of everything), before the answer goes out, so the writer's next
- * read and every other instance's see fresh answers. A refused write is stamped too: it costs one row write
- * and never leaves a half-written change unnoticed.
+ * read and every other instance's see fresh answers. A refusal (4xx) wrote nothing and is not stamped; a failure
+ * (5xx, or no answer at all) is, since whether anything was written is not known there.
  */
 @Injectable()
 export class DataStampsInterceptor implements NestInterceptor {
@@ -31,7 +32,11 @@ export class DataStampsInterceptor implements NestInterceptor {
     if (scope === null) return next.handle();
     return next.handle().pipe(
       mergeMap((value) => from(this.stamps.touch(scope).then(() => value))),
-      catchError((error: unknown) => from(this.stamps.touch(scope).then(() => Promise.reject(error)))),
+      catchError((error: unknown) => {
+        // Answered as the problem filter will answer it: a 4xx is a refusal.
+        if (toProblem(error).statusCode < 500) throw error;
+        return from(this.stamps.touch(scope).then(() => Promise.reject(error)));
+      }),
     );
   }
 }

@@ -1,11 +1,25 @@
 import * as mariadb from 'mariadb';
 import type { SequelizeOptions } from 'sequelize-typescript';
 import type { DatabaseConfig } from '../config/database.config';
+import { hostRing } from './database-hosts';
 import { openLocalInfile } from './local-infile';
 
 /** Connection options shared by the Nest module, the command line and the tests (a socket timeout of 0 means none). */
 export function sequelizeOptions(config: DatabaseConfig): SequelizeOptions {
+  const ring = hostRing(config.hosts);
+  const credentials = { database: config.database, username: config.username, password: config.password };
   return {
+    ...(config.readHosts.length
+      ? { replication: { write: { host: config.host, port: String(config.port), ...credentials }, read: config.readHosts.map((h) => ({ host: h.host, port: String(h.port), ...credentials })) } }
+      : {}),
+    // Several nodes in DB_HOST: each new connection goes to the node in use (the watch moves it on when one stops answering).
+    hooks: {
+      beforeConnect: (connection: { host?: string; port?: number | string }) => {
+        if (config.hosts.length < 2 || !ring.isWriteHost(connection.host, Number(connection.port))) return;
+        connection.host = ring.current.host;
+        connection.port = ring.current.port;
+      },
+    },
     dialect: 'mariadb',
     // Handed over explicitly so Sequelize uses the driver version this package pins.
     dialectModule: mariadb,

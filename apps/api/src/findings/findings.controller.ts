@@ -1,8 +1,10 @@
-import { Controller, Get, Query } from '@nestjs/common';
+import { Controller, Get, Query, StreamableFile } from '@nestjs/common';
 import { ApiExtraModels, ApiOkResponse, ApiOperation, ApiTags, ApiUnprocessableEntityResponse, getSchemaPath } from '@nestjs/swagger';
 import type { TrialAccessContext } from '../auth/auth-user';
 import { AnyTrialMember } from '../common/decorators/access.decorator';
 import { CurrentTrialAccess } from '../common/decorators/current-user.decorator';
+import { ApiFileResponse } from '../common/openapi/file-response.decorator';
+import { findingsBundle } from './bundle/findings-bundle';
 import { FindingsQueryDto } from './dto/findings-query.dto';
 import { FindingsCache } from './findings-cache';
 import { FindingsService } from './findings.service';
@@ -39,5 +41,19 @@ export class FindingsController {
   @ApiUnprocessableEntityResponse({ description: 'An unknown measure, round or site, no data yet, or the engine’s sentence.' })
   get(@CurrentTrialAccess() access: TrialAccessContext, @Query() query: FindingsQueryDto) {
     return this.cache.answer(access.trialId, query, () => this.findings.findings(access.trialId, query));
+  }
+
+  @Get('bundle')
+  @AnyTrialMember()
+  @ApiOperation({
+    summary: 'The same analysis as a small bundle anyone can check: data.csv, analysis.R, friable.json, README.txt',
+    description:
+      'Takes the query of GET /findings. analysis.R reproduces the tables from data.csv with R’s standard packages (emmeans, survival, multcomp, nlme, MASS) and writes r-results.json beside friable.json, Friable’s own answer.',
+  })
+  @ApiFileResponse(['application/zip'], 'A zip named after the trial, measure, round and analysis.')
+  @ApiUnprocessableEntityResponse({ description: 'As GET /findings.' })
+  async bundle(@CurrentTrialAccess() access: TrialAccessContext, @Query() query: FindingsQueryDto) {
+    const { filename, bytes } = await findingsBundle(await this.findings.findings(access.trialId, query));
+    return new StreamableFile(bytes, { type: 'application/zip', length: bytes.length, disposition: `attachment; filename="${filename}"` });
   }
 }

@@ -2,6 +2,7 @@ import { Inject, Injectable, Logger, type OnApplicationShutdown, type OnModuleIn
 import type { ConfigType } from '@nestjs/config';
 import * as mariadb from 'mariadb';
 import { databaseConfig } from '../config/database.config';
+import { hostRing, type DatabaseHost } from '../database/database-hosts';
 
 /** How often the database is asked whether it is there, and how long an answer may take. */
 const INTERVAL_MS = 500;
@@ -81,11 +82,35 @@ export class DatabaseWatchService implements OnModuleInit, OnApplicationShutdown
     return this.up;
   }
 
+  /**
+   * With several nodes in DB_HOST: when the node in use does not answer, the next that does becomes the one every
+   * new pooled connection goes to (database/database-hosts.ts); the check fails only when none answers.
+   */
   private async ping(): Promise<void> {
+    const ring = hostRing(this.config.hosts);
+    if (ring.hosts.length === 1) return this.pingHost(ring.current);
+    let lastError: unknown;
+    for (const host of ring.inTurn) {
+      try {
+        await this.pingHost(host);
+        if (host !== ring.current) {
+          this.logger.warn(`Database node ${ring.current.host}:${ring.current.port} does not answer; new connections go to ${host.host}:${host.port}.`);
+          ring.use(host);
+        }
+        return;
+      } catch (error) {
+        this.drop();
+        lastError = error;
+      }
+    }
+    throw lastError;
+  }
+
+  private async pingHost(host: DatabaseHost): Promise<void> {
     if (!this.connection) {
       const connection = await mariadb.createConnection({
-        host: this.config.host,
-        port: this.config.port,
+        host: host.host,
+        port: host.port,
         user: this.config.username,
         password: this.config.password,
         database: this.config.database,

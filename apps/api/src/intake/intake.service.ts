@@ -343,7 +343,7 @@ export class IntakeService {
     }
     if (checked.valueWarnings > 0 && !options.dryRun && !options.acceptWarnings) {
       throw refusal(
-        `Nothing was written: ${plural(checked.valueWarnings, 'warning needs', 'warnings need')} your decision. Check the values, then send the file again with acceptWarnings=true to keep them as typed.`,
+        `Nothing was written: ${plural(checked.valueWarnings, 'warning needs', 'warnings need')} your decision. Check the values; if they are right, confirm them and send the file again to keep them as typed.`,
         checked.warnings.filter((warning) => warning.row !== null),
       );
     }
@@ -365,7 +365,7 @@ export class IntakeService {
       await this.bulk.classify(transaction, context);
       comparison = await this.bulk.compareStaged(transaction, INTAKE_CHANGE_LIST_CAP);
     }
-    const warned = checked.valueWarnings ? ` ${plural(checked.valueWarnings, 'warning needs', 'warnings need')} acceptWarnings=true.` : '';
+    const warned = checked.valueWarnings ? ` ${plural(checked.valueWarnings, 'warning needs', 'warnings need')} your confirmation.` : '';
     const message = identical
       ? this.identicalMessage(resolved, previous!)
       : `Nothing was written (dry run). Committing would add ${plural(comparison.created, 'new value', 'new values')}, change ${count(comparison.updated)} and leave ${count(comparison.unchanged)} unchanged.${warned}`;

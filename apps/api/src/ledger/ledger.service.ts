@@ -106,8 +106,9 @@ export class LedgerService {
     if (!reading.ok) throw new FieldProblemsException([...reading.problems]);
     if (reading.value.warnings.length > 0 && input.acceptWarnings !== true) {
       throw new FieldProblemsException(
-        reading.value.warnings.map((warning) => ({ field: 'value', message: `value ${warning}` })),
-        `Not saved: ${reading.value.warnings.join(' ')} Send acceptWarnings: true to keep it.`,
+        // The acceptWarnings entry tells a client this value may be kept on purpose (sent again with it true).
+        [...reading.value.warnings.map((warning) => ({ field: 'value', message: `value ${warning}` })), { field: 'acceptWarnings', message: 'confirm the value is right to keep it' }],
+        `Not saved: ${reading.value.warnings.join(' ')} If the value is right, confirm it to keep it.`,
       );
     }
     const id = await this.sequelize.transaction(async (transaction) => {

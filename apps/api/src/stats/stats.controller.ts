@@ -27,8 +27,15 @@ export class StatsController {
   @ApiOperation({
     summary: 'ANOVA, least-squares means, mean separation, letters and diagnostics',
     description:
-      'Designs: crd (treatment), rcbd (block, treatment), factorial-rcbd (block, A, B, A:B), multisite-rcbd (site, block:site, treatment, site:treatment). ' +
-      'Sums of squares are sequential in that order. With sites random (the default) treatment is tested against site:treatment and site against block:site.',
+      'Designs: crd (treatment), rcbd (block, treatment), multisite-rcbd (site, block:site, treatment, site:treatment): sums of squares sequential in that order; ' +
+      'with sites random (the default) treatment is tested against site:treatment and site against block:site. ' +
+      'factorial-crd, factorial-rcbd, multisite-factorial-rcbd (2–4 factors), split-plot, multisite-split-plot (2 factors, whole-plot first) and split-split-plot (3): ' +
+      'factorNames and observations with factors {name: level}; every main effect and interaction (terms are factor names joined by ":" in the order of factorNames). ' +
+      'model: anova (classical; each term tested against its stratum error — block:A for the whole-plot factor — or, with random sites, its site interaction; an unbalanced ' +
+      'factorial gets the type III least-squares ANOVA) or reml (blocks, whole plots, sites and site interactions random; Kenward–Roger F tests, rows with numDf and denDf, ss and ms null). ' +
+      'Default: anova when every plot is present, else reml; the answer says which (model) and why. Each anova row names its errorTerm. The answer adds strata, ' +
+      'least-squares means of every term (marginalMeans), each factor compared in its own stratum (factorComparisons), standard errors of a difference by kind ' +
+      '(differences: a split plot’s four, with the weighted t where strata mix) and, for significant two-factor interactions, slices with letters inside each.',
   })
   @ApiOkResponse({ type: AnovaAnswerDto, description: '{anova, summary, means, comparisons, letters, diagnostics, warnings}' })
   @ApiUnprocessableEntityResponse({ description: 'A malformed body (naming the field) or a statistically impossible request (the engine’s sentence).' })

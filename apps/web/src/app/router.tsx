@@ -22,8 +22,8 @@ const SitesRoute = lazyPage(() => import('./routes/trial-sections'), 'SitesRoute
 const PlotPlanRoute = lazyPage(() => import('./routes/trial-sections'), 'PlotPlanRoute');
 const TeamRoute = lazyPage(() => import('./routes/trial-sections'), 'TeamRoute');
 const IntakeRoute = lazyPage(() => import('./routes/trial-sections'), 'IntakeRoute');
-const LedgerRoute = lazyPage(() => import('./routes/trial-sections'), 'LedgerRoute');
-const WalkRoute = lazyPage(() => import('./routes/trial-sections'), 'WalkRoute');
+const LedgerRoute = lazyPage(() => import('./routes/ledger'), 'LedgerRoute');
+const WalkRoute = lazyPage(() => import('./routes/walk'), 'WalkRoute');
 const AcceptInvitationRoute = lazyPage(() => import('./routes/trial-sections'), 'AcceptInvitationRoute');
 const FindingsRoute = lazyPage(() => import('./routes/findings-routes'), 'FindingsRoute');
 const QuickAnalysisRoute = lazyPage(() => import('./routes/findings-routes'), 'QuickAnalysisRoute');

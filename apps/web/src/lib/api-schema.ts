@@ -210,7 +210,7 @@ export interface paths {
         put?: never;
         /**
          * ANOVA, least-squares means, mean separation, letters and diagnostics
-         * @description Designs: crd (treatment), rcbd (block, treatment), factorial-rcbd (block, A, B, A:B), multisite-rcbd (site, block:site, treatment, site:treatment). Sums of squares are sequential in that order. With sites random (the default) treatment is tested against site:treatment and site against block:site.
+         * @description Designs: crd (treatment), rcbd (block, treatment), multisite-rcbd (site, block:site, treatment, site:treatment): sums of squares sequential in that order; with sites random (the default) treatment is tested against site:treatment and site against block:site. factorial-crd, factorial-rcbd, multisite-factorial-rcbd (2–4 factors), split-plot, multisite-split-plot (2 factors, whole-plot first) and split-split-plot (3): factorNames and observations with factors {name: level}; every main effect and interaction (terms are factor names joined by ":" in the order of factorNames). model: anova (classical; each term tested against its stratum error — block:A for the whole-plot factor — or, with random sites, its site interaction; an unbalanced factorial gets the type III least-squares ANOVA) or reml (blocks, whole plots, sites and site interactions random; Kenward–Roger F tests, rows with numDf and denDf, ss and ms null). Default: anova when every plot is present, else reml; the answer says which (model) and why. Each anova row names its errorTerm. The answer adds strata, least-squares means of every term (marginalMeans), each factor compared in its own stratum (factorComparisons), standard errors of a difference by kind (differences: a split plot’s four, with the weighted t where strata mix) and, for significant two-factor interactions, slices with letters inside each.
          */
         post: operations["StatsController_anova"];
         delete?: never;
@@ -597,6 +597,26 @@ export interface paths {
          * @description `analysis` left out: the model made for the measure — censored (a time with a cut-off: POST /api/stats/censored), ordinal (a score: /api/stats/ordinal), counts (a count: /api/stats/counts), and for a measured number ancova (a day-0 baseline and one later round: /api/stats/anova with the baseline as covariate), repeated (two or more rounds: /api/stats/repeated) or else anova. A model answers with the stateless endpoint’s body, `analysis`, and `context` (the request and observations sent, which model and why, the options on offer). `analysis=anova`: the same body as POST /api/stats/anova on the stored decimal text (design from the trial; several sites combined: multisite-rcbd), plus `context`: the observations in the order given to the engine (residual index), censoring, missing values, % of control, the rank test (Friedman for blocked designs, blocks = site × block when sites are combined; Kruskal–Wallis otherwise), the not-drained curve for a time with a cut-off, the means over time and the data hash. Answers are kept until the next write to the trial (through any API instance).
          */
         get: operations["FindingsController_get"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/trials/{trialId}/findings/bundle": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /**
+         * The same analysis as a small bundle anyone can check: data.csv, analysis.R, friable.json, README.txt
+         * @description Takes the query of GET /findings. analysis.R reproduces the tables from data.csv with R’s standard packages (emmeans, survival, multcomp, nlme, MASS) and writes r-results.json beside friable.json, Friable’s own answer.
+         */
+        get: operations["FindingsController_bundle"];
         put?: never;
         post?: never;
         delete?: never;
@@ -1148,6 +1168,12 @@ export interface components {
         };
         /** @enum {string} */
         AnalysisDesign: "crd" | "rcbd" | "factorial-crd" | "factorial-rcbd" | "split-plot" | "split-split-plot" | "multisite-rcbd" | "multisite-factorial-rcbd" | "multisite-split-plot";
+        AnalysisModelDto: {
+            /** @enum {string} */
+            kind: "anova" | "reml";
+            /** @description Why this model was used, in a sentence. */
+            reason: string;
+        };
         AnalysisOptionDto: {
             analysis: components["schemas"]["FindingsAnalysis"];
             available: boolean;
@@ -1208,6 +1234,16 @@ export interface components {
             title: string;
             trialId: number;
         };
+        AnalysisStratumDto: {
+            df: number;
+            /** @description The ANOVA row that is this stratum's error, e.g. 'block:Amendment' or 'error'. */
+            errorTerm: string;
+            ms: number;
+            /** @description 'plot', 'whole plot', 'sub plot' or 'sub-sub plot'. */
+            stratum: string;
+            /** @description The terms tested against this error. */
+            terms: string[];
+        };
         /** @enum {string} */
         AnalysisTransform: "none" | "log" | "sqrt" | "arcsine-sqrt";
         AncovaFindingsDto: {
@@ -1221,16 +1257,32 @@ export interface components {
             /** @description With a covariate (analysis of covariance): the common slope, with the covariate’s mean. */
             covariate?: components["schemas"]["CovariateSlopeDto"];
             diagnostics: components["schemas"]["DiagnosticsDto"];
+            /** @description Factorials and split plots: standard errors of a difference by kind. */
+            differences?: components["schemas"]["DifferenceErrorDto"][];
+            /** @description Factorials and split plots: each factor's level means compared in its own stratum, by factor name. */
+            factorComparisons?: {
+                [key: string]: components["schemas"]["StratumComparisonSetDto"];
+            };
             /** @description Factorial only: LS means of each factor's levels, by factor name. */
             factorMeans?: {
                 [key: string]: components["schemas"]["LsMeanDto"][];
             };
             /** @description Per method, treatment → compact letters. */
             letters: components["schemas"]["LettersByMethodDto"];
+            /** @description Factorials and split plots: least-squares means of every main effect and interaction. */
+            marginalMeans?: components["schemas"]["TermMeansDto"][];
             means: components["schemas"]["LsMeanDto"][];
+            /** @description Factorials and split plots: the model used and why. */
+            model?: components["schemas"]["AnalysisModelDto"];
+            /** @description Factorials and split plots: each factor within each level of another, for significant two-factor interactions. */
+            slices?: components["schemas"]["SliceTestDto"][];
             /** @description With a covariate: the test of equal slopes across treatments. */
             slopes?: components["schemas"]["FTestDto"];
+            /** @description Classical factorials and split plots: the error strata, whole plot first. */
+            strata?: components["schemas"]["AnalysisStratumDto"][];
             summary: components["schemas"]["AnovaSummaryDto"];
+            /** @description REML: the variance of each random term and of the error. */
+            varianceComponents?: components["schemas"]["VarianceComponentDto"][];
             /** @description Plain sentences from the engine. */
             warnings: string[];
         };
@@ -1242,16 +1294,32 @@ export interface components {
             /** @description With a covariate (analysis of covariance): the common slope, with the covariate’s mean. */
             covariate?: components["schemas"]["CovariateSlopeDto"];
             diagnostics: components["schemas"]["DiagnosticsDto"];
+            /** @description Factorials and split plots: standard errors of a difference by kind. */
+            differences?: components["schemas"]["DifferenceErrorDto"][];
+            /** @description Factorials and split plots: each factor's level means compared in its own stratum, by factor name. */
+            factorComparisons?: {
+                [key: string]: components["schemas"]["StratumComparisonSetDto"];
+            };
             /** @description Factorial only: LS means of each factor's levels, by factor name. */
             factorMeans?: {
                 [key: string]: components["schemas"]["LsMeanDto"][];
             };
             /** @description Per method, treatment → compact letters. */
             letters: components["schemas"]["LettersByMethodDto"];
+            /** @description Factorials and split plots: least-squares means of every main effect and interaction. */
+            marginalMeans?: components["schemas"]["TermMeansDto"][];
             means: components["schemas"]["LsMeanDto"][];
+            /** @description Factorials and split plots: the model used and why. */
+            model?: components["schemas"]["AnalysisModelDto"];
+            /** @description Factorials and split plots: each factor within each level of another, for significant two-factor interactions. */
+            slices?: components["schemas"]["SliceTestDto"][];
             /** @description With a covariate: the test of equal slopes across treatments. */
             slopes?: components["schemas"]["FTestDto"];
+            /** @description Classical factorials and split plots: the error strata, whole plot first. */
+            strata?: components["schemas"]["AnalysisStratumDto"][];
             summary: components["schemas"]["AnovaSummaryDto"];
+            /** @description REML: the variance of each random term and of the error. */
+            varianceComponents?: components["schemas"]["VarianceComponentDto"][];
             /** @description Plain sentences from the engine. */
             warnings: string[];
         };
@@ -1264,7 +1332,15 @@ export interface components {
              */
             control?: string;
             /** @enum {string} */
-            design: "crd" | "rcbd" | "factorial-rcbd" | "multisite-rcbd";
+            design: "crd" | "rcbd" | "factorial-crd" | "factorial-rcbd" | "split-plot" | "split-split-plot" | "multisite-rcbd" | "multisite-factorial-rcbd" | "multisite-split-plot";
+            /**
+             * @description Factorials and split plots: the factor names (a split plot’s from the whole-plot factor down); default: the keys of the first observation’s factors.
+             * @example [
+             *       "Amendment",
+             *       "Mulch"
+             *     ]
+             */
+            factorNames?: string[];
             /**
              * @description Show Fisher’s LSD even when the treatment F test is not significant.
              * @default false
@@ -1276,6 +1352,11 @@ export interface components {
              *     ]
              */
             meanSeparation?: ("lsd" | "tukey" | "dunnett" | "bonferroni" | "holm")[];
+            /**
+             * @description Factorials and split plots: the classical ANOVA or REML (Kenward–Roger). Default: anova when every plot is present, else reml; the answer says which and why.
+             * @enum {string}
+             */
+            model?: "anova" | "reml";
             observations: components["schemas"]["ObservationDto"][];
             /**
              * @default random
@@ -1297,12 +1378,19 @@ export interface components {
             rootMse: number;
         };
         AnovaTableRowDto: {
+            /** @description REML rows: Kenward–Roger denominator degrees of freedom. */
+            denDf?: number;
             df: number;
+            /** @description The row the term was tested against ('error', 'block:A', 'site:treatment', 'kenward-roger'); null when not tested. */
+            errorTerm?: string | null;
             f: number | null;
             /** @description Null where the term is not tested. */
             ms: number | null;
+            /** @description REML rows: numerator degrees of freedom. */
+            numDf?: number;
             p: number | null;
-            ss: number;
+            /** @description Null for a REML row. */
+            ss: number | null;
             /** @description 'block', 'treatment', 'site', 'block:site', 'site:treatment', factor names and 'A:B', 'error', 'total'. */
             term: string;
         };
@@ -1864,6 +1952,21 @@ export interface components {
             /** @description Null outside 3..5000 residuals. */
             shapiroWilk: components["schemas"]["ShapiroWilkDto"] | null;
         };
+        DifferenceErrorDto: {
+            /** @description t at α (two-sided); the weighted t where strata mix. */
+            critical: number;
+            /** @example Two Amendment (whole-plot) means at the same or different levels of Mulch */
+            description: string;
+            /** @description Degrees of freedom (Satterthwaite's where strata mix; Kenward–Roger for REML). */
+            df: number;
+            errorTerm: string;
+            /** @example Amendment within Mulch */
+            kind: string;
+            /** @description critical × se. */
+            lsd: number;
+            /** @description Standard error of the difference. */
+            se: number;
+        };
         DoseAnswerDto: {
             areaM2: number;
             basis: components["schemas"]["RateBasis"];
@@ -1975,6 +2078,18 @@ export interface components {
              */
             version?: number;
         };
+        FactorialMeanDto: {
+            /** @description With a transform: the mean back on the original scale. */
+            backTransformedMean?: number;
+            /** @description Level of each factor of the term, by factor name. */
+            levels: {
+                [key: string]: string;
+            };
+            mean: number;
+            n: number;
+            se: number;
+            treatment: string;
+        };
         FactorLevelDto: {
             /**
              * @description 1 to 6 letters or digits, unique within the factor.
@@ -2057,6 +2172,7 @@ export interface components {
             observations: components["schemas"]["FindingsObservationRowDto"][];
             percentOfControl: components["schemas"]["PercentOfControlDto"][];
             rankTest: components["schemas"]["FindingsRankTestDto"];
+            /** @description The round analysed (rounds over time: the latest used). */
             round: components["schemas"]["RoundRefDto"];
             scope: components["schemas"]["FindingsScopeDto"];
             trialCode: string;
@@ -2071,16 +2187,32 @@ export interface components {
             /** @description With a covariate (analysis of covariance): the common slope, with the covariate’s mean. */
             covariate?: components["schemas"]["CovariateSlopeDto"];
             diagnostics: components["schemas"]["DiagnosticsDto"];
+            /** @description Factorials and split plots: standard errors of a difference by kind. */
+            differences?: components["schemas"]["DifferenceErrorDto"][];
+            /** @description Factorials and split plots: each factor's level means compared in its own stratum, by factor name. */
+            factorComparisons?: {
+                [key: string]: components["schemas"]["StratumComparisonSetDto"];
+            };
             /** @description Factorial only: LS means of each factor's levels, by factor name. */
             factorMeans?: {
                 [key: string]: components["schemas"]["LsMeanDto"][];
             };
             /** @description Per method, treatment → compact letters. */
             letters: components["schemas"]["LettersByMethodDto"];
+            /** @description Factorials and split plots: least-squares means of every main effect and interaction. */
+            marginalMeans?: components["schemas"]["TermMeansDto"][];
             means: components["schemas"]["LsMeanDto"][];
+            /** @description Factorials and split plots: the model used and why. */
+            model?: components["schemas"]["AnalysisModelDto"];
+            /** @description Factorials and split plots: each factor within each level of another, for significant two-factor interactions. */
+            slices?: components["schemas"]["SliceTestDto"][];
             /** @description With a covariate: the test of equal slopes across treatments. */
             slopes?: components["schemas"]["FTestDto"];
+            /** @description Classical factorials and split plots: the error strata, whole plot first. */
+            strata?: components["schemas"]["AnalysisStratumDto"][];
             summary: components["schemas"]["AnovaSummaryDto"];
+            /** @description REML: the variance of each random term and of the error. */
+            varianceComponents?: components["schemas"]["VarianceComponentDto"][];
             /** @description Plain sentences from the engine. */
             warnings: string[];
         };
@@ -2509,6 +2641,7 @@ export interface components {
             censored: components["schemas"]["CensoredSummaryDto"];
             choices: components["schemas"]["ModelChoicesDto"];
             controlCode: string | null;
+            /** @description SHA-256 (hex) of the canonical JSON of the observations sent to the engine. */
             dataHash: string;
             /** @description The observations sent, in the engine’s order. */
             engineObservations: {
@@ -3188,6 +3321,23 @@ export interface components {
             grams: number | null;
             litres: number | null;
         };
+        SliceTestDto: {
+            comparisons: components["schemas"]["ComparisonsByMethodDto"];
+            denDf: number;
+            df: number;
+            /** @description The error the differences are judged against: 'block:A', 'error', 'block:A and error (Satterthwaite)', 'Kenward–Roger'. */
+            errorTerm: string;
+            f: number;
+            /** @description The factor tested. */
+            factor: string;
+            letters: components["schemas"]["LettersByMethodDto"];
+            level: string;
+            means: components["schemas"]["FactorialMeanDto"][];
+            numDf: number;
+            p: number;
+            /** @description The factor whose level is held. */
+            within: string;
+        };
         SnapshotCommentDto: {
             analysisId: number;
             authorId: number | null;
@@ -3239,6 +3389,19 @@ export interface components {
             /** @enum {string} */
             stratum: "between plots" | "within plots";
             /** @example treatment:round */
+            term: string;
+        };
+        StratumComparisonSetDto: {
+            comparisons: components["schemas"]["ComparisonsByMethodDto"];
+            df: number;
+            /** @description The error the differences are judged against: 'block:A', 'error', 'block:A and error (Satterthwaite)', 'Kenward–Roger'. */
+            errorTerm: string;
+            letters: components["schemas"]["LettersByMethodDto"];
+        };
+        TermMeansDto: {
+            factors: string[];
+            means: components["schemas"]["FactorialMeanDto"][];
+            /** @example Amendment:Mulch */
             term: string;
         };
         TermTestDto: {
@@ -3645,6 +3808,11 @@ export interface components {
              * @example Robin Ash
              */
             name?: string;
+        };
+        VarianceComponentDto: {
+            /** @example block:Amendment */
+            name: string;
+            variance: number;
         };
     };
     responses: never;
@@ -5631,6 +5799,92 @@ export interface operations {
                 };
             };
             /** @description An unknown measure, round or site, no data yet, or the engine’s sentence. */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+        };
+    };
+    FindingsController_bundle: {
+        parameters: {
+            query: {
+                alpha?: number;
+                /** @description Leave out for the model made for the measure: censored (time with a cut-off), ordinal (score), counts (count); a number: ancova with a day-0 baseline and one later round, repeated with two or more rounds, else anova. */
+                analysis?: "anova" | "censored" | "repeated" | "ancova" | "ordinal" | "counts";
+                /** @description repeated: the within-plot covariance (auto: lowest AIC). */
+                covariance?: "cs" | "ar1" | "unstructured" | "auto";
+                /** @description ancova: the measure whose values are the covariate; default the analysed measure. */
+                covariateMeasureId?: number;
+                /** @description ancova: the round whose values are the covariate; default the day-0 round (else the earliest earlier round with values). */
+                covariateRoundId?: number;
+                /** @description censored: the time-ratio model’s distribution. */
+                distribution?: "weibull" | "lognormal" | "loglogistic";
+                /** @description counts: auto takes quasi-Poisson when the counts are overdispersed. */
+                family?: "auto" | "poisson" | "quasipoisson";
+                /** @description Compute Fisher’s LSD even when the treatment F test is not significant. */
+                forceLsd?: boolean;
+                /** @description The measure to analyse. */
+                measureId: number;
+                /** @description Mean separation method. */
+                method?: "lsd" | "tukey" | "dunnett" | "bonferroni" | "holm";
+                /** @description The assessment round to analyse; leave out for the latest round holding values of the measure in this scope. */
+                roundId?: number;
+                /** @description One site; leave out for all sites combined. */
+                siteId?: number;
+                /** @description With all sites combined: random tests treatment against site × treatment. */
+                sitesAre?: "random" | "fixed";
+                transform?: "none" | "log" | "sqrt" | "arcsine-sqrt";
+            };
+            header?: never;
+            path: {
+                /** @description The trial. */
+                trialId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description A zip named after the trial, measure, round and analysis. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/zip": string;
+                };
+            };
+            /** @description No valid token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description Needs one of these roles on the trial: investigator, collaborator, reviewer. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description No such trial, or you are not a member of it. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description As GET /findings. */
             422: {
                 headers: {
                     [name: string]: unknown;

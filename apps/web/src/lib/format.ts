@@ -11,6 +11,16 @@ export const designLabels: Record<string, string> = {
   'split-split-plot': 'Split-split plot in blocks',
 };
 
+/** What each design does with the plots, in a sentence, for the design pickers. */
+export const designHelp: Record<string, string> = {
+  crd: 'Every plot gets its treatment by lot, with no blocks.',
+  rcbd: 'Every treatment once in each block, shuffled anew in every block.',
+  'factorial-crd': 'Every combination of 2 to 4 factors’ levels is a treatment, placed by lot with no blocks.',
+  'factorial-rcbd': 'Every combination of 2 to 4 factors’ levels once in each block.',
+  'split-plot': 'One factor on whole beds (whole plots shuffled within blocks), a second on parts of each bed (sub plots shuffled within whole plots).',
+  'split-split-plot': 'As a split plot, with a third factor on parts of each sub plot (sub-sub plots shuffled within sub plots).',
+};
+
 export const statusLabels: Record<string, string> = {
   draft: 'Draft',
   active: 'Active',

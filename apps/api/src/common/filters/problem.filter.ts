@@ -2,6 +2,7 @@ import { ArgumentsHost, Catch, HttpException, HttpStatus, Logger, type Exception
 import type { Response } from 'express';
 import { ConnectionError, DatabaseError, OptimisticLockError, UniqueConstraintError, ValidationError as SequelizeValidationError } from 'sequelize';
 import type { ProblemBody } from '@friable/contracts';
+import { fieldWords, inPeoplesWords } from '../input/field-words';
 
 const reasonPhrases: Record<number, string> = {
   400: 'Bad Request',
@@ -48,13 +49,14 @@ export function toProblem(exception: unknown): ProblemBody {
     if (typeof body === 'string') return problem(status, body);
     const { message, errors } = body as { message?: unknown; errors?: ProblemBody['errors'] };
     const text = Array.isArray(message) ? message.join('; ') : typeof message === 'string' ? message : exception.message;
-    return problem(status, text, errors ? { errors } : {});
+    // Every refusal names fields as people see them, whichever part of the API wrote it.
+    return problem(status, inPeoplesWords(text), errors ? { errors: errors.map((e) => ({ ...e, message: inPeoplesWords(e.message) })) } : {});
   }
   if (exception instanceof UniqueConstraintError) {
     const fields = Object.keys(exception.fields ?? {}).filter((f) => !/^(PRIMARY|.*_unique.*)$/.test(f));
     const field = fields[0];
-    return problem(409, field ? `Another record already uses this ${field}.` : 'That record already exists.', {
-      errors: field ? [{ field, message: `${field} is already taken` }] : undefined,
+    return problem(409, field ? `Another record already uses this ${fieldWords(field)}.` : 'That record already exists.', {
+      errors: field ? [{ field, message: `${fieldWords(field)} is already taken` }] : undefined,
     });
   }
   if (exception instanceof OptimisticLockError) {
@@ -62,7 +64,7 @@ export function toProblem(exception: unknown): ProblemBody {
   }
   if (exception instanceof SequelizeValidationError) {
     return problem(422, 'Please correct the highlighted fields.', {
-      errors: exception.errors.map((e) => ({ field: e.path ?? undefined, message: e.message })),
+      errors: exception.errors.map((e) => ({ field: e.path ?? undefined, message: inPeoplesWords(e.message) })),
     });
   }
   if (isDatabaseUnavailable(exception)) return databaseUnavailable();

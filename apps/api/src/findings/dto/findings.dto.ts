@@ -245,30 +245,22 @@ export class MeansOverTimePointDto implements MeansOverTimePoint {
   unavailable?: string;
 }
 
-export class FindingsContextDto implements FindingsContext {
+/** What every Findings context holds, the ANOVA's and each model's. */
+export class FindingsContextBaseDto {
   @ApiProperty()
   trialId: number;
 
   @ApiProperty()
   trialCode: string;
 
-  @ApiProperty({ type: FindingsChoicesDto })
-  choices: FindingsChoicesDto;
-
-  @ApiProperty({ type: EngineRequestDto })
-  engineRequest: EngineRequestDto;
-
   @ApiProperty({ type: FindingsMeasureDto })
   measure: FindingsMeasureDto;
 
-  @ApiProperty({ type: RoundRefDto })
+  @ApiProperty({ type: RoundRefDto, description: 'The round analysed (rounds over time: the latest used).' })
   round: RoundRefDto;
 
   @ApiProperty({ type: FindingsScopeDto })
   scope: FindingsScopeDto;
-
-  @ApiProperty({ type: [FindingsObservationRowDto], description: 'In the order given to the engine (residual index = position).' })
-  observations: FindingsObservationRowDto[];
 
   @ApiProperty({ type: CensoredSummaryDto })
   censored: CensoredSummaryDto;
@@ -278,6 +270,26 @@ export class FindingsContextDto implements FindingsContext {
 
   @ApiProperty({ type: String, nullable: true })
   controlCode: string | null;
+
+  @ApiProperty({ type: [String] })
+  notices: string[];
+
+  @ApiProperty({ description: 'SHA-256 (hex) of the canonical JSON of the observations sent to the engine.' })
+  dataHash: string;
+
+  @ApiProperty()
+  engineVersion: string;
+}
+
+export class FindingsContextDto extends FindingsContextBaseDto implements FindingsContext {
+  @ApiProperty({ type: FindingsChoicesDto })
+  choices: FindingsChoicesDto;
+
+  @ApiProperty({ type: EngineRequestDto })
+  engineRequest: EngineRequestDto;
+
+  @ApiProperty({ type: [FindingsObservationRowDto], description: 'In the order given to the engine (residual index = position).' })
+  observations: FindingsObservationRowDto[];
 
   @ApiProperty({ type: [PercentOfControlDto] })
   percentOfControl: PercentOfControlDto[];
@@ -291,17 +303,8 @@ export class FindingsContextDto implements FindingsContext {
   @ApiProperty({ type: [MeansOverTimePointDto] })
   meansOverTime: MeansOverTimePointDto[];
 
-  @ApiProperty({ type: [String] })
-  notices: string[];
-
   @ApiPropertyOptional({ type: ModelChoiceDto, description: 'Which model this is (the ANOVA), the one made for the measure and the others on offer.' })
   modelChoice?: ModelChoiceDto;
-
-  @ApiProperty({ description: 'SHA-256 (hex) of the canonical JSON of the observations sent to the engine.' })
-  dataHash: string;
-
-  @ApiProperty()
-  engineVersion: string;
 }
 
 /** GET /api/trials/:trialId/findings: the same body as POST /api/stats/anova, plus context. */

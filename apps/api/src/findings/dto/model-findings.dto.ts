@@ -18,7 +18,7 @@ import { CountsAnswerDto } from '../../stats/dto/counts-answer.dto';
 import { OrdinalAnswerDto } from '../../stats/dto/ordinal-answer.dto';
 import { RepeatedAnswerDto } from '../../stats/dto/repeated-answer.dto';
 import { ModelChoiceDto } from './model-choice.dto';
-import { CensoredSummaryDto, FindingsMeasureDto, FindingsObservationRowDto, FindingsScopeDto, MissingSummaryDto, RoundRefDto } from './findings.dto';
+import { FindingsContextBaseDto, FindingsObservationRowDto, RoundRefDto } from './findings.dto';
 
 export class ModelChoicesDto {
   @ApiProperty()
@@ -63,13 +63,7 @@ export class ModelObservationRowDto extends FindingsObservationRowDto {
   covariate?: string;
 }
 
-export class ModelFindingsContextDto implements ModelFindingsContext {
-  @ApiProperty()
-  trialId: number;
-
-  @ApiProperty()
-  trialCode: string;
-
+export class ModelFindingsContextDto extends FindingsContextBaseDto implements ModelFindingsContext {
   @ApiProperty({ type: ModelChoicesDto })
   choices: ModelChoicesDto;
 
@@ -82,38 +76,11 @@ export class ModelFindingsContextDto implements ModelFindingsContext {
   @ApiProperty({ type: 'array', items: { type: 'object', additionalProperties: true }, description: 'The observations sent, in the engine’s order.' })
   engineObservations: Array<Record<string, unknown>>;
 
-  @ApiProperty({ type: FindingsMeasureDto })
-  measure: FindingsMeasureDto;
-
-  @ApiProperty({ type: RoundRefDto, description: 'The round analysed (rounds over time: the latest used).' })
-  round: RoundRefDto;
-
   @ApiPropertyOptional({ type: [RoundRefDto], description: 'Rounds over time: the rounds used, in time order.' })
   rounds?: RoundRefDto[];
 
-  @ApiProperty({ type: FindingsScopeDto })
-  scope: FindingsScopeDto;
-
   @ApiProperty({ type: [ModelObservationRowDto], description: 'The rows behind engineObservations, in the same order.' })
   observations: ModelObservationRowDto[];
-
-  @ApiProperty({ type: CensoredSummaryDto })
-  censored: CensoredSummaryDto;
-
-  @ApiProperty({ type: MissingSummaryDto })
-  missing: MissingSummaryDto;
-
-  @ApiProperty({ type: String, nullable: true })
-  controlCode: string | null;
-
-  @ApiProperty({ type: [String] })
-  notices: string[];
-
-  @ApiProperty()
-  dataHash: string;
-
-  @ApiProperty()
-  engineVersion: string;
 }
 
 export class CensoredFindingsDto extends CensoredAnswerDto {

@@ -171,7 +171,7 @@ export function parseCellValue(text: string, measure: Measure, { decimalComma, h
   if (limits.error) return freezeError(limits.error);
   const warnings = limits.warning ? [limits.warning] : [];
   if (!converted && reading.decimals > measure.decimals) {
-    warnings.push(`${typed} has ${reading.decimals} decimals; ${measure.name} is usually recorded to ${measure.decimals}. It is kept as typed.`);
+    warnings.push(`${typed} has ${reading.decimals} decimal${reading.decimals === 1 ? '' : 's'}; ${measure.name} is usually recorded to ${measure.decimals}. It is kept as typed.`);
   }
   return Object.freeze({ kind: 'value', valueText, censored, warnings: Object.freeze(warnings) });
 }

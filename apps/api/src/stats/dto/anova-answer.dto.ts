@@ -1,4 +1,19 @@
-import type { AnovaAnswer, AnovaSummary, AnovaTableRow, LsMean, MeanPair, MethodComparisonSet, RankTestAnswer, ResidualPoint } from '@friable/contracts';
+import type {
+  AnovaAnswer,
+  AnovaSummary,
+  AnovaTableRow,
+  DifferenceError,
+  ErrorStratumSummary,
+  FactorialMean,
+  LsMean,
+  MeanPair,
+  MethodComparisonSet,
+  RankTestAnswer,
+  ResidualPoint,
+  SliceTest,
+  StratumComparisonSet,
+  TermMeans,
+} from '@friable/contracts';
 import { ApiExtraModels, ApiProperty, ApiPropertyOptional, getSchemaPath } from '@nestjs/swagger';
 
 export class AnovaTableRowDto implements AnovaTableRow {
@@ -8,8 +23,8 @@ export class AnovaTableRowDto implements AnovaTableRow {
   @ApiProperty()
   df: number;
 
-  @ApiProperty()
-  ss: number;
+  @ApiProperty({ type: Number, nullable: true, description: 'Null for a REML row.' })
+  ss: number | null;
 
   @ApiProperty({ type: Number, nullable: true, description: 'Null where the term is not tested.' })
   ms: number | null;
@@ -19,6 +34,15 @@ export class AnovaTableRowDto implements AnovaTableRow {
 
   @ApiProperty({ type: Number, nullable: true })
   p: number | null;
+
+  @ApiPropertyOptional({ type: String, nullable: true, description: "The row the term was tested against ('error', 'block:A', 'site:treatment', 'kenward-roger'); null when not tested." })
+  errorTerm?: string | null;
+
+  @ApiPropertyOptional({ description: 'REML rows: numerator degrees of freedom.' })
+  numDf?: number;
+
+  @ApiPropertyOptional({ description: 'REML rows: Kenward–Roger denominator degrees of freedom.' })
+  denDf?: number;
 }
 
 export class AnovaSummaryDto implements AnovaSummary {
@@ -180,6 +204,118 @@ export class DiagnosticsDto {
   residuals: ResidualPointDto[];
 }
 
+export class AnalysisModelDto {
+  @ApiProperty({ enum: ['anova', 'reml'] })
+  kind: 'anova' | 'reml';
+
+  @ApiProperty({ description: 'Why this model was used, in a sentence.' })
+  reason: string;
+}
+
+export class AnalysisStratumDto implements ErrorStratumSummary {
+  @ApiProperty({ description: "'plot', 'whole plot', 'sub plot' or 'sub-sub plot'." })
+  stratum: string;
+
+  @ApiProperty({ description: "The ANOVA row that is this stratum's error, e.g. 'block:Amendment' or 'error'." })
+  errorTerm: string;
+
+  @ApiProperty()
+  ms: number;
+
+  @ApiProperty()
+  df: number;
+
+  @ApiProperty({ type: [String], description: 'The terms tested against this error.' })
+  terms: string[];
+}
+
+export class FactorialMeanDto extends LsMeanDto implements FactorialMean {
+  @ApiProperty({ type: 'object', additionalProperties: { type: 'string' }, description: 'Level of each factor of the term, by factor name.' })
+  levels: Record<string, string>;
+}
+
+export class TermMeansDto implements TermMeans {
+  @ApiProperty({ example: 'Amendment:Mulch' })
+  term: string;
+
+  @ApiProperty({ type: [String] })
+  factors: string[];
+
+  @ApiProperty({ type: [FactorialMeanDto] })
+  means: FactorialMeanDto[];
+}
+
+export class StratumComparisonSetDto implements StratumComparisonSet {
+  @ApiProperty({ description: "The error the differences are judged against: 'block:A', 'error', 'block:A and error (Satterthwaite)', 'Kenward–Roger'." })
+  errorTerm: string;
+
+  @ApiProperty()
+  df: number;
+
+  @ApiProperty({ type: ComparisonsByMethodDto })
+  comparisons: ComparisonsByMethodDto;
+
+  @ApiProperty({ type: LettersByMethodDto })
+  letters: LettersByMethodDto;
+}
+
+export class DifferenceErrorDto implements DifferenceError {
+  @ApiProperty({ example: 'Amendment within Mulch' })
+  kind: string;
+
+  @ApiProperty({ example: 'Two Amendment (whole-plot) means at the same or different levels of Mulch' })
+  description: string;
+
+  @ApiProperty({ description: 'Standard error of the difference.' })
+  se: number;
+
+  @ApiProperty({ description: "Degrees of freedom (Satterthwaite's where strata mix; Kenward–Roger for REML)." })
+  df: number;
+
+  @ApiProperty({ description: 't at α (two-sided); the weighted t where strata mix.' })
+  critical: number;
+
+  @ApiProperty({ description: 'critical × se.' })
+  lsd: number;
+
+  @ApiProperty()
+  errorTerm: string;
+}
+
+export class SliceTestDto extends StratumComparisonSetDto implements SliceTest {
+  @ApiProperty({ description: 'The factor tested.' })
+  factor: string;
+
+  @ApiProperty({ description: 'The factor whose level is held.' })
+  within: string;
+
+  @ApiProperty()
+  level: string;
+
+  @ApiProperty()
+  numDf: number;
+
+  @ApiProperty()
+  denDf: number;
+
+  @ApiProperty()
+  f: number;
+
+  @ApiProperty()
+  p: number;
+
+  @ApiProperty({ type: [FactorialMeanDto] })
+  means: FactorialMeanDto[];
+}
+
+export class VarianceComponentDto {
+  @ApiProperty({ example: 'block:Amendment' })
+  name: string;
+
+  @ApiProperty()
+  variance: number;
+}
+
 export class CovariateSlopeDto {
   @ApiProperty()
   mean: number;
@@ -205,7 +341,7 @@ export class FTestDto {
 }
 
 /** The answer of POST /api/stats/anova, exactly as the engine gives it. */
-@ApiExtraModels(LsMeanDto)
+@ApiExtraModels(LsMeanDto, StratumComparisonSetDto)
 export class AnovaAnswerDto implements AnovaAnswer {
   @ApiProperty({ type: [AnovaTableRowDto] })
   anova: AnovaTableRowDto[];
@@ -234,6 +370,31 @@ export class AnovaAnswerDto implements AnovaAnswer {
 
   @ApiProperty({ type: [String], description: 'Plain sentences from the engine.' })
   warnings: string[];
+
+  @ApiPropertyOptional({ type: AnalysisModelDto, description: 'Factorials and split plots: the model used and why.' })
+  model?: AnalysisModelDto;
+
+  @ApiPropertyOptional({ type: [AnalysisStratumDto], description: 'Classical factorials and split plots: the error strata, whole plot first.' })
+  strata?: AnalysisStratumDto[];
+
+  @ApiPropertyOptional({ type: [TermMeansDto], description: 'Factorials and split plots: least-squares means of every main effect and interaction.' })
+  marginalMeans?: TermMeansDto[];
+
+  @ApiPropertyOptional({
+    type: 'object',
+    additionalProperties: { $ref: getSchemaPath(StratumComparisonSetDto) },
+    description: "Factorials and split plots: each factor's level means compared in its own stratum, by factor name.",
+  })
+  factorComparisons?: Record<string, StratumComparisonSetDto>;
+
+  @ApiPropertyOptional({ type: [DifferenceErrorDto], description: 'Factorials and split plots: standard errors of a difference by kind.' })
+  differences?: DifferenceErrorDto[];
+
+  @ApiPropertyOptional({ type: [SliceTestDto], description: 'Factorials and split plots: each factor within each level of another, for significant two-factor interactions.' })
+  slices?: SliceTestDto[];
+
+  @ApiPropertyOptional({ type: [VarianceComponentDto], description: 'REML: the variance of each random term and of the error.' })
+  varianceComponents?: VarianceComponentDto[];
 
   @ApiPropertyOptional({ type: CovariateSlopeDto, description: 'With a covariate (analysis of covariance): the common slope, with the covariate’s mean.' })
   covariate?: CovariateSlopeDto;

@@ -1,8 +1,9 @@
+import { ANALYSIS_DESIGNS } from '@friable/contracts';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
-import { ArrayMaxSize, ArrayUnique, IsArray, IsBoolean, IsIn, IsNumber, IsOptional, IsString, Max, MaxLength, Min } from 'class-validator';
+import { ArrayMaxSize, ArrayMinSize, ArrayUnique, IsArray, IsBoolean, IsIn, IsNumber, IsOptional, IsString, Length, Max, MaxLength, Min } from 'class-validator';
 import { IsObservationList } from './observation-list.validator';
 
-export const ANALYSIS_DESIGNS = ['crd', 'rcbd', 'factorial-rcbd', 'multisite-rcbd'] as const;
+export { ANALYSIS_DESIGNS };
 export const TRANSFORMS = ['none', 'log', 'sqrt', 'arcsine-sqrt'] as const;
 export const SEPARATION_METHODS = ['lsd', 'tukey', 'dunnett', 'bonferroni', 'holm'] as const;
 export const MAX_OBSERVATIONS = 200_000;
@@ -26,6 +27,30 @@ export class AnovaRequestDto {
   @ApiProperty({ enum: ANALYSIS_DESIGNS })
   @IsIn(ANALYSIS_DESIGNS, { message: `design must be one of ${ANALYSIS_DESIGNS.join(', ')}` })
   design: (typeof ANALYSIS_DESIGNS)[number];
+
+  @ApiPropertyOptional({
+    type: [String],
+    minItems: 2,
+    maxItems: 4,
+    example: ['Amendment', 'Mulch'],
+    description: 'Factorials and split plots: the factor names (a split plot’s from the whole-plot factor down); default: the keys of the first observation’s factors.',
+  })
+  @IsOptional()
+  @IsArray({ message: 'factorNames must be a list' })
+  @ArrayMinSize(2, { message: 'factorNames must name 2 to 4 factors' })
+  @ArrayMaxSize(4, { message: 'factorNames must name 2 to 4 factors' })
+  @ArrayUnique({ message: 'factorNames must not repeat a name' })
+  @IsString({ each: true, message: 'each factorNames entry must be text' })
+  @Length(1, 100, { each: true, message: 'each factorNames entry must be 1 to 100 characters' })
+  factorNames?: string[];
+
+  @ApiPropertyOptional({
+    enum: ['anova', 'reml'],
+    description: 'Factorials and split plots: the classical ANOVA or REML (Kenward–Roger). Default: anova when every plot is present, else reml; the answer says which and why.',
+  })
+  @IsOptional()
+  @IsIn(['anova', 'reml'], { message: 'model must be anova or reml' })
+  model?: 'anova' | 'reml';
 
   @ApiPropertyOptional({ default: 0.05, minimum: 0.0001, maximum: 0.5 })
   @IsOptional()

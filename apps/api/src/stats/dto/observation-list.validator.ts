@@ -57,6 +57,7 @@ export function observationProblems(value: unknown, extra: ExtraObservationField
     label(row, 'site', o.site);
     if (o.factors !== undefined) {
       if (typeof o.factors !== 'object' || o.factors === null || Array.isArray(o.factors)) problems.push(`observations[${row}].factors must be an object of factor name to level`);
+      else if (Object.keys(o.factors).length > 4) problems.push(`observations[${row}].factors must name at most 4 factors`);
       else for (const [name, level] of Object.entries(o.factors)) label(row, `factors.${name}`, level);
     }
     const valueProblem = decimalProblem(row, 'value', o.value);

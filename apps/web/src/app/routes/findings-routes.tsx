@@ -1,19 +1,15 @@
-import { lazy, Suspense, useEffect } from 'react';
-import { LoadingState } from '../../components/states';
+import { useEffect } from 'react';
 import { useAuth } from '../../features/auth/hooks/auth-context';
+import { FindingsPage } from '../../features/findings/components/findings-page';
+import { QuickAnalysisPage } from '../../features/findings/components/quick-analysis-page';
+import { ReportPage } from '../../features/findings/components/report-page';
 import { useTrialOutlet } from '../layouts/trial-layout';
 
-// The Findings pages load with their route (their plots load later still, only when drawn).
-const QuickAnalysisPage = lazy(() => import('../../features/findings/components/quick-analysis-page').then((m) => ({ default: m.QuickAnalysisPage })));
-const FindingsPage = lazy(() => import('../../features/findings/components/findings-page').then((m) => ({ default: m.FindingsPage })));
-const ReportPage = lazy(() => import('../../features/findings/components/report-page').then((m) => ({ default: m.ReportPage })));
+// This module is the Findings pages' chunk, loaded with their route (router.tsx); their plots load
+// later still, only when drawn.
 
 export function QuickAnalysisRoute() {
-  return (
-    <Suspense fallback={<LoadingState what="Quick analysis" />}>
-      <QuickAnalysisPage />
-    </Suspense>
-  );
+  return <QuickAnalysisPage />;
 }
 
 /** The Findings plots' code (with the charting library), asked for as the page opens, while its analysis is computed. */
@@ -25,18 +21,10 @@ export function FindingsRoute() {
   useEffect(() => {
     void loadFindingsPlots();
   }, []);
-  return (
-    <Suspense fallback={<LoadingState what="the Findings" />}>
-      <FindingsPage trial={trial} meId={user?.id} />
-    </Suspense>
-  );
+  return <FindingsPage trial={trial} meId={user?.id} />;
 }
 
 export function ReportRoute() {
   const { trial } = useTrialOutlet();
-  return (
-    <Suspense fallback={<LoadingState what="the report" />}>
-      <ReportPage trial={trial} />
-    </Suspense>
-  );
+  return <ReportPage trial={trial} />;
 }

@@ -1,6 +1,7 @@
 import { HTMLTable } from '@blueprintjs/core';
 import type { AnovaAnswer } from '@friable/contracts';
-import { formatMeasureValue, formatP, formatStatistic, significanceMark, significanceMarks, termLabel } from './stat-format';
+import { formatMeasureValue, formatStatistic, significanceMarks, termLabel } from './stat-format';
+import { TestCells, TestHeadings } from './test-cells';
 
 /** The marks legend that stands beside every table with p-values. */
 export function SignificanceLegend() {
@@ -34,9 +35,7 @@ export function AnovaTable({ answer, decimals, unit, headingId = 'fr-anova-title
               <th scope="col" className="fr-num">df</th>
               <th scope="col" className="fr-num">SS</th>
               <th scope="col" className="fr-num">MS</th>
-              <th scope="col" className="fr-num">F</th>
-              <th scope="col" className="fr-num">p</th>
-              <th scope="col"><span className="bp6-text-muted">mark</span></th>
+              <TestHeadings />
             </tr>
           </thead>
           <tbody>
@@ -46,9 +45,7 @@ export function AnovaTable({ answer, decimals, unit, headingId = 'fr-anova-title
                 <td className="fr-num">{row.df}</td>
                 <td className="fr-num">{formatStatistic(row.ss)}</td>
                 <td className="fr-num">{formatStatistic(row.ms)}</td>
-                <td className="fr-num">{formatStatistic(row.f)}</td>
-                <td className="fr-num">{formatP(row.p)}</td>
-                <td className="fr-findings-mark">{significanceMark(row.p)}</td>
+                <TestCells f={row.f} p={row.p} />
               </tr>
             ))}
           </tbody>

@@ -19,6 +19,7 @@ import { Link, useSearchParams } from 'react-router-dom';
 import { EmptyState, ErrorState, LoadingState } from '../../../components/states';
 import { paths } from '../../../config/paths';
 import { ApiError } from '../../../lib/api-client';
+import { useDownloadBundle } from '../api/download-bundle';
 import { useDownloadExport } from '../api/download-export';
 import { findingsQueryOptions, getAnovaFindings, useFindings } from '../api/get-findings';
 import { useSiteRounds } from '../hooks/use-site-rounds';
@@ -36,6 +37,18 @@ const DISTRIBUTION_LABELS: Record<AftDistribution, string> = { weibull: 'Weibull
 const COVARIANCE_LABELS: Record<RepeatedCovariance, string> = { auto: 'Best by AIC', cs: 'Compound symmetry', ar1: 'AR(1) in days', unstructured: 'Unstructured' };
 const FAMILY_LABELS: Record<CountFamilyChoice, string> = { auto: 'Poisson, quasi if overdispersed', poisson: 'Poisson', quasipoisson: 'Quasi-Poisson' };
 
+/** Each measure at each round before the analysed one (and other measures at the same round), as a baseline to adjust for. */
+function baselineChoices(trial: TrialDetail, dayOffset: number, measureId: number) {
+  return [...trial.rounds]
+    .sort((a, b) => a.dayOffset - b.dayOffset)
+    .filter((r) => r.dayOffset <= dayOffset)
+    .flatMap((r) =>
+      trial.measures
+        .filter((m) => r.measureIds.includes(m.id) && (r.dayOffset < dayOffset || m.id !== measureId))
+        .map((m) => ({ value: `${m.id}:${r.id}`, label: `${m.name} at ${r.label}` })),
+    );
+}
+
 /** The page's choices, read from the address so a view can be shared and reloaded. */
 function readChoices(params: URLSearchParams): Partial<FindingsModelsQuery> & AnalysisOptions {
   const number = (key: string) => (params.get(key) ? Number(params.get(key)) : undefined);
@@ -44,6 +57,8 @@ function readChoices(params: URLSearchParams): Partial<FindingsModelsQuery> & An
     distribution: oneOf<AftDistribution>(AFT_DISTRIBUTIONS, params.get('distribution')),
     covariance: oneOf<RepeatedCovariance>(REPEATED_COVARIANCES, params.get('covariance')),
     family: oneOf<CountFamilyChoice>(COUNT_FAMILIES, params.get('family')),
+    covariateMeasureId: number('covMeasure'),
+    covariateRoundId: number('covRound'),
     measureId: number('measure'),
     roundId: number('round'),
     siteId: number('site'),
@@ -83,6 +98,8 @@ export function FindingsPage({ trial, meId }: { trial: TrialDetail; meId?: numbe
           ...(choices.distribution ? { distribution: choices.distribution } : {}),
           ...(choices.covariance ? { covariance: choices.covariance } : {}),
           ...(choices.family ? { family: choices.family } : {}),
+          ...(choices.covariateMeasureId ? { covariateMeasureId: choices.covariateMeasureId } : {}),
+          ...(choices.covariateRoundId ? { covariateRoundId: choices.covariateRoundId } : {}),
         }
       : null;
   const findings = useFindings(trial.id, query);
@@ -91,7 +108,7 @@ export function FindingsPage({ trial, meId }: { trial: TrialDetail; meId?: numbe
   const round = chosenRound ?? rounds.find((r) => r.id === analysedRoundId) ?? rounds[0];
   const shownAnalysis: FindingsAnalysis = findings.data ? (isModelFindings(findings.data) ? findings.data.analysis : 'anova') : (choices.analysis ?? 'anova');
   // The exact choices of the analysis on screen, round included, for saving and for the per-site plots.
-  const { analysis: _analysis, distribution: _distribution, covariance: _covariance, family: _family, ...anovaQuery } = query ?? { measureId: 0 };
+  const { analysis: _analysis, distribution: _distribution, covariance: _covariance, family: _family, covariateMeasureId: _cm, covariateRoundId: _cr, ...anovaQuery } = query ?? { measureId: 0 };
   const shownQuery: FindingsQuery | null = query && analysedRoundId ? { ...anovaQuery, roundId: analysedRoundId } : query && anovaQuery;
 
   const combined = query !== null && !query.siteId && combinable;
@@ -111,10 +128,11 @@ export function FindingsPage({ trial, meId }: { trial: TrialDetail; meId?: numbe
     trial.sites,
   );
   const download = useDownloadExport();
+  const bundle = useDownloadBundle();
   const treatmentNames = useMemo(() => Object.fromEntries(trial.treatments.map((t) => [t.code, t.name])), [trial.treatments]);
 
   function choose(
-    next: Partial<Record<'measure' | 'round' | 'site' | 'sites' | 'transform' | 'method' | 'alpha' | 'analysis' | 'model' | 'distribution' | 'covariance' | 'family', string | undefined>>,
+    next: Partial<Record<'measure' | 'round' | 'site' | 'sites' | 'transform' | 'method' | 'alpha' | 'analysis' | 'model' | 'distribution' | 'covariance' | 'family' | 'covMeasure' | 'covRound', string | undefined>>,
   ) {
     const merged = new URLSearchParams(params);
     for (const [key, value] of Object.entries(next)) {
@@ -161,6 +179,23 @@ export function FindingsPage({ trial, meId }: { trial: TrialDetail; meId?: numbe
                 ))}
               </HTMLSelect>
             </Choice>
+          ) : shownAnalysis === 'ancova' && data && isModelFindings(data) ? (
+            <Choice label="Baseline">
+              <HTMLSelect
+                aria-label="Baseline"
+                value={`${data.context.choices.covariateMeasureId ?? ''}:${data.context.choices.covariateRoundId ?? ''}`}
+                onChange={(e) => {
+                  const [covMeasure, covRound] = e.target.value.split(':');
+                  choose({ covMeasure, covRound });
+                }}
+              >
+                {baselineChoices(trial, data.context.round.dayOffset, data.context.measure.id).map((option) => (
+                  <option key={option.value} value={option.value}>
+                    {option.label}
+                  </option>
+                ))}
+              </HTMLSelect>
+            </Choice>
           ) : shownAnalysis === 'counts' ? (
             <Choice label="Count model">
               <HTMLSelect aria-label="Count model" value={choices.family ?? 'auto'} onChange={(e) => choose({ family: e.target.value })}>
@@ -176,7 +211,7 @@ export function FindingsPage({ trial, meId }: { trial: TrialDetail; meId?: numbe
         before={
           <>
             <Choice label="Measure">
-              <HTMLSelect aria-label="Measure" value={measure.id} onChange={(e) => choose({ measure: e.target.value, round: undefined, model: undefined })}>
+              <HTMLSelect aria-label="Measure" value={measure.id} onChange={(e) => choose({ measure: e.target.value, round: undefined, model: undefined, covMeasure: undefined, covRound: undefined })}>
                 {measures.map((m) => (
                   <option key={m.id} value={m.id}>
                     {m.name}
@@ -209,13 +244,24 @@ export function FindingsPage({ trial, meId }: { trial: TrialDetail; meId?: numbe
       <div className="fr-findings-actions">
         <Button icon="download" text="Tidy CSV" loading={download.isPending && download.variables?.kind === 'csv'} onClick={() => download.mutate({ trialId: trial.id, kind: 'csv', fallbackName: `${trial.code}.csv` })} />
         <Button icon="th" text="Workbook" loading={download.isPending && download.variables?.kind === 'xlsx'} onClick={() => download.mutate({ trialId: trial.id, kind: 'xlsx', fallbackName: `${trial.code}.xlsx` })} />
+        <Button
+          icon="archive"
+          text="Analysis with R script"
+          title="This analysis as a zip: the data it used, an R script that reproduces its tables, and Friable's answer"
+          disabled={!query || !findings.data}
+          loading={bundle.isPending}
+          onClick={() =>
+            query &&
+            bundle.mutate({ trialId: trial.id, query: { ...query, ...(analysedRoundId ? { roundId: analysedRoundId } : {}), analysis: shownAnalysis }, fallbackName: `${trial.code}-analysis.zip` })
+          }
+        />
         <Link to={paths.trialReport.href(trial.id)} className="bp6-button fr-findings-report-link">
           <span className="bp6-button-text">Printable report</span>
         </Link>
       </div>
-      {download.error && (
+      {(download.error ?? bundle.error) && (
         <p className="fr-error-line" role="alert">
-          {download.error.message}
+          {(download.error ?? bundle.error)!.message}
         </p>
       )}
       {findings.isPending ? (

@@ -3,6 +3,7 @@ import type { AnovaAnswer, PercentOfControl, SeparationMethod } from '@friable/c
 import { AnalysisCautions } from './analysis-cautions';
 import { AnovaTable } from './anova-table';
 import { ComparisonsTable } from './comparisons-table';
+import { DesignAnalysisPanel } from './design-analysis-panel';
 import { LazyFindingsPlots } from './lazy-findings-plots';
 import { MeansTable } from './means-table';
 import type { FindingsPlotInputs } from './plot-inputs';
@@ -41,6 +42,7 @@ export function FindingsView(props: FindingsViewProps) {
         <AnovaTable answer={answer} decimals={decimals} unit={unit} />
         <RankTestPanel {...props.rankTest} />
       </div>
+      <DesignAnalysisPanel answer={answer} method={method} decimals={decimals} />
       <MeansTable answer={answer} method={method} control={control} decimals={decimals} unit={unit} treatmentNames={props.treatmentNames} percentOfControl={props.percentOfControl} />
       <ComparisonsTable answer={answer} method={method} alpha={alpha} decimals={decimals} />
       <AnalysisCautions answer={answer} />

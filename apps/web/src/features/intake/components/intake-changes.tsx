@@ -1,6 +1,7 @@
 import { HTMLTable } from '@blueprintjs/core';
 import type { IntakeResult } from '@friable/contracts';
 import { formatNumber } from '../../../lib/format';
+import { ColumnHeads } from '../../../components/column-heads';
 
 const kindWords = { new: 'New', changed: 'Changed', unchanged: 'Unchanged' } as const;
 
@@ -17,15 +18,7 @@ export function IntakeChanges({ result }: { result: IntakeResult }) {
       {moving.length > 0 && (
         <div className="fr-table-scroll fr-intake-changes">
           <HTMLTable compact striped aria-label={result.dryRun ? 'Values this upload would write' : 'Values this upload wrote'}>
-            <thead>
-              <tr>
-                <th scope="col">Plot</th>
-                <th scope="col">Measure</th>
-                <th scope="col">What</th>
-                <th scope="col">Before</th>
-                <th scope="col">After</th>
-              </tr>
-            </thead>
+            <ColumnHeads names={['Plot', 'Measure', 'What', 'Before', 'After']} />
             <tbody>
               {moving.map((change) => (
                 <tr key={`${change.plotLabel}:${change.measureCode}`}>

@@ -1,7 +1,8 @@
-import { Button, Callout, Checkbox, HTMLSelect, ProgressBar, Section, SectionCard } from '@blueprintjs/core';
+import { Button, Callout, Checkbox, ProgressBar, Section, SectionCard } from '@blueprintjs/core';
 import type { IntakeResult, Measure, TrialDetail } from '@friable/contracts';
 import { useMemo, useState } from 'react';
 import { Link, useSearchParams } from 'react-router-dom';
+import { IdPicker } from '../../../components/id-picker';
 import { SafetyCautions } from '../../../components/safety-cautions';
 import { paths } from '../../../config/paths';
 import { formatDate, formatNumber } from '../../../lib/format';
@@ -109,27 +110,13 @@ export function IntakePage({ trial }: { trial: TrialDetail }) {
     <div className="fr-intake">
       <div className="fr-intake__main">
         <div className="fr-intake__bar">
-          <label className="fr-site-picker">
-            <span>Site</span>
-            <HTMLSelect aria-label="Site" value={site?.id} onChange={(event) => pick({ site: Number(event.target.value) })}>
-              {access.sites.map((s) => (
-                <option key={s.id} value={s.id}>
-                  {s.name}
-                </option>
-              ))}
-            </HTMLSelect>
-          </label>
-          <label className="fr-site-picker">
-            <span>Round</span>
-            <HTMLSelect aria-label="Round" value={round.id} onChange={(event) => pick({ round: Number(event.target.value) })}>
-              {rounds.map((r) => (
-                <option key={r.id} value={r.id}>
-                  {r.label}
-                  {r.dueDate ? ` (due ${formatDate(r.dueDate)})` : ''}
-                </option>
-              ))}
-            </HTMLSelect>
-          </label>
+          <IdPicker label="Site" value={site?.id} options={access.sites.map((s) => ({ id: s.id, text: s.name }))} onPick={(id) => pick({ site: id })} />
+          <IdPicker
+            label="Round"
+            value={round.id}
+            options={rounds.map((r) => ({ id: r.id, text: `${r.label}${r.dueDate ? ` (due ${formatDate(r.dueDate)})` : ''}` }))}
+            onPick={(id) => pick({ round: id })}
+          />
         </div>
 
         {site && !site.randomizedAt ? (

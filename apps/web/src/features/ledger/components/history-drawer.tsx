@@ -2,6 +2,7 @@ import { Drawer, HTMLTable } from '@blueprintjs/core';
 import { EmptyState, ErrorState, LoadingState } from '../../../components/states';
 import { useObservationHistory } from '../api/get-observation-history';
 import { formatMoment } from '../../../lib/format-moment';
+import { ColumnHeads } from '../../../components/column-heads';
 
 /** Every change of one value, newest first: who, when, the old and the new value, by upload or by edit. */
 export function HistoryDrawer({ trialId, observationId, title, onClose }: { trialId: number; observationId: number | null; title: string; onClose: () => void }) {
@@ -17,15 +18,7 @@ export function HistoryDrawer({ trialId, observationId, title, onClose }: { tria
           <EmptyState title="No changes yet" description="This value has not been changed since it was first recorded." />
         ) : (
           <HTMLTable compact striped aria-label="History of this value">
-            <thead>
-              <tr>
-                <th scope="col">When</th>
-                <th scope="col">Who</th>
-                <th scope="col">Before</th>
-                <th scope="col">After</th>
-                <th scope="col">How</th>
-              </tr>
-            </thead>
+            <ColumnHeads names={['When', 'Who', 'Before', 'After', 'How']} />
             <tbody>
               {[...history.data]
                 .sort((a, b) => b.at.localeCompare(a.at))

@@ -1,4 +1,4 @@
-import type { AssessmentRound, Plot, PlotAmount, Site, TrialDetail } from '@friable/contracts';
+import type { AssessmentRound, LevelAmount, Plot, PlotAmount, Site, TrialDetail } from '@friable/contracts';
 import type { ReactNode } from 'react';
 import { SafetyCautions } from '../../../components/safety-cautions';
 import { paths } from '../../../config/paths';
@@ -7,6 +7,7 @@ import { useQrCodes } from '../hooks/use-qr-codes';
 import { unitSymbol } from './measure-units';
 import type { TreatmentSwatch } from './treatment-palette';
 import { PlotLegend, PlotMap } from './plot-map';
+import { plotLevelAmountText, SheetLevelAmounts } from './sheet-level-amounts';
 
 /**
  * A column of a data sheet that says which plot a row is, beside the plot label, block and
@@ -36,12 +37,15 @@ export function SiteSheets({
   amounts,
   rounds,
   identityColumns,
+  levelAmounts,
 }: {
   trial: TrialDetail;
   site: Site;
   plots: Plot[];
   swatches: Map<number, TreatmentSwatch>;
   amounts: PlotAmount[];
+  /** Factorials and split plots: each level's amount per unit it goes on (GET …/level-amounts). */
+  levelAmounts?: LevelAmount[];
   /** The rounds to print a data sheet for. */
   rounds: AssessmentRound[];
   identityColumns?: SheetIdentityColumn[];
@@ -49,6 +53,7 @@ export function SiteSheets({
   const ordered = [...plots].sort((a, b) => a.block - b.block || a.position - b.position);
   const treatmentName = (id: number) => trial.treatments.find((t) => t.id === id)?.name ?? '';
   const amountOf = (treatmentId: number) => amounts.find((a) => a.siteId === site.id && a.treatmentId === treatmentId);
+  const plotAmount = (plot: Plot) => (levelAmounts ? plotLevelAmountText(trial, site, levelAmounts, plot) : formatDoseShort(amountOf(plot.treatmentId)?.perPlot ?? null));
   const columns = identityColumns ?? splitPlotColumns(plots);
   const labelRound = rounds[0];
   const addresses = [...new Set([...rounds.flatMap((round) => ordered.map((plot) => walkAddress(trial, site, round, plot))), ...ordered.map((plot) => walkAddress(trial, site, labelRound, plot))])];
@@ -64,32 +69,7 @@ export function SiteSheets({
         <SheetHeading trial={trial} site={site} title="Plot plan" />
         <PlotMap plots={plots} treatments={trial.treatments} factors={trial.factors} swatches={swatches} siteName={site.name} printed />
         <PlotLegend treatments={trial.treatments} swatches={swatches} />
-        <table className="fr-sheet__table fr-sheet__amounts" aria-label={`Amount per plot at ${site.name}`}>
-          <thead>
-            <tr>
-              <th>Treatment</th>
-              <th>Rate</th>
-              <th>Amount per plot ({formatNumber(site.areaM2, 2)} m²)</th>
-              <th>Plots</th>
-            </tr>
-          </thead>
-          <tbody>
-            {trial.treatments.map((treatment) => {
-              const amount = amountOf(treatment.id);
-              return (
-                <tr key={treatment.id}>
-                  <td>
-                    <strong>{treatment.code}</strong> {treatment.name}
-                    {treatment.product ? ` (${treatment.product})` : ''}
-                  </td>
-                  <td>{formatRate(treatment.rateValue, treatment.rateUnit)}</td>
-                  <td>{formatDoseShort(amount?.perPlot ?? null)}</td>
-                  <td>{amount ? formatNumber(amount.plots, 0) : '—'}</td>
-                </tr>
-              );
-            })}
-          </tbody>
-        </table>
+        {levelAmounts ? <SheetLevelAmounts trial={trial} site={site} amounts={levelAmounts} /> : <SheetTreatmentAmounts trial={trial} site={site} amountOf={amountOf} />}
         <SheetCautions trial={trial} />
       </section>
       {rounds.map((round) => {
@@ -136,7 +116,7 @@ export function SiteSheets({
                       <td key={column.heading}>{column.cell(plot)}</td>
                     ))}
                     <td>{plot.treatmentCode}</td>
-                    <td className="fr-sheet__amount">{formatDoseShort(amountOf(plot.treatmentId)?.perPlot ?? null)}</td>
+                    <td className="fr-sheet__amount">{plotAmount(plot)}</td>
                     {measures.map((m) => (
                       <td key={m.id} className="fr-sheet__blank" />
                     ))}
@@ -182,6 +162,38 @@ export function SiteSheets({
         </ul>
       </section>
     </div>
+  );
+}
+
+/** Each treatment's amount per plot at the site, for the printed first page. */
+function SheetTreatmentAmounts({ trial, site, amountOf }: { trial: TrialDetail; site: Site; amountOf: (treatmentId: number) => PlotAmount | undefined }) {
+  return (
+    <table className="fr-sheet__table fr-sheet__amounts" aria-label={`Amount per plot at ${site.name}`}>
+      <thead>
+        <tr>
+          <th>Treatment</th>
+          <th>Rate</th>
+          <th>Amount per plot ({formatNumber(site.areaM2, 2)} m²)</th>
+          <th>Plots</th>
+        </tr>
+      </thead>
+      <tbody>
+        {trial.treatments.map((treatment) => {
+          const amount = amountOf(treatment.id);
+          return (
+            <tr key={treatment.id}>
+              <td>
+                <strong>{treatment.code}</strong> {treatment.name}
+                {treatment.product ? ` (${treatment.product})` : ''}
+              </td>
+              <td>{formatRate(treatment.rateValue, treatment.rateUnit)}</td>
+              <td>{formatDoseShort(amount?.perPlot ?? null)}</td>
+              <td>{amount ? formatNumber(amount.plots, 0) : '—'}</td>
+            </tr>
+          );
+        })}
+      </tbody>
+    </table>
   );
 }
 

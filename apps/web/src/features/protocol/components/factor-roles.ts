@@ -1,5 +1,5 @@
-import type { AppliedUnit, Factor, TrialDesign } from '@friable/contracts';
-import { DESIGN_RULES } from '@friable/field';
+import type { AppliedUnit, Factor, TrialDesign, TrialDetail } from '@friable/contracts';
+import { DESIGN_RULES, plotsPerAppliedUnit } from '@friable/field';
 
 const SPLIT_ROLES = ['Whole-plot factor', 'Sub-plot factor', 'Sub-sub-plot factor'];
 
@@ -16,4 +16,11 @@ export function appliedToWords(unit: AppliedUnit): string {
 /** The factors in their order (a split plot's whole-plot factor first). */
 export function orderedFactors(factors: readonly Factor[]): Factor[] {
   return [...factors].sort((a, b) => a.position - b.position);
+}
+
+/** A split plot's plots per whole plot (its sub plots, times their sub-sub plots); null for other designs or before the factors are named. */
+export function plotsPerWholePlot(trial: Pick<TrialDetail, 'design' | 'factors'>): number | null {
+  const factors = orderedFactors(trial.factors);
+  if (!DESIGN_RULES[trial.design].split || factors.length < DESIGN_RULES[trial.design].minFactors) return null;
+  return plotsPerAppliedUnit(trial.design, factors.map((f) => f.levels.length), 0);
 }

@@ -42,13 +42,13 @@ export function LevelAmounts({ trial, site, amounts }: { trial: TrialDetail; sit
             const unit = amount?.appliedTo ?? factor.appliedTo;
             return (
               <tr key={level.id}>
-                <td data-label="Level">
+                <td data-label="Level" className="fr-amounts__wrap">
                   <span>
                     <span className="fr-muted">{factor.name}:</span> <span className="fr-code">{level.code}</span> {level.name}
                   </span>
                 </td>
                 <td data-label="Rate">{formatRate(level.rateValue, level.rateUnit)}</td>
-                <td data-label="Goes on">
+                <td data-label="Goes on" className="fr-amounts__wrap">
                   <span>
                     {unit === 'plot' ? 'each plot' : `each ${unit}`}
                     {amount && amount.plotsPerUnit > 1 && (

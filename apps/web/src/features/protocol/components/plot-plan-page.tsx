@@ -81,7 +81,7 @@ export function PlotPlanPage({ trial }: { trial: TrialDetail }) {
             </Section>
           </div>
           <div className="fr-print-only">
-            <SiteSheets trial={trial} site={site} plots={plots.data} swatches={swatches} amounts={amounts.data ?? []} rounds={sheetRounds} />
+            <SiteSheets trial={trial} site={site} plots={plots.data} swatches={swatches} amounts={amounts.data ?? []} levelAmounts={factorDesign ? (levelAmounts.data ?? []) : undefined} rounds={sheetRounds} />
           </div>
         </>
       )}

@@ -145,5 +145,10 @@ describe('PlotPlanPage for a split plot', () => {
     const first = within(sheet).getByText('HL-B1-W1-S1').closest('tr')!;
     expect(within(first).getAllByRole('cell').map((td) => td.textContent).slice(0, 5)).toEqual(['HL-B1-W1-S1', '1', 'HL-B1-W1', '1', 'CS']);
     expect(screen.getByText('whole plot HL-B2-W2 · sub plot 2')).toBeInTheDocument();
+    // The sheets weigh each level out for the unit it goes on: compost per whole plot, straw per sub plot.
+    const perUnit = screen.getByRole('table', { name: 'Amount per unit at Hollow Lane' });
+    const compostC = within(perUnit).getAllByRole('row').find((row) => row.textContent?.startsWith('Compost: C'));
+    expect(compostC).toHaveTextContent(/each whole plot \(2 plots, 2\.88 m².*72 L/);
+    expect(within(first).getByText(/^C 72 L \(19(\.0)? gal\) per whole plot · S 72 L \(19(\.0)? gal\)$/)).toBeInTheDocument();
   });
 });

@@ -7,9 +7,10 @@ import { FormDialog } from '../../../components/form-dialog';
 import { NumberText } from '../../../components/number-text';
 import { formatArea, numberInputText, parseNumberInput } from '../../../lib/format';
 import { useMembers } from '../../../lib/api/get-members';
+import { useSaveSite } from '../api/save-site';
 import { useVersionedForm } from '../../../lib/edit-conflict';
 import { VersionConflict } from './version-conflict';
-import { useSaveSite } from '../api/save-site';
+import { plotsPerWholePlot } from './factor-roles';
 
 const shownFields = ['name', 'location', 'soilDescription', 'shape', 'lengthM', 'widthM', 'diameterCm', 'containerDepthCm', 'soilVolumeL', 'blocks', 'labelPrefix', 'leadUserId'];
 const labels = { lengthM: 'Length', widthM: 'Width', diameterCm: 'Inside diameter', containerDepthCm: 'Container depth', soilVolumeL: 'Soil volume', blocks: 'Blocks' };
@@ -38,6 +39,7 @@ export function SiteDialog({ trial, site, onClose }: { trial: TrialDetail; site:
     onClose,
   );
   const members = useMembers(trial.id);
+  const perWholePlot = plotsPerWholePlot(trial);
   const [localError, setLocalError] = useState<Error | null>(null);
   const [name, setName] = useState(site?.name ?? '');
   const [location, setLocation] = useState(site?.location ?? '');
@@ -99,6 +101,11 @@ export function SiteDialog({ trial, site, onClose }: { trial: TrialDetail; site:
             </Field>
             <fieldset className="fr-fieldset">
               <legend>Each plot</legend>
+              {perWholePlot !== null && (
+                <p className="fr-muted fr-small">
+                  In a split plot this is one sub plot, the unit that is measured; a whole plot is {perWholePlot} of them side by side.
+                </p>
+              )}
               <Field label="Shape" field="shape" error={error}>
                 <RadioGroup inline selectedValue={shape} onChange={(e) => setShape(e.currentTarget.value as 'rectangle' | 'round')}>
                   <Radio value="rectangle" label="Rectangle (bed or plot)" />

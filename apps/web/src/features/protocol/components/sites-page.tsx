@@ -11,6 +11,7 @@ import { protocolAccess } from './protocol-access';
 import { RandomizeDialog } from './randomize-dialog';
 import { ReadOnlyNotice } from './read-only-notice';
 import { SiteDialog } from './site-dialog';
+import { plotsPerWholePlot } from './factor-roles';
 import { describeGeometry } from './site-geometry';
 
 /** Sites: the gardens taking part, each plot's size, the blocks, the lead, and each site's randomization. */
@@ -67,6 +68,7 @@ function SiteCard({
   onRemove: () => void;
 }) {
   const mine = trial.mySiteIds.includes(site.id);
+  const perWholePlot = plotsPerWholePlot(trial);
   return (
     <Card elevation={0} className="fr-site-card" aria-label={`Site ${site.name}`}>
       <div className="fr-site-card__head">
@@ -101,6 +103,14 @@ function SiteCard({
         <dd>{describeGeometry(site)}</dd>
         <dt>Surface area</dt>
         <dd>{formatArea(site.areaM2)} per plot</dd>
+        {perWholePlot !== null && (
+          <>
+            <dt>Each whole plot</dt>
+            <dd>
+              {formatNumber(perWholePlot, 0)} plots side by side, {formatArea(site.areaM2 * perWholePlot)}
+            </dd>
+          </>
+        )}
         <dt>Blocks</dt>
         <dd>{formatNumber(site.blocks, 0)}</dd>
         <dt>Site lead</dt>

@@ -3,7 +3,7 @@ import { TRIAL_DESIGNS, type TrialDesign, type TrialDetail, type TrialUpdateInpu
 import { useState } from 'react';
 import { Field } from '../../../components/field-errors';
 import { FormDialog } from '../../../components/form-dialog';
-import { designLabels, formatDate, statusLabels } from '../../../lib/format';
+import { designHelp, designLabels, formatDate, statusLabels } from '../../../lib/format';
 import { useUpdateTrial } from '../api/update-trial';
 import { useVersionedForm } from '../../../lib/edit-conflict';
 import { VersionConflict } from './version-conflict';
@@ -68,14 +68,14 @@ function TrialFieldsDialog({ trial, onClose }: { trial: TrialDetail; onClose: ()
 
   function submit() {
     form.send({
-      title: title.trim(),
-      question: question.trim() || null,
-      design,
-      startDate: startDate || null,
-      seed: seed.trim(),
-      safetyNotes: safetyNotes.trim() || null,
-      noControlReason: noControlReason.trim() || null,
-    });
+        title: title.trim(),
+        question: question.trim() || null,
+        design,
+        startDate: startDate || null,
+        seed: seed.trim(),
+        safetyNotes: safetyNotes.trim() || null,
+        noControlReason: noControlReason.trim() || null,
+      });
   }
 
   return (
@@ -87,7 +87,7 @@ function TrialFieldsDialog({ trial, onClose }: { trial: TrialDetail; onClose: ()
             <Field label="Question" field="question" error={update.error} help="What the trial should find out, e.g. “Does gypsum at 40 lb/1,000 ft² shorten drain time on heavy clay?”">
               <TextArea id="fr-field-question" value={question} onChange={(e) => setQuestion(e.target.value)} fill autoResize />
             </Field>
-            <Field label="Design" field="design" error={update.error} help="Randomized complete block puts every treatment once in each block.">
+            <Field label="Design" field="design" error={update.error} help={designHelp[design]}>
               <HTMLSelect id="fr-field-design" value={design} onChange={(e) => setDesign(e.target.value as TrialDesign)} fill>
                 {TRIAL_DESIGNS.map((d) => (
                   <option key={d} value={d}>

@@ -5,7 +5,7 @@ import { useNavigate } from 'react-router-dom';
 import { Field } from '../../../components/field-errors';
 import { FormDialog } from '../../../components/form-dialog';
 import { paths } from '../../../config/paths';
-import { designLabels } from '../../../lib/format';
+import { designHelp, designLabels } from '../../../lib/format';
 import { useCreateTrial } from '../api/create-trial';
 
 const shownFields = ['code', 'title', 'design', 'question'];
@@ -35,7 +35,7 @@ export function NewTrialDialog({ isOpen, onClose }: { isOpen: boolean; onClose: 
           <Field label="Title" field="title" error={create.error}>
             <InputGroup id="fr-field-title" value={title} onChange={(e) => setTitle(e.target.value)} />
           </Field>
-          <Field label="Design" field="design" error={create.error}>
+          <Field label="Design" field="design" error={create.error} help={designHelp[design]}>
             <HTMLSelect id="fr-field-design" value={design} onChange={(e) => setDesign(e.target.value as TrialDesign)} fill>
               {TRIAL_DESIGNS.map((d) => (
                 <option key={d} value={d}>

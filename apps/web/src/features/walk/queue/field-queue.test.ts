@@ -134,7 +134,17 @@ describe('the Round walk’s queue', () => {
 
   it('keeps the server’s sentence for a refused value, and sends an unusual one again only when kept on purpose', async () => {
     await queueValue(value({ value: '99999' }), db);
-    serverAnswers({ status: 422, body: { statusCode: 422, message: 'Drain time 99999 s is outside the plausible range 5 to 3,600 s; keep it only if it is right.' } });
+    serverAnswers({
+      status: 422,
+      body: {
+        statusCode: 422,
+        message: 'Not saved: 99999 s is outside the plausible range of drain time (5 to 3,600 s). If the value is right, confirm it to keep it.',
+        errors: [
+          { field: 'value', message: 'value 99999 s is outside the plausible range of drain time (5 to 3,600 s).' },
+          { field: 'acceptWarnings', message: 'confirm the value is right to keep it' },
+        ],
+      },
+    });
     await sendWaiting(db);
     const [entry] = await db.values.toArray();
     expect(entry).toMatchObject({ state: 'refused', unusual: true, problem: expect.stringContaining('plausible range') });

@@ -14,8 +14,8 @@ export interface SendReport {
   stopped: boolean;
 }
 
-/** The server names the warning's switch when a value is only unusual; that one may be kept on purpose. */
-const isUnusual = (error: ApiError) => error.status === 422 && /acceptWarnings|unusual|plausible/i.test(error.message);
+/** The server lists the warning's switch among the problems when a value is only unusual; that one may be kept on purpose. */
+const isUnusual = (error: ApiError) => error.status === 422 && (error.details ?? []).some((d) => d.field === 'acceptWarnings');
 
 /** Stops the round of sending: the server is out of reach, the session is over, or it is failing. */
 const mustStop = (error: unknown) => !(error instanceof ApiError) || error.status === 0 || error.status === 401 || error.status >= 500;

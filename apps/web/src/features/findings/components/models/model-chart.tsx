@@ -130,8 +130,9 @@ export default function ModelChart({ spec, styles }: { spec: ModelChartSpec; sty
           )}
           layout={{
             barmode: 'stack',
-            height: 140 + 36 * spec.rows.length,
+            height: 170 + 36 * spec.rows.length,
             margin: { l: 120, r: 16, t: 40, b: 64 },
+            legend: { orientation: 'h', y: -0.35, yanchor: 'top', traceorder: 'normal' },
             xaxis: { tickformat: '.0%', range: [0, 1], title: { text: 'Predicted share of plots' } },
             yaxis: { type: 'category', autorange: 'reversed' },
           }}

@@ -1,0 +1,201 @@
+import type { FindingsAnalysis } from '@friable/contracts';
+
+/** What the script needs to know beside data.csv: the analysis, the engine's request, and a title. */
+export interface ScriptInput {
+  analysis: FindingsAnalysis;
+  /** The stateless endpoint's body without observations (design, control, distribution, covariance, family, transform…). */
+  request: Record<string, unknown>;
+  title: string;
+}
+
+const rString = (text: string) => JSON.stringify(text);
+
+/** The header every script shares: reading data.csv with the engine's treatment order and the design's blocks. */
+function preamble(input: ScriptInput, packages: string[]): string {
+  const design = String(input.request.design);
+  const control = typeof input.request.control === 'string' ? input.request.control : null;
+  return `# ${input.title}
+# Reproduces Friable's tables from data.csv with R's standard packages. Run: Rscript analysis.R
+# The numbers are written to r-results.json beside friable.json (Friable's own answer) for comparison.
+suppressMessages({ ${['jsonlite', ...packages].map((p) => `library(${p})`).join('; ')} })
+d <- read.csv("data.csv", colClasses = "character", check.names = FALSE)
+d$value <- as.numeric(d$value)
+d$treatment <- factor(d$treatment, levels = unique(d$treatment))
+${control ? `d$treatment <- relevel(d$treatment, ref = ${rString(control)})\n` : ''}design <- ${rString(design)}
+if (design == "multisite-rcbd") {
+  d$site <- factor(d$site, levels = unique(d$site))
+  d$block <- factor(d$block, levels = unique(d$block))
+  blocks <- "site + site:block"
+} else if (design == "rcbd") {
+  d$block <- factor(d$block, levels = unique(d$block))
+  blocks <- "block"
+} else {
+  blocks <- NULL
+}
+with_blocks <- function(...) as.formula(paste(c(...)[1], "~", paste(c(blocks, c(...)[-1]), collapse = " + ")))
+# Sequential sums of squares in Friable's order (R would otherwise move interactions such as site:block last).
+in_order <- function(formula) terms(formula, keep.order = TRUE)
+results <- list()
+`;
+}
+
+const finish = `write_json(results, "r-results.json", digits = NA, auto_unbox = TRUE, pretty = TRUE)
+print(results)
+`;
+
+function anovaScript(input: ScriptInput): string {
+  const transform = String(input.request.transform ?? 'none');
+  const sitesAre = input.request.sitesAre === 'fixed' ? 'fixed' : 'random';
+  const method = Array.isArray(input.request.meanSeparation) ? String(input.request.meanSeparation[0]) : 'tukey';
+  const adjust: Record<string, string> = { tukey: 'tukey', lsd: 'none', bonferroni: 'bonferroni', holm: 'holm', dunnett: 'dunnett' };
+  const covariate = input.analysis === 'ancova';
+  return `${preamble(input, ['emmeans'])}${
+    covariate
+      ? `# Analysis of covariance: blocks, the baseline (covariate) adjusted for them, treatment adjusted for the baseline.
+d$covariate <- as.numeric(d$covariate)
+fit <- lm(in_order(with_blocks("value", "covariate", "treatment")), data = d)
+table <- anova(fit)
+# The covariate's row is adjusted for every other term (treatment included), as drop1 gives it.
+adjusted <- drop1(fit, test = "F")
+table["covariate", c("Sum Sq", "F value", "Pr(>F)")] <- adjusted["covariate", c("Sum of Sq", "F value", "Pr(>F)")]
+results$anova <- data.frame(term = rownames(table), df = table$Df, ss = table[["Sum Sq"]], f = table[["F value"]], p = table[["Pr(>F)"]])
+results$slope <- unname(coef(fit)["covariate"])
+slopes <- anova(fit, lm(in_order(with_blocks("value", "covariate", "treatment", "covariate:treatment")), data = d))
+results$slopes <- list(f = slopes$F[2], p = slopes[["Pr(>F)"]][2])
+baseline <- anova(lm(in_order(with_blocks("covariate", "treatment")), data = d))
+results$baseline <- list(f = baseline["treatment", "F value"], p = baseline["treatment", "Pr(>F)"])
+`
+      : `d$value <- switch(${rString(transform)}, none = d$value, log = log(d$value), sqrt = sqrt(d$value), "arcsine-sqrt" = asin(sqrt(d$value)))
+if (design == "multisite-rcbd") {
+  fit <- lm(in_order(value ~ site + site:block + treatment + site:treatment), data = d)
+} else {
+  fit <- lm(in_order(with_blocks("value", "treatment")), data = d)
+}
+table <- anova(fit)
+${
+  sitesAre === 'random'
+    ? `if (design == "multisite-rcbd") {
+  # Sites random: treatment is tested against site × treatment, site against blocks within sites.
+  table["treatment", "F value"] <- table["treatment", "Mean Sq"] / table["site:treatment", "Mean Sq"]
+  table["treatment", "Pr(>F)"] <- pf(table["treatment", "F value"], table["treatment", "Df"], table["site:treatment", "Df"], lower.tail = FALSE)
+  table["site", "F value"] <- table["site", "Mean Sq"] / table["site:block", "Mean Sq"]
+  table["site", "Pr(>F)"] <- pf(table["site", "F value"], table["site", "Df"], table["site:block", "Df"], lower.tail = FALSE)
+}
+`
+    : ''
+}results$anova <- data.frame(term = rownames(table), df = table$Df, ss = table[["Sum Sq"]], f = table[["F value"]], p = table[["Pr(>F)"]])
+`
+  }means <- emmeans(fit, ~ treatment)
+print(means)
+results$means <- as.data.frame(summary(means))[, c("treatment", "emmean", "SE")]
+print(pairs(means, adjust = ${rString(adjust[method] ?? 'tukey')}))
+${finish}`;
+}
+
+function censoredScript(input: ScriptInput): string {
+  return `${preamble(input, ['survival', 'multcomp'])}d$drained <- d$censored != "true"
+# Not-drained curves (product-limit, log-scale 95 % limits) and medians.
+curves <- survfit(Surv(value, drained) ~ treatment, data = d, conf.type = "log")
+print(quantile(curves, 0.5))
+# Log-rank test stratified by block (site × block with several sites).
+logrank <- if (design == "multisite-rcbd") survdiff(Surv(value, drained) ~ treatment + strata(site, block), data = d) else if (design == "rcbd") survdiff(Surv(value, drained) ~ treatment + strata(block), data = d) else survdiff(Surv(value, drained) ~ treatment, data = d)
+results$logRank <- list(chiSquare = logrank$chisq, df = length(logrank$n) - 1)
+# Time-ratio (accelerated-failure-time) model with the design's blocks; each term dropped by likelihood ratio.
+fit <- survreg(with_blocks("Surv(value, drained)", "treatment"), data = d, dist = ${rString(String(input.request.distribution ?? 'weibull'))})
+tests <- drop1(fit, test = "Chisq")
+print(tests)
+results$treatmentTest <- list(df = tests["treatment", "Df"], chiSquare = tests["treatment", "LRT"], p = tests["treatment", "Pr(>Chi)"])
+results$logLik <- as.numeric(logLik(fit))
+results$scale <- fit$scale
+# Time ratios to the control with simultaneous (single-step, Dunnett-type) 95 % limits.
+# (glht on the treatment coefficients and their covariance: each is a treatment's log time ratio to the control.)
+treatments <- grep("^treatment", names(coef(fit)), value = TRUE)
+contrasts <- diag(length(treatments))
+rownames(contrasts) <- sub("^treatment", "", treatments)
+ratios <- glht(parm(coef(fit)[treatments], vcov(fit)[treatments, treatments]), linfct = contrasts)
+limits <- exp(confint(ratios)$confint)
+results$timeRatios <- data.frame(treatment = rownames(limits), ratio = limits[, "Estimate"], lower = limits[, "lwr"], upper = limits[, "upr"])
+${finish}`;
+}
+
+function repeatedScript(input: ScriptInput): string {
+  return `${preamble(input, ['nlme', 'emmeans'])}d$time <- as.numeric(d$time)
+d$round <- factor(d$round, levels = unique(d$round[order(d$time)]))
+d$plot <- factor(paste(d$site, d$block, d$treatment))
+# The within-plot covariance Friable chose (friable.json, covariance.structure), fitted by REML.
+# (Built at the top level: emmeans re-reads the call, so every name in it must be found here.)
+friable <- fromJSON("friable.json")
+structure <- friable$covariance$structure
+model_formula <- with_blocks("value", "treatment * round")
+correlation <- switch(structure, cs = corCompSymm(form = ~ 1 | plot), ar1 = corCAR1(form = ~ time | plot), unstructured = corSymm(form = ~ as.integer(round) | plot))
+fit <- if (structure == "unstructured") {
+  gls(model_formula, data = d, correlation = correlation, weights = varIdent(form = ~ 1 | round), method = "REML")
+} else {
+  gls(model_formula, data = d, correlation = correlation, method = "REML")
+}
+results$structure <- friable$covariance$structure
+results$logLik <- as.numeric(logLik(fit))
+print(anova(fit, type = "marginal"))
+means <- emmeans(fit, ~ treatment | round, mode = "df.error", data = d)
+print(means)
+results$means <- as.data.frame(summary(means))[, c("treatment", "round", "emmean", "SE")]
+print(joint_tests(fit, by = "round", mode = "df.error", data = d))
+${finish}`;
+}
+
+function ordinalScript(input: ScriptInput): string {
+  return `${preamble(input, ['MASS'])}d$score <- factor(d$value, levels = sort(unique(d$value)), ordered = TRUE)
+# Proportional-odds (cumulative logit) model with the design's blocks; a positive coefficient means higher scores.
+fit <- polr(with_blocks("score", "treatment"), data = d, Hess = TRUE)
+without <- polr(as.formula(paste("score ~", if (is.null(blocks)) "1" else paste(blocks, collapse = " + "))), data = d, Hess = TRUE)
+test <- anova(without, fit)
+print(test)
+results$treatmentTest <- list(df = test[2, "   Df"], chiSquare = test[2, "LR stat."], p = test[2, "Pr(Chi)"])
+results$oddsRatios <- data.frame(treatment = sub("^treatment", "", grep("^treatment", names(coef(fit)), value = TRUE)), ratio = exp(coef(fit)[grep("^treatment", names(coef(fit)))]))
+${finish}`;
+}
+
+function countsScript(input: ScriptInput): string {
+  return `${preamble(input, [])}d$value <- as.integer(d$value)
+# Poisson log-linear model with the design's blocks; overdispersion by Pearson's chi-square on the residual df.
+poisson_fit <- glm(with_blocks("value", "treatment"), data = d, family = poisson)
+pearson <- sum(residuals(poisson_fit, type = "pearson")^2)
+results$overdispersion <- list(pearsonChiSquare = pearson, df = df.residual(poisson_fit), p = pchisq(pearson, df.residual(poisson_fit), lower.tail = FALSE))
+family_used <- ${rString(String(input.request.family ?? 'auto'))}
+if (family_used == "auto") family_used <- if (results$overdispersion$p < 0.05) "quasipoisson" else "poisson"
+fit <- if (family_used == "quasipoisson") glm(with_blocks("value", "treatment"), data = d, family = quasipoisson) else poisson_fit
+tests <- drop1(fit, test = if (family_used == "quasipoisson") "F" else "Chisq")
+print(tests)
+results$family <- family_used
+results$dispersion <- summary(fit)$dispersion
+results$treatmentDeviance <- tests["treatment", "Deviance"]
+results$rateRatios <- data.frame(treatment = sub("^treatment", "", grep("^treatment", names(coef(fit)), value = TRUE)), ratio = exp(coef(fit)[grep("^treatment", names(coef(fit)))]))
+${finish}`;
+}
+
+/**
+ * R script — the script in a Findings bundle that reproduces the analysis from its data.csv with R's standard
+ * packages (stats, emmeans, survival, multcomp, nlme, MASS), printing the tables and writing r-results.json.
+ * One-factor designs (crd, rcbd, several sites combined); a factorial or split design's ANOVA says it is not covered.
+ * Throws: nothing.
+ * Example: rScript({ analysis: 'counts', request: { design: 'rcbd', control: 'C' }, title: '…' }) → "# …\nsuppressMessages({ library(jsonlite) })\n…"
+ */
+export function rScript(input: ScriptInput): string {
+  const design = String(input.request.design);
+  if (!['crd', 'rcbd', 'multisite-rcbd'].includes(design)) {
+    return `# ${input.title}\n# The ${design} design is analysed on its factors; this bundle's script covers one-factor designs only.\nstop("not covered: ${design}")\n`;
+  }
+  switch (input.analysis) {
+    case 'anova':
+    case 'ancova':
+      return anovaScript(input);
+    case 'censored':
+      return censoredScript(input);
+    case 'repeated':
+      return repeatedScript(input);
+    case 'ordinal':
+      return ordinalScript(input);
+    case 'counts':
+      return countsScript(input);
+  }
+}
