@@ -40,13 +40,16 @@ describe('a reviewer reviews a saved analysis from the e-mailed request', () => 
     const detail = await investigator<{ measures: Array<{ id: number; position: number }> }>('GET', `/trials/${trialId}`);
     const measure = [...detail.measures].sort((a, b) => a.position - b.position)[0];
     analysisId = (await investigator<{ id: number }>('POST', `/trials/${trialId}/analyses`, { measureId: measure.id, title })).id;
-    if (!wasLocked) await investigator('PATCH', `/trials/${trialId}`, { status: 'locked' });
+    if (!wasLocked) await investigator('PATCH', `/trials/${trialId}`, { status: 'locked', version: (await investigator<{ version: number }>('GET', `/trials/${trialId}`)).version });
     await investigator('POST', `/trials/${trialId}/analyses/${analysisId}/review-requests`, { message: `Please look at ${title}.` });
   });
 
   afterAll(async () => {
     // The demo trial goes back as it was for the other browser tests; the unlock needs a reason now that it is signed.
-    if (!wasLocked) await investigator('PATCH', `/trials/${trialId}`, { status: 'active', reason: `Browser test ${tag} done; reopened for the other tests.` });
+    if (!wasLocked) {
+      const { version } = await investigator<{ version: number }>('GET', `/trials/${trialId}`);
+      await investigator('PATCH', `/trials/${trialId}`, { status: 'active', version, reason: `Browser test ${tag} done; reopened for the other tests.` });
+    }
   });
 
   it('finds the request in the Outbox, opens the link, comments, signs off with a statement, and the report shows it', async () => {

@@ -43,6 +43,8 @@ export interface FactorLevel extends MaterialRate {
 
 export interface Factor {
   id: number;
+  /** Bumped by every save; send it back with each edit (PATCH): another one answers 409 with the current record. */
+  version: number;
   /** 1 to 4 in the order given; a split plot's whole-plot factor is 1, its sub-plot factor 2, its sub-sub-plot factor 3. */
   position: 1 | 2 | 3 | 4;
   name: string;
@@ -53,6 +55,8 @@ export interface Factor {
 
 export interface Treatment extends MaterialRate {
   id: number;
+  /** Bumped by every save; send it back with each edit (PATCH): another one answers 409 with the current record. */
+  version: number;
   code: string;
   name: string;
   description: string | null;
@@ -62,10 +66,12 @@ export interface Treatment extends MaterialRate {
   position: number;
 }
 
-export type TreatmentInput = Omit<Treatment, 'id' | 'factorLevelIds' | 'position'> & { position?: number };
+export type TreatmentInput = Omit<Treatment, 'id' | 'version' | 'factorLevelIds' | 'position'> & { position?: number };
 
 export interface Measure {
   id: number;
+  /** Bumped by every save; send it back with each edit (PATCH): another one answers 409 with the current record. */
+  version: number;
   code: string;
   name: string;
   /** An id from @friable/field's MEASURE_UNITS. */
@@ -86,10 +92,12 @@ export interface Measure {
   position: number;
 }
 
-export type MeasureInput = Omit<Measure, 'id' | 'position'> & { position?: number };
+export type MeasureInput = Omit<Measure, 'id' | 'version' | 'position'> & { position?: number };
 
 export interface AssessmentRound {
   id: number;
+  /** Bumped by every save; send it back with each edit (PATCH): another one answers 409 with the current record. */
+  version: number;
   label: string;
   dayOffset: number;
   /** startDate + dayOffset; null while the trial has no start date. */
@@ -97,7 +105,7 @@ export interface AssessmentRound {
   measureIds: number[];
 }
 
-export type RoundInput = Omit<AssessmentRound, 'id' | 'dueDate'>;
+export type RoundInput = Omit<AssessmentRound, 'id' | 'version' | 'dueDate'>;
 
 export interface PlotGeometryInput {
   shape: 'rectangle' | 'round';
@@ -111,6 +119,8 @@ export interface PlotGeometryInput {
 
 export interface Site extends PlotGeometryInput {
   id: number;
+  /** Bumped by every save; send it back with each edit (PATCH): another one answers 409 with the current record. */
+  version: number;
   name: string;
   location: string | null;
   soilDescription: string | null;
@@ -147,7 +157,7 @@ export interface ErrorStratum {
   criticalF: number | null;
 }
 
-export type SiteInput = Omit<Site, 'id' | 'areaM2' | 'leadName' | 'randomizedAt' | 'randomizationSeed' | 'plotCount' | 'hasObservations' | 'warnings' | 'strata'>;
+export type SiteInput = Omit<Site, 'id' | 'version' | 'areaM2' | 'leadName' | 'randomizedAt' | 'randomizationSeed' | 'plotCount' | 'hasObservations' | 'warnings' | 'strata'>;
 
 export interface Plot {
   id: number;
@@ -179,6 +189,8 @@ export interface ActivationCheck {
 /** GET /api/trials/:trialId: the whole protocol. */
 export interface TrialDetail {
   id: number;
+  /** Bumped by every save; send it back with each edit (PATCH): another one answers 409 with the current record. */
+  version: number;
   code: string;
   title: string;
   question: string | null;
@@ -215,6 +227,8 @@ export type TrialUpdateInput = Partial<Omit<TrialCreateInput, 'code'>> & {
   noControlReason?: string | null;
   /** 'active' only when every activation check passes (422 lists the problems). */
   status?: TrialStatus;
+  /** The version the editor saw. */
+  version: number;
 };
 
 /** A level as PUT …/factors takes it: code and name, and optionally its rate and material. */
@@ -226,7 +240,16 @@ export type FactorLevelInput = Pick<FactorLevel, 'code' | 'name'> & Partial<Omit
  * factors and their level codes stay as they are, names and rates change in place and the layouts stay.
  */
 export interface FactorsInput {
-  factors: Array<{ name: string; levels: FactorLevelInput[] }>;
+  /** `version`: the version of the factor stored at the same place, as GET answered it (none for a factor added at the end). */
+  factors: Array<{ name: string; version?: number; levels: FactorLevelInput[] }>;
+}
+
+/** 409 answer of an edit made from a stale version: nothing was written; `current` is the record as stored now. */
+export interface VersionConflict<T> {
+  statusCode: 409;
+  error: string;
+  message: string;
+  current: T;
 }
 
 /** GET /api/trials/:trialId/amounts: how much of each treatment's material goes on one plot at each site. */

@@ -3,7 +3,7 @@ import { QueryTypes } from 'sequelize';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { TrialMembership } from '../../src/trials/models/trial-membership.model';
 import { buildIntakeTrial, intakePath, upload, type IntakeTrial } from '../intake/intake-support';
-import { bearer, createPerson, createTestApp, tokenFor, type TestApp } from '../support/test-app';
+import { bearer, createPerson, createTestApp, tokenFor, type TestApp, patchCurrent } from '../support/test-app';
 import { waitForMessages } from '../team/team-support';
 
 describe('Review: sign-offs with statements, review requests, unlocking with a reason, comment threads, the report', () => {
@@ -64,7 +64,7 @@ describe('Review: sign-offs with statements, review requests, unlocking with a r
     const early = await signOff(built.tokens.reviewer);
     expect(early.status).toBe(409);
     expect(early.body.message).toBe('Lock the trial before signing off an analysis, so its data cannot change after the sign-off.');
-    expect((await t.http.patch(base).set(bearer(built.tokens.investigator)).send({ status: 'locked' })).status).toBe(200);
+    expect((await patchCurrent(t, base, bearer(built.tokens.investigator), { status: 'locked' })).status).toBe(200);
     const collaborator = await signOff(built.tokens.collaborator);
     expect(collaborator.status).toBe(403);
     const investigator = await signOff(built.tokens.investigator);
@@ -109,11 +109,11 @@ describe('Review: sign-offs with statements, review requests, unlocking with a r
   });
 
   it('unlocks only with a reason, and marks the sign-offs "data changed" once a value changes', async () => {
-    const bare = await t.http.patch(base).set(bearer(built.tokens.investigator)).send({ status: 'active' });
+    const bare = await patchCurrent(t, base, bearer(built.tokens.investigator), { status: 'active' });
     expect(bare.status).toBe(422);
     expect(bare.body.errors[0].field).toBe('reason');
     expect(bare.body.errors[0].message).toContain('2 sign-offs');
-    const unlocked = await t.http.patch(base).set(bearer(built.tokens.investigator)).send({ status: 'active', reason: 'Plot TG-1-1 was typed with a slipped decimal.' });
+    const unlocked = await patchCurrent(t, base, bearer(built.tokens.investigator), { status: 'active', reason: 'Plot TG-1-1 was typed with a slipped decimal.' });
     expect(unlocked.status).toBe(200);
     expect(unlocked.body.status).toBe('active');
     const [entry] = (await activity('trial.status-changed')).slice(-1);
@@ -128,7 +128,7 @@ describe('Review: sign-offs with statements, review requests, unlocking with a r
     expect(changed.signOffs.map((s) => s.state)).toEqual(['data-changed', 'data-changed']);
     expect(changed.signOffs.map((s) => s.dataHash)).toEqual([saved.dataHash, saved.dataHash]);
     // A stale analysis cannot be signed, even once locked again.
-    expect((await t.http.patch(base).set(bearer(built.tokens.investigator)).send({ status: 'locked' })).status).toBe(200);
+    expect((await patchCurrent(t, base, bearer(built.tokens.investigator), { status: 'locked' })).status).toBe(200);
     const person = await createPerson({ name: 'Late reviewer' });
     await TrialMembership.create({ trialId: built.trialId, userId: person.id, role: 'reviewer', siteId: null });
     const stale = await signOff(await tokenFor(t, person));

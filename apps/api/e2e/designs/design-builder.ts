@@ -1,5 +1,5 @@
 import type { FactorLevelInput, TrialDetail } from '@friable/contracts';
-import { bearer, createPerson, tokenFor, type TestApp } from '../support/test-app';
+import { bearer, createPerson, tokenFor, type TestApp, putFactorsCurrent } from '../support/test-app';
 import { expectStatus, uniqueCode } from '../protocol/protocol-builder';
 
 export interface FactorTrialPlan {
@@ -30,7 +30,7 @@ export async function buildFactorTrial(t: TestApp, plan: FactorTrialPlan): Promi
     201,
   );
   const base = `/api/trials/${trial.id}`;
-  await expectStatus(t.http.put(`${base}/factors`).set(auth).send({ factors: plan.factors }), 200);
+  await expectStatus(putFactorsCurrent(t, `${base}/factors`, auth, { factors: plan.factors }), 200);
   const measure = await expectStatus<{ id: number }>(
     t.http.post(`${base}/measures`).set(auth).send({ code: 'CR', name: 'crust resistance', unit: 'kgf/cm2', kind: 'continuous', decimals: 2, higherIsBetter: false }),
     201,

@@ -5,7 +5,7 @@ import { FactorLevel } from '../../src/factors/models/factor-level.model';
 import { PlotRow } from '../../src/plots/models/plot.model';
 import { TreatmentRow } from '../../src/treatments/models/treatment.model';
 import { expectStatus } from '../protocol/protocol-builder';
-import { createTestApp, type TestApp } from '../support/test-app';
+import { createTestApp, type TestApp, patchCurrent, putFactorsCurrent } from '../support/test-app';
 import { amendmentByMulch, buildFactorTrial, type FactorTrial } from './design-builder';
 
 /** The split-plot restriction, read from the stored rows: in each block one whole plot per amendment, each holding one sub plot per mulch. */
@@ -175,7 +175,7 @@ describe('split-plot and factorial designs through the API', () => {
     const before = await PlotRow.count({ where: { trialId: split.trialId } });
     const renamed = structuredClone(amendmentByMulch);
     renamed[0]!.levels[1] = { ...renamed[0]!.levels[1]!, name: 'Gypsum, pelleted', rateValue: 50 };
-    const answer = await expectStatus<{ factors: Factor[]; treatments: Treatment[] }>(t.http.put(`${split.base}/factors`).set(split.auth).send({ factors: renamed }), 200);
+    const answer = await expectStatus<{ factors: Factor[]; treatments: Treatment[] }>(putFactorsCurrent(t, `${split.base}/factors`, split.auth, { factors: renamed }), 200);
     expect(answer.factors[0]!.levels[1]).toMatchObject({ id: split.detail.factors[0]!.levels[1]!.id, name: 'Gypsum, pelleted', rateValue: 50 });
     expect(answer.treatments.find((x) => x.code === 'GW')).toMatchObject({ id: split.detail.treatments.find((x) => x.code === 'GW')!.id, name: 'Gypsum, pelleted × Woodchip 5 cm' });
     expect(await PlotRow.count({ where: { trialId: split.trialId } })).toBe(before);
@@ -185,7 +185,7 @@ describe('split-plot and factorial designs through the API', () => {
     const other = await buildFactorTrial(t, { design: 'split-plot', seed: 'rebuild', factors: amendmentByMulch, sites: [{ name: 'Rebuild Garden', labelPrefix: 'RG', blocks: 4 }] });
     const recoded = structuredClone(amendmentByMulch);
     recoded[1]!.levels[1] = { ...recoded[1]!.levels[1]!, code: 'S', name: 'Straw' };
-    const rebuilt = await expectStatus<{ treatments: Treatment[] }>(t.http.put(`${other.base}/factors`).set(other.auth).send({ factors: recoded }), 200);
+    const rebuilt = await expectStatus<{ treatments: Treatment[] }>(putFactorsCurrent(t, `${other.base}/factors`, other.auth, { factors: recoded }), 200);
     expect(rebuilt.treatments.map((x) => x.code)).toEqual(['C0', 'CS', 'G0', 'GS', 'K0', 'KS']);
     expect(await PlotRow.count({ where: { trialId: other.trialId } })).toBe(0);
     const sites = await expectStatus<Site[]>(t.http.get(`${other.base}/sites`).set(other.auth), 200);
@@ -195,17 +195,17 @@ describe('split-plot and factorial designs through the API', () => {
   it('refuses, in words, factors the design does not take and a level rate without its unit, writing nothing', async () => {
     const levelsBefore = await FactorLevel.count();
     const three = [...amendmentByMulch, { name: 'Variety', levels: [{ code: 'x', name: 'Roma' }, { code: 'y', name: 'Cherry' }] }];
-    const tooMany = await t.http.put(`${split.base}/factors`).set(split.auth).send({ factors: three });
+    const tooMany = await putFactorsCurrent(t, `${split.base}/factors`, split.auth, { factors: three });
     expect(tooMany.status).toBe(422);
     expect(tooMany.body.errors).toEqual([
       { field: 'factors', message: 'A split plot in blocks takes exactly 2 factors, in this order: the whole-plot factor, then the sub-plot factor; 3 were given.' },
     ]);
-    const five = await t.http.put(`${split.base}/factors`).set(split.auth).send({ factors: [...three, three[0], three[1]] });
+    const five = await putFactorsCurrent(t, `${split.base}/factors`, split.auth, { factors: [...three, three[0], three[1]] });
     expect(five.status).toBe(422);
     expect(five.body.errors).toEqual([{ field: 'factors', message: 'factors must list 2 to 4 factors' }]);
     const noUnit = structuredClone(amendmentByMulch);
     noUnit[0]!.levels[1] = { code: 'G', name: 'Gypsum', rateValue: 40 };
-    const refused = await t.http.put(`${split.base}/factors`).set(split.auth).send({ factors: noUnit });
+    const refused = await putFactorsCurrent(t, `${split.base}/factors`, split.auth, { factors: noUnit });
     expect(refused.status).toBe(422);
     expect(refused.body.errors).toEqual([{ field: 'factors.0.levels.1.rateUnit', message: 'Amendment, level G: rate unit is needed when a rate is given' }]);
     expect(await FactorLevel.count()).toBe(levelsBefore);
@@ -213,15 +213,15 @@ describe('split-plot and factorial designs through the API', () => {
 
   it('keeps the factors between factor designs (the activation check says when their number no longer fits) and drops them for a one-factor design', async () => {
     const trial = await buildFactorTrial(t, { design: 'split-plot', seed: 'switch', factors: amendmentByMulch, sites: [{ name: 'Switch Garden', labelPrefix: 'SG', blocks: 4 }] });
-    const splitSplit = await expectStatus<TrialDetail>(t.http.patch(trial.base).set(trial.auth).send({ design: 'split-split-plot' }), 200);
+    const splitSplit = await expectStatus<TrialDetail>(patchCurrent(t, trial.base, trial.auth, { design: 'split-split-plot' }), 200);
     expect(splitSplit.factors).toHaveLength(2);
     expect(splitSplit.activation.problems).toContain(
       'A split-split plot in blocks takes exactly 3 factors, in this order: the whole-plot factor, then the sub-plot factor, then the sub-sub-plot factor; 2 were given. Change the factors or the design.',
     );
-    const factorial = await expectStatus<TrialDetail>(t.http.patch(trial.base).set(trial.auth).send({ design: 'factorial-rcbd' }), 200);
+    const factorial = await expectStatus<TrialDetail>(patchCurrent(t, trial.base, trial.auth, { design: 'factorial-rcbd' }), 200);
     expect(factorial.factors.map((f) => f.appliedTo)).toEqual(['plot', 'plot']);
     expect(factorial.activation.problems).toEqual(['Site Switch Garden is not randomized yet.']);
-    const oneFactor = await expectStatus<TrialDetail>(t.http.patch(trial.base).set(trial.auth).send({ design: 'rcbd' }), 200);
+    const oneFactor = await expectStatus<TrialDetail>(patchCurrent(t, trial.base, trial.auth, { design: 'rcbd' }), 200);
     expect(oneFactor.factors).toEqual([]);
     expect(oneFactor.treatments.every((x) => x.factorLevelIds.length === 0)).toBe(true);
   });

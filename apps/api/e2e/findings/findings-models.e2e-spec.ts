@@ -3,7 +3,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { Trial } from '../../src/trials/models/trial.model';
 import { TrialMembership } from '../../src/trials/models/trial-membership.model';
 import { expectStatus, uniqueCode } from '../protocol/protocol-builder';
-import { bearer, createPerson, createTestApp, tokenFor, type TestApp } from '../support/test-app';
+import { bearer, createPerson, createTestApp, tokenFor, type TestApp, patchCurrent } from '../support/test-app';
 import { close, removeBundleFolders, runBundle } from './bundle-support';
 
 type ModelOf<A extends ModelFindings['analysis']> = Extract<ModelFindings, { analysis: A }>;
@@ -192,7 +192,7 @@ describe('Findings: the model made for each measure', () => {
     const day = await expectStatus<{ id: number }>(t.http.post(`${trialBase}/rounds`).set(auth).send({ label: 'Day 30', dayOffset: 30, measureIds: [worms.id] }), 201);
     const site = await expectStatus<{ id: number }>(t.http.post(`${trialBase}/sites`).set(auth).send({ name: 'Count Garden', shape: 'rectangle', lengthM: 1, widthM: 1, blocks: 4, labelPrefix: 'CG' }), 201);
     await expectStatus(t.http.post(`${trialBase}/sites/${site.id}/randomize`).set(auth).send({}), 200);
-    await expectStatus(t.http.patch(trialBase).set(auth).send({ status: 'active' }), 200);
+    await expectStatus(patchCurrent(t, trialBase, auth, { status: 'active' }), 200);
     const plots = await expectStatus<Array<{ id: number; block: number; treatmentCode: string }>>(t.http.get(`${trialBase}/plots`).set(auth), 200);
     // Invented counts (test data only): compost plots hold more worms, with block-to-block spread.
     const typical: Record<string, number> = { C: 4, G: 6, K: 14 };

@@ -1,8 +1,9 @@
 import type { Observation } from '@friable/contracts';
+import ExcelJS from 'exceljs';
 import { QueryTypes } from 'sequelize';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { buildIntakeTrial, intakePath, rowCounts, upload, type IntakeTrial } from '../intake/intake-support';
-import { bearer, createTestApp, type TestApp } from '../support/test-app';
+import { bearer, createTestApp, type TestApp, patchCurrent } from '../support/test-app';
 
 // Each of these once froze the API (1e20000000: 8 s and a 40 MB answer; 1e300000000: 103 s, then the
 // process died out of memory). A timeout of a few seconds is a hang detector here, not a speed target:
@@ -60,6 +61,25 @@ describe('hostile input: numbers bounded before they are parsed', () => {
       { row: 3, column: 'water retained (mL)', message: expect.stringMatching(/^Row 3, water retained \(mL\): "1e-300000000" is too small to be a reading/) },
     ]);
     expect(JSON.stringify(response.body).length).toBeLessThan(2_000);
+    expect(await rowCounts(t.sequelize, built.trialId)).toEqual(before);
+  }, HANG);
+
+  it('a workbook cell of 1e300 (a number) or "1e300000000" (text) answers 422 by row and column, nothing written', async () => {
+    const before = await rowCounts(t.sequelize, built.trialId);
+    const workbook = new ExcelJS.Workbook();
+    const sheet = workbook.addWorksheet('Day 0');
+    sheet.addRows([
+      ['plot label', 'drain time (s)', 'water retained (mL)'],
+      ['TG-B1-P02', 30, 100],
+      ['TG-B1-P03', 1e300, '1e300000000'],
+    ]);
+    const file = Buffer.from(await workbook.xlsx.writeBuffer());
+    const response = await upload(t, built.tokens.collaborator, intakePath(built), file, 'day0.xlsx');
+    expect(response.status).toBe(422);
+    expect(response.body.errors).toEqual([
+      { row: 3, column: 'drain time (s)', message: expect.stringMatching(/^Row 3, drain time \(s\): "1e\+?300" is too large to be a reading/) },
+      { row: 3, column: 'water retained (mL)', message: expect.stringMatching(/^Row 3, water retained \(mL\): "1e300000000" is too large to be a reading/) },
+    ]);
     expect(await rowCounts(t.sequelize, built.trialId)).toEqual(before);
   }, HANG);
 
@@ -137,7 +157,7 @@ describe('hostile input: text fields refuse NUL and unpaired surrogates', () => 
     ['an unpaired surrogate', 'Clay trial \ud800 half an emoji', 'title must not hold half of a character pair (an unpaired surrogate)'],
   ])('a trial title with %s answers 422 naming title, nothing written', async (_what, title, message) => {
     const before = await t.sequelize.query<{ title: string }>('SELECT title FROM trials WHERE id = ?', { replacements: [built.trialId], type: QueryTypes.SELECT });
-    const response = await t.http.patch(`/api/trials/${built.trialId}`).set(bearer(built.tokens.investigator)).send({ title });
+    const response = await patchCurrent(t, `/api/trials/${built.trialId}`, bearer(built.tokens.investigator), { title });
     expect(response.status).toBe(422);
     expect(response.body.errors).toEqual([{ field: 'title', message }]);
     const after = await t.sequelize.query<{ title: string }>('SELECT title FROM trials WHERE id = ?', { replacements: [built.trialId], type: QueryTypes.SELECT });

@@ -4,7 +4,7 @@ import { QueryTypes } from 'sequelize';
 import type { Sequelize } from 'sequelize-typescript';
 import { TrialMembership } from '../../src/trials/models/trial-membership.model';
 import { expectStatus, uniqueCode } from '../protocol/protocol-builder';
-import { bearer, createPerson, tokenFor, type TestApp } from '../support/test-app';
+import { bearer, createPerson, tokenFor, type TestApp, patchCurrent } from '../support/test-app';
 
 export const fixture = (name: string): Buffer => readFileSync(resolve(__dirname, 'fixtures', name));
 
@@ -54,7 +54,7 @@ export async function buildIntakeTrial(t: TestApp): Promise<IntakeTrial> {
     await expectStatus(t.http.post(`${base}/sites/${site.id}/randomize`).set(auth).send({}), 200);
     siteIds.push(site.id);
   }
-  await expectStatus(t.http.patch(base).set(auth).send({ status: 'active' }), 200);
+  await expectStatus(patchCurrent(t, base, auth, { status: 'active' }), 200);
   const plotList = await expectStatus<Array<{ id: number; label: string }>>(t.http.get(`${base}/plots`).set(auth), 200);
   const collaborator = await createPerson({ name: 'Test Garden collaborator' });
   const otherCollaborator = await createPerson({ name: 'Other Garden collaborator' });

@@ -1,6 +1,6 @@
 import type { IntakeResult } from '@friable/contracts';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { bearer, createTestApp, type TestApp } from '../support/test-app';
+import { bearer, createTestApp, type TestApp, patchCurrent } from '../support/test-app';
 import { waitForMessages } from '../team/team-support';
 import { buildIntakeTrial, fixture, intakePath, rowCounts, storedValues, upload, type IntakeTrial } from './intake-support';
 
@@ -234,13 +234,13 @@ describe('Intake: CSV upload of one site and round', () => {
 
   it('a locked trial refuses intake with 409 and says why; unlocking is recorded', async () => {
     const base = `/api/trials/${built.trialId}`;
-    expect((await t.http.patch(base).set(bearer(built.tokens.investigator)).send({ status: 'locked' })).status).toBe(200);
+    expect((await patchCurrent(t, base, bearer(built.tokens.investigator), { status: 'locked' })).status).toBe(200);
     const before = await rowCounts(t.sequelize, built.trialId);
     const response = await upload(t, built.tokens.investigator, intakePath(built), fixture('good.csv'));
     expect(response.status).toBe(409);
     expect(response.body.message).toBe('This trial is locked; unlock it to change anything.');
     expect(await rowCounts(t.sequelize, built.trialId)).toEqual(before);
-    expect((await t.http.patch(base).set(bearer(built.tokens.investigator)).send({ status: 'active' })).status).toBe(200);
+    expect((await patchCurrent(t, base, bearer(built.tokens.investigator), { status: 'active' })).status).toBe(200);
     const log = await t.http.get(`${base}/activity?kind=trial.status-changed`).set(bearer(built.tokens.reviewer));
     expect(log.body[0]).toMatchObject({ summary: 'Changed the trial from locked to active.', details: { from: 'locked', to: 'active' }, userId: built.ids.investigator });
   });

@@ -1,7 +1,7 @@
 import type { Observation } from '@friable/contracts';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { buildIntakeTrial, intakePath, rowCounts, upload, type IntakeTrial } from '../intake/intake-support';
-import { bearer, createTestApp, type TestApp } from '../support/test-app';
+import { bearer, createTestApp, type TestApp, patchCurrent } from '../support/test-app';
 
 describe('Ledger: observations, edits with versions, history', () => {
   let t: TestApp;
@@ -147,7 +147,7 @@ describe('Ledger: observations, edits with versions, history', () => {
 
   it('a locked trial refuses edits and new values with 409', async () => {
     const cell = await find('TG-B1-P01', 'CS');
-    expect((await t.http.patch(base).set(bearer(built.tokens.investigator)).send({ status: 'locked' })).status).toBe(200);
+    expect((await patchCurrent(t, base, bearer(built.tokens.investigator), { status: 'locked' })).status).toBe(200);
     const before = await rowCounts(t.sequelize, built.trialId);
     const edit = await t.http.patch(`${base}/observations/${cell.id}`).set(bearer(built.tokens.investigator)).send({ version: 1, value: '4' });
     expect(edit.status).toBe(409);
@@ -155,7 +155,7 @@ describe('Ledger: observations, edits with versions, history', () => {
     const created = await t.http.post(`${base}/observations`).set(bearer(built.tokens.investigator)).send({ plotId: built.plots['TG-B3-P03'], roundId: built.roundId, measureId: built.measures.DT, value: '30' });
     expect(created.status).toBe(409);
     expect(await rowCounts(t.sequelize, built.trialId)).toEqual(before);
-    expect((await t.http.patch(base).set(bearer(built.tokens.investigator)).send({ status: 'active' })).status).toBe(200);
+    expect((await patchCurrent(t, base, bearer(built.tokens.investigator), { status: 'active' })).status).toBe(200);
     expect((await t.http.patch(`${base}/observations/${cell.id}`).set(bearer(built.tokens.investigator)).send({ version: 1, value: '4' })).status).toBe(200);
   });
 

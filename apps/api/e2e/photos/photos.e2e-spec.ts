@@ -3,7 +3,7 @@ import { resolve } from 'node:path';
 import { QueryTypes } from 'sequelize';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { buildIntakeTrial, rowCounts, type IntakeTrial } from '../intake/intake-support';
-import { bearer, createTestApp, type TestApp } from '../support/test-app';
+import { bearer, createTestApp, type TestApp, patchCurrent } from '../support/test-app';
 
 const photo = (name: string) => readFileSync(resolve(__dirname, 'fixtures', name));
 
@@ -76,7 +76,7 @@ describe('Plot photos', () => {
 
   it('a locked trial refuses PUT and DELETE with 409; unlocked, DELETE removes the photo', async () => {
     const base = `/api/trials/${built.trialId}`;
-    expect((await t.http.patch(base).set(bearer(built.tokens.investigator)).send({ status: 'locked' })).status).toBe(200);
+    expect((await patchCurrent(t, base, bearer(built.tokens.investigator), { status: 'locked' })).status).toBe(200);
     const before = await rowCounts(t.sequelize, built.trialId);
     const putLocked = await put(built.tokens.investigator, 'TG-B1-P03', photo('tiny.png'), 'x.png');
     expect(putLocked.status).toBe(409);
@@ -84,7 +84,7 @@ describe('Plot photos', () => {
     expect((await t.http.delete(path('TG-B1-P01')).set(bearer(built.tokens.investigator))).status).toBe(409);
     expect(await rowCounts(t.sequelize, built.trialId)).toEqual(before);
     expect((await t.http.get(path('TG-B1-P01')).set(bearer(built.tokens.reviewer))).status).toBe(200);
-    expect((await t.http.patch(base).set(bearer(built.tokens.investigator)).send({ status: 'active' })).status).toBe(200);
+    expect((await patchCurrent(t, base, bearer(built.tokens.investigator), { status: 'active' })).status).toBe(200);
     expect((await t.http.delete(path('TG-B1-P01')).set(bearer(built.tokens.collaborator))).status).toBe(204);
     expect((await t.http.get(path('TG-B1-P01')).set(bearer(built.tokens.reviewer))).status).toBe(404);
     expect((await t.http.delete(path('TG-B1-P01')).set(bearer(built.tokens.collaborator))).status).toBe(404);

@@ -20,7 +20,7 @@ const routes: Array<{ method: Method; path: (b: BuiltTrial) => string; body?: ob
   ...(['treatments', 'measures', 'rounds', 'sites'] as const).flatMap((feature) => [
     { method: 'get' as const, path: (b: BuiltTrial) => `/api/trials/${b.trialId}/${feature}`, investigator: 200, write: false },
     { method: 'post' as const, path: (b: BuiltTrial) => `/api/trials/${b.trialId}/${feature}`, body: {}, investigator: 422, write: true },
-    { method: 'patch' as const, path: (b: BuiltTrial) => `/api/trials/${b.trialId}/${feature}/999999999`, body: {}, investigator: 404, write: true },
+    { method: 'patch' as const, path: (b: BuiltTrial) => `/api/trials/${b.trialId}/${feature}/999999999`, body: { version: 1 }, investigator: 404, write: true },
     { method: 'delete' as const, path: (b: BuiltTrial) => `/api/trials/${b.trialId}/${feature}/999999999`, investigator: 404, write: true },
   ]),
   { method: 'post', path: (b) => `/api/trials/${b.trialId}/sites/${b.sites['Test Garden']}/randomize`, body: { seed: '' }, investigator: 422, write: true },

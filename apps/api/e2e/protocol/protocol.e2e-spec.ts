@@ -6,7 +6,7 @@ import { PlotRow } from '../../src/plots/models/plot.model';
 import { SiteRow } from '../../src/sites/models/site.model';
 import { TreatmentRow } from '../../src/treatments/models/treatment.model';
 import { Trial } from '../../src/trials/models/trial.model';
-import { bearer, createPerson, createTestApp, tokenFor, type TestApp } from '../support/test-app';
+import { bearer, createPerson, createTestApp, tokenFor, type TestApp, patchCurrent } from '../support/test-app';
 import { expectStatus, uniqueCode } from './protocol-builder';
 
 describe('a full protocol built through the API', () => {
@@ -121,7 +121,7 @@ describe('a full protocol built through the API', () => {
     expect(detail.activation.warnings).toContain(
       'Quarry Pots: 5 treatments × 3 blocks leave 8 error degrees of freedom at the site, fewer than the 12 EPPO PP 1/152 asks for; 4 blocks would give 12.',
     );
-    const refused = await t.http.patch(base).set(auth).send({ status: 'active' });
+    const refused = await patchCurrent(t, base, auth, { status: 'active' });
     expect(refused.status).toBe(422);
     expect(refused.body.errors).toEqual([
       { field: 'status', message: 'Site Hollow Lane is not randomized yet.' },
@@ -194,7 +194,7 @@ describe('a full protocol built through the API', () => {
   });
 
   it('activates once every check passes, and records it', async () => {
-    const detail = await expectStatus<TrialDetail>(t.http.patch(base).set(auth).send({ status: 'active' }), 200);
+    const detail = await expectStatus<TrialDetail>(patchCurrent(t, base, auth, { status: 'active' }), 200);
     expect(detail).toMatchObject({ status: 'active', activation: { ready: true, problems: [] }, question: 'Does gypsum make clay drain faster?', seed: 'full-protocol-seed' });
     expect(detail.treatments).toHaveLength(5);
     expect(detail.measures).toHaveLength(4);
@@ -216,7 +216,7 @@ describe('a full protocol built through the API', () => {
 
     // Changing the blocks of one site clears that site only.
     for (const s of Object.values(site)) await expectStatus(t.http.post(`${base}/sites/${s.id}/randomize`).set(auth).send({}), 200);
-    await expectStatus(t.http.patch(`${base}/sites/${site.QP.id}`).set(auth).send({ blocks: 4 }), 200);
+    await expectStatus(patchCurrent(t, `${base}/sites/${site.QP.id}`, auth, { blocks: 4 }), 200);
     expect(await PlotRow.count({ where: { siteId: site.HL.id } })).toBe(24);
     expect(await PlotRow.count({ where: { siteId: site.QP.id } })).toBe(0);
     expect((await SiteRow.findByPk(site.QP.id))?.randomizedAt).toBeNull();

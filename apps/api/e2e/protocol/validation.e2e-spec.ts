@@ -7,7 +7,7 @@ import { AssessmentRoundRow } from '../../src/rounds/models/assessment-round.mod
 import { SiteRow } from '../../src/sites/models/site.model';
 import { TreatmentRow } from '../../src/treatments/models/treatment.model';
 import { Trial } from '../../src/trials/models/trial.model';
-import { bearer, createTestApp, type TestApp } from '../support/test-app';
+import { bearer, createTestApp, type TestApp, patchCurrent, putFactorsCurrent } from '../support/test-app';
 import { buildSmallTrial, expectStatus, uniqueCode, type BuiltTrial } from './protocol-builder';
 
 describe('protocol input checks, locking and factorial treatments', () => {
@@ -68,7 +68,8 @@ describe('protocol input checks, locking and factorial treatments', () => {
   it.each(cases)('answers 422 naming the field for: $name', async (c) => {
     const trialId = c.trial?.() ?? built.trialId;
     const before = await counts(trialId);
-    const response = await t.http[c.method](c.path()).set(auth).send(c.body());
+    // A PATCH carries the version just read, so that only the field in question is wrong.
+    const response = c.method === 'patch' ? await patchCurrent(t, c.path(), auth, c.body()) : await t.http[c.method](c.path()).set(auth).send(c.body());
     expect(response.status).toBe(422);
     expect(response.body.errors.map((e: { field: string }) => e.field)).toContain(c.field);
     if (c.message) expect(response.body.errors).toContainEqual({ field: c.field, message: c.message });
@@ -82,7 +83,7 @@ describe('protocol input checks, locking and factorial treatments', () => {
         { name: 'Depth', levels: [{ code: '0', name: 'None' }, { code: '5', name: '5 cm' }, { code: '10', name: '10 cm' }] },
       ],
     };
-    const answer = await expectStatus<{ factors: Factor[]; treatments: Treatment[] }>(t.http.put(`${factorialBase}/factors`).set(auth).send(body), 200);
+    const answer = await expectStatus<{ factors: Factor[]; treatments: Treatment[] }>(putFactorsCurrent(t, `${factorialBase}/factors`, auth, body), 200);
     expect(answer.treatments.map((x) => x.code)).toEqual(['W0', 'W5', 'W10', 'S0', 'S5', 'S10']);
     expect(answer.treatments.map((x) => x.name)).toEqual(['Woodchip × None', 'Woodchip × 5 cm', 'Woodchip × 10 cm', 'Straw × None', 'Straw × 5 cm', 'Straw × 10 cm']);
     const levelIds = answer.factors.map((f) => f.levels.map((l) => l.id));
@@ -92,9 +93,9 @@ describe('protocol input checks, locking and factorial treatments', () => {
 
     // A rate set on a combination survives re-stating the factors with an extra level.
     const w5 = answer.treatments.find((x) => x.code === 'W5') as Treatment;
-    await expectStatus(t.http.patch(`${factorialBase}/treatments/${w5.id}`).set(auth).send({ rateValue: 5, rateUnit: 'cm' }), 200);
+    await expectStatus(patchCurrent(t, `${factorialBase}/treatments/${w5.id}`, auth, { rateValue: 5, rateUnit: 'cm' }), 200);
     body.factors[0].levels.push({ code: 'L', name: 'Leaves' });
-    const again = await expectStatus<{ treatments: Treatment[] }>(t.http.put(`${factorialBase}/factors`).set(auth).send(body), 200);
+    const again = await expectStatus<{ treatments: Treatment[] }>(putFactorsCurrent(t, `${factorialBase}/factors`, auth, body), 200);
     expect(again.treatments).toHaveLength(9);
     expect(again.treatments.find((x) => x.code === 'W5')).toMatchObject({ id: w5.id, rateValue: 5, rateUnit: 'cm' });
 
@@ -102,7 +103,7 @@ describe('protocol input checks, locking and factorial treatments', () => {
     const direct = await t.http.post(`${factorialBase}/treatments`).set(auth).send({ code: 'X', name: 'Loose' });
     expect(direct.status).toBe(409);
     expect(direct.body.message).toBe('The treatments of a factorial or split-plot trial are every combination of its factor levels; change the factors instead.');
-    const notFactorial = await t.http.put(`${base}/factors`).set(auth).send(body);
+    const notFactorial = await putFactorsCurrent(t, `${base}/factors`, auth, body);
     expect(notFactorial.status).toBe(409);
   });
 
@@ -110,25 +111,25 @@ describe('protocol input checks, locking and factorial treatments', () => {
     const trial = await buildSmallTrial(t);
     const lockAuth = bearer(trial.token);
     const at = `/api/trials/${trial.trialId}`;
-    await expectStatus(t.http.patch(at).set(lockAuth).send({ status: 'active' }), 200);
-    await expectStatus(t.http.patch(at).set(lockAuth).send({ status: 'locked' }), 200);
+    await expectStatus(patchCurrent(t, at, lockAuth, { status: 'active' }), 200);
+    await expectStatus(patchCurrent(t, at, lockAuth, { status: 'locked' }), 200);
     const before = await counts(trial.trialId);
     const writes = [
-      t.http.patch(at).set(lockAuth).send({ title: 'Changed while locked' }),
+      patchCurrent(t, at, lockAuth, { title: 'Changed while locked' }),
       t.http.post(`${at}/treatments`).set(lockAuth).send({ code: 'N', name: 'New' }),
-      t.http.patch(`${at}/treatments/${trial.treatments.G}`).set(lockAuth).send({ name: 'Renamed' }),
+      patchCurrent(t, `${at}/treatments/${trial.treatments.G}`, lockAuth, { name: 'Renamed' }),
       t.http.delete(`${at}/treatments/${trial.treatments.K}`).set(lockAuth),
       t.http.post(`${at}/measures`).set(lockAuth).send({ code: 'N', name: 'new', unit: 'mL', kind: 'continuous' }),
-      t.http.patch(`${at}/measures/${trial.measures.DT}`).set(lockAuth).send({ unit: 'min' }),
+      patchCurrent(t, `${at}/measures/${trial.measures.DT}`, lockAuth, { unit: 'min' }),
       t.http.delete(`${at}/measures/${trial.measures.CS}`).set(lockAuth),
       t.http.post(`${at}/rounds`).set(lockAuth).send({ label: 'Later', dayOffset: 9, measureIds: [trial.measures.DT] }),
-      t.http.patch(`${at}/rounds/${trial.rounds['Day 0']}`).set(lockAuth).send({ dayOffset: 2 }),
+      patchCurrent(t, `${at}/rounds/${trial.rounds['Day 0']}`, lockAuth, { dayOffset: 2 }),
       t.http.delete(`${at}/rounds/${trial.rounds['Day 0']}`).set(lockAuth),
       t.http.post(`${at}/sites`).set(lockAuth).send({ name: 'New site', shape: 'round', diameterCm: 30, blocks: 4 }),
-      t.http.patch(`${at}/sites/${trial.sites['Test Garden']}`).set(lockAuth).send({ blocks: 5 }),
+      patchCurrent(t, `${at}/sites/${trial.sites['Test Garden']}`, lockAuth, { blocks: 5 }),
       t.http.delete(`${at}/sites/${trial.sites['Test Garden']}`).set(lockAuth),
       t.http.post(`${at}/sites/${trial.sites['Test Garden']}/randomize`).set(lockAuth).send({ seed: 'other' }),
-      t.http.patch(at).set(lockAuth).send({ status: 'draft' }),
+      patchCurrent(t, at, lockAuth, { status: 'draft' }),
     ];
     for (const pending of writes) {
       const response = await pending;
@@ -137,25 +138,25 @@ describe('protocol input checks, locking and factorial treatments', () => {
     }
     expect(await counts(trial.trialId)).toEqual(before);
     expect((await Trial.findByPk(trial.trialId))?.title).toBe('Small built trial');
-    const unlocked = await expectStatus<{ status: string }>(t.http.patch(at).set(lockAuth).send({ status: 'active' }), 200);
+    const unlocked = await expectStatus<{ status: string }>(patchCurrent(t, at, lockAuth, { status: 'active' }), 200);
     expect(unlocked.status).toBe('active');
-    await expectStatus(t.http.patch(at).set(lockAuth).send({ title: 'Changed after unlocking' }), 200);
+    await expectStatus(patchCurrent(t, at, lockAuth, { title: 'Changed after unlocking' }), 200);
   });
 
   it('follows the status rules: no skipping, archive only from locked, back to draft while no observations', async () => {
     const trial = await buildSmallTrial(t);
     const a = bearer(trial.token);
     const at = `/api/trials/${trial.trialId}`;
-    const skip = await t.http.patch(at).set(a).send({ status: 'locked' });
+    const skip = await patchCurrent(t, at, a, { status: 'locked' });
     expect(skip.status).toBe(409);
     expect(skip.body.message).toBe('A draft trial can become active only; it cannot become locked.');
-    await expectStatus(t.http.patch(at).set(a).send({ status: 'active' }), 200);
-    const archive = await t.http.patch(at).set(a).send({ status: 'archived' });
+    await expectStatus(patchCurrent(t, at, a, { status: 'active' }), 200);
+    const archive = await patchCurrent(t, at, a, { status: 'archived' });
     expect(archive.status).toBe(409);
-    await expectStatus(t.http.patch(at).set(a).send({ status: 'draft' }), 200);
-    await expectStatus(t.http.patch(at).set(a).send({ status: 'active' }), 200);
-    await expectStatus(t.http.patch(at).set(a).send({ status: 'locked' }), 200);
-    await expectStatus(t.http.patch(at).set(a).send({ status: 'archived' }), 200);
+    await expectStatus(patchCurrent(t, at, a, { status: 'draft' }), 200);
+    await expectStatus(patchCurrent(t, at, a, { status: 'active' }), 200);
+    await expectStatus(patchCurrent(t, at, a, { status: 'locked' }), 200);
+    await expectStatus(patchCurrent(t, at, a, { status: 'archived' }), 200);
     const afterArchive = await t.http.post(`${at}/treatments`).set(a).send({ code: 'N', name: 'New' });
     expect(afterArchive.status).toBe(409);
     expect(afterArchive.body.message).toBe('This trial is archived; an archived trial can no longer be changed.');

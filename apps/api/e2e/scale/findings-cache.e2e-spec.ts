@@ -3,7 +3,7 @@ import { QueryTypes } from 'sequelize';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { FindingsCache } from '../../src/findings/findings-cache';
 import { buildIntakeTrial, intakePath, upload, type IntakeTrial } from '../intake/intake-support';
-import { bearer, createTestApp, type TestApp } from '../support/test-app';
+import { bearer, createTestApp, type TestApp, patchCurrent } from '../support/test-app';
 
 /**
  * The Findings cache: answers kept per API instance under the trial's data stamp; any write through any
@@ -70,7 +70,7 @@ describe('Findings cache: kept until the next write, through any instance', () =
   it('a write to another trial leaves this trial’s answers cached; a write outside any trial does not', async () => {
     await findings();
     let before = counts();
-    const rename = await two.http.patch(`/api/trials/${other.trialId}`).set(bearer(other.tokens.investigator)).send({ title: 'Another title' });
+    const rename = await patchCurrent(two, `/api/trials/${other.trialId}`, bearer(other.tokens.investigator), { title: 'Another title' });
     expect(rename.status, JSON.stringify(rename.body)).toBe(200);
     await findings();
     expect(counts()).toEqual({ hits: before.hits + 1, misses: before.misses });
@@ -96,7 +96,7 @@ describe('Findings cache: kept until the next write, through any instance', () =
   });
 
   it('fifty requests at once for a changed answer share one computation', async () => {
-    const touch = await two.http.patch(`/api/trials/${built.trialId}`).set(bearer(built.tokens.investigator)).send({ title: 'Retitled while cached' });
+    const touch = await patchCurrent(two, `/api/trials/${built.trialId}`, bearer(built.tokens.investigator), { title: 'Retitled while cached' });
     expect(touch.status, JSON.stringify(touch.body)).toBe(200);
     const before = counts();
     const answers = await Promise.all(Array.from({ length: 50 }, () => one.http.get(findingsPath).set(bearer(built.tokens.reviewer))));

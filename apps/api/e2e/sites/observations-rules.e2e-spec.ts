@@ -9,7 +9,7 @@ import { MeasureRow } from '../../src/measures/models/measure.model';
 import { PlotRow } from '../../src/plots/models/plot.model';
 import { TreatmentRow } from '../../src/treatments/models/treatment.model';
 import { Trial } from '../../src/trials/models/trial.model';
-import { bearer, type TestApp } from '../support/test-app';
+import { bearer, type TestApp, patchCurrent } from '../support/test-app';
 import { buildSmallTrial, expectStatus, type BuiltTrial } from '../protocol/protocol-builder';
 
 /**
@@ -40,7 +40,7 @@ describe('edits refused once a site holds observations (stubbed observations)', 
     auth = bearer(built.token);
     base = `/api/trials/${built.trialId}`;
     siteId = built.sites['Test Garden'];
-    await expectStatus(t.http.patch(base).set(auth).send({ status: 'active' }), 200);
+    await expectStatus(patchCurrent(t, base, auth, { status: 'active' }), 200);
     observedSites.add(siteId);
   });
   afterAll(() => app.close());
@@ -60,8 +60,9 @@ describe('edits refused once a site holds observations (stubbed observations)', 
     ['going back to draft', 'patch', () => base, { status: 'draft' }, 'This trial already holds observations, so it cannot go back to draft; lock it instead.'],
   ] as const)('refuses %s with 409 and writes nothing', async (_name, method, path, body, message) => {
     const before = { plots: await PlotRow.count({ where: { trialId: built.trialId } }), treatments: await TreatmentRow.count({ where: { trialId: built.trialId } }) };
-    const pending = t.http[method](path()).set(auth);
-    const response = await (body ? pending.send(body) : pending);
+    // A PATCH carries the version just read, so that only the meaning of the stored values stops it.
+    const pending = method === 'patch' ? patchCurrent(t, path(), auth, body) : t.http[method](path()).set(auth);
+    const response = await (body && method !== 'patch' ? (pending as ReturnType<typeof t.http.post>).send(body) : pending);
     expect(response.status).toBe(409);
     expect(response.body.message).toBe(message);
     expect({ plots: await PlotRow.count({ where: { trialId: built.trialId } }), treatments: await TreatmentRow.count({ where: { trialId: built.trialId } }) }).toEqual(before);
@@ -70,8 +71,8 @@ describe('edits refused once a site holds observations (stubbed observations)', 
   });
 
   it('still allows edits that keep the meaning of stored values', async () => {
-    const renamed = await expectStatus<{ name: string }>(t.http.patch(`${base}/treatments/${built.treatments.G}`).set(auth).send({ name: 'Gypsum, renamed' }), 200);
+    const renamed = await expectStatus<{ name: string }>(patchCurrent(t, `${base}/treatments/${built.treatments.G}`, auth, { name: 'Gypsum, renamed' }), 200);
     expect(renamed.name).toBe('Gypsum, renamed');
-    await expectStatus(t.http.patch(`${base}/measures/${built.measures.DT}`).set(auth).send({ plausibleMax: 500 }), 200);
+    await expectStatus(patchCurrent(t, `${base}/measures/${built.measures.DT}`, auth, { plausibleMax: 500 }), 200);
   });
 });

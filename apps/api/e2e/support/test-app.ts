@@ -69,3 +69,32 @@ export async function tokenFor(testApp: TestApp, user: Pick<User, 'email'>): Pro
 }
 
 export const bearer = (token: string) => ({ Authorization: `Bearer ${token}` });
+
+const versionedPath = /^\/api\/trials\/(\d+)(?:\/(treatments|measures|rounds|sites)\/(\d+))?$/;
+
+/**
+ * The version a client would send with a PATCH of `path` (a trial or one of its treatments, measures, rounds or
+ * sites): read from GET /api/trials/:trialId as `auth` sees it; 1 when `auth` may not read the trial.
+ */
+export async function currentVersion(testApp: TestApp, path: string, auth: Record<string, string>): Promise<number> {
+  const match = versionedPath.exec(path);
+  if (!match) throw new Error(`${path} is not a versioned protocol record`);
+  const detail = await testApp.http.get(`/api/trials/${match[1]}`).set(auth);
+  if (detail.status !== 200) return 1;
+  if (!match[2]) return detail.body.version as number;
+  const row = (detail.body[match[2]] as Array<{ id: number; version: number }>).find((r) => r.id === Number(match[3]));
+  return row?.version ?? 1;
+}
+
+/** PATCH of a protocol record as a client sends it: with the version it has just read. */
+export async function patchCurrent(testApp: TestApp, path: string, auth: Record<string, string>, body: object): Promise<request.Response> {
+  const version = await currentVersion(testApp, path, auth);
+  return testApp.http.patch(path).set(auth).send({ ...body, version });
+}
+
+/** PUT …/factors as a client sends it: each factor with the version of the stored factor at its place (GET …/factors). */
+export async function putFactorsCurrent(testApp: TestApp, path: string, auth: Record<string, string>, body: { factors: object[] }): Promise<request.Response> {
+  const stored = await testApp.http.get(path).set(auth);
+  const versions = stored.status === 200 ? (stored.body as Array<{ version: number }>).map((factor) => factor.version) : [];
+  return testApp.http.put(path).set(auth).send({ ...body, factors: body.factors.map((factor, index) => (index < versions.length ? { ...factor, version: versions[index] } : factor)) });
+}

@@ -4,7 +4,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createOpenApiDocument } from '../../src/openapi/openapi-document';
 import { TrialMembership } from '../../src/trials/models/trial-membership.model';
 import type { User } from '../../src/users/models/user.model';
-import { bearer, createPerson, createTestApp, tokenFor, type TestApp } from '../support/test-app';
+import { bearer, createPerson, createTestApp, tokenFor, type TestApp, patchCurrent } from '../support/test-app';
 import { createSite, uniqueCode, waitForMessages } from './team-support';
 
 /** Every route of a trial in the OpenAPI document, with its other path parameters filled in. */
@@ -97,12 +97,12 @@ describe('Membership changes: role and sites, removal, the last investigator', (
     expect((await remove(lead.id)).status).toBe(409);
 
     // The reviewer's token, issued before the change, can edit the protocol right after it.
-    expect((await t.http.patch(`/api/trials/${trialId}`).set(bearer(readerToken)).send({ title: 'Mulch on sandy beds (2027)' })).status).toBe(403);
+    expect((await patchCurrent(t, `/api/trials/${trialId}`, bearer(readerToken), { title: 'Mulch on sandy beds (2027)' })).status).toBe(403);
     expect((await change(reader.id, { role: 'investigator' })).status).toBe(200);
-    expect((await t.http.patch(`/api/trials/${trialId}`).set(bearer(readerToken)).send({ title: 'Mulch on sandy beds (2027)' })).status).toBe(200);
+    expect((await patchCurrent(t, `/api/trials/${trialId}`, bearer(readerToken), { title: 'Mulch on sandy beds (2027)' })).status).toBe(200);
     // With two investigators, one may step down to reviewer and lose the right at once.
     expect((await change(lead.id, { role: 'reviewer' }, readerToken)).status).toBe(200);
-    expect((await t.http.patch(`/api/trials/${trialId}`).set(bearer(leadToken)).send({ title: 'x' })).status).toBe(403);
+    expect((await patchCurrent(t, `/api/trials/${trialId}`, bearer(leadToken), { title: 'x' })).status).toBe(403);
     expect((await change(lead.id, { role: 'investigator' }, readerToken)).status).toBe(200);
   });
 

@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { Trial } from '../../src/trials/models/trial.model';
 import { TrialMembership } from '../../src/trials/models/trial-membership.model';
-import { bearer, createPerson, createTestApp, tokenFor, type TestApp } from '../support/test-app';
+import { bearer, createPerson, createTestApp, tokenFor, type TestApp, patchCurrent } from '../support/test-app';
 
 const uniqueCode = () => `T-${Math.random().toString(36).slice(2, 10).toUpperCase()}`;
 
@@ -45,19 +45,19 @@ describe('trials and per-trial roles', () => {
   });
 
   it('lets the investigator change the title and refuses a reviewer with 403', async () => {
-    const byReviewer = await t.http.patch(`/api/trials/${trialId}`).set(bearer(reviewerToken)).send({ title: 'Reviewer was here' });
+    const byReviewer = await patchCurrent(t, `/api/trials/${trialId}`, bearer(reviewerToken), { title: 'Reviewer was here' });
     expect(byReviewer.status).toBe(403);
     expect(byReviewer.body.message).toBe('This needs the investigator role on this trial; you are reviewer.');
     expect((await Trial.findByPk(trialId))?.title).toBe('Compost on clay');
 
-    const byLead = await t.http.patch(`/api/trials/${trialId}`).set(bearer(investigatorToken)).send({ title: 'Compost and gypsum on clay' });
+    const byLead = await patchCurrent(t, `/api/trials/${trialId}`, bearer(investigatorToken), { title: 'Compost and gypsum on clay' });
     expect(byLead.status).toBe(200);
     expect((await Trial.findByPk(trialId))?.title).toBe('Compost and gypsum on clay');
   });
 
   it('answers a non-member with 404, as if the trial did not exist', async () => {
     const read = await t.http.get(`/api/trials/${trialId}`).set(bearer(outsiderToken));
-    const write = await t.http.patch(`/api/trials/${trialId}`).set(bearer(outsiderToken)).send({ title: 'Nope' });
+    const write = await patchCurrent(t, `/api/trials/${trialId}`, bearer(outsiderToken), { title: 'Nope' });
     const missing = await t.http.get('/api/trials/999999999').set(bearer(outsiderToken));
     for (const response of [read, write, missing]) {
       expect(response.status).toBe(404);
@@ -70,7 +70,7 @@ describe('trials and per-trial roles', () => {
     expect(list.body.find((trial: { id: number }) => trial.id === trialId)).toMatchObject({ myRoles: [] });
     const read = await t.http.get(`/api/trials/${trialId}`).set(bearer(adminToken));
     expect(read.status).toBe(200);
-    const write = await t.http.patch(`/api/trials/${trialId}`).set(bearer(adminToken)).send({ title: 'Admin edit' });
+    const write = await patchCurrent(t, `/api/trials/${trialId}`, bearer(adminToken), { title: 'Admin edit' });
     expect(write.status).toBe(403);
   });
 

@@ -74,7 +74,7 @@ export class DemoLoaderService {
     if (!owner) throw new Error(`demo trial ${plan.code} has no owner`);
     const user: AuthUser = { id: owner.id, email: owner.email, name: owner.name, isAdmin: owner.isAdmin };
 
-    await this.trials.update(access, { question: plan.question, startDate: plan.startDate, seed: plan.seed, safetyNotes: plan.safetyNotes }, user);
+    await this.trials.update(access, { version: detail.version, question: plan.question, startDate: plan.startDate, seed: plan.seed, safetyNotes: plan.safetyNotes }, user);
     if (plan.factors) await this.factors.replace(trial.id, user, { factors: plan.factors });
     for (const treatment of plan.treatments ?? []) await this.treatments.create(trial.id, user, treatment);
     const measureIds = new Map<string, number>();
@@ -89,7 +89,7 @@ export class DemoLoaderService {
       await this.sites.randomize(trial.id, created.id, user);
     }
     const current = await this.trials.get(access);
-    if (plan.status === 'active' && current.status !== 'active') await this.trials.update(access, { status: 'active' }, user);
+    if (plan.status === 'active' && current.status !== 'active') await this.trials.update(access, { version: current.version, status: 'active' }, user);
     if (plan.status === 'active' && !current.activation.ready) throw new Error(`demo trial ${plan.code} does not pass its activation checks: ${current.activation.problems.join(' ')}`);
     this.logger.log(`protocol of ${plan.code} loaded`);
     return true;

@@ -23,6 +23,7 @@ export function presentLevel(row: FactorLevel): FactorLevelShape {
 export function presentFactor(row: TrialFactor, design: TrialDesign, index: number): Factor {
   return {
     id: row.id,
+    version: row.version,
     position: row.position,
     name: row.name,
     appliedTo: appliedUnitOf(design, index),

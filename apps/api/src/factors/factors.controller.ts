@@ -1,7 +1,8 @@
 import { Body, Controller, Get, Put } from '@nestjs/common';
-import { ApiConflictResponse, ApiOkResponse, ApiTags, ApiUnprocessableEntityResponse } from '@nestjs/swagger';
+import { ApiOkResponse, ApiTags, ApiUnprocessableEntityResponse } from '@nestjs/swagger';
 import type { AuthUser, TrialAccessContext } from '../auth/auth-user';
 import { AnyTrialMember, TrialAccess } from '../common/decorators/access.decorator';
+import { StaleEditAnswers } from '../common/protocol/edit-version';
 import { CurrentTrialAccess, CurrentUser } from '../common/decorators/current-user.decorator';
 import { FactorsDto } from './dto/factors.dto';
 import { FactorsService } from './factors.service';
@@ -22,7 +23,7 @@ export class FactorsController {
   @Put()
   @TrialAccess('investigator')
   @ApiUnprocessableEntityResponse({ description: 'A number of factors the design does not take, a factor with fewer than two levels, repeated level codes, or a level rate without its unit.' })
-  @ApiConflictResponse({ description: 'The trial is locked, is neither factorial nor split plot, or changing the level codes would clear the layout of a site with observations.' })
+  @StaleEditAnswers([TrialFactorDto], 'the trial is locked, is neither factorial nor split plot, or changing the level codes would clear the layout of a site with observations (problem body).')
   @ApiOkResponse({ type: FactorsReplacedDto, description: 'The factors and the treatments made from every combination of their levels.' })
   replace(@CurrentTrialAccess() access: TrialAccessContext, @CurrentUser() user: AuthUser, @Body() body: FactorsDto) {
     return this.factors.replace(access.trialId, user, body);

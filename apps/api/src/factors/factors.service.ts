@@ -6,6 +6,7 @@ import type { Transaction } from 'sequelize';
 import type { Sequelize } from 'sequelize-typescript';
 import { ActivityService } from '../activity/activity.service';
 import type { AuthUser } from '../auth/auth-user';
+import { refuseStaleEdit } from '../common/protocol/edit-version';
 import { throwIfProblems, type FieldProblem } from '../common/exceptions/field-problems.exception';
 import { ProtocolGateService } from '../common/protocol/protocol-gate.service';
 import { levelIdColumns } from '../treatments/factor-level-columns';
@@ -100,6 +101,7 @@ export class FactorsService {
       const countProblem = factorCountProblem(trial.design, input.factors.length);
       if (countProblem) throwIfProblems([{ field: 'factors', message: countProblem }]);
       const existing = await this.factors.findAll({ where: { trialId }, include: [FactorLevel], order: [['position', 'ASC']], transaction });
+      await this.refuseStale(trial, existing, input);
       const sameCodes =
         existing.length === input.factors.length &&
         existing.every((factor, index) => {
@@ -112,10 +114,26 @@ export class FactorsService {
     });
   }
 
+  /** Each factor stored must be sent with the version it was read at (a factor added at the end has none). */
+  private async refuseStale(trial: Trial, existing: TrialFactor[], input: FactorsDto): Promise<void> {
+    throwIfProblems(
+      existing.flatMap((factor, index) => {
+        const sent = input.factors[index];
+        return sent && sent.version === undefined ? [{ field: `factors[${index}].version`, message: `factors[${index}].version is needed: factor ${factor.name} exists (version ${factor.version})` }] : [];
+      }),
+    );
+    const stale = existing.find((factor, index) => input.factors[index] !== undefined && input.factors[index]!.version !== factor.version);
+    if (!stale) return;
+    const sent = input.factors[existing.indexOf(stale)]!.version as number;
+    await refuseStaleEdit(`factor ${stale.name}`, stale.version, sent, () => this.list(trial.id, trial.design));
+  }
+
   private async updateInPlace(trial: Trial, user: AuthUser, existing: TrialFactor[], input: FactorsDto, transaction: Transaction): Promise<void> {
     const levelsById = new Map<number, FactorLevel>();
     for (const [index, factor] of existing.entries()) {
       factor.name = input.factors[index]!.name.trim();
+      // A change of its levels is a change of the factor: its version moves on.
+      factor.changed('updatedAt', true);
       await factor.save({ transaction });
       const stored = [...(factor.levels ?? [])].sort((x, y) => x.position - y.position);
       for (const [levelIndex, level] of stored.entries()) {
@@ -148,10 +166,12 @@ export class FactorsService {
     const existing = await this.treatments.findAll({ where: { trialId }, transaction });
     const wanted = new Set(combinations.map((c) => c.code.toUpperCase()));
     for (const row of existing) if (!wanted.has(row.code.toUpperCase())) await row.destroy({ transaction });
+    // The new factors count on from the old ones' versions, so an edit read before the change stays stale.
+    const version = Math.max(0, ...(await this.factors.findAll({ where: { trialId }, transaction })).map((row) => row.version)) + 1;
     await this.factors.destroy({ where: { trialId }, transaction });
     const created: FactorLevel[][] = [];
     for (const [index, factor] of input.factors.entries()) {
-      const row = await this.factors.create({ trialId, position: index + 1, name: factor.name.trim() }, { transaction });
+      const row = await this.factors.create({ trialId, position: index + 1, name: factor.name.trim(), version }, { transaction });
       created.push(await this.levels.bulkCreate(factor.levels.map((level, position) => ({ factorId: row.id, ...levelValues(level), position: position + 1 })), { transaction }));
     }
     const kept = new Map(existing.filter((row) => wanted.has(row.code.toUpperCase())).map((row) => [row.code.toUpperCase(), row]));

@@ -1,5 +1,5 @@
-import { Body, Controller, Get, Param, ParseIntPipe, Patch, Post, Query, UseFilters } from '@nestjs/common';
-import { ApiConflictResponse, ApiExtraModels, getSchemaPath, ApiCreatedResponse, ApiOkResponse, ApiTags, ApiUnprocessableEntityResponse } from '@nestjs/swagger';
+import { Body, Controller, Get, Param, ParseIntPipe, Patch, Post, Query } from '@nestjs/common';
+import { ApiCreatedResponse, ApiOkResponse, ApiTags, ApiUnprocessableEntityResponse } from '@nestjs/swagger';
 import type { AuthUser, TrialAccessContext } from '../auth/auth-user';
 import { AnyTrialMember, TrialAccess } from '../common/decorators/access.decorator';
 import { CurrentTrialAccess, CurrentUser } from '../common/decorators/current-user.decorator';
@@ -7,17 +7,11 @@ import { CreateObservationDto } from './dto/create-observation.dto';
 import { EditObservationDto } from './dto/edit-observation.dto';
 import { ObservationQueryDto } from './dto/observation-query.dto';
 import { LedgerService } from './ledger.service';
-import { ObservationConflictFilter } from './observation-conflict.filter';
-import { ProblemDto } from '../common/dto/problem.dto';
-import { ObservationConflictDto, ObservationHistoryEntryDto, RecordedObservationDto } from './dto/recorded-observation.dto';
+import { StaleEditAnswers } from '../common/protocol/edit-version';
+import { ObservationHistoryEntryDto, RecordedObservationDto } from './dto/recorded-observation.dto';
 
-// A stale version answers with the stored value; a locked trial with the usual problem body.
-const observationConflict = { anyOf: [{ $ref: getSchemaPath(ObservationConflictDto) }, { $ref: getSchemaPath(ProblemDto) }] };
-
-@ApiExtraModels(ObservationConflictDto, ProblemDto)
 @ApiTags('ledger')
 @Controller('trials/:trialId/observations')
-@UseFilters(ObservationConflictFilter)
 export class LedgerController {
   constructor(private readonly ledger: LedgerService) {}
 
@@ -31,7 +25,7 @@ export class LedgerController {
   @Post()
   @TrialAccess('investigator', 'collaborator')
   @ApiCreatedResponse({ type: RecordedObservationDto, description: 'Observation: the value recorded (version 1).' })
-  @ApiConflictResponse({ schema: observationConflict, description: 'The trial is locked, or the cell already has a value (ObservationConflict with the current value).' })
+  @StaleEditAnswers(RecordedObservationDto, 'the cell already has a value (also with the current value), or the trial is locked (problem body).')
   @ApiUnprocessableEntityResponse({ description: 'The value is refused as Intake would refuse it, or it needs acceptWarnings.' })
   create(@CurrentTrialAccess() access: TrialAccessContext, @CurrentUser() user: AuthUser, @Body() body: CreateObservationDto) {
     return this.ledger.create(access, user, body);
@@ -40,7 +34,7 @@ export class LedgerController {
   @Patch(':observationId')
   @TrialAccess('investigator', 'collaborator')
   @ApiOkResponse({ type: RecordedObservationDto, description: 'Observation after the save (version + 1; unchanged when nothing differs).' })
-  @ApiConflictResponse({ schema: observationConflict, description: 'The trial is locked, or the version is stale: ObservationConflict with the current value; nothing was written.' })
+  @StaleEditAnswers(RecordedObservationDto, 'the trial is locked (problem body).')
   @ApiUnprocessableEntityResponse({ description: 'The value is refused as Intake would refuse it, or it needs acceptWarnings.' })
   edit(
     @CurrentTrialAccess() access: TrialAccessContext,

@@ -1,12 +1,5 @@
 import type { Observation } from '@friable/contracts';
-import { ConflictException } from '@nestjs/common';
+import { StaleEditException } from '../common/protocol/edit-version';
 
 /** An edit from a stale version (or a new value for a cell that has one): nothing written; carries the stored value. */
-export class ObservationConflictException extends ConflictException {
-  constructor(
-    message: string,
-    readonly current: Observation,
-  ) {
-    super(message);
-  }
-}
+export class ObservationConflictException extends StaleEditException<Observation> {}

@@ -8,6 +8,7 @@ import type { MeasureRow } from './models/measure.model';
 export function presentMeasure(row: MeasureRow): Measure {
   return {
     id: row.id,
+    version: row.version,
     code: row.code,
     name: row.name,
     unit: row.unit,
@@ -25,7 +26,7 @@ export function presentMeasure(row: MeasureRow): Measure {
   };
 }
 
-type MeasureFields = Omit<Measure, 'id' | 'code' | 'name' | 'decimals' | 'higherIsBetter' | 'position'>;
+type MeasureFields = Omit<Measure, 'id' | 'version' | 'code' | 'name' | 'decimals' | 'higherIsBetter' | 'position'>;
 
 function orderProblem(low: number | null, high: number | null, lowField: string, highField: string): FieldProblem[] {
   return low !== null && high !== null && low > high ? [{ field: lowField, message: `${lowField} must not be above ${highField}` }] : [];

@@ -2,6 +2,7 @@ import { Body, Controller, Delete, Get, HttpCode, Param, ParseIntPipe, Patch, Po
 import { ApiConflictResponse, ApiCreatedResponse, ApiNoContentResponse, ApiOkResponse, ApiTags, ApiUnprocessableEntityResponse } from '@nestjs/swagger';
 import type { AuthUser, TrialAccessContext } from '../auth/auth-user';
 import { AnyTrialMember, TrialAccess } from '../common/decorators/access.decorator';
+import { StaleEditAnswers } from '../common/protocol/edit-version';
 import { CurrentTrialAccess, CurrentUser } from '../common/decorators/current-user.decorator';
 import { CreateMeasureDto } from './dto/create-measure.dto';
 import { UpdateMeasureDto } from './dto/update-measure.dto';
@@ -32,7 +33,7 @@ export class MeasuresController {
   @Patch(':id')
   @TrialAccess('investigator')
   @ApiUnprocessableEntityResponse({ description: 'A field is wrong; nothing written.' })
-  @ApiConflictResponse({ description: 'The trial is locked.' })
+  @StaleEditAnswers(MeasureDto, 'the trial is locked, or a change of meaning of a measure with observations (problem body).')
   @ApiOkResponse({ type: MeasureDto, description: 'The measure after the change.' })
   update(@CurrentTrialAccess() access: TrialAccessContext, @CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number, @Body() body: UpdateMeasureDto) {
     return this.measures.update(access.trialId, id, user, body);

@@ -5,6 +5,7 @@ import type { Transaction } from 'sequelize';
 import type { Sequelize } from 'sequelize-typescript';
 import { ActivityService } from '../activity/activity.service';
 import { definedOnly } from '../common/defined-only';
+import { changeDetails, refuseStaleEdit } from '../common/protocol/edit-version';
 import type { AuthUser } from '../auth/auth-user';
 import { takenInTrial } from '../common/taken-in-trial';
 import { throwIfProblems } from '../common/exceptions/field-problems.exception';
@@ -81,29 +82,32 @@ export class MeasuresService {
   }
 
   async update(trialId: number, id: number, user: AuthUser, sent: UpdateMeasureDto): Promise<Measure> {
-    const input = definedOnly(sent);
+    const { version, ...input } = definedOnly(sent);
     return this.sequelize.transaction(async (transaction) => {
       await this.gate.openForWrite(trialId, transaction);
       const row = await this.find(trialId, id, transaction);
+      await refuseStaleEdit(`measure ${row.code}`, row.version, sent.version, () => presentMeasure(row));
       if (input.code !== undefined && input.code !== row.code) await this.checkCode(trialId, input.code, row.id, transaction);
       const before = presentMeasure(row);
       const merged = { ...before, ...input };
       throwIfProblems(measureProblems(merged));
-      const changed = (Object.keys(input) as Array<keyof UpdateMeasureDto>).filter((key) => input[key] !== before[key]);
+      const changed = (Object.keys(input) as Array<keyof typeof input>).filter((key) => input[key] !== before[key]);
       const meaning = changed.filter((key) => (MEANING_FIELDS as readonly string[]).includes(key));
       if (meaning.length) {
         await this.gate.refuseIfObserved(trialId, 'all', `Changing the ${meaning.join(' and ')} of measure ${row.code}`, transaction);
       }
       row.set({ ...input, ...(input.name ? { name: input.name.trim() } : {}) });
       await row.save({ transaction });
+      const after = presentMeasure(row);
+      const change = changeDetails(before, after, Object.keys(input) as Array<keyof typeof input>);
       await this.activity.record(transaction, {
         trialId,
         userId: user.id,
         kind: 'measure.updated',
-        summary: `Changed measure ${row.code}${changed.length ? `: ${changed.join(', ')}` : ''}.`,
-        details: { measureId: row.id, changed },
+        summary: `Changed measure ${row.code}${change.changed.length ? `: ${change.changed.join(', ')}` : ''}.`,
+        details: { measureId: row.id, version: { from: version, to: after.version }, ...change },
       });
-      return presentMeasure(row);
+      return after;
     });
   }
 
@@ -120,13 +124,15 @@ export class MeasuresService {
           throw new ConflictException(`Measure ${row.code} is the only measure of round ${round?.label ?? link.roundId}; give that round another measure or delete it first.`);
         }
       }
+      // Archived, not deleted (a paranoid model): the row stays for the record; the rounds no longer list it.
+      await this.roundMeasures.destroy({ where: { measureId: id }, transaction });
       await row.destroy({ transaction });
       await this.activity.record(transaction, {
         trialId,
         userId: user.id,
-        kind: 'measure.deleted',
-        summary: `Deleted measure ${row.code} (${row.name}).`,
-        details: { measureId: row.id, code: row.code },
+        kind: 'measure.archived',
+        summary: `Archived measure ${row.code} (${row.name}); it leaves the protocol and stays on record.`,
+        details: { measureId: row.id, code: row.code, archived: presentMeasure(row), roundIds: links.map((link) => link.roundId) },
       });
     });
   }

@@ -44,10 +44,10 @@ const DUE_SQL = `
          t.safety_notes AS safetyNotes, s.id AS siteId, s.name AS siteName, u.id AS userId, u.name AS userName, u.email AS email
     FROM assessment_rounds r
     JOIN trials t ON t.id = r.trial_id AND t.status = 'active' AND t.start_date IS NOT NULL
-    JOIN sites s ON s.trial_id = t.id
+    JOIN sites s ON s.trial_id = t.id AND s.deleted_at IS NULL
     JOIN trial_memberships m ON m.trial_id = t.id AND m.role = 'collaborator' AND m.site_id = s.id
     JOIN users u ON u.id = m.user_id AND u.is_active = 1 AND u.email_reminders = 1
-   WHERE DATE_ADD(t.start_date, INTERVAL r.day_offset DAY) = :dueDate
+   WHERE DATE_ADD(t.start_date, INTERVAL r.day_offset DAY) = :dueDate AND r.deleted_at IS NULL
      AND NOT EXISTS (SELECT 1 FROM round_reminders rr
                       WHERE rr.round_id = r.id AND rr.site_id = s.id AND rr.user_id = u.id AND rr.due_date = :dueDate)
    ORDER BY u.id, r.id, s.name`;
@@ -144,7 +144,7 @@ export class RemindersService implements OnApplicationBootstrap {
     const byRound = new Map<number, string[]>();
     if (!roundIds.length) return byRound;
     const rows = await this.sequelize.query<{ roundId: number; name: string }>(
-      `SELECT rm.round_id AS roundId, ms.name AS name FROM round_measures rm JOIN measures ms ON ms.id = rm.measure_id
+      `SELECT rm.round_id AS roundId, ms.name AS name FROM round_measures rm JOIN measures ms ON ms.id = rm.measure_id AND ms.deleted_at IS NULL
         WHERE rm.round_id IN (:roundIds) ORDER BY ms.position, ms.id`,
       { replacements: { roundIds }, type: QueryTypes.SELECT },
     );

@@ -13,6 +13,7 @@ export function dueDate(startDate: string | null, dayOffset: number): string | n
 export function presentRound(row: AssessmentRoundRow, startDate: string | null): AssessmentRound {
   return {
     id: row.id,
+    version: row.version,
     label: row.label,
     dayOffset: row.dayOffset,
     dueDate: dueDate(startDate, row.dayOffset),

@@ -2,6 +2,7 @@ import { Body, Controller, Delete, Get, HttpCode, Param, ParseIntPipe, Patch, Po
 import { ApiConflictResponse, ApiCreatedResponse, ApiNoContentResponse, ApiOkResponse, ApiTags, ApiUnprocessableEntityResponse } from '@nestjs/swagger';
 import type { AuthUser, TrialAccessContext } from '../auth/auth-user';
 import { AnyTrialMember, TrialAccess } from '../common/decorators/access.decorator';
+import { StaleEditAnswers } from '../common/protocol/edit-version';
 import { CurrentTrialAccess, CurrentUser } from '../common/decorators/current-user.decorator';
 import { CreateRoundDto } from './dto/create-round.dto';
 import { UpdateRoundDto } from './dto/update-round.dto';
@@ -32,7 +33,7 @@ export class RoundsController {
   @Patch(':id')
   @TrialAccess('investigator')
   @ApiUnprocessableEntityResponse({ description: 'A field is wrong; nothing written.' })
-  @ApiConflictResponse({ description: 'The trial is locked.' })
+  @StaleEditAnswers(AssessmentRoundDto, 'the trial is locked (problem body).')
   @ApiOkResponse({ type: AssessmentRoundDto, description: 'The round after the change.' })
   update(@CurrentTrialAccess() access: TrialAccessContext, @CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number, @Body() body: UpdateRoundDto) {
     return this.rounds.update(access.trialId, id, user, body);

@@ -5,6 +5,7 @@ import type { Transaction } from 'sequelize';
 import type { Sequelize } from 'sequelize-typescript';
 import { ActivityService } from '../activity/activity.service';
 import { definedOnly } from '../common/defined-only';
+import { changeDetails, refuseStaleEdit } from '../common/protocol/edit-version';
 import type { AuthUser } from '../auth/auth-user';
 import { throwIfProblems, type FieldProblem } from '../common/exceptions/field-problems.exception';
 import { takenInTrial } from '../common/taken-in-trial';
@@ -46,7 +47,7 @@ export class RoundsService {
     return presentRound(row, trial.startDate);
   }
 
-  private async check(trialId: number, input: UpdateRoundDto, exceptId: number | null, transaction: Transaction): Promise<void> {
+  private async check(trialId: number, input: Partial<CreateRoundDto>, exceptId: number | null, transaction: Transaction): Promise<void> {
     const problems: FieldProblem[] = [];
     const taken = input.label === undefined ? null : await takenInTrial(this.rounds, trialId, 'label', input.label.trim(), exceptId, transaction, 'round');
     if (taken) problems.push(taken);
@@ -81,23 +82,29 @@ export class RoundsService {
   }
 
   async update(trialId: number, id: number, user: AuthUser, sent: UpdateRoundDto): Promise<AssessmentRound> {
-    const input = definedOnly(sent);
+    const { version, ...input } = definedOnly(sent);
     return this.sequelize.transaction(async (transaction) => {
       const trial = await this.gate.openForWrite(trialId, transaction);
       const before = await this.one(trial, id, transaction);
+      await refuseStaleEdit(`round ${before.label}`, before.version, sent.version, () => before);
       await this.check(trialId, input, id, transaction);
-      if (input.label !== undefined || input.dayOffset !== undefined) {
-        await this.rounds.update({ label: input.label?.trim() ?? before.label, dayOffset: input.dayOffset ?? before.dayOffset }, { where: { id }, transaction });
+      const row = (await this.rounds.findByPk(id, { transaction })) as AssessmentRoundRow;
+      row.set({ label: input.label?.trim() ?? before.label, dayOffset: input.dayOffset ?? before.dayOffset });
+      if (input.measureIds !== undefined) {
+        await this.link(id, input.measureIds, transaction);
+        row.changed('updatedAt', true);
       }
-      if (input.measureIds !== undefined) await this.link(id, input.measureIds, transaction);
+      await row.save({ transaction });
+      const after = await this.one(trial, id, transaction);
+      const change = changeDetails(before, after, Object.keys(input) as Array<keyof typeof input>);
       await this.activity.record(transaction, {
         trialId,
         userId: user.id,
         kind: 'round.updated',
-        summary: `Changed assessment round ${input.label ?? before.label}: ${Object.keys(input).join(', ') || 'nothing'}.`,
-        details: { roundId: id, before, changes: input },
+        summary: `Changed assessment round ${after.label}: ${change.changed.join(', ') || 'nothing'}.`,
+        details: { roundId: id, version: { from: version, to: after.version }, ...change },
       });
-      return this.one(trial, id, transaction);
+      return after;
     });
   }
 
@@ -106,13 +113,14 @@ export class RoundsService {
       const trial = await this.gate.openForWrite(trialId, transaction);
       const before = await this.one(trial, id, transaction);
       await this.gate.refuseIfObserved(trialId, 'all', `Deleting round ${before.label}`, transaction);
+      // Archived, not deleted (a paranoid model): the round and its measure list stay for the record.
       await this.rounds.destroy({ where: { id }, transaction });
       await this.activity.record(transaction, {
         trialId,
         userId: user.id,
-        kind: 'round.deleted',
-        summary: `Deleted assessment round ${before.label}.`,
-        details: { roundId: id },
+        kind: 'round.archived',
+        summary: `Archived assessment round ${before.label}; it leaves the protocol and stays on record.`,
+        details: { roundId: id, archived: before },
       });
     });
   }

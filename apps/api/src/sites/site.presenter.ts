@@ -60,6 +60,7 @@ export function presentSite(row: SiteRow, context: SiteContext): Site {
   const geometry = siteGeometry(row);
   return {
     id: row.id,
+    version: row.version,
     name: row.name,
     location: row.location,
     soilDescription: row.soilDescription,

@@ -2,6 +2,7 @@ import { Body, Controller, Delete, Get, HttpCode, Param, ParseIntPipe, Patch, Po
 import { ApiConflictResponse, ApiCreatedResponse, ApiNoContentResponse, ApiOkResponse, ApiTags, ApiUnprocessableEntityResponse } from '@nestjs/swagger';
 import type { AuthUser, TrialAccessContext } from '../auth/auth-user';
 import { AnyTrialMember, TrialAccess } from '../common/decorators/access.decorator';
+import { StaleEditAnswers } from '../common/protocol/edit-version';
 import { CurrentTrialAccess, CurrentUser } from '../common/decorators/current-user.decorator';
 import { CreateSiteDto } from './dto/create-site.dto';
 import { RandomizeSiteDto } from './dto/randomize-site.dto';
@@ -33,7 +34,7 @@ export class SitesController {
   @Patch(':id')
   @TrialAccess('investigator')
   @ApiUnprocessableEntityResponse({ description: 'A field is wrong; nothing written.' })
-  @ApiConflictResponse({ description: 'The trial is locked, or a block change would touch a site with observations.' })
+  @StaleEditAnswers(SiteDto, 'the trial is locked, or a block change would touch a site with observations (problem body).')
   @ApiOkResponse({ type: SiteDto, description: 'The site after the change (its layout cleared when the blocks changed).' })
   update(@CurrentTrialAccess() access: TrialAccessContext, @CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number, @Body() body: UpdateSiteDto) {
     return this.sites.update(access.trialId, id, user, body);

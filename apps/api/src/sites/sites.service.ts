@@ -6,6 +6,7 @@ import { fn, col, type Transaction } from 'sequelize';
 import type { Sequelize } from 'sequelize-typescript';
 import { ActivityService } from '../activity/activity.service';
 import { definedOnly } from '../common/defined-only';
+import { changeDetails, refuseStaleEdit } from '../common/protocol/edit-version';
 import type { AuthUser } from '../auth/auth-user';
 import { throwIfProblems, type FieldProblem } from '../common/exceptions/field-problems.exception';
 import { takenInTrial } from '../common/taken-in-trial';
@@ -97,7 +98,7 @@ export class SitesService {
     return free as string;
   }
 
-  private async check(trialId: number, input: UpdateSiteDto, exceptId: number | null, transaction: Transaction): Promise<void> {
+  private async check(trialId: number, input: Partial<CreateSiteDto>, exceptId: number | null, transaction: Transaction): Promise<void> {
     const problems: FieldProblem[] = [];
     for (const field of ['name', 'labelPrefix'] as const) {
       const value = input[field]?.trim();
@@ -150,13 +151,14 @@ export class SitesService {
   }
 
   async update(trialId: number, id: number, user: AuthUser, sent: UpdateSiteDto): Promise<Site> {
-    const input = definedOnly(sent);
+    const { version, ...input } = definedOnly(sent);
     return this.sequelize.transaction(async (transaction) => {
       await this.gate.openForWrite(trialId, transaction);
       const row = await this.find(trialId, id, transaction);
+      await refuseStaleEdit(`site ${row.name}`, row.version, sent.version, () => this.one(trialId, id, transaction));
+      const before = await this.one(trialId, id, transaction);
       await this.check(trialId, input, id, transaction);
       throwIfProblems(geometryProblems({ ...siteGeometry(row), ...input }));
-      const changed = Object.keys(input);
       if (input.blocks !== undefined && input.blocks !== row.blocks) {
         await this.gate.clearLayouts(trialId, [id], { userId: user.id, what: `Changing the blocks of ${row.name} from ${row.blocks} to ${input.blocks}` }, transaction);
         await row.reload({ transaction });
@@ -166,15 +168,17 @@ export class SitesService {
       }
       row.set({ ...input, ...(input.name ? { name: input.name.trim() } : {}) });
       await row.save({ transaction });
+      const after = await this.one(trialId, id, transaction);
+      const change = changeDetails(before, after, Object.keys(input) as Array<keyof typeof input>);
       await this.activity.record(transaction, {
         trialId,
         userId: user.id,
         kind: 'site.updated',
         siteId: id,
-        summary: `Changed site ${row.name}: ${changed.join(', ') || 'nothing'}.`,
-        details: { changed },
+        summary: `Changed site ${row.name}: ${change.changed.join(', ') || 'nothing'}.`,
+        details: { version: { from: version, to: after.version }, ...change },
       });
-      return this.one(trialId, id, transaction);
+      return after;
     });
   }
 
@@ -182,15 +186,18 @@ export class SitesService {
     await this.sequelize.transaction(async (transaction) => {
       await this.gate.openForWrite(trialId, transaction);
       const row = await this.find(trialId, id, transaction);
-      await this.gate.refuseIfObserved(trialId, [id], `Deleting site ${row.name}`, transaction);
+      const archived = await this.one(trialId, id, transaction);
+      // An archived site keeps no layout (refused when it holds observations), and stays on record.
+      await this.gate.clearLayouts(trialId, [id], { userId: user.id, what: `Deleting site ${row.name}` }, transaction);
+      await row.reload({ transaction });
       await row.destroy({ transaction });
       await this.activity.record(transaction, {
         trialId,
         userId: user.id,
-        kind: 'site.deleted',
+        kind: 'site.archived',
         siteId: id,
-        summary: `Deleted site ${row.name}.`,
-        details: { name: row.name },
+        summary: `Archived site ${row.name}; it leaves the protocol and stays on record.`,
+        details: { name: row.name, archived },
       });
     });
   }

@@ -26,6 +26,7 @@ export function presentMaterialRate(row: RateColumns): MaterialRate {
 export function presentTreatment(row: TreatmentRow): Treatment {
   return {
     id: row.id,
+    version: row.version,
     code: row.code,
     name: row.name,
     description: row.description,

@@ -6,6 +6,7 @@ import type { Sequelize } from 'sequelize-typescript';
 import type { Transaction } from 'sequelize';
 import { ActivityService } from '../activity/activity.service';
 import { definedOnly } from '../common/defined-only';
+import { changeDetails, refuseStaleEdit } from '../common/protocol/edit-version';
 import type { AuthUser } from '../auth/auth-user';
 import { takenInTrial } from '../common/taken-in-trial';
 import { throwIfProblems } from '../common/exceptions/field-problems.exception';
@@ -88,25 +89,27 @@ export class TreatmentsService {
   }
 
   async update(trialId: number, id: number, user: AuthUser, sent: UpdateTreatmentDto): Promise<Treatment> {
-    const input = definedOnly(sent);
+    const { version, ...input } = definedOnly(sent);
     return this.sequelize.transaction(async (transaction) => {
       await this.gate.openForWrite(trialId, transaction);
       const row = await this.find(trialId, id, transaction);
+      await refuseStaleEdit(`treatment ${row.code}`, row.version, sent.version, () => presentTreatment(row));
       if (input.code !== undefined && input.code !== row.code) await this.checkCode(trialId, input.code, row.id, transaction);
       const before = presentTreatment(row);
       const merged = { ...before, ...input, name: input.name?.trim() ?? before.name };
       throwIfProblems(treatmentRateProblems(merged));
-      const changed = (Object.keys(input) as Array<keyof UpdateTreatmentDto>).filter((key) => input[key] !== before[key]);
       row.set({ ...input, name: merged.name });
       await row.save({ transaction });
+      const after = presentTreatment(row);
+      const change = changeDetails(before, after, Object.keys(input) as Array<keyof typeof input>);
       await this.activity.record(transaction, {
         trialId,
         userId: user.id,
         kind: 'treatment.updated',
-        summary: `Changed treatment ${row.code}${changed.length ? `: ${changed.join(', ')}` : ''}.`,
-        details: { treatmentId: row.id, changed },
+        summary: `Changed treatment ${row.code}${change.changed.length ? `: ${change.changed.join(', ')}` : ''}.`,
+        details: { treatmentId: row.id, version: { from: version, to: after.version }, ...change },
       });
-      return presentTreatment(row);
+      return after;
     });
   }
 
@@ -116,13 +119,14 @@ export class TreatmentsService {
       if (isFactorDesign(trial.design)) throw new ConflictException(factorialRefusal);
       const row = await this.find(trialId, id, transaction);
       await this.gate.clearLayouts(trialId, 'all', { userId: user.id, what: `Deleting treatment ${row.code}` }, transaction);
+      // Archived, not deleted (a paranoid model): the row stays for the record.
       await row.destroy({ transaction });
       await this.activity.record(transaction, {
         trialId,
         userId: user.id,
-        kind: 'treatment.deleted',
-        summary: `Deleted treatment ${row.code} (${row.name}).`,
-        details: { treatmentId: row.id, code: row.code },
+        kind: 'treatment.archived',
+        summary: `Archived treatment ${row.code} (${row.name}); it leaves the protocol and stays on record.`,
+        details: { treatmentId: row.id, code: row.code, archived: presentTreatment(row) },
       });
     });
   }

@@ -2,6 +2,7 @@ import { Body, Controller, Get, Patch, Post } from '@nestjs/common';
 import { ApiConflictResponse, ApiCreatedResponse, ApiOkResponse, ApiTags, ApiUnprocessableEntityResponse } from '@nestjs/swagger';
 import type { AuthUser, TrialAccessContext } from '../auth/auth-user';
 import { AnyTrialMember, SignedIn, TrialAccess } from '../common/decorators/access.decorator';
+import { StaleEditAnswers } from '../common/protocol/edit-version';
 import { CurrentTrialAccess, CurrentUser } from '../common/decorators/current-user.decorator';
 import { CreateTrialDto } from './dto/create-trial.dto';
 import { UpdateTrialDto } from './dto/update-trial.dto';
@@ -40,7 +41,7 @@ export class TrialsController {
   @TrialAccess('investigator')
   @ApiOkResponse({ type: TrialDetailDto, description: 'TrialDetail after the change.' })
   @ApiUnprocessableEntityResponse({ description: 'A field is wrong, or (status active) the activation checks fail: errors lists each problem.' })
-  @ApiConflictResponse({ description: 'The trial is locked, or the status change is not allowed.' })
+  @StaleEditAnswers(TrialDetailDto, 'the trial is locked, or the status change is not allowed (problem body).')
   update(@CurrentTrialAccess() access: TrialAccessContext, @CurrentUser() user: AuthUser, @Body() body: UpdateTrialDto) {
     return this.trials.update(access, body, user);
   }

@@ -7,6 +7,7 @@ import { QueryTypes, type Transaction } from 'sequelize';
 import type { Sequelize } from 'sequelize-typescript';
 import { ActivityService } from '../activity/activity.service';
 import { definedOnly } from '../common/defined-only';
+import { changeDetails, refuseStaleEdit } from '../common/protocol/edit-version';
 import type { AuthUser, TrialAccessContext } from '../auth/auth-user';
 import { FieldProblemsException } from '../common/exceptions/field-problems.exception';
 import { TrialLockedException } from '../common/exceptions/trial-locked.exception';
@@ -109,6 +110,7 @@ export class TrialsService {
     ];
     return {
       id: trial.id,
+      version: trial.version,
       code: trial.code,
       title: trial.title,
       question: trial.question,
@@ -133,10 +135,11 @@ export class TrialsService {
 
   /** Changes the protocol's own fields and, last, the status (draft → active needs every activation check). */
   async update(access: TrialAccessContext, sent: UpdateTrialDto, user: AuthUser): Promise<TrialDetail> {
-    const input = definedOnly(sent);
+    const { version, ...input } = definedOnly(sent);
     return this.sequelize.transaction(async (transaction) => {
       const trial = await this.trials.findByPk(access.trialId, { transaction, lock: transaction.LOCK.UPDATE });
       if (!trial) throw new NotFoundException('No such trial.');
+      await refuseStaleEdit(`trial ${trial.code}`, trial.version, sent.version, () => this.get(access, transaction));
       const { status, reason, ...fields } = input;
       const fieldNames = (Object.keys(fields) as Array<keyof typeof fields>).filter((key) => fields[key] !== undefined);
       if (fieldNames.length) {
@@ -147,6 +150,7 @@ export class TrialsService {
           // a one-factor design has none.
           if (isFactorDesign(trial.design) && !isFactorDesign(fields.design)) await this.factors.destroy({ where: { trialId: trial.id }, transaction });
         }
+        const before = { ...(trial.get({ plain: true }) as Record<string, unknown>) };
         trial.set({
           ...fields,
           ...(fields.title !== undefined ? { title: fields.title.trim() } : {}),
@@ -161,7 +165,7 @@ export class TrialsService {
           userId: user.id,
           kind: 'trial.updated',
           summary: `Changed the trial's ${fieldNames.join(', ')}.`,
-          details: { changed: fieldNames },
+          details: { version: { from: version, to: trial.version }, ...changeDetails(before, trial.get({ plain: true }) as Record<string, unknown>, fieldNames) },
         });
       }
       if (status !== undefined && status !== trial.status) await this.changeStatus(trial, status, access, user, transaction, reason?.trim() || null);

@@ -10,6 +10,8 @@ export class ApiError extends Error {
     readonly status: number,
     message: string,
     readonly details: ProblemBody['errors'] = [],
+    /** A 409 for a stale version: the record as it is stored now (see lib/edit-conflict.ts). */
+    readonly current?: unknown,
   ) {
     super(message);
   }
@@ -33,9 +35,9 @@ interface Answer<T> {
 
 /** The error for an answer that was not a success, in the server's own words when it gave any. */
 export function problemOf(response: Pick<Response, 'status' | 'statusText'>, body: unknown): ApiError {
-  const problem = (typeof body === 'object' && body !== null ? body : {}) as Partial<ProblemBody>;
+  const problem = (typeof body === 'object' && body !== null ? body : {}) as Partial<ProblemBody> & { current?: unknown };
   const message = problem.message || `The server answered ${response.status} ${response.statusText || ''}`.trim();
-  return new ApiError(response.status, message, problem.errors ?? []);
+  return new ApiError(response.status, message, problem.errors ?? [], problem.current);
 }
 
 /**

@@ -1399,6 +1399,14 @@ export interface components {
          * @enum {string}
          */
         AppliedUnit: "plot" | "whole plot" | "sub plot" | "sub-sub plot";
+        AssessmentRoundConflict: {
+            /** @description The record as it is stored now, with its version. */
+            current: components["schemas"]["AssessmentRoundDto"];
+            error: string;
+            message: string;
+            /** @enum {number} */
+            statusCode: 409;
+        };
         AssessmentRoundDto: {
             dayOffset: number;
             /**
@@ -1409,6 +1417,8 @@ export interface components {
             id: number;
             label: string;
             measureIds: number[];
+            /** @description Bumped by every save; send it back with each edit: another one answers 409 with the current record. */
+            version: number;
         };
         BartlettDto: {
             p: number;
@@ -2062,6 +2072,11 @@ export interface components {
             levels: components["schemas"]["FactorLevelDto"][];
             /** @example Gypsum */
             name: string;
+            /**
+             * @description The version of the factor stored at this place, as GET answered it; needed for every factor that exists. Another one answers 409 with the current factors.
+             * @example 1
+             */
+            version?: number;
         };
         FactorialMeanDto: {
             /** @description With a transform: the mean back on the original scale. */
@@ -2513,6 +2528,14 @@ export interface components {
             /** @description Why a round with data could not be analysed (the engine's sentence). */
             unavailable?: string;
         };
+        MeasureConflict: {
+            /** @description The record as it is stored now, with its version. */
+            current: components["schemas"]["MeasureDto"];
+            error: string;
+            message: string;
+            /** @enum {number} */
+            statusCode: 409;
+        };
         MeasureDto: {
             code: string;
             /** @description Cut-off in the measure's unit (kind 'time-with-cutoff'). */
@@ -2537,6 +2560,8 @@ export interface components {
             scaleMin: number | null;
             /** @description An id from @friable/field's MEASURE_UNITS. */
             unit: string;
+            /** @description Bumped by every save; send it back with each edit: another one answers 409 with the current record. */
+            version: number;
         };
         /** @enum {string} */
         MeasureKind: "continuous" | "count" | "score" | "time-with-cutoff";
@@ -2695,14 +2720,6 @@ export interface components {
             share: number;
             /** @description Time in the measure's unit. */
             time: number;
-        };
-        ObservationConflictDto: {
-            /** @description The value as it is stored now, with its version. */
-            current: components["schemas"]["RecordedObservationDto"];
-            error: string;
-            message: string;
-            /** @enum {number} */
-            statusCode: 409;
         };
         ObservationDto: {
             /**
@@ -3005,6 +3022,14 @@ export interface components {
         };
         /** @enum {string} */
         RateUnitId: "lb/100ft2" | "lb/1000ft2" | "lb/acre" | "g/m2" | "kg/m2" | "kg/ha" | "t/ha" | "ton/acre" | "in" | "cm" | "yd3/1000ft2";
+        RecordedObservationConflict: {
+            /** @description The record as it is stored now, with its version. */
+            current: components["schemas"]["RecordedObservationDto"];
+            error: string;
+            message: string;
+            /** @enum {number} */
+            statusCode: 409;
+        };
         RecordedObservationDto: {
             block: number;
             /** @description Right-censored at valueText (e.g. not drained by the cut-off). */
@@ -3244,6 +3269,14 @@ export interface components {
          * @enum {string}
          */
         SignOffState: "current" | "data-changed";
+        SiteConflict: {
+            /** @description The record as it is stored now, with its version. */
+            current: components["schemas"]["SiteDto"];
+            error: string;
+            message: string;
+            /** @enum {number} */
+            statusCode: 409;
+        };
         SiteCurvesDto: {
             curves: components["schemas"]["CurveDto"][];
             medians: components["schemas"]["MedianTimeDto"][];
@@ -3278,6 +3311,8 @@ export interface components {
             soilVolumeL: number | null;
             /** @description The error strata of the design at this site. */
             strata: components["schemas"]["ErrorStratumDto"][];
+            /** @description Bumped by every save; send it back with each edit: another one answers 409 with the current record. */
+            version: number;
             /** @description Guardrail sentences: fewer than 4 blocks, error df below 12 in any stratum, one treatment. */
             warnings: string[];
             widthM: number | null;
@@ -3395,6 +3430,14 @@ export interface components {
             /** @example 0.3 */
             se: number;
         };
+        TreatmentConflict: {
+            /** @description The record as it is stored now, with its version. */
+            current: components["schemas"]["TreatmentDto"];
+            error: string;
+            message: string;
+            /** @enum {number} */
+            statusCode: 409;
+        };
         TreatmentCountDto: {
             /** @example 12 */
             drained: number;
@@ -3429,9 +3472,19 @@ export interface components {
             rateUnit: components["schemas"]["RateUnitId"] | null;
             /** @description null for an untreated control or a treatment without an applied material. */
             rateValue: number | null;
+            /** @description Bumped by every save; send it back with each edit: another one answers 409 with the current record. */
+            version: number;
         };
         /** @enum {string} */
         TrialDesign: "crd" | "rcbd" | "factorial-crd" | "factorial-rcbd" | "split-plot" | "split-split-plot";
+        TrialDetailConflict: {
+            /** @description The record as it is stored now, with its version. */
+            current: components["schemas"]["TrialDetailDto"];
+            error: string;
+            message: string;
+            /** @enum {number} */
+            statusCode: 409;
+        };
         TrialDetailDto: {
             activation: components["schemas"]["ActivationCheckDto"];
             code: string;
@@ -3456,6 +3509,8 @@ export interface components {
             treatments: components["schemas"]["TreatmentDto"][];
             /** Format: date-time */
             updatedAt: string;
+            /** @description Bumped by every save; send it back with each edit: another one answers 409 with the current record. */
+            version: number;
         };
         TrialFactorDto: {
             /** @description Where the levels go on: every plot, or a split plot's whole plots, sub plots or sub-sub plots. */
@@ -3468,6 +3523,8 @@ export interface components {
              * @enum {number}
              */
             position: 1 | 2 | 3 | 4;
+            /** @description Bumped by every save; send it back with each edit: another one answers 409 with the current record. */
+            version: number;
         };
         TrialFactorLevelDto: {
             /** @description 1 to 6 letters or digits, unique within the factor; treatment codes join the level codes. */
@@ -3491,6 +3548,14 @@ export interface components {
             /** @description null for an untreated control or a treatment without an applied material. */
             rateValue: number | null;
         };
+        TrialFactorListConflict: {
+            /** @description The record as it is stored now, with its version. */
+            current: components["schemas"]["TrialFactorDto"][];
+            error: string;
+            message: string;
+            /** @enum {number} */
+            statusCode: 409;
+        };
         TrialProtocolDto: {
             code: string;
             design: components["schemas"]["TrialDesign"];
@@ -3511,6 +3576,8 @@ export interface components {
             treatments: components["schemas"]["TreatmentDto"][];
             /** Format: date-time */
             updatedAt: string;
+            /** @description Bumped by every save; send it back with each edit: another one answers 409 with the current record. */
+            version: number;
         };
         TrialReportDto: {
             /** @description Every caution of the report, each sentence naming its measure. */
@@ -3579,6 +3646,11 @@ export interface components {
              * @enum {string}
              */
             unit?: "s" | "min" | "h" | "mm" | "cm" | "m" | "in" | "ft" | "mL" | "L" | "gal" | "ft3" | "yd3" | "g" | "kg" | "oz" | "lb" | "m2" | "ft2" | "kPa" | "MPa" | "psi" | "kgf/cm2" | "tsf" | "mm/h" | "in/h" | "g/cm3" | "lb/ft3" | "dS/m" | "mS/cm" | "mmho/cm" | "µS/cm" | "score" | "count" | "%" | "ratio";
+            /**
+             * @description The version the editor saw (from the GET answer); another one answers 409 with the current record.
+             * @example 1
+             */
+            version: number;
         };
         UpdateMemberDto: {
             /** @description The one role the person holds on the trial from now on. */
@@ -3596,6 +3668,11 @@ export interface components {
             label?: string;
             /** @description The measures taken in this round (at least one). */
             measureIds?: number[];
+            /**
+             * @description The version the editor saw (from the GET answer); another one answers 409 with the current record.
+             * @example 1
+             */
+            version: number;
         };
         UpdateSiteDto: {
             /**
@@ -3623,6 +3700,11 @@ export interface components {
             soilDescription?: string | null;
             /** @description Soil volume per container, for rates per soil volume. */
             soilVolumeL?: number | null;
+            /**
+             * @description The version the editor saw (from the GET answer); another one answers 409 with the current record.
+             * @example 1
+             */
+            version: number;
             /** @description Rectangle plots. */
             widthM?: number | null;
         };
@@ -3666,6 +3748,11 @@ export interface components {
             rateUnit?: "lb/100ft2" | "lb/1000ft2" | "lb/acre" | "g/m2" | "kg/m2" | "kg/ha" | "t/ha" | "ton/acre" | "in" | "cm" | "yd3/1000ft2" | null;
             /** @example 40 */
             rateValue?: number | null;
+            /**
+             * @description The version the editor saw (from the GET answer); another one answers 409 with the current record.
+             * @example 1
+             */
+            version: number;
         };
         UpdateTrialDto: {
             /**
@@ -3694,6 +3781,11 @@ export interface components {
             status?: "draft" | "active" | "locked" | "archived";
             /** @example Gypsum and compost on heavy clay */
             title?: string;
+            /**
+             * @description The version the editor saw (from the GET answer); another one answers 409 with the current record.
+             * @example 1
+             */
+            version: number;
         };
         UpdateUserDto: {
             /** @example robin.ash@example.org */
@@ -4700,13 +4792,13 @@ export interface operations {
                     "application/json": components["schemas"]["ProblemDto"];
                 };
             };
-            /** @description The trial is locked, or the status change is not allowed. */
+            /** @description The version is stale: VersionConflict with the current record, nothing written. Or the trial is locked, or the status change is not allowed (problem body). */
             409: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": components["schemas"]["ProblemDto"];
+                    "application/json": components["schemas"]["TrialDetailConflict"] | components["schemas"]["ProblemDto"];
                 };
             };
             /** @description A field is wrong, or (status active) the activation checks fail: errors lists each problem. */
@@ -5611,13 +5703,13 @@ export interface operations {
                     "application/json": components["schemas"]["ProblemDto"];
                 };
             };
-            /** @description The trial is locked, is neither factorial nor split plot, or changing the level codes would clear the layout of a site with observations. */
+            /** @description The version is stale: VersionConflict with the current record, nothing written. Or the trial is locked, is neither factorial nor split plot, or changing the level codes would clear the layout of a site with observations (problem body). */
             409: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": components["schemas"]["ProblemDto"];
+                    "application/json": components["schemas"]["TrialFactorListConflict"] | components["schemas"]["ProblemDto"];
                 };
             };
             /** @description A number of factors the design does not take, a factor with fewer than two levels, repeated level codes, or a level rate without its unit. */
@@ -6548,13 +6640,13 @@ export interface operations {
                     "application/json": components["schemas"]["ProblemDto"];
                 };
             };
-            /** @description The trial is locked. */
+            /** @description The version is stale: VersionConflict with the current record, nothing written. Or the trial is locked, or a change of meaning of a measure with observations (problem body). */
             409: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": components["schemas"]["ProblemDto"];
+                    "application/json": components["schemas"]["MeasureConflict"] | components["schemas"]["ProblemDto"];
                 };
             };
             /** @description A field is wrong; nothing written. */
@@ -6866,13 +6958,13 @@ export interface operations {
                     "application/json": components["schemas"]["ProblemDto"];
                 };
             };
-            /** @description The trial is locked, or the cell already has a value (ObservationConflict with the current value). */
+            /** @description The version is stale: VersionConflict with the current record, nothing written. Or the cell already has a value (also with the current value), or the trial is locked (problem body). */
             409: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": components["schemas"]["ObservationConflictDto"] | components["schemas"]["ProblemDto"];
+                    "application/json": components["schemas"]["RecordedObservationConflict"] | components["schemas"]["ProblemDto"];
                 };
             };
             /** @description The value is refused as Intake would refuse it, or it needs acceptWarnings. */
@@ -6939,13 +7031,13 @@ export interface operations {
                     "application/json": components["schemas"]["ProblemDto"];
                 };
             };
-            /** @description The trial is locked, or the version is stale: ObservationConflict with the current value; nothing was written. */
+            /** @description The version is stale: VersionConflict with the current record, nothing written. Or the trial is locked (problem body). */
             409: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": components["schemas"]["ObservationConflictDto"] | components["schemas"]["ProblemDto"];
+                    "application/json": components["schemas"]["RecordedObservationConflict"] | components["schemas"]["ProblemDto"];
                 };
             };
             /** @description The value is refused as Intake would refuse it, or it needs acceptWarnings. */
@@ -7547,13 +7639,13 @@ export interface operations {
                     "application/json": components["schemas"]["ProblemDto"];
                 };
             };
-            /** @description The trial is locked. */
+            /** @description The version is stale: VersionConflict with the current record, nothing written. Or the trial is locked (problem body). */
             409: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": components["schemas"]["ProblemDto"];
+                    "application/json": components["schemas"]["AssessmentRoundConflict"] | components["schemas"]["ProblemDto"];
                 };
             };
             /** @description A field is wrong; nothing written. */
@@ -7800,13 +7892,13 @@ export interface operations {
                     "application/json": components["schemas"]["ProblemDto"];
                 };
             };
-            /** @description The trial is locked, or a block change would touch a site with observations. */
+            /** @description The version is stale: VersionConflict with the current record, nothing written. Or the trial is locked, or a block change would touch a site with observations (problem body). */
             409: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": components["schemas"]["ProblemDto"];
+                    "application/json": components["schemas"]["SiteConflict"] | components["schemas"]["ProblemDto"];
                 };
             };
             /** @description A field is wrong; nothing written. */
@@ -8289,13 +8381,13 @@ export interface operations {
                     "application/json": components["schemas"]["ProblemDto"];
                 };
             };
-            /** @description The trial is locked. */
+            /** @description The version is stale: VersionConflict with the current record, nothing written. Or the trial is locked (problem body). */
             409: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": components["schemas"]["ProblemDto"];
+                    "application/json": components["schemas"]["TreatmentConflict"] | components["schemas"]["ProblemDto"];
                 };
             };
             /** @description A field is wrong; nothing written. */

@@ -1,6 +1,6 @@
 import { ArgumentsHost, Catch, HttpException, HttpStatus, Logger, type ExceptionFilter } from '@nestjs/common';
 import type { Response } from 'express';
-import { ConnectionError, DatabaseError, UniqueConstraintError, ValidationError as SequelizeValidationError } from 'sequelize';
+import { ConnectionError, DatabaseError, OptimisticLockError, UniqueConstraintError, ValidationError as SequelizeValidationError } from 'sequelize';
 import type { ProblemBody } from '@friable/contracts';
 import { fieldWords, inPeoplesWords } from '../input/field-words';
 
@@ -58,6 +58,9 @@ export function toProblem(exception: unknown): ProblemBody {
     return problem(409, field ? `Another record already uses this ${fieldWords(field)}.` : 'That record already exists.', {
       errors: field ? [{ field, message: `${fieldWords(field)} is already taken` }] : undefined,
     });
+  }
+  if (exception instanceof OptimisticLockError) {
+    return problem(409, 'Not saved: this record was changed by someone else at the same moment. Reload it and save again.');
   }
   if (exception instanceof SequelizeValidationError) {
     return problem(422, 'Please correct the highlighted fields.', {

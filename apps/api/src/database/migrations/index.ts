@@ -34,6 +34,7 @@ import * as fourFactorTreatments from './20261218090100-four-factor-treatments';
 import * as plotUnits from './20261218090200-plot-units';
 import * as createDataStamps from './20261215090000-create-data-stamps';
 import * as createSchedulerLeases from './20261215090100-create-scheduler-leases';
+import * as protocolVersions from './20261214090000-protocol-versions';
 
 export interface MigrationModule {
   up(params: { context: QueryInterface }): Promise<void>;
@@ -77,4 +78,5 @@ export const migrations: ReadonlyArray<readonly [name: string, module: Migration
   ['20261218090200-plot-units', plotUnits],
   ['20261215090000-create-data-stamps', createDataStamps],
   ['20261215090100-create-scheduler-leases', createSchedulerLeases],
+  ['20261214090000-protocol-versions', protocolVersions],
 ];

@@ -1,6 +1,6 @@
-import { ApiProperty, OmitType } from '@nestjs/swagger';
+import { ApiProperty, ApiPropertyOptional, OmitType } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
-import { ArrayMaxSize, ArrayMinSize, IsArray, IsString, Matches, MaxLength, MinLength, ValidateNested } from 'class-validator';
+import { ArrayMaxSize, ArrayMinSize, IsArray, IsInt, IsOptional, IsString, Matches, MaxLength, Min, MinLength, ValidateNested } from 'class-validator';
 import { CreateTreatmentDto } from '../../treatments/dto/create-treatment.dto';
 
 /** A level: its code and name, and (optional) the rate and material of what is applied, as a treatment's. */
@@ -23,6 +23,12 @@ export class FactorDto {
   @MinLength(1, { message: 'name must be 1 to 80 characters long' })
   @MaxLength(80, { message: 'name must be 1 to 80 characters long' })
   name: string;
+
+  @ApiPropertyOptional({ example: 1, description: 'The version of the factor stored at this place, as GET answered it; needed for every factor that exists. Another one answers 409 with the current factors.' })
+  @IsOptional()
+  @IsInt({ message: 'version must be a whole number' })
+  @Min(1, { message: 'version must be a whole number, 1 or more' })
+  version?: number;
 
   @ApiProperty({ type: [FactorLevelDto] })
   @IsArray({ message: 'levels must list at least two levels' })

@@ -21,6 +21,9 @@ export class TrialFactorDto implements Factor {
   @ApiProperty()
   id: number;
 
+  @ApiProperty({ description: 'Bumped by every save; send it back with each edit: another one answers 409 with the current record.' })
+  version: number;
+
   @ApiProperty({ enum: [1, 2, 3, 4], description: "1 to 4 in the order given; a split plot's whole-plot factor is 1." })
   position: 1 | 2 | 3 | 4;
 

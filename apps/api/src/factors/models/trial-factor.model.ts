@@ -2,10 +2,14 @@ import { Column, DataType, ForeignKey, HasMany, Model, Table } from 'sequelize-t
 import { Trial } from '../../trials/models/trial.model';
 import { FactorLevel } from './factor-level.model';
 
-@Table({ tableName: 'trial_factors' })
+@Table({ tableName: 'trial_factors', version: true })
 export class TrialFactor extends Model {
   @Column({ type: DataType.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true })
   declare id: number;
+
+  /** Bumped by every save; an edit sent with an older one is refused (see common/protocol/edit-version.ts). */
+  @Column({ type: DataType.INTEGER.UNSIGNED, allowNull: false, defaultValue: 1 })
+  declare version: number;
 
   @ForeignKey(() => Trial)
   @Column({ type: DataType.INTEGER.UNSIGNED, allowNull: false, field: 'trial_id' })

@@ -1,4 +1,4 @@
-import type { Observation, ObservationConflict, ObservationHistoryEntry } from '@friable/contracts';
+import type { Observation, ObservationHistoryEntry } from '@friable/contracts';
 import { ApiProperty } from '@nestjs/swagger';
 
 /** A stored observation (named apart from the analysis request's ObservationDto). */
@@ -62,21 +62,6 @@ export class RecordedObservationDto implements Observation {
 
   @ApiProperty({ format: 'date-time' })
   recordedAt: string;
-}
-
-/** 409 answer of a stale edit: nothing was written. */
-export class ObservationConflictDto implements ObservationConflict {
-  @ApiProperty({ enum: [409] })
-  statusCode: 409;
-
-  @ApiProperty()
-  error: string;
-
-  @ApiProperty()
-  message: string;
-
-  @ApiProperty({ type: RecordedObservationDto, description: 'The value as it is stored now, with its version.' })
-  current: RecordedObservationDto;
 }
 
 export class ObservationHistoryEntryDto implements ObservationHistoryEntry {

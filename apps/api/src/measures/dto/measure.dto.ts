@@ -5,6 +5,9 @@ export class MeasureDto implements Measure {
   @ApiProperty()
   id: number;
 
+  @ApiProperty({ description: 'Bumped by every save; send it back with each edit: another one answers 409 with the current record.' })
+  version: number;
+
   @ApiProperty()
   code: string;
 

@@ -1,4 +1,6 @@
-import { PartialType } from '@nestjs/swagger';
+import { IntersectionType, PartialType } from '@nestjs/swagger';
+import { EditVersionDto } from '../../common/protocol/edit-version';
 import { CreateMeasureDto } from './create-measure.dto';
 
-export class UpdateMeasureDto extends PartialType(CreateMeasureDto) {}
+/** The fields to change, and the version they were read at. */
+export class UpdateMeasureDto extends IntersectionType(PartialType(CreateMeasureDto), EditVersionDto) {}

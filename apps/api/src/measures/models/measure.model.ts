@@ -5,10 +5,14 @@ import { Trial } from '../../trials/models/trial.model';
 const limit = (field: string) => ({ type: DataType.DECIMAL(18, 6), allowNull: true, field });
 
 /** DECIMAL columns come back from MariaDB as strings; the presenter turns them into numbers. */
-@Table({ tableName: 'measures' })
+@Table({ tableName: 'measures', version: true, paranoid: true })
 export class MeasureRow extends Model {
   @Column({ type: DataType.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true })
   declare id: number;
+
+  /** Bumped by every save; an edit sent with an older one is refused (see common/protocol/edit-version.ts). */
+  @Column({ type: DataType.INTEGER.UNSIGNED, allowNull: false, defaultValue: 1 })
+  declare version: number;
 
   @ForeignKey(() => Trial)
   @Column({ type: DataType.INTEGER.UNSIGNED, allowNull: false, field: 'trial_id' })

@@ -1,4 +1,6 @@
-import { PartialType } from '@nestjs/swagger';
+import { IntersectionType, PartialType } from '@nestjs/swagger';
+import { EditVersionDto } from '../../common/protocol/edit-version';
 import { CreateRoundDto } from './create-round.dto';
 
-export class UpdateRoundDto extends PartialType(CreateRoundDto) {}
+/** The fields to change, and the version they were read at. */
+export class UpdateRoundDto extends IntersectionType(PartialType(CreateRoundDto), EditVersionDto) {}

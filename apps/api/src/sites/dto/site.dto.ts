@@ -26,6 +26,9 @@ export class SiteDto implements Site {
   @ApiProperty()
   id: number;
 
+  @ApiProperty({ description: 'Bumped by every save; send it back with each edit: another one answers 409 with the current record.' })
+  version: number;
+
   @ApiProperty()
   name: string;
 

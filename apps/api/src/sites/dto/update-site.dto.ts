@@ -1,4 +1,6 @@
-import { PartialType } from '@nestjs/swagger';
+import { IntersectionType, PartialType } from '@nestjs/swagger';
+import { EditVersionDto } from '../../common/protocol/edit-version';
 import { CreateSiteDto } from './create-site.dto';
 
-export class UpdateSiteDto extends PartialType(CreateSiteDto) {}
+/** The fields to change, and the version they were read at. */
+export class UpdateSiteDto extends IntersectionType(PartialType(CreateSiteDto), EditVersionDto) {}

@@ -5,10 +5,14 @@ import { User } from '../../users/models/user.model';
 const size = (field: string) => ({ type: DataType.DECIMAL(10, 3), allowNull: true, field });
 
 /** DECIMAL columns come back from MariaDB as strings; the presenter turns them into numbers. */
-@Table({ tableName: 'sites' })
+@Table({ tableName: 'sites', version: true, paranoid: true })
 export class SiteRow extends Model {
   @Column({ type: DataType.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true })
   declare id: number;
+
+  /** Bumped by every save; an edit sent with an older one is refused (see common/protocol/edit-version.ts). */
+  @Column({ type: DataType.INTEGER.UNSIGNED, allowNull: false, defaultValue: 1 })
+  declare version: number;
 
   @ForeignKey(() => Trial)
   @Column({ type: DataType.INTEGER.UNSIGNED, allowNull: false, field: 'trial_id' })

@@ -35,6 +35,9 @@ export class TreatmentDto extends MaterialRateDto implements Treatment {
   @ApiProperty()
   id: number;
 
+  @ApiProperty({ description: 'Bumped by every save; send it back with each edit: another one answers 409 with the current record.' })
+  version: number;
+
   @ApiProperty()
   code: string;
 

@@ -1,4 +1,6 @@
-import { PartialType } from '@nestjs/swagger';
+import { IntersectionType, PartialType } from '@nestjs/swagger';
+import { EditVersionDto } from '../../common/protocol/edit-version';
 import { CreateTreatmentDto } from './create-treatment.dto';
 
-export class UpdateTreatmentDto extends PartialType(CreateTreatmentDto) {}
+/** The fields to change, and the version they were read at. */
+export class UpdateTreatmentDto extends IntersectionType(PartialType(CreateTreatmentDto), EditVersionDto) {}

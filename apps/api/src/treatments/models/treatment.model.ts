@@ -4,10 +4,14 @@ import { FactorLevel } from '../../factors/models/factor-level.model';
 import { Trial } from '../../trials/models/trial.model';
 
 /** DECIMAL columns come back from MariaDB as strings; the presenter turns them into numbers. */
-@Table({ tableName: 'treatments' })
+@Table({ tableName: 'treatments', version: true, paranoid: true })
 export class TreatmentRow extends Model {
   @Column({ type: DataType.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true })
   declare id: number;
+
+  /** Bumped by every save; an edit sent with an older one is refused (see common/protocol/edit-version.ts). */
+  @Column({ type: DataType.INTEGER.UNSIGNED, allowNull: false, defaultValue: 1 })
+  declare version: number;
 
   @ForeignKey(() => Trial)
   @Column({ type: DataType.INTEGER.UNSIGNED, allowNull: false, field: 'trial_id' })

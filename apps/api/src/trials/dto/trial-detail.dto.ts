@@ -22,6 +22,9 @@ export class TrialProtocolDto implements Omit<TrialDetail, 'myRoles' | 'mySiteId
   @ApiProperty()
   id: number;
 
+  @ApiProperty({ description: 'Bumped by every save; send it back with each edit: another one answers 409 with the current record.' })
+  version: number;
+
   @ApiProperty()
   code: string;
 

@@ -1,9 +1,10 @@
-import { ApiPropertyOptional, OmitType, PartialType } from '@nestjs/swagger';
+import { ApiPropertyOptional, IntersectionType, OmitType, PartialType } from '@nestjs/swagger';
+import { EditVersionDto } from '../../common/protocol/edit-version';
 import { IsIn, IsOptional, IsString, MaxLength } from 'class-validator';
 import { TRIAL_STATUSES, type TrialStatus } from '../models/trial.model';
 import { CreateTrialDto } from './create-trial.dto';
 
-export class UpdateTrialDto extends PartialType(OmitType(CreateTrialDto, ['code'] as const)) {
+export class UpdateTrialDto extends IntersectionType(PartialType(OmitType(CreateTrialDto, ['code'] as const)), EditVersionDto) {
   @ApiPropertyOptional({ type: String, nullable: true, description: 'Why the trial has no untreated control (instead of one).' })
   @IsOptional()
   @IsString({ message: 'noControlReason must be text' })

@@ -5,10 +5,14 @@ import { TrialMembership } from './trial-membership.model';
 
 export { TRIAL_DESIGNS, TRIAL_STATUSES, type TrialDesign, type TrialStatus };
 
-@Table({ tableName: 'trials' })
+@Table({ tableName: 'trials', version: true })
 export class Trial extends Model {
   @Column({ type: DataType.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true })
   declare id: number;
+
+  /** Bumped by every save; an edit sent with an older one is refused (see common/protocol/edit-version.ts). */
+  @Column({ type: DataType.INTEGER.UNSIGNED, allowNull: false, defaultValue: 1 })
+  declare version: number;
 
   @Column({ type: DataType.STRING(20), allowNull: false, unique: true })
   declare code: string;

@@ -1,14 +1,14 @@
 /** The kinds of change, grouped by what they change (the part of `kind` before the dot). */
 export const activityGroups: ReadonlyArray<{ prefix: string; label: string; kinds: Readonly<Record<string, string>> }> = [
   { prefix: 'trial', label: 'Trial', kinds: { 'trial.created': 'Trial created', 'trial.updated': 'Trial details changed', 'trial.status-changed': 'Trial status changed' } },
-  { prefix: 'treatment', label: 'Treatments', kinds: { 'treatment.created': 'Treatment added', 'treatment.updated': 'Treatment changed', 'treatment.deleted': 'Treatment removed' } },
+  { prefix: 'treatment', label: 'Treatments', kinds: { 'treatment.created': 'Treatment added', 'treatment.updated': 'Treatment changed', 'treatment.archived': 'Treatment archived' } },
   { prefix: 'factors', label: 'Factors', kinds: { 'factors.replaced': 'Factors set' } },
-  { prefix: 'measure', label: 'Measures', kinds: { 'measure.created': 'Measure added', 'measure.updated': 'Measure changed', 'measure.deleted': 'Measure removed' } },
-  { prefix: 'round', label: 'Assessment rounds', kinds: { 'round.created': 'Round added', 'round.updated': 'Round changed', 'round.deleted': 'Round removed' } },
+  { prefix: 'measure', label: 'Measures', kinds: { 'measure.created': 'Measure added', 'measure.updated': 'Measure changed', 'measure.archived': 'Measure archived' } },
+  { prefix: 'round', label: 'Assessment rounds', kinds: { 'round.created': 'Round added', 'round.updated': 'Round changed', 'round.archived': 'Round archived' } },
   {
     prefix: 'site',
     label: 'Sites',
-    kinds: { 'site.created': 'Site added', 'site.updated': 'Site changed', 'site.deleted': 'Site removed', 'site.randomized': 'Site randomized', 'site.layout-cleared': 'Site layout cleared' },
+    kinds: { 'site.created': 'Site added', 'site.updated': 'Site changed', 'site.archived': 'Site archived', 'site.randomized': 'Site randomized', 'site.layout-cleared': 'Site layout cleared' },
   },
   {
     prefix: 'invitation',

@@ -1,5 +1,5 @@
-import { Button, Dialog, DialogBody, DialogFooter } from '@blueprintjs/core';
 import type { CellConflict } from '../hooks/use-cell-save';
+import { EditConflictDialog } from '../../../components/edit-conflict-dialog';
 import { cellText } from '../../../lib/observation-text';
 import { formatMoment } from '../../../lib/format-moment';
 
@@ -8,35 +8,33 @@ export function ConflictDialog({ conflict, onKeepMine, onTakeCurrent }: { confli
   if (!conflict) return null;
   const { target, mine, current } = conflict;
   return (
-    <Dialog isOpen title="Someone else changed this value" icon="swap-horizontal" onClose={onTakeCurrent} className="fr-dialog">
-      <DialogBody>
-        <p>
-          While you were editing <strong>{target.measureName}</strong> of plot <strong>{target.plotLabel}</strong>, the value was saved by someone else. Nothing was
-          overwritten; choose which value stays.
-        </p>
-        <dl className="fr-ledger-conflict">
-          <dt>Yours</dt>
-          <dd className="fr-ledger-conflict__value">{mine.value === '' ? '(empty)' : mine.value}</dd>
-          <dt>Stored now</dt>
-          <dd className="fr-ledger-conflict__value">
-            {current ? cellText(current) || '(empty)' : '(no value)'}
-            {current && (
-              <span className="fr-muted fr-small">
-                {' '}
-                by {current.recordedBy ?? 'someone'}, {formatMoment(current.recordedAt)}
-              </span>
-            )}
-          </dd>
-        </dl>
-      </DialogBody>
-      <DialogFooter
-        actions={
-          <>
-            <Button text="Take the stored value" onClick={onTakeCurrent} />
-            <Button intent="primary" text="Keep mine" onClick={onKeepMine} />
-          </>
-        }
-      />
-    </Dialog>
+    <EditConflictDialog
+      title="Someone else changed this value"
+      intro={
+        <>
+          While you were editing <strong>{target.measureName}</strong> of plot <strong>{target.plotLabel}</strong>, the value was saved by someone else.
+        </>
+      }
+      rows={[
+        {
+          label: target.measureName,
+          mine: mine.value === '' ? '(empty)' : mine.value,
+          stored: (
+            <>
+              {current ? cellText(current) || '(empty)' : '(no value)'}
+              {current && (
+                <span className="fr-muted fr-small">
+                  {' '}
+                  by {current.recordedBy ?? 'someone'}, {formatMoment(current.recordedAt)}
+                </span>
+              )}
+            </>
+          ),
+        },
+      ]}
+      takeText="Take the stored value"
+      onKeepMine={onKeepMine}
+      onTakeStored={onTakeCurrent}
+    />
   );
 }

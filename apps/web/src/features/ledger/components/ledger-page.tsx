@@ -35,7 +35,7 @@ export function LedgerPage({ trial }: { trial: TrialDetail }) {
   const observations = useObservations(trial.id, site?.randomizedAt ? site.id : undefined, round?.id);
   const access = valueAccess(trial, site?.id);
   const cells = useCellSave(trial.id, site?.id ?? 0, round?.id ?? 0);
-  const lock = useSetTrialStatus(trial.id);
+  const lock = useSetTrialStatus(trial.id, trial.version);
   const [focused, setFocused] = useState<{ plot: Plot; measure: Measure } | null>(null);
   const [historyOf, setHistoryOf] = useState<Observation | null>(null);
   const [photoOf, setPhotoOf] = useState<Plot | null>(null);

@@ -6,12 +6,12 @@ import { useProtocolMutation } from './use-protocol-mutation';
 export type MeasureBody = components['schemas']['CreateMeasureDto'];
 export type MeasureUnitId = MeasureBody['unit'];
 
-/** POST /api/trials/:trialId/measures, or PATCH …/measures/:id when `measureId` is given. */
-export function saveMeasure(trialId: number, { measureId, input }: { measureId?: number; input: MeasureBody }) {
+/** POST /api/trials/:trialId/measures, or PATCH …/measures/:id when `measureId` is given, with the version the form was opened at. */
+export function saveMeasure(trialId: number, save: { measureId?: undefined; input: MeasureBody } | { measureId: number; version: number; input: MeasureBody }) {
   return unwrap(
-    measureId
-      ? api.PATCH('/api/trials/{trialId}/measures/{id}', { params: { path: { trialId, id: measureId } }, body: input })
-      : api.POST('/api/trials/{trialId}/measures', { params: { path: { trialId } }, body: input }),
+    save.measureId !== undefined
+      ? api.PATCH('/api/trials/{trialId}/measures/{id}', { params: { path: { trialId, id: save.measureId } }, body: { ...save.input, version: save.version } })
+      : api.POST('/api/trials/{trialId}/measures', { params: { path: { trialId } }, body: save.input }),
   );
 }
 

@@ -2,12 +2,12 @@ import type { RoundInput } from '@friable/contracts';
 import { api, unwrap } from '../../../lib/api-client';
 import { useProtocolMutation } from './use-protocol-mutation';
 
-/** POST /api/trials/:trialId/rounds, or PATCH …/rounds/:id when `roundId` is given. */
-export function saveRound(trialId: number, { roundId, input }: { roundId?: number; input: RoundInput }) {
+/** POST /api/trials/:trialId/rounds, or PATCH …/rounds/:id when `roundId` is given, with the version the form was opened at. */
+export function saveRound(trialId: number, save: { roundId?: undefined; input: RoundInput } | { roundId: number; version: number; input: RoundInput }) {
   return unwrap(
-    roundId
-      ? api.PATCH('/api/trials/{trialId}/rounds/{id}', { params: { path: { trialId, id: roundId } }, body: input })
-      : api.POST('/api/trials/{trialId}/rounds', { params: { path: { trialId } }, body: input }),
+    save.roundId !== undefined
+      ? api.PATCH('/api/trials/{trialId}/rounds/{id}', { params: { path: { trialId, id: save.roundId } }, body: { ...save.input, version: save.version } })
+      : api.POST('/api/trials/{trialId}/rounds', { params: { path: { trialId } }, body: save.input }),
   );
 }
 

@@ -1,5 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { trialQueryOptions } from '../../../lib/api/get-trial';
+import { conflictCurrent } from '../../../lib/edit-conflict';
 
 /**
  * A change to a trial's protocol: after it succeeds the whole trial (and what hangs off it: plots,
@@ -11,6 +12,10 @@ export function useProtocolMutation<TInput, TResult>(trialId: number, mutationFn
     mutationFn,
     onSuccess: async () => {
       await queryClient.invalidateQueries({ queryKey: trialQueryOptions(trialId).queryKey });
+    },
+    // Someone else saved first: the pages show the stored records while the person chooses.
+    onError: async (error) => {
+      if (conflictCurrent(error) !== undefined) await queryClient.invalidateQueries({ queryKey: trialQueryOptions(trialId).queryKey });
     },
   });
 }

@@ -43,7 +43,7 @@ export function ActivationPanel({ trial, canEdit }: { trial: TrialDetail; canEdi
           icon="play"
           text="Activate trial"
           loading={update.isPending}
-          onClick={() => update.mutate({ status: 'active' })}
+          onClick={() => update.mutate({ status: 'active', version: trial.version })}
         />
       )}
     </Callout>

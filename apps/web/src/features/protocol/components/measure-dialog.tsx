@@ -6,6 +6,8 @@ import { FormDialog } from '../../../components/form-dialog';
 import { NumberText } from '../../../components/number-text';
 import { measureKindLabels, numberInputText } from '../../../lib/format';
 import { useSaveMeasure, type MeasureBody, type MeasureUnitId } from '../api/save-measure';
+import { useVersionedForm } from '../../../lib/edit-conflict';
+import { VersionConflict } from './version-conflict';
 import { measureUnitGroups, unitSymbol } from './measure-units';
 
 const shownFields = ['code', 'name', 'unit', 'kind', 'scaleMin', 'scaleMax', 'cutoff', 'plausibleMin', 'plausibleMax', 'hardMin', 'hardMax', 'decimals', 'higherIsBetter'];
@@ -23,6 +25,12 @@ const labels = {
 /** Add or change a measure: its unit from the fixed list, its kind, and the ranges that catch typing slips. */
 export function MeasureDialog({ trial, measure, onClose }: { trial: TrialDetail; measure: Measure | null; onClose: () => void }) {
   const save = useSaveMeasure(trial.id);
+  const form = useVersionedForm<MeasureBody, Measure, Parameters<typeof save.mutate>[0]>(
+    save,
+    (input, version) => (measure ? { measureId: measure.id, version: version ?? measure.version, input } : { input }),
+    measure,
+    onClose,
+  );
   const [localError, setLocalError] = useState<Error | null>(null);
   const [code, setCode] = useState(measure?.code ?? '');
   const [name, setName] = useState(measure?.name ?? '');
@@ -63,82 +71,85 @@ export function MeasureDialog({ trial, measure, onClose }: { trial: TrialDetail;
       decimals: v.decimals ?? 0,
       higherIsBetter,
     };
-    save.mutate({ measureId: measure?.id, input }, { onSuccess: onClose });
+    form.send(input);
   }
 
   return (
-    <FormDialog title={measure ? `Edit measure ${measure.code}` : 'Add measure'} icon="timeline-line-chart" wide onClose={onClose} onSubmit={submit} submitText={measure ? 'Save measure' : 'Add measure'} pending={save.isPending} error={error} shownFields={shownFields}>
-          <div className="fr-form-row">
-            <Field label="Code" field="code" error={error} help="Short, heads the CSV column, e.g. DRAIN.">
-              <InputGroup id="fr-field-code" value={code} onChange={(e) => setCode(e.target.value)} autoFocus />
-            </Field>
-            <Field label="Name" field="name" error={error}>
-              <InputGroup id="fr-field-name" value={name} onChange={(e) => setName(e.target.value)} />
-            </Field>
-          </div>
-          <div className="fr-form-row">
-            <Field label="Unit" field="unit" error={error}>
-              <HTMLSelect id="fr-field-unit" value={unit} onChange={(e) => setUnit(e.target.value as MeasureUnitId)} fill>
-                {measureUnitGroups.map((group) => (
-                  <optgroup key={group.dimension} label={group.dimension}>
-                    {group.units.map((u) => (
-                      <option key={u.id} value={u.id}>
-                        {u.symbol} — {u.label}
-                      </option>
-                    ))}
-                  </optgroup>
-                ))}
-              </HTMLSelect>
-            </Field>
-            <Field label="Kind" field="kind" error={error}>
-              <HTMLSelect id="fr-field-kind" value={kind} onChange={(e) => setKind(e.target.value as MeasureKind)} fill>
-                {MEASURE_KINDS.map((k) => (
-                  <option key={k} value={k}>
-                    {measureKindLabels[k]}
-                  </option>
-                ))}
-              </HTMLSelect>
-            </Field>
-          </div>
-          {kind === 'score' && (
+    <>
+      <FormDialog title={measure ? `Edit measure ${measure.code}` : 'Add measure'} icon="timeline-line-chart" wide onClose={onClose} onSubmit={submit} submitText={measure ? 'Save measure' : 'Add measure'} pending={save.isPending} error={error} shownFields={shownFields}>
             <div className="fr-form-row">
-              <Field label="Lowest score" field="scaleMin" error={error}>
-                <NumberText id="fr-field-scaleMin" {...text('scaleMin')} />
+              <Field label="Code" field="code" error={error} help="Short, heads the CSV column, e.g. DRAIN.">
+                <InputGroup id="fr-field-code" value={code} onChange={(e) => setCode(e.target.value)} autoFocus />
               </Field>
-              <Field label="Highest score" field="scaleMax" error={error}>
-                <NumberText id="fr-field-scaleMax" {...text('scaleMax')} />
+              <Field label="Name" field="name" error={error}>
+                <InputGroup id="fr-field-name" value={name} onChange={(e) => setName(e.target.value)} />
               </Field>
             </div>
-          )}
-          {kind === 'time-with-cutoff' && (
-            <Field label="Cut-off" field="cutoff" error={error} help="A plot not finished by then is recorded as “not by the cut-off”, never as the cut-off itself.">
-              <NumberText id="fr-field-cutoff" {...text('cutoff')} unit={symbol} />
-            </Field>
-          )}
-          <div className="fr-form-row">
-            <Field label="Plausible minimum" field="plausibleMin" error={error} help="Outside the plausible range: a warning.">
-              <NumberText id="fr-field-plausibleMin" {...text('plausibleMin')} unit={symbol} />
-            </Field>
-            <Field label="Plausible maximum" field="plausibleMax" error={error}>
-              <NumberText id="fr-field-plausibleMax" {...text('plausibleMax')} unit={symbol} />
-            </Field>
-          </div>
-          <div className="fr-form-row">
-            <Field label="Hard minimum" field="hardMin" error={error} help="Outside the hard limits: refused.">
-              <NumberText id="fr-field-hardMin" {...text('hardMin')} unit={symbol} />
-            </Field>
-            <Field label="Hard maximum" field="hardMax" error={error}>
-              <NumberText id="fr-field-hardMax" {...text('hardMax')} unit={symbol} />
-            </Field>
-          </div>
-          <div className="fr-form-row">
-            <Field label="Decimals" field="decimals" error={error} help="How readings are shown.">
-              <NumberText id="fr-field-decimals" {...text('decimals')} />
-            </Field>
-            <Field label="Which way is better" field="higherIsBetter" error={error}>
-              <Checkbox id="fr-field-higherIsBetter" checked={higherIsBetter} onChange={(e) => setHigherIsBetter(e.currentTarget.checked)} label="Higher is better" />
-            </Field>
-          </div>
-    </FormDialog>
+            <div className="fr-form-row">
+              <Field label="Unit" field="unit" error={error}>
+                <HTMLSelect id="fr-field-unit" value={unit} onChange={(e) => setUnit(e.target.value as MeasureUnitId)} fill>
+                  {measureUnitGroups.map((group) => (
+                    <optgroup key={group.dimension} label={group.dimension}>
+                      {group.units.map((u) => (
+                        <option key={u.id} value={u.id}>
+                          {u.symbol} — {u.label}
+                        </option>
+                      ))}
+                    </optgroup>
+                  ))}
+                </HTMLSelect>
+              </Field>
+              <Field label="Kind" field="kind" error={error}>
+                <HTMLSelect id="fr-field-kind" value={kind} onChange={(e) => setKind(e.target.value as MeasureKind)} fill>
+                  {MEASURE_KINDS.map((k) => (
+                    <option key={k} value={k}>
+                      {measureKindLabels[k]}
+                    </option>
+                  ))}
+                </HTMLSelect>
+              </Field>
+            </div>
+            {kind === 'score' && (
+              <div className="fr-form-row">
+                <Field label="Lowest score" field="scaleMin" error={error}>
+                  <NumberText id="fr-field-scaleMin" {...text('scaleMin')} />
+                </Field>
+                <Field label="Highest score" field="scaleMax" error={error}>
+                  <NumberText id="fr-field-scaleMax" {...text('scaleMax')} />
+                </Field>
+              </div>
+            )}
+            {kind === 'time-with-cutoff' && (
+              <Field label="Cut-off" field="cutoff" error={error} help="A plot not finished by then is recorded as “not by the cut-off”, never as the cut-off itself.">
+                <NumberText id="fr-field-cutoff" {...text('cutoff')} unit={symbol} />
+              </Field>
+            )}
+            <div className="fr-form-row">
+              <Field label="Plausible minimum" field="plausibleMin" error={error} help="Outside the plausible range: a warning.">
+                <NumberText id="fr-field-plausibleMin" {...text('plausibleMin')} unit={symbol} />
+              </Field>
+              <Field label="Plausible maximum" field="plausibleMax" error={error}>
+                <NumberText id="fr-field-plausibleMax" {...text('plausibleMax')} unit={symbol} />
+              </Field>
+            </div>
+            <div className="fr-form-row">
+              <Field label="Hard minimum" field="hardMin" error={error} help="Outside the hard limits: refused.">
+                <NumberText id="fr-field-hardMin" {...text('hardMin')} unit={symbol} />
+              </Field>
+              <Field label="Hard maximum" field="hardMax" error={error}>
+                <NumberText id="fr-field-hardMax" {...text('hardMax')} unit={symbol} />
+              </Field>
+            </div>
+            <div className="fr-form-row">
+              <Field label="Decimals" field="decimals" error={error} help="How readings are shown.">
+                <NumberText id="fr-field-decimals" {...text('decimals')} />
+              </Field>
+              <Field label="Which way is better" field="higherIsBetter" error={error}>
+                <Checkbox id="fr-field-higherIsBetter" checked={higherIsBetter} onChange={(e) => setHigherIsBetter(e.currentTarget.checked)} label="Higher is better" />
+              </Field>
+            </div>
+      </FormDialog>
+      <VersionConflict what={`measure ${measure?.code ?? code}`} conflict={form.conflict} onKeepMine={form.keepMine} onTakeStored={form.takeStored} />
+    </>
   );
 }

@@ -16,8 +16,8 @@ const level = (id: number, code: string, name: string, rate: Partial<FactorLevel
   ...rate,
 });
 const factors: Factor[] = [
-  { id: 1, position: 1, name: 'Compost', appliedTo: 'whole plot', levels: [level(101, 'N', 'No compost'), level(102, 'C', 'Compost', { rateValue: 2.5, rateUnit: 'cm' })] },
-  { id: 2, position: 2, name: 'Mulch', appliedTo: 'sub plot', levels: [level(201, 'B', 'Bare'), level(202, 'S', 'Straw', { rateValue: 5, rateUnit: 'cm' })] },
+  { id: 1, version: 1, position: 1, name: 'Compost', appliedTo: 'whole plot', levels: [level(101, 'N', 'No compost'), level(102, 'C', 'Compost', { rateValue: 2.5, rateUnit: 'cm' })] },
+  { id: 2, version: 1, position: 2, name: 'Mulch', appliedTo: 'sub plot', levels: [level(201, 'B', 'Bare'), level(202, 'S', 'Straw', { rateValue: 5, rateUnit: 'cm' })] },
 ];
 const base = makeTrial();
 const treatments = [

@@ -41,7 +41,7 @@ describe('ProtocolPage', () => {
     expect(within(screen.getByRole('list', { name: 'What stops activation' })).getByText('Site Millbrook is not randomized yet.')).toBeInTheDocument();
     await userEvent.click(screen.getByRole('button', { name: 'Activate trial' }));
     expect(await screen.findByText('The trial cannot be activated yet.')).toBeInTheDocument();
-    expect(calls.find((c) => c.method === 'PATCH')?.body).toEqual({ status: 'active' });
+    expect(calls.find((c) => c.method === 'PATCH')?.body).toEqual({ status: 'active', version: 1 });
   });
 
   it('shows the server’s 422 message beside the field it names', async () => {
@@ -87,6 +87,46 @@ describe('ProtocolPage', () => {
     await userEvent.click(within(dialog).getByRole('button', { name: 'Add treatment' }));
     await waitFor(() => expect(screen.queryByRole('dialog')).not.toBeInTheDocument());
     expect(calls.find((c) => c.method === 'POST')?.body).toMatchObject({ code: 'G20', name: 'Gypsum, half rate', isControl: false, rateValue: 20, rateUnit: 'lb/1000ft2', rateBasis: 'area', materialKind: 'gypsum', purity: null });
+  });
+
+  /** Renames G40 in its dialog while the server holds a newer version (2): answers the conflict dialog. */
+  async function renameStaleG40() {
+    const mine = makeTrial().treatments.find((t) => t.code === 'G40')!;
+    const stored = { ...mine, name: 'Gypsum, renamed meanwhile', version: 2 };
+    const path = `PATCH /api/trials/3/treatments/${mine.id}`;
+    const replies: Record<string, { status: number; body: unknown }> = {
+      ...base,
+      'GET /api/trials/3': { status: 200, body: makeTrial() },
+      [path]: { status: 409, body: { statusCode: 409, error: 'Conflict', message: 'Not saved: treatment G40 was changed by someone else since you opened it (your version 1, now 2).', current: stored } },
+    };
+    const calls = mockApi(replies);
+    renderWithApp(<ProtocolPage trial={makeTrial()} />);
+    await userEvent.click(screen.getByRole('button', { name: 'Edit G40' }));
+    const form = await screen.findByRole('dialog');
+    await userEvent.clear(within(form).getByLabelText('Name'));
+    await userEvent.type(within(form).getByLabelText('Name'), 'Gypsum, fine grade');
+    await userEvent.click(within(form).getByRole('button', { name: 'Save treatment' }));
+    const conflict = await screen.findByRole('dialog', { name: 'Someone else changed treatment G40' });
+    return { calls, replies, path, stored, conflict };
+  }
+
+  it('on a stale edit shows the person’s value beside the stored one and, when they keep theirs, sends it again with the stored version', async () => {
+    const { calls, replies, path, stored, conflict } = await renameStaleG40();
+    const name = within(conflict).getByRole('group', { name: 'Name' });
+    expect(within(name).getByText('Gypsum, fine grade')).toBeInTheDocument();
+    expect(within(name).getByText('Gypsum, renamed meanwhile')).toBeInTheDocument();
+    replies[path] = { status: 200, body: { ...stored, name: 'Gypsum, fine grade', version: 3 } };
+    await userEvent.click(within(conflict).getByRole('button', { name: 'Keep mine' }));
+    await waitFor(() => expect(screen.queryByRole('dialog')).not.toBeInTheDocument());
+    const patches = calls.filter((c) => c.method === 'PATCH');
+    expect(patches.map((c) => c.body)).toEqual([expect.objectContaining({ name: 'Gypsum, fine grade', version: 1 }), expect.objectContaining({ name: 'Gypsum, fine grade', version: 2 })]);
+  });
+
+  it('leaves the stored treatment when the person takes it, sending nothing more', async () => {
+    const { calls, conflict } = await renameStaleG40();
+    await userEvent.click(within(conflict).getByRole('button', { name: 'Take the stored values' }));
+    await waitFor(() => expect(screen.queryByRole('dialog')).not.toBeInTheDocument());
+    expect(calls.filter((c) => c.method === 'PATCH')).toHaveLength(1);
   });
 
   it('shows a collaborator everything read-only, with no edit controls', async () => {

@@ -1,5 +1,5 @@
 import { Button, Checkbox, HTMLTable, InputGroup, Section, SectionCard } from '@blueprintjs/core';
-import type { AssessmentRound, TrialDetail } from '@friable/contracts';
+import type { AssessmentRound, RoundInput, TrialDetail } from '@friable/contracts';
 import { useState } from 'react';
 import { ConfirmButton } from '../../../components/confirm-button';
 import { Field, parseNumberFields } from '../../../components/field-errors';
@@ -8,6 +8,8 @@ import { NumberText } from '../../../components/number-text';
 import { EmptyState } from '../../../components/states';
 import { formatDate, formatNumber } from '../../../lib/format';
 import { useDeleteProtocolItem } from '../api/delete-protocol-item';
+import { useVersionedForm } from '../../../lib/edit-conflict';
+import { VersionConflict } from './version-conflict';
 import { useSaveRound } from '../api/save-round';
 
 /** When the plots are assessed: day offsets from the start date, and which measures each round reads. */
@@ -66,6 +68,12 @@ export function RoundsSection({ trial, canEdit }: { trial: TrialDetail; canEdit:
 
 function RoundDialog({ trial, round, onClose }: { trial: TrialDetail; round: AssessmentRound | null; onClose: () => void }) {
   const save = useSaveRound(trial.id);
+  const form = useVersionedForm<RoundInput, AssessmentRound, Parameters<typeof save.mutate>[0]>(
+    save,
+    (input, version) => (round ? { roundId: round.id, version: version ?? round.version, input } : { input }),
+    round,
+    onClose,
+  );
   const [localError, setLocalError] = useState<Error | null>(null);
   const [label, setLabel] = useState(round?.label ?? '');
   const [dayOffset, setDayOffset] = useState(round ? String(round.dayOffset) : '');
@@ -78,36 +86,39 @@ function RoundDialog({ trial, round, onClose }: { trial: TrialDetail; round: Ass
     const parsed = parseNumberFields({ dayOffset }, { dayOffset: 'Day' });
     setLocalError(parsed.error);
     if (parsed.error) return;
-    save.mutate({ roundId: round?.id, input: { label: label.trim(), dayOffset: parsed.values.dayOffset ?? 0, measureIds } }, { onSuccess: onClose });
+    form.send({ label: label.trim(), dayOffset: parsed.values.dayOffset ?? 0, measureIds });
   }
 
   return (
-    <FormDialog title={round ? `Edit round ${round.label}` : 'Add round'} icon="calendar" onClose={onClose} onSubmit={submit} submitText={round ? 'Save round' : 'Add round'} pending={save.isPending} error={error} shownFields={['label', 'dayOffset', 'measureIds']}>
-          <div className="fr-form-row">
-            <Field label="Label" field="label" error={error} help="e.g. Week 2">
-              <InputGroup id="fr-field-label" value={label} onChange={(e) => setLabel(e.target.value)} autoFocus />
+    <>
+      <FormDialog title={round ? `Edit round ${round.label}` : 'Add round'} icon="calendar" onClose={onClose} onSubmit={submit} submitText={round ? 'Save round' : 'Add round'} pending={save.isPending} error={error} shownFields={['label', 'dayOffset', 'measureIds']}>
+            <div className="fr-form-row">
+              <Field label="Label" field="label" error={error} help="e.g. Week 2">
+                <InputGroup id="fr-field-label" value={label} onChange={(e) => setLabel(e.target.value)} autoFocus />
+              </Field>
+              <Field label="Day" field="dayOffset" error={error} help={due ? `Due ${due}` : 'Days after the start date (0 = the start).'}>
+                <NumberText id="fr-field-dayOffset" value={dayOffset} onChange={setDayOffset} unit="days" />
+              </Field>
+            </div>
+            <Field label="Measures read in this round" field="measureIds" error={error}>
+              {trial.measures.length === 0 ? (
+                <p className="fr-muted">Add measures first.</p>
+              ) : (
+                trial.measures.map((measure) => (
+                  <Checkbox
+                    key={measure.id}
+                    label={`${measure.code} — ${measure.name}`}
+                    checked={measureIds.includes(measure.id)}
+                    onChange={(e) => {
+                      const on = e.currentTarget.checked;
+                      setMeasureIds((ids) => (on ? [...ids, measure.id] : ids.filter((id) => id !== measure.id)));
+                    }}
+                  />
+                ))
+              )}
             </Field>
-            <Field label="Day" field="dayOffset" error={error} help={due ? `Due ${due}` : 'Days after the start date (0 = the start).'}>
-              <NumberText id="fr-field-dayOffset" value={dayOffset} onChange={setDayOffset} unit="days" />
-            </Field>
-          </div>
-          <Field label="Measures read in this round" field="measureIds" error={error}>
-            {trial.measures.length === 0 ? (
-              <p className="fr-muted">Add measures first.</p>
-            ) : (
-              trial.measures.map((measure) => (
-                <Checkbox
-                  key={measure.id}
-                  label={`${measure.code} — ${measure.name}`}
-                  checked={measureIds.includes(measure.id)}
-                  onChange={(e) => {
-                    const on = e.currentTarget.checked;
-                    setMeasureIds((ids) => (on ? [...ids, measure.id] : ids.filter((id) => id !== measure.id)));
-                  }}
-                />
-              ))
-            )}
-          </Field>
-    </FormDialog>
+      </FormDialog>
+      <VersionConflict what={`round ${round?.label ?? label}`} conflict={form.conflict} onKeepMine={form.keepMine} onTakeStored={form.takeStored} />
+    </>
   );
 }

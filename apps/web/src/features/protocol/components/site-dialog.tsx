@@ -8,6 +8,8 @@ import { NumberText } from '../../../components/number-text';
 import { formatArea, numberInputText, parseNumberInput } from '../../../lib/format';
 import { useMembers } from '../../../lib/api/get-members';
 import { useSaveSite } from '../api/save-site';
+import { useVersionedForm } from '../../../lib/edit-conflict';
+import { VersionConflict } from './version-conflict';
 import { plotsPerWholePlot } from './factor-roles';
 
 const shownFields = ['name', 'location', 'soilDescription', 'shape', 'lengthM', 'widthM', 'diameterCm', 'containerDepthCm', 'soilVolumeL', 'blocks', 'labelPrefix', 'leadUserId'];
@@ -30,6 +32,12 @@ function previewArea(shape: 'rectangle' | 'round', length: string, width: string
 /** Add or change a site: where it is, the soil, each plot's size and shape, the blocks and who leads it. */
 export function SiteDialog({ trial, site, onClose }: { trial: TrialDetail; site: Site | null; onClose: () => void }) {
   const save = useSaveSite(trial.id);
+  const form = useVersionedForm<SiteInput, Site, Parameters<typeof save.mutate>[0]>(
+    save,
+    (input, version) => (site ? { siteId: site.id, version: version ?? site.version, input } : { input }),
+    site,
+    onClose,
+  );
   const members = useMembers(trial.id);
   const perWholePlot = plotsPerWholePlot(trial);
   const [localError, setLocalError] = useState<Error | null>(null);
@@ -71,80 +79,83 @@ export function SiteDialog({ trial, site, onClose }: { trial: TrialDetail; site:
       labelPrefix: labelPrefix.trim().toUpperCase(),
       leadUserId,
     };
-    save.mutate({ siteId: site?.id, input }, { onSuccess: onClose });
+    form.send(input);
   }
 
   return (
-    <FormDialog title={site ? `Edit site ${site.name}` : 'Add site'} icon="map-marker" wide onClose={onClose} onSubmit={submit} submitText={site ? 'Save site' : 'Add site'} pending={save.isPending} error={error} shownFields={shownFields}>
-          <div className="fr-form-row">
-            <Field label="Name" field="name" error={error} help="e.g. Hollow Lane Community Garden">
-              <InputGroup id="fr-field-name" value={name} onChange={(e) => setName(e.target.value)} autoFocus />
-            </Field>
-            <Field label="Label prefix" field="labelPrefix" error={error} help="2 or 3 capital letters that start each plot label, e.g. HL → HL-101.">
-              <InputGroup id="fr-field-labelPrefix" value={labelPrefix} maxLength={3} onChange={(e) => setLabelPrefix(e.target.value)} />
-            </Field>
-          </div>
-          <Field label="Location" field="location" error={error}>
-            <InputGroup id="fr-field-location" value={location} onChange={(e) => setLocation(e.target.value)} />
-          </Field>
-          <Field label="Soil" field="soilDescription" error={error} help="Texture, drainage, history, soil test results.">
-            <TextArea id="fr-field-soilDescription" value={soil} onChange={(e) => setSoil(e.target.value)} fill autoResize />
-          </Field>
-          <fieldset className="fr-fieldset">
-            <legend>Each plot</legend>
-            {perWholePlot !== null && (
-              <p className="fr-muted fr-small">
-                In a split plot this is one sub plot, the unit that is measured; a whole plot is {perWholePlot} of them side by side.
-              </p>
-            )}
-            <Field label="Shape" field="shape" error={error}>
-              <RadioGroup inline selectedValue={shape} onChange={(e) => setShape(e.currentTarget.value as 'rectangle' | 'round')}>
-                <Radio value="rectangle" label="Rectangle (bed or plot)" />
-                <Radio value="round" label="Round (container)" />
-              </RadioGroup>
-            </Field>
-            {shape === 'rectangle' ? (
-              <div className="fr-form-row">
-                <Field label="Length" field="lengthM" error={error}>
-                  <NumberText id="fr-field-lengthM" {...text('lengthM')} unit="m" />
-                </Field>
-                <Field label="Width" field="widthM" error={error}>
-                  <NumberText id="fr-field-widthM" {...text('widthM')} unit="m" />
-                </Field>
-              </div>
-            ) : (
-              <Field label="Inside diameter" field="diameterCm" error={error} help="Measured inside, at the soil surface.">
-                <NumberText id="fr-field-diameterCm" {...text('diameterCm')} unit="cm" />
-              </Field>
-            )}
-            <p className="fr-area-preview" aria-live="polite">
-              Surface area: <strong>{area === null ? '—' : formatArea(area)}</strong>
-            </p>
+    <>
+      <FormDialog title={site ? `Edit site ${site.name}` : 'Add site'} icon="map-marker" wide onClose={onClose} onSubmit={submit} submitText={site ? 'Save site' : 'Add site'} pending={save.isPending} error={error} shownFields={shownFields}>
             <div className="fr-form-row">
-              <Field label="Container depth" field="containerDepthCm" error={error} help="Optional; for containers.">
-                <NumberText id="fr-field-containerDepthCm" {...text('containerDepthCm')} unit="cm" />
+              <Field label="Name" field="name" error={error} help="e.g. Hollow Lane Community Garden">
+                <InputGroup id="fr-field-name" value={name} onChange={(e) => setName(e.target.value)} autoFocus />
               </Field>
-              <Field label="Soil volume" field="soilVolumeL" error={error} help="Needed for concentration rates.">
-                <NumberText id="fr-field-soilVolumeL" {...text('soilVolumeL')} unit="L" />
+              <Field label="Label prefix" field="labelPrefix" error={error} help="2 or 3 capital letters that start each plot label, e.g. HL → HL-101.">
+                <InputGroup id="fr-field-labelPrefix" value={labelPrefix} maxLength={3} onChange={(e) => setLabelPrefix(e.target.value)} />
               </Field>
             </div>
-          </fieldset>
-          <div className="fr-form-row">
-            <Field label="Blocks" field="blocks" error={error} help="Replicates; at least 4 is the usual advice.">
-              <NumberText id="fr-field-blocks" {...text('blocks')} />
+            <Field label="Location" field="location" error={error}>
+              <InputGroup id="fr-field-location" value={location} onChange={(e) => setLocation(e.target.value)} />
             </Field>
-            <Field label="Site lead" field="leadUserId" error={error} help={members.isError ? 'The team list could not be loaded.' : 'A member of the trial’s team.'}>
-              <HTMLSelect id="fr-field-leadUserId" value={leadUserId ?? ''} onChange={(e) => setLeadUserId(e.target.value ? Number(e.target.value) : null)} fill>
-                <option value="">No lead yet</option>
-                {site?.leadUserId && !people.some((p) => p.userId === site.leadUserId) && <option value={site.leadUserId}>{site.leadName ?? 'Current lead'}</option>}
-                {people.map((person) => (
-                  <option key={person.userId} value={person.userId}>
-                    {person.name}
-                  </option>
-                ))}
-              </HTMLSelect>
+            <Field label="Soil" field="soilDescription" error={error} help="Texture, drainage, history, soil test results.">
+              <TextArea id="fr-field-soilDescription" value={soil} onChange={(e) => setSoil(e.target.value)} fill autoResize />
             </Field>
-          </div>
-    </FormDialog>
+            <fieldset className="fr-fieldset">
+              <legend>Each plot</legend>
+              {perWholePlot !== null && (
+                <p className="fr-muted fr-small">
+                  In a split plot this is one sub plot, the unit that is measured; a whole plot is {perWholePlot} of them side by side.
+                </p>
+              )}
+              <Field label="Shape" field="shape" error={error}>
+                <RadioGroup inline selectedValue={shape} onChange={(e) => setShape(e.currentTarget.value as 'rectangle' | 'round')}>
+                  <Radio value="rectangle" label="Rectangle (bed or plot)" />
+                  <Radio value="round" label="Round (container)" />
+                </RadioGroup>
+              </Field>
+              {shape === 'rectangle' ? (
+                <div className="fr-form-row">
+                  <Field label="Length" field="lengthM" error={error}>
+                    <NumberText id="fr-field-lengthM" {...text('lengthM')} unit="m" />
+                  </Field>
+                  <Field label="Width" field="widthM" error={error}>
+                    <NumberText id="fr-field-widthM" {...text('widthM')} unit="m" />
+                  </Field>
+                </div>
+              ) : (
+                <Field label="Inside diameter" field="diameterCm" error={error} help="Measured inside, at the soil surface.">
+                  <NumberText id="fr-field-diameterCm" {...text('diameterCm')} unit="cm" />
+                </Field>
+              )}
+              <p className="fr-area-preview" aria-live="polite">
+                Surface area: <strong>{area === null ? '—' : formatArea(area)}</strong>
+              </p>
+              <div className="fr-form-row">
+                <Field label="Container depth" field="containerDepthCm" error={error} help="Optional; for containers.">
+                  <NumberText id="fr-field-containerDepthCm" {...text('containerDepthCm')} unit="cm" />
+                </Field>
+                <Field label="Soil volume" field="soilVolumeL" error={error} help="Needed for concentration rates.">
+                  <NumberText id="fr-field-soilVolumeL" {...text('soilVolumeL')} unit="L" />
+                </Field>
+              </div>
+            </fieldset>
+            <div className="fr-form-row">
+              <Field label="Blocks" field="blocks" error={error} help="Replicates; at least 4 is the usual advice.">
+                <NumberText id="fr-field-blocks" {...text('blocks')} />
+              </Field>
+              <Field label="Site lead" field="leadUserId" error={error} help={members.isError ? 'The team list could not be loaded.' : 'A member of the trial’s team.'}>
+                <HTMLSelect id="fr-field-leadUserId" value={leadUserId ?? ''} onChange={(e) => setLeadUserId(e.target.value ? Number(e.target.value) : null)} fill>
+                  <option value="">No lead yet</option>
+                  {site?.leadUserId && !people.some((p) => p.userId === site.leadUserId) && <option value={site.leadUserId}>{site.leadName ?? 'Current lead'}</option>}
+                  {people.map((person) => (
+                    <option key={person.userId} value={person.userId}>
+                      {person.name}
+                    </option>
+                  ))}
+                </HTMLSelect>
+              </Field>
+            </div>
+      </FormDialog>
+      <VersionConflict what={`site ${site?.name ?? name}`} conflict={form.conflict} onKeepMine={form.keepMine} onTakeStored={form.takeStored} />
+    </>
   );
 }

@@ -1,10 +1,12 @@
 import { Button, HTMLSelect, InputGroup, Section, SectionCard, TextArea } from '@blueprintjs/core';
-import { TRIAL_DESIGNS, type TrialDesign, type TrialDetail } from '@friable/contracts';
+import { TRIAL_DESIGNS, type TrialDesign, type TrialDetail, type TrialUpdateInput } from '@friable/contracts';
 import { useState } from 'react';
 import { Field } from '../../../components/field-errors';
 import { FormDialog } from '../../../components/form-dialog';
 import { designHelp, designLabels, formatDate, statusLabels } from '../../../lib/format';
 import { useUpdateTrial } from '../api/update-trial';
+import { useVersionedForm } from '../../../lib/edit-conflict';
+import { VersionConflict } from './version-conflict';
 
 const shownFields = ['title', 'question', 'design', 'startDate', 'seed', 'safetyNotes', 'noControlReason'];
 
@@ -62,9 +64,10 @@ function TrialFieldsDialog({ trial, onClose }: { trial: TrialDetail; onClose: ()
   const [noControlReason, setNoControlReason] = useState(trial.noControlReason ?? '');
   const hasControl = trial.treatments.some((t) => t.isControl);
 
+  const form = useVersionedForm<Omit<TrialUpdateInput, 'version'>, TrialDetail, TrialUpdateInput>(update, (input, version) => ({ ...input, version: version ?? trial.version }), trial, onClose);
+
   function submit() {
-    update.mutate(
-      {
+    form.send({
         title: title.trim(),
         question: question.trim() || null,
         design,
@@ -72,44 +75,45 @@ function TrialFieldsDialog({ trial, onClose }: { trial: TrialDetail; onClose: ()
         seed: seed.trim(),
         safetyNotes: safetyNotes.trim() || null,
         noControlReason: noControlReason.trim() || null,
-      },
-      { onSuccess: onClose },
-    );
+      });
   }
 
   return (
-    <FormDialog title="Edit trial" icon="edit" onClose={onClose} onSubmit={submit} submitText="Save trial" pending={update.isPending} error={update.error} shownFields={shownFields}>
-          <Field label="Title" field="title" error={update.error}>
-            <InputGroup id="fr-field-title" value={title} onChange={(e) => setTitle(e.target.value)} />
-          </Field>
-          <Field label="Question" field="question" error={update.error} help="What the trial should find out, e.g. “Does gypsum at 40 lb/1,000 ft² shorten drain time on heavy clay?”">
-            <TextArea id="fr-field-question" value={question} onChange={(e) => setQuestion(e.target.value)} fill autoResize />
-          </Field>
-          <Field label="Design" field="design" error={update.error} help={designHelp[design]}>
-            <HTMLSelect id="fr-field-design" value={design} onChange={(e) => setDesign(e.target.value as TrialDesign)} fill>
-              {TRIAL_DESIGNS.map((d) => (
-                <option key={d} value={d}>
-                  {designLabels[d]}
-                </option>
-              ))}
-            </HTMLSelect>
-          </Field>
-          <div className="fr-form-row">
-            <Field label="Start date" field="startDate" error={update.error} help="Day 0 of the assessment rounds.">
-              <InputGroup id="fr-field-startDate" type="date" value={startDate} onChange={(e) => setStartDate(e.target.value)} />
+    <>
+      <FormDialog title="Edit trial" icon="edit" onClose={onClose} onSubmit={submit} submitText="Save trial" pending={update.isPending} error={update.error} shownFields={shownFields}>
+            <Field label="Title" field="title" error={update.error}>
+              <InputGroup id="fr-field-title" value={title} onChange={(e) => setTitle(e.target.value)} />
             </Field>
-            <Field label="Seed" field="seed" error={update.error} help="Any text; it fixes the randomization.">
-              <InputGroup id="fr-field-seed" value={seed} onChange={(e) => setSeed(e.target.value)} />
+            <Field label="Question" field="question" error={update.error} help="What the trial should find out, e.g. “Does gypsum at 40 lb/1,000 ft² shorten drain time on heavy clay?”">
+              <TextArea id="fr-field-question" value={question} onChange={(e) => setQuestion(e.target.value)} fill autoResize />
             </Field>
-          </div>
-          <Field label="Safety notes" field="safetyNotes" error={update.error} help="Printed on every site’s sheets: masks for powders, gloves for compost and manure, lifting.">
-            <TextArea id="fr-field-safetyNotes" value={safetyNotes} onChange={(e) => setSafetyNotes(e.target.value)} fill autoResize />
-          </Field>
-          {!hasControl && (
-            <Field label="Why there is no untreated control" field="noControlReason" error={update.error} help="Without a control no effect can be claimed; say why it is left out.">
-              <TextArea id="fr-field-noControlReason" value={noControlReason} onChange={(e) => setNoControlReason(e.target.value)} fill autoResize />
+            <Field label="Design" field="design" error={update.error} help={designHelp[design]}>
+              <HTMLSelect id="fr-field-design" value={design} onChange={(e) => setDesign(e.target.value as TrialDesign)} fill>
+                {TRIAL_DESIGNS.map((d) => (
+                  <option key={d} value={d}>
+                    {designLabels[d]}
+                  </option>
+                ))}
+              </HTMLSelect>
             </Field>
-          )}
-    </FormDialog>
+            <div className="fr-form-row">
+              <Field label="Start date" field="startDate" error={update.error} help="Day 0 of the assessment rounds.">
+                <InputGroup id="fr-field-startDate" type="date" value={startDate} onChange={(e) => setStartDate(e.target.value)} />
+              </Field>
+              <Field label="Seed" field="seed" error={update.error} help="Any text; it fixes the randomization.">
+                <InputGroup id="fr-field-seed" value={seed} onChange={(e) => setSeed(e.target.value)} />
+              </Field>
+            </div>
+            <Field label="Safety notes" field="safetyNotes" error={update.error} help="Printed on every site’s sheets: masks for powders, gloves for compost and manure, lifting.">
+              <TextArea id="fr-field-safetyNotes" value={safetyNotes} onChange={(e) => setSafetyNotes(e.target.value)} fill autoResize />
+            </Field>
+            {!hasControl && (
+              <Field label="Why there is no untreated control" field="noControlReason" error={update.error} help="Without a control no effect can be claimed; say why it is left out.">
+                <TextArea id="fr-field-noControlReason" value={noControlReason} onChange={(e) => setNoControlReason(e.target.value)} fill autoResize />
+              </Field>
+            )}
+      </FormDialog>
+      <VersionConflict what={`trial ${trial.code}`} conflict={form.conflict} onKeepMine={form.keepMine} onTakeStored={form.takeStored} />
+    </>
   );
 }

@@ -18,6 +18,7 @@ export const noMaterial: MaterialRate = {
 
 const treatment = (id: number, code: string, name: string, extra: Partial<Treatment> = {}): Treatment => ({
   id,
+  version: 1,
   code,
   name,
   description: null,
@@ -30,6 +31,7 @@ const treatment = (id: number, code: string, name: string, extra: Partial<Treatm
 
 const site = (id: number, name: string, labelPrefix: string, extra: Partial<Site> = {}): Site => ({
   id,
+  version: 1,
   name,
   location: 'Fernwick',
   soilDescription: 'Heavy clay',
@@ -56,6 +58,7 @@ const site = (id: number, name: string, labelPrefix: string, extra: Partial<Site
 export function makeTrial(extra: Partial<TrialDetail> = {}): TrialDetail {
   return {
     id: 3,
+    version: 1,
     code: 'CLAY-T',
     title: 'Clay test trial',
     question: 'Does gypsum shorten drain time?',
@@ -78,6 +81,7 @@ export function makeTrial(extra: Partial<TrialDetail> = {}): TrialDetail {
     measures: [
       {
         id: 11,
+        version: 1,
         code: 'DRAIN',
         name: 'Drain time',
         unit: 's',
@@ -94,7 +98,7 @@ export function makeTrial(extra: Partial<TrialDetail> = {}): TrialDetail {
         position: 1,
       },
     ],
-    rounds: [{ id: 21, label: 'Week 2', dayOffset: 14, dueDate: '2027-03-15', measureIds: [11] }],
+    rounds: [{ id: 21, version: 1, label: 'Week 2', dayOffset: 14, dueDate: '2027-03-15', measureIds: [11] }],
     sites: [site(31, 'Hollow Lane', 'HL'), site(32, 'Millbrook', 'MB', { randomizedAt: null, randomizationSeed: null, plotCount: 0 })],
     activation: { ready: false, problems: ['Site Millbrook is not randomized yet.'], warnings: [] },
     ...extra,
