@@ -6,7 +6,7 @@ import { ThrottlerGuard, ThrottlerModule } from '@nestjs/throttler';
 import { resolve } from 'node:path';
 import { ActivityModule } from './activity/activity.module';
 import { AuthModule } from './auth/auth.module';
-import { ProtocolSupportModule } from './common/protocol/protocol-support.module';
+import { ProtocolSupportModule } from './protocol-gate/protocol-support.module';
 import { DemoModule } from './demo/demo.module';
 import { FactorsModule } from './factors/factors.module';
 import { MeasuresModule } from './measures/measures.module';

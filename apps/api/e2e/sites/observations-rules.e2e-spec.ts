@@ -4,7 +4,7 @@ import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { AppModule } from '../../src/app.module';
 import { configureApp } from '../../src/bootstrap';
-import { ObservationsGuardService } from '../../src/common/protocol/observations-guard.service';
+import { ObservationsGuardService } from '../../src/protocol-gate/observations-guard.service';
 import { MeasureRow } from '../../src/measures/models/measure.model';
 import { PlotRow } from '../../src/plots/models/plot.model';
 import { TreatmentRow } from '../../src/treatments/models/treatment.model';

@@ -1,6 +1,6 @@
 import { Controller, Get, Query } from '@nestjs/common';
 import { ApiOkResponse, ApiTags } from '@nestjs/swagger';
-import type { TrialAccessContext } from '../auth/auth-user';
+import type { TrialAccessContext } from '../common/auth-user';
 import { AnyTrialMember } from '../common/decorators/access.decorator';
 import { CurrentTrialAccess } from '../common/decorators/current-user.decorator';
 import { ActivityService } from './activity.service';

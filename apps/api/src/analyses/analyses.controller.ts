@@ -8,7 +8,7 @@ import {
   ApiTags,
   ApiUnprocessableEntityResponse,
 } from '@nestjs/swagger';
-import type { AuthUser, TrialAccessContext } from '../auth/auth-user';
+import type { AuthUser, TrialAccessContext } from '../common/auth-user';
 import { AnyTrialMember, TrialAccess } from '../common/decorators/access.decorator';
 import { CurrentTrialAccess, CurrentUser } from '../common/decorators/current-user.decorator';
 import { AnalysesService } from './analyses.service';

@@ -3,7 +3,7 @@ import { Injectable, NotFoundException } from '@nestjs/common';
 import { InjectConnection, InjectModel } from '@nestjs/sequelize';
 import type { Sequelize } from 'sequelize-typescript';
 import { ActivityService } from '../activity/activity.service';
-import type { AuthUser } from '../auth/auth-user';
+import type { AuthUser } from '../common/auth-user';
 import { FindingsService } from '../findings/findings.service';
 import { User } from '../users/models/user.model';
 import type { CreateAnalysisDto } from './dto/create-analysis.dto';

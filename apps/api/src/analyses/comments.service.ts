@@ -4,7 +4,7 @@ import type { ConfigType } from '@nestjs/config';
 import { InjectConnection, InjectModel } from '@nestjs/sequelize';
 import type { Sequelize } from 'sequelize-typescript';
 import { ActivityService } from '../activity/activity.service';
-import type { AuthUser, TrialAccessContext } from '../auth/auth-user';
+import type { AuthUser, TrialAccessContext } from '../common/auth-user';
 import { FieldProblemsException } from '../common/exceptions/field-problems.exception';
 import { mailConfig } from '../config/mail.config';
 import { MailService } from '../mail/mail.service';

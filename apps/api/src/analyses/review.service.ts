@@ -5,7 +5,7 @@ import { InjectConnection, InjectModel } from '@nestjs/sequelize';
 import type { Transaction } from 'sequelize';
 import type { Sequelize } from 'sequelize-typescript';
 import { ActivityService } from '../activity/activity.service';
-import type { AuthUser, TrialAccessContext } from '../auth/auth-user';
+import type { AuthUser, TrialAccessContext } from '../common/auth-user';
 import { mailConfig } from '../config/mail.config';
 import { FindingsService } from '../findings/findings.service';
 import { MailService } from '../mail/mail.service';

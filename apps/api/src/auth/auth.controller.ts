@@ -13,7 +13,7 @@ import {
 import { Throttle } from '@nestjs/throttler';
 import type { Response } from 'express';
 import { readAuthConfig } from '../config/auth.config';
-import type { AuthUser } from './auth-user';
+import type { AuthUser } from '../common/auth-user';
 import { AuthService } from './auth.service';
 import { Public, SignedIn } from '../common/decorators/access.decorator';
 import { CurrentUser } from '../common/decorators/current-user.decorator';

@@ -10,7 +10,7 @@ import { FieldProblemsException } from '../common/exceptions/field-problems.exce
 import { MailService } from '../mail/mail.service';
 import { User } from '../users/models/user.model';
 import { toPublicUser, type PublicUser } from '../users/public-user';
-import type { AuthUser } from './auth-user';
+import type { AuthUser } from '../common/auth-user';
 import { PasswordReset } from './models/password-reset.model';
 import { PasswordHasher } from './password-hasher.service';
 import { passwordProblem } from './password-policy';

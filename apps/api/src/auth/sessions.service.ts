@@ -7,7 +7,7 @@ import { createHash, randomBytes, randomUUID } from 'node:crypto';
 import { Op, type Transaction } from 'sequelize';
 import { authConfig } from '../config/auth.config';
 import { User } from '../users/models/user.model';
-import type { AuthUser } from './auth-user';
+import type { AuthUser } from '../common/auth-user';
 import { UserSession } from './models/user-session.model';
 import { SESSION_COOKIE, sessionCookieOptions } from './session-cookie';
 

@@ -4,7 +4,7 @@ import { InjectConnection } from '@nestjs/sequelize';
 import { readFileSync } from 'node:fs';
 import { resolve } from 'node:path';
 import type { Sequelize } from 'sequelize-typescript';
-import type { AuthUser, TrialAccessContext } from '../auth/auth-user';
+import type { AuthUser, TrialAccessContext } from '../common/auth-user';
 import { FactorsService } from '../factors/factors.service';
 import { MeasuresService } from '../measures/measures.service';
 import { RoundsService } from '../rounds/rounds.service';

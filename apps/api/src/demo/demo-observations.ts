@@ -3,7 +3,7 @@ import { InjectConnection } from '@nestjs/sequelize';
 import Papa from 'papaparse';
 import { QueryTypes } from 'sequelize';
 import type { Sequelize } from 'sequelize-typescript';
-import type { AuthUser } from '../auth/auth-user';
+import type { AuthUser } from '../common/auth-user';
 import { IntakeService } from '../intake/intake.service';
 import { measureHeader } from '../plots/plots.service';
 

@@ -1,7 +1,7 @@
 import { Controller, Get, Header, Res, StreamableFile } from '@nestjs/common';
 import { ApiOperation, ApiTags } from '@nestjs/swagger';
 import type { Response } from 'express';
-import type { TrialAccessContext } from '../auth/auth-user';
+import type { TrialAccessContext } from '../common/auth-user';
 import { AnyTrialMember } from '../common/decorators/access.decorator';
 import { CurrentTrialAccess } from '../common/decorators/current-user.decorator';
 import { ExportsService } from './exports.service';

@@ -1,8 +1,8 @@
 import { Body, Controller, Get, Put } from '@nestjs/common';
 import { ApiOkResponse, ApiTags, ApiUnprocessableEntityResponse } from '@nestjs/swagger';
-import type { AuthUser, TrialAccessContext } from '../auth/auth-user';
+import type { AuthUser, TrialAccessContext } from '../common/auth-user';
 import { AnyTrialMember, TrialAccess } from '../common/decorators/access.decorator';
-import { StaleEditAnswers } from '../common/protocol/edit-version';
+import { StaleEditAnswers } from '../protocol-gate/edit-version';
 import { CurrentTrialAccess, CurrentUser } from '../common/decorators/current-user.decorator';
 import { FactorsDto } from './dto/factors.dto';
 import { FactorsService } from './factors.service';

@@ -1,6 +1,6 @@
 import { Controller, Get, Query, StreamableFile } from '@nestjs/common';
 import { ApiExtraModels, ApiOkResponse, ApiOperation, ApiTags, ApiUnprocessableEntityResponse, getSchemaPath } from '@nestjs/swagger';
-import type { TrialAccessContext } from '../auth/auth-user';
+import type { TrialAccessContext } from '../common/auth-user';
 import { AnyTrialMember } from '../common/decorators/access.decorator';
 import { CurrentTrialAccess } from '../common/decorators/current-user.decorator';
 import { ApiFileResponse } from '../common/openapi/file-response.decorator';

@@ -3,7 +3,7 @@ import { Controller, Delete, Get, HttpCode, Param, Query } from '@nestjs/common'
 import { ApiNoContentResponse, ApiNotFoundResponse, ApiOkResponse, ApiTags } from '@nestjs/swagger';
 import { InjectConnection } from '@nestjs/sequelize';
 import type { Sequelize } from 'sequelize-typescript';
-import type { AuthUser, TrialAccessContext } from '../auth/auth-user';
+import type { AuthUser, TrialAccessContext } from '../common/auth-user';
 import { AnyTrialMember, TrialAccess } from '../common/decorators/access.decorator';
 import { CurrentTrialAccess, CurrentUser } from '../common/decorators/current-user.decorator';
 import { ActivityService } from '../activity/activity.service';

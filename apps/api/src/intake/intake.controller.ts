@@ -1,7 +1,7 @@
 import type { IntakeResult } from '@friable/contracts';
 import { Body, Controller, HttpCode, Param, ParseIntPipe, Post, Query, UnprocessableEntityException, UploadedFile, UseInterceptors } from '@nestjs/common';
 import { ApiBody, ApiConflictResponse, ApiExtraModels, getSchemaPath, ApiConsumes, ApiOkResponse, ApiPayloadTooLargeResponse, ApiTags, ApiUnprocessableEntityResponse } from '@nestjs/swagger';
-import type { AuthUser, TrialAccessContext } from '../auth/auth-user';
+import type { AuthUser, TrialAccessContext } from '../common/auth-user';
 import { TrialAccess } from '../common/decorators/access.decorator';
 import { CurrentTrialAccess, CurrentUser } from '../common/decorators/current-user.decorator';
 import { SingleFileUpload } from '../storage/single-file-upload.interceptor';

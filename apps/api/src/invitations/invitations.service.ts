@@ -12,7 +12,7 @@ import { InjectConnection, InjectModel } from '@nestjs/sequelize';
 import { Op, type Transaction } from 'sequelize';
 import type { Sequelize } from 'sequelize-typescript';
 import { ActivityService } from '../activity/activity.service';
-import type { AuthUser } from '../auth/auth-user';
+import type { AuthUser } from '../common/auth-user';
 import { PasswordHasher } from '../auth/password-hasher.service';
 import { passwordProblem } from '../auth/password-policy';
 import { SessionsService, type StartedSession } from '../auth/sessions.service';

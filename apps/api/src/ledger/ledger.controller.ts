@@ -1,13 +1,13 @@
 import { Body, Controller, Get, Param, ParseIntPipe, Patch, Post, Query } from '@nestjs/common';
 import { ApiCreatedResponse, ApiOkResponse, ApiTags, ApiUnprocessableEntityResponse } from '@nestjs/swagger';
-import type { AuthUser, TrialAccessContext } from '../auth/auth-user';
+import type { AuthUser, TrialAccessContext } from '../common/auth-user';
 import { AnyTrialMember, TrialAccess } from '../common/decorators/access.decorator';
 import { CurrentTrialAccess, CurrentUser } from '../common/decorators/current-user.decorator';
 import { CreateObservationDto } from './dto/create-observation.dto';
 import { EditObservationDto } from './dto/edit-observation.dto';
 import { ObservationQueryDto } from './dto/observation-query.dto';
 import { LedgerService } from './ledger.service';
-import { StaleEditAnswers } from '../common/protocol/edit-version';
+import { StaleEditAnswers } from '../protocol-gate/edit-version';
 import { ObservationHistoryEntryDto, RecordedObservationDto } from './dto/recorded-observation.dto';
 
 @ApiTags('ledger')

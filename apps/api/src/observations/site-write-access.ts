@@ -1,5 +1,5 @@
 import { ForbiddenException } from '@nestjs/common';
-import type { TrialAccessContext } from '../auth/auth-user';
+import type { TrialAccessContext } from '../common/auth-user';
 
 /**
  * Site write access — refuses a write for a site the caller may not write for.

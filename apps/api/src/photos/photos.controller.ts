@@ -1,6 +1,6 @@
 import { Controller, Delete, Get, Header, HttpCode, Param, ParseIntPipe, Put, StreamableFile, UploadedFile, UseInterceptors } from '@nestjs/common';
 import { ApiBody, ApiConflictResponse, ApiConsumes, ApiNoContentResponse, ApiOkResponse, ApiPayloadTooLargeResponse, ApiTags, ApiUnprocessableEntityResponse } from '@nestjs/swagger';
-import type { AuthUser, TrialAccessContext } from '../auth/auth-user';
+import type { AuthUser, TrialAccessContext } from '../common/auth-user';
 import { AnyTrialMember, TrialAccess } from '../common/decorators/access.decorator';
 import { CurrentTrialAccess, CurrentUser } from '../common/decorators/current-user.decorator';
 import { DOWNLOAD_POLICY } from '../common/security/security-headers';

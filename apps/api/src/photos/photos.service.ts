@@ -3,9 +3,9 @@ import { Injectable, NotFoundException, UnprocessableEntityException } from '@ne
 import { InjectConnection, InjectModel } from '@nestjs/sequelize';
 import type { Sequelize } from 'sequelize-typescript';
 import { ActivityService } from '../activity/activity.service';
-import type { AuthUser, TrialAccessContext } from '../auth/auth-user';
+import type { AuthUser, TrialAccessContext } from '../common/auth-user';
 import { refuseIfClosed } from '../common/exceptions/trial-locked.exception';
-import { ProtocolGateService } from '../common/protocol/protocol-gate.service';
+import { ProtocolGateService } from '../protocol-gate/protocol-gate.service';
 import { assertMayWriteSite } from '../observations/site-write-access';
 import { PlotRow } from '../plots/models/plot.model';
 import { AssessmentRoundRow } from '../rounds/models/assessment-round.model';

@@ -1,7 +1,7 @@
 import { Controller, Get, Header, Param, ParseIntPipe, Query, Res } from '@nestjs/common';
 import { ApiConflictResponse, ApiOkResponse, ApiTags } from '@nestjs/swagger';
 import type { Response } from 'express';
-import type { TrialAccessContext } from '../auth/auth-user';
+import type { TrialAccessContext } from '../common/auth-user';
 import { AnyTrialMember } from '../common/decorators/access.decorator';
 import { CurrentTrialAccess } from '../common/decorators/current-user.decorator';
 import { AmountsQueryDto, PlotsQueryDto } from './dto/plots-query.dto';

@@ -5,7 +5,7 @@ import { InjectConnection, InjectModel } from '@nestjs/sequelize';
 import type { Transaction } from 'sequelize';
 import type { Sequelize } from 'sequelize-typescript';
 import { ActivityService } from '../activity/activity.service';
-import type { AuthUser } from '../auth/auth-user';
+import type { AuthUser } from '../common/auth-user';
 import { FieldProblemsException } from '../common/exceptions/field-problems.exception';
 import { mailConfig } from '../config/mail.config';
 import { MailService } from '../mail/mail.service';

@@ -1,6 +1,6 @@
 import { ForbiddenException, Injectable } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
-import type { AuthUser, TrialAccessContext } from '../auth/auth-user';
+import type { AuthUser, TrialAccessContext } from '../common/auth-user';
 import { Trial } from './models/trial.model';
 import { TrialDeparture } from './models/trial-departure.model';
 import { TrialMembership } from './models/trial-membership.model';

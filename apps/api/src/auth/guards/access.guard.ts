@@ -2,7 +2,7 @@ import { ForbiddenException, Injectable, NotFoundException, type CanActivate, ty
 import { Reflector } from '@nestjs/core';
 import { ACCESS_RULE, type AccessRule } from '../../common/decorators/access.decorator';
 import { TrialMembershipsService } from '../../trials/trial-memberships.service';
-import type { AuthenticatedRequest } from '../auth-user';
+import type { AuthenticatedRequest } from '../../common/auth-user';
 
 /** Applies each route's access rule after authentication; a route without a rule is refused. */
 @Injectable()

@@ -2,7 +2,7 @@ import { ForbiddenException, Injectable, UnauthorizedException, type ExecutionCo
 import { Reflector } from '@nestjs/core';
 import { AuthGuard } from '@nestjs/passport';
 import { ACCESS_RULE, type AccessRule } from '../../common/decorators/access.decorator';
-import type { AuthenticatedRequest } from '../auth-user';
+import type { AuthenticatedRequest } from '../../common/auth-user';
 import { CSRF_HEADER, SESSION_COOKIE } from '../session-cookie';
 import { SessionsService } from '../sessions.service';
 

@@ -4,7 +4,7 @@ import { PassportStrategy } from '@nestjs/passport';
 import { createSecretKey } from 'node:crypto';
 import { ExtractJwt, Strategy } from 'passport-jwt';
 import { authConfig } from '../../config/auth.config';
-import type { AuthUser } from '../auth-user';
+import type { AuthUser } from '../../common/auth-user';
 import { SessionsService, type AccessPayload } from '../sessions.service';
 
 /**

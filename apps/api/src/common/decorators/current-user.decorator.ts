@@ -1,5 +1,5 @@
 import { createParamDecorator, type ExecutionContext } from '@nestjs/common';
-import type { AuthenticatedRequest, AuthUser, TrialAccessContext } from '../../auth/auth-user';
+import type { AuthenticatedRequest, AuthUser, TrialAccessContext } from '../auth-user';
 
 /** The signed-in person, as the JWT strategy loaded them for this request. */
 export const CurrentUser = createParamDecorator((_data: unknown, context: ExecutionContext): AuthUser => {

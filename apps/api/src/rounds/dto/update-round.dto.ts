@@ -1,5 +1,5 @@
 import { IntersectionType, PartialType } from '@nestjs/swagger';
-import { EditVersionDto } from '../../common/protocol/edit-version';
+import { EditVersionDto } from '../../protocol-gate/edit-version';
 import { CreateRoundDto } from './create-round.dto';
 
 /** The fields to change, and the version they were read at. */

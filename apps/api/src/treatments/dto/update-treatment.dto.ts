@@ -1,5 +1,5 @@
 import { IntersectionType, PartialType } from '@nestjs/swagger';
-import { EditVersionDto } from '../../common/protocol/edit-version';
+import { EditVersionDto } from '../../protocol-gate/edit-version';
 import { CreateTreatmentDto } from './create-treatment.dto';
 
 /** The fields to change, and the version they were read at. */

@@ -1,5 +1,5 @@
 import { ApiPropertyOptional, IntersectionType, OmitType, PartialType } from '@nestjs/swagger';
-import { EditVersionDto } from '../../common/protocol/edit-version';
+import { EditVersionDto } from '../../protocol-gate/edit-version';
 import { IsIn, IsOptional, IsString, MaxLength } from 'class-validator';
 import { TRIAL_STATUSES, type TrialStatus } from '../models/trial.model';
 import { CreateTrialDto } from './create-trial.dto';

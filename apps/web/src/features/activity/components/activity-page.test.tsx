@@ -3,7 +3,7 @@ import { screen, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { mockApi, renderWithApp } from '../../../test/render';
-import { makeTrial, person } from '../../protocol/test/trial-fixture';
+import { makeTrial, person } from '../../../test/trial-fixture';
 import { ActivityPage } from './activity-page';
 
 const me = { status: 200, body: person };

@@ -3,7 +3,7 @@ import { fireEvent, screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { mockApi, renderWithApp } from '../../../test/render';
-import { makeTrial, person, plotsFor } from '../../protocol/test/trial-fixture';
+import { makeTrial, person, plotsFor } from '../../../test/trial-fixture';
 import { HistoryDrawer } from './history-drawer';
 import { LedgerPage } from './ledger-page';
 

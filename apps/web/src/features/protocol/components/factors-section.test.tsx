@@ -2,7 +2,7 @@ import { screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { mockApi, renderWithApp } from '../../../test/render';
-import { makeTrial, person } from '../test/trial-fixture';
+import { makeTrial, person } from '../../../test/trial-fixture';
 import { FactorsSection } from './factors-section';
 
 const base = { 'GET /api/auth/me': { status: 200, body: person } };

@@ -2,7 +2,7 @@ import { screen, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { mockApi, renderWithApp } from '../../../test/render';
-import { amounts, makeTrial, person, plotsFor } from '../test/trial-fixture';
+import { amounts, makeTrial, person, plotsFor } from '../../../test/trial-fixture';
 import { PlotPlanPage } from './plot-plan-page';
 
 const base = {

@@ -3,7 +3,7 @@ import { screen, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { mockApi, renderWithApp } from '../../../test/render';
-import { makeTrial, noMaterial, person } from '../test/trial-fixture';
+import { makeTrial, noMaterial, person } from '../../../test/trial-fixture';
 import { PlotPlanPage } from './plot-plan-page';
 
 // An invented split plot: compost on whole plots (none, 2.5 cm), mulch on sub plots (bare, straw), 2 blocks at Hollow Lane.

@@ -2,7 +2,7 @@ import { screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { mockApi, renderWithApp } from '../../../test/render';
-import { amounts, makeTrial, person } from '../test/trial-fixture';
+import { amounts, makeTrial, person } from '../../../test/trial-fixture';
 import { ProtocolPage } from './protocol-page';
 
 const base = { 'GET /api/auth/me': { status: 200, body: person }, 'GET /api/trials/3/amounts': { status: 200, body: amounts } };

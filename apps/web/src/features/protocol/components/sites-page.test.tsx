@@ -2,7 +2,7 @@ import { screen, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { mockApi, renderWithApp } from '../../../test/render';
-import { makeTrial, person } from '../test/trial-fixture';
+import { makeTrial, person } from '../../../test/trial-fixture';
 import { SitesPage } from './sites-page';
 
 const base = { 'GET /api/auth/me': { status: 200, body: person }, 'GET /api/trials/3/members': { status: 200, body: [] } };

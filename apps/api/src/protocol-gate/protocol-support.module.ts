@@ -1,8 +1,8 @@
 import { Global, Module } from '@nestjs/common';
 import { SequelizeModule } from '@nestjs/sequelize';
-import { PlotRow } from '../../plots/models/plot.model';
-import { SiteRow } from '../../sites/models/site.model';
-import { Trial } from '../../trials/models/trial.model';
+import { PlotRow } from '../plots/models/plot.model';
+import { SiteRow } from '../sites/models/site.model';
+import { Trial } from '../trials/models/trial.model';
 import { ObservationsGuardService } from './observations-guard.service';
 import { ProtocolGateService } from './protocol-gate.service';
 

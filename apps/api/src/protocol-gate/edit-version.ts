@@ -3,7 +3,7 @@ import { applyDecorators, Catch, ConflictException, UseFilters, type ArgumentsHo
 import { ApiConflictResponse, ApiExtraModels, ApiProperty, getSchemaPath } from '@nestjs/swagger';
 import { IsInt, Min } from 'class-validator';
 import type { Response } from 'express';
-import { ProblemDto } from '../dto/problem.dto';
+import { ProblemDto } from '../common/dto/problem.dto';
 
 /**
  * Edit versions — how an edit made from an old copy of a record is refused instead of silently overwriting.

@@ -1,6 +1,6 @@
 import { describe, expect, it, vi } from 'vitest';
-import { ObservationsExistException } from '../exceptions/observations-exist.exception';
-import { TrialLockedException } from '../exceptions/trial-locked.exception';
+import { ObservationsExistException } from '../common/exceptions/observations-exist.exception';
+import { TrialLockedException } from '../common/exceptions/trial-locked.exception';
 import { ProtocolGateService } from './protocol-gate.service';
 
 type Fake = Record<string, ReturnType<typeof vi.fn>>;

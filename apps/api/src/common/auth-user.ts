@@ -1,5 +1,5 @@
 import type { Request } from 'express';
-import type { TrialRole } from '../trials/models/trial-membership.model';
+import type { TrialRole } from '@friable/contracts';
 
 /** The signed-in person attached to each request by the JWT strategy. */
 export interface AuthUser {

@@ -1,12 +1,12 @@
 import { Injectable, NotFoundException } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
 import type { Transaction } from 'sequelize';
-import { ActivityService } from '../../activity/activity.service';
-import { PlotRow } from '../../plots/models/plot.model';
-import { SiteRow } from '../../sites/models/site.model';
-import { Trial } from '../../trials/models/trial.model';
-import { ObservationsExistException } from '../exceptions/observations-exist.exception';
-import { refuseIfClosed } from '../exceptions/trial-locked.exception';
+import { ActivityService } from '../activity/activity.service';
+import { PlotRow } from '../plots/models/plot.model';
+import { SiteRow } from '../sites/models/site.model';
+import { Trial } from '../trials/models/trial.model';
+import { ObservationsExistException } from '../common/exceptions/observations-exist.exception';
+import { refuseIfClosed } from '../common/exceptions/trial-locked.exception';
 import { ObservationsGuardService } from './observations-guard.service';
 
 /**
