@@ -94,6 +94,21 @@ describe('sign-in lockout per account', () => {
     expect(sixth.status).toBe(429);
     expect(sixth.body.message).toMatch(LOCK_MESSAGE);
   });
+
+  it('counts sign-ins to several accounts from one address at the same moment without failing any (no deadlock on the shared address row)', async () => {
+    const people = await Promise.all([1, 2].map(() => createPerson()));
+    const stamp = Date.now();
+    const attempts = [
+      ...Array.from({ length: 8 }, (_, n) => ({ email: `parallel-${stamp}-${n}@example.org`, password: 'not the password' })),
+      ...people.map((person) => ({ email: person.email, password: TEST_PASSWORD })),
+    ];
+    const answers = await Promise.all(
+      attempts.map((body, n) => (n % 2 ? secondInstance : behindProxy).http.post('/api/auth/login').set('X-Forwarded-For', '198.51.100.77').send(body)),
+    );
+    expect(answers.map((answer) => answer.status)).toEqual([...Array(8).fill(401), 200, 200]);
+    // Ten attempts were counted for the address, less the two that proved themselves right.
+    expect((await SignInLockout.findByPk('address:198.51.100.77'))?.failures).toBe(8);
+  });
 });
 
 describe('sign-in lockout per address, and X-Forwarded-For', () => {

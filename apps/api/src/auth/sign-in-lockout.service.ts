@@ -42,8 +42,11 @@ export class SignInLockoutService {
       { subject: `account:${email}`, scope: 'account' as const, threshold: this.config.loginMaxFailures },
       { subject: `address:${address}`, scope: 'address' as const, threshold: this.config.loginAddressMaxFailures },
     ];
-    await this.sequelize.transaction(async (transaction) => {
-      await this.sequelize.query('INSERT IGNORE INTO sign_in_lockouts (subject, failures) VALUES (?, 0), (?, 0)', {
+    await this.withDeadlockRetry(() => this.sequelize.transaction(async (transaction) => {
+      // Both rows are made or locked exclusively at once, account before address, by every attempt: an INSERT
+      // IGNORE would take a shared lock on an existing address row, and two sign-ins from one address (to
+      // different accounts) holding it would deadlock on the FOR UPDATE below.
+      await this.sequelize.query('INSERT INTO sign_in_lockouts (subject, failures) VALUES (?, 0), (?, 0) ON DUPLICATE KEY UPDATE subject = subject', {
         replacements: subjects.map((s) => s.subject.slice(0, 300)),
         type: QueryTypes.INSERT,
         transaction,
@@ -61,7 +64,19 @@ export class SignInLockoutService {
         const seconds = lockoutSeconds(failures, { threshold, baseSeconds: this.config.loginLockSeconds, maxSeconds: this.config.loginLockMaxSeconds });
         await row.update({ failures, lastFailureAt: now, lockedUntil: seconds ? new Date(now.getTime() + seconds * 1000) : null }, { transaction });
       }
-    });
+    }));
+  }
+
+  /** Runs a short transaction again (up to 3 times) when MariaDB chose it as a deadlock's victim (errno 1213). */
+  private async withDeadlockRetry<T>(work: () => Promise<T>): Promise<T> {
+    for (let attempt = 1; ; attempt += 1) {
+      try {
+        return await work();
+      } catch (error) {
+        const errno = (error as { parent?: { errno?: number } }).parent?.errno;
+        if (errno !== 1213 || attempt >= 3) throw error;
+      }
+    }
   }
 
   /**
