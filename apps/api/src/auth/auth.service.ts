@@ -101,8 +101,9 @@ export class AuthService {
       const expiresAt = new Date(Date.now() + ttl * 60_000);
       await this.resets.create({ userId: user.id, tokenHash: hash, expiresAt });
       const link = `${this.mailSettings.appUrl}/reset-password/${token}`;
-      // A mail failure is logged by MailService; the answer must not tell whether the account exists.
-      await this.mail.send(passwordResetEmail({ to: user.email, name: user.name, link, expiresAt, ttlMinutes: ttl })).catch(() => undefined);
+      // Sent without waiting, so the answer takes no longer for an account's address than for any other and
+      // so does not tell whether the account exists; a mail failure is logged by MailService.
+      void this.mail.send(passwordResetEmail({ to: user.email, name: user.name, link, expiresAt, ttlMinutes: ttl })).catch(() => undefined);
     }
     return { message: RESET_ANSWER(ttl) };
   }
