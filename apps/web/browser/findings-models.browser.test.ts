@@ -59,7 +59,10 @@ describe('Findings: the model made for each measure', () => {
       const downloading = page.waitForEvent('download');
       await page.getByRole('button', { name: 'Analysis with R script' }).click();
       const download = await downloading;
-      expect(download.suggestedFilename()).toBe('FW-CLAY-26-DRAIN-Day-14-censored.zip');
+      // Named by the round analysed: the latest with data, which other tests of this run may have added to.
+      const round = (await page.getByRole('combobox', { name: 'Round' }).locator('option:checked').innerText()).trim();
+      expect(round).toMatch(/^Day \d+$/);
+      expect(download.suggestedFilename()).toBe(`FW-CLAY-26-DRAIN-${round.replace(' ', '-')}-censored.zip`);
       expect(readFileSync((await download.path())!).subarray(0, 2).toString('latin1')).toBe('PK');
 
       // Rounds over time, one click away.

@@ -43,7 +43,7 @@ describe('Findings and Quick analysis', () => {
   });
   afterAll(() => browser.close());
 
-  it('a reviewer saves an analysis and comments on it; the investigator is refused the sign-off of an unlocked trial in words; the report prints', async () => {
+  it('a reviewer saves an analysis and comments on it; the investigator is told in words that sign-off opens once the trial is locked; the report prints', async () => {
     const context = await browser.newContext({ viewport: { width: 1280, height: 800 } });
     const page = await context.newPage();
     await signIn(page, 'reviewer@example.org');
@@ -68,8 +68,9 @@ describe('Findings and Quick analysis', () => {
     await signIn(investigator, 'investigator@example.org');
     await investigator.getByRole('heading', { name: 'Trials', exact: true }).waitFor();
     await investigator.goto(address);
-    await investigator.getByRole('button', { name: 'Sign off this analysis' }).click();
-    await investigator.getByRole('alert').getByText('Lock the trial before signing off an analysis').waitFor();
+    // Sign-off is not offered on an unlocked trial; the page says when it will be.
+    await investigator.getByText('Sign-off opens once the investigator locks the trial').waitFor();
+    expect(await investigator.getByRole('button', { name: 'Sign off with this statement' }).count()).toBe(0);
 
     await investigator.goto(`${baseUrl()}/trials/${id}/report`);
     await investigator.getByRole('heading', { name: 'What these statistics show, and what they do not' }).waitFor();

@@ -2,7 +2,7 @@ import type { Observation } from '@friable/contracts';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { amendmentByMulch, buildFactorTrial } from '../designs/design-builder';
 import { expectStatus } from '../protocol/protocol-builder';
-import { createTestApp, type TestApp } from '../support/test-app';
+import { createTestApp, patchCurrent, type TestApp } from '../support/test-app';
 
 // A split-plot trial made, randomized and recorded through the API: Findings must give exactly what
 // POST /api/stats/anova gives on the same data (the engine's numbers are checked against R in libs/stats).
@@ -15,8 +15,8 @@ describe('Findings of a split-plot trial', () => {
 
   it('analyses the stored values as a split plot with its strata, equal to the stateless analysis', async () => {
     const trial = await buildFactorTrial(t, { design: 'split-plot', seed: 'findings-split', factors: amendmentByMulch, sites: [{ name: 'Split Garden', labelPrefix: 'SG', blocks: 4 }] });
-    await expectStatus(t.http.patch(trial.base).set(trial.auth).send({ noControlReason: 'Comparing amendments only.' }), 200);
-    await expectStatus(t.http.patch(trial.base).set(trial.auth).send({ status: 'active' }), 200);
+    await expectStatus(patchCurrent(t, trial.base, trial.auth, { noControlReason: 'Comparing amendments only.' }), 200);
+    await expectStatus(patchCurrent(t, trial.base, trial.auth, { status: 'active' }), 200);
     const plots = await expectStatus<Array<{ id: number; block: number; treatmentCode: string }>>(t.http.get(`${trial.base}/plots`).set(trial.auth), 200);
     expect(plots).toHaveLength(24);
     // Invented values (test data only): compost lowers crust resistance, woodchip more so, with block spread.

@@ -146,7 +146,7 @@ describe('Findings: the analysis of stored data through the engine', () => {
     expect(bad.body.errors.map((e: { field: string }) => e.field).sort()).toEqual(['alpha', 'method']);
     const unknown = await get(`${base}/findings?analysis=anova&measureId=999999&roundId=${round('Day 0').id}`);
     expect(unknown.status).toBe(422);
-    expect(unknown.body.message).toBe('measureId 999999 is not a measure of this trial.');
+    expect(unknown.body.message).toBe('measure 999999 is not a measure of this trial.');
     const empty = await get(`${base}/findings?analysis=anova&measureId=${measure('CRUST').id}&roundId=${round('Day 28').id}`);
     expect(empty.status).toBe(422);
     expect(empty.body.message).toBe('There are no values of crust resistance in Day 28 at all sites combined yet.');

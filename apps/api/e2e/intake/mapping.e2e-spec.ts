@@ -33,7 +33,7 @@ describe('Intake: the column mapping chosen in the upload step', () => {
     const response = await upload(t, built.tokens.investigator, intakePath(built), ownHeaders, 'own.csv', { mapping: '{Parcel: plotLabel' });
     expect(response.status).toBe(422);
     expect(response.body.errors).toEqual([
-      { field: 'mapping', message: 'mapping must be JSON: an object from column header to plotLabel, block, treatment, notes, missingReason, a measure code, or null' },
+      { field: 'mapping', message: 'mapping must be JSON: an object from column header to plot label, block, treatment, notes, reason the value is missing, a measure code, or null' },
     ]);
     expect(await rowCounts(t.sequelize, built.trialId)).toEqual(before);
   });

@@ -199,7 +199,7 @@ describe('the Team: members, invitations by e-mail, accepting', () => {
     const before = await TrialInvitation.count({ where: { trialId } });
     const email = uniqueEmail('nosite');
     const cases = [
-      [{ email, role: 'collaborator' }, 'siteId is required for a collaborator: choose the site they will run'],
+      [{ email, role: 'collaborator' }, 'site is required for a collaborator: choose the site they will run'],
       [{ email, role: 'collaborator', siteId: otherTrialSite }, 'siteId must be a site of this trial'],
       [{ email, role: 'reviewer', siteId: millbrook }, 'siteId applies only to collaborators'],
     ] as const;
