@@ -43,7 +43,7 @@ describe('Findings and Quick analysis', () => {
   });
   afterAll(() => browser.close());
 
-  it('a reviewer saves an analysis and comments on it; the investigator is told in words that sign-off opens once the trial is locked; the report prints', async () => {
+  it('a reviewer saves an analysis and comments on it; sign-off waits for the lock, in words, and the investigator may ask the reviewers instead; the report prints', async () => {
     const context = await browser.newContext({ viewport: { width: 1280, height: 800 } });
     const page = await context.newPage();
     await signIn(page, 'reviewer@example.org');
@@ -60,6 +60,9 @@ describe('Findings and Quick analysis', () => {
     await page.getByLabel('Your comment').fill('Check the two Hollow Lane plots flooded in Day 14.');
     await page.getByRole('button', { name: 'Add the comment' }).click();
     await page.getByRole('list', { name: 'Comments' }).getByText('Check the two Hollow Lane plots flooded in Day 14.').waitFor();
+    // Sign-off is not offered to the reviewer while the trial is unlocked; the page says when it will be.
+    await page.getByText('Sign-off opens once the investigator locks the trial').waitFor();
+    expect(await page.getByRole('button', { name: 'Sign off with this statement' }).count()).toBe(0);
     await screenshot(page, 'findings-saved-analysis-wide');
     const address = page.url();
     await context.close();
@@ -68,8 +71,8 @@ describe('Findings and Quick analysis', () => {
     await signIn(investigator, 'investigator@example.org');
     await investigator.getByRole('heading', { name: 'Trials', exact: true }).waitFor();
     await investigator.goto(address);
-    // Sign-off is not offered on an unlocked trial; the page says when it will be.
-    await investigator.getByText('Sign-off opens once the investigator locks the trial').waitFor();
+    // The trial has reviewers: its investigator may ask them to review, and signs off nothing.
+    await investigator.getByRole('button', { name: 'Ask the reviewers to review' }).waitFor();
     expect(await investigator.getByRole('button', { name: 'Sign off with this statement' }).count()).toBe(0);
 
     await investigator.goto(`${baseUrl()}/trials/${id}/report`);

@@ -200,8 +200,8 @@ describe('the Team: members, invitations by e-mail, accepting', () => {
     const email = uniqueEmail('nosite');
     const cases = [
       [{ email, role: 'collaborator' }, 'site is required for a collaborator: choose the site they will run'],
-      [{ email, role: 'collaborator', siteId: otherTrialSite }, 'siteId must be a site of this trial'],
-      [{ email, role: 'reviewer', siteId: millbrook }, 'siteId applies only to collaborators'],
+      [{ email, role: 'collaborator', siteId: otherTrialSite }, 'site must be one of this trial’s sites'],
+      [{ email, role: 'reviewer', siteId: millbrook }, 'site is chosen only for a collaborator: leave it out for a reviewer or an investigator'],
     ] as const;
     for (const [body, message] of cases) {
       const response = await invite(body);

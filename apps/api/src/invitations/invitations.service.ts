@@ -76,8 +76,8 @@ export class InvitationsService {
     const siteId = input.siteId ?? null;
     const sites = await this.siteNames.forTrial(trialId);
     if (role === 'collaborator' && siteId === null) throw fieldError('siteId', 'siteId is required for a collaborator: choose the site they will run');
-    if (role === 'collaborator' && !sites.has(siteId as number)) throw fieldError('siteId', 'siteId must be a site of this trial');
-    if (role !== 'collaborator' && siteId !== null) throw fieldError('siteId', 'siteId applies only to collaborators');
+    if (role === 'collaborator' && !sites.has(siteId as number)) throw fieldError('siteId', 'site must be one of this trial’s sites');
+    if (role !== 'collaborator' && siteId !== null) throw fieldError('siteId', 'site is chosen only for a collaborator: leave it out for a reviewer or an investigator');
 
     const user = await this.users.findOne({ where: { email } });
     if (user && (await this.memberships.count({ where: { trialId, userId: user.id, role, siteId } })) > 0) {

@@ -53,14 +53,14 @@ describe('TeamPage', () => {
       'GET /api/trials/7/invitations': { status: 200, body: [] },
       'POST /api/trials/7/invitations': {
         status: 422,
-        body: { statusCode: 422, message: 'Please correct: siteId must be a site of this trial.', errors: [{ field: 'siteId', message: 'siteId must be a site of this trial' }] },
+        body: { statusCode: 422, message: 'Please correct: site must be one of this trial’s sites.', errors: [{ field: 'siteId', message: 'site must be one of this trial’s sites' }] },
       },
     });
     renderWithApp(<TeamPage trial={trial(['investigator'])} />);
     fireEvent.change(await screen.findByLabelText('E-mail'), { target: { value: 'robin@example.org' } });
     fireEvent.change(screen.getByLabelText('Site'), { target: { value: '11' } });
     fireEvent.click(screen.getByRole('button', { name: 'Send invitation' }));
-    expect(await screen.findByText('siteId must be a site of this trial')).toBeInTheDocument();
+    expect(await screen.findByText('site must be one of this trial’s sites')).toBeInTheDocument();
     expect(calls.find((c) => c.method === 'POST')?.body).toEqual({ email: 'robin@example.org', role: 'collaborator', siteId: 11, message: null });
   });
 
