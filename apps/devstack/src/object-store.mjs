@@ -4,7 +4,6 @@
 import { mkdirSync } from 'node:fs';
 import { createConnection } from 'node:net';
 import { resolve } from 'node:path';
-import S3rver from 's3rver';
 import { repoRoot } from './env.mjs';
 
 /** The tests' object store: its own port (TEST_S3_PORT), bucket and folder, never those npm start serves from. */
@@ -42,6 +41,8 @@ export async function startObjectStore(env, { quiet = false } = {}) {
   if (port === null || (await isListening(port))) return { close: async () => {}, port };
   const directory = resolve(repoRoot, env.S3_DATA_DIR || '.data/s3');
   mkdirSync(directory, { recursive: true });
+  // Imported here, not at the top: npm start and npm test load this file before they install packages.
+  const { default: S3rver } = await import('s3rver');
   const server = new S3rver({
     address: '127.0.0.1',
     port,
