@@ -70,11 +70,27 @@ class ResponseContract {
 export function checkResponsesAgainstOpenApi(app: INestApplication): void {
   const contract = new ResponseContract(createOpenApiDocument(app));
   app.use((request: Request, response: Response, next: NextFunction) => {
-    const json = response.json.bind(response);
-    response.json = (body: unknown) => {
+    const record = (body: unknown) => {
       const violation = contract.check(request.method, request.originalUrl, response.statusCode, body);
       if (violation && !contractViolations.includes(violation)) contractViolations.push(violation);
-      return json(body);
+    };
+    const json = response.json.bind(response);
+    const send = response.send.bind(response);
+    let inJson = false;
+    response.json = (body: unknown) => {
+      record(body);
+      inJson = true;
+      try {
+        return json(body);
+      } finally {
+        inJson = false;
+      }
+    };
+    // JSON text sent as it is (the Findings cache keeps its answers written out) is checked as well.
+    response.send = (body?: unknown) => {
+      const type = String(response.getHeader('content-type') ?? '');
+      if (!inJson && type.startsWith('application/json') && (typeof body === 'string' || Buffer.isBuffer(body))) record(JSON.parse(body.toString()));
+      return send(body);
     };
     next();
   });

@@ -13,6 +13,7 @@ import { SignInLockout } from './models/sign-in-lockout.model';
 import { UserSession } from './models/user-session.model';
 import { PasswordHasher } from './password-hasher.service';
 import { SessionsService } from './sessions.service';
+import { VerifiedTokens } from './verified-tokens';
 import { SignInLockoutService } from './sign-in-lockout.service';
 import { JwtStrategy } from './strategies/jwt.strategy';
 
@@ -32,7 +33,7 @@ import { JwtStrategy } from './strategies/jwt.strategy';
     }),
   ],
   controllers: [AuthController],
-  providers: [AuthService, SignInLockoutService, SessionsService, PasswordHasher, JwtStrategy],
-  exports: [SessionsService, PasswordHasher, SignInLockoutService],
+  providers: [AuthService, SignInLockoutService, SessionsService, PasswordHasher, JwtStrategy, VerifiedTokens],
+  exports: [SessionsService, PasswordHasher, SignInLockoutService, VerifiedTokens],
 })
 export class AuthModule {}

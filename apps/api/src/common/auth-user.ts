@@ -23,4 +23,6 @@ export interface TrialAccessContext {
 export interface AuthenticatedRequest extends Request {
   user: AuthUser;
   trialAccess?: TrialAccessContext;
+  /** The access stamp read for this request, shared by its session and trial-role checks (data-stamps). */
+  accessStamp?: Promise<string>;
 }

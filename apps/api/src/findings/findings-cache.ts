@@ -1,17 +1,28 @@
 import type { FindingsAnswer } from '@friable/contracts';
 import { Injectable } from '@nestjs/common';
 import { LRUCache } from 'lru-cache';
+import { createHash } from 'node:crypto';
 import { requireInteger } from '../config/validate-environment';
 import { DataStampsService } from '../data-stamps/data-stamps.service';
 import { canonicalHash } from './canonical-hash';
 import type { FindingsQueryDto } from './dto/findings-query.dto';
 
-interface CachedFindings {
+/** An answer as it goes out: its JSON text, written once, and the entity tag of that text. */
+export interface ServedFindings {
+  body: Buffer;
+  etag: string;
+}
+
+interface CachedFindings extends ServedFindings {
   /** The data stamp read before the answer was computed (data-stamps/data-stamps.service.ts). */
   stamp: string;
   /** The snapshot hash of the analysed data (context.dataHash). */
   dataHash: string;
-  answer: FindingsAnswer;
+}
+
+function served(answer: FindingsAnswer): ServedFindings {
+  const body = Buffer.from(JSON.stringify(answer), 'utf8');
+  return { body, etag: `W/"${createHash('sha256').update(body).digest('base64url').slice(0, 27)}"` };
 }
 
 /** The cache key: trial, measure, round, site and every analysis option (choices left out stay out). */
@@ -25,30 +36,31 @@ export function findingsKey(trialId: number, query: FindingsQueryDto): string {
  * An answer is served only while the stamp of its trial (and of the whole instance) is unchanged: every
  * write through any instance replaces that stamp (DataStampsInterceptor), so one primary-key read decides.
  * Concurrent requests for the same answer share one computation. Refusals (422) are not kept.
+ * Answers are kept as the JSON text that goes out, with its entity tag, so serving one writes nothing anew.
  *
  * Bounded by FINDINGS_CACHE_MB (default 64) of answer text; least recently used answers go first.
- * Example: `cache.answer(trialId, query, () => findings.findings(trialId, query))`.
+ * Example: `cache.answer(trialId, query, () => findings.findings(trialId, query))` → `{ body, etag }`.
  */
 @Injectable()
 export class FindingsCache {
   private readonly answers = new LRUCache<string, CachedFindings>({
     maxSize: requireInteger(process.env, 'FINDINGS_CACHE_MB', 64, 1, 4096) * 1_048_576,
-    sizeCalculation: (entry) => Math.max(1, JSON.stringify(entry.answer).length),
+    sizeCalculation: (entry) => Math.max(1, entry.body.length),
   });
-  private readonly pending = new Map<string, Promise<FindingsAnswer>>();
+  private readonly pending = new Map<string, Promise<ServedFindings>>();
   /** Hits and misses since start (read by the benchmark through the log, and by tests). */
   readonly counts = { hits: 0, misses: 0 };
 
   constructor(private readonly stamps: DataStampsService) {}
 
-  async answer(trialId: number, query: FindingsQueryDto, compute: () => Promise<FindingsAnswer>): Promise<FindingsAnswer> {
+  async answer(trialId: number, query: FindingsQueryDto, compute: () => Promise<FindingsAnswer>): Promise<ServedFindings> {
     const key = findingsKey(trialId, query);
     // The stamp is read before the data: an answer is never stored under a stamp newer than its data.
     const stamp = await this.stamps.read(trialId);
     const cached = this.answers.get(key);
     if (cached?.stamp === stamp) {
       this.counts.hits += 1;
-      return cached.answer;
+      return cached;
     }
     const flightKey = `${key}@${stamp}`;
     const inFlight = this.pending.get(flightKey);
@@ -59,8 +71,9 @@ export class FindingsCache {
     this.counts.misses += 1;
     const computation = compute()
       .then((answer) => {
-        this.answers.set(key, { stamp, dataHash: answer.context.dataHash, answer });
-        return answer;
+        const out = served(answer);
+        this.answers.set(key, { stamp, dataHash: answer.context.dataHash, ...out });
+        return out;
       })
       .finally(() => this.pending.delete(flightKey));
     this.pending.set(flightKey, computation);

@@ -1,5 +1,6 @@
-import { Controller, Get, Query, StreamableFile } from '@nestjs/common';
+import { Controller, Get, Query, Res, StreamableFile } from '@nestjs/common';
 import { ApiExtraModels, ApiOkResponse, ApiOperation, ApiTags, ApiUnprocessableEntityResponse, getSchemaPath } from '@nestjs/swagger';
+import type { Response } from 'express';
 import type { TrialAccessContext } from '../common/auth-user';
 import { AnyTrialMember } from '../common/decorators/access.decorator';
 import { CurrentTrialAccess } from '../common/decorators/current-user.decorator';
@@ -39,8 +40,11 @@ export class FindingsController {
   })
   @ApiOkResponse({ schema: { anyOf: ANSWERS.map((answer) => ({ $ref: getSchemaPath(answer) })) }, description: 'Findings (the ANOVA: AnovaAnswer & {context}) or a model’s answer & {analysis, context}.' })
   @ApiUnprocessableEntityResponse({ description: 'An unknown measure, round or site, no data yet, or the engine’s sentence.' })
-  get(@CurrentTrialAccess() access: TrialAccessContext, @Query() query: FindingsQueryDto) {
-    return this.cache.answer(access.trialId, query, () => this.findings.findings(access.trialId, query));
+  async get(@CurrentTrialAccess() access: TrialAccessContext, @Query() query: FindingsQueryDto, @Res() response: Response): Promise<void> {
+    const { body, etag } = await this.cache.answer(access.trialId, query, () => this.findings.findings(access.trialId, query));
+    // The kept JSON text as it is, with its entity tag: a page asking again with If-None-Match gets 304.
+    response.type('application/json').setHeader('ETag', etag);
+    response.send(body);
   }
 
   @Get('bundle')

@@ -23,7 +23,7 @@ export class AccessGuard implements CanActivate {
     }
     const trialId = Number(request.params.trialId);
     if (!Number.isInteger(trialId) || trialId < 1) throw new NotFoundException('No such trial.');
-    const access = await this.memberships.accessFor(request.user, trialId);
+    const access = await this.memberships.accessFor(request.user, trialId, request);
     if (!access) throw new NotFoundException('No such trial.');
     if (access.adminReadOnly) {
       if (rule.adminMayRead && request.method === 'GET') {

@@ -5,6 +5,7 @@ import { ACCESS_RULE, type AccessRule } from '../../common/decorators/access.dec
 import type { AuthenticatedRequest } from '../../common/auth-user';
 import { CSRF_HEADER, SESSION_COOKIE } from '../session-cookie';
 import { SessionsService } from '../sessions.service';
+import { bearerTokenOf, VerifiedTokens } from '../verified-tokens';
 
 const SAFE_METHODS = new Set(['GET', 'HEAD', 'OPTIONS']);
 
@@ -18,6 +19,7 @@ export class JwtAuthGuard extends AuthGuard('jwt') {
   constructor(
     private readonly reflector: Reflector,
     private readonly sessions: SessionsService,
+    private readonly verified: VerifiedTokens,
   ) {
     super();
   }
@@ -28,10 +30,17 @@ export class JwtAuthGuard extends AuthGuard('jwt') {
     const request = context.switchToHttp().getRequest<AuthenticatedRequest>();
     const cookie = (request.cookies as Record<string, string> | undefined)?.[SESSION_COOKIE];
     if (!request.headers.authorization && cookie) {
-      request.user = await this.sessions.userForCookie(cookie);
+      request.user = await this.sessions.userForCookie(cookie, request);
       if (!SAFE_METHODS.has(request.method) && request.headers[CSRF_HEADER] !== '1') {
         throw new ForbiddenException('This request did not come from a Friable page (its X-Friable-CSRF header is missing), so it was refused. Reload the page and try again.');
       }
+      return true;
+    }
+    // A token the strategy checked before (and not yet expired) goes straight to its session check.
+    const token = request.headers.authorization ? bearerTokenOf(request) : null;
+    const payload = token ? this.verified.payloadOf(token) : undefined;
+    if (payload) {
+      request.user = await this.sessions.userForAccessToken(payload, request);
       return true;
     }
     return (await super.canActivate(context)) as boolean;

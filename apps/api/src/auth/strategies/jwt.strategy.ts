@@ -2,10 +2,11 @@ import { Inject, Injectable } from '@nestjs/common';
 import type { ConfigType } from '@nestjs/config';
 import { PassportStrategy } from '@nestjs/passport';
 import { createSecretKey } from 'node:crypto';
-import { ExtractJwt, Strategy } from 'passport-jwt';
+import { Strategy } from 'passport-jwt';
 import { authConfig } from '../../config/auth.config';
-import type { AuthUser } from '../../common/auth-user';
+import type { AuthenticatedRequest, AuthUser } from '../../common/auth-user';
 import { SessionsService, type AccessPayload } from '../sessions.service';
+import { bearerTokenOf, VerifiedTokens } from '../verified-tokens';
 
 /**
  * Checks a bearer access token: HS256 only, issuer and audience required, not expired (exp required too),
@@ -16,9 +17,10 @@ export class JwtStrategy extends PassportStrategy(Strategy) {
   constructor(
     @Inject(authConfig.KEY) config: ConfigType<typeof authConfig>,
     private readonly sessions: SessionsService,
+    private readonly verified: VerifiedTokens,
   ) {
     super({
-      jwtFromRequest: ExtractJwt.fromAuthHeaderAsBearerToken(),
+      jwtFromRequest: bearerTokenOf,
       ignoreExpiration: false,
       // A key object made once: given the text, jsonwebtoken tries it as a public key and then makes a secret key
       // from it on every request, a sixth of an authenticated request's processor time.
@@ -26,10 +28,16 @@ export class JwtStrategy extends PassportStrategy(Strategy) {
       algorithms: ['HS256'],
       issuer: config.jwtIssuer,
       audience: config.jwtAudience,
+      // The request keeps the access stamp read for its session check, which its trial-role check reuses.
+      passReqToCallback: true,
     });
   }
 
-  validate(payload: AccessPayload): Promise<AuthUser> {
-    return this.sessions.userForAccessToken(payload);
+  async validate(request: AuthenticatedRequest, payload: AccessPayload): Promise<AuthUser> {
+    const user = await this.sessions.userForAccessToken(payload, request);
+    // Checked and its session open: the guard takes the same token's next requests from here (verified-tokens.ts).
+    const token = bearerTokenOf(request);
+    if (token) this.verified.remember(token, payload);
+    return user;
   }
 }

@@ -1,5 +1,6 @@
 import { TRIAL_ROLES, type TrialRole } from '@friable/contracts';
-import { BelongsTo, Column, DataType, ForeignKey, Model, Table } from 'sequelize-typescript';
+import { AfterBulkCreate, AfterBulkDestroy, AfterBulkUpdate, AfterCreate, AfterDestroy, AfterUpdate, BelongsTo, Column, DataType, ForeignKey, Model, Table } from 'sequelize-typescript';
+import { accessStampHook } from '../../data-stamps/access-stamp-hook';
 import { User } from '../../users/models/user.model';
 import { Trial } from './trial.model';
 
@@ -29,4 +30,13 @@ export class TrialMembership extends Model {
 
   @BelongsTo(() => User)
   declare user?: User;
+
+  /** Any change of a membership moves the access stamp: instances drop the trial roles they keep in memory. */
+  @AfterCreate
+  @AfterBulkCreate
+  @AfterUpdate
+  @AfterBulkUpdate
+  @AfterDestroy
+  @AfterBulkDestroy
+  static readonly accessChanged = accessStampHook();
 }

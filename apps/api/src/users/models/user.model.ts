@@ -1,4 +1,5 @@
-import { Column, DataType, Model, Table } from 'sequelize-typescript';
+import { AfterBulkDestroy, AfterBulkUpdate, AfterDestroy, AfterUpdate, Column, DataType, Model, Table } from 'sequelize-typescript';
+import { accessStampHook } from '../../data-stamps/access-stamp-hook';
 
 @Table({ tableName: 'users' })
 export class User extends Model {
@@ -38,4 +39,14 @@ export class User extends Model {
 
   declare createdAt: Date;
   declare updatedAt: Date;
+
+  /**
+   * A change of what a signed-in person is (active, administrator, name, e-mail) or the account's removal moves
+   * the access stamp: instances drop the sessions they keep in memory (auth/sessions.service.ts).
+   */
+  @AfterUpdate
+  @AfterBulkUpdate
+  @AfterDestroy
+  @AfterBulkDestroy
+  static readonly accessChanged = accessStampHook(['isActive', 'isAdmin', 'name', 'email']);
 }
