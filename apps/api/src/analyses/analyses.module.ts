@@ -3,7 +3,6 @@ import { SequelizeModule } from '@nestjs/sequelize';
 import { FindingsModule } from '../findings/findings.module';
 import { MailModule } from '../mail/mail.module';
 import { Trial } from '../trials/models/trial.model';
-import { TrialMembership } from '../trials/models/trial-membership.model';
 import { AnalysesController } from './analyses.controller';
 import { AnalysesService } from './analyses.service';
 import { CommentsService } from './comments.service';
@@ -17,7 +16,7 @@ import { ReviewService } from './review.service';
 /** Saved analyses (snapshots), their review (sign-offs, requests) and comment threads. */
 @Module({
   imports: [
-    SequelizeModule.forFeature([AnalysisSnapshotRow, SnapshotCommentRow, SnapshotCommentRevisionRow, AnalysisSignOffRow, ReviewRequestRow, Trial, TrialMembership]),
+    SequelizeModule.forFeature([AnalysisSnapshotRow, SnapshotCommentRow, SnapshotCommentRevisionRow, AnalysisSignOffRow, ReviewRequestRow, Trial]),
     FindingsModule,
     MailModule,
   ],

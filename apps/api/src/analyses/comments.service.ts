@@ -15,7 +15,7 @@ import type { CommentInputDto, CommentUpdateDto } from './dto/review.dto';
 import { AnalysisSnapshotRow } from './models/analysis-snapshot.model';
 import { SnapshotCommentRevisionRow } from './models/snapshot-comment-revision.model';
 import { SnapshotCommentRow } from './models/snapshot-comment.model';
-import { ReviewService } from './review.service';
+import { TrialMemberGuard } from '../protocol-gate/trial-member-guard.service';
 
 const withPeople = () => [
   { model: User, as: 'author', attributes: ['id', 'name', 'email'] },
@@ -60,8 +60,8 @@ export class CommentsService {
     @InjectConnection() private readonly sequelize: Sequelize,
     @Inject(mailConfig.KEY) private readonly mailSettings: ConfigType<typeof mailConfig>,
     private readonly activity: ActivityService,
-    private readonly review: ReviewService,
     private readonly mail: MailService,
+    private readonly members: TrialMemberGuard,
   ) {}
 
   /** Every comment of the analysis, oldest first (replies carry parentId). */
@@ -117,8 +117,9 @@ export class CommentsService {
         changed.push('edited');
       }
       if (input.resolved !== undefined && input.resolved !== (row.resolvedAt !== null)) {
-        const mayResolve = row.authorId === user.id || access.roles.includes('investigator') || access.roles.includes('reviewer');
-        if (!mayResolve) throw new ForbiddenException('Only the comment’s author, the investigators and the reviewers can resolve a thread.');
+        if (row.authorId !== user.id) {
+          this.members.requireRole(access, ['investigator', 'reviewer'], 'Only the comment’s author, the investigators and the reviewers can resolve a thread.');
+        }
         row.resolvedAt = input.resolved ? new Date() : null;
         row.resolvedById = input.resolved ? user.id : null;
         changed.push(input.resolved ? 'resolved' : 'reopened');
@@ -160,7 +161,7 @@ export class CommentsService {
 
   private async notifyReply(trialId: number, snapshot: AnalysisSnapshotRow, root: SnapshotCommentRow, user: AuthUser, body: string): Promise<void> {
     const trial = (await this.trials.findByPk(trialId))!;
-    const reviewers = await this.review.people(trialId, 'reviewer');
+    const reviewers = await this.members.people(trialId, 'reviewer');
     const recipients = new Map(reviewers.map((r) => [r.email, r.name]));
     if (root.author) recipients.set(root.author.email, root.author.name);
     recipients.delete(user.email);

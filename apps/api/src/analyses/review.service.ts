@@ -11,19 +11,14 @@ import { FindingsService } from '../findings/findings.service';
 import { MailService } from '../mail/mail.service';
 import { noticeEmail } from '../mail/notice-email';
 import { Trial } from '../trials/models/trial.model';
-import { TrialMembership } from '../trials/models/trial-membership.model';
-import { User } from '../users/models/user.model';
 import { AnalysisSignOffRow } from './models/analysis-sign-off.model';
 import { AnalysisSnapshotRow } from './models/analysis-snapshot.model';
 import { ReviewRequestRow } from './models/review-request.model';
 import { SignOffRefusedException } from './sign-off-refused.exception';
+import { TrialMemberGuard, type TrialMemberPerson } from '../protocol-gate/trial-member-guard.service';
 
 /** A person expected to sign: the trial's reviewers, or its investigators when it has none. */
-interface Signer {
-  id: number;
-  name: string;
-  email: string;
-}
+type Signer = TrialMemberPerson;
 
 const plural = (n: number, word: string) => `${n} ${word}${n === 1 ? '' : 's'}`;
 
@@ -52,13 +47,13 @@ export class ReviewService {
     @InjectModel(AnalysisSnapshotRow) private readonly snapshots: typeof AnalysisSnapshotRow,
     @InjectModel(AnalysisSignOffRow) private readonly signOffs: typeof AnalysisSignOffRow,
     @InjectModel(ReviewRequestRow) private readonly requests: typeof ReviewRequestRow,
-    @InjectModel(TrialMembership) private readonly memberships: typeof TrialMembership,
     @InjectModel(Trial) private readonly trials: typeof Trial,
     @InjectConnection() private readonly sequelize: Sequelize,
     @Inject(mailConfig.KEY) private readonly mailSettings: ConfigType<typeof mailConfig>,
     private readonly findings: FindingsService,
     private readonly activity: ActivityService,
     private readonly mail: MailService,
+    private readonly members: TrialMemberGuard,
   ) {}
 
   /** Sign-offs and review status of each snapshot, given the data hash of today's data for each (null: unknown). */
@@ -121,7 +116,7 @@ export class ReviewService {
     const id = await this.sequelize.transaction(async (transaction) => {
       const trial = await this.trials.findByPk(trialId, { transaction, lock: transaction.LOCK.UPDATE });
       if (trial?.status !== 'locked') throw new SignOffRefusedException('not-locked');
-      const role = await this.signingRole(trialId, access.roles, transaction);
+      const role = await this.signingRole(access, transaction);
       const earlier = await this.signOffs.findOne({ where: { snapshotId: snapshot.id, userId: user.id }, transaction });
       if (earlier) throw new SignOffRefusedException('already', 'you', earlier.createdAt);
       if (current !== snapshot.dataHash) throw new SignOffRefusedException('stale');
@@ -182,11 +177,9 @@ export class ReviewService {
     return { notified, requestedAt: row.createdAt.toISOString() };
   }
 
-  /** The people holding a role on the trial, one entry each, by name. */
-  async people(trialId: number, role: TrialRole, transaction?: Transaction): Promise<Signer[]> {
-    const rows = await this.memberships.findAll({ where: { trialId, role }, include: [{ model: User, attributes: ['id', 'name', 'email'] }], transaction });
-    const byId = new Map(rows.filter((r) => r.user).map((r) => [r.userId, { id: r.userId, name: r.user!.name, email: r.user!.email }]));
-    return [...byId.values()].sort((a, b) => a.name.localeCompare(b.name));
+  /** The people holding a role on the trial, one entry each, by name (the trial member guard's answer). */
+  people(trialId: number, role: TrialRole, transaction?: Transaction): Promise<Signer[]> {
+    return this.members.people(trialId, role, transaction);
   }
 
   private async expectedSigners(trialId: number): Promise<{ role: 'reviewer' | 'investigator'; people: Signer[] }> {
@@ -194,12 +187,10 @@ export class ReviewService {
     return reviewers.length ? { role: 'reviewer', people: reviewers } : { role: 'investigator', people: await this.people(trialId, 'investigator') };
   }
 
-  private async signingRole(trialId: number, roles: TrialRole[], transaction: Transaction): Promise<'reviewer' | 'investigator'> {
-    if (roles.includes('reviewer')) return 'reviewer';
-    if (roles.includes('investigator')) {
-      if ((await this.people(trialId, 'reviewer', transaction)).length === 0) return 'investigator';
-      throw new ForbiddenException('This trial has reviewers, so they sign off its analyses; an investigator signs only when a trial has no reviewer.');
-    }
-    throw new ForbiddenException('Only the trial’s reviewers (or its investigator, when it has no reviewer) can sign off an analysis.');
+  private async signingRole(access: TrialAccessContext, transaction: Transaction): Promise<'reviewer' | 'investigator'> {
+    this.members.requireRole(access, ['reviewer', 'investigator'], 'Only the trial’s reviewers (or its investigator, when it has no reviewer) can sign off an analysis.');
+    if (this.members.holds(access, ['reviewer'])) return 'reviewer';
+    if ((await this.members.countPeople(access.trialId, 'reviewer', transaction)) === 0) return 'investigator';
+    throw new ForbiddenException('This trial has reviewers, so they sign off its analyses; an investigator signs only when a trial has no reviewer.');
   }
 }

@@ -22,6 +22,7 @@ import { MailService } from '../mail/mail.service';
 import { SiteNamesService } from '../team/site-names.service';
 import { Trial } from '../trials/models/trial.model';
 import { TrialMembership } from '../trials/models/trial-membership.model';
+import { TrialMemberGuard } from '../protocol-gate/trial-member-guard.service';
 import { User } from '../users/models/user.model';
 import { toPublicUser } from '../users/public-user';
 import type { AcceptInvitationDto } from './dto/accept-invitation.dto';
@@ -58,6 +59,7 @@ export class InvitationsService {
     private readonly sessions: SessionsService,
     private readonly hasher: PasswordHasher,
     private readonly lockout: SignInLockoutService,
+    private readonly members: TrialMemberGuard,
   ) {}
 
   /** Every invitation of the trial, newest first, with its status now. */
@@ -80,7 +82,7 @@ export class InvitationsService {
     if (role !== 'collaborator' && siteId !== null) throw fieldError('siteId', 'site is chosen only for a collaborator: leave it out for a reviewer or an investigator');
 
     const user = await this.users.findOne({ where: { email } });
-    if (user && (await this.memberships.count({ where: { trialId, userId: user.id, role, siteId } })) > 0) {
+    if (user && (await this.members.holdsPlace(trialId, user.id, role, siteId))) {
       throw new ConflictException(`${email} is already ${role === 'investigator' ? 'an' : 'a'} ${role}${siteId ? ` at ${sites.get(siteId)}` : ''} on this trial.`);
     }
     const open = await this.invitations.findOne({

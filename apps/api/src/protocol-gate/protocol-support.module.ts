@@ -3,14 +3,16 @@ import { SequelizeModule } from '@nestjs/sequelize';
 import { PlotRow } from '../plots/models/plot.model';
 import { SiteRow } from '../sites/models/site.model';
 import { Trial } from '../trials/models/trial.model';
+import { TrialMembership } from '../trials/models/trial-membership.model';
 import { ObservationsGuardService } from './observations-guard.service';
 import { ProtocolGateService } from './protocol-gate.service';
+import { TrialMemberGuard } from './trial-member-guard.service';
 
-/** The write gate and the observations guard, shared by every protocol feature. */
+/** The write gate, the observations guard and the trial member guard, shared by every protocol feature. */
 @Global()
 @Module({
-  imports: [SequelizeModule.forFeature([Trial, SiteRow, PlotRow])],
-  providers: [ObservationsGuardService, ProtocolGateService],
-  exports: [ObservationsGuardService, ProtocolGateService],
+  imports: [SequelizeModule.forFeature([Trial, SiteRow, PlotRow, TrialMembership])],
+  providers: [ObservationsGuardService, ProtocolGateService, TrialMemberGuard],
+  exports: [ObservationsGuardService, ProtocolGateService, TrialMemberGuard],
 })
 export class ProtocolSupportModule {}

@@ -13,6 +13,7 @@ import { noticeEmail } from '../mail/notice-email';
 import { Trial } from '../trials/models/trial.model';
 import { TrialDeparture } from '../trials/models/trial-departure.model';
 import { TrialMembership } from '../trials/models/trial-membership.model';
+import { TrialMemberGuard } from '../protocol-gate/trial-member-guard.service';
 import { User } from '../users/models/user.model';
 import type { UpdateMemberDto } from './dto/update-member.dto';
 import { SiteNamesService } from './site-names.service';
@@ -44,6 +45,7 @@ export class MembersService {
     private readonly siteNames: SiteNamesService,
     private readonly activity: ActivityService,
     private readonly mail: MailService,
+    private readonly guard: TrialMemberGuard,
   ) {}
 
   /** Everyone holding a role on the trial: investigators first, then collaborators, then reviewers, by name. */
@@ -145,15 +147,15 @@ export class MembersService {
     // The trial row is locked so two changes to the team cannot both remove "the other" investigator.
     const trial = await this.trials.findByPk(trialId, { transaction, lock: transaction.LOCK.UPDATE });
     if (!trial) throw new NotFoundException('No such trial.');
-    const rows = await this.memberships.findAll({ where: { trialId, userId }, transaction });
-    const person = rows.length ? await this.users.findByPk(userId, { transaction }) : null;
+    const rows = await this.guard.requireMember(trialId, userId, transaction);
+    const person = await this.users.findByPk(userId, { transaction });
     if (!person) throw new NotFoundException(`Person ${userId} is not on this trial's team.`);
     return { trial, rows, person };
   }
 
   private async keepAnInvestigator(trialId: number, rows: TrialMembership[], transaction: Transaction): Promise<void> {
     if (!rows.some((r) => r.role === 'investigator')) return;
-    const others = await this.memberships.count({ where: { trialId, role: 'investigator' }, distinct: true, col: 'user_id', transaction });
+    const others = await this.guard.countPeople(trialId, 'investigator', transaction);
     if (others <= 1) {
       throw new ConflictException('A trial always keeps at least one investigator: invite or name another investigator first.');
     }
