@@ -60,3 +60,62 @@ describe('an edit made while someone else saved the same treatment', () => {
     });
   }
 });
+
+// Locking the trial from the Ledger after someone else saved it: the same conflict dialog as an edit, and the lock on purpose.
+describe('a lock chosen while someone else saved the trial', () => {
+  const session = useBrowserSession();
+
+  for (const size of [
+    { name: 'laptop', width: 1280, height: 800 },
+    { name: 'phone', width: 390, height: 844 },
+  ]) {
+    it(`shows the status chosen beside the stored one and locks only when asked (${size.name})`, async () => {
+      const page = session.page;
+      await page.setViewportSize({ width: size.width, height: size.height });
+      await signIn(page, 'investigator@example.org');
+      await page.getByRole('heading', { name: 'Trials', exact: true }).waitFor();
+      const code = `LC-${Date.now().toString(36).toUpperCase()}`;
+      const trial = await api(page, 'POST', '/trials', { code, title: 'Browser test: a lock and an edit at once', design: 'rcbd', seed: 'lock-conflict', startDate: '2026-05-01' });
+      expect(trial.status).toBe(201);
+      const base = `/trials/${trial.body.id}`;
+      for (const body of [
+        { code: 'C', name: 'Control', isControl: true },
+        { code: 'G', name: 'Gypsum', rateValue: 40, rateUnit: 'lb/1000ft2', materialKind: 'gypsum' },
+      ]) {
+        expect((await api(page, 'POST', `${base}/treatments`, body)).status).toBe(201);
+      }
+      const measure = await api(page, 'POST', `${base}/measures`, { code: 'DT', name: 'drain time', unit: 's', kind: 'time-with-cutoff', cutoff: 600, decimals: 0, higherIsBetter: false });
+      expect(measure.status).toBe(201);
+      expect((await api(page, 'POST', `${base}/rounds`, { label: 'Day 0', dayOffset: 0, measureIds: [measure.body.id] })).status).toBe(201);
+      const site = await api(page, 'POST', `${base}/sites`, { name: 'Lock Garden', shape: 'rectangle', lengthM: 1, widthM: 1, blocks: 4, labelPrefix: 'LG' });
+      expect(site.status).toBe(201);
+      expect((await api(page, 'POST', `${base}/sites/${site.body.id}/randomize`, {})).status).toBe(200);
+      const draft = await api<{ version: number }>(page, 'GET', base);
+      expect((await api(page, 'PATCH', base, { version: draft.body.version, status: 'active' })).status).toBe(200);
+
+      await page.goto(`${baseUrl()}${base}/ledger`);
+      await page.getByRole('button', { name: 'Lock the trial' }).waitFor();
+      // Someone else saves the trial after the page read it.
+      const opened = await api<{ version: number }>(page, 'GET', base);
+      expect((await api(page, 'PATCH', base, { version: opened.body.version, title: 'Renamed by someone else' })).status).toBe(200);
+      await page.getByRole('button', { name: 'Lock the trial' }).click();
+      await page.getByRole('alertdialog').getByRole('button', { name: 'Lock', exact: true }).click();
+
+      const conflict = page.getByRole('dialog', { name: `Someone else changed trial ${code}` });
+      await conflict.waitFor();
+      const status = conflict.getByRole('group', { name: 'Status' });
+      await status.getByText('Locked for analysis', { exact: true }).waitFor();
+      await status.getByText('Open for data', { exact: true }).waitFor();
+      await screenshot(page, `lock-conflict-${size.name}`);
+      expect(await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth)).toBeLessThanOrEqual(0);
+      expect((await api<{ status: string }>(page, 'GET', base)).body.status).toBe('active');
+
+      await conflict.getByRole('button', { name: 'Keep mine' }).click();
+      await conflict.waitFor({ state: 'detached' });
+      await page.getByRole('button', { name: 'Unlock the trial' }).waitFor();
+      const stored = await api<{ status: string; title: string; version: number }>(page, 'GET', base);
+      expect(stored.body).toMatchObject({ status: 'locked', title: 'Renamed by someone else', version: opened.body.version + 2 });
+      expect(session.outside).toEqual([]);
+    });
+  }
+});

@@ -43,6 +43,34 @@ describe('protocol versions, stale edits and archiving', () => {
     { name: 'site', path: () => `${base}/sites/${built.sites['Test Garden']}`, table: 'sites', id: () => built.sites['Test Garden']!, column: 'location', field: 'location', first: 'North bed', second: 'South bed' },
   ];
 
+  it('a lock or an unlock sent from an old copy of the trial answers 409 with the trial as stored, and changes nothing', async () => {
+    // A trial of its own, randomized so that it can be activated and locked.
+    const ready = await buildSmallTrial(t);
+    const base = `/api/trials/${ready.trialId}`;
+    const auth = bearer(ready.token);
+    const detail = async () => expectStatus<TrialDetail>(t.http.get(base).set(auth), 200);
+    const draft = await detail();
+    const activated = await t.http.patch(base).set(auth).send({ version: draft.version, status: 'active' });
+    expect(activated.status, JSON.stringify(activated.body)).toBe(200);
+    const opened = await detail();
+    // Someone else saves the trial after the page read it.
+    expect((await t.http.patch(base).set(auth).send({ version: opened.version, title: 'Renamed before the lock' })).status).toBe(200);
+    const staleLock = await t.http.patch(base).set(auth).send({ version: opened.version, status: 'locked' });
+    expect(staleLock.status).toBe(409);
+    expect(staleLock.body.current).toMatchObject({ id: ready.trialId, version: opened.version + 1, status: 'active', title: 'Renamed before the lock' });
+    expect((await stored('trials', ready.trialId)).status).toBe('active');
+
+    const locked = await t.http.patch(base).set(auth).send({ version: opened.version + 1, status: 'locked' });
+    expect(locked.status, JSON.stringify(locked.body)).toBe(200);
+    const lockedVersion = (await detail()).version;
+    // An unlock from the page as it was before the lock is refused the same way.
+    const staleUnlock = await t.http.patch(base).set(auth).send({ version: opened.version + 1, status: 'active' });
+    expect(staleUnlock.status).toBe(409);
+    expect(staleUnlock.body.current).toMatchObject({ status: 'locked', version: lockedVersion });
+    expect((await stored('trials', ready.trialId)).status).toBe('locked');
+    expect((await t.http.patch(base).set(auth).send({ version: lockedVersion, status: 'active' })).status).toBe(200);
+  });
+
   it.each(records)('two edits of a $name at once: the first is saved, the second answers 409 with the current $name', async (r) => {
     const before = await detail();
     const version = r.name === 'trial' ? before.version : (before[`${r.name === 'round' ? 'rounds' : `${r.name}s`}` as 'treatments'].find((row) => row.id === r.id())!.version);

@@ -183,6 +183,34 @@ describe('LedgerPage', () => {
     );
   });
 
+  it('meets a lock sent from an old copy of the trial with the edit conflict dialog, and locks on purpose with the stored version', async () => {
+    const api = replies();
+    api['PATCH /api/trials/3'] = {
+      status: 409,
+      body: { statusCode: 409, error: 'Conflict', message: 'Not saved: trial CLAY-T was changed by someone else since you opened it.', current: activeTrial({ version: 5 }) },
+    };
+    const calls = mockApi(api);
+    renderWithApp(<LedgerPage trial={activeTrial({ version: 4 })} />);
+    await screen.findByText(/3 of 3 values recorded/);
+    await userEvent.click(screen.getByRole('button', { name: 'Lock the trial' }));
+    await userEvent.click(within(await screen.findByRole('alertdialog')).getByRole('button', { name: 'Lock' }));
+    const conflict = await screen.findByRole('dialog', { name: 'Someone else changed trial CLAY-T' });
+    const status = within(conflict).getByRole('group', { name: 'Status' });
+    expect(status).toHaveTextContent('YoursLocked for analysis');
+    expect(status).toHaveTextContent('Stored nowOpen for data');
+    expect(screen.queryByRole('alert')).not.toBeInTheDocument();
+
+    api['PATCH /api/trials/3'] = { status: 200, body: activeTrial({ status: 'locked', version: 6 }) };
+    await userEvent.click(within(conflict).getByRole('button', { name: 'Keep mine' }));
+    await waitFor(() =>
+      expect(calls.filter((c) => c.method === 'PATCH').map((c) => c.body)).toEqual([
+        { status: 'locked', version: 4 },
+        { status: 'locked', version: 5 },
+      ]),
+    );
+    expect(screen.queryByRole('dialog', { name: 'Someone else changed trial CLAY-T' })).not.toBeInTheDocument();
+  });
+
   it('lets a collaborator read another site without editing, and offers no lock', async () => {
     mockApi(replies());
     renderWithApp(<LedgerPage trial={activeTrial({ myRoles: ['collaborator'], mySiteIds: [32] })} />, { route: '/trials/3/ledger?site=31&round=21' });

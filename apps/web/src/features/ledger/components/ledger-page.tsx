@@ -11,7 +11,7 @@ import { readValueText } from '../../../lib/value-reading';
 import { writeNumber } from '../../../lib/number-reading';
 import { useObservations } from '../../../lib/api/get-observations';
 import { useSitePlots } from '../../../lib/api/get-site-plots';
-import { useSetTrialStatus } from '../api/set-trial-status';
+import { useTrialStatusChange } from '../hooks/use-trial-status-change';
 import { useCellSave } from '../hooks/use-cell-save';
 import { CellPanel } from './cell-panel';
 import { ConflictDialog } from './conflict-dialog';
@@ -22,6 +22,7 @@ import { LedgerGrid } from './ledger-grid';
 import { LedgerLegend } from './ledger-legend';
 import { measureHeading } from '../../../lib/measure-heading';
 import { PhotoDialog } from './photo-dialog';
+import { StatusConflict } from './status-conflict';
 import { UnlockButton } from './unlock-dialog';
 
 /** Ledger: per site and round, every plot's values in an editable grid, with history, photos and the trial lock. */
@@ -35,7 +36,7 @@ export function LedgerPage({ trial }: { trial: TrialDetail }) {
   const observations = useObservations(trial.id, site?.randomizedAt ? site.id : undefined, round?.id);
   const access = valueAccess(trial, site?.id);
   const cells = useCellSave(trial.id, site?.id ?? 0, round?.id ?? 0);
-  const lock = useSetTrialStatus(trial.id, trial.version);
+  const lock = useTrialStatusChange(trial);
   const [focused, setFocused] = useState<{ plot: Plot; measure: Measure } | null>(null);
   const [historyOf, setHistoryOf] = useState<Observation | null>(null);
   const [photoOf, setPhotoOf] = useState<Plot | null>(null);
@@ -84,18 +85,19 @@ export function LedgerPage({ trial }: { trial: TrialDetail }) {
             text="Lock the trial"
             confirmText="Lock"
             intent="warning"
-            loading={lock.isPending}
+            loading={lock.mutation.isPending}
             question="Lock the trial for analysis? Nobody can change its protocol or values until you unlock it."
-            onConfirm={() => lock.mutate('locked')}
+            onConfirm={() => lock.send({ status: 'locked' })}
           />
         )}
-        {investigator && trial.status === 'locked' && <UnlockButton lock={lock} />}
+        {investigator && trial.status === 'locked' && <UnlockButton trial={trial} />}
       </div>
-      {lock.error && (
+      {lock.mutation.error && (
         <Callout intent="danger" compact role="alert">
-          {lock.error.message}
+          {lock.mutation.error.message}
         </Callout>
       )}
+      <StatusConflict conflict={lock.conflict} onKeepMine={lock.keepMine} onTakeStored={lock.takeStored} />
       {access.reason && (
         <Callout intent={trial.status === 'locked' ? 'warning' : 'none'} icon={trial.status === 'locked' ? 'lock' : 'eye-open'} className="fr-readonly-notice" compact>
           {access.reason}
