@@ -1,14 +1,18 @@
 import { Button, Callout } from '@blueprintjs/core';
-import type { TrialDetail } from '@friable/contracts';
+import type { TrialDetail, TrialUpdateInput } from '@friable/contracts';
 import { ApiError } from '../../../lib/api-client';
+import { useVersionedForm } from '../../../lib/edit-conflict';
 import { useUpdateTrial } from '../api/update-trial';
+import { VersionConflict } from './version-conflict';
 
 /**
  * Activation: a draft trial becomes active (collaborators may record data) once every check passes.
- * The checks come with the trial; a refusal from the server lists its own problems too.
+ * The checks come with the trial; a refusal from the server lists its own problems too. Activating a trial
+ * someone else saved since the page read it shows the edit conflict dialog, as any edit of the trial does.
  */
 export function ActivationPanel({ trial, canEdit }: { trial: TrialDetail; canEdit: boolean }) {
   const update = useUpdateTrial(trial.id);
+  const activation = useVersionedForm<{ status: 'active' }, TrialDetail, TrialUpdateInput>(update, (mine, version) => ({ ...mine, version: version ?? trial.version }), trial, () => undefined);
   if (trial.status !== 'draft') return null;
   const refusal = update.error instanceof ApiError ? update.error : null;
   const problems = refusal?.details?.length ? refusal.details.map((d) => d.message) : trial.activation.problems;
@@ -43,9 +47,10 @@ export function ActivationPanel({ trial, canEdit }: { trial: TrialDetail; canEdi
           icon="play"
           text="Activate trial"
           loading={update.isPending}
-          onClick={() => update.mutate({ status: 'active', version: trial.version })}
+          onClick={() => activation.send({ status: 'active' })}
         />
       )}
+      <VersionConflict what={`trial ${trial.code}`} conflict={activation.conflict} onKeepMine={activation.keepMine} onTakeStored={activation.takeStored} />
     </Callout>
   );
 }

@@ -44,6 +44,31 @@ describe('ProtocolPage', () => {
     expect(calls.find((c) => c.method === 'PATCH')?.body).toEqual({ status: 'active', version: 1 });
   });
 
+  it('meets an activation sent from an old copy of the trial with the edit conflict dialog, and activates on purpose with the stored version', async () => {
+    const api: Record<string, { status: number; body: unknown }> = {
+      ...base,
+      'PATCH /api/trials/3': {
+        status: 409,
+        body: { statusCode: 409, error: 'Conflict', message: 'Not saved: trial CLAY-T was changed by someone else since you opened it.', current: makeTrial({ version: 2 }) },
+      },
+    };
+    const calls = mockApi(api);
+    renderWithApp(<ProtocolPage trial={makeTrial()} />);
+    await userEvent.click(screen.getByRole('button', { name: 'Activate trial' }));
+    const conflict = await screen.findByRole('dialog', { name: 'Someone else changed trial CLAY-T' });
+    const status = within(conflict).getByRole('group', { name: 'Status' });
+    expect(status).toHaveTextContent('Yoursactive');
+    expect(status).toHaveTextContent('Stored nowdraft');
+    api['PATCH /api/trials/3'] = { status: 200, body: makeTrial({ status: 'active', version: 3 }) };
+    await userEvent.click(within(conflict).getByRole('button', { name: 'Keep mine' }));
+    await waitFor(() =>
+      expect(calls.filter((c) => c.method === 'PATCH').map((c) => c.body)).toEqual([
+        { status: 'active', version: 1 },
+        { status: 'active', version: 2 },
+      ]),
+    );
+  });
+
   it('shows the server’s 422 message beside the field it names', async () => {
     mockApi({
       ...base,
