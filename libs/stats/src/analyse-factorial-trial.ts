@@ -205,7 +205,7 @@ export function analyseFactorialTrial(request: FactorialRequest): FactorialTrial
     };
   };
   const strip = ({ contrast: _contrast, centred: _centred, ...rest }: Entry): FactorialMean => Object.freeze(rest);
-  const difference = (a: Float64Array, b: Float64Array) => Float64Array.from(a, (value, i) => value - b[i]!);
+  const difference = differenceOf;
 
   const compare = (entries: readonly Entry[], methods: readonly MeanSeparationMethod[], control?: string, by: FactorialFit = fit): StratumComparisons => {
     const k = entries.length;
@@ -322,6 +322,13 @@ export function analyseFactorialTrial(request: FactorialRequest): FactorialTrial
   });
 }
 
+/** a − b, element by element. */
+function differenceOf(a: Float64Array, b: Float64Array): Float64Array {
+  const out = new Float64Array(a.length);
+  for (let i = 0; i < a.length; i++) out[i] = a[i]! - b[i]!;
+  return out;
+}
+
 /** A kind of difference: the pairs of level combinations (of `which`) it covers. */
 interface DifferenceKind {
   readonly kind: string;
@@ -378,8 +385,7 @@ function differenceErrors(layout: FactorialLayout, fit: FactorialFit, alpha: num
     let critical = 0;
     let errorTerm = '';
     for (const [a, b] of pairs) {
-      const other = fit.mean(kind.which, b);
-      const contrast = Float64Array.from(fit.mean(kind.which, a), (value, i) => value - other[i]!);
+      const contrast = differenceOf(fit.mean(kind.which, a), fit.mean(kind.which, b));
       const estimate = fit.estimate(contrast);
       variance += estimate.variance;
       df += estimate.df;
@@ -410,10 +416,9 @@ function sliceTests(
     for (const [f, g] of [set, [...set].reverse()] as [number, number][]) {
       layout.factors[g]!.levels.forEach((level, l) => {
         const levelsAt = (a: number) => (f < g ? [a, l] : [l, a]);
-        const base = fit.mean(set, levelsAt(0));
-        const by = sliceFit(Float64Array.from(fit.mean(set, levelsAt(1)), (value, i) => value - base[i]!));
+        const by = sliceFit(differenceOf(fit.mean(set, levelsAt(1)), fit.mean(set, levelsAt(0))));
         const entries = layout.factors[f]!.levels.map((label, a) => ({ ...entry(set, levelsAt(a), by), treatment: label }));
-        const rows = entries.slice(1).map((e) => Float64Array.from(e.contrast, (value, i) => value - entries[0]!.contrast[i]!));
+        const rows = entries.slice(1).map((e) => differenceOf(e.contrast, entries[0]!.contrast));
         const test = by.test(rows);
         const separated = compare(entries, methods, undefined, by);
         slices.push(

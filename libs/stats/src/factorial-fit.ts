@@ -176,6 +176,23 @@ export function classicalFactorialFit(layout: FactorialLayout, sitesRandom: bool
     }
     return keys;
   };
+  const membersByTerm = new Map<string, Map<number, number[]>>();
+  // The plots of every cell of a term, by cell key (cached per term).
+  const cellMembers = (factors: readonly number[]): Map<number, number[]> => {
+    let members = membersByTerm.get(factors.join(','));
+    if (!members) {
+      members = new Map();
+      const keys = cellKeys(factors);
+      for (let i = 0; i < n; i++) {
+        const list = members.get(keys[i]!);
+        if (list) list.push(i);
+        else members.set(keys[i]!, [i]);
+      }
+      membersByTerm.set(factors.join(','), members);
+    }
+    return members;
+  };
+  const meansByKey = new Map<string, Float64Array>();
   const estimate = (contrast: Float64Array): FactorialEstimate => {
     let value = 0;
     for (let i = 0; i < n; i++) value += contrast[i]! * layout.y[i]!;
@@ -192,19 +209,17 @@ export function classicalFactorialFit(layout: FactorialLayout, sitesRandom: bool
     residuals: sweep.residuals,
     leverage: sweep.leverage,
     mean(factors: readonly number[], levels: readonly number[]): Float64Array {
-      const keys = cellKeys(factors);
       let key = 0;
       factors.forEach((f, j) => (key = key * layout.factors[f]!.levels.length + levels[j]!));
+      // One weight vector per mean, so the variances cached by vector serve every later use of it.
+      const name = `${factors.join(',')}|${key}`;
+      const known = meansByKey.get(name);
+      if (known) return known;
+      const members = cellMembers(factors).get(key);
+      if (!members) throw new StatsInputError('not estimable', 'a mean has no plots');
       const weights = new Float64Array(n);
-      let count = 0;
-      for (let i = 0; i < n; i++) {
-        if (keys[i] === key) {
-          weights[i] = 1;
-          count++;
-        }
-      }
-      if (count === 0) throw new StatsInputError('not estimable', 'a mean has no plots');
-      for (let i = 0; i < n; i++) weights[i] = weights[i]! / count;
+      for (const i of members) weights[i] = 1 / members.length;
+      meansByKey.set(name, weights);
       return weights;
     },
     estimate,

@@ -3,6 +3,7 @@ import { relativeError } from '../test-support/reference-files';
 import { oatsModel } from '../test-support/reml-models';
 import type { CovarianceStructure } from './covariance-structure';
 import { denseRemlProblem } from './dense-reml-problem';
+import { bilinearForm } from './symmetric-matrix';
 
 // The level-sum shortcut for random intercepts must give exactly what plain dense algebra gives: the same
 // structure written with dense derivatives (Z Z' as a matrix) is the reference.
@@ -40,6 +41,24 @@ describe('denseRemlProblem', () => {
     fast.traceProducts!.forEach((value, i) => expect(relativeError(value, slow.traceProducts![i]!)).toBeLessThan(1e-11));
     fast.secondForms!.forEach((form, i) => form.forEach((value, j) => expect(Math.abs(value - slow.secondForms![i]![j]!)).toBeLessThan(1e-11 * (1 + Math.abs(value)))));
     fast.traces!.forEach((value, i) => expect(relativeError(value, slow.traces![i]!)).toBeLessThan(1e-12));
+  });
+
+  it("gives v'F_kl v (the optimizer's average information) as the second-order sums do, after an order-1 evaluation and without one", () => {
+    const problem = denseRemlProblem({ y, design: coding.design, groupOf, structure });
+    const full = problem.evaluate(theta, 2);
+    const m = coding.design.columns + 1;
+    const v = Float64Array.from({ length: m }, (_, i) => (i === m - 1 ? 1 : 0.3 * ((i % 3) - 1)));
+    const K = structure.parameters.length;
+    const cold = problem.responseInformation!(theta, v);
+    problem.evaluate(theta, 1);
+    const warm = problem.responseInformation!(theta, v);
+    for (let k = 0; k < K; k++) {
+      for (let l = 0; l < K; l++) {
+        const expected = bilinearForm(v, full.secondForms![k * K + l]!, v, m);
+        expect(relativeError(cold[k * K + l]!, expected)).toBeLessThan(1e-11);
+        expect(relativeError(warm[k * K + l]!, expected)).toBeLessThan(1e-11);
+      }
+    }
   });
 
   it('solves V⁻¹v group by group', () => {

@@ -184,8 +184,12 @@ export function denseRemlProblem(data: DenseRemlData): RemlProblem {
     return values;
   });
 
+  // The last order-1 evaluation's V_g⁻¹ and V_g⁻¹A_g, which responseInformation at the same θ reuses.
+  let kept: { theta: Float64Array; inverses: Float64Array[]; solved: Float64Array[]; blocks: GroupCovarianceBlock[] } | null = null;
   const evaluate = (theta: Float64Array, order: 0 | 1 | 2): RemlSums => {
     const K = parameterCount;
+    const keep = order === 1 ? { theta: Float64Array.from(theta), inverses: [] as Float64Array[], solved: [] as Float64Array[], blocks: [] as GroupCovarianceBlock[] } : null;
+    kept = null;
     const accumulator: Accumulator = {
       logDetV: 0,
       quadratic: new Float64Array(m * m),
@@ -207,8 +211,22 @@ export function denseRemlProblem(data: DenseRemlData): RemlProblem {
       const t = multiply(inverted.inverse, size, size, a, m);
       transposeMultiply(a, size, m, t, m, accumulator.quadratic);
       if (order === 0) continue;
+      if (keep) {
+        keep.inverses.push(inverted.inverse);
+        keep.solved.push(t);
+        keep.blocks.push(block);
+      }
       block.derivatives.forEach((derivative, k) => {
         accumulator.traces[k]! += traceWithDerivative(inverted.inverse, derivative, size);
+        if (derivative.kind === 'zero') return;
+        if (derivative.kind === 'indicator') {
+          // T'ZZ'T·scale = (Z'T)'(Z'T)·scale: levels × m² instead of n_g × m².
+          const sums = levelSums(derivative, t, size, m);
+          const form = accumulator.firstForms[k]!;
+          const scaled = derivative.scale === 1 ? sums : sums.map((value) => value * derivative.scale);
+          transposeMultiply(sums, derivative.levels, m, scaled, m, form);
+          return;
+        }
         transposeMultiply(t, size, m, applyDerivative(derivative, t, size, m), m, accumulator.firstForms[k]);
       });
       if (order === 2) {
@@ -216,7 +234,46 @@ export function denseRemlProblem(data: DenseRemlData): RemlProblem {
         if (!structure.linear) addHessianTerms(block, inverted.inverse, t, size, m, K, accumulator);
       }
     }
+    kept = keep;
     return finish(accumulator, order, K, m, structure.linear);
+  };
+
+  const responseInformation = (theta: Float64Array, v: Float64Array): Float64Array => {
+    const K = parameterCount;
+    const same = kept !== null && kept.theta.every((value, k) => value === theta[k]);
+    const out = new Float64Array(K * K);
+    for (let g = 0; g < groups.length; g++) {
+      const rows = groups[g]!;
+      const size = rows.length;
+      let inverse: Float64Array;
+      let t: Float64Array;
+      let block: GroupCovarianceBlock;
+      if (same) {
+        inverse = kept!.inverses[g]!;
+        t = kept!.solved[g]!;
+        block = kept!.blocks[g]!;
+      } else {
+        block = structure.block(g, rows, theta);
+        const inverted = inverseOfPositiveDefinite(block.covariance, size);
+        if (!inverted) return out.fill(Number.NaN);
+        inverse = inverted.inverse;
+        t = multiply(inverse, size, size, augmented[g]!, m);
+      }
+      const u = multiply(t, size, m, v, 1);
+      const applied = block.derivatives.map((d) => applyDerivative(d, u, size, 1));
+      const solved = applied.map((w) => multiply(inverse, size, size, w, 1));
+      for (let k = 0; k < K; k++) {
+        for (let l = k; l < K; l++) {
+          let sum = 0;
+          const wk = applied[k]!;
+          const sl = solved[l]!;
+          for (let i = 0; i < size; i++) sum += wk[i]! * sl[i]!;
+          out[k * K + l]! += sum;
+        }
+      }
+    }
+    for (let k = 0; k < K; k++) for (let l = 0; l < k; l++) out[k * K + l] = out[l * K + k]!;
+    return out;
   };
 
   const solve = (theta: Float64Array, vector: Float64Array): Float64Array => {
@@ -241,6 +298,7 @@ export function denseRemlProblem(data: DenseRemlData): RemlProblem {
     olsResidualVariance: ols.residualVariance,
     start: () => structure.start(ols.residualVariance),
     evaluate,
+    responseInformation,
     solve,
   });
 }
