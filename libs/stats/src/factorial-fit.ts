@@ -5,6 +5,7 @@ import { cellCodes, sweepBalancedAnova, type SweepTerm } from './balanced-sweep'
 import { factorTerms, termName, type FactorialLayout } from './factorial-layout';
 import type { ModelFactor } from './linear-model';
 import { inverseOfPositiveDefinite } from './reml/symmetric-matrix';
+import { hasNoResidualVariation } from './residual-variation';
 
 /** One row of a factorial or split-plot ANOVA; REML rows have ss and ms null and carry numDf and denDf. */
 export interface FactorialAnovaRow {
@@ -14,7 +15,7 @@ export interface FactorialAnovaRow {
   readonly ms: number | null;
   readonly f: number | null;
   readonly p: number | null;
-  /** The row this term was tested against (null when not tested); REML: 'kenward-roger'. */
+  /** The row this term was tested against (null when not tested); REML: 'kenward-roger' or 'satterthwaite'. */
   readonly errorTerm: string | null;
   readonly numDf?: number;
   readonly denDf?: number;
@@ -129,24 +130,31 @@ export function classicalFactorialFit(layout: FactorialLayout, sitesRandom: bool
   const plan = classicalPlan(layout, sitesRandom);
   const sweep = sweepBalancedAnova(layout.y, plan.primitives, plan.terms);
   const n = layout.y.length;
+  let totalSs = 0;
+  let mean = 0;
+  for (const value of layout.y) mean += value;
+  mean /= n;
+  for (const value of layout.y) totalSs += (value - mean) ** 2;
+  // An error stratum with no variation (up to rounding) is 0, so nothing is divided by rounding noise.
+  const errorTerms = new Set(plan.stratumErrors);
+  const cleaned = (term: string, ss: number) => (errorTerms.has(term) && hasNoResidualVariation(ss, totalSs) ? 0 : ss);
   const meanSquares = new Map<string, { ms: number | null; df: number; ss: number }>();
-  for (const row of sweep.rows) meanSquares.set(row.term, { ms: row.df > 0 ? row.ss / row.df : null, df: row.df, ss: row.ss });
-  meanSquares.set('error', { ms: sweep.residualDf > 0 ? sweep.residualSs / sweep.residualDf : null, df: sweep.residualDf, ss: sweep.residualSs });
+  for (const row of sweep.rows) {
+    const ss = cleaned(row.term, row.ss);
+    meanSquares.set(row.term, { ms: row.df > 0 ? ss / row.df : null, df: row.df, ss });
+  }
+  const residualSs = cleaned('error', sweep.residualSs);
+  meanSquares.set('error', { ms: sweep.residualDf > 0 ? residualSs / sweep.residualDf : null, df: sweep.residualDf, ss: residualSs });
   const anova: FactorialAnovaRow[] = sweep.rows.map((row) => {
     const own = meanSquares.get(row.term)!;
     const errorTerm = plan.errorOf.get(row.term) ?? null;
     const denominator = errorTerm ? meanSquares.get(errorTerm) : undefined;
     const testable = own.ms !== null && denominator !== undefined && denominator.ms !== null && denominator.ms > 0 && denominator.df > 0;
     const f = testable ? own.ms! / denominator.ms! : null;
-    return Object.freeze({ term: row.term, df: row.df, ss: row.ss, ms: own.ms, f, p: f === null ? null : fUpperTailProbability(f, row.df, denominator!.df), errorTerm: f === null ? null : errorTerm });
+    return Object.freeze({ term: row.term, df: row.df, ss: own.ss, ms: own.ms, f, p: f === null ? null : fUpperTailProbability(f, row.df, denominator!.df), errorTerm: f === null ? null : errorTerm });
   });
-  let totalSs = 0;
-  let mean = 0;
-  for (const value of layout.y) mean += value;
-  mean /= n;
-  for (const value of layout.y) totalSs += (value - mean) ** 2;
-  const residualMs = sweep.residualDf > 0 ? sweep.residualSs / sweep.residualDf : 0;
-  anova.push(Object.freeze({ term: 'error', df: sweep.residualDf, ss: sweep.residualSs, ms: sweep.residualDf > 0 ? residualMs : null, f: null, p: null, errorTerm: null }));
+  const residualMs = sweep.residualDf > 0 ? residualSs / sweep.residualDf : 0;
+  anova.push(Object.freeze({ term: 'error', df: sweep.residualDf, ss: residualSs, ms: sweep.residualDf > 0 ? residualMs : null, f: null, p: null, errorTerm: null }));
   anova.push(Object.freeze({ term: 'total', df: n - 1, ss: totalSs, ms: null, f: null, p: null, errorTerm: null }));
   const strata: ErrorStratum[] = plan.stratumErrors.map((errorTerm, k) => {
     const entry = meanSquares.get(errorTerm)!;

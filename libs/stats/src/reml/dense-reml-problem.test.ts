@@ -3,6 +3,7 @@ import { relativeError } from '../test-support/reference-files';
 import { oatsModel } from '../test-support/reml-models';
 import type { CovarianceStructure } from './covariance-structure';
 import { denseRemlProblem } from './dense-reml-problem';
+import { varianceComponentsStructure } from './variance-components';
 import { bilinearForm } from './symmetric-matrix';
 
 // The level-sum shortcut for random intercepts must give exactly what plain dense algebra gives: the same
@@ -77,5 +78,16 @@ describe('denseRemlProblem', () => {
 
   it('refuses lengths that differ', () => {
     expect(() => denseRemlProblem({ y: y.subarray(1), design: coding.design, groupOf, structure })).toThrow(/unequal lengths/);
+  });
+
+  it('refuses in words a problem beyond its documented work per step (one group of 700 plots)', () => {
+    const n = 700;
+    const intercept = { columns: 1, rows: Float64Array.of(1), rowOf: new Int32Array(n) };
+    const values = Float64Array.from({ length: n }, (_, i) => (i * 7919) % 13);
+    const oneGroup = new Int32Array(n);
+    const halves = Int32Array.from({ length: n }, (_, i) => i % 2);
+    expect(() => denseRemlProblem({ y: values, design: intercept, groupOf: oneGroup, structure: varianceComponentsStructure([{ name: 'half', codes: halves }], oneGroup) })).toThrow(
+      /layout too large for a mixed model: the mixed-model \(REML\) fit of these 700 plots in 1 independent groups of up to 700 plots needs about 344 million operations a step/,
+    );
   });
 });
