@@ -204,12 +204,16 @@ export function denseRemlProblem(data: DenseRemlData): RemlProblem {
     return values;
   });
 
-  // The last order-1 evaluation's V_g⁻¹ and V_g⁻¹A_g, which responseInformation at the same θ reuses.
-  let kept: { theta: Float64Array; inverses: Float64Array[]; solved: Float64Array[]; blocks: GroupCovarianceBlock[] } | null = null;
+  // The last order-1 evaluation's V_g⁻¹, log|V_g| and V_g⁻¹A_g, which responseInformation, the order-2 sums at the
+  // optimum and solve() at the same θ reuse instead of inverting every V_g again.
+  type Kept = { theta: Float64Array; inverses: Float64Array[]; logDeterminants: number[]; solved: Float64Array[]; blocks: GroupCovarianceBlock[] };
+  let kept: Kept | null = null;
+  const keptAt = (theta: Float64Array): Kept | null => (kept !== null && kept.theta.length === theta.length && kept.theta.every((value, k) => value === theta[k]) ? kept : null);
   const evaluate = (theta: Float64Array, order: 0 | 1 | 2): RemlSums => {
     const K = parameterCount;
-    const keep = order === 1 ? { theta: Float64Array.from(theta), inverses: [] as Float64Array[], solved: [] as Float64Array[], blocks: [] as GroupCovarianceBlock[] } : null;
-    kept = null;
+    const reuse = order === 0 ? null : keptAt(theta);
+    const keep: Kept | null = order === 1 && !reuse ? { theta: Float64Array.from(theta), inverses: [], logDeterminants: [], solved: [], blocks: [] } : null;
+    if (!reuse) kept = null;
     const accumulator: Accumulator = {
       logDetV: 0,
       quadratic: new Float64Array(m * m),
@@ -223,16 +227,17 @@ export function denseRemlProblem(data: DenseRemlData): RemlProblem {
     for (let g = 0; g < groups.length; g++) {
       const rows = groups[g]!;
       const size = rows.length;
-      const block = structure.block(g, rows, theta);
-      const inverted = inverseOfPositiveDefinite(block.covariance, size);
+      const block = reuse ? reuse.blocks[g]! : structure.block(g, rows, theta);
+      const inverted = reuse ? { inverse: reuse.inverses[g]!, logDeterminant: reuse.logDeterminants[g]! } : inverseOfPositiveDefinite(block.covariance, size);
       if (!inverted) return { logDetV: Number.NaN, quadratic: accumulator.quadratic.fill(Number.NaN) };
       accumulator.logDetV += inverted.logDeterminant;
       const a = augmented[g]!;
-      const t = multiply(inverted.inverse, size, size, a, m);
+      const t = reuse ? reuse.solved[g]! : multiply(inverted.inverse, size, size, a, m);
       transposeMultiply(a, size, m, t, m, accumulator.quadratic);
       if (order === 0) continue;
       if (keep) {
         keep.inverses.push(inverted.inverse);
+        keep.logDeterminants.push(inverted.logDeterminant);
         keep.solved.push(t);
         keep.blocks.push(block);
       }
@@ -254,13 +259,13 @@ export function denseRemlProblem(data: DenseRemlData): RemlProblem {
         if (!structure.linear) addHessianTerms(block, inverted.inverse, t, size, m, K, accumulator);
       }
     }
-    kept = keep;
+    if (keep) kept = keep;
     return finish(accumulator, order, K, m, structure.linear);
   };
 
   const responseInformation = (theta: Float64Array, v: Float64Array): Float64Array => {
     const K = parameterCount;
-    const same = kept !== null && kept.theta.every((value, k) => value === theta[k]);
+    const same = keptAt(theta) !== null;
     const out = new Float64Array(K * K);
     for (let g = 0; g < groups.length; g++) {
       const rows = groups[g]!;
@@ -298,9 +303,9 @@ export function denseRemlProblem(data: DenseRemlData): RemlProblem {
 
   const solve = (theta: Float64Array, vector: Float64Array): Float64Array => {
     const out = new Float64Array(n);
+    const reuse = keptAt(theta);
     groups.forEach((rows, g) => {
-      const block = structure.block(g, rows, theta);
-      const inverted = inverseOfPositiveDefinite(block.covariance, rows.length);
+      const inverted = reuse ? { inverse: reuse.inverses[g]! } : inverseOfPositiveDefinite(structure.block(g, rows, theta).covariance, rows.length);
       if (!inverted) throw new StatsInputError('covariance not positive definite', 'the fitted covariance matrix of a group is singular');
       const local = Float64Array.from(rows, (row) => vector[row]!);
       const solved = multiply(inverted.inverse, rows.length, rows.length, local, 1);
