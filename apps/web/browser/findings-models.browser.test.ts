@@ -115,7 +115,7 @@ describe('Findings: the model made for each measure', () => {
       const id = await trialId(page, 'FW-CLAY-26');
       await page.goto(`${baseUrl()}/trials/${id}/findings`);
       await page.getByRole('heading', { name: 'Share of plots not yet drained' }).waitFor();
-      await page.getByLabel('Time-ratio model').selectOption('lognormal');
+      await page.getByRole('combobox', { name: 'Time-ratio model' }).selectOption('lognormal');
       await page.getByRole('heading', { name: 'Time ratios to the control (log-normal model)' }).waitFor();
       const live = await page.getByRole('table', { name: 'Time ratio' }).innerText();
       const title = `Log-normal drain times ${viewport.name} ${Date.now()}`;
