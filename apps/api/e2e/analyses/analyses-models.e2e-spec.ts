@@ -1,4 +1,5 @@
 import type { AnalysisSnapshot, FindingsAnswer, ModelFindings, SavedAnalysisChoices, TrialReport } from '@friable/contracts';
+import ExcelJS from 'exceljs';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { expectStatus } from '../protocol/protocol-builder';
 import { buildCountsTrial, type CountsTrial } from '../findings/counts-trial';
@@ -80,8 +81,28 @@ describe('Saved analyses and the report: every analysis kind with its model choi
   it('counts with Poisson forced, and a changed count marks the saved analysis as changed', async () => {
     const saved = await saveAndReopen(counts.base, counts.token, { measureId: counts.measureId, family: 'poisson' }, 'counts');
     expect(saved.choices).toMatchObject({ analysis: 'counts', family: 'poisson' });
-    expect((saved.result as Extract<ModelFindings, { analysis: 'counts' }>).family).toBe('poisson');
+    const answer = saved.result as Extract<ModelFindings, { analysis: 'counts' }>;
+    expect(answer.family).toBe('poisson');
     const auth = bearer(counts.token);
+    // The workbook's sheet of the saved analysis names the model and its options and prints its rate ratios.
+    const workbook = await demo.t.http
+      .get(`${counts.base}/export.xlsx`)
+      .set(auth)
+      .buffer(true)
+      .parse((res, done) => {
+        const chunks: Buffer[] = [];
+        res.on('data', (chunk: Buffer) => chunks.push(chunk));
+        res.on('end', () => done(null, Buffer.concat(chunks)));
+      });
+    expect(workbook.status).toBe(200);
+    const book = new ExcelJS.Workbook();
+    await book.xlsx.load(workbook.body as Buffer);
+    const rows: unknown[][] = [];
+    book.getWorksheet(`Analysis ${saved.id}`)!.eachRow((row) => rows.push((row.values as unknown[]).slice(1)));
+    expect(rows).toContainEqual(['analysis', 'Count rates']);
+    expect(rows).toContainEqual(['count family', 'poisson']);
+    const ratiosAt = rows.findIndex((row) => String(row[0]).startsWith('Rate ratios to C'));
+    expect(rows.slice(ratiosAt + 2, ratiosAt + 2 + answer.rateRatios.length)).toEqual(answer.rateRatios.map((r) => [r.treatment, r.ratio, r.lower, r.upper, r.p]));
     const [stored] = await expectStatus<Array<{ id: number; version: number }>>(demo.t.http.get(`${counts.base}/observations?measureId=${counts.measureId}`).set(auth), 200);
     await expectStatus(demo.t.http.patch(`${counts.base}/observations/${stored!.id}`).set(auth).send({ value: '41', version: stored!.version, acceptWarnings: true }), 200);
     const reopened = await expectStatus<AnalysisSnapshot>(demo.t.http.get(`${counts.base}/analyses/${saved.id}`).set(auth), 200);
