@@ -186,6 +186,8 @@ for (const viewport of [
       const walkText = (await amounts.innerText()).replace(/^Goes on this plot:\s*/, '').trim();
       // The whole-plot factor's amount is per whole plot (its sub plots side by side).
       expect(walkText).toMatch(new RegExp(`(^|· )${levelOf(plot).code} .* per whole plot`));
+      // Material is weighed and spread from these amounts: the cautions stand beside them.
+      expect(await card.getByText('Compost and manure: wear gloves', { exact: false }).isVisible()).toBe(true);
       expect(await horizontalOverflow(page)).toBeLessThanOrEqual(0);
       await screenshot(page, `walk-split-plot-${viewport.name}`);
 
@@ -199,6 +201,6 @@ for (const viewport of [
       const row = sheet.getByRole('row').filter({ has: page.getByRole('cell', { name: label, exact: true }) });
       expect((await row.locator('.fr-sheet__amount').innerText()).trim()).toBe(walkText);
       expect(session.outside).toEqual([]);
-    });
+    }, 180_000);
   });
 }

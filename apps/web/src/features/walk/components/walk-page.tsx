@@ -4,6 +4,7 @@ import { findUnit } from '@friable/field';
 import { useQueries, useQueryClient } from '@tanstack/react-query';
 import { useEffect, useMemo, useRef } from 'react';
 import { useSearchParams } from 'react-router-dom';
+import { SafetyCautions } from '../../../components/safety-cautions';
 import { RoundPicker, SitePicker } from '../../../components/site-round-pickers';
 import { EmptyState, ErrorState, LoadingState } from '../../../components/states';
 import { formatNumber } from '../../../lib/format';
@@ -266,6 +267,7 @@ function SiteRoundWalk({
           })}
           {access.canEdit && <PlotPhoto trialId={trial.id} siteId={site.id} roundId={round.id} plot={plot} queued={queue.photos.find((p) => p.plotId === plot.id)} />}
           <WalkNavigation index={index} count={ordered.length} onGo={go} />
+          {trial.factors.length > 0 && levelAmounts.data && <SafetyCautions />}
         </article>
       )}
     </div>
