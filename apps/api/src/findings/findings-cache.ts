@@ -13,11 +13,14 @@ export interface ServedFindings {
   etag: string;
 }
 
-interface CachedFindings extends ServedFindings {
+interface CachedFindings {
   /** The data stamp read before the answer was computed (data-stamps/data-stamps.service.ts). */
   stamp: string;
   /** The snapshot hash of the analysed data (context.dataHash). */
   dataHash: string;
+  answer: FindingsAnswer;
+  /** The answer written out, once, for GET /findings. */
+  out: ServedFindings;
 }
 
 function served(answer: FindingsAnswer): ServedFindings {
@@ -39,21 +42,31 @@ export function findingsKey(trialId: number, query: FindingsQueryDto): string {
  * Answers are kept as the JSON text that goes out, with its entity tag, so serving one writes nothing anew.
  *
  * Bounded by FINDINGS_CACHE_MB (default 64) of answer text; least recently used answers go first.
- * Example: `cache.answer(trialId, query, () => findings.findings(trialId, query))` → `{ body, etag }`.
+ * Example: `cache.answer(trialId, query, () => findings.findings(trialId, query))`; `cache.served(…)` → `{ body, etag }`.
  */
 @Injectable()
 export class FindingsCache {
   private readonly answers = new LRUCache<string, CachedFindings>({
     maxSize: requireInteger(process.env, 'FINDINGS_CACHE_MB', 64, 1, 4096) * 1_048_576,
-    sizeCalculation: (entry) => Math.max(1, entry.body.length),
+    // The text written out stands for the answer's size (the parsed answer takes about as much again).
+    sizeCalculation: (entry) => Math.max(1, entry.out.body.length),
   });
-  private readonly pending = new Map<string, Promise<ServedFindings>>();
+  private readonly pending = new Map<string, Promise<CachedFindings>>();
   /** Hits and misses since start (read by the benchmark through the log, and by tests). */
   readonly counts = { hits: 0, misses: 0 };
 
   constructor(private readonly stamps: DataStampsService) {}
 
-  async answer(trialId: number, query: FindingsQueryDto, compute: () => Promise<FindingsAnswer>): Promise<ServedFindings> {
+  async answer(trialId: number, query: FindingsQueryDto, compute: () => Promise<FindingsAnswer>): Promise<FindingsAnswer> {
+    return (await this.entry(trialId, query, compute)).answer;
+  }
+
+  /** The same answer as its JSON text and entity tag, as GET /findings sends it. */
+  async served(trialId: number, query: FindingsQueryDto, compute: () => Promise<FindingsAnswer>): Promise<ServedFindings> {
+    return (await this.entry(trialId, query, compute)).out;
+  }
+
+  private async entry(trialId: number, query: FindingsQueryDto, compute: () => Promise<FindingsAnswer>): Promise<CachedFindings> {
     const key = findingsKey(trialId, query);
     // The stamp is read before the data: an answer is never stored under a stamp newer than its data.
     const stamp = await this.stamps.read(trialId);
@@ -71,9 +84,9 @@ export class FindingsCache {
     this.counts.misses += 1;
     const computation = compute()
       .then((answer) => {
-        const out = served(answer);
-        this.answers.set(key, { stamp, dataHash: answer.context.dataHash, ...out });
-        return out;
+        const entry: CachedFindings = { stamp, dataHash: answer.context.dataHash, answer, out: served(answer) };
+        this.answers.set(key, entry);
+        return entry;
       })
       .finally(() => this.pending.delete(flightKey));
     this.pending.set(flightKey, computation);

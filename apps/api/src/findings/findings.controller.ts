@@ -41,7 +41,7 @@ export class FindingsController {
   @ApiOkResponse({ schema: { anyOf: ANSWERS.map((answer) => ({ $ref: getSchemaPath(answer) })) }, description: 'Findings (the ANOVA: AnovaAnswer & {context}) or a model’s answer & {analysis, context}.' })
   @ApiUnprocessableEntityResponse({ description: 'An unknown measure, round or site, no data yet, or the engine’s sentence.' })
   async get(@CurrentTrialAccess() access: TrialAccessContext, @Query() query: FindingsQueryDto, @Res() response: Response): Promise<void> {
-    const { body, etag } = await this.cache.answer(access.trialId, query, () => this.findings.findings(access.trialId, query));
+    const { body, etag } = await this.cache.served(access.trialId, query, () => this.findings.findings(access.trialId, query));
     // The kept JSON text as it is, with its entity tag: a page asking again with If-None-Match gets 304.
     response.type('application/json').setHeader('ETag', etag);
     response.send(body);
@@ -52,12 +52,14 @@ export class FindingsController {
   @ApiOperation({
     summary: 'The same analysis as a small bundle anyone can check: data.csv, analysis.R, friable.json, README.txt',
     description:
-      'Takes the query of GET /findings. analysis.R reproduces the tables from data.csv with R’s standard packages (emmeans, survival, multcomp, nlme, MASS) and writes r-results.json beside friable.json, Friable’s own answer.',
+      'Takes the query of GET /findings and bundles the very answer GET /findings gives (from the same cache). analysis.R reproduces the tables from data.csv with R’s standard packages (emmeans, survival, multcomp, nlme, MASS) and writes r-results.json beside friable.json, Friable’s own answer. ' +
+      'Covered: every analysis of one-factor designs; the classical ANOVA of factorials (2–4 factors, in blocks or not) and of split and split-split plots at one site, with R’s aov error strata.',
   })
   @ApiFileResponse(['application/zip'], 'A zip named after the trial, measure, round and analysis.')
   @ApiUnprocessableEntityResponse({ description: 'As GET /findings.' })
   async bundle(@CurrentTrialAccess() access: TrialAccessContext, @Query() query: FindingsQueryDto) {
-    const { filename, bytes } = await findingsBundle(await this.findings.findings(access.trialId, query));
+    const answer = await this.cache.answer(access.trialId, query, () => this.findings.findings(access.trialId, query));
+    const { filename, bytes } = await findingsBundle(answer);
     return new StreamableFile(bytes, { type: 'application/zip', length: bytes.length, disposition: `attachment; filename="${filename}"` });
   }
 }
