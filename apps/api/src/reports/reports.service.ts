@@ -5,15 +5,23 @@ import { CommentsService } from '../analyses/comments.service';
 import { engineVersion } from '../findings/engine-version';
 import { FindingsService } from '../findings/findings.service';
 import { ObservationQueryService } from '../observations/observation-query.service';
+import type { ReportQueryDto } from './dto/report-query.dto';
 import { reportExplanation } from './report-explanation';
 
-const METHOD = 'tukey';
-const ALPHA = 0.05;
+const refuse = (message: string): never => {
+  throw new UnprocessableEntityException(message);
+};
+const DEFAULT_METHOD = 'tukey';
+const DEFAULT_ALPHA = 0.05;
+const METHOD_WORDS: Record<string, string> = { lsd: 'Fisher’s protected LSD', tukey: 'Tukey', dunnett: 'Dunnett', bonferroni: 'Bonferroni', holm: 'Holm' };
 
 /**
- * Trial report — the protocol, the sites and, per measure, the ANOVA and the means with letters of the latest
- * round with data at all sites combined (default choices, through FindingsService), the cautions and a plain paragraph.
- * Throws: 404 for an unknown trial (through the protocol read); an analysis the engine refuses is reported as unavailable.
+ * Trial report — the protocol, the sites and, per measure, the ANOVA and the means with letters, the cautions and a
+ * plain paragraph, following the choices of the Findings page: the round (else each measure's latest round with
+ * data), the scope (one site, or all sites combined — a trial with one site reports that site, never "combined") and
+ * the mean separation method and α (through FindingsService).
+ * Throws: 404 for an unknown trial (through the protocol read); 422 for a round or site not of the trial; an
+ * analysis the engine refuses is reported as unavailable.
  */
 @Injectable()
 export class ReportsService {
@@ -24,34 +32,53 @@ export class ReportsService {
     private readonly comments: CommentsService,
   ) {}
 
-  async report(trialId: number): Promise<TrialReport> {
+  async report(trialId: number, query: ReportQueryDto = {}): Promise<TrialReport> {
     const protocol = await this.findings.protocol(trialId);
-    const observations = await this.observations.list(trialId);
+    const method = query.method ?? DEFAULT_METHOD;
+    const alpha = query.alpha ?? DEFAULT_ALPHA;
+    const chosenRound = query.roundId === undefined ? null : (protocol.rounds.find((r) => r.id === query.roundId) ?? refuse('round is not an assessment round of this trial.'));
+    const chosenSite = query.siteId === undefined ? null : (protocol.sites.find((s) => s.id === query.siteId) ?? refuse('site is not a site of this trial.'));
+    const onlySite = protocol.sites.length === 1 ? protocol.sites[0]! : null;
+    const scopeLabel = chosenSite?.name ?? onlySite?.name ?? 'all sites combined';
+    const observations = await this.observations.list(trialId, chosenSite ? { siteId: chosenSite.id } : {});
     const rounds = [...protocol.rounds].sort((a, b) => b.dayOffset - a.dayOffset || b.id - a.id);
     const measures: ReportMeasure[] = [];
     for (const measure of protocol.measures) {
-      const round = rounds.find((r) => observations.some((o) => o.roundId === r.id && o.measureId === measure.id && o.valueText !== null)) ?? null;
-      const base = { measure, round: round && { id: round.id, label: round.label, dayOffset: round.dayOffset }, scopeLabel: 'all sites combined', method: METHOD, alpha: ALPHA } as const;
+      const round = chosenRound
+        ? chosenRound.measureIds.includes(measure.id) ? chosenRound : null
+        : (rounds.find((r) => observations.some((o) => o.roundId === r.id && o.measureId === measure.id && o.valueText !== null)) ?? null);
+      const base = { measure, round: round && { id: round.id, label: round.label, dayOffset: round.dayOffset }, scopeLabel, method, alpha } as const;
       const empty = { anova: null, summary: null, means: [], rankTest: null, warnings: [] };
       if (!round) {
-        measures.push({ ...base, ...empty, unavailable: `No values of ${measure.name} have been recorded yet.` });
+        const why = chosenRound ? `${measure.name} is not assessed in ${chosenRound.label}.` : `No values of ${measure.name} have been recorded yet${chosenSite ? ` at ${chosenSite.name}` : ''}.`;
+        measures.push({ ...base, ...empty, unavailable: why });
         continue;
       }
       let result: Findings;
       try {
-        result = await this.findings.anovaFindings(trialId, { measureId: measure.id, roundId: round.id, method: METHOD, alpha: ALPHA }, protocol);
+        result = await this.findings.anovaFindings(
+          trialId,
+          { measureId: measure.id, roundId: round.id, method, alpha, ...(chosenSite ? { siteId: chosenSite.id } : {}), ...(query.sitesAre ? { sitesAre: query.sitesAre } : {}) },
+          protocol,
+        );
       } catch (error) {
         if (!(error instanceof UnprocessableEntityException)) throw error;
         measures.push({ ...base, ...empty, unavailable: (error.getResponse() as { message: string }).message });
         continue;
       }
-      const letters = result.letters[METHOD] ?? {};
+      const letters = method === 'dunnett' ? {} : (result.letters[method] ?? {});
+      const versusControl = method === 'dunnett' ? (result.comparisons.dunnett?.pairs ?? []) : null;
       const percent = new Map(result.context.percentOfControl.map((p) => [p.treatment, p.percent]));
       measures.push({
         ...base,
         anova: result.anova,
         summary: result.summary,
-        means: result.means.map((m) => ({ ...m, letters: letters[m.treatment] ?? null, percentOfControl: percent.get(m.treatment) ?? null })),
+        means: result.means.map((m) => ({
+          ...m,
+          letters: letters[m.treatment] ?? null,
+          differsFromControl: m.treatment === result.context.controlCode ? null : (versusControl?.find((pair) => pair.a === m.treatment || pair.b === m.treatment)?.significant ?? null),
+          percentOfControl: percent.get(m.treatment) ?? null,
+        })),
         rankTest: result.context.rankTest,
         warnings: [...result.warnings, ...result.context.notices],
         unavailable: null,
@@ -65,7 +92,7 @@ export class ReportsService {
       sites: protocol.sites,
       measures,
       cautions: measures.flatMap((m) => (m.unavailable ? [`${m.measure.name}: ${m.unavailable}`] : m.warnings.map((w) => `${m.measure.name}, ${m.round!.label}: ${w}`))),
-      explanation: reportExplanation(ALPHA, 'Tukey'),
+      explanation: reportExplanation({ alpha, method: METHOD_WORDS[method] ?? method, round: chosenRound?.label ?? null, scope: scopeLabel }),
       reviews: await this.reviews(trialId),
     };
   }
