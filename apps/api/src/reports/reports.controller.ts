@@ -14,7 +14,7 @@ export class ReportsController {
 
   @Get()
   @AnyTrialMember()
-  @ApiOperation({ summary: 'Everything the printable report needs: protocol, sites, per measure the ANOVA and means with letters (the round, scope and mean separation chosen on the Findings page; by default each measure’s latest round with data, all sites combined), cautions and a plain paragraph' })
+  @ApiOperation({ summary: 'Everything the printable report needs: protocol, sites, per measure the model made for it with its choices and tables, the classical ANOVA and means with letters (the round, scope and mean separation chosen on the Findings page; by default each measure’s latest round with data, all sites combined), cautions and a plain paragraph' })
   @ApiOkResponse({ type: TrialReportDto, description: 'TrialReport.' })
   get(@CurrentTrialAccess() access: TrialAccessContext, @Query() query: ReportQueryDto) {
     return this.reports.report(access.trialId, query);

@@ -1,7 +1,11 @@
-import type { Findings, ReportMeasure, ReportReview, TrialReport } from '@friable/contracts';
+import { isModelFindings, type Findings, type FindingsAnswer, type ReportMeasure, type ReportModel, type ReportReview, type TrialDetail, type TrialReport } from '@friable/contracts';
 import { Injectable, UnprocessableEntityException } from '@nestjs/common';
 import { AnalysesService } from '../analyses/analyses.service';
 import { CommentsService } from '../analyses/comments.service';
+import { analysisLabel, savedChoicesFor } from '../analyses/saved-choices';
+import type { FindingsQueryDto } from '../findings/dto/findings-query.dto';
+import { FindingsCache } from '../findings/findings-cache';
+import { modelTables } from '../findings/model-tables';
 import { engineVersion } from '../findings/engine-version';
 import { FindingsService } from '../findings/findings.service';
 import { ObservationQueryService } from '../observations/observation-query.service';
@@ -16,10 +20,11 @@ const DEFAULT_ALPHA = 0.05;
 const METHOD_WORDS: Record<string, string> = { lsd: 'Fisher’s protected LSD', tukey: 'Tukey', dunnett: 'Dunnett', bonferroni: 'Bonferroni', holm: 'Holm' };
 
 /**
- * Trial report — the protocol, the sites and, per measure, the ANOVA and the means with letters, the cautions and a
- * plain paragraph, following the choices of the Findings page: the round (else each measure's latest round with
- * data), the scope (one site, or all sites combined — a trial with one site reports that site, never "combined") and
- * the mean separation method and α (through FindingsService).
+ * Trial report — the protocol, the sites and, per measure, following the choices of the Findings page — the round
+ * (else each measure's latest round with data), the scope (one site, or all sites combined; a trial with one site
+ * reports that site, never "combined"), the mean separation method and α: the model made for the measure (Findings'
+ * default — censored, rounds over time, baseline-adjusted, ordinal or counts — with its choices and tables), the
+ * classical ANOVA and the means with letters (through Findings and its cache), the cautions and a plain paragraph.
  * Throws: 404 for an unknown trial (through the protocol read); 422 for a round or site not of the trial; an
  * analysis the engine refuses is reported as unavailable.
  */
@@ -27,17 +32,18 @@ const METHOD_WORDS: Record<string, string> = { lsd: 'Fisher’s protected LSD', 
 export class ReportsService {
   constructor(
     private readonly findings: FindingsService,
+    private readonly cache: FindingsCache,
     private readonly observations: ObservationQueryService,
     private readonly analyses: AnalysesService,
     private readonly comments: CommentsService,
   ) {}
 
-  async report(trialId: number, query: ReportQueryDto = {}): Promise<TrialReport> {
+  async report(trialId: number, choices: ReportQueryDto = {}): Promise<TrialReport> {
     const protocol = await this.findings.protocol(trialId);
-    const method = query.method ?? DEFAULT_METHOD;
-    const alpha = query.alpha ?? DEFAULT_ALPHA;
-    const chosenRound = query.roundId === undefined ? null : (protocol.rounds.find((r) => r.id === query.roundId) ?? refuse('round is not an assessment round of this trial.'));
-    const chosenSite = query.siteId === undefined ? null : (protocol.sites.find((s) => s.id === query.siteId) ?? refuse('site is not a site of this trial.'));
+    const method = choices.method ?? DEFAULT_METHOD;
+    const alpha = choices.alpha ?? DEFAULT_ALPHA;
+    const chosenRound = choices.roundId === undefined ? null : (protocol.rounds.find((r) => r.id === choices.roundId) ?? refuse('round is not an assessment round of this trial.'));
+    const chosenSite = choices.siteId === undefined ? null : (protocol.sites.find((s) => s.id === choices.siteId) ?? refuse('site is not a site of this trial.'));
     const onlySite = protocol.sites.length === 1 ? protocol.sites[0]! : null;
     const scopeLabel = chosenSite?.name ?? onlySite?.name ?? 'all sites combined';
     const observations = await this.observations.list(trialId, chosenSite ? { siteId: chosenSite.id } : {});
@@ -48,22 +54,27 @@ export class ReportsService {
         ? chosenRound.measureIds.includes(measure.id) ? chosenRound : null
         : (rounds.find((r) => observations.some((o) => o.roundId === r.id && o.measureId === measure.id && o.valueText !== null)) ?? null);
       const base = { measure, round: round && { id: round.id, label: round.label, dayOffset: round.dayOffset }, scopeLabel, method, alpha } as const;
-      const empty = { anova: null, summary: null, means: [], rankTest: null, warnings: [] };
+      const empty = { anova: null, summary: null, means: [], rankTest: null, warnings: [], model: null };
       if (!round) {
         const why = chosenRound ? `${measure.name} is not assessed in ${chosenRound.label}.` : `No values of ${measure.name} have been recorded yet${chosenSite ? ` at ${chosenSite.name}` : ''}.`;
         measures.push({ ...base, ...empty, unavailable: why });
         continue;
       }
+      const query: FindingsQueryDto = {
+        measureId: measure.id,
+        roundId: round.id,
+        method,
+        alpha,
+        ...(chosenSite ? { siteId: chosenSite.id } : {}),
+        ...(choices.sitesAre ? { sitesAre: choices.sitesAre } : {}),
+      };
+      const model = await this.modelOf(trialId, query, protocol);
       let result: Findings;
       try {
-        result = await this.findings.anovaFindings(
-          trialId,
-          { measureId: measure.id, roundId: round.id, method, alpha, ...(chosenSite ? { siteId: chosenSite.id } : {}), ...(query.sitesAre ? { sitesAre: query.sitesAre } : {}) },
-          protocol,
-        );
+        result = (await this.answer(trialId, { ...query, analysis: 'anova' }, protocol)) as Findings;
       } catch (error) {
         if (!(error instanceof UnprocessableEntityException)) throw error;
-        measures.push({ ...base, ...empty, unavailable: (error.getResponse() as { message: string }).message });
+        measures.push({ ...base, ...empty, model: 'model' in model ? model.model : null, unavailable: (error.getResponse() as { message: string }).message });
         continue;
       }
       const letters = method === 'dunnett' ? {} : (result.letters[method] ?? {});
@@ -80,8 +91,9 @@ export class ReportsService {
           percentOfControl: percent.get(m.treatment) ?? null,
         })),
         rankTest: result.context.rankTest,
-        warnings: [...result.warnings, ...result.context.notices],
+        warnings: [...result.warnings, ...result.context.notices, ...('refusal' in model ? [`The model made for ${measure.name} could not be made: ${model.refusal}`] : [])],
         unavailable: null,
+        model: 'model' in model ? model.model : null,
       });
     }
     const { myRoles: _roles, mySiteIds: _sites, activation: _activation, ...rest } = protocol;
@@ -91,9 +103,40 @@ export class ReportsService {
       protocol: rest,
       sites: protocol.sites,
       measures,
-      cautions: measures.flatMap((m) => (m.unavailable ? [`${m.measure.name}: ${m.unavailable}`] : m.warnings.map((w) => `${m.measure.name}, ${m.round!.label}: ${w}`))),
+      cautions: measures.flatMap((m) => [
+        ...(m.unavailable ? [`${m.measure.name}: ${m.unavailable}`] : m.warnings.map((w) => `${m.measure.name}, ${m.round!.label}: ${w}`)),
+        ...(m.model?.notices ?? []).map((w) => `${m.measure.name}, ${m.round!.label} (${m.model!.label.toLowerCase()}): ${w}`),
+      ]),
       explanation: reportExplanation({ alpha, method: METHOD_WORDS[method] ?? method, round: chosenRound?.label ?? null, scope: scopeLabel }),
       reviews: await this.reviews(trialId),
+    };
+  }
+
+  /** Findings' answer, through its cache (the report asks for what the pages most likely asked for already). */
+  private answer(trialId: number, query: FindingsQueryDto, protocol: TrialDetail): Promise<FindingsAnswer> {
+    return this.cache.answer(trialId, query, () => this.findings.findings(trialId, query, protocol));
+  }
+
+  /** The model made for the measure (Findings' default), its choices and tables; none when that is the ANOVA, or why it could not be made. */
+  private async modelOf(trialId: number, query: FindingsQueryDto, protocol: TrialDetail): Promise<{ model: ReportModel | null } | { refusal: string }> {
+    let answer: FindingsAnswer;
+    try {
+      answer = await this.answer(trialId, query, protocol);
+    } catch (error) {
+      if (!(error instanceof UnprocessableEntityException)) throw error;
+      return { refusal: (error.getResponse() as { message: string }).message };
+    }
+    if (!isModelFindings(answer)) return { model: null };
+    const { context } = answer;
+    return {
+      model: {
+        analysis: answer.analysis,
+        label: analysisLabel(answer.analysis),
+        why: context.modelChoice.why,
+        choices: savedChoicesFor(query, answer),
+        tables: modelTables(answer),
+        notices: [...answer.warnings, ...context.notices],
+      },
     };
   }
 
