@@ -64,7 +64,8 @@ describe('an investigator designs a two-site trial in the browser', () => {
     await session.page.getByRole('dialog').getByLabel('Kind', { exact: true }).selectOption('time-with-cutoff');
     await fill(session.page, 'Cut-off', '600');
     await fill(session.page, 'Decimals', '0');
-    await session.page.getByRole('dialog').getByText('Higher is better').click();
+    // A time with a cut-off: "lower is better" is offered already; the person confirms it.
+    await session.page.getByRole('dialog').getByText('Lower is better').click();
     await submitDialog(session.page, 'Add measure');
 
     await session.page.getByRole('button', { name: 'Add round' }).click();

@@ -456,14 +456,16 @@ export const EXPORT_SHEETS = ['Protocol', 'Plot plans', 'Data', 'Dictionary'] as
 
 export interface ReportMean extends LsMean {
   letters: string | null;
+  /** Dunnett only: whether the mean differs from the control's (null for the control and other methods). */
+  differsFromControl: boolean | null;
   percentOfControl: number | null;
 }
 
 export interface ReportMeasure {
   measure: Measure;
-  /** Latest round with data for the measure; null when it has none yet. */
+  /** The round chosen, else the latest round with data for the measure; null when there is none. */
   round: Pick<AssessmentRound, 'id' | 'label' | 'dayOffset'> | null;
-  /** All sites combined. */
+  /** The site reported, or "all sites combined" (never for a trial with one site). */
   scopeLabel: string;
   method: SeparationMethod;
   alpha: number;

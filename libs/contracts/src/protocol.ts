@@ -333,3 +333,25 @@ export interface ActivityEntry {
   summary: string;
   details: Record<string, unknown>;
 }
+
+/** One site a layout-clearing change touches: its plots and the values recorded on them. */
+export interface LayoutImpactSite {
+  siteId: number;
+  siteName: string;
+  plots: number;
+  values: number;
+}
+
+/** GET /trials/:id/layout-impact — what a change that clears layouts would lose, before it is made. */
+export interface LayoutImpact {
+  /** The sites with a layout (randomized), in the trial's order. */
+  sites: LayoutImpactSite[];
+  /** Sites whose layout would be cleared. */
+  layouts: number;
+  plots: number;
+  values: number;
+  /** "Clears the layouts of 3 sites, 60 plots: …", or "Clears no layout: …". */
+  summary: string;
+  /** When values exist the change is refused, and this says why; null otherwise. */
+  refusal: string | null;
+}

@@ -106,7 +106,7 @@ describe('hostile input: numbers bounded before they are parsed', () => {
     const response = await t.http
       .post(`${base}/measures`)
       .set(bearer(built.tokens.investigator))
-      .send({ code: 'BIG', name: 'big', unit: 'mL', kind: 'continuous', plausibleMax: 1e15, decimals: 1 });
+      .send({ code: 'BIG', name: 'big', unit: 'mL', kind: 'continuous', higherIsBetter: true, plausibleMax: 1e15, decimals: 1 });
     expect(response.status).toBe(422);
     expect(response.body.errors).toEqual([{ field: 'plausibleMax', message: expect.stringMatching(/^plausible maximum must be/) }]);
     const measures = await t.sequelize.query('SELECT id FROM measures WHERE trial_id = ? AND code = ?', { replacements: [built.trialId, 'BIG'], type: QueryTypes.SELECT });

@@ -40,8 +40,8 @@ export async function buildIntakeTrial(t: TestApp): Promise<IntakeTrial> {
   }
   const measureBodies = {
     DT: { code: 'DT', name: 'drain time', unit: 's', kind: 'time-with-cutoff', cutoff: 600, plausibleMin: 5, plausibleMax: 600, hardMin: 0, hardMax: 3600, decimals: 2, higherIsBetter: false },
-    CS: { code: 'CS', name: 'crumble score', unit: 'score', kind: 'score', scaleMin: 1, scaleMax: 5, decimals: 0 },
-    WR: { code: 'WR', name: 'water retained', unit: 'mL', kind: 'continuous', plausibleMin: 50, plausibleMax: 400, hardMin: 0, hardMax: 1000, decimals: 1 },
+    CS: { code: 'CS', name: 'crumble score', unit: 'score', kind: 'score', higherIsBetter: true, scaleMin: 1, scaleMax: 5, decimals: 0 },
+    WR: { code: 'WR', name: 'water retained', unit: 'mL', kind: 'continuous', higherIsBetter: true, plausibleMin: 50, plausibleMax: 400, hardMin: 0, hardMax: 1000, decimals: 1 },
   };
   const measures = {} as IntakeTrial['measures'];
   for (const [code, body] of Object.entries(measureBodies)) {

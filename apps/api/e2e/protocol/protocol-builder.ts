@@ -41,7 +41,7 @@ export async function buildSmallTrial(t: TestApp, options: { randomize?: boolean
   const measures: Record<string, number> = {};
   for (const body of [
     { code: 'DT', name: 'drain time', unit: 's', kind: 'time-with-cutoff', cutoff: 600, decimals: 0, higherIsBetter: false },
-    { code: 'CS', name: 'crumble score', unit: 'score', kind: 'score', scaleMin: 1, scaleMax: 5, decimals: 0 },
+    { code: 'CS', name: 'crumble score', unit: 'score', kind: 'score', higherIsBetter: true, scaleMin: 1, scaleMax: 5, decimals: 0 },
   ]) {
     measures[body.code] = (await expectStatus<{ id: number }>(t.http.post(`${base}/measures`).set(auth).send(body), 201)).id;
   }

@@ -62,8 +62,8 @@ describe('a full protocol built through the API', () => {
   it('adds one measure of each kind', async () => {
     for (const body of [
       { code: 'DRAIN', name: 'drain time', unit: 's', kind: 'time-with-cutoff', cutoff: 600, plausibleMin: 5, plausibleMax: 600, hardMin: 0, hardMax: 3600, decimals: 0, higherIsBetter: false },
-      { code: 'CRUMB', name: 'crumble score', unit: 'score', kind: 'score', scaleMin: 1, scaleMax: 5, decimals: 0 },
-      { code: 'WORMS', name: 'earthworms', unit: 'count', kind: 'count', hardMin: 0, decimals: 0 },
+      { code: 'CRUMB', name: 'crumble score', unit: 'score', kind: 'score', higherIsBetter: true, scaleMin: 1, scaleMax: 5, decimals: 0 },
+      { code: 'WORMS', name: 'earthworms', unit: 'count', kind: 'count', higherIsBetter: true, hardMin: 0, decimals: 0 },
       { code: 'CRUST', name: 'crust resistance', unit: 'kgf/cm2', kind: 'continuous', plausibleMin: 0.2, plausibleMax: 4.5, decimals: 2, higherIsBetter: false },
     ]) {
       const answer = await expectStatus<Measure>(t.http.post(`${base}/measures`).set(auth).send(body), 201);

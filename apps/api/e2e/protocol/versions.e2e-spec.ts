@@ -116,7 +116,7 @@ describe('protocol versions, stale edits and archiving', () => {
 
   it('archives a deleted measure: gone from the protocol, kept in the database and shown in the activity trail', async () => {
     const extra = await expectStatus<{ id: number }>(
-      t.http.post(`${base}/measures`).set(auth).send({ code: 'ST', name: 'stone share', unit: '%', kind: 'continuous', decimals: 1 }),
+      t.http.post(`${base}/measures`).set(auth).send({ code: 'ST', name: 'stone share', unit: '%', kind: 'continuous', higherIsBetter: true, decimals: 1 }),
       201,
     );
     await expectStatus(patchCurrent(t, `${base}/rounds/${built.rounds['Day 0']}`, auth, { measureIds: [...Object.values(built.measures), extra.id] }), 200);
@@ -132,7 +132,7 @@ describe('protocol versions, stale edits and archiving', () => {
     expect(entry!.details).toMatchObject({ measureId: extra.id, archived: { code: 'ST', name: 'stone share' } });
     // The code is free again for a live measure; the archived one keeps it on record.
     const again = await expectStatus<{ id: number }>(
-      t.http.post(`${base}/measures`).set(auth).send({ code: 'ST', name: 'stone share again', unit: '%', kind: 'continuous', decimals: 1 }),
+      t.http.post(`${base}/measures`).set(auth).send({ code: 'ST', name: 'stone share again', unit: '%', kind: 'continuous', higherIsBetter: true, decimals: 1 }),
       201,
     );
     expect(again.id).not.toBe(extra.id);

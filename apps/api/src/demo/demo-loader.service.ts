@@ -6,6 +6,7 @@ import { resolve } from 'node:path';
 import type { Sequelize } from 'sequelize-typescript';
 import type { AuthUser, TrialAccessContext } from '../common/auth-user';
 import { FactorsService } from '../factors/factors.service';
+import type { CreateMeasureDto } from '../measures/dto/create-measure.dto';
 import { MeasuresService } from '../measures/measures.service';
 import { RoundsService } from '../rounds/rounds.service';
 import { SitesService } from '../sites/sites.service';
@@ -78,7 +79,11 @@ export class DemoLoaderService {
     if (plan.factors) await this.factors.replace(trial.id, user, { factors: plan.factors });
     for (const treatment of plan.treatments ?? []) await this.treatments.create(trial.id, user, treatment);
     const measureIds = new Map<string, number>();
-    for (const measure of plan.measures) measureIds.set(measure.code, (await this.measures.create(trial.id, user, measure)).id);
+    // A demo measure that does not say which way is better gets the usual answer: shorter times are better.
+    for (const measure of plan.measures) {
+      const body = { higherIsBetter: measure.kind !== 'time-with-cutoff', ...measure } as CreateMeasureDto;
+      measureIds.set(measure.code, (await this.measures.create(trial.id, user, body)).id);
+    }
     for (const round of plan.rounds) {
       await this.rounds.create(trial.id, user, { label: round.label, dayOffset: round.dayOffset, measureIds: round.measures.map((code) => measureIds.get(code) as number) });
     }

@@ -143,7 +143,8 @@ export class FindingsService {
     const round = trial.rounds.find((r) => r.id === choices.roundId) ?? refuse(`roundId ${choices.roundId} is not an assessment round of this trial.`);
     const site = choices.siteId === null ? null : (trial.sites.find((s) => s.id === choices.siteId) ?? refuse(`siteId ${choices.siteId} is not a site of this trial.`));
     const data = await this.prepare(trial, choices, choices.roundId);
-    const scopeLabel = site ? site.name : 'all sites combined';
+    // A trial with one site is never "combined": its one site is the scope.
+    const scopeLabel = site?.name ?? (trial.sites.length === 1 ? trial.sites[0]!.name : 'all sites combined');
     if (data.engineObservations.length === 0) refuse(`There are no values of ${measure.name} in ${round.label} at ${scopeLabel} yet.`);
     const roundsUpTo = withValues.filter((r) => r.dayOffset < round.dayOffset || r.id === round.id);
     const modelChoice = chooseModel(

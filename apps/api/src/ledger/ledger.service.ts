@@ -124,6 +124,9 @@ export class LedgerService {
         missingReason: missing ? (input.missingReason === undefined ? (stored?.valueText === null ? stored.missingReason : null) : input.missingReason || null) : null,
         notes: input.notes === undefined ? (stored?.notes ?? null) : input.notes || null,
       };
+      if (missing && !next.missingReason?.trim()) {
+        throw new FieldProblemsException([{ field: 'missingReason', message: 'a missing value (NA) needs a reason: choose one or type why it is missing' }]);
+      }
       if (stored && sameStored(next, stored)) return stored.id;
       const [written] = await this.store.write(transaction, { trialId: trial.id, roundId: cell.roundId, userId: user.id, source: 'edit', uploadId: null, at: new Date() }, [{ value: next, before: stored }]);
       await this.recordActivity(transaction, user, trial.id, cell, stored, next, written!);

@@ -47,10 +47,19 @@ export class MeasuresService {
     throwIfProblems(taken ? [taken] : []);
   }
 
+  /** Two measures of a trial may not share a name, whatever its case or spacing: they would head two columns alike. */
+  private async checkName(trialId: number, name: string, exceptId: number | null, transaction: Transaction): Promise<void> {
+    const wanted = name.trim().replace(/\s+/g, ' ').toLocaleLowerCase('en');
+    const others = await this.measures.findAll({ where: { trialId }, attributes: ['id', 'code', 'name'], transaction });
+    const same = others.find((m) => m.id !== exceptId && m.name.trim().replace(/\s+/g, ' ').toLocaleLowerCase('en') === wanted);
+    if (same) throwIfProblems([{ field: 'name', message: `name “${name.trim()}” is already used by measure ${same.code} of this trial; give each measure its own name` }]);
+  }
+
   async create(trialId: number, user: AuthUser, input: CreateMeasureDto): Promise<Measure> {
     return this.sequelize.transaction(async (transaction) => {
       await this.gate.openForWrite(trialId, transaction);
       await this.checkCode(trialId, input.code, null, transaction);
+      await this.checkName(trialId, input.name, null, transaction);
       const values = {
         trialId,
         code: input.code,
@@ -65,7 +74,8 @@ export class MeasuresService {
         hardMin: input.hardMin ?? null,
         hardMax: input.hardMax ?? null,
         decimals: input.decimals ?? 1,
-        higherIsBetter: input.higherIsBetter ?? true,
+        // The API asks for it; callers inside the app (the demo) that leave it out get "lower is better" for times.
+        higherIsBetter: input.higherIsBetter ?? input.kind !== 'time-with-cutoff',
         position: input.position ?? ((await this.measures.max<number, MeasureRow>('position', { where: { trialId }, transaction })) ?? 0) + 1,
       };
       throwIfProblems(measureProblems(values));
@@ -88,6 +98,7 @@ export class MeasuresService {
       const row = await this.find(trialId, id, transaction);
       await refuseStaleEdit(`measure ${row.code}`, row.version, sent.version, () => presentMeasure(row));
       if (input.code !== undefined && input.code !== row.code) await this.checkCode(trialId, input.code, row.id, transaction);
+      if (input.name !== undefined) await this.checkName(trialId, input.name, row.id, transaction);
       const before = presentMeasure(row);
       const merged = { ...before, ...input };
       throwIfProblems(measureProblems(merged));

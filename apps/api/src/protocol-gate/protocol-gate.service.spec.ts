@@ -15,7 +15,7 @@ function gateWith(options: { status?: string; observed?: number[] }) {
   const plots: Fake = { destroy: vi.fn(async () => 12) };
   const observations = { sitesWithObservations: vi.fn(async (_trialId: number, ids?: number[]) => (options.observed ?? []).filter((id) => !ids || ids.includes(id))) };
   const activity = { record: vi.fn(async () => undefined) };
-  const gate = new ProtocolGateService(trials as never, siteModel as never, plots as never, observations as never, activity as never);
+  const gate = new ProtocolGateService(trials as never, siteModel as never, plots as never, observations as never, activity as never, {} as never);
   return { gate, plots, activity, sites };
 }
 

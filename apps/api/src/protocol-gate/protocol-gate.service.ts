@@ -1,6 +1,8 @@
+import type { LayoutImpact } from '@friable/contracts';
 import { Injectable, NotFoundException } from '@nestjs/common';
-import { InjectModel } from '@nestjs/sequelize';
-import type { Transaction } from 'sequelize';
+import { InjectConnection, InjectModel } from '@nestjs/sequelize';
+import { QueryTypes, type Transaction } from 'sequelize';
+import type { Sequelize } from 'sequelize-typescript';
 import { ActivityService } from '../activity/activity.service';
 import { PlotRow } from '../plots/models/plot.model';
 import { SiteRow } from '../sites/models/site.model';
@@ -12,6 +14,7 @@ import { ObservationsGuardService } from './observations-guard.service';
 /**
  * Protocol gate — the checks every protocol write passes through.
  * - `openForWrite` locks the trial row for the transaction and refuses a locked or archived trial.
+ * - `layoutImpact` says, before such a change, what it would clear (layouts, plots) and whether values refuse it.
  * - `clearLayouts` removes the plots of sites whose layout an edit invalidates (treatments added or
  *   removed, block count changed, factors replaced), records it, and refuses the whole edit with 409
  *   when any affected site already holds observations.
@@ -24,7 +27,41 @@ export class ProtocolGateService {
     @InjectModel(PlotRow) private readonly plots: typeof PlotRow,
     private readonly observations: ObservationsGuardService,
     private readonly activity: ActivityService,
+    @InjectConnection() private readonly sequelize: Sequelize,
   ) {}
+
+  /**
+   * What clearing the layouts of the given sites (all of the trial's by default) would lose, in numbers and words:
+   * "Clears the layouts of 3 sites, 60 plots: …". Values on the plots refuse the change (`clearLayouts` throws 409),
+   * so they are named as the refusal, never as something lost. Sites without a layout are left out.
+   * Throws: 404 for a site that is not the trial's.
+   */
+  async layoutImpact(trialId: number, siteId?: number): Promise<LayoutImpact> {
+    if (siteId !== undefined && !(await this.sites.count({ where: { trialId, id: siteId } }))) throw new NotFoundException('No such site in this trial.');
+    const rows = await this.sequelize.query<{ siteId: number; siteName: string; plots: number; values: number }>(
+      `SELECT s.id AS siteId, s.name AS siteName,
+              (SELECT COUNT(*) FROM plots p WHERE p.site_id = s.id) AS plots,
+              (SELECT COUNT(*) FROM observations o JOIN plots p ON p.id = o.plot_id WHERE p.site_id = s.id) AS \`values\`
+         FROM sites s
+        WHERE s.trial_id = :trialId${siteId === undefined ? '' : ' AND s.id = :siteId'}
+        ORDER BY s.id`,
+      { replacements: { trialId, siteId: siteId ?? 0 }, type: QueryTypes.SELECT },
+    );
+    const sites = rows.map((r) => ({ siteId: Number(r.siteId), siteName: r.siteName, plots: Number(r.plots), values: Number(r.values) })).filter((site) => site.plots > 0);
+    const plots = sites.reduce((sum, site) => sum + site.plots, 0);
+    const values = sites.reduce((sum, site) => sum + site.values, 0);
+    const count = (n: number, one: string, many: string) => `${n.toLocaleString('en-US')} ${n === 1 ? one : many}`;
+    const summary =
+      sites.length === 0
+        ? 'Clears no layout: no site it touches is randomized yet.'
+        : `Clears the ${sites.length === 1 ? `layout of ${sites[0]!.siteName}` : `layouts of ${count(sites.length, 'site', 'sites')}`}, ${count(plots, 'plot', 'plots')}: ` +
+          `${sites.length === 1 ? 'the site' : 'each site'} must be randomized again, and printed sheets and plot labels made anew.`;
+    const holding = sites.filter((site) => site.values > 0);
+    const refusal = holding.length
+      ? `Refused while values are recorded: ${holding.map((site) => `${site.siteName} holds ${count(site.values, 'value', 'values')}`).join(', ')}; their meaning would change.`
+      : null;
+    return { sites, layouts: sites.length, plots, values, summary, refusal };
+  }
 
   async openForWrite(trialId: number, transaction: Transaction): Promise<Trial> {
     const trial = await this.trials.findByPk(trialId, { transaction, lock: transaction.LOCK.UPDATE });

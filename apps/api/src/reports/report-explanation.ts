@@ -1,15 +1,30 @@
+/** The choices a report was made with, in people's words. */
+export interface ReportChoices {
+  alpha: number;
+  /** "Tukey", "Fisher’s protected LSD", … */
+  method: string;
+  /** The round chosen on the Findings page; null: each measure's latest round with data. */
+  round: string | null;
+  /** A site's name, or "all sites combined". */
+  scope: string;
+}
+
 /**
  * Report explanation — the short plain paragraph of the printable report on what the statistics do and do not show.
  * Reference: Gomez & Gomez (1984), Statistical Procedures for Agricultural Research, 2nd ed., ch. 2 and 5 (the
  * analysis of variance and the comparison of treatment means), put into plain words.
  * Throws: nothing.
- * @example reportExplanation(0.05, 'Tukey'); // 'For each measure, the analysis of variance asks …'
+ * @example reportExplanation({ alpha: 0.05, method: 'Tukey', round: null, scope: 'all sites combined' }); // 'For each measure, the analysis of variance asks …'
  */
-export function reportExplanation(alpha: number, method: string): string {
+export function reportExplanation({ alpha, method, round, scope }: ReportChoices): string {
+  const where = scope === 'all sites combined' ? 'at all gardens combined' : `at ${scope}`;
+  const when = round ? `the round ${round}` : 'the latest round with data';
   return (
     'For each measure, the analysis of variance asks whether the treatments differ by more than the plot-to-plot ' +
-    `variation would produce by chance, using the latest round with data at all gardens combined. A p-value below ${alpha} ` +
-    `counts as a difference; treatments that share a letter (${method} comparisons) are not shown to differ. ` +
+    `variation would produce by chance, using ${when} ${where}. A p-value below ${alpha} counts as a difference; ` +
+    (method === 'Dunnett'
+      ? 'each treatment is compared with the untreated control (Dunnett comparisons). '
+      : `treatments that share a letter (${method} comparisons) are not shown to differ. `) +
     'Where a measure has a model made for it — drain times with a cut-off, rounds over time, a baseline round, scores, ' +
     'counts — that model comes first, with why it was chosen, and the classical analysis of variance stays beside it. ' +
     'The means are least-squares means with their standard errors, and % of control compares each with the untreated control. ' +

@@ -9,17 +9,24 @@ import { modelTables } from '../findings/model-tables';
 import { engineVersion } from '../findings/engine-version';
 import { FindingsService } from '../findings/findings.service';
 import { ObservationQueryService } from '../observations/observation-query.service';
+import type { ReportQueryDto } from './dto/report-query.dto';
 import { reportExplanation } from './report-explanation';
 
-const METHOD = 'tukey';
-const ALPHA = 0.05;
+const refuse = (message: string): never => {
+  throw new UnprocessableEntityException(message);
+};
+const DEFAULT_METHOD = 'tukey';
+const DEFAULT_ALPHA = 0.05;
+const METHOD_WORDS: Record<string, string> = { lsd: 'Fisher’s protected LSD', tukey: 'Tukey', dunnett: 'Dunnett', bonferroni: 'Bonferroni', holm: 'Holm' };
 
 /**
- * Trial report — the protocol, the sites and, per measure, at the latest round with data at all sites combined: the
- * model made for the measure (Findings' default — censored, rounds over time, baseline-adjusted, ordinal or counts —
- * with its choices and tables), the classical ANOVA and the means with letters (default choices, through Findings and
- * its cache), the cautions and a plain paragraph.
- * Throws: 404 for an unknown trial (through the protocol read); an analysis the engine refuses is reported as unavailable.
+ * Trial report — the protocol, the sites and, per measure, following the choices of the Findings page — the round
+ * (else each measure's latest round with data), the scope (one site, or all sites combined; a trial with one site
+ * reports that site, never "combined"), the mean separation method and α: the model made for the measure (Findings'
+ * default — censored, rounds over time, baseline-adjusted, ordinal or counts — with its choices and tables), the
+ * classical ANOVA and the means with letters (through Findings and its cache), the cautions and a plain paragraph.
+ * Throws: 404 for an unknown trial (through the protocol read); 422 for a round or site not of the trial; an
+ * analysis the engine refuses is reported as unavailable.
  */
 @Injectable()
 export class ReportsService {
@@ -31,20 +38,36 @@ export class ReportsService {
     private readonly comments: CommentsService,
   ) {}
 
-  async report(trialId: number): Promise<TrialReport> {
+  async report(trialId: number, choices: ReportQueryDto = {}): Promise<TrialReport> {
     const protocol = await this.findings.protocol(trialId);
-    const observations = await this.observations.list(trialId);
+    const method = choices.method ?? DEFAULT_METHOD;
+    const alpha = choices.alpha ?? DEFAULT_ALPHA;
+    const chosenRound = choices.roundId === undefined ? null : (protocol.rounds.find((r) => r.id === choices.roundId) ?? refuse('round is not an assessment round of this trial.'));
+    const chosenSite = choices.siteId === undefined ? null : (protocol.sites.find((s) => s.id === choices.siteId) ?? refuse('site is not a site of this trial.'));
+    const onlySite = protocol.sites.length === 1 ? protocol.sites[0]! : null;
+    const scopeLabel = chosenSite?.name ?? onlySite?.name ?? 'all sites combined';
+    const observations = await this.observations.list(trialId, chosenSite ? { siteId: chosenSite.id } : {});
     const rounds = [...protocol.rounds].sort((a, b) => b.dayOffset - a.dayOffset || b.id - a.id);
     const measures: ReportMeasure[] = [];
     for (const measure of protocol.measures) {
-      const round = rounds.find((r) => observations.some((o) => o.roundId === r.id && o.measureId === measure.id && o.valueText !== null)) ?? null;
-      const base = { measure, round: round && { id: round.id, label: round.label, dayOffset: round.dayOffset }, scopeLabel: 'all sites combined', method: METHOD, alpha: ALPHA } as const;
+      const round = chosenRound
+        ? chosenRound.measureIds.includes(measure.id) ? chosenRound : null
+        : (rounds.find((r) => observations.some((o) => o.roundId === r.id && o.measureId === measure.id && o.valueText !== null)) ?? null);
+      const base = { measure, round: round && { id: round.id, label: round.label, dayOffset: round.dayOffset }, scopeLabel, method, alpha } as const;
       const empty = { anova: null, summary: null, means: [], rankTest: null, warnings: [], model: null };
       if (!round) {
-        measures.push({ ...base, ...empty, unavailable: `No values of ${measure.name} have been recorded yet.` });
+        const why = chosenRound ? `${measure.name} is not assessed in ${chosenRound.label}.` : `No values of ${measure.name} have been recorded yet${chosenSite ? ` at ${chosenSite.name}` : ''}.`;
+        measures.push({ ...base, ...empty, unavailable: why });
         continue;
       }
-      const query: FindingsQueryDto = { measureId: measure.id, roundId: round.id, method: METHOD, alpha: ALPHA };
+      const query: FindingsQueryDto = {
+        measureId: measure.id,
+        roundId: round.id,
+        method,
+        alpha,
+        ...(chosenSite ? { siteId: chosenSite.id } : {}),
+        ...(choices.sitesAre ? { sitesAre: choices.sitesAre } : {}),
+      };
       const model = await this.modelOf(trialId, query, protocol);
       let result: Findings;
       try {
@@ -54,13 +77,19 @@ export class ReportsService {
         measures.push({ ...base, ...empty, model: 'model' in model ? model.model : null, unavailable: (error.getResponse() as { message: string }).message });
         continue;
       }
-      const letters = result.letters[METHOD] ?? {};
+      const letters = method === 'dunnett' ? {} : (result.letters[method] ?? {});
+      const versusControl = method === 'dunnett' ? (result.comparisons.dunnett?.pairs ?? []) : null;
       const percent = new Map(result.context.percentOfControl.map((p) => [p.treatment, p.percent]));
       measures.push({
         ...base,
         anova: result.anova,
         summary: result.summary,
-        means: result.means.map((m) => ({ ...m, letters: letters[m.treatment] ?? null, percentOfControl: percent.get(m.treatment) ?? null })),
+        means: result.means.map((m) => ({
+          ...m,
+          letters: letters[m.treatment] ?? null,
+          differsFromControl: m.treatment === result.context.controlCode ? null : (versusControl?.find((pair) => pair.a === m.treatment || pair.b === m.treatment)?.significant ?? null),
+          percentOfControl: percent.get(m.treatment) ?? null,
+        })),
         rankTest: result.context.rankTest,
         warnings: [...result.warnings, ...result.context.notices, ...('refusal' in model ? [`The model made for ${measure.name} could not be made: ${model.refusal}`] : [])],
         unavailable: null,
@@ -78,7 +107,7 @@ export class ReportsService {
         ...(m.unavailable ? [`${m.measure.name}: ${m.unavailable}`] : m.warnings.map((w) => `${m.measure.name}, ${m.round!.label}: ${w}`)),
         ...(m.model?.notices ?? []).map((w) => `${m.measure.name}, ${m.round!.label} (${m.model!.label.toLowerCase()}): ${w}`),
       ]),
-      explanation: reportExplanation(ALPHA, 'Tukey'),
+      explanation: reportExplanation({ alpha, method: METHOD_WORDS[method] ?? method, round: chosenRound?.label ?? null, scope: scopeLabel }),
       reviews: await this.reviews(trialId),
     };
   }

@@ -35,7 +35,14 @@ export const paths = {
     },
   },
   trialFindings: { path: '/trials/:trialId/findings', href: (trialId: number) => `/trials/${trialId}/findings` },
-  trialReport: { path: '/trials/:trialId/report', href: (trialId: number) => `/trials/${trialId}/report` },
+  trialReport: {
+    path: '/trials/:trialId/report',
+    /** With the Findings page's choices (round, site, sites, method, alpha) as they appear in its own address. */
+    href: (trialId: number, choices: Record<string, string | number | undefined> = {}) => {
+      const query = new URLSearchParams(Object.entries(choices).flatMap(([key, value]) => (value === undefined || value === '' ? [] : [[key, String(value)]]))).toString();
+      return `/trials/${trialId}/report${query ? `?${query}` : ''}`;
+    },
+  },
   trialActivity: { path: '/trials/:trialId/activity', href: (trialId: number) => `/trials/${trialId}/activity` },
   rateCalculator: { path: '/rate-calculator', href: () => '/rate-calculator' },
   planner: { path: '/planner', href: () => '/planner' },

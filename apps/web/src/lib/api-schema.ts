@@ -721,6 +721,23 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/trials/{trialId}/layout-impact": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** What a change that clears layouts (the design, adding or removing a treatment, the factors; a site’s blocks, removing or randomizing it again) would lose, asked before making it */
+        get: operations["LayoutImpactController_get"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/api/trials/{trialId}/level-amounts": {
         parameters: {
             query?: never;
@@ -890,7 +907,7 @@ export interface paths {
             path?: never;
             cookie?: never;
         };
-        /** Everything the printable report needs: protocol, sites, per measure (latest round with data, all sites combined) the model made for it with its choices and tables, the classical ANOVA and means with letters, cautions and a plain paragraph */
+        /** Everything the printable report needs: protocol, sites, per measure the model made for it with its choices and tables, the classical ANOVA and means with letters (the round, scope and mean separation chosen on the Findings page; by default each measure’s latest round with data, all sites combined), cautions and a plain paragraph */
         get: operations["ReportsController_get"];
         put?: never;
         post?: never;
@@ -1798,11 +1815,14 @@ export interface components {
             hardMax?: number | null;
             /** @description Below: an error. */
             hardMin?: number | null;
-            /** @default true */
-            higherIsBetter?: boolean;
+            /** @description Asked, never assumed: whether a higher value is the better outcome (false for drain times). */
+            higherIsBetter: boolean;
             /** @enum {string} */
             kind: "continuous" | "count" | "score" | "time-with-cutoff";
-            /** @example drain time */
+            /**
+             * @description Unique in the trial (ignoring case): 1 to 80 characters starting with a letter or digit; brackets and units are fine.
+             * @example drain time (first pour)
+             */
             name: string;
             /** @description Above: a warning. */
             plausibleMax?: number | null;
@@ -2462,6 +2482,27 @@ export interface components {
             treatment: string;
             /** @example 3 */
             value: number | string;
+        };
+        LayoutImpactDto: {
+            /** @description Sites whose layout would be cleared. */
+            layouts: number;
+            plots: number;
+            /** @description Why the change would be refused (values recorded), or null. */
+            refusal: string | null;
+            /** @description The sites with a layout among those the change touches. */
+            sites: components["schemas"]["LayoutImpactSiteDto"][];
+            /** @example Clears the layouts of 3 sites, 60 plots: each site must be randomized again and its printed sheets and labels made anew. */
+            summary: string;
+            values: number;
+        };
+        LayoutImpactSiteDto: {
+            /** @description Plots of the site’s layout. */
+            plots: number;
+            siteId: number;
+            /** @example Hollow Lane */
+            siteName: string;
+            /** @description Values recorded on those plots (missing values with their reason included). */
+            values: number;
         };
         LettersByMethodDto: {
             /** @description Treatment → compact letters ("a", "ab", …). */
@@ -3176,6 +3217,8 @@ export interface components {
         ReportMeanDto: {
             /** @description With a transform: the mean back on the original scale. */
             backTransformedMean?: number;
+            /** @description Dunnett only: whether the mean differs from the control’s (null for the control and other methods). */
+            differsFromControl: boolean | null;
             letters: string | null;
             mean: number;
             n: number;
@@ -3192,9 +3235,9 @@ export interface components {
             /** @description The model made for the measure (Findings’ default); null when that is the classical ANOVA above. */
             model: components["schemas"]["ReportModelDto"] | null;
             rankTest: components["schemas"]["FindingsRankTestDto"] | null;
-            /** @description Latest round with data for the measure; null when it has none yet. */
+            /** @description The round chosen, else the latest round with data for the measure; null when there is none. */
             round: components["schemas"]["RoundRefDto"] | null;
-            /** @description All sites combined. */
+            /** @description The site reported, or "all sites combined". */
             scopeLabel: string;
             summary: components["schemas"]["AnovaSummaryDto"] | null;
             /** @description Why there is no analysis (no data yet, or the engine's sentence). */
@@ -3712,11 +3755,14 @@ export interface components {
             hardMax?: number | null;
             /** @description Below: an error. */
             hardMin?: number | null;
-            /** @default true */
+            /** @description Asked, never assumed: whether a higher value is the better outcome (false for drain times). */
             higherIsBetter?: boolean;
             /** @enum {string} */
             kind?: "continuous" | "count" | "score" | "time-with-cutoff";
-            /** @example drain time */
+            /**
+             * @description Unique in the trial (ignoring case): 1 to 80 characters starting with a letter or digit; brackets and units are fine.
+             * @example drain time (first pour)
+             */
             name?: string;
             /** @description Above: a warning. */
             plausibleMax?: number | null;
@@ -6441,6 +6487,59 @@ export interface operations {
             };
         };
     };
+    LayoutImpactController_get: {
+        parameters: {
+            query?: {
+                /** @description One site (changing its blocks, removing it, randomizing it again); leave out for every site. */
+                siteId?: number;
+            };
+            header?: never;
+            path: {
+                /** @description The trial. */
+                trialId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description LayoutImpact: the sites, plots and values touched, a sentence, and the refusal when values are recorded. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["LayoutImpactDto"];
+                };
+            };
+            /** @description No valid token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description Needs one of these roles on the trial: investigator. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description No such trial, or you are not a member of it. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+        };
+    };
     PlotsController_levelAmounts: {
         parameters: {
             query?: {
@@ -7445,7 +7544,17 @@ export interface operations {
     };
     ReportsController_get: {
         parameters: {
-            query?: never;
+            query?: {
+                alpha?: number;
+                /** @description Mean separation method. */
+                method?: "lsd" | "tukey" | "dunnett" | "bonferroni" | "holm";
+                /** @description The assessment round to report; leave out for each measure’s latest round with values. */
+                roundId?: number;
+                /** @description One site; leave out for all sites combined (a trial with one site reports that site). */
+                siteId?: number;
+                /** @description With all sites combined: random tests treatment against site × treatment. */
+                sitesAre?: "random" | "fixed";
+            };
             header?: never;
             path: {
                 /** @description The trial. */

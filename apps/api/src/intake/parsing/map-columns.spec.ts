@@ -54,6 +54,15 @@ describe('mapColumns', () => {
     expect(mapColumns(['  PLOT   LABEL ', 'DRAIN (s)'], roundMeasures).plotLabel).toBe(0);
   });
 
+  it('maps a measure whose own name holds brackets, as the protocol now allows, by its template header', () => {
+    const bracketed = { ...measures[0]!, name: 'drain time (second pour)' };
+    const header = templateHeader(bracketed);
+    expect(header).toBe('drain time (second pour) (s)');
+    const mapping = mapColumns(['plot label', header], [bracketed]);
+    expect(mapping.problems).toEqual([]);
+    expect(mapping.measures[0]).toMatchObject({ measureCode: 'DRAIN', headerUnitId: null, factor: null, problems: [] });
+  });
+
   it('converts a known unit of the same kind', () => {
     const mapping = mapColumns(['plot label', 'drain time (min)'], roundMeasures);
     expect(mapping.measures[0]).toMatchObject({ headerUnitId: 'min', factor: '60', problems: [] });

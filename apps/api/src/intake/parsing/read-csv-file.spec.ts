@@ -21,9 +21,9 @@ describe('readCsvFile: files it accepts', () => {
     const file = readCsvFile(fixture('template.csv'), { maxBytes: INTAKE_MAX_BYTES });
     expect(file.delimiter).toBe(',');
     expect(file.decimalComma).toBe(false);
-    expect(file.headers).toEqual(['plot label', 'block', 'treatment code', 'drain time (s)', 'crumb score (score)', 'earthworms (count)', 'notes']);
+    expect(file.headers).toEqual(['plot label', 'block', 'treatment code', 'drain time (s)', 'crumb score (score)', 'earthworms (count)', 'notes', 'missing reason']);
     expect(file.rows).toHaveLength(6);
-    expect(file.rows[1]).toEqual(['HL-B1-P02', '1', 'GYP', '>600', '2', '4', 'standing water at the cut-off']);
+    expect(file.rows[1]).toEqual(['HL-B1-P02', '1', 'GYP', '>600', '2', '4', 'standing water at the cut-off', '']);
     expect(file.rowNumbers).toEqual([2, 3, 4, 5, 6, 7]);
     expect(file.lineNumbers).toEqual([2, 3, 4, 5, 6, 7]);
     expect(file.headerRowNumber).toBe(1);
@@ -42,7 +42,7 @@ describe('readCsvFile: files it accepts', () => {
     const file = readCsvFile(fixture('semicolon-decimal-comma.csv'));
     expect(file.delimiter).toBe(';');
     expect(file.decimalComma).toBe(true);
-    expect(file.rows[0]).toEqual(['HL-B1-P01', '1,32', '2,25', '']);
+    expect(file.rows[0]).toEqual(['HL-B1-P01', '1,32', '2,25', '', '']);
     expect(file.rows[1]![3]).toBe('compacted; path nearby');
   });
 

@@ -55,6 +55,13 @@ describe('validateIntake: the template', () => {
     expect(messages(result.errors)).toEqual(['Row 4, drain time (min): 660 s (11 min) is above the 600 s cut-off: write >600 if the plot had not drained.']);
   });
 
+  it('refuses NA without a reason, naming the row, the column and where the reason goes', () => {
+    const withoutColumn = validate(Buffer.from('plot label,drain time (s)\nHL-B1-P01,NA\nHL-B1-P02,\n'), measures.slice(0, 1));
+    expect(messages(withoutColumn.errors)).toEqual(['Row 2, drain time (s): drain time is NA (missing) without a reason: add a “missing reason” column saying why (for example “bed flooded”).']);
+    const emptyReason = validate(Buffer.from('plot label,drain time (s),why missing\nHL-B1-P01,n/a,\nHL-B1-P02,-,tipped over\n'), measures.slice(0, 1));
+    expect(messages(emptyReason.errors)).toEqual(['Row 2, drain time (s): drain time is NA (missing) without a reason: write why in the why missing column (for example “bed flooded”).']);
+  });
+
   it('attaches the reason column to missing values only', () => {
     const csv = 'plot label,drain time (s),earthworms (count),reason\nHL-B1-P01,NA,4,ring knocked over\n';
     const result = validate(Buffer.from(csv), measures.slice(0, 3));

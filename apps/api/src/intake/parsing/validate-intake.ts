@@ -301,6 +301,11 @@ export class IntakeChecker {
           this.errors.add(this.problemAt(row, column.index, unstorable));
           continue;
         }
+      } else if (!cell.blank && missingReason === null) {
+        // A value written as NA was missed on purpose: the file says why, or the upload is refused.
+        const where = mapping.missingReason === null ? 'add a “missing reason” column saying why' : `write why in the ${this.options.headers[mapping.missingReason]} column`;
+        this.errors.add(this.problemAt(row, column.index, `${measure.name} is NA (missing) without a reason: ${where} (for example “bed flooded”).`));
+        continue;
       } else if (missingReason !== null && !reasonChecked && storage) {
         reasonChecked = true;
         const tooLong = storage.reason(missingReason);

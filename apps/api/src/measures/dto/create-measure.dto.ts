@@ -1,12 +1,20 @@
 import { MEASURE_KINDS, type MeasureKind } from '@friable/contracts';
 import { MEASURE_UNITS } from '@friable/field';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
+import { Transform } from 'class-transformer';
 import { IsBoolean, IsIn, IsInt, IsNumber, IsOptional, IsString, Matches, Max, MaxLength, Min, MinLength } from 'class-validator';
 
 export const MEASURE_UNIT_IDS = MEASURE_UNITS.map((unit) => unit.id);
 const finite = { allowNaN: false, allowInfinity: false };
 /** The measures table keeps limits as DECIMAL(18,6): at most 12 digits before the point. */
 const LIMIT = 999_999_999_999;
+/**
+ * A measure's name heads a column of the sheets and the CSV template: it starts with a letter or digit and holds no
+ * comma, semicolon, quote, tab or line break (they would split or break the column); brackets and units such as
+ * "(s)", "g/m²" or "%" are fine, as the templates use them.
+ */
+export const MEASURE_NAME_PATTERN = /^[\p{L}\p{N}][^,;"\t\r\n]*$/u;
+export const MEASURE_NAME_RULE = 'name must start with a letter or digit and hold no commas, semicolons, quotes or line breaks (it heads a column of the sheets); brackets and units such as (s) or g/m² are fine';
 const withinLimit = (field: string) => `${field} must be a number from -999,999,999,999 to 999,999,999,999`;
 
 export class CreateMeasureDto {
@@ -15,11 +23,12 @@ export class CreateMeasureDto {
   @Matches(/^[A-Za-z0-9][A-Za-z0-9-]{0,11}$/, { message: 'code must be 1 to 12 letters, digits or dashes' })
   code: string;
 
-  @ApiProperty({ example: 'drain time' })
+  @ApiProperty({ example: 'drain time (first pour)', description: 'Unique in the trial (ignoring case): 1 to 80 characters starting with a letter or digit; brackets and units are fine.' })
+  @Transform(({ value }) => (typeof value === 'string' ? value.trim() : value))
   @IsString({ message: 'name must be text' })
   @MinLength(1, { message: 'name must be 1 to 80 characters long' })
   @MaxLength(80, { message: 'name must be 1 to 80 characters long' })
-  @Matches(/^[^,()[\]\r\n"]+$/, { message: 'name must not hold commas, brackets, quotes or line breaks (it heads a CSV column)' })
+  @Matches(MEASURE_NAME_PATTERN, { message: MEASURE_NAME_RULE })
   name: string;
 
   @ApiProperty({ enum: MEASURE_UNIT_IDS, example: 's', description: "A unit Friable converts (@friable/field's MEASURE_UNITS)." })
@@ -86,10 +95,9 @@ export class CreateMeasureDto {
   @Max(6, { message: 'decimals must be a whole number from 0 to 6' })
   decimals?: number;
 
-  @ApiPropertyOptional({ default: true })
-  @IsOptional()
-  @IsBoolean({ message: 'higherIsBetter must be true or false' })
-  higherIsBetter?: boolean;
+  @ApiProperty({ description: 'Asked, never assumed: whether a higher value is the better outcome (false for drain times).' })
+  @IsBoolean({ message: 'higherIsBetter must be answered: say whether higher or lower values are better' })
+  higherIsBetter: boolean;
 
   @ApiPropertyOptional()
   @IsOptional()

@@ -12,6 +12,9 @@ export class ReportMeanDto extends LsMeanDto implements ReportMean {
   @ApiProperty({ type: String, nullable: true })
   letters: string | null;
 
+  @ApiProperty({ type: Boolean, nullable: true, description: 'Dunnett only: whether the mean differs from the control’s (null for the control and other methods).' })
+  differsFromControl: boolean | null;
+
   @ApiProperty({ type: Number, nullable: true })
   percentOfControl: number | null;
 }
@@ -51,10 +54,10 @@ export class ReportMeasureDto implements ReportMeasure {
   @ApiProperty({ type: MeasureDto })
   measure: MeasureDto;
 
-  @ApiProperty({ type: RoundRefDto, nullable: true, description: 'Latest round with data for the measure; null when it has none yet.' })
+  @ApiProperty({ type: RoundRefDto, nullable: true, description: 'The round chosen, else the latest round with data for the measure; null when there is none.' })
   round: RoundRefDto | null;
 
-  @ApiProperty({ description: 'All sites combined.' })
+  @ApiProperty({ description: 'The site reported, or "all sites combined".' })
   scopeLabel: string;
 
   @ApiProperty({ enum: SEPARATION_METHODS, enumName: 'SeparationMethod' })

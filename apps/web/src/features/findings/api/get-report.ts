@@ -1,13 +1,24 @@
+import type { SeparationMethod } from '@friable/contracts';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api, unwrap } from '../../../lib/api-client';
 
-/** GET /api/trials/:trialId/report — the protocol, sites and per measure the ANOVA and means of the latest round with data. */
-export function getReport(trialId: number) {
-  return unwrap(api.GET('/api/trials/{trialId}/report', { params: { path: { trialId } } }));
+/** The Findings page's choices the printed report follows; each left out takes the report's default. */
+export interface ReportChoices {
+  roundId?: number;
+  siteId?: number;
+  sitesAre?: 'random' | 'fixed';
+  method?: SeparationMethod;
+  alpha?: number;
 }
 
-export const reportQueryOptions = (trialId: number) => queryOptions({ queryKey: ['trials', trialId, 'report'], queryFn: () => getReport(trialId) });
+/** GET /api/trials/:trialId/report — the protocol, sites and per measure the ANOVA and means of the chosen (else latest) round, scope and method. */
+export function getReport(trialId: number, choices: ReportChoices = {}) {
+  return unwrap(api.GET('/api/trials/{trialId}/report', { params: { path: { trialId }, query: choices } }));
+}
 
-export function useReport(trialId: number) {
-  return useQuery(reportQueryOptions(trialId));
+export const reportQueryOptions = (trialId: number, choices: ReportChoices = {}) =>
+  queryOptions({ queryKey: ['trials', trialId, 'report', choices], queryFn: () => getReport(trialId, choices) });
+
+export function useReport(trialId: number, choices: ReportChoices = {}) {
+  return useQuery(reportQueryOptions(trialId, choices));
 }

@@ -3,8 +3,38 @@ import type { AnovaAnswer, SeparationMethod } from '@friable/contracts';
 import { SignificanceLegend } from './anova-table';
 import { formatMeasureValue, formatP, formatStatistic, methodLabels, significanceMark } from './stat-format';
 
-/** Every pair the chosen method compares: the difference, its confidence interval, p and the verdict. */
-export function ComparisonsTable({ answer, method, alpha, decimals }: { answer: AnovaAnswer; method: SeparationMethod; alpha: number; decimals: number }) {
+/** The line under the table naming the smallest difference that counts; "least significant difference" only for LSD. */
+const SMALLEST_DIFFERENCE: Record<SeparationMethod, string | null> = {
+  lsd: 'Least significant difference (LSD)',
+  tukey: 'Honestly significant difference (HSD)',
+  dunnett: 'Smallest difference from the control that counts (Dunnett)',
+  bonferroni: 'Smallest difference that counts (Bonferroni)',
+  holm: null,
+};
+
+/** "HL-G40 better", "no difference shown": the verdict of one pair in the measure's own direction. */
+export function pairVerdict(pair: { a: string; b: string; diff: number; significant: boolean }, higherIsBetter: boolean | undefined): string {
+  if (!pair.significant) return 'no difference shown';
+  if (higherIsBetter === undefined) return pair.diff > 0 ? `${pair.a} higher` : `${pair.b} higher`;
+  const aBetter = higherIsBetter ? pair.diff > 0 : pair.diff < 0;
+  return `${aBetter ? pair.a : pair.b} better`;
+}
+
+/** Every pair the chosen method compares: the difference, its confidence interval, p and the verdict (which is better, in the measure's direction). */
+export function ComparisonsTable({
+  answer,
+  method,
+  alpha,
+  decimals,
+  higherIsBetter,
+}: {
+  answer: AnovaAnswer;
+  method: SeparationMethod;
+  alpha: number;
+  decimals: number;
+  /** The measure's direction; absent (a quick analysis): the verdict says which is higher. */
+  higherIsBetter?: boolean;
+}) {
   const comparisons = answer.comparisons[method];
   if (!comparisons) return null;
   const confidence = `${formatStatistic(100 * (1 - alpha))} %`;
@@ -21,7 +51,7 @@ export function ComparisonsTable({ answer, method, alpha, decimals }: { answer: 
               <th scope="col" className="fr-num">Difference</th>
               <th scope="col" className="fr-num">{confidence} interval</th>
               <th scope="col" className="fr-num">p</th>
-              <th scope="col">Significant</th>
+              <th scope="col">Verdict</th>
             </tr>
           </thead>
           <tbody>
@@ -37,16 +67,17 @@ export function ComparisonsTable({ answer, method, alpha, decimals }: { answer: 
                 <td className="fr-num">
                   {formatP(pair.p)} <span className="fr-findings-mark">{significanceMark(pair.p)}</span>
                 </td>
-                <td>{pair.significant ? 'yes' : 'no'}</td>
+                <td>{pairVerdict(pair, higherIsBetter)}</td>
               </tr>
             ))}
           </tbody>
         </HTMLTable>
       </div>
       <SignificanceLegend />
-      {comparisons.leastSignificantDifference !== null && (
+      {higherIsBetter !== undefined && <p className="fr-muted fr-small">{higherIsBetter ? 'Higher values are better for this measure.' : 'Lower values are better for this measure.'}</p>}
+      {comparisons.leastSignificantDifference !== null && SMALLEST_DIFFERENCE[method] && (
         <p className="fr-muted fr-small">
-          Least significant difference at α = {formatStatistic(alpha)}: {formatMeasureValue(comparisons.leastSignificantDifference, decimals)}.
+          {SMALLEST_DIFFERENCE[method]} at α = {formatStatistic(alpha)}: {formatMeasureValue(comparisons.leastSignificantDifference, decimals)}.
         </p>
       )}
     </section>

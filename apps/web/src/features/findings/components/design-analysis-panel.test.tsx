@@ -61,6 +61,19 @@ describe('DesignAnalysisPanel', () => {
     expect(within(within(slice).getByRole('row', { name: /^bare/ })).getByText('b')).toBeInTheDocument();
   });
 
+  it('shows the LSD column of the standard errors of a difference only when the LSD is the chosen method', () => {
+    const { unmount } = renderWithApp(<DesignAnalysisPanel answer={splitPlot} method="tukey" decimals={1} />);
+    const withTukey = screen.getByRole('table', { name: 'Standard errors of a difference' });
+    expect(within(withTukey).queryByRole('columnheader', { name: 'LSD' })).toBeNull();
+    expect(within(withTukey).queryByText('1.22')).toBeNull();
+    unmount();
+    renderWithApp(<DesignAnalysisPanel answer={splitPlot} method="lsd" decimals={1} />);
+    const withLsd = screen.getByRole('table', { name: 'Standard errors of a difference' });
+    expect(within(withLsd).getByRole('columnheader', { name: 'LSD' })).toBeInTheDocument();
+    // The fixture's LSD of two Amendment means, 1.22 (means are shown with one decimal more than the readings).
+    expect(within(within(withLsd).getAllByRole('row', { name: /^Two Amendment \(whole-plot\) means / })[0]!).getByText('1.22')).toBeInTheDocument();
+  });
+
   it('shows nothing for a one-factor answer', () => {
     const { container } = renderWithApp(<DesignAnalysisPanel answer={{ anova: [] }} method="tukey" decimals={1} />);
     expect(container.querySelector('section')).toBeNull();

@@ -82,7 +82,8 @@ function StrataTable({ strata }: { strata: NonNullable<DesignAnswer['strata']> }
   );
 }
 
-function DifferencesTable({ differences, decimals }: { differences: NonNullable<DesignAnswer['differences']>; decimals: number }) {
+/** The standard errors of a difference per stratum; the LSD column only when the LSD is the chosen method. */
+function DifferencesTable({ differences, decimals, showLsd }: { differences: NonNullable<DesignAnswer['differences']>; decimals: number; showLsd: boolean }) {
   return (
     <div className="fr-table-scroll">
       <HTMLTable compact striped className="fr-findings-table" aria-label="Standard errors of a difference">
@@ -92,7 +93,7 @@ function DifferencesTable({ differences, decimals }: { differences: NonNullable<
             <th scope="col" className="fr-num">SE of difference</th>
             <th scope="col" className="fr-num">df</th>
             <th scope="col" className="fr-num">t</th>
-            <th scope="col" className="fr-num">LSD</th>
+            {showLsd && <th scope="col" className="fr-num">LSD</th>}
             <th scope="col">Error</th>
           </tr>
         </thead>
@@ -103,7 +104,7 @@ function DifferencesTable({ differences, decimals }: { differences: NonNullable<
               <td className="fr-num">{formatMeasureValue(d.se, decimals)}</td>
               <td className="fr-num">{formatStatistic(d.df)}</td>
               <td className="fr-num">{formatStatistic(d.critical)}</td>
-              <td className="fr-num">{formatMeasureValue(d.lsd, decimals)}</td>
+              {showLsd && <td className="fr-num">{formatMeasureValue(d.lsd, decimals)}</td>}
               <td>{d.errorTerm.includes('(Satterthwaite)') ? 'mixed strata: weighted t, Satterthwaite df' : errorLabel(d.errorTerm, undefined)}</td>
             </tr>
           ))}
@@ -168,7 +169,7 @@ export function DesignAnalysisPanel({ answer, method, decimals }: { answer: Desi
       {answer.differences && answer.differences.length > 0 && (
         <>
           <h4 className="fr-findings-subheading">Standard errors of a difference</h4>
-          <DifferencesTable differences={answer.differences} decimals={decimals} />
+          <DifferencesTable differences={answer.differences} decimals={decimals} showLsd={method === 'lsd'} />
         </>
       )}
       {answer.slices && answer.slices.length > 0 && (

@@ -257,7 +257,16 @@ export function FindingsPage({ trial, meId }: { trial: TrialDetail; meId?: numbe
             bundle.mutate({ trialId: trial.id, query: { ...query, ...(analysedRoundId ? { roundId: analysedRoundId } : {}), analysis: shownAnalysis }, fallbackName: `${trial.code}-analysis.zip` })
           }
         />
-        <Link to={paths.trialReport.href(trial.id)} className="bp6-button fr-findings-report-link">
+        <Link
+          to={paths.trialReport.href(trial.id, {
+            round: analysedRoundId ?? chosenRound?.id,
+            site: query?.siteId,
+            sites: combined && options.sitesAre === 'fixed' ? 'fixed' : undefined,
+            method: options.method,
+            alpha: options.alpha,
+          })}
+          className="bp6-button fr-findings-report-link"
+        >
           <span className="bp6-button-text">Printable report</span>
         </Link>
       </div>

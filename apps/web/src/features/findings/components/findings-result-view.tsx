@@ -18,6 +18,7 @@ export function FindingsResultView({ findings, treatmentNames, interaction }: { 
       control={context.controlCode ?? undefined}
       decimals={context.measure.decimals}
       unit={context.measure.unit}
+      higherIsBetter={context.measure.higherIsBetter}
       treatmentNames={treatmentNames}
       percentOfControl={context.percentOfControl}
       notices={context.notices}

@@ -16,6 +16,8 @@ export interface FindingsViewProps {
   control?: string;
   decimals: number;
   unit?: string;
+  /** The measure's direction, for the comparisons' verdicts. */
+  higherIsBetter?: boolean;
   treatmentNames?: Record<string, string>;
   percentOfControl?: PercentOfControl[];
   rankTest: { kind: 'friedman' | 'kruskal-wallis'; answer?: RankTestResult; error?: Error | string | null; pending?: boolean };
@@ -44,7 +46,7 @@ export function FindingsView(props: FindingsViewProps) {
       </div>
       <DesignAnalysisPanel answer={answer} method={method} decimals={decimals} />
       <MeansTable answer={answer} method={method} control={control} decimals={decimals} unit={unit} treatmentNames={props.treatmentNames} percentOfControl={props.percentOfControl} />
-      <ComparisonsTable answer={answer} method={method} alpha={alpha} decimals={decimals} />
+      <ComparisonsTable answer={answer} method={method} alpha={alpha} decimals={decimals} higherIsBetter={props.higherIsBetter} />
       <AnalysisCautions answer={answer} />
       <section className="fr-findings-block" aria-labelledby="fr-plots-title">
         <h3 id="fr-plots-title" className="fr-findings-heading">

@@ -1,11 +1,11 @@
 import { Button, Callout, H2, HTMLTable } from '@blueprintjs/core';
-import type { ReportMeasure, ReportReview, TrialDetail } from '@friable/contracts';
+import { SEPARATION_METHODS, type ReportMeasure, type ReportReview, type SeparationMethod, type TrialDetail, type TrialReport } from '@friable/contracts';
 import { lazy, Suspense } from 'react';
-import { Link } from 'react-router-dom';
+import { Link, useSearchParams } from 'react-router-dom';
 import { ErrorState, LoadingState } from '../../../components/states';
 import { paths } from '../../../config/paths';
 import { designLabels, formatArea, formatDate, formatRate } from '../../../lib/format';
-import { useReport } from '../api/get-report';
+import { useReport, type ReportChoices } from '../api/get-report';
 import { AnovaTable } from './anova-table';
 import { RankTestPanel } from './rank-test-panel';
 import { ReportModelTables } from './report-model';
@@ -17,8 +17,24 @@ const ReportMeansPlot = lazy(() => import('./report-means-plot'));
 const percent = new Intl.NumberFormat('en-US', { maximumFractionDigits: 0 });
 
 /** The printable report: protocol, sites, per measure the ANOVA, means with letters and a plot, the cautions and what the statistics show. */
+/** The Findings page's choices, from the report's address (the same names as the Findings page's own). */
+function readReportChoices(params: URLSearchParams): ReportChoices {
+  const whole = (key: string) => (/^[1-9]\d{0,9}$/.test(params.get(key) ?? '') ? Number(params.get(key)) : undefined);
+  const method = params.get('method');
+  const alpha = Number(params.get('alpha'));
+  return {
+    ...(whole('round') ? { roundId: whole('round') } : {}),
+    ...(whole('site') ? { siteId: whole('site') } : {}),
+    ...(params.get('sites') === 'fixed' ? { sitesAre: 'fixed' as const } : {}),
+    ...(SEPARATION_METHODS.includes(method as SeparationMethod) ? { method: method as SeparationMethod } : {}),
+    ...(params.get('alpha') && alpha > 0 && alpha < 1 ? { alpha } : {}),
+  };
+}
+
 export function ReportPage({ trial }: { trial: TrialDetail }) {
-  const report = useReport(trial.id);
+  const [params] = useSearchParams();
+  const choices = readReportChoices(params);
+  const report = useReport(trial.id, choices);
   if (report.isPending) return <LoadingState what="the report" />;
   if (report.isError) return <ErrorState title="The report could not be made" error={report.error} onRetry={() => report.refetch()} />;
   const r = report.data;
@@ -26,7 +42,7 @@ export function ReportPage({ trial }: { trial: TrialDetail }) {
   return (
     <article className="fr-report fr-report-page">
       <div className="fr-findings-actions fr-report__screen-only">
-        <Link to={paths.trialFindings.href(trial.id)}>← Back to the Findings</Link>
+        <Link to={`${paths.trialFindings.href(trial.id)}${params.toString() ? `?${params.toString()}` : ''}`}>← Back to the Findings</Link>
         <Button icon="print" text="Print the report" onClick={() => window.print()} />
       </div>
       <H2>
@@ -35,6 +51,7 @@ export function ReportPage({ trial }: { trial: TrialDetail }) {
       <p className="fr-muted fr-small">
         Report made on {formatDate(r.generatedAt)} by Friable (analysis engine {r.engineVersion}).
       </p>
+      <ReportChoicesLine report={r} />
       {p.question && (
         <p>
           <strong>Question:</strong> {p.question}
@@ -142,7 +159,7 @@ function ReportMeasureSection({ entry, treatmentOrder, control }: { entry: Repor
                   <th scope="col">Treatment</th>
                   <th scope="col" className="fr-num">n</th>
                   <th scope="col" className="fr-num">Mean ± SE</th>
-                  <th scope="col">Letters</th>
+                  <th scope="col">{entry.method === 'dunnett' ? 'Differs from the control' : 'Letters'}</th>
                   <th scope="col" className="fr-num">% of control</th>
                 </tr>
               </thead>
@@ -156,7 +173,7 @@ function ReportMeasureSection({ entry, treatmentOrder, control }: { entry: Repor
                     <td className="fr-num">
                       {formatMeasureValue(mean.mean, measure.decimals)} ± {formatMeasureValue(mean.se, measure.decimals)}
                     </td>
-                    <td className="fr-findings-letters">{mean.letters ?? ''}</td>
+                    <td className="fr-findings-letters">{entry.method === 'dunnett' ? (mean.differsFromControl === null ? '—' : mean.differsFromControl ? 'yes' : 'no') : (mean.letters ?? '')}</td>
                     <td className="fr-num">{mean.percentOfControl === null ? '—' : `${percent.format(mean.percentOfControl)} %`}</td>
                   </tr>
                 ))}
@@ -164,7 +181,8 @@ function ReportMeasureSection({ entry, treatmentOrder, control }: { entry: Repor
             </HTMLTable>
           </div>
           <p className="fr-muted fr-small">
-            {methodLabels[entry.method]} at α = {entry.alpha}: means sharing a letter do not differ significantly.
+            {methodLabels[entry.method]} at α = {entry.alpha}
+            {entry.method === 'dunnett' ? `: each treatment against ${control ?? 'the control'}.` : ': means sharing a letter do not differ significantly.'}
           </p>
           {entry.rankTest && <RankTestPanel kind={entry.rankTest.test} answer={entry.rankTest} />}
           <Suspense fallback={<LoadingState what="the plot" />}>
@@ -180,6 +198,19 @@ function ReportMeasureSection({ entry, treatmentOrder, control }: { entry: Repor
         </>
       )}
     </section>
+  );
+}
+
+/** "Round: Day 14 · Scope: Hollow Lane · Means compared by Fisher's protected LSD at α = 0.05", the choices the report was made with. */
+function ReportChoicesLine({ report }: { report: TrialReport }) {
+  const first = report.measures[0];
+  if (!first) return null;
+  const rounds = [...new Set(report.measures.flatMap((m) => (m.round ? [m.round.label] : [])))];
+  return (
+    <p className="fr-report__choices" aria-label="Choices of this report">
+      <strong>Round:</strong> {rounds.length === 1 ? rounds[0] : 'each measure’s latest round with data'} · <strong>Scope:</strong> {first.scopeLabel} · <strong>Means compared by</strong>{' '}
+      {methodLabels[first.method]} at α = {first.alpha}
+    </p>
   );
 }
 

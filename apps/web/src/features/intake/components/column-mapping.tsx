@@ -9,7 +9,9 @@ const shownRows = 100;
 
 /**
  * The file as the browser read it: one select per column saying what the column holds (matched
- * from its heading, changeable), and the first rows, the rows with problems marked.
+ * from its heading, changeable), and the first rows, the rows with problems marked. Every column is
+ * shown: a wide file scrolls inside the table, with the row number and the plot label column kept in
+ * view at the left (the plot label column is shown first, wherever it is in the file) and the headings at the top.
  */
 export function ColumnMapping({
   preview,
@@ -27,14 +29,20 @@ export function ColumnMapping({
   disabled?: boolean;
 }) {
   const rows = preview.rows.filter((row, index) => index < shownRows || problemRows.has(row.row));
+  const plotLabelAt = choices.indexOf('plotLabel');
+  // The file's columns in the order shown: the plot label first (frozen), the others as they come.
+  const order = plotLabelAt < 0 ? preview.headers.map((_, index) => index) : [plotLabelAt, ...preview.headers.map((_, index) => index).filter((index) => index !== plotLabelAt)];
+  const frozen = (index: number) => (index === plotLabelAt ? 'fr-intake-preview__frozen' : undefined);
   return (
     <div className="fr-table-scroll fr-intake-preview">
       <HTMLTable compact bordered aria-label="Preview of the file">
         <thead>
           <tr>
-            <th scope="col">Row</th>
-            {preview.headers.map((header, index) => (
-              <th scope="col" key={index}>
+            <th scope="col" className="fr-intake-preview__rownum">
+              Row
+            </th>
+            {order.map((index) => ({ header: preview.headers[index]!, index })).map(({ header, index }) => (
+              <th scope="col" key={index} className={frozen(index)}>
                 <div className="fr-intake-preview__header">{header || <span className="fr-muted">(no heading)</span>}</div>
                 <HTMLSelect
                   className="fr-intake-preview__select"
@@ -68,12 +76,14 @@ export function ColumnMapping({
             const faulty = problemRows.has(row.row);
             return (
               <tr key={row.row} className={faulty ? 'fr-intake-preview__row--problem' : undefined} aria-invalid={faulty || undefined}>
-                <th scope="row" className="fr-num">
+                <th scope="row" className="fr-num fr-intake-preview__rownum">
                   {faulty && <span className="fr-intake-preview__flag" aria-hidden="true">!</span>}
                   {row.row}
                 </th>
-                {preview.headers.map((_, index) => (
-                  <td key={index}>{row.cells[index] ?? ''}</td>
+                {order.map((index) => (
+                  <td key={index} className={frozen(index)}>
+                    {row.cells[index] ?? ''}
+                  </td>
                 ))}
               </tr>
             );

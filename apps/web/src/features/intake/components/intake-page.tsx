@@ -107,7 +107,7 @@ export function IntakePage({ trial }: { trial: TrialDetail }) {
   const otherError = submit.error && !(submit.error instanceof IntakeRefusedError) ? submit.error : null;
 
   return (
-    <div className="fr-intake">
+    <div className={chosen && site?.randomizedAt ? 'fr-intake fr-intake--previewing' : 'fr-intake'}>
       <div className="fr-intake__main">
         <div className="fr-intake__bar">
           <IdPicker label="Site" value={site?.id} options={access.sites.map((s) => ({ id: s.id, text: s.name }))} onPick={(id) => pick({ site: id })} />

@@ -1,6 +1,7 @@
 import { Button, Callout, FormGroup, InputGroup } from '@blueprintjs/core';
 import type { Measure, Observation, Plot } from '@friable/contracts';
 import { useState, type FormEvent } from 'react';
+import { MissingReasonInput } from '../../../components/missing-reason-input';
 import type { CellRefusal } from '../hooks/use-cell-save';
 import { cellLook, cellText } from '../../../lib/observation-text';
 import { formatMoment } from '../../../lib/format-moment';
@@ -58,8 +59,8 @@ export function CellPanel({
         <FormGroup label="Value" labelFor="fr-ledger-value" helperText="A number, “>600” when the cut-off was reached, or “NA” when missing.">
           <InputGroup id="fr-ledger-value" value={value} disabled={!editable} onChange={(event) => setValue(event.target.value)} />
         </FormGroup>
-        <FormGroup label="Missing reason" labelFor="fr-ledger-reason">
-          <InputGroup id="fr-ledger-reason" value={missingReason} disabled={!editable} onChange={(event) => setMissingReason(event.target.value)} />
+        <FormGroup label="Missing reason" labelFor="fr-ledger-reason" helperText="Needed when the value is NA: choose a common reason or type your own.">
+          <MissingReasonInput id="fr-ledger-reason" label="Missing reason" value={missingReason} disabled={!editable} onChange={setMissingReason} />
         </FormGroup>
         <FormGroup label="Notes" labelFor="fr-ledger-notes">
           <InputGroup id="fr-ledger-notes" value={notes} disabled={!editable} onChange={(event) => setNotes(event.target.value)} />

@@ -1,4 +1,4 @@
-import { Checkbox, HTMLSelect, InputGroup } from '@blueprintjs/core';
+import { HTMLSelect, InputGroup, Radio, RadioGroup } from '@blueprintjs/core';
 import { MEASURE_KINDS, type Measure, type MeasureKind, type TrialDetail } from '@friable/contracts';
 import { useState } from 'react';
 import { Field, parseNumberFields } from '../../../components/field-errors';
@@ -46,7 +46,13 @@ export function MeasureDialog({ trial, measure, onClose }: { trial: TrialDetail;
     hardMax: numberInputText(measure?.hardMax),
     decimals: numberInputText(measure?.decimals ?? 1),
   });
-  const [higherIsBetter, setHigherIsBetter] = useState(measure?.higherIsBetter ?? true);
+  // Asked, never assumed: a new measure starts with neither answer, except a time, where shorter is better.
+  const [higherIsBetter, setHigherIsBetter] = useState<boolean | null>(measure?.higherIsBetter ?? null);
+  const [directionChosen, setDirectionChosen] = useState(measure !== null);
+  function chooseKind(next: MeasureKind) {
+    setKind(next);
+    if (!directionChosen) setHigherIsBetter(next === 'time-with-cutoff' ? false : null);
+  }
   const error = localError ?? save.error;
   const symbol = unitSymbol(unit);
   const text = (field: keyof typeof texts) => ({ value: texts[field], onChange: (value: string) => setTexts((all) => ({ ...all, [field]: value })) });
@@ -56,7 +62,8 @@ export function MeasureDialog({ trial, measure, onClose }: { trial: TrialDetail;
     setLocalError(parsed.error);
     if (parsed.error) return;
     const v = parsed.values;
-    const input: MeasureBody = {
+    // Without an answer the direction is left out, and the server's refusal is shown beside the question.
+    const input = {
       code: code.trim(),
       name: name.trim(),
       unit,
@@ -69,8 +76,8 @@ export function MeasureDialog({ trial, measure, onClose }: { trial: TrialDetail;
       hardMin: v.hardMin,
       hardMax: v.hardMax,
       decimals: v.decimals ?? 0,
-      higherIsBetter,
-    };
+      ...(higherIsBetter === null ? {} : { higherIsBetter }),
+    } as MeasureBody;
     form.send(input);
   }
 
@@ -100,7 +107,7 @@ export function MeasureDialog({ trial, measure, onClose }: { trial: TrialDetail;
                 </HTMLSelect>
               </Field>
               <Field label="Kind" field="kind" error={error}>
-                <HTMLSelect id="fr-field-kind" value={kind} onChange={(e) => setKind(e.target.value as MeasureKind)} fill>
+                <HTMLSelect id="fr-field-kind" value={kind} onChange={(e) => chooseKind(e.target.value as MeasureKind)} fill>
                   {MEASURE_KINDS.map((k) => (
                     <option key={k} value={k}>
                       {measureKindLabels[k]}
@@ -144,8 +151,18 @@ export function MeasureDialog({ trial, measure, onClose }: { trial: TrialDetail;
               <Field label="Decimals" field="decimals" error={error} help="How readings are shown.">
                 <NumberText id="fr-field-decimals" {...text('decimals')} />
               </Field>
-              <Field label="Which way is better" field="higherIsBetter" error={error}>
-                <Checkbox id="fr-field-higherIsBetter" checked={higherIsBetter} onChange={(e) => setHigherIsBetter(e.currentTarget.checked)} label="Higher is better" />
+              <Field label="Which way is better" field="higherIsBetter" error={error} help="Findings words each difference this way round.">
+                <RadioGroup
+                  name="fr-field-higherIsBetter"
+                  selectedValue={higherIsBetter === null ? undefined : higherIsBetter ? 'higher' : 'lower'}
+                  onChange={(e) => {
+                    setDirectionChosen(true);
+                    setHigherIsBetter(e.currentTarget.value === 'higher');
+                  }}
+                >
+                  <Radio value="higher" label="Higher is better" />
+                  <Radio value="lower" label="Lower is better" />
+                </RadioGroup>
               </Field>
             </div>
       </FormDialog>

@@ -6,6 +6,11 @@ import { amounts, makeTrial, person } from '../../../test/trial-fixture';
 import { ProtocolPage } from './protocol-page';
 
 const base = { 'GET /api/auth/me': { status: 200, body: person }, 'GET /api/trials/3/amounts': { status: 200, body: amounts } };
+/** The fixture trial before any site is randomized: adding a treatment clears nothing, so nothing is asked. */
+const unrandomized = () => {
+  const trial = makeTrial();
+  return { ...trial, sites: trial.sites.map((site) => ({ ...site, randomizedAt: null, randomizationSeed: null, plotCount: 0 })) };
+};
 
 describe('ProtocolPage', () => {
   beforeEach(() => window.localStorage.setItem('friable.signedIn', '1'));
@@ -77,7 +82,7 @@ describe('ProtocolPage', () => {
         body: { statusCode: 422, error: 'Unprocessable Entity', message: 'The treatment was not saved.', errors: [{ field: 'code', message: 'code must be 1 to 12 letters or digits' }] },
       },
     });
-    renderWithApp(<ProtocolPage trial={makeTrial()} />);
+    renderWithApp(<ProtocolPage trial={unrandomized()} />);
     await userEvent.click(screen.getByRole('button', { name: 'Add treatment' }));
     const dialog = await screen.findByRole('dialog');
     await userEvent.type(within(dialog).getByLabelText('Code'), 'G 40!');
@@ -102,7 +107,7 @@ describe('ProtocolPage', () => {
 
   it('sends a new treatment and loads the trial again', async () => {
     const calls = mockApi({ ...base, 'POST /api/trials/3/treatments': { status: 201, body: {} }, 'GET /api/trials/3': { status: 200, body: makeTrial() } });
-    renderWithApp(<ProtocolPage trial={makeTrial()} />);
+    renderWithApp(<ProtocolPage trial={unrandomized()} />);
     await userEvent.click(screen.getByRole('button', { name: 'Add treatment' }));
     const dialog = await screen.findByRole('dialog');
     await userEvent.type(within(dialog).getByLabelText('Code'), 'G20');
@@ -112,6 +117,26 @@ describe('ProtocolPage', () => {
     await userEvent.click(within(dialog).getByRole('button', { name: 'Add treatment' }));
     await waitFor(() => expect(screen.queryByRole('dialog')).not.toBeInTheDocument());
     expect(calls.find((c) => c.method === 'POST')?.body).toMatchObject({ code: 'G20', name: 'Gypsum, half rate', isControl: false, rateValue: 20, rateUnit: 'lb/1000ft2', rateBasis: 'area', materialKind: 'gypsum', purity: null });
+  });
+
+  it('asks for the trial code before adding a treatment clears a randomized layout, and sends it only then', async () => {
+    const impact = { sites: [{ siteId: 31, siteName: 'Hollow Lane', plots: 12, values: 0 }], layouts: 1, plots: 12, values: 0, summary: 'Clears the layout of Hollow Lane, 12 plots: the site must be randomized again, and printed sheets and plot labels made anew.', refusal: null };
+    const calls = mockApi({ ...base, 'GET /api/trials/3/layout-impact': { status: 200, body: impact }, 'POST /api/trials/3/treatments': { status: 201, body: {} }, 'GET /api/trials/3': { status: 200, body: makeTrial() } });
+    const trial = makeTrial();
+    renderWithApp(<ProtocolPage trial={trial} />);
+    await userEvent.click(screen.getByRole('button', { name: 'Add treatment' }));
+    const form = await screen.findByRole('dialog');
+    await userEvent.type(within(form).getByLabelText('Code'), 'G20');
+    await userEvent.type(within(form).getByLabelText('Name'), 'Gypsum, half rate');
+    await userEvent.click(within(form).getByRole('button', { name: 'Add treatment' }));
+    const confirm = await screen.findByRole('dialog', { name: 'Add treatment G20' });
+    expect(await within(confirm).findByText(impact.summary)).toBeInTheDocument();
+    const go = within(confirm).getByRole('button', { name: 'Add treatment' });
+    expect(go).toBeDisabled();
+    await userEvent.type(within(confirm).getByLabelText(`Type the trial code ${trial.code} to confirm`), trial.code);
+    expect(calls.some((c) => c.method === 'POST')).toBe(false);
+    await userEvent.click(go);
+    await waitFor(() => expect(calls.find((c) => c.method === 'POST')?.body).toMatchObject({ code: 'G20', name: 'Gypsum, half rate' }));
   });
 
   /** Renames G40 in its dialog while the server holds a newer version (2): answers the conflict dialog. */

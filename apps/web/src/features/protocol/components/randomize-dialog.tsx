@@ -4,6 +4,7 @@ import { useState } from 'react';
 import { Field } from '../../../components/field-errors';
 import { FormDialog } from '../../../components/form-dialog';
 import { useRandomizeSite } from '../api/randomize-site';
+import { LayoutChangeConfirm, type PendingLayoutChange } from './layout-change-confirm';
 
 /** Lays out a site's plots from a seed: the same seed always gives the same plan. */
 export function RandomizeDialog({ trial, site, onClose }: { trial: TrialDetail; site: Site; onClose: () => void }) {
@@ -11,11 +12,17 @@ export function RandomizeDialog({ trial, site, onClose }: { trial: TrialDetail; 
   const [seed, setSeed] = useState('');
   const again = site.randomizedAt !== null;
 
+  const [pending, setPending] = useState<PendingLayoutChange | null>(null);
+
   function submit() {
-    randomize.mutate({ siteId: site.id, seed: seed.trim() || undefined }, { onSuccess: onClose });
+    const run = () => randomize.mutate({ siteId: site.id, seed: seed.trim() || undefined }, { onSuccess: onClose });
+    // Randomizing again replaces a laid-out plan: what it clears is shown and the trial code typed first.
+    if (site.plotCount > 0) setPending({ what: `Replace the plot plan of ${site.name}`, siteId: site.id, confirmText: 'Randomize again', proceed: run });
+    else run();
   }
 
   return (
+    <>
     <FormDialog title={again ? `Randomize ${site.name} again` : `Randomize ${site.name}`} icon="random" onClose={onClose} onSubmit={submit} submitText={again ? 'Randomize again' : 'Randomize'} submitIcon="random" pending={randomize.isPending} error={randomize.error} shownFields={['seed']}>
           <p>
             Each block gets every treatment once, in an order drawn from the seed. Keep the seed: it rebuilds exactly this plan.
@@ -29,5 +36,7 @@ export function RandomizeDialog({ trial, site, onClose }: { trial: TrialDetail; 
             <InputGroup id="fr-field-seed" value={seed} onChange={(e) => setSeed(e.target.value)} autoFocus />
           </Field>
     </FormDialog>
+    <LayoutChangeConfirm trial={trial} change={pending} onClose={() => setPending(null)} />
+    </>
   );
 }

@@ -9,6 +9,7 @@ import { formatArea, numberInputText, parseNumberInput } from '../../../lib/form
 import { useMembers } from '../../../lib/api/get-members';
 import { useSaveSite } from '../api/save-site';
 import { useVersionedForm } from '../../../lib/edit-conflict';
+import { LayoutChangeConfirm, type PendingLayoutChange } from './layout-change-confirm';
 import { VersionConflict } from './version-conflict';
 import { plotsPerWholePlot } from './factor-roles';
 
@@ -60,6 +61,8 @@ export function SiteDialog({ trial, site, onClose }: { trial: TrialDetail; site:
   const text = (field: keyof typeof texts) => ({ value: texts[field], onChange: (value: string) => setTexts((all) => ({ ...all, [field]: value })) });
   const people = (members.data ?? []).filter((m, i, all) => all.findIndex((o) => o.userId === m.userId) === i);
 
+  const [pending, setPending] = useState<PendingLayoutChange | null>(null);
+
   function submit() {
     const parsed = parseNumberFields(texts, labels);
     setLocalError(parsed.error);
@@ -79,6 +82,11 @@ export function SiteDialog({ trial, site, onClose }: { trial: TrialDetail; site:
       labelPrefix: labelPrefix.trim().toUpperCase(),
       leadUserId,
     };
+    // Another number of blocks clears the site's layout: what it clears is shown and the trial code typed first.
+    if (site && site.plotCount > 0 && input.blocks !== site.blocks) {
+      setPending({ what: `Change the blocks of ${site.name} from ${site.blocks} to ${input.blocks}`, siteId: site.id, confirmText: 'Change the blocks', proceed: () => form.send(input) });
+      return;
+    }
     form.send(input);
   }
 
@@ -156,6 +164,7 @@ export function SiteDialog({ trial, site, onClose }: { trial: TrialDetail; site:
             </div>
       </FormDialog>
       <VersionConflict what={`site ${site?.name ?? name}`} conflict={form.conflict} onKeepMine={form.keepMine} onTakeStored={form.takeStored} />
+      <LayoutChangeConfirm trial={trial} change={pending} onClose={() => setPending(null)} />
     </>
   );
 }

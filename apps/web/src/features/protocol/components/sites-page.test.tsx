@@ -34,14 +34,21 @@ describe('SitesPage', () => {
     expect(within(dialog).getByText('0.071 m² (0.761 ft²)')).toBeInTheDocument();
   });
 
-  it('randomizes a site again with an optional seed, and says it is refused once data exist', async () => {
-    const calls = mockApi({ ...base, 'POST /api/trials/3/sites/31/randomize': { status: 201, body: [] }, 'GET /api/trials/3': { status: 200, body: makeTrial() } });
-    renderWithApp(<SitesPage trial={makeTrial()} />);
+  it('randomizes a site again with an optional seed once its trial code is typed, and says it is refused once data exist', async () => {
+    const impact = { sites: [{ siteId: 31, siteName: 'Hollow Lane', plots: 12, values: 0 }], layouts: 1, plots: 12, values: 0, summary: 'Clears the layout of Hollow Lane, 12 plots: the site must be randomized again, and printed sheets and plot labels made anew.', refusal: null };
+    const calls = mockApi({ ...base, 'GET /api/trials/3/layout-impact?siteId=31': { status: 200, body: impact }, 'POST /api/trials/3/sites/31/randomize': { status: 201, body: [] }, 'GET /api/trials/3': { status: 200, body: makeTrial() } });
+    const trial = makeTrial();
+    renderWithApp(<SitesPage trial={trial} />);
     await userEvent.click(screen.getByRole('button', { name: 'Randomize again Hollow Lane' }));
     const dialog = await screen.findByRole('dialog');
     expect(within(dialog).getByText(/once data exist it is refused/)).toBeInTheDocument();
     await userEvent.type(within(dialog).getByLabelText('Seed (optional)'), 'spring-27');
     await userEvent.click(within(dialog).getByRole('button', { name: 'Randomize again' }));
+    const confirm = await screen.findByRole('dialog', { name: 'Replace the plot plan of Hollow Lane' });
+    expect(await within(confirm).findByText(impact.summary)).toBeInTheDocument();
+    expect(calls.some((c) => c.method === 'POST')).toBe(false);
+    await userEvent.type(within(confirm).getByLabelText(`Type the trial code ${trial.code} to confirm`), trial.code);
+    await userEvent.click(within(confirm).getByRole('button', { name: 'Randomize again' }));
     await vi.waitFor(() => expect(calls.find((c) => c.method === 'POST')?.body).toEqual({ seed: 'spring-27' }));
   });
 

@@ -2,11 +2,11 @@ import { Button, Callout, Card, H3 } from '@blueprintjs/core';
 import type { Site, TrialDetail } from '@friable/contracts';
 import { useState } from 'react';
 import { Link } from 'react-router-dom';
-import { ConfirmButton } from '../../../components/confirm-button';
 import { EmptyState } from '../../../components/states';
 import { paths } from '../../../config/paths';
 import { formatArea, formatDate, formatNumber } from '../../../lib/format';
 import { useDeleteProtocolItem } from '../api/delete-protocol-item';
+import { LayoutChangeConfirm, type PendingLayoutChange } from './layout-change-confirm';
 import { protocolAccess } from './protocol-access';
 import { RandomizeDialog } from './randomize-dialog';
 import { ReadOnlyNotice } from './read-only-notice';
@@ -20,6 +20,7 @@ export function SitesPage({ trial }: { trial: TrialDetail }) {
   const [editing, setEditing] = useState<Site | 'new' | null>(null);
   const [randomizing, setRandomizing] = useState<Site | null>(null);
   const remove = useDeleteProtocolItem(trial.id, 'sites');
+  const [pending, setPending] = useState<PendingLayoutChange | null>(null);
   return (
     <div className="fr-sites">
       <ReadOnlyNotice access={access} locked={trial.status === 'locked'} />
@@ -39,7 +40,7 @@ export function SitesPage({ trial }: { trial: TrialDetail }) {
                 canEdit={access.canEdit}
                 onEdit={() => setEditing(site)}
                 onRandomize={() => setRandomizing(site)}
-                onRemove={() => remove.mutate(site.id)}
+                onRemove={() => setPending({ what: `Remove the site ${site.name}`, siteId: site.id, confirmText: 'Remove site', proceed: () => remove.mutate(site.id) })}
               />
             </li>
           ))}
@@ -48,6 +49,7 @@ export function SitesPage({ trial }: { trial: TrialDetail }) {
       {remove.error && <p className="fr-error-line">{remove.error.message}</p>}
       {editing && <SiteDialog trial={trial} site={editing === 'new' ? null : editing} onClose={() => setEditing(null)} />}
       {randomizing && <RandomizeDialog trial={trial} site={randomizing} onClose={() => setRandomizing(null)} />}
+      <LayoutChangeConfirm trial={trial} change={pending} onClose={() => setPending(null)} />
     </div>
   );
 }
@@ -90,7 +92,7 @@ function SiteCard({
             />
           )}
           {canEdit && !site.hasObservations && (
-            <ConfirmButton text="Remove" ariaLabel={`Remove ${site.name}`} confirmText="Remove site" question={`Remove the site ${site.name} and its plot plan?`} onConfirm={onRemove} />
+            <Button size="small" variant="minimal" intent="danger" text="Remove" aria-label={`Remove ${site.name}`} onClick={onRemove} />
           )}
         </div>
       </div>

@@ -8,6 +8,7 @@ import { RateUnitSelect } from '../../../components/rate-unit-select';
 import { isVolumeRateUnit, numberInputText } from '../../../lib/format';
 import { useSaveTreatment } from '../api/save-treatment';
 import { useVersionedForm } from '../../../lib/edit-conflict';
+import { LayoutChangeConfirm, type PendingLayoutChange } from './layout-change-confirm';
 import { VersionConflict } from './version-conflict';
 
 const shownFields = ['code', 'name', 'description', 'isControl', 'rateValue', 'rateUnit', 'rateBasis', 'incorporationDepthCm', 'product', 'purity', 'moistureBasis', 'moistureFraction', 'materialKind'];
@@ -37,6 +38,7 @@ export function TreatmentDialog({ trial, treatment, onClose }: { trial: TrialDet
   const [moisturePercent, setMoisturePercent] = useState(treatment?.moistureFraction != null ? String(treatment.moistureFraction * 100) : '');
   const [materialKind, setMaterialKind] = useState<'gypsum' | 'other'>(treatment?.materialKind ?? 'other');
   const error = localError ?? save.error;
+  const [pendingAdd, setPendingAdd] = useState<PendingLayoutChange | null>(null);
   const volumeRate = isVolumeRateUnit(rateUnit);
 
   function submit() {
@@ -60,6 +62,11 @@ export function TreatmentDialog({ trial, treatment, onClose }: { trial: TrialDet
       moistureFraction: hasRate && !volumeRate && moistureBasis === 'dry' && values.moistureFraction !== null ? values.moistureFraction / 100 : null,
       materialKind,
     };
+    // A new treatment clears every site's layout: once a site is randomized, that is confirmed first.
+    if (!treatment && trial.sites.some((site) => site.plotCount > 0)) {
+      setPendingAdd({ what: `Add treatment ${input.code}`, confirmText: 'Add treatment', proceed: () => form.send(input) });
+      return;
+    }
     form.send(input);
   }
 
@@ -135,6 +142,7 @@ export function TreatmentDialog({ trial, treatment, onClose }: { trial: TrialDet
             )}
       </FormDialog>
       <VersionConflict what={`treatment ${treatment?.code ?? code}`} conflict={form.conflict} onKeepMine={form.keepMine} onTakeStored={form.takeStored} />
+      <LayoutChangeConfirm trial={trial} change={pendingAdd} onClose={() => setPendingAdd(null)} />
     </>
   );
 }

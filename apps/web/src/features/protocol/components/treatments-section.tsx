@@ -2,17 +2,18 @@ import { Button, HTMLTable, Section, SectionCard, Tag } from '@blueprintjs/core'
 import type { PlotAmount, Treatment, TrialDetail } from '@friable/contracts';
 import { isFactorDesign } from '@friable/field';
 import { useState } from 'react';
-import { ConfirmButton } from '../../../components/confirm-button';
 import { EmptyState } from '../../../components/states';
 import { formatDoseShort, formatNumber, formatRate } from '../../../lib/format';
 import { useDeleteProtocolItem } from '../api/delete-protocol-item';
 import { useAmounts } from '../api/get-amounts';
 import { appliedToWords } from './factor-roles';
+import { LayoutChangeConfirm, type PendingLayoutChange } from './layout-change-confirm';
 import { TreatmentDialog } from './treatment-dialog';
 
 /** The treatments, each with its rate and how much goes on one plot at every site. */
 export function TreatmentsSection({ trial, canEdit }: { trial: TrialDetail; canEdit: boolean }) {
   const [editing, setEditing] = useState<Treatment | 'new' | null>(null);
+  const [pending, setPending] = useState<PendingLayoutChange | null>(null);
   const remove = useDeleteProtocolItem(trial.id, 'treatments');
   const amounts = useAmounts(trial.id);
   const factorial = isFactorDesign(trial.design);
@@ -83,13 +84,14 @@ export function TreatmentsSection({ trial, canEdit }: { trial: TrialDetail; canE
                       <td className="fr-actions">
                         <Button variant="minimal" size="small" icon="edit" text="Edit" aria-label={`Edit ${treatment.code}`} onClick={() => setEditing(treatment)} />
                         {!factorial && (
-                          <ConfirmButton
+                          <Button
+                            variant="minimal"
+                            size="small"
+                            intent="danger"
                             text="Remove"
-                            ariaLabel={`Remove ${treatment.code}`}
-                            confirmText="Remove treatment"
-                            question={`Remove treatment ${treatment.code} (${treatment.name}) from the protocol?`}
+                            aria-label={`Remove ${treatment.code}`}
                             loading={remove.isPending && remove.variables === treatment.id}
-                            onConfirm={() => remove.mutate(treatment.id)}
+                            onClick={() => setPending({ what: `Remove treatment ${treatment.code} (${treatment.name})`, confirmText: 'Remove treatment', proceed: () => remove.mutate(treatment.id) })}
                           />
                         )}
                       </td>
@@ -106,6 +108,7 @@ export function TreatmentsSection({ trial, canEdit }: { trial: TrialDetail; canE
         {remove.error && <p className="fr-error-line">{remove.error.message}</p>}
       </SectionCard>
       {editing && <TreatmentDialog trial={trial} treatment={editing === 'new' ? null : editing} onClose={() => setEditing(null)} />}
+      <LayoutChangeConfirm trial={trial} change={pending} onClose={() => setPending(null)} />
     </Section>
   );
 }

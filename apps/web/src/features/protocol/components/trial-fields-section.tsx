@@ -6,6 +6,7 @@ import { FormDialog } from '../../../components/form-dialog';
 import { designHelp, designLabels, formatDate, statusLabels } from '../../../lib/format';
 import { useUpdateTrial } from '../api/update-trial';
 import { useVersionedForm } from '../../../lib/edit-conflict';
+import { LayoutChangeConfirm, type PendingLayoutChange } from './layout-change-confirm';
 import { VersionConflict } from './version-conflict';
 
 const shownFields = ['title', 'question', 'design', 'startDate', 'seed', 'safetyNotes', 'noControlReason'];
@@ -66,8 +67,10 @@ function TrialFieldsDialog({ trial, onClose }: { trial: TrialDetail; onClose: ()
 
   const form = useVersionedForm<Omit<TrialUpdateInput, 'version'>, TrialDetail, TrialUpdateInput>(update, (input, version) => ({ ...input, version: version ?? trial.version }), trial, onClose);
 
+  const [pendingDesign, setPendingDesign] = useState<PendingLayoutChange | null>(null);
+
   function submit() {
-    form.send({
+    const input = {
         title: title.trim(),
         question: question.trim() || null,
         design,
@@ -75,7 +78,13 @@ function TrialFieldsDialog({ trial, onClose }: { trial: TrialDetail; onClose: ()
         seed: seed.trim(),
         safetyNotes: safetyNotes.trim() || null,
         noControlReason: noControlReason.trim() || null,
-      });
+      };
+    // A new design clears every site's layout: once a site is randomized, that is confirmed first.
+    if (design !== trial.design && trial.sites.some((site) => site.plotCount > 0)) {
+      setPendingDesign({ what: `Change the design to ${designLabels[design] ?? design}`, confirmText: 'Change the design', proceed: () => form.send(input) });
+      return;
+    }
+    form.send(input);
   }
 
   return (
@@ -114,6 +123,7 @@ function TrialFieldsDialog({ trial, onClose }: { trial: TrialDetail; onClose: ()
             )}
       </FormDialog>
       <VersionConflict what={`trial ${trial.code}`} conflict={form.conflict} onKeepMine={form.keepMine} onTakeStored={form.takeStored} />
+      <LayoutChangeConfirm trial={trial} change={pendingDesign} onClose={() => setPendingDesign(null)} />
     </>
   );
 }

@@ -2,6 +2,7 @@ import { Button, InputGroup, Tag } from '@blueprintjs/core';
 import type { Measure, Observation } from '@friable/contracts';
 import { findUnit } from '@friable/field';
 import { useEffect, useState } from 'react';
+import { MissingReasonInput } from '../../../components/missing-reason-input';
 import { formatNumber } from '../../../lib/format';
 import { measureHeading } from '../../../lib/measure-heading';
 import { writeNumber } from '../../../lib/number-reading';
@@ -82,7 +83,7 @@ export function MeasureEntry({
     }
     if (read.kind === 'ambiguous') return; // the question below asks which was meant
     if (read.kind === 'missing' && !reasonText) {
-      setProblem('Say why the value is missing (for example “plot flooded”).');
+      setProblem('A missing value needs a reason: choose one below or type why it is missing.');
       return;
     }
     const value = read.kind === 'missing' ? 'NA' : read.text;
@@ -153,12 +154,14 @@ export function MeasureEntry({
         </div>
       )}
       {reading.kind === 'missing' && (
-        <InputGroup
-          aria-label={`Why ${measure.name} is missing`}
-          placeholder="Why is it missing?"
+        <MissingReasonInput
+          id={`${id}-reason`}
+          label={`Why ${measure.name} is missing`}
           value={reason}
           disabled={disabled}
-          onChange={(event) => setReason(event.target.value)}
+          large
+          onChange={setReason}
+          onChoose={(chosen) => commit({ reason: chosen })}
           onBlur={() => commit()}
         />
       )}

@@ -63,7 +63,7 @@ export function AncovaView({ findings, names }: { findings: AncovaFindings; name
       </ModelSection>
       <AnovaTable answer={findings} decimals={context.measure.decimals} unit={context.measure.unit} headingId="fr-ancova-table-title" />
       <MeansTable answer={answer} method={context.choices.method} control={context.controlCode ?? undefined} decimals={context.measure.decimals} unit={context.measure.unit} treatmentNames={names} />
-      <ComparisonsTable answer={findings} method={context.choices.method} alpha={context.choices.alpha} decimals={context.measure.decimals} />
+      <ComparisonsTable answer={findings} method={context.choices.method} alpha={context.choices.alpha} decimals={context.measure.decimals} higherIsBetter={context.measure.higherIsBetter} />
       <AnalysisCautions answer={findings} />
     </div>
   );
