@@ -30,6 +30,16 @@ interface ChosenFile {
   partial: boolean;
 }
 
+/** The ticket of this tab's upload for a site and round that had not answered when the page was left. */
+function readSent(key: string): string[] {
+  try {
+    const ticket = window.sessionStorage.getItem(key);
+    return ticket ? [ticket] : [];
+  } catch {
+    return [];
+  }
+}
+
 const fileSize = (bytes: number) => (bytes < 1_048_576 ? `${formatNumber(bytes / 1024, 0)} kB` : `${formatNumber(bytes / 1_048_576, 1)} MB`);
 
 /**
@@ -56,13 +66,20 @@ export function IntakePage({ trial }: { trial: TrialDetail }) {
   const remembered = useRememberedColumns(trial.id);
   const imports = useIntakeImports(trial.id, site?.id, round?.id, submit.isPending);
   const mine = imports.data?.find((record) => record.ticket === ticket);
-  // Uploads of others (or of this page before a reload) that were seen running: followed to their end.
-  const [watched, setWatched] = useState<ReadonlySet<string>>(new Set());
+  // This page's last upload, kept for the browser tab so that after a reload it is followed (or its end shown).
+  const sentKey = `friable.intake.${trial.id}.${site?.id}.${round?.id}`;
+  // Uploads of others, or of this page before a reload, that were seen running: followed to their end.
+  const [watched, setWatched] = useState<ReadonlySet<string>>(() => new Set(readSent(sentKey)));
   useEffect(() => {
     const running = (imports.data ?? []).filter((record) => record.finishedAt === null && record.ticket !== ticket && !watched.has(record.ticket));
     if (running.length) setWatched(new Set([...watched, ...running.map((record) => record.ticket)]));
   }, [imports.data, ticket, watched]);
   const followed = (imports.data ?? []).filter((record) => record.ticket !== ticket && watched.has(record.ticket));
+  useEffect(() => {
+    // Shown now that it has ended: a later reload need not show it again.
+    const [sent] = readSent(sentKey);
+    if (sent && sent !== ticket && imports.data?.some((record) => record.ticket === sent && record.finishedAt !== null)) window.sessionStorage.removeItem(sentKey);
+  }, [imports.data, sentKey, ticket]);
 
   function startOver() {
     setChecked(null);
@@ -109,6 +126,7 @@ export function IntakePage({ trial }: { trial: TrialDetail }) {
     if (!chosen || !site || !round) return;
     const next = newTicket();
     setTicket(next);
+    window.sessionStorage.setItem(sentKey, next);
     setProgress(0);
     submit.mutate(
       {
@@ -124,7 +142,10 @@ export function IntakePage({ trial }: { trial: TrialDetail }) {
       },
       {
         onSuccess: (result) => (result.dryRun ? setChecked(result) : setSaved(result)),
-        onSettled: () => setProgress(null),
+        onSettled: () => {
+          setProgress(null);
+          window.sessionStorage.removeItem(sentKey);
+        },
       },
     );
   }
