@@ -339,7 +339,9 @@ export class IntakeService {
     else if (stream) await stream.end();
     if (checked.errors.length > 0) {
       const rows = new Set(checked.errors.map((error) => error.row).filter((row) => row !== null)).size;
-      const where = rows > 0 ? ` in ${plural(rows, 'row', 'rows')}` : '';
+      // Only the first problems are listed; their rows would undercount a file with more.
+      const listedAll = checked.errors.length >= checked.errorCount;
+      const where = !listedAll ? `; the first ${count(rows)} rows with one are listed` : rows > 0 ? ` in ${plural(rows, 'row', 'rows')}` : '';
       throw refusal(`Nothing was written: the file has ${plural(checked.errorCount, 'problem', 'problems')}${where}. Correct them and upload the whole file again.`, checked.errors);
     }
     if (checked.valueWarnings > 0 && !options.dryRun && !options.acceptWarnings) {
