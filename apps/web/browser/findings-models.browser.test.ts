@@ -106,5 +106,38 @@ describe('Findings: the model made for each measure', () => {
       expect(blocked).toEqual([]);
       await context.close();
     }, 180_000);
+
+    it(`a reviewer saves drain time's log-normal time ratios and reopens them: the same numbers, the same model (${viewport.name})`, async () => {
+      const context = await browser.newContext({ viewport });
+      const page = await context.newPage();
+      await signIn(page, 'reviewer@example.org');
+      await page.getByRole('heading', { name: 'Trials', exact: true }).waitFor();
+      const id = await trialId(page, 'FW-CLAY-26');
+      await page.goto(`${baseUrl()}/trials/${id}/findings`);
+      await page.getByRole('heading', { name: 'Share of plots not yet drained' }).waitFor();
+      await page.getByRole('combobox', { name: 'Time-ratio model' }).selectOption('lognormal');
+      await page.getByRole('heading', { name: 'Time ratios to the control (log-normal model)' }).waitFor();
+      const live = await page.getByRole('table', { name: 'Time ratio' }).innerText();
+      const title = `Log-normal drain times ${viewport.name} ${Date.now()}`;
+      await page.getByLabel('Title of the saved analysis').fill(title);
+      await page.getByRole('button', { name: 'Save this analysis' }).click();
+      await page.getByRole('status').getByText(`Saved as “${title}”.`).waitFor();
+      await page.getByRole('button', { name: `Open the saved analysis ${title}` }).click();
+      await page.getByRole('heading', { name: `Saved analysis: ${title}` }).waitFor();
+      expect(await page.locator('.fr-findings-caption').first().innerText()).toContain('Not-drained curves and time ratios');
+      await page.getByRole('heading', { name: 'Time ratios to the control (log-normal model)' }).waitFor();
+      expect(await page.getByRole('table', { name: 'Time ratio' }).innerText()).toBe(live);
+      expect(await page.getByRole('table', { name: 'Median drain time per treatment' }).locator('tbody tr').count()).toBe(5);
+      await page.getByText('The data have not changed since this analysis was saved.').waitFor();
+      await chartsDrawn(page, viewport.width);
+      await screenshot(page, `findings-saved-censored-${viewport.name}`);
+      // The report leads each measure with the model made for it, the classical ANOVA beside it.
+      await page.goto(`${baseUrl()}/trials/${id}/report`);
+      await page.getByRole('heading', { name: 'Not-drained curves and time ratios' }).waitFor();
+      expect(await page.getByRole('table', { name: /^Time ratios to CTL .* — drain time$/ }).locator('tbody tr').count()).toBe(4);
+      expect(await page.getByRole('heading', { name: 'Score shares and odds' }).count()).toBe(1);
+      expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(viewport.width);
+      await context.close();
+    }, 180_000);
   }
 });

@@ -157,3 +157,50 @@ describe('the Round walk without signal', () => {
     expect(session.outside).toEqual([]);
   }, 120_000);
 });
+
+for (const viewport of [
+  { name: 'phone', width: 390, height: 844 },
+  { name: 'wide', width: 1280, height: 800 },
+]) {
+  describe(`the Round walk of a split plot (${viewport.name})`, () => {
+    const session = useBrowserSession({ viewport: { width: viewport.width, height: viewport.height }, isMobile: viewport.name === 'phone', hasTouch: viewport.name === 'phone' });
+
+    it('shows what goes on each plot level by level, the whole-plot amendment per whole plot, as the data sheet prints it', async () => {
+      const { page } = session;
+      await signIn(page, 'reviewer@example.org');
+      await page.getByRole('heading', { name: 'Trials', exact: true }).waitFor();
+      const trialId = (await api<TrialSummary[]>(page, '/trials')).find((t) => t.code === 'FW-MULCH-27')!.id;
+      const trial = await api<TrialDetail>(page, `/trials/${trialId}`);
+      const site = trial.sites[0]!;
+      const round = [...trial.rounds].sort((a, b) => a.dayOffset - b.dayOffset)[0]!;
+      // A plot whose whole-plot level is applied at a rate (not the bare control).
+      const wholePlotFactor = trial.factors.find((f) => f.appliedTo === 'whole plot')!;
+      const plots = await api<Array<{ id: number; label: string; treatmentId: number }>>(page, `/trials/${trialId}/plots?siteId=${site.id}`);
+      const levelOf = (plot: { treatmentId: number }) => wholePlotFactor.levels.find((l) => trial.treatments.find((t) => t.id === plot.treatmentId)!.factorLevelIds.includes(l.id))!;
+      const plot = plots.find((p) => levelOf(p).rateValue !== null)!;
+      await page.goto(`${baseUrl()}/trials/${trialId}/walk?site=${site.id}&round=${round.id}&plot=${plot.id}`);
+      const card = page.getByRole('article', { name: `Plot ${plot.label}` });
+      const amounts = card.locator('.fr-walk-plot__amounts');
+      await amounts.waitFor();
+      const label = plot.label;
+      const walkText = (await amounts.innerText()).replace(/^Goes on this plot:\s*/, '').trim();
+      // The whole-plot factor's amount is per whole plot (its sub plots side by side).
+      expect(walkText).toMatch(new RegExp(`(^|· )${levelOf(plot).code} .* per whole plot`));
+      // Material is weighed and spread from these amounts: the cautions stand beside them.
+      expect(await card.getByText('Compost and manure: wear gloves', { exact: false }).isVisible()).toBe(true);
+      expect(await horizontalOverflow(page)).toBeLessThanOrEqual(0);
+      await screenshot(page, `walk-split-plot-${viewport.name}`);
+
+      // The data sheet of the same site and round prints the same amounts for that plot.
+      await page.goto(`${baseUrl()}/trials/${trialId}/plot-plan`);
+      await page.getByLabel('Site', { exact: true }).selectOption({ label: site.name });
+      await page.getByLabel('Sheets for').selectOption({ label: round.label });
+      await page.getByRole('button', { name: 'Show Sheets' }).click();
+      const sheet = page.getByRole('table', { name: `Data sheet ${round.label} at ${site.name}` });
+      await sheet.waitFor();
+      const row = sheet.getByRole('row').filter({ has: page.getByRole('cell', { name: label, exact: true }) });
+      expect((await row.locator('.fr-sheet__amount').innerText()).trim()).toBe(walkText);
+      expect(session.outside).toEqual([]);
+    }, 180_000);
+  });
+}

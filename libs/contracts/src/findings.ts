@@ -1,5 +1,6 @@
 // Findings (the analysis of one measure and round), saved analyses with review, exports and the report.
 import type { AssessmentRound, Measure, MeasureKind, Site, TrialDetail } from './protocol';
+import type { FindingsModelQuery } from './models';
 import type { CommentRevision, ReportReview, ReviewStatus, SignOff } from './review';
 
 export const ANALYSIS_DESIGNS = [
@@ -251,6 +252,8 @@ export interface FindingsObservationRow {
   /** The stored decimal text (censored values: the cut-off value). */
   value: string;
   censored: boolean;
+  /** Factorial and split designs analysed on their factors: the level code of each factor, by factor name. */
+  factors?: Record<string, string>;
 }
 
 /** A treatment's mean as a percentage of the control's mean. */
@@ -344,16 +347,29 @@ export type Findings = AnovaAnswer & { context: FindingsContext };
 
 // ---------------------------------------------------------------- saved analyses (snapshots)
 
-/** POST /api/trials/:trialId/analyses body: the choices to save (analysed now, then frozen). */
-export interface AnalysisSnapshotCreate extends FindingsQuery {
+/** POST /api/trials/:trialId/analyses body: the choices to save (analysed now, then frozen); any analysis Findings offers. */
+export interface AnalysisSnapshotCreate extends FindingsQuery, FindingsModelQuery {
   title: string;
+}
+
+/** The choices of a saved analysis: the ANOVA's (resolved) and the model's, so reopening asks for the very same analysis. */
+export interface SavedAnalysisChoices extends FindingsChoices {
+  /** The analysis saved (older saved analyses, from before models could be saved: 'anova'). */
+  analysis: import('./models').FindingsAnalysis;
+  distribution?: import('./models').AftDistribution;
+  covariance?: import('./models').RepeatedCovariance;
+  family?: import('./models').CountFamilyChoice;
+  covariateMeasureId?: number;
+  covariateRoundId?: number;
 }
 
 export interface AnalysisSnapshotSummary {
   id: number;
   trialId: number;
   title: string;
-  choices: FindingsChoices;
+  choices: SavedAnalysisChoices;
+  /** Friable's name of the analysis saved ("Not-drained curves and time ratios", "Classical ANOVA"). */
+  analysisLabel: string;
   measureName: string;
   roundLabel: string;
   scopeLabel: string;
@@ -374,7 +390,8 @@ export interface AnalysisSnapshotSummary {
 
 /** GET /api/trials/:trialId/analyses/:analysisId — the stored result, never recomputed. */
 export interface AnalysisSnapshot extends AnalysisSnapshotSummary {
-  result: Findings;
+  /** The classical ANOVA (Findings) or a model's answer (ModelFindings), as Findings gave it. */
+  result: import('./models').FindingsAnswer;
   /** True when the current data's hash differs from dataHash. */
   dataChanged: boolean;
   currentDataHash: string | null;
@@ -458,6 +475,26 @@ export interface ReportMeasure {
   warnings: string[];
   /** Why there is no analysis (no data yet, or the engine's sentence). */
   unavailable: string | null;
+  /** The model made for the measure (Findings' default); null when it is the classical ANOVA above or could not be made. */
+  model: ReportModel | null;
+}
+
+/** A table of a model's numbers, ready to print: a title, column headings and rows in the same order. */
+export interface ReportTable {
+  title: string;
+  columns: string[];
+  rows: Array<Array<string | number | null>>;
+}
+
+/** The model made for a measure, in a report or a workbook: which, why, the choices it ran with, and its tables. */
+export interface ReportModel {
+  analysis: import('./models').FindingsAnalysis;
+  label: string;
+  why: string;
+  choices: SavedAnalysisChoices;
+  tables: ReportTable[];
+  /** Engine warnings and the sentences Findings adds (values left out, the covariate used). */
+  notices: string[];
 }
 
 /** GET /api/trials/:trialId/report — everything the printable report page needs. */

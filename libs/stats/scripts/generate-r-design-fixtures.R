@@ -2,7 +2,9 @@
 #   Rscript generate-r-design-fixtures.R cases.json results.json
 # Balanced classical cases: aov with Error() strata. Unbalanced least-squares cases: car::Anova(type = 3) with
 # contr.sum. REML cases: lmer (blocks, whole plots, sub plots random; sites and site × each factor term random)
-# with Kenward–Roger type III tests from pbkrtest::KRmodcomp and least-squares means from emmeans (Kenward–Roger).
+# with Kenward–Roger type III tests from pbkrtest::KRmodcomp and least-squares means from emmeans (Kenward–Roger),
+# and the same fit's Satterthwaite tests and means from lmerTest (anova(as_lmerModLmerTest(m), type = 3,
+# ddf = "Satterthwaite")) and emmeans(lmer.df = "satterthwaite").
 suppressPackageStartupMessages({ library(jsonlite); library(lme4); library(pbkrtest); library(emmeans); library(car) })
 emm_options(msg.nesting = FALSE, msg.interaction = FALSE, lmer.df = "kenward-roger", lmerTest.limit = 1e6, pbkrtest.limit = 1e6)
 options(contrasts = c("contr.sum", "contr.poly"))
@@ -19,10 +21,10 @@ frame <- function(case) {
   d
 }
 
-term_means <- function(m, names) {
+term_means <- function(m, names, df = "kenward-roger") {
   sets <- unlist(lapply(seq_along(names), function(k) combn(names, k, simplify = FALSE)), recursive = FALSE)
   lapply(sets, function(set) {
-    e <- as.data.frame(emmeans(m, set))
+    e <- as.data.frame(emmeans(m, set, lmer.df = df))
     list(term = paste(set, collapse = ":"), means = lapply(seq_len(nrow(e)), function(i) list(
       levels = as.list(setNames(vapply(set, function(f) as.character(e[[f]][i]), ""), set)), mean = e$emmean[i], se = e$SE[i], df = e$df[i])))
   })
@@ -68,11 +70,17 @@ analyse <- function(case) {
     kr <- KRmodcomp(m, L)$test
     list(term = labels[k], numDf = kr["Ftest", "ndf"], denDf = kr["Ftest", "ddf"], f = kr["Ftest", "stat"], p = kr["Ftest", "p.value"])
   })
+  # Satterthwaite on the same fit (lmerTest refits nothing: as_lmerModLmerTest adds the derivatives it needs).
+  a <- anova(lmerTest::as_lmerModLmerTest(m), type = 3, ddf = "Satterthwaite")
+  satterthwaite <- list(
+    call = "anova(lmerTest::as_lmerModLmerTest(m), type = 3, ddf = \"Satterthwaite\"); emmeans(m, set, lmer.df = \"satterthwaite\")",
+    tests = lapply(rownames(a), function(t) list(term = t, numDf = a[t, "NumDF"], denDf = a[t, "DenDF"], f = a[t, "F value"], p = a[t, "Pr(>F)"])),
+    means = term_means(m, names, "satterthwaite"))
   vc <- as.data.frame(VarCorr(m))
-  list(kind = "reml", formula = paste(deparse(f), collapse = ""), tests = tests, means = term_means(m, names),
+  list(kind = "reml", formula = paste(deparse(f), collapse = ""), tests = tests, means = term_means(m, names), satterthwaite = satterthwaite,
     varianceComponents = lapply(seq_len(nrow(vc)), function(i) list(name = vc$grp[i], variance = vc$vcov[i])))
 }
 
 out <- list(r = list(version = R.version.string, lme4 = as.character(packageVersion("lme4")), pbkrtest = as.character(packageVersion("pbkrtest")),
-  emmeans = as.character(packageVersion("emmeans")), car = as.character(packageVersion("car"))), cases = lapply(cases, analyse))
+  emmeans = as.character(packageVersion("emmeans")), car = as.character(packageVersion("car")), lmerTest = as.character(packageVersion("lmerTest"))), cases = lapply(cases, analyse))
 writeLines(toJSON(out, auto_unbox = TRUE, digits = NA, null = "null"), args[2])

@@ -1,11 +1,11 @@
 #!/usr/bin/env node
 // Generates random factorial and split-plot layouts deterministically (some balanced, some with missing plots or
 // a block left with a single plot, some over several sites), analyses each with R (generate-r-design-fixtures.R:
-// aov with Error() strata, car::Anova type 3, lme4 + pbkrtest KRmodcomp, emmeans) and writes
+// aov with Error() strata, car::Anova type 3, lme4 + pbkrtest KRmodcomp, lmerTest's Satterthwaite, emmeans) and writes
 // datasets/reference/r-design-fixtures.json, which src/r-design-reference.test.ts compares against.
 //
 // Usage: node libs/stats/scripts/generate-r-design-fixtures.mjs [--seed 20261211] [--output FILE] [--cases N]
-// Needs /usr/bin/Rscript with Debian's r-cran-lme4, -pbkrtest, -emmeans, -car and -jsonlite.
+// Needs /usr/bin/Rscript with Debian's r-cran-lme4, -pbkrtest, -lmertest, -emmeans, -car and -jsonlite.
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { commandOption as argument, writeFixtureFromR } from './r-fixture-runner.mjs';

@@ -6,6 +6,7 @@ import { factorTerms, prepareFactorialLayout, termName, type FactorialDesign, ty
 import { remlFactorialFit } from './factorial-reml-fit';
 import type { ErrorStratum } from './error-strata';
 import { separateMeans, type MeanSeparation, type MeanSeparationMethod } from './mean-separation';
+import { NO_RESIDUAL_VARIATION } from './residual-variation';
 import { shapiroWilk } from './shapiro-wilk';
 import type { TrialObservation } from './trial-layout';
 
@@ -100,6 +101,8 @@ export interface FactorialRequest {
   readonly values: readonly (number | string)[];
   readonly factorNames?: readonly string[];
   readonly model?: 'anova' | 'reml';
+  /** REML denominator degrees of freedom; default Kenward–Roger. */
+  readonly ddf?: 'kenward-roger' | 'satterthwaite';
   readonly sitesAre?: 'random' | 'fixed';
   readonly alpha: number;
   readonly methods: readonly MeanSeparationMethod[];
@@ -124,7 +127,7 @@ function chooseModel(layout: FactorialLayout, request: FactorialRequest): { kind
   }
   return layout.balanced
     ? { kind: 'anova', reason: 'Every plot is present, so the classical ANOVA is exact.' }
-    : { kind: 'reml', reason: `REML with Kenward–Roger degrees of freedom, because ${missing}.` };
+    : { kind: 'reml', reason: `REML with ${request.ddf === 'satterthwaite' ? 'Satterthwaite' : 'Kenward–Roger'} degrees of freedom, because ${missing}.` };
 }
 
 /** Level codes of every combination of the given factors, the first factor slowest. */
@@ -171,9 +174,10 @@ export function analyseFactorialTrial(request: FactorialRequest): FactorialTrial
     throw new StatsInputError('no residual degrees of freedom', `the ${empty.stratum} error (${empty.errorTerm}) has no degrees of freedom; more blocks are needed`);
   }
   const fit: FactorialFit =
-    classical && !sitesRandom ? classical : remlFactorialFit(layout, { sitesRandom, blocksFixed: model.kind === 'anova' });
+    classical && !sitesRandom ? classical : remlFactorialFit(layout, { sitesRandom, blocksFixed: model.kind === 'anova', ...(request.ddf ? { denominator: request.ddf } : {}) });
   const anova = classical ? classical.anova : fit.anova;
   const warnings: string[] = [...layout.notes];
+  if (classical?.strata.some((stratum) => stratum.ms === 0) || fit.residualMs === 0) warnings.push(NO_RESIDUAL_VARIATION);
   if (model.kind === 'reml') warnings.push(model.reason);
   if (classical && sitesRandom) warnings.push('With sites random, the means and their comparisons come from the mixed model (site and each site interaction random); the table is the classical one.');
 
@@ -205,14 +209,17 @@ export function analyseFactorialTrial(request: FactorialRequest): FactorialTrial
     };
   };
   const strip = ({ contrast: _contrast, centred: _centred, ...rest }: Entry): FactorialMean => Object.freeze(rest);
-  const difference = (a: Float64Array, b: Float64Array) => Float64Array.from(a, (value, i) => value - b[i]!);
+  const difference = differenceOf;
 
   const compare = (entries: readonly Entry[], methods: readonly MeanSeparationMethod[], control?: string, by: FactorialFit = fit): StratumComparisons => {
     const k = entries.length;
+    const first = difference(entries[1]!.contrast, entries[0]!.contrast);
+    const firstEstimate = by.estimate(first);
+    // No variation in the stratum: differences have no standard error, so nothing can be compared.
+    if (!(firstEstimate.variance > 0)) return Object.freeze({ comparisons: Object.freeze({}), letters: Object.freeze({}), errorTerm: by.errorOf(first), df: firstEstimate.df });
     const covariance = new Float64Array(k * k);
     for (let i = 0; i < k; i++) for (let j = i; j < k; j++) covariance[i * k + j] = covariance[j * k + i] = by.covariance(entries[i]!.contrast, entries[j]!.contrast);
-    const first = difference(entries[1]!.contrast, entries[0]!.contrast);
-    const df = by.estimate(first).df;
+    const df = firstEstimate.df;
     const separation = separateMeans({
       treatments: entries.map((e) => e.treatment),
       // Centred means: at 1e12 the shifted means have lost the digits their differences need.
@@ -236,7 +243,7 @@ export function analyseFactorialTrial(request: FactorialRequest): FactorialTrial
   if (request.methods.includes('lsd') && !methods.includes('lsd')) {
     warnings.push(`Fisher's LSD was not computed because no factor or interaction is significant at α = ${alpha}; set forceLsd to compute it anyway.`);
   }
-  if (!anySignificant) warnings.push(`No factor or interaction is significant at α = ${alpha}, so the letters are shown for reference only.`);
+  if (!anySignificant && !warnings.includes(NO_RESIDUAL_VARIATION)) warnings.push(`No factor or interaction is significant at α = ${alpha}, so the letters are shown for reference only.`);
   // Every pair of, say, 144 combinations (10,296 pairs) helps no one and costs seconds: beyond MAX_COMBINATIONS the
   // combinations are compared within slices and factor by factor only, and the answer says so.
   const overall =
@@ -322,6 +329,13 @@ export function analyseFactorialTrial(request: FactorialRequest): FactorialTrial
   });
 }
 
+/** a − b, element by element. */
+function differenceOf(a: Float64Array, b: Float64Array): Float64Array {
+  const out = new Float64Array(a.length);
+  for (let i = 0; i < a.length; i++) out[i] = a[i]! - b[i]!;
+  return out;
+}
+
 /** A kind of difference: the pairs of level combinations (of `which`) it covers. */
 interface DifferenceKind {
   readonly kind: string;
@@ -378,8 +392,7 @@ function differenceErrors(layout: FactorialLayout, fit: FactorialFit, alpha: num
     let critical = 0;
     let errorTerm = '';
     for (const [a, b] of pairs) {
-      const other = fit.mean(kind.which, b);
-      const contrast = Float64Array.from(fit.mean(kind.which, a), (value, i) => value - other[i]!);
+      const contrast = differenceOf(fit.mean(kind.which, a), fit.mean(kind.which, b));
       const estimate = fit.estimate(contrast);
       variance += estimate.variance;
       df += estimate.df;
@@ -410,10 +423,9 @@ function sliceTests(
     for (const [f, g] of [set, [...set].reverse()] as [number, number][]) {
       layout.factors[g]!.levels.forEach((level, l) => {
         const levelsAt = (a: number) => (f < g ? [a, l] : [l, a]);
-        const base = fit.mean(set, levelsAt(0));
-        const by = sliceFit(Float64Array.from(fit.mean(set, levelsAt(1)), (value, i) => value - base[i]!));
+        const by = sliceFit(differenceOf(fit.mean(set, levelsAt(1)), fit.mean(set, levelsAt(0))));
         const entries = layout.factors[f]!.levels.map((label, a) => ({ ...entry(set, levelsAt(a), by), treatment: label }));
-        const rows = entries.slice(1).map((e) => Float64Array.from(e.contrast, (value, i) => value - entries[0]!.contrast[i]!));
+        const rows = entries.slice(1).map((e) => differenceOf(e.contrast, entries[0]!.contrast));
         const test = by.test(rows);
         const separated = compare(entries, methods, undefined, by);
         slices.push(

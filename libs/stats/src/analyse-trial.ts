@@ -1,7 +1,10 @@
 import { analyseFactorialTrial, type DifferenceError, type SliceTest, type StratumComparisons, type TermMeans } from './analyse-factorial-trial';
 import { analyseWithCovariate } from './analysis-of-covariance';
 import type { ErrorStratum } from './error-strata';
+import { checkedValueText } from './decimal-values';
 import { isFactorialDesign, type FactorialDesign } from './factorial-layout';
+import { leaveOutMissing } from './observation-values';
+import { hasNoResidualVariation, NO_RESIDUAL_VARIATION } from './residual-variation';
 import { bartlettFromVariances } from './bartlett';
 import { brownForsythe } from './brown-forsythe';
 import { fitTrialDesign, type DesignFit, type TrialDesign, type TrialLayout } from './design-fit';
@@ -20,6 +23,8 @@ export interface TrialAnalysisRequest {
   readonly design: TrialDesign | FactorialDesign;
   /** Factorials and split plots: `anova` (classical) or `reml`; default anova when balanced, else reml. */
   readonly model?: 'anova' | 'reml';
+  /** REML denominator degrees of freedom: 'kenward-roger' (default, pbkrtest) or 'satterthwaite' (lmerTest). */
+  readonly ddf?: 'kenward-roger' | 'satterthwaite';
   /** Significance level, 0 < alpha < 1; default 0.05. */
   readonly alpha?: number;
   /** Multisite only: random (default) tests treatment against site × treatment; fixed tests all against error. */
@@ -33,8 +38,12 @@ export interface TrialAnalysisRequest {
   readonly forceLsd?: boolean;
   /** The factor names of a factorial (2–4) or split plot (whole-plot factor first); default: the keys of the first observation's factors. */
   readonly factorNames?: readonly string[];
-  readonly observations: readonly TrialObservation[];
+  /** A value of null is a plot not measured: it is left out and the answer says how many were. */
+  readonly observations: readonly (Omit<TrialObservation, 'value'> & { readonly value: TrialObservation['value'] | null })[];
 }
+
+/** A request whose every observation has a value (missing ones already left out). */
+export type MeasuredTrialRequest = Omit<TrialAnalysisRequest, 'observations'> & { readonly observations: readonly TrialObservation[] };
 
 /** One row of the ANOVA table; f and p are null where the term is not tested. */
 export interface AnovaRow {
@@ -115,7 +124,7 @@ function formatP(p: number): string {
   return p < 0.0001 ? p.toExponential(2) : p.toPrecision(3);
 }
 
-function transformedValues(request: TrialAnalysisRequest): { values: readonly (number | string)[]; offset: number; note: string | null } {
+function transformedValues(request: MeasuredTrialRequest): { values: readonly (number | string)[]; offset: number; note: string | null } {
   const kind = request.transform ?? 'none';
   if (kind === 'none') return { values: request.observations.map((o) => o.value), offset: 0, note: null };
   const numbers = request.observations.map((o, index) => {
@@ -137,8 +146,20 @@ function denominatorOf(term: string, request: TrialAnalysisRequest): string {
   return 'error';
 }
 
+function totalSumOfSquares(y: Float64Array): number {
+  let mean = 0;
+  for (const value of y) mean += value;
+  mean /= y.length;
+  let totalSs = 0;
+  for (const value of y) totalSs += (value - mean) ** 2;
+  return totalSs;
+}
+
 function anovaTable(fit: DesignFit, y: Float64Array, request: TrialAnalysisRequest): AnovaRow[] {
-  const errorMs = fit.residualDf > 0 ? fit.residualSs / fit.residualDf : null;
+  const totalSs = totalSumOfSquares(y);
+  // No residual variation: the error is 0, not rounding noise to divide by.
+  const residualSs = hasNoResidualVariation(fit.residualSs, totalSs) ? 0 : fit.residualSs;
+  const errorMs = fit.residualDf > 0 ? residualSs / fit.residualDf : null;
   const meanSquares = new Map<string, { ms: number | null; df: number }>(
     fit.rows.map((row) => [row.term, { ms: row.df > 0 ? row.ss / row.df : null, df: row.df }]),
   );
@@ -151,12 +172,7 @@ function anovaTable(fit: DesignFit, y: Float64Array, request: TrialAnalysisReque
     const p = f === null ? null : fUpperTailProbability(f, row.df, denominator.df);
     return Object.freeze({ term: row.term, df: row.df, ss: row.ss, ms, f, p, errorTerm: f === null ? null : denominatorOf(row.term, request) });
   });
-  let mean = 0;
-  for (const value of y) mean += value;
-  mean /= y.length;
-  let totalSs = 0;
-  for (const value of y) totalSs += (value - mean) ** 2;
-  rows.push(Object.freeze({ term: 'error', df: fit.residualDf, ss: fit.residualSs, ms: errorMs, f: null, p: null, errorTerm: null }));
+  rows.push(Object.freeze({ term: 'error', df: fit.residualDf, ss: residualSs, ms: errorMs, f: null, p: null, errorTerm: null }));
   rows.push(Object.freeze({ term: 'total', df: y.length - 1, ss: totalSs, ms: null, f: null, p: null, errorTerm: null }));
   return rows;
 }
@@ -287,13 +303,32 @@ function meanEntries(
  *   // { term: 'treatment', df: 3, ss: 0.385, ms: 0.128333, f: 14.4375, p: 0.000871 }
  */
 export function analyseTrial(request: TrialAnalysisRequest): TrialAnalysis {
+  if (Array.isArray(request?.observations) && request.observations.some((o) => o?.value === null)) return analyseWithoutMissing(request);
+  const complete = request as MeasuredTrialRequest;
   // A baseline covariate on the observations makes it an analysis of covariance (analysis-of-covariance.ts).
-  if (request.observations?.some((o) => o.covariate !== undefined)) return analyseWithCovariate(request);
+  if (complete.observations?.some((o) => o.covariate !== undefined)) return analyseWithCovariate(complete);
+  return analyseComplete(complete);
+}
+
+/** Missing values (null) left out, every other value checked where it stood, and the answer told how many. */
+function analyseWithoutMissing(request: TrialAnalysisRequest): TrialAnalysis {
+  request.observations.forEach((o, index) => o.value !== null && checkedValueText(o.value, index));
+  const names = request.factorNames ?? Object.keys(request.observations.find((o) => o.factors)?.factors ?? {});
+  const treatmentOf = (o: TrialAnalysisRequest['observations'][number]) => (o.factors ? names.map((name) => o.factors![name]).join(' × ') : String(o.treatment));
+  const missing = leaveOutMissing(request.observations, treatmentOf);
+  const result = analyseTrial({ ...request, observations: missing.kept as readonly TrialObservation[] });
+  return Object.freeze({ ...result, warnings: Object.freeze([...missing.notes, ...result.warnings]) });
+}
+
+function analyseComplete(request: MeasuredTrialRequest): TrialAnalysis {
   const { alpha, methods } = validateRequest(request);
   const transformed = transformedValues(request);
   if (isFactorialDesign(request.design)) {
     if (request.model !== undefined && request.model !== 'anova' && request.model !== 'reml') {
       throw new StatsInputError('invalid model', `model must be "anova" or "reml", got ${JSON.stringify(request.model)}`);
+    }
+    if (request.ddf !== undefined && request.ddf !== 'kenward-roger' && request.ddf !== 'satterthwaite') {
+      throw new StatsInputError('invalid ddf', `ddf must be "kenward-roger" or "satterthwaite", got ${JSON.stringify(request.ddf)}`);
     }
     return analyseFactorialTrial({
       design: request.design,
@@ -301,6 +336,7 @@ export function analyseTrial(request: TrialAnalysisRequest): TrialAnalysis {
       values: transformed.values,
       ...(request.factorNames ? { factorNames: request.factorNames } : {}),
       ...(request.model ? { model: request.model } : {}),
+      ...(request.ddf ? { ddf: request.ddf } : {}),
       ...(request.sitesAre ? { sitesAre: request.sitesAre } : {}),
       ...(request.control !== undefined ? { control: request.control } : {}),
       ...(request.forceLsd !== undefined ? { forceLsd: request.forceLsd } : {}),
@@ -322,7 +358,8 @@ export function analyseTrial(request: TrialAnalysisRequest): TrialAnalysis {
   }
   const warnings: string[] = [];
   const anova = anovaTable(fit, layout.y, request);
-  const mse = fit.residualSs / fit.residualDf;
+  const mse = anova.find((row) => row.term === 'error')!.ms!;
+  if (mse === 0) warnings.push(NO_RESIDUAL_VARIATION);
   const n = layout.y.length;
   let centredMean = 0;
   for (const value of layout.y) centredMean += value;
@@ -347,15 +384,17 @@ export function analyseTrial(request: TrialAnalysisRequest): TrialAnalysis {
     }
   }
 
-  const test = treatmentTest(anova, fit, request);
+  const test = mse === 0 ? null : treatmentTest(anova, fit, request);
   const treatmentSignificant = test !== null && test.p < alpha;
-  const requested = methods.filter((method) => method !== 'lsd' || treatmentSignificant || request.forceLsd === true);
-  if (methods.includes('lsd') && !requested.includes('lsd')) {
+  // Comparisons need a variance of the means; without one there are none to make (and no letters).
+  const comparable = comparisonMs > 0;
+  const requested = comparable ? methods.filter((method) => method !== 'lsd' || treatmentSignificant || request.forceLsd === true) : [];
+  if (comparable && methods.includes('lsd') && !requested.includes('lsd')) {
     warnings.push(
       `Fisher's LSD was not computed because the treatment F test is not significant at α = ${alpha}${test ? ` (p = ${formatP(test.p)})` : ''}; set forceLsd to compute it anyway.`,
     );
   }
-  if (!treatmentSignificant && requested.some((method) => method !== 'dunnett')) {
+  if (comparable && !treatmentSignificant && requested.some((method) => method !== 'dunnett')) {
     warnings.push(`The treatment F test is not significant at α = ${alpha}${test ? ` (p = ${formatP(test.p)})` : ''}, so the letters are shown for reference only.`);
   }
   const separation = separateMeans({

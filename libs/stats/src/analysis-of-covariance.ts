@@ -6,7 +6,7 @@ import { buildModelMatrix, linearPredictor, weightedCrossProduct, type ModelMatr
 import { layoutGrid, modelLayout, type LayoutTerm } from './model-layout';
 import { shapiroWilk } from './shapiro-wilk';
 import { factorSymmetric } from './symmetric-factor';
-import type { AnovaRow, ResidualDiagnostic, TrialAnalysis, TrialAnalysisRequest } from './analyse-trial';
+import type { AnovaRow, MeasuredTrialRequest, ResidualDiagnostic, TrialAnalysis } from './analyse-trial';
 
 /** What the analysis of covariance adds to the trial analysis. */
 export interface CovariateAnalysis extends TrialAnalysis {
@@ -74,7 +74,7 @@ function crossedTerm(name: string, first: Extract<ModelMatrixTerm, { kind: 'fact
  * treatments, no residual degrees of freedom, an unknown control, alpha or method.
  * @example analyseWithCovariate({ design: 'rcbd', observations: [{ treatment: 'C', block: '1', value: 12, covariate: 10 }, …] }).slopes;
  */
-export function analyseWithCovariate(request: TrialAnalysisRequest & { readonly observations: readonly { readonly covariate?: number | string }[] }): CovariateAnalysis {
+export function analyseWithCovariate(request: MeasuredTrialRequest & { readonly observations: readonly { readonly covariate?: number | string }[] }): CovariateAnalysis {
   if (request.design === 'factorial-rcbd') {
     throw new StatsInputError('covariate not supported', 'a covariate is taken for crd, rcbd and multisite-rcbd designs; for a factorial, analyse the combinations as treatments (design rcbd)');
   }

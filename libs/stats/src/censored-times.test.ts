@@ -89,4 +89,16 @@ describe('analyseCensoredTimes', () => {
     expect(() => analyseCensoredTimes({ design: 'crd', distribution: 'gamma' as never, observations: gehan })).toThrow(/distribution must be one of weibull, lognormal, loglogistic/);
     expect(() => analyseCensoredTimes({ design: 'crd', control: 'none', observations: gehan })).toThrow(/control none is not among the treatments/);
   });
+
+  it('leaves out the time-ratio model in words when its columns exceed 400, and still gives the curves and the log-rank test', () => {
+    // Invented: 450 blocks of two plots.
+    const observations = Array.from({ length: 900 }, (_, i) => ({ treatment: i % 2 ? 'Bark' : 'None', block: `B${Math.floor(i / 2)}`, value: 100 + ((i * 37) % 200), censored: i % 7 === 0 }));
+    const result = analyseCensoredTimes({ design: 'rcbd', observations });
+    expect(result.warnings).toContain(
+      'The time-ratio model was not fitted: its 451 columns (blocks, sites and treatments) are more than the 400 it can take (each Newton step works on a square matrix of that side); the curves, medians and the log-rank test still compare every treatment.',
+    );
+    expect(result.timeRatios).toEqual([]);
+    expect(result.curves).toHaveLength(2);
+    expect(result.logRank.strata).toBe(450);
+  });
 });

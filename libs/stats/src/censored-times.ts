@@ -5,11 +5,13 @@ import { logRank } from './log-rank';
 import { manyToControlStatement, treatmentContrasts } from './many-to-control';
 import { buildModelMatrix } from './model-matrix';
 import { modelLayout, type LabelledPlot, type LayoutTerm, type ModelLayout } from './model-layout';
+import { boundedValue, leaveOutMissing } from './observation-values';
 import { productLimitCurve, type ProductLimitPoint } from './product-limit';
 
 /** One plot's drain time: the time it drained, or (censored) the cut-off it had not drained by. */
 export interface CensoredObservation extends LabelledPlot {
-  readonly value: number | string;
+  /** Null: a plot not measured, left out (the answer says how many). */
+  readonly value: number | string | null;
   readonly censored: boolean;
 }
 
@@ -69,10 +71,10 @@ function curvesAndMedians(treatments: readonly string[], observations: readonly 
   return { curves, medians };
 }
 
-function parseTime(value: number | string, row: number): number {
-  const time = typeof value === 'number' ? value : Number(value);
+function parseTime(value: number | string | null, row: number): number {
+  const time = typeof value === 'number' ? value : typeof value === 'string' && value.trim() !== '' ? Number(value) : Number.NaN;
   if (!Number.isFinite(time) || time < 0) throw new StatsInputError('invalid time', `row ${row + 1} of the observations: the time must be a number of at least 0, got ${String(value)}`);
-  return time;
+  return boundedValue(time, `row ${row + 1} of the observations: the time`, String(value));
 }
 
 /** Rows the time-ratio model can use: blocks with no drained plot say nothing about treatments and push their own effect to infinity. */
@@ -122,6 +124,13 @@ function subsetTerm(layoutTerm: LayoutTerm, rows: readonly number[]): LayoutTerm
 export function analyseCensoredTimes(request: CensoredTimesRequest): CensoredTimesAnalysis {
   const distribution = request.distribution ?? 'weibull';
   if (!AFT_DISTRIBUTIONS.includes(distribution)) throw new StatsInputError('unknown distribution', `distribution must be one of ${AFT_DISTRIBUTIONS.join(', ')}, got ${String(distribution)}`);
+  if (request.observations.some((o) => o.value === null)) {
+    // Every measured time is checked where it stood, then the plots not measured are left out.
+    request.observations.forEach((o, i) => o.value !== null && parseTime(o.value, i));
+    const missing = leaveOutMissing(request.observations, (o) => String(o.treatment));
+    const result = analyseCensoredTimes({ ...request, observations: missing.kept });
+    return Object.freeze({ ...result, warnings: Object.freeze([...missing.notes, ...result.warnings]) });
+  }
   const observations = request.observations;
   if (observations.length === 0) throw new StatsInputError('too few observations', 'the analysis needs at least one plot');
   const layout = modelLayout(request.design, observations, request.control);
@@ -162,6 +171,9 @@ export function analyseCensoredTimes(request: CensoredTimesRequest): CensoredTim
   return Object.freeze(answer);
 }
 
+/** The most columns the time-ratio model is fitted with (blocks, sites and treatments); beyond, it is left out in words. */
+const MAX_MODEL_COLUMNS = 400;
+
 function fitModel(layout: ModelLayout, times: readonly number[], censored: readonly boolean[], distribution: AftDistribution, warnings: string[]) {
   const undrained = layout.treatments.filter((t) => layout.treatmentCodes.every((c, i) => layout.treatments[c] !== t || censored[i]));
   if (undrained.length > 0) {
@@ -179,6 +191,12 @@ function fitModel(layout: ModelLayout, times: readonly number[], censored: reado
   const rowCensored = Uint8Array.from(rows, (i) => (censored[i] ? 1 : 0));
   const allTerms = [...layout.blockingTerms, layout.treatmentTerm];
   const matrix = buildModelMatrix(rows.length, allTerms.map((t) => subsetTerm(t, rows).term));
+  if (matrix.columnCount > MAX_MODEL_COLUMNS) {
+    warnings.push(
+      `The time-ratio model was not fitted: its ${matrix.columnCount.toLocaleString('en')} columns (blocks, sites and treatments) are more than the ${MAX_MODEL_COLUMNS} it can take (each Newton step works on a square matrix of that side); the curves, medians and the log-rank test still compare every treatment.`,
+    );
+    return null;
+  }
   const fit = fitAcceleratedFailureTime(matrix, rowTimes, rowCensored, distribution);
   const warmStart = { coefficients: new Map(matrix.columnNames.map((name, j) => [name, fit.coefficients[j]!] as const).filter(([, v]) => Number.isFinite(v))), logScale: Math.log(fit.scale) };
   const fitTerms = (terms: readonly LayoutTerm[]): AftFit => {

@@ -1,5 +1,6 @@
 import Decimal from 'decimal.js';
 import { StatsInputError } from './errors';
+import { boundedValue } from './observation-values';
 
 /** Observation values centred on an exact decimal centre, ready for float64 arithmetic. */
 export interface CentredValues {
@@ -46,15 +47,25 @@ function scaledNumber(value: number): ScaledInteger | null {
   return null;
 }
 
-function valueText(value: unknown, index: number): string {
+/**
+ * The decimal text of one observed value, checked: a finite number or decimal literal within ±1e150.
+ * @throws StatsInputError ('non-finite value' or 'value out of range') naming the observation index.
+ * @example checkedValueText(' 2.50 ', 3); // '2.50'
+ */
+export function checkedValueText(value: unknown, index: number): string {
   if (typeof value === 'number') {
     if (!Number.isFinite(value)) throw new StatsInputError('non-finite value', `observation ${index} is ${value}`);
+    boundedValue(value, `observation ${index}`);
     // The shortest round-trip text of a double is the decimal its JSON source most likely held.
     return String(value);
   }
   if (typeof value === 'string') {
     const trimmed = value.trim();
-    if (DECIMAL_LITERAL.test(trimmed)) return trimmed;
+    if (DECIMAL_LITERAL.test(trimmed)) {
+      // "1e400" is a decimal literal whose value no double holds.
+      boundedValue(Number(trimmed), `observation ${index}`, JSON.stringify(trimmed));
+      return trimmed;
+    }
   }
   throw new StatsInputError('non-finite value', `observation ${index} is ${JSON.stringify(value)}`);
 }
@@ -72,14 +83,14 @@ function valueText(value: unknown, index: number): string {
  *
  * Reference: NIST Statistical Reference Datasets, ANOVA section (https://www.itl.nist.gov/div898/strd/),
  * and Simon & Lesage (1989), Comput. Stat. & Data Anal. 8, 325–332.
- * @throws StatsInputError (a RangeError) when the list is empty or a value is not a finite decimal number;
- *   the message names the observation index.
+ * @throws StatsInputError (a RangeError) when the list is empty or a value is not a finite decimal number
+ *   within ±1e150 (MAX_VALUE_MAGNITUDE); the message names the observation index.
  * @example
  *   centreDecimalValues(['1000000000000.4', '1000000000000.3']).values; // Float64Array [0, -0.1]
  */
 export function centreDecimalValues(raw: readonly (number | string)[]): CentredValues {
   if (raw.length === 0) throw new StatsInputError('too few observations', 'no values were given');
-  const texts = raw.map((value, index) => valueText(value, index));
+  const texts = raw.map((value, index) => checkedValueText(value, index));
   const scaled = raw.map((value, index) => (typeof value === 'number' ? scaledNumber(value) : parseScaledInteger(texts[index]!)));
   let commonScale = 0;
   for (const item of scaled) if (item && item.scale > commonScale) commonScale = item.scale;

@@ -41,15 +41,26 @@ export function errorStrata(units: readonly Int32Array[], strata: readonly Error
     for (const code of codes) counts[code]!++;
     return counts;
   });
-  const innerAt = (k: number, first: Float64Array, second: Float64Array): number => {
-    const codes = units[k]!;
-    const counts = unitCounts[k]!;
-    const sumsFirst = new Float64Array(counts.length);
-    const sumsSecond = first === second ? sumsFirst : new Float64Array(counts.length);
-    for (let i = 0; i < codes.length; i++) {
-      sumsFirst[codes[i]!]! += first[i]!;
-      if (first !== second) sumsSecond[codes[i]!]! += second[i]!;
+  // A stratum of single plots (the last) needs no unit sums: Ā is the identity there.
+  const single = units.map((codes, k) => unitCounts[k]!.length === codes.length && codes.every((code, i) => code === i));
+  // Unit sums of each linear function, per stratum, kept while the function is alive: the covariances of k
+  // means cost O(units) per pair instead of O(n) and an allocation.
+  const sumsOf = units.map(() => new WeakMap<Float64Array, Float64Array>());
+  const unitSums = (k: number, contrast: Float64Array): Float64Array => {
+    if (single[k]) return contrast;
+    let sums = sumsOf[k]!.get(contrast);
+    if (!sums) {
+      const codes = units[k]!;
+      sums = new Float64Array(unitCounts[k]!.length);
+      for (let i = 0; i < codes.length; i++) sums[codes[i]!]! += contrast[i]!;
+      sumsOf[k]!.set(contrast, sums);
     }
+    return sums;
+  };
+  const innerAt = (k: number, first: Float64Array, second: Float64Array): number => {
+    const counts = unitCounts[k]!;
+    const sumsFirst = unitSums(k, first);
+    const sumsSecond = first === second ? sumsFirst : unitSums(k, second);
     // Σ_i Ā c₁(i) Ā c₂(i) = Σ_units (sum₁ · sum₂) / count.
     let inner = 0;
     for (let u = 0; u < counts.length; u++) if (counts[u]! > 0) inner += (sumsFirst[u]! * sumsSecond[u]!) / counts[u]!;

@@ -5,6 +5,7 @@ import { cellCodes, sweepBalancedAnova, type SweepTerm } from './balanced-sweep'
 import { factorTerms, termName, type FactorialLayout } from './factorial-layout';
 import type { ModelFactor } from './linear-model';
 import { inverseOfPositiveDefinite } from './reml/symmetric-matrix';
+import { hasNoResidualVariation } from './residual-variation';
 
 /** One row of a factorial or split-plot ANOVA; REML rows have ss and ms null and carry numDf and denDf. */
 export interface FactorialAnovaRow {
@@ -14,7 +15,7 @@ export interface FactorialAnovaRow {
   readonly ms: number | null;
   readonly f: number | null;
   readonly p: number | null;
-  /** The row this term was tested against (null when not tested); REML: 'kenward-roger'. */
+  /** The row this term was tested against (null when not tested); REML: 'kenward-roger' or 'satterthwaite'. */
   readonly errorTerm: string | null;
   readonly numDf?: number;
   readonly denDf?: number;
@@ -129,24 +130,31 @@ export function classicalFactorialFit(layout: FactorialLayout, sitesRandom: bool
   const plan = classicalPlan(layout, sitesRandom);
   const sweep = sweepBalancedAnova(layout.y, plan.primitives, plan.terms);
   const n = layout.y.length;
+  let totalSs = 0;
+  let mean = 0;
+  for (const value of layout.y) mean += value;
+  mean /= n;
+  for (const value of layout.y) totalSs += (value - mean) ** 2;
+  // An error stratum with no variation (up to rounding) is 0, so nothing is divided by rounding noise.
+  const errorTerms = new Set(plan.stratumErrors);
+  const cleaned = (term: string, ss: number) => (errorTerms.has(term) && hasNoResidualVariation(ss, totalSs) ? 0 : ss);
   const meanSquares = new Map<string, { ms: number | null; df: number; ss: number }>();
-  for (const row of sweep.rows) meanSquares.set(row.term, { ms: row.df > 0 ? row.ss / row.df : null, df: row.df, ss: row.ss });
-  meanSquares.set('error', { ms: sweep.residualDf > 0 ? sweep.residualSs / sweep.residualDf : null, df: sweep.residualDf, ss: sweep.residualSs });
+  for (const row of sweep.rows) {
+    const ss = cleaned(row.term, row.ss);
+    meanSquares.set(row.term, { ms: row.df > 0 ? ss / row.df : null, df: row.df, ss });
+  }
+  const residualSs = cleaned('error', sweep.residualSs);
+  meanSquares.set('error', { ms: sweep.residualDf > 0 ? residualSs / sweep.residualDf : null, df: sweep.residualDf, ss: residualSs });
   const anova: FactorialAnovaRow[] = sweep.rows.map((row) => {
     const own = meanSquares.get(row.term)!;
     const errorTerm = plan.errorOf.get(row.term) ?? null;
     const denominator = errorTerm ? meanSquares.get(errorTerm) : undefined;
     const testable = own.ms !== null && denominator !== undefined && denominator.ms !== null && denominator.ms > 0 && denominator.df > 0;
     const f = testable ? own.ms! / denominator.ms! : null;
-    return Object.freeze({ term: row.term, df: row.df, ss: row.ss, ms: own.ms, f, p: f === null ? null : fUpperTailProbability(f, row.df, denominator!.df), errorTerm: f === null ? null : errorTerm });
+    return Object.freeze({ term: row.term, df: row.df, ss: own.ss, ms: own.ms, f, p: f === null ? null : fUpperTailProbability(f, row.df, denominator!.df), errorTerm: f === null ? null : errorTerm });
   });
-  let totalSs = 0;
-  let mean = 0;
-  for (const value of layout.y) mean += value;
-  mean /= n;
-  for (const value of layout.y) totalSs += (value - mean) ** 2;
-  const residualMs = sweep.residualDf > 0 ? sweep.residualSs / sweep.residualDf : 0;
-  anova.push(Object.freeze({ term: 'error', df: sweep.residualDf, ss: sweep.residualSs, ms: sweep.residualDf > 0 ? residualMs : null, f: null, p: null, errorTerm: null }));
+  const residualMs = sweep.residualDf > 0 ? residualSs / sweep.residualDf : 0;
+  anova.push(Object.freeze({ term: 'error', df: sweep.residualDf, ss: residualSs, ms: sweep.residualDf > 0 ? residualMs : null, f: null, p: null, errorTerm: null }));
   anova.push(Object.freeze({ term: 'total', df: n - 1, ss: totalSs, ms: null, f: null, p: null, errorTerm: null }));
   const strata: ErrorStratum[] = plan.stratumErrors.map((errorTerm, k) => {
     const entry = meanSquares.get(errorTerm)!;
@@ -176,6 +184,23 @@ export function classicalFactorialFit(layout: FactorialLayout, sitesRandom: bool
     }
     return keys;
   };
+  const membersByTerm = new Map<string, Map<number, number[]>>();
+  // The plots of every cell of a term, by cell key (cached per term).
+  const cellMembers = (factors: readonly number[]): Map<number, number[]> => {
+    let members = membersByTerm.get(factors.join(','));
+    if (!members) {
+      members = new Map();
+      const keys = cellKeys(factors);
+      for (let i = 0; i < n; i++) {
+        const list = members.get(keys[i]!);
+        if (list) list.push(i);
+        else members.set(keys[i]!, [i]);
+      }
+      membersByTerm.set(factors.join(','), members);
+    }
+    return members;
+  };
+  const meansByKey = new Map<string, Float64Array>();
   const estimate = (contrast: Float64Array): FactorialEstimate => {
     let value = 0;
     for (let i = 0; i < n; i++) value += contrast[i]! * layout.y[i]!;
@@ -192,19 +217,17 @@ export function classicalFactorialFit(layout: FactorialLayout, sitesRandom: bool
     residuals: sweep.residuals,
     leverage: sweep.leverage,
     mean(factors: readonly number[], levels: readonly number[]): Float64Array {
-      const keys = cellKeys(factors);
       let key = 0;
       factors.forEach((f, j) => (key = key * layout.factors[f]!.levels.length + levels[j]!));
+      // One weight vector per mean, so the variances cached by vector serve every later use of it.
+      const name = `${factors.join(',')}|${key}`;
+      const known = meansByKey.get(name);
+      if (known) return known;
+      const members = cellMembers(factors).get(key);
+      if (!members) throw new StatsInputError('not estimable', 'a mean has no plots');
       const weights = new Float64Array(n);
-      let count = 0;
-      for (let i = 0; i < n; i++) {
-        if (keys[i] === key) {
-          weights[i] = 1;
-          count++;
-        }
-      }
-      if (count === 0) throw new StatsInputError('not estimable', 'a mean has no plots');
-      for (let i = 0; i < n; i++) weights[i] = weights[i]! / count;
+      for (const i of members) weights[i] = 1 / members.length;
+      meansByKey.set(name, weights);
       return weights;
     },
     estimate,

@@ -6,6 +6,7 @@ import type { ModelFactor } from './linear-model';
 import { denseRemlProblem } from './reml/dense-reml-problem';
 import { fitReml } from './reml/fit-reml';
 import { kenwardRogerAdjustment, kenwardRogerEstimate, kenwardRogerTest } from './reml/kenward-roger';
+import { satterthwaiteEstimate, satterthwaitePreparation, satterthwaiteTest } from './reml/satterthwaite';
 import { bilinearForm } from './reml/symmetric-matrix';
 import { varianceComponentsStructure, type RandomInterceptTerm } from './reml/variance-components';
 import { sumToZeroDesign, type FixedTerm } from './sum-to-zero-design';
@@ -16,6 +17,8 @@ export interface FactorialRemlOptions {
   readonly sitesRandom: boolean;
   /** Blocks as fixed effects (the least-squares type III analysis of an unbalanced factorial). */
   readonly blocksFixed: boolean;
+  /** Denominator degrees of freedom of the tests and means: Kenward–Roger (default, pbkrtest) or Satterthwaite (lmerTest). */
+  readonly denominator?: 'kenward-roger' | 'satterthwaite';
 }
 
 function randomTerms(layout: FactorialLayout, options: FactorialRemlOptions): RandomInterceptTerm[] {
@@ -41,7 +44,8 @@ function randomTerms(layout: FactorialLayout, options: FactorialRemlOptions): Ra
  * (sum-to-zero coding), blocks (within sites), whole plots and sub plots random, sites and site × each factor
  * term random when sites are random (fixed otherwise). F tests of each term's type III hypothesis and
  * least-squares means (equal weights over the other factors, as emmeans) with Kenward–Roger's adjusted
- * covariance and denominator degrees of freedom. With no random term (an unbalanced factorial without blocks,
+ * covariance and denominator degrees of freedom, or (denominator 'satterthwaite') with Φ and Satterthwaite's
+ * degrees of freedom as lmerTest gives them (anova(type = 3, ddf = "Satterthwaite"), emmeans(lmer.df = "satterthwaite")). With no random term (an unbalanced factorial without blocks,
  * or blocks fixed) it is ordinary least squares with type III F tests against the residual.
  * Reference: Kenward & Roger (1997), Biometrics 53:983; R: lmer(y ~ A*B + (1|block) + (1|block:A)) with
  * pbkrtest::KRmodcomp and emmeans(mode = "kenward-roger"); car::Anova(lm(...), type = 3) with contr.sum.
@@ -64,13 +68,18 @@ export function remlFactorialFit(layout: FactorialLayout, options: FactorialReml
   const structure = varianceComponentsStructure(random, groupOf);
   const problem = denseRemlProblem({ y: layout.y, design: coding.design, groupOf, structure });
   const fit = fitReml(problem);
-  const adjustment = kenwardRogerAdjustment(fit);
   const p = coding.design.columns;
   const residualVariance = fit.theta[random.length]!;
   const leastSquares = random.length === 0;
+  // Kenward–Roger tests with the adjusted covariance (pbkrtest); Satterthwaite with Φ itself (lmerTest).
+  const satterthwaite = options.denominator === 'satterthwaite' && !leastSquares ? satterthwaitePreparation(fit) : null;
+  const adjustment = satterthwaite ? null : kenwardRogerAdjustment(fit);
+  const testOf = (values: Float64Array, rows: number) => (satterthwaite ? satterthwaiteTest(satterthwaite, values, rows) : kenwardRogerTest(adjustment!, values, rows));
+  const covarianceOfBeta = satterthwaite ? fit.covariance : adjustment!.adjustedCovariance;
+  const method = satterthwaite ? 'satterthwaite' : 'kenward-roger';
   const anova: FactorialAnovaRow[] = fixed.map((term, t) => {
     const hypothesis = coding.typeThreeHypothesis(t);
-    const test = kenwardRogerTest(adjustment, hypothesis.values, hypothesis.rows);
+    const test = testOf(hypothesis.values, hypothesis.rows);
     const ss = leastSquares ? test.f * test.numDf * residualVariance : null;
     return Object.freeze({
       term: term.name,
@@ -79,7 +88,7 @@ export function remlFactorialFit(layout: FactorialLayout, options: FactorialReml
       ms: ss === null ? null : ss / test.numDf,
       f: test.f,
       p: test.p,
-      errorTerm: leastSquares ? 'error' : 'kenward-roger',
+      errorTerm: leastSquares ? 'error' : method,
       numDf: test.numDf,
       denDf: test.denDf,
     });
@@ -117,7 +126,7 @@ export function remlFactorialFit(layout: FactorialLayout, options: FactorialReml
     }
   }
   const estimate = (contrast: Float64Array) => {
-    const result = kenwardRogerEstimate(adjustment, contrast);
+    const result = satterthwaite ? satterthwaiteEstimate(satterthwaite, contrast) : kenwardRogerEstimate(adjustment!, contrast);
     return { value: result.estimate, variance: result.se * result.se, df: result.df };
   };
   return Object.freeze({
@@ -132,13 +141,13 @@ export function remlFactorialFit(layout: FactorialLayout, options: FactorialReml
     varianceComponents: Object.freeze(fit.parameterNames.map((name, k) => Object.freeze({ name: name === 'residual' ? 'error' : name, variance: fit.theta[k]! }))),
     mean: (which: readonly number[], levels: readonly number[]) => coding.marginalMeanRow(which, levels),
     estimate,
-    covariance: (first: Float64Array, second: Float64Array) => bilinearForm(first, adjustment.adjustedCovariance, second, p),
+    covariance: (first: Float64Array, second: Float64Array) => bilinearForm(first, covarianceOfBeta, second, p),
     test(rows: readonly Float64Array[]) {
       const values = new Float64Array(rows.length * p);
       rows.forEach((row, r) => values.set(row, r * p));
-      const result = kenwardRogerTest(adjustment, values, rows.length);
+      const result = testOf(values, rows.length);
       return { f: result.f, numDf: result.numDf, denDf: result.denDf, p: Number.isFinite(result.p) ? result.p : fUpperTailProbability(result.f, result.numDf, result.denDf) };
     },
-    errorOf: () => (leastSquares ? 'error' : 'Kenward–Roger'),
+    errorOf: () => (leastSquares ? 'error' : satterthwaite ? 'Satterthwaite' : 'Kenward–Roger'),
   });
 }

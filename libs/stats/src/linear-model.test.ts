@@ -89,4 +89,14 @@ describe('fitLinearModel', () => {
     expect(() => fit.estimate(fit.contrastVector([[0, 1], [1, 1]], [0.5, 0.5]), 'b')).toThrow(/not estimable/);
     expect(fit.rows[2]!.df).toBe(0);
   });
+
+  it('refuses in words, before any work, a fit beyond its documented limits (30,000 plots × 1,001 columns)', () => {
+    const n = 30_000;
+    const block: ModelFactor = { name: 'block', levels: Array.from({ length: 1000 }, (_, b) => `B${b}`), codes: Int32Array.from({ length: n }, (_, i) => i % 1000) };
+    const start = performance.now();
+    expect(() => fitLinearModel(new Float64Array(n), [block], [{ name: 'block', factors: [0] }])).toThrow(
+      /layout too large for least squares: this unbalanced layout of 30,000 plots needs a least-squares fit with 1,001 columns/,
+    );
+    expect(performance.now() - start).toBeLessThan(5_000);
+  });
 });

@@ -125,6 +125,22 @@ function forwardSolveTransposed(rColumns: readonly Float64Array[], b: Float64Arr
 }
 
 /**
+ * The largest least-squares fit the engine attempts: plots × columns² ≤ 5·10⁹ (the work of Householder QR)
+ * and plots × columns ≤ 2.5·10⁷ (its memory, two vectors of n doubles per column, about 400 MB). For example
+ * 5,000 plots with 1,000 block and treatment columns, or 350,000 plots with 70. Complete layouts need no such
+ * fit and are analysed in closed form at any size.
+ */
+export const LEAST_SQUARES_LIMITS = Object.freeze({ work: 5e9, cells: 2.5e7 });
+
+function checkLeastSquaresSize(n: number, columns: number): void {
+  if (n * columns * columns <= LEAST_SQUARES_LIMITS.work && n * columns <= LEAST_SQUARES_LIMITS.cells) return;
+  throw new StatsInputError(
+    'layout too large for least squares',
+    `this unbalanced layout of ${n.toLocaleString('en')} plots needs a least-squares fit with ${columns.toLocaleString('en')} columns (blocks, sites, treatments and their interactions); the engine fits at most plots × columns² = 5 billion and plots × columns = 25 million. Complete layouts (every plot present) are analysed at any size: fill or leave out the incomplete blocks, or analyse the sites one by one`,
+  );
+}
+
+/**
  * Least-squares linear model with classification factors, fitted by Householder QR.
  *
  * The design matrix has an intercept and, for each term in the given order, one indicator column per
@@ -138,7 +154,8 @@ function forwardSolveTransposed(rColumns: readonly Float64Array[], b: Float64Arr
  *
  * Reference: Golub & Van Loan, Matrix Computations (4th ed., 2013) §5.2; Chambers & Hastie (1992),
  * Statistical Models in S, ch. 4; R's `lm.fit` (https://search.r-project.org/R/refmans/stats/html/lm.fit.html).
- * @throws StatsInputError when there are no observations or the lengths differ.
+ * @throws StatsInputError when there are no observations, the lengths differ, or the fit is beyond
+ *   LEAST_SQUARES_LIMITS (said in words, before any work).
  * @example
  *   const fit = fitLinearModel(y, [block, treatment], [{ name: 'block', factors: [0] }, { name: 'treatment', factors: [1] }]);
  *   fit.rows; // [{ term: 'block', df: 3, ss: ... }, { term: 'treatment', df: 3, ss: ... }]
@@ -152,6 +169,7 @@ export function fitLinearModel(y: Float64Array, factors: readonly ModelFactor[],
     }
   }
   const columns = designColumns(factors, terms, n);
+  checkLeastSquaresSize(n, columns.length);
   const effects = Float64Array.from(y);
   const reflectors: { v: Float64Array; beta: number }[] = [];
   const rColumns: Float64Array[] = [];

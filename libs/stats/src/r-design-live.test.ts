@@ -8,9 +8,9 @@ import { referencePath } from './test-support/reference-files';
 
 // The committed design fixtures (datasets/reference/r-design-fixtures.json) are only as good as their
 // reproducibility: regenerate every layout with the R on this machine (npm test installs Debian's r-base-core,
-// r-cran-lme4, -pbkrtest, -emmeans, -car and -jsonlite) and check R gives what the file says. Without R or a
+// r-cran-lme4, -pbkrtest, -lmertest, -emmeans, -car and -jsonlite) and check R gives what the file says. Without R or a
 // package the check fails, naming what is missing: a reference check never passes without its reference.
-const PACKAGES = ['jsonlite', 'lme4', 'pbkrtest', 'emmeans', 'car'];
+const PACKAGES = ['jsonlite', 'lme4', 'pbkrtest', 'lmerTest', 'emmeans', 'car'];
 
 /** Every leaf of a JSON value by its path ("cases[3].expected.tests[0].f"). */
 function leaves(value: unknown, at = '', into = new Map<string, unknown>()): Map<string, unknown> {

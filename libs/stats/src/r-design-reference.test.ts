@@ -9,7 +9,7 @@ import type { TrialObservation } from './trial-layout';
 // (R 4.2.2: summary(aov(y ~ block + A*B*C)) or aov(y ~ A*B + Error(block/A)) for balanced layouts; car 3.1.1
 // Anova(lm(...), type = 3) with contr.sum for unbalanced least squares; lme4 1.1.31 lmer with blocks, whole plots,
 // sites and site × each factor term random, pbkrtest 0.5.2 KRmodcomp of each term's type III hypothesis; emmeans
-// 1.8.4.1 least-squares means of every term, Kenward–Roger for lmer). Tolerances: classical SS, F and means 1e-9
+// 1.8.4.1 least-squares means of every term, Kenward–Roger for lmer; lmerTest 3.1.3 Satterthwaite, below). Tolerances: classical SS, F and means 1e-9
 // relative; REML (two optimizers meeting at one optimum) F, df, means and SEs 1e-5 relative, p 1e-6 absolute.
 interface Row {
   term: string;
@@ -22,6 +22,13 @@ interface Means {
   term: string;
   means: { levels: Record<string, string>; mean: number; se: number; df: number }[];
 }
+interface RemlTest {
+  term: string;
+  numDf: number;
+  denDf: number;
+  f: number;
+  p: number;
+}
 interface Case {
   id: string;
   design: FactorialDesign;
@@ -31,7 +38,14 @@ interface Case {
   expected:
     | { kind: 'aov' | 'type3'; rows: Row[]; means: Means[] }
     | { kind: 'aov-strata'; rows: Row[] }
-    | { kind: 'reml'; formula: string; tests: { term: string; numDf: number; denDf: number; f: number; p: number }[]; means: Means[]; varianceComponents: { name: string; variance: number }[] };
+    | {
+        kind: 'reml';
+        formula: string;
+        tests: RemlTest[];
+        means: Means[];
+        satterthwaite: { call: string; tests: RemlTest[]; means: Means[] };
+        varianceComponents: { name: string; variance: number }[];
+      };
 }
 
 const fixture: { cases: Case[] } = JSON.parse(readFileSync(referencePath('r-design-fixtures.json'), 'utf8'));
@@ -39,6 +53,17 @@ const fixture: { cases: Case[] } = JSON.parse(readFileSync(referencePath('r-desi
 function close(actual: number | null | undefined, expected: number, tolerance: number, what: string): void {
   expect(actual, what).not.toBeNull();
   expect(relativeError(actual!, expected), `${what}: ${actual} vs R ${expected}`).toBeLessThan(tolerance);
+}
+
+function compareTests(analysis: TrialAnalysis, tests: readonly RemlTest[]): void {
+  for (const test of tests) {
+    const row = analysis.anova.find((r) => r.term === test.term)!;
+    expect(row, test.term).toBeDefined();
+    expect(row.numDf).toBe(test.numDf);
+    close(row.denDf, test.denDf, 1e-5, `${test.term} denDf`);
+    close(row.f, test.f, 1e-5, `${test.term} F`);
+    expect(Math.abs(row.p! - test.p), `${test.term} p`).toBeLessThan(1e-6);
+  }
 }
 
 function compareMeans(analysis: TrialAnalysis, expected: readonly Means[], tolerance: number): void {
@@ -62,14 +87,7 @@ describe('factorials and split plots agree with R on random layouts', () => {
       const expected = entry.expected;
       if (expected.kind === 'reml') {
         expect(analysis.model!.kind).toBe('reml');
-        for (const test of expected.tests) {
-          const row = analysis.anova.find((r) => r.term === test.term)!;
-          expect(row, test.term).toBeDefined();
-          expect(row.numDf).toBe(test.numDf);
-          close(row.denDf, test.denDf, 1e-5, `${test.term} denDf`);
-          close(row.f, test.f, 1e-5, `${test.term} F`);
-          expect(Math.abs(row.p! - test.p), `${test.term} p`).toBeLessThan(1e-6);
-        }
+        compareTests(analysis, expected.tests);
         compareMeans(analysis, expected.means, 1e-5);
         for (const component of expected.varianceComponents) {
           const name = component.name === 'Residual' ? 'error' : component.name.replace(/^site:block(?=$|:)/, 'block:site').replace(/^site:block:/, 'block:site:');
@@ -93,6 +111,23 @@ describe('factorials and split plots agree with R on random layouts', () => {
         if (rRow.p !== undefined && rRow.p !== null) expect(Math.abs(row.p! - rRow.p), `${term} p`).toBeLessThan(1e-9);
       }
       if (expected.kind !== 'aov-strata') compareMeans(analysis, expected.means, 1e-9);
+    });
+  }
+});
+
+// The same fits with Satterthwaite's denominator df (lmerTest 3.1.3 on the lme4 fit: anova(as_lmerModLmerTest(m),
+// type = 3, ddf = "Satterthwaite") and emmeans(m, set, lmer.df = "satterthwaite"); the exact call is in the fixture).
+// Tolerances as for Kenward–Roger: denDf, F, means and SEs 1e-5 relative, p 1e-6 absolute.
+describe('REML with Satterthwaite degrees of freedom agrees with lmerTest on the same random layouts', () => {
+  for (const entry of fixture.cases) {
+    if (entry.expected.kind !== 'reml') continue;
+    const expected = entry.expected;
+    it(`${entry.id} ${entry.design}, ${entry.observations.length} plots: ${expected.satterthwaite.tests.map((t) => t.term).join(', ')}`, () => {
+      const analysis = analyseTrial({ design: entry.design, factorNames: entry.factorNames, observations: entry.observations, model: 'reml', ddf: 'satterthwaite', sitesAre: 'random', meanSeparation: ['tukey'] });
+      expect(analysis.model!.reason).toMatch(/Satterthwaite|REML was asked for/);
+      expect(analysis.anova.every((row) => row.errorTerm === 'satterthwaite')).toBe(true);
+      compareTests(analysis, expected.satterthwaite.tests);
+      compareMeans(analysis, expected.satterthwaite.means, 1e-5);
     });
   }
 });

@@ -1,4 +1,6 @@
 import { StatsInputError } from './errors';
+import { boundedValue, leaveOutMissing } from './observation-values';
+import { hasNoResidualVariation } from './residual-variation';
 import { codeFactor } from './trial-layout';
 import { buildModelMatrix, weightedCrossProduct, type ModelMatrix, type ModelMatrixTerm } from './model-matrix';
 import { layoutGrid, modelLayout, type LabelledPlot, type ModelLayout } from './model-layout';
@@ -14,7 +16,8 @@ export interface RepeatedObservation extends LabelledPlot {
   readonly round: string;
   /** The round's day offset (0 for the first assessment, 14, 28 …). */
   readonly time: number | string;
-  readonly value: number | string;
+  /** Null: not measured in this round, left out (the answer says how many). */
+  readonly value: number | string | null;
 }
 
 export type RepeatedCovarianceChoice = RepeatedStructureName | 'auto';
@@ -68,10 +71,10 @@ const STRUCTURES: readonly RepeatedStructureName[] = ['cs', 'ar1', 'unstructured
 const AUTO_UNSTRUCTURED_ROUNDS = 6;
 const MAX_UNSTRUCTURED_ROUNDS = 10;
 
-function parseNumber(value: number | string, what: string, row: number): number {
-  const number = typeof value === 'number' ? value : Number(value);
+function parseNumber(value: number | string | null, what: string, row: number): number {
+  const number = typeof value === 'number' ? value : typeof value === 'string' && value.trim() !== '' ? Number(value) : Number.NaN;
   if (!Number.isFinite(number)) throw new StatsInputError(`invalid ${what}`, `row ${row + 1} of the observations: the ${what} must be a number, got ${String(value)}`);
-  return number;
+  return boundedValue(number, `row ${row + 1} of the observations: the ${what}`, String(value));
 }
 
 /** The model matrix without the columns aliased with earlier ones (an empty cell), and which were kept. */
@@ -200,8 +203,15 @@ export interface RepeatedStructureFit {
 export function repeatedMeasuresFits(request: RepeatedMeasuresRequest) {
   const choice = request.covariance ?? 'auto';
   if (![...STRUCTURES, 'auto'].includes(choice)) throw new StatsInputError('unknown covariance', `covariance must be one of cs, ar1, unstructured, auto, got ${String(choice)}`);
-  const data = prepare(request);
   const warnings: string[] = [];
+  if (request.observations.some((o) => o?.value === null)) {
+    // Every measured value is checked where it stood, then the rounds not measured are left out.
+    request.observations.forEach((o, i) => o.value !== null && parseNumber(o.value, 'value', i));
+    const missing = leaveOutMissing(request.observations, (o) => String(o.treatment));
+    warnings.push(...missing.notes);
+    request = { ...request, observations: missing.kept };
+  }
+  const data = prepare(request);
   const full = buildModelMatrix(data.y.length, data.terms);
   const { matrix, kept } = withoutAliased(full);
   if (kept.length < full.columnCount) warnings.push(`Some cells could not be estimated from these plots and were left out of the model: ${full.columnNames.filter((_, j) => !kept.includes(j)).join(', ')}.`);
@@ -212,10 +222,18 @@ export function repeatedMeasuresFits(request: RepeatedMeasuresRequest) {
   }
   const fits: RepeatedStructureFit[] = [];
   const candidates: RepeatedMeasuresAnalysis['candidates'][number][] = [];
+  let totalSs = 0;
+  const grand = data.y.reduce((sum, value) => sum + value, 0) / data.y.length;
+  for (const value of data.y) totalSs += (value - grand) ** 2;
   for (const name of wanted) {
     const structure = structureFor(name, data);
+    const problem = repeatedRemlProblem({ y: data.y, matrix, plotOf: data.plotOf, patternOf, structure });
+    // Values that blocks, treatments and rounds explain exactly leave no variation to model or test against.
+    if (hasNoResidualVariation(problem.olsResidualVariance * (data.y.length - matrix.columnCount), totalSs)) {
+      throw new StatsInputError('no residual variation', 'the values have no residual variation: each equals what blocks, treatments and rounds predict, exactly, so no covariance can be estimated and no test made; check that these are measured values and not copies or a formula’s output');
+    }
     try {
-      const fit = fitReml(repeatedRemlProblem({ y: data.y, matrix, plotOf: data.plotOf, patternOf, structure }));
+      const fit = fitReml(problem);
       if (!Number.isFinite(fit.logLikelihood)) throw new StatsInputError('no fit', 'the likelihood could not be evaluated');
       fits.push(Object.freeze({ name, structure, fit }));
       candidates.push(summaryOf(name, structure, fit, matrix.columnCount));

@@ -4,6 +4,7 @@ import { denseRemlProblem } from './reml/dense-reml-problem';
 import { fitReml } from './reml/fit-reml';
 import { compoundSymmetry, continuousAr1, unstructured } from './repeated-covariance';
 import { designOfMatrix, repeatedRemlProblem } from './repeated-reml-problem';
+import { bilinearForm } from './reml/symmetric-matrix';
 
 // 30 plots × 3 rounds (days 0, 14, 35) of invented values, two plots missing a round: the summed cross-product
 // tensor serves the 28 complete plots and the rows serve the rest. The dense problem of the REML core is the reference.
@@ -60,6 +61,17 @@ describe('repeatedRemlProblem', () => {
       if (!structure.linear) {
         a.hessianTraces!.forEach((v, i) => close(v, b.hessianTraces![i]!));
         a.hessianForms!.forEach((form, k) => form?.forEach((v, i) => close(v, b.hessianForms![k]![i]!)));
+      }
+      // v'F_kl v for the optimizer's steps, without the second-order sums.
+      const m = data.matrix.columnCount + 1;
+      const v = Float64Array.from({ length: m }, (_, i) => (i === m - 1 ? 1 : 0.2 * ((i % 4) - 1.5)));
+      const K = structure.parameters.length;
+      const products = fast.responseInformation!(theta, v);
+      for (let k = 0; k < K; k++) {
+        for (let l = 0; l < K; l++) {
+          const expected = bilinearForm(v, b.secondForms![k * K + l]!, v, m);
+          close(products[k * K + l]!, expected);
+        }
       }
       // And the fits agree.
       expect(Math.abs(fitReml(fast).logLikelihood - fitReml(dense).logLikelihood)).toBeLessThan(1e-8);

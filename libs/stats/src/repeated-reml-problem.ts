@@ -27,6 +27,8 @@ interface Pattern {
   readonly tensor: { readonly diagonal: Float64Array[]; readonly sum: Float64Array[]; readonly difference: Float64Array[] } | null;
   /** Few plots: their rows, accumulated directly. */
   readonly groups: readonly Int32Array[];
+  /** Every plot of the pattern (responseInformation reads them one by one). */
+  readonly allGroups: readonly Int32Array[];
 }
 
 /** Plots in a pattern from which the summed cross-product tensor pays (its cost does not grow with plots). */
@@ -118,7 +120,7 @@ export function repeatedRemlProblem(data: RepeatedRemlData): RemlProblem {
   }
   const patterns: Pattern[] = [...byPattern.values()].map((groups) => {
     const size = groups[0]!.length;
-    if (groups.length < TENSOR_THRESHOLD) return { size, representative: groups[0]!, count: groups.length, tensor: null, groups };
+    if (groups.length < TENSOR_THRESHOLD) return { size, representative: groups[0]!, count: groups.length, tensor: null, groups, allGroups: groups };
     // S_ii, U_ij = S_ij + S_ji and Δ_ij = S_ij − S_ji accumulated straight from the sparse rows.
     const diagonal = Array.from({ length: size }, () => new Float64Array(m * m));
     const pairCount = (size * (size - 1)) / 2;
@@ -154,7 +156,7 @@ export function repeatedRemlProblem(data: RepeatedRemlData): RemlProblem {
         }
       }
     }
-    return { size, representative: groups[0]!, count: groups.length, tensor: { diagonal, sum, difference }, groups: [] };
+    return { size, representative: groups[0]!, count: groups.length, tensor: { diagonal, sum, difference }, groups: [], allGroups: groups };
   });
 
   /** into += Σ_g A_g' M A_g over a pattern's plots, M (size × size) symmetric or not. */
@@ -284,6 +286,49 @@ export function repeatedRemlProblem(data: RepeatedRemlData): RemlProblem {
     };
   };
 
+  // Σ_g w_gk'V_g⁻¹w_gl with w_gk = D_k V_g⁻¹ A_g v: plot by plot, on the pattern's V_g⁻¹ and derivatives.
+  const responseInformation = (theta: Float64Array, v: Float64Array): Float64Array => {
+    const out = new Float64Array(K * K);
+    for (const [patternIndex, pattern] of patterns.entries()) {
+      const size = pattern.size;
+      const block = structure.block(patternIndex, pattern.representative, theta);
+      const inverted = inverseOfPositiveDefinite(block.covariance, size);
+      if (!inverted) return out.fill(Number.NaN);
+      const w = inverted.inverse;
+      const derivatives = block.derivatives.map((d) => denseDerivative(d, size));
+      const plots = pattern.tensor ? pattern.allGroups : pattern.groups;
+      const av = new Float64Array(size);
+      const applied = derivatives.map(() => new Float64Array(size));
+      const solved = derivatives.map(() => new Float64Array(size));
+      for (const rows of plots) {
+        for (let i = 0; i < size; i++) {
+          const row = rows[i]!;
+          let sum = residual[row]! * v[p]!;
+          for (let e = matrix.rowStart[row]!; e < matrix.rowStart[row + 1]!; e++) sum += matrix.values[e]! * v[matrix.columnIndex[e]!]!;
+          av[i] = sum;
+        }
+        const u = multiply(w, size, size, av, 1);
+        derivatives.forEach((d, k) => {
+          const target = applied[k]!;
+          target.fill(0);
+          if (d) for (let i = 0; i < size; i++) for (let j = 0; j < size; j++) target[i]! += d[i * size + j]! * u[j]!;
+          const into = solved[k]!;
+          into.fill(0);
+          for (let i = 0; i < size; i++) for (let j = 0; j < size; j++) into[i]! += w[i * size + j]! * target[j]!;
+        });
+        for (let k = 0; k < K; k++) {
+          for (let l = k; l < K; l++) {
+            let sum = 0;
+            for (let i = 0; i < size; i++) sum += applied[k]![i]! * solved[l]![i]!;
+            out[k * K + l]! += sum;
+          }
+        }
+      }
+    }
+    for (let k = 0; k < K; k++) for (let l = 0; l < k; l++) out[k * K + l] = out[l * K + k]!;
+    return out;
+  };
+
   const solve = (theta: Float64Array, vectorIn: Float64Array): Float64Array => {
     const out = new Float64Array(n);
     let plot = 0;
@@ -308,6 +353,7 @@ export function repeatedRemlProblem(data: RepeatedRemlData): RemlProblem {
     olsResidualVariance,
     start: () => structure.start(olsResidualVariance),
     evaluate,
+    responseInformation,
     solve,
   });
 }

@@ -61,7 +61,11 @@ function residualsOf(plots: number, terms: readonly BetweenPlotTerm[], responses
   const matrix = buildModelMatrix(plots, terms.map((t) => t.term));
   const factor = factorSymmetric(weightedCrossProduct(matrix, new Float64Array(plots).fill(1)).crossProduct, matrix.columnCount, 1e-10);
   const residuals = responses.map((y) => {
-    const { vector } = weightedCrossProduct(matrix, new Float64Array(plots).fill(1), y);
+    // X'y alone: X'X is already factored, so it is not formed again per response.
+    const vector = new Float64Array(matrix.columnCount);
+    for (let row = 0; row < plots; row++) {
+      for (let e = matrix.rowStart[row]!; e < matrix.rowStart[row + 1]!; e++) vector[matrix.columnIndex[e]!]! += matrix.values[e]! * y[row]!;
+    }
     const fitted = linearPredictor(matrix, factor.solve(vector));
     return Float64Array.from(y, (value, i) => value - fitted[i]!);
   });

@@ -50,7 +50,9 @@ describe('Saved analyses: frozen results, data changes, comments', () => {
       createdBy: 'Intake reviewer',
     });
     expect(saved.result).toEqual(findings);
-    expect(saved.choices).toEqual({ ...choices, sitesAre: 'random', transform: 'none', method: 'tukey', alpha: 0.05, forceLsd: false });
+    // One round of a measured number: the classical ANOVA is the analysis made for it, and is saved as such.
+    expect(saved.choices).toEqual({ ...choices, sitesAre: 'random', transform: 'none', method: 'tukey', alpha: 0.05, forceLsd: false, analysis: 'anova' });
+    expect(saved.analysisLabel).toBe('Classical ANOVA');
     expect(await activityKinds('analysis.saved')).toHaveLength(1);
 
     expect((await t.http.post(`${base}/analyses`).set(bearer(built.tokens.collaborator)).send({ ...choices, title: 'x' })).status).toBe(403);

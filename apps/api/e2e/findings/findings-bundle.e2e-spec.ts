@@ -1,30 +1,25 @@
 import type { AnovaAnswer, CensoredAnswer, Findings, ModelFindings, OrdinalAnswer, RepeatedAnswer, TrialDetail } from '@friable/contracts';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { Trial } from '../../src/trials/models/trial.model';
-import { TrialMembership } from '../../src/trials/models/trial-membership.model';
-import { bearer, createPerson, createTestApp, tokenFor, type TestApp } from '../support/test-app';
+import type { TestApp } from '../support/test-app';
 import { close, removeBundleFolders, runBundle } from './bundle-support';
+import { openDemoTrial, type DemoTrial } from './demo-trial';
 
 /**
  * Findings bundles: data.csv, analysis.R, friable.json and a README. A sample of the scripts is run with R from
  * Debian's packages (survival, multcomp, MASS, emmeans, nlme) and its numbers are compared with Friable's.
  */
 describe('Findings bundles: the analysis reproduced by R', () => {
+  let demo: DemoTrial;
   let t: TestApp;
   let base: string;
   let token: string;
   let protocol: TrialDetail;
-  const measure = (code: string) => protocol.measures.find((m) => m.code === code)!.id;
-  const round = (label: string) => protocol.rounds.find((r) => r.label === label)!.id;
+  const measure = (code: string) => demo.measure(code).id;
+  const round = (label: string) => demo.round(label).id;
 
   beforeAll(async () => {
-    t = await createTestApp();
-    const trial = await Trial.findOne({ where: { code: 'FW-CLAY-26' } });
-    const reviewer = await createPerson({ name: 'Bundle reviewer' });
-    await TrialMembership.create({ trialId: trial!.id, userId: reviewer.id, role: 'reviewer', siteId: null });
-    token = await tokenFor(t, reviewer);
-    base = `/api/trials/${trial!.id}`;
-    protocol = (await t.http.get(base).set(bearer(token))).body as TrialDetail;
+    demo = await openDemoTrial('Bundle reviewer');
+    ({ t, base, token, protocol } = demo);
   });
   afterAll(async () => {
     removeBundleFolders();

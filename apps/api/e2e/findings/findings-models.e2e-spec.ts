@@ -1,10 +1,9 @@
 import type { AnovaAnswer, CensoredAnswer, CountsAnswer, Findings, ModelFindings, Observation, OrdinalAnswer, RepeatedAnswer, TrialDetail } from '@friable/contracts';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { Trial } from '../../src/trials/models/trial.model';
-import { TrialMembership } from '../../src/trials/models/trial-membership.model';
-import { expectStatus, uniqueCode } from '../protocol/protocol-builder';
-import { bearer, createPerson, createTestApp, tokenFor, type TestApp, patchCurrent } from '../support/test-app';
+import { bearer, type TestApp } from '../support/test-app';
 import { close, removeBundleFolders, runBundle } from './bundle-support';
+import { buildCountsTrial } from './counts-trial';
+import { openDemoTrial, type DemoTrial } from './demo-trial';
 
 type ModelOf<A extends ModelFindings['analysis']> = Extract<ModelFindings, { analysis: A }>;
 
@@ -14,15 +13,15 @@ type ModelOf<A extends ModelFindings['analysis']> = Extract<ModelFindings, { ana
  * independently from GET /observations.
  */
 describe('Findings: the model made for each measure', () => {
+  let demo: DemoTrial;
   let t: TestApp;
   let base: string;
-  let token: string;
   let protocol: TrialDetail;
-  const measure = (code: string) => protocol.measures.find((m) => m.code === code)!;
-  const round = (label: string) => protocol.rounds.find((r) => r.label === label)!;
-  const get = (path: string) => t.http.get(path).set(bearer(token));
-  const post = (path: string, body: object) => t.http.post(path).set(bearer(token)).send(body);
-  const stored = async (query: string) => ((await get(`${base}/observations?${query}`)).body as Observation[]).filter((o) => o.valueText !== null);
+  const measure = (code: string) => demo.measure(code);
+  const round = (label: string) => demo.round(label);
+  const get = (path: string) => demo.get(path);
+  const post = (path: string, body: object) => demo.post(path, body);
+  const stored = (query: string) => demo.stored(query);
   const labels = (o: Observation) => ({ treatment: o.treatmentCode, block: String(o.block), site: o.siteName });
 
   /** The findings answer without its context, and the context. */
@@ -36,13 +35,8 @@ describe('Findings: the model made for each measure', () => {
   }
 
   beforeAll(async () => {
-    t = await createTestApp();
-    const trial = await Trial.findOne({ where: { code: 'FW-CLAY-26' } });
-    const reviewer = await createPerson({ name: 'Models reviewer' });
-    await TrialMembership.create({ trialId: trial!.id, userId: reviewer.id, role: 'reviewer', siteId: null });
-    token = await tokenFor(t, reviewer);
-    base = `/api/trials/${trial!.id}`;
-    protocol = (await get(base)).body as TrialDetail;
+    demo = await openDemoTrial('Models reviewer');
+    ({ t, base, protocol } = demo);
   });
   afterAll(() => t.close());
 
@@ -175,31 +169,10 @@ describe('Findings: the model made for each measure', () => {
 
   it('a count measure: Poisson with an overdispersion check and rate ratios, equal to POST /api/stats/counts', async () => {
     // A small trial of its own (the demo has no count measure): three treatments, one garden of four blocks, counts typed in the Ledger.
-    const investigator = await createPerson({ name: 'Counts investigator' });
-    const auth = bearer(await tokenFor(t, investigator));
-    const trial = await expectStatus<{ id: number }>(
-      t.http.post('/api/trials').set(auth).send({ code: uniqueCode('CN'), title: 'Earthworm counts', design: 'rcbd', seed: 'count-seed', startDate: '2026-05-01' }),
-      201,
-    );
-    const trialBase = `/api/trials/${trial.id}`;
-    for (const body of [{ code: 'C', name: 'Control', isControl: true }, { code: 'G', name: 'Gypsum' }, { code: 'K', name: 'Compost' }]) {
-      await expectStatus(t.http.post(`${trialBase}/treatments`).set(auth).send(body), 201);
-    }
-    const worms = await expectStatus<{ id: number }>(
-      t.http.post(`${trialBase}/measures`).set(auth).send({ code: 'EW', name: 'earthworms', unit: 'count', kind: 'count', plausibleMin: 0, plausibleMax: 60, decimals: 0, higherIsBetter: true }),
-      201,
-    );
-    const day = await expectStatus<{ id: number }>(t.http.post(`${trialBase}/rounds`).set(auth).send({ label: 'Day 30', dayOffset: 30, measureIds: [worms.id] }), 201);
-    const site = await expectStatus<{ id: number }>(t.http.post(`${trialBase}/sites`).set(auth).send({ name: 'Count Garden', shape: 'rectangle', lengthM: 1, widthM: 1, blocks: 4, labelPrefix: 'CG' }), 201);
-    await expectStatus(t.http.post(`${trialBase}/sites/${site.id}/randomize`).set(auth).send({}), 200);
-    await expectStatus(patchCurrent(t, trialBase, auth, { status: 'active' }), 200);
-    const plots = await expectStatus<Array<{ id: number; block: number; treatmentCode: string }>>(t.http.get(`${trialBase}/plots`).set(auth), 200);
-    // Invented counts (test data only): compost plots hold more worms, with block-to-block spread.
-    const typical: Record<string, number> = { C: 4, G: 6, K: 14 };
-    for (const plot of plots) {
-      const value = String(typical[plot.treatmentCode]! + ((plot.block * 7 + plot.treatmentCode.charCodeAt(0)) % 9) - 3);
-      await expectStatus(t.http.post(`${trialBase}/observations`).set(auth).send({ plotId: plot.id, roundId: day.id, measureId: worms.id, value, acceptWarnings: true }), 201);
-    }
+    const counts = await buildCountsTrial(t);
+    const trialBase = counts.base;
+    const auth = bearer(counts.token);
+    const worms = { id: counts.measureId };
     const response = await t.http.get(`${trialBase}/findings?measureId=${worms.id}`).set(auth);
     expect(response.status).toBe(200);
     const { context, analysis, ...answer } = response.body as ModelOf<'counts'>;
@@ -216,7 +189,7 @@ describe('Findings: the model made for each measure', () => {
     expect(context.modelChoice).toMatchObject({ analysis: 'counts', defaultAnalysis: 'counts' });
     expect(context.modelChoice.why).toMatch(/count per plot/);
     // Its bundle: R's glm (poisson, or quasipoisson when Pearson's χ² says so) gives the same rate ratios, 1e-6 relative.
-    const { r } = await runBundle<ModelOf<'counts'>>(t, await tokenFor(t, investigator), `${trialBase}/findings/bundle?measureId=${worms.id}`);
+    const { r } = await runBundle<ModelOf<'counts'>>(t, counts.token, `${trialBase}/findings/bundle?measureId=${worms.id}`);
     expect(r.family).toBe((answer as unknown as CountsAnswer).family);
     for (const ratio of (answer as unknown as CountsAnswer).rateRatios) close((r.rateRatios as Array<{ treatment: string; ratio: number }>).find((row) => row.treatment === ratio.treatment)!.ratio, ratio.ratio, 1e-6);
     removeBundleFolders();

@@ -1,18 +1,18 @@
 import type { Findings, Observation, TrialDetail } from '@friable/contracts';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { Trial } from '../../src/trials/models/trial.model';
-import { TrialMembership } from '../../src/trials/models/trial-membership.model';
-import { bearer, createPerson, createTestApp, tokenFor, type TestApp } from '../support/test-app';
+import { bearer, createPerson, tokenFor, type TestApp } from '../support/test-app';
+import { openDemoTrial, type DemoTrial } from './demo-trial';
 
 /** Findings of the demo trial FW-CLAY-26 (rcbd at three gardens, five treatments, control CTL). */
 describe('Findings: the analysis of stored data through the engine', () => {
+  let demo: DemoTrial;
   let t: TestApp;
   let base: string;
   let token: string;
   let protocol: TrialDetail;
-  const measure = (code: string) => protocol.measures.find((m) => m.code === code)!;
-  const round = (label: string) => protocol.rounds.find((r) => r.label === label)!;
-  const get = (path: string) => t.http.get(path).set(bearer(token));
+  const measure = (code: string) => demo.measure(code);
+  const round = (label: string) => demo.round(label);
+  const get = (path: string) => demo.get(path);
 
   /** The engine's observations built independently from GET /observations: stored text, in the Ledger's order. */
   const engineObservations = (observations: Observation[], combined: boolean) =>
@@ -21,13 +21,8 @@ describe('Findings: the analysis of stored data through the engine', () => {
       .map((o) => ({ treatment: o.treatmentCode, block: String(o.block), ...(combined ? { site: o.siteName } : {}), value: o.valueText! }));
 
   beforeAll(async () => {
-    t = await createTestApp();
-    const trial = await Trial.findOne({ where: { code: 'FW-CLAY-26' } });
-    const reviewer = await createPerson({ name: 'Findings reviewer' });
-    await TrialMembership.create({ trialId: trial!.id, userId: reviewer.id, role: 'reviewer', siteId: null });
-    token = await tokenFor(t, reviewer);
-    base = `/api/trials/${trial!.id}`;
-    protocol = (await get(base)).body as TrialDetail;
+    demo = await openDemoTrial('Findings reviewer');
+    ({ t, base, token, protocol } = demo);
   });
   afterAll(() => t.close());
 

@@ -29,7 +29,7 @@ export class AnalysesController {
 
   @Post()
   @TrialAccess('investigator', 'reviewer')
-  @ApiOperation({ summary: 'Save this analysis: the choices, the SHA-256 of the data used, the engine version and the full Findings, frozen' })
+  @ApiOperation({ summary: 'Save this analysis — the classical ANOVA or any model Findings offers (censored, repeated, ancova, ordinal, counts): the choices, the SHA-256 of the data used, the engine version and the full Findings answer, frozen' })
   @ApiCreatedResponse({ type: AnalysisSnapshotDto, description: 'AnalysisSnapshot (dataChanged false).' })
   @ApiUnprocessableEntityResponse({ description: 'A choice refused by name, no data, or the engine’s sentence.' })
   create(@CurrentTrialAccess() access: TrialAccessContext, @CurrentUser() user: AuthUser, @Body() body: CreateAnalysisDto) {

@@ -1,10 +1,12 @@
-import type { AnalysisSnapshot, AnalysisSnapshotSummary, FindingsChoices, Findings, ReviewStatus, SignOff } from '@friable/contracts';
+import type { AnalysisSnapshot, AnalysisSnapshotSummary, FindingsAnswer, ReviewStatus, SignOff } from '@friable/contracts';
 import { Injectable, NotFoundException } from '@nestjs/common';
 import { InjectConnection, InjectModel } from '@nestjs/sequelize';
 import type { Sequelize } from 'sequelize-typescript';
 import { ActivityService } from '../activity/activity.service';
 import type { AuthUser } from '../common/auth-user';
+import { FindingsCache } from '../findings/findings-cache';
 import { FindingsService } from '../findings/findings.service';
+import { analysisLabel, savedChoicesFor, savedChoicesOf } from './saved-choices';
 import { User } from '../users/models/user.model';
 import type { CreateAnalysisDto } from './dto/create-analysis.dto';
 import { AnalysisSnapshotRow } from './models/analysis-snapshot.model';
@@ -19,8 +21,8 @@ type Review = { signOffs: SignOff[]; review: ReviewStatus };
 
 
 /**
- * Saved analyses — "Save this analysis" freezes the choices, the data hash, the engine version and the full
- * Findings; reopening shows the stored numbers with `dataChanged` when today's data hash differs. Each carries its
+ * Saved analyses — "Save this analysis" freezes the choices (the analysis and its model options included), the data
+ * hash, the engine version and the full Findings answer of any analysis Findings offers; reopening shows the stored numbers with `dataChanged` when today's data hash differs. Each carries its
  * sign-offs and review status (ReviewService); comments live in CommentsService.
  * Throws: 404 for an analysis not in the trial, 422 from Findings.
  */
@@ -32,13 +34,16 @@ export class AnalysesService {
     @InjectModel(AnalysisSignOffRow) private readonly signOffs: typeof AnalysisSignOffRow,
     @InjectConnection() private readonly sequelize: Sequelize,
     private readonly findings: FindingsService,
+    private readonly cache: FindingsCache,
     private readonly activity: ActivityService,
     private readonly review: ReviewService,
   ) {}
 
   async create(trialId: number, user: AuthUser, input: CreateAnalysisDto): Promise<AnalysisSnapshot> {
     const { title, ...query } = input;
-    const result = await this.findings.anovaFindings(trialId, query);
+    // The answer Findings shows for these choices (the model made for the measure unless another is asked for), kept as shown.
+    const result = await this.cache.answer(trialId, query, () => this.findings.findings(trialId, query));
+    const choices = savedChoicesFor(query, result);
     const id = await this.sequelize.transaction(async (transaction) => {
       const row = await this.snapshots.create(
         {
@@ -47,7 +52,7 @@ export class AnalysesService {
           measureName: result.context.measure.name,
           roundLabel: result.context.round.label,
           scopeLabel: result.context.scope.label,
-          choices: JSON.stringify(result.context.choices),
+          choices: JSON.stringify(choices),
           dataHash: result.context.dataHash,
           engineVersion: result.context.engineVersion,
           result: JSON.stringify(result),
@@ -59,8 +64,8 @@ export class AnalysesService {
         trialId,
         userId: user.id,
         kind: 'analysis.saved',
-        summary: `Saved the analysis "${row.title}" (${row.measureName}, ${row.roundLabel}, ${row.scopeLabel}).`,
-        details: { analysisId: row.id, dataHash: row.dataHash, engineVersion: row.engineVersion },
+        summary: `Saved the analysis "${row.title}" (${row.measureName}, ${row.roundLabel}, ${row.scopeLabel}; ${analysisLabel(choices.analysis).toLowerCase()}).`,
+        details: { analysisId: row.id, analysis: choices.analysis, dataHash: row.dataHash, engineVersion: row.engineVersion },
       });
       return row.id;
     });
@@ -84,15 +89,15 @@ export class AnalysesService {
     const counts = await this.commentCounts([row.id]);
     const currentDataHash = await this.review.currentHash(trialId, row);
     const reviews = await this.review.forSnapshots(trialId, [row], new Map([[row.id, currentDataHash]]));
-    return { ...this.summary(row, counts.get(row.id) ?? 0, reviews.get(row.id)!), result: JSON.parse(row.result) as Findings, dataChanged: currentDataHash !== row.dataHash, currentDataHash };
+    return { ...this.summary(row, counts.get(row.id) ?? 0, reviews.get(row.id)!), result: JSON.parse(row.result) as FindingsAnswer, dataChanged: currentDataHash !== row.dataHash, currentDataHash };
   }
 
   /** Every saved analysis with its stored result (the workbook export). */
-  async all(trialId: number): Promise<Array<AnalysisSnapshotSummary & { result: Findings }>> {
+  async all(trialId: number): Promise<Array<AnalysisSnapshotSummary & { result: FindingsAnswer }>> {
     const rows = await this.snapshots.findAll({ where: { trialId }, include: people(), order: [['id', 'ASC']] });
     const counts = await this.commentCounts(rows.map((r) => r.id));
     const reviews = await this.reviews(trialId, rows);
-    return rows.map((row) => ({ ...this.summary(row, counts.get(row.id) ?? 0, reviews.get(row.id)!), result: JSON.parse(row.result) as Findings }));
+    return rows.map((row) => ({ ...this.summary(row, counts.get(row.id) ?? 0, reviews.get(row.id)!), result: JSON.parse(row.result) as FindingsAnswer }));
   }
 
   private async find(trialId: number, analysisId: number): Promise<AnalysisSnapshotRow> {
@@ -126,7 +131,8 @@ export class AnalysesService {
       id: row.id,
       trialId: row.trialId,
       title: row.title,
-      choices: JSON.parse(row.choices) as FindingsChoices,
+      choices: savedChoicesOf(row.choices),
+      analysisLabel: analysisLabel(savedChoicesOf(row.choices).analysis),
       measureName: row.measureName,
       roundLabel: row.roundLabel,
       scopeLabel: row.scopeLabel,

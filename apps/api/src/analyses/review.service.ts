@@ -1,4 +1,4 @@
-import type { FindingsChoices, ReviewRequestAnswer, ReviewStatus, SignOff, TrialRole } from '@friable/contracts';
+import type { ReviewRequestAnswer, ReviewStatus, SignOff, TrialRole } from '@friable/contracts';
 import { ConflictException, ForbiddenException, Inject, Injectable, NotFoundException } from '@nestjs/common';
 import type { ConfigType } from '@nestjs/config';
 import { InjectConnection, InjectModel } from '@nestjs/sequelize';
@@ -17,6 +17,7 @@ import { AnalysisSignOffRow } from './models/analysis-sign-off.model';
 import { AnalysisSnapshotRow } from './models/analysis-snapshot.model';
 import { ReviewRequestRow } from './models/review-request.model';
 import { SignOffRefusedException } from './sign-off-refused.exception';
+import { savedChoicesOf } from './saved-choices';
 
 /** A person expected to sign: the trial's reviewers, or its investigators when it has none. */
 interface Signer {
@@ -107,7 +108,7 @@ export class ReviewService {
   /** Today's data hash for the snapshot's choices; null when it cannot be computed (the protocol changed under it). */
   async currentHash(trialId: number, row: AnalysisSnapshotRow): Promise<string | null> {
     try {
-      return await this.findings.currentDataHash(trialId, JSON.parse(row.choices) as FindingsChoices);
+      return await this.findings.currentDataHash(trialId, savedChoicesOf(row.choices));
     } catch {
       return null;
     }

@@ -1,4 +1,4 @@
-import { EXPORT_CSV_COLUMNS, type Findings, type TrialDetail } from '@friable/contracts';
+import { EXPORT_CSV_COLUMNS, isModelFindings, type Findings, type FindingsAnswer, type SavedAnalysisChoices, type TrialDetail } from '@friable/contracts';
 import { Injectable } from '@nestjs/common';
 import { InjectConnection } from '@nestjs/sequelize';
 import ExcelJS from 'exceljs';
@@ -7,11 +7,24 @@ import { QueryTypes } from 'sequelize';
 import type { Sequelize } from 'sequelize-typescript';
 import { AnalysesService } from '../analyses/analyses.service';
 import { FindingsService } from '../findings/findings.service';
+import { modelTables } from '../findings/model-tables';
 import { neutraliseFormula } from '../intake/parsing';
 import { ObservationQueryService } from '../observations/observation-query.service';
 import { DATA_DICTIONARY, tidyExportRows } from './tidy-export-rows';
 
 type Cell = string | number | boolean | null;
+
+/** The model options a saved analysis ran with, as field rows (none for the classical ANOVA). */
+const modelChoiceRows = (choices: SavedAnalysisChoices): Array<[string, Cell]> =>
+  (
+    [
+      ['distribution', choices.distribution],
+      ['within-plot covariance', choices.covariance],
+      ['count family', choices.family],
+      ['covariate measure id', choices.covariateMeasureId],
+      ['covariate round id', choices.covariateRoundId],
+    ] as Array<[string, Cell | undefined]>
+  ).filter((row): row is [string, Cell] => row[1] !== undefined);
 
 /** A text cell made safe; numbers and empty cells pass as they are. */
 const safe = (value: Cell): Cell => (typeof value === 'string' ? neutraliseFormula(value) : value);
@@ -71,6 +84,8 @@ export class ExportsService {
         ['measure', snapshot.measureName],
         ['round', snapshot.roundLabel],
         ['scope', snapshot.scopeLabel],
+        ['analysis', snapshot.analysisLabel],
+        ...modelChoiceRows(snapshot.choices),
         ['method', snapshot.choices.method],
         ['alpha', snapshot.choices.alpha],
         ['sites are', snapshot.choices.sitesAre],
@@ -124,7 +139,15 @@ export class ExportsService {
     addTable(sheet, ['site', 'block', 'position', 'plot label', 'treatment'], plots.map((p) => [p.site, Number(p.block), Number(p.position), p.label, p.treatment]));
   }
 
-  private analysisTables(sheet: ExcelJS.Worksheet, result: Findings): void {
+  private analysisTables(sheet: ExcelJS.Worksheet, result: FindingsAnswer): void {
+    if (isModelFindings(result)) {
+      for (const table of modelTables(result)) {
+        addTable(sheet, [table.title], []);
+        addTable(sheet, table.columns, table.rows);
+      }
+      addTable(sheet, ['warning'], [...result.warnings, ...result.context.notices].map((w) => [w]));
+      return;
+    }
     addTable(sheet, ['term', 'df', 'SS', 'MS', 'F', 'p'], result.anova.map((r) => [r.term, r.df, r.ss, r.ms, r.f, r.p]));
     addTable(sheet, ['n', 'grand mean', 'CV %', 'root MSE', 'error df'], [[result.summary.n, result.summary.grandMean, result.summary.cv, result.summary.rootMse, result.summary.errorDf]]);
     const letters = result.letters[result.context.choices.method as keyof Findings['letters']] ?? {};

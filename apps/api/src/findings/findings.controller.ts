@@ -48,12 +48,14 @@ export class FindingsController {
   @ApiOperation({
     summary: 'The same analysis as a small bundle anyone can check: data.csv, analysis.R, friable.json, README.txt',
     description:
-      'Takes the query of GET /findings. analysis.R reproduces the tables from data.csv with R’s standard packages (emmeans, survival, multcomp, nlme, MASS) and writes r-results.json beside friable.json, Friable’s own answer.',
+      'Takes the query of GET /findings and bundles the very answer GET /findings gives (from the same cache). analysis.R reproduces the tables from data.csv with R’s standard packages (emmeans, survival, multcomp, nlme, MASS) and writes r-results.json beside friable.json, Friable’s own answer. ' +
+      'Covered: every analysis of one-factor designs; the classical ANOVA of factorials (2–4 factors, in blocks or not) and of split and split-split plots at one site, with R’s aov error strata.',
   })
   @ApiFileResponse(['application/zip'], 'A zip named after the trial, measure, round and analysis.')
   @ApiUnprocessableEntityResponse({ description: 'As GET /findings.' })
   async bundle(@CurrentTrialAccess() access: TrialAccessContext, @Query() query: FindingsQueryDto) {
-    const { filename, bytes } = await findingsBundle(await this.findings.findings(access.trialId, query));
+    const answer = await this.cache.answer(access.trialId, query, () => this.findings.findings(access.trialId, query));
+    const { filename, bytes } = await findingsBundle(answer);
     return new StreamableFile(bytes, { type: 'application/zip', length: bytes.length, disposition: `attachment; filename="${filename}"` });
   }
 }

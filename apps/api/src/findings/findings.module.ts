@@ -11,6 +11,6 @@ import { FindingsService } from './findings.service';
   imports: [TrialsModule, ObservationsModule, StatsModule],
   controllers: [FindingsController],
   providers: [FindingsService, FindingsCache],
-  exports: [FindingsService],
+  exports: [FindingsService, FindingsCache],
 })
 export class FindingsModule {}

@@ -4,7 +4,9 @@ import type {
   Findings,
   FindingsAnswer,
   FindingsChoices,
+  FindingsAnalysis,
   FindingsContext,
+  FindingsModelQuery,
   FindingsObservationRow,
   FindingsRankTest,
   MeansOverTimePoint,
@@ -76,7 +78,8 @@ function refuse(message: string): never {
   throw new UnprocessableEntityException({ statusCode: 422, error: 'Unprocessable Entity', message });
 }
 
-function resolveChoices(query: FindingsQueryDto, roundId: number): FindingsChoices {
+/** The choices the server resolves from a query (defaults filled in), for the analysed round. */
+export function resolveChoices(query: FindingsQueryDto, roundId: number): FindingsChoices {
   return {
     measureId: query.measureId,
     roundId,
@@ -87,6 +90,13 @@ function resolveChoices(query: FindingsQueryDto, roundId: number): FindingsChoic
     alpha: query.alpha ?? 0.05,
     forceLsd: query.forceLsd ?? false,
   };
+}
+
+/** The Findings query that asks again for a saved analysis (its resolved choices, model options included). */
+export function savedQuery(choices: FindingsChoices & { analysis?: FindingsAnalysis } & FindingsModelQuery): FindingsQueryDto {
+  const { measureId, roundId, siteId, sitesAre, transform, method, alpha, forceLsd, analysis, distribution, covariance, family, covariateMeasureId, covariateRoundId } = choices;
+  const defined = Object.entries({ siteId, distribution, covariance, family, covariateMeasureId, covariateRoundId }).filter(([, v]) => v !== undefined && v !== null);
+  return { measureId, roundId, sitesAre, transform, method, alpha, forceLsd, analysis: analysis ?? 'anova', ...Object.fromEntries(defined) } as FindingsQueryDto;
 }
 
 const plainCopy = <T>(value: T): T => JSON.parse(JSON.stringify(value)) as T;
@@ -118,6 +128,12 @@ export class FindingsService {
    * the measure, of one measure and round at one site or all sites combined.
    */
   async findings(trialId: number, query: FindingsQueryDto, protocol?: TrialDetail): Promise<FindingsAnswer> {
+    const scene = await this.sceneOf(trialId, query, protocol);
+    return scene.modelChoice.analysis === 'anova' ? this.anovaFindingsOf(scene) : this.modelFindings(scene, query);
+  }
+
+  /** The protocol, the resolved choices, the analysed round's data and the model chosen; refuses what cannot be analysed. */
+  private async sceneOf(trialId: number, query: FindingsQueryDto, protocol?: TrialDetail): Promise<AnalysisScene> {
     const trial = protocol ?? (await this.protocol(trialId));
     const measure = trial.measures.find((m) => m.id === query.measureId) ?? refuse(`measureId ${query.measureId} is not a measure of this trial.`);
     const siteId = query.siteId ?? null;
@@ -137,8 +153,7 @@ export class FindingsService {
     const option = modelChoice.options.find((o) => o.analysis === modelChoice.analysis)!;
     const covariateChosen = modelChoice.analysis === 'ancova' && (query.covariateMeasureId !== undefined || query.covariateRoundId !== undefined);
     if (!option.available && !covariateChosen) refuse(`${option.label} is not available for ${measure.name} here: ${option.note ?? ''}`);
-    const scene: AnalysisScene = { trial, measure, round, site, scopeLabel, choices, data, roundsUpTo, modelChoice };
-    return modelChoice.analysis === 'anova' ? this.anovaFindingsOf(scene) : this.modelFindings(scene, query);
+    return { trial, measure, round, site, scopeLabel, choices, data, roundsUpTo, modelChoice };
   }
 
   /** The classical ANOVA of the measure and round (saved analyses and the report), through the same computation. */
@@ -209,20 +224,8 @@ export class FindingsService {
    */
   private async modelFindings(scene: AnalysisScene, query: FindingsQueryDto): Promise<ModelFindings> {
     const { trial, measure, round, site, scopeLabel, choices, data, modelChoice } = scene;
-    const analysis = modelChoice.analysis as ModelFindings['analysis'];
-    const prepared = analysis === 'repeated' ? await this.roundsData(scene) : [{ round, data }];
-    const covariate = analysis === 'ancova' ? await this.covariateData(scene, query) : null;
-    const modelScene: ModelScene = {
-      analysis,
-      design: data.design,
-      blocked: DESIGN_RULES[trial.design].blocked,
-      combined: data.siteNames.length > 1,
-      control: data.controlLabel === null ? null : (trial.treatments.find((t) => t.isControl)?.code ?? null),
-      choices: { ...choices, distribution: query.distribution, covariance: query.covariance, family: query.family },
-      rounds: prepared.map(({ round: r, data: d }) => ({ label: r.label, dayOffset: r.dayOffset, rows: d.rows })),
-      covariate: covariate && { label: covariate.label, values: covariate.values },
-    };
-    const { request, observations, rows, notices } = modelRequest(modelScene);
+    const { analysis, prepared, covariate, modelScene, built } = await this.modelInput(scene, query);
+    const { request, observations, rows, notices } = built;
     const body = { ...request, observations } as never;
     const answer =
       analysis === 'censored'
@@ -274,6 +277,25 @@ export class FindingsService {
     return { ...(answer as object), analysis, context } as ModelFindings;
   }
 
+  /** What a model analysis sends to its stateless endpoint: the rounds and covariate read, and the request built from them. */
+  private async modelInput(scene: AnalysisScene, query: FindingsQueryDto) {
+    const { trial, round, choices, data, modelChoice } = scene;
+    const analysis = modelChoice.analysis as ModelFindings['analysis'];
+    const prepared = analysis === 'repeated' ? await this.roundsData(scene) : [{ round, data }];
+    const covariate = analysis === 'ancova' ? await this.covariateData(scene, query) : null;
+    const modelScene: ModelScene = {
+      analysis,
+      design: data.design,
+      blocked: DESIGN_RULES[trial.design].blocked,
+      combined: data.siteNames.length > 1,
+      control: data.controlLabel === null ? null : (trial.treatments.find((t) => t.isControl)?.code ?? null),
+      choices: { ...choices, distribution: query.distribution, covariance: query.covariance, family: query.family },
+      rounds: prepared.map(({ round: r, data: d }) => ({ label: r.label, dayOffset: r.dayOffset, rows: d.rows })),
+      covariate: covariate && { label: covariate.label, values: covariate.values },
+    };
+    return { analysis, prepared, covariate, modelScene, built: modelRequest(modelScene) };
+  }
+
   /** Each round of the measure with values in the scope, up to the analysed one (rounds over time). */
   private async roundsData(scene: AnalysisScene): Promise<Array<{ round: TrialDetail['rounds'][number]; data: PreparedData }>> {
     const out = [];
@@ -307,11 +329,19 @@ export class FindingsService {
     return { measureId: covariateMeasure.id, roundId: covariateRound.id, label: `${covariateMeasure.name} at ${covariateRound.label}`, values };
   }
 
-  /** The hash of the data the choices would analyse now (null when there are none). */
-  async currentDataHash(trialId: number, choices: FindingsChoices): Promise<string | null> {
+  /**
+   * The hash of the data the saved choices would analyse now (null when there are none): the ANOVA's rows of the round,
+   * or the observations a model would send (every round used, the plots with a covariate).
+   */
+  async currentDataHash(trialId: number, choices: FindingsChoices & { analysis?: FindingsAnalysis } & FindingsModelQuery): Promise<string | null> {
     const trial = await this.protocol(trialId);
-    const data = await this.prepare(trial, choices, choices.roundId);
-    return data.engineObservations.length === 0 ? null : canonicalHash(data.engineObservations);
+    if (choices.analysis === undefined || choices.analysis === 'anova') {
+      const data = await this.prepare(trial, choices, choices.roundId);
+      return data.engineObservations.length === 0 ? null : canonicalHash(data.engineObservations);
+    }
+    const query = savedQuery(choices);
+    const { built } = await this.modelInput(await this.sceneOf(trialId, query, trial), query);
+    return canonicalHash(built.observations);
   }
 
   private engineRequest(data: PreparedData, choices: FindingsChoices): FindingsContext['engineRequest'] {
@@ -363,6 +393,7 @@ export class FindingsService {
       treatment: o.treatmentCode,
       value: o.valueText!,
       censored: o.censored,
+      ...(withFactors ? { factors: factorsOf.get(o.treatmentCode) ?? {} } : {}),
     }));
     const control = trial.treatments.find((t) => t.isControl);
     const controlLabel = control && valued.some((o) => o.treatmentCode === control.code) ? engineLabel(control.code) : null;

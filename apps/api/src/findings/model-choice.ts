@@ -12,7 +12,8 @@ export interface ModelFacts {
   censoredCount: number;
 }
 
-const LABELS: Record<FindingsAnalysis, string> = {
+/** Friable's name of each analysis, as the model picker and saved analyses show it. */
+export const ANALYSIS_LABELS: Record<FindingsAnalysis, string> = {
   censored: 'Not-drained curves and time ratios',
   repeated: 'Rounds over time',
   ancova: 'Adjusted for the baseline',
@@ -57,8 +58,8 @@ function whyOf(analysis: FindingsAnalysis, facts: ModelFacts): string {
 }
 
 function optionOf(analysis: FindingsAnalysis, facts: ModelFacts, isDefault: boolean): AnalysisOption {
-  const unavailable = (note: string): AnalysisOption => ({ analysis, label: LABELS[analysis], available: false, isDefault, note });
-  const available = (note: string | null = null, label = LABELS[analysis]): AnalysisOption => ({ analysis, label, available: true, isDefault, note });
+  const unavailable = (note: string): AnalysisOption => ({ analysis, label: ANALYSIS_LABELS[analysis], available: false, isDefault, note });
+  const available = (note: string | null = null, label = ANALYSIS_LABELS[analysis]): AnalysisOption => ({ analysis, label, available: true, isDefault, note });
   switch (analysis) {
     case 'censored':
       return facts.kind === 'time-with-cutoff' ? available() : unavailable('Only for a time with a cut-off.');
@@ -100,6 +101,6 @@ export function chooseModel(facts: ModelFacts, requested?: FindingsAnalysis): Mo
   const why =
     analysis === defaultChoice
       ? sentence(whyOf(analysis, facts))
-      : `${sentence(whyOf(analysis, facts))} The analysis made for this measure is ${LABELS[defaultChoice].toLowerCase()}: ${whyOf(defaultChoice, facts)}`;
+      : `${sentence(whyOf(analysis, facts))} The analysis made for this measure is ${ANALYSIS_LABELS[defaultChoice].toLowerCase()}: ${whyOf(defaultChoice, facts)}`;
   return { analysis, defaultAnalysis: defaultChoice, why, options };
 }

@@ -13,7 +13,7 @@ export class ReportsController {
 
   @Get()
   @AnyTrialMember()
-  @ApiOperation({ summary: 'Everything the printable report needs: protocol, sites, per measure the ANOVA and means with letters (latest round with data, all sites combined), cautions and a plain paragraph' })
+  @ApiOperation({ summary: 'Everything the printable report needs: protocol, sites, per measure (latest round with data, all sites combined) the model made for it with its choices and tables, the classical ANOVA and means with letters, cautions and a plain paragraph' })
   @ApiOkResponse({ type: TrialReportDto, description: 'TrialReport.' })
   get(@CurrentTrialAccess() access: TrialAccessContext) {
     return this.reports.report(access.trialId);

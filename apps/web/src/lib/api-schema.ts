@@ -426,7 +426,7 @@ export interface paths {
         };
         get: operations["AnalysesController_list"];
         put?: never;
-        /** Save this analysis: the choices, the SHA-256 of the data used, the engine version and the full Findings, frozen */
+        /** Save this analysis — the classical ANOVA or any model Findings offers (censored, repeated, ancova, ordinal, counts): the choices, the SHA-256 of the data used, the engine version and the full Findings answer, frozen */
         post: operations["AnalysesController_create"];
         delete?: never;
         options?: never;
@@ -614,7 +614,7 @@ export interface paths {
         };
         /**
          * The same analysis as a small bundle anyone can check: data.csv, analysis.R, friable.json, README.txt
-         * @description Takes the query of GET /findings. analysis.R reproduces the tables from data.csv with R’s standard packages (emmeans, survival, multcomp, nlme, MASS) and writes r-results.json beside friable.json, Friable’s own answer.
+         * @description Takes the query of GET /findings and bundles the very answer GET /findings gives (from the same cache). analysis.R reproduces the tables from data.csv with R’s standard packages (emmeans, survival, multcomp, nlme, MASS) and writes r-results.json beside friable.json, Friable’s own answer. Covered: every analysis of one-factor designs; the classical ANOVA of factorials (2–4 factors, in blocks or not) and of split and split-split plots at one site, with R’s aov error strata.
          */
         get: operations["FindingsController_bundle"];
         put?: never;
@@ -890,7 +890,7 @@ export interface paths {
             path?: never;
             cookie?: never;
         };
-        /** Everything the printable report needs: protocol, sites, per measure the ANOVA and means with letters (latest round with data, all sites combined), cautions and a plain paragraph */
+        /** Everything the printable report needs: protocol, sites, per measure (latest round with data, all sites combined) the model made for it with its choices and tables, the classical ANOVA and means with letters, cautions and a plain paragraph */
         get: operations["ReportsController_get"];
         put?: never;
         post?: never;
@@ -1201,7 +1201,12 @@ export interface components {
             note: string | null;
         };
         AnalysisSnapshotDto: {
-            choices: components["schemas"]["FindingsChoicesDto"];
+            /**
+             * @description Friable’s name of the analysis saved.
+             * @example Not-drained curves and time ratios
+             */
+            analysisLabel: string;
+            choices: components["schemas"]["SavedAnalysisChoicesDto"];
             commentCount: number;
             /** Format: date-time */
             createdAt: string;
@@ -1214,7 +1219,8 @@ export interface components {
             engineVersion: string;
             id: number;
             measureName: string;
-            result: components["schemas"]["FindingsDto"];
+            /** @description The Findings answer as it was saved: the classical ANOVA, or a model’s answer with `analysis`. */
+            result: components["schemas"]["FindingsDto"] | components["schemas"]["CensoredFindingsDto"] | components["schemas"]["RepeatedFindingsDto"] | components["schemas"]["AncovaFindingsDto"] | components["schemas"]["OrdinalFindingsDto"] | components["schemas"]["CountsFindingsDto"];
             review: components["schemas"]["ReviewStatusDto"];
             roundLabel: string;
             scopeLabel: string;
@@ -1228,7 +1234,12 @@ export interface components {
             trialId: number;
         };
         AnalysisSnapshotSummaryDto: {
-            choices: components["schemas"]["FindingsChoicesDto"];
+            /**
+             * @description Friable’s name of the analysis saved.
+             * @example Not-drained curves and time ratios
+             */
+            analysisLabel: string;
+            choices: components["schemas"]["SavedAnalysisChoicesDto"];
             commentCount: number;
             /** Format: date-time */
             createdAt: string;
@@ -1721,6 +1732,33 @@ export interface components {
         CreateAnalysisDto: {
             /** @default 0.05 */
             alpha?: number;
+            /**
+             * @description Leave out for the model made for the measure: censored (time with a cut-off), ordinal (score), counts (count); a number: ancova with a day-0 baseline and one later round, repeated with two or more rounds, else anova.
+             * @enum {string}
+             */
+            analysis?: "anova" | "censored" | "repeated" | "ancova" | "ordinal" | "counts";
+            /**
+             * @description repeated: the within-plot covariance (auto: lowest AIC).
+             * @default auto
+             * @enum {string}
+             */
+            covariance?: "cs" | "ar1" | "unstructured" | "auto";
+            /** @description ancova: the measure whose values are the covariate; default the analysed measure. */
+            covariateMeasureId?: number;
+            /** @description ancova: the round whose values are the covariate; default the day-0 round (else the earliest earlier round with values). */
+            covariateRoundId?: number;
+            /**
+             * @description censored: the time-ratio model’s distribution.
+             * @default weibull
+             * @enum {string}
+             */
+            distribution?: "weibull" | "lognormal" | "loglogistic";
+            /**
+             * @description counts: auto takes quasi-Poisson when the counts are overdispersed.
+             * @default auto
+             * @enum {string}
+             */
+            family?: "auto" | "poisson" | "quasipoisson";
             /**
              * @description Compute Fisher’s LSD even when the treatment F test is not significant.
              * @default false
@@ -2245,6 +2283,10 @@ export interface components {
         FindingsObservationRowDto: {
             block: number;
             censored: boolean;
+            /** @description Factorial and split designs: the level code of each factor, by factor name. */
+            factors?: {
+                [key: string]: string;
+            };
             observationId: number;
             plotLabel: string;
             siteName: string;
@@ -2687,6 +2729,10 @@ export interface components {
             censored: boolean;
             /** @description Analysis of covariance: the plot’s covariate (stored decimal text). */
             covariate?: string;
+            /** @description Factorial and split designs: the level code of each factor, by factor name. */
+            factors?: {
+                [key: string]: string;
+            };
             observationId: number;
             plotLabel: string;
             /** @description Rounds over time: the round of the value. */
@@ -3159,6 +3205,8 @@ export interface components {
             means: components["schemas"]["ReportMeanDto"][];
             measure: components["schemas"]["MeasureDto"];
             method: components["schemas"]["SeparationMethod"];
+            /** @description The model made for the measure (Findings’ default); null when that is the classical ANOVA above. */
+            model: components["schemas"]["ReportModelDto"] | null;
             rankTest: components["schemas"]["FindingsRankTestDto"] | null;
             /** @description Latest round with data for the measure; null when it has none yet. */
             round: components["schemas"]["RoundRefDto"] | null;
@@ -3169,6 +3217,17 @@ export interface components {
             unavailable: string | null;
             /** @description Engine warnings and notices of this measure. */
             warnings: string[];
+        };
+        ReportModelDto: {
+            analysis: components["schemas"]["FindingsAnalysis"];
+            /** @description The choices it ran with: GET /findings with them gives the same numbers. */
+            choices: components["schemas"]["SavedAnalysisChoicesDto"];
+            /** @example Not-drained curves and time ratios */
+            label: string;
+            notices: string[];
+            tables: components["schemas"]["ReportTableDto"][];
+            /** @description Which model and why, in plain words. */
+            why: string;
         };
         ReportOpenCommentDto: {
             authorName: string | null;
@@ -3186,6 +3245,13 @@ export interface components {
             roundLabel: string;
             scopeLabel: string;
             signOffs: components["schemas"]["SignOffDto"][];
+            title: string;
+        };
+        ReportTableDto: {
+            columns: string[];
+            /** @description Rows, each cell in the order of columns. */
+            rows: ((string | number) | null)[][];
+            /** @example Time ratios to CTL */
             title: string;
         };
         ResidualPointDto: {
@@ -3249,6 +3315,27 @@ export interface components {
             round: string;
             /** @example treatment:round */
             term: string;
+        };
+        SavedAnalysisChoicesDto: {
+            alpha: number;
+            analysis: components["schemas"]["FindingsAnalysis"];
+            /** @enum {string} */
+            covariance?: "cs" | "ar1" | "unstructured" | "auto";
+            covariateMeasureId?: number;
+            covariateRoundId?: number;
+            /** @enum {string} */
+            distribution?: "weibull" | "lognormal" | "loglogistic";
+            /** @enum {string} */
+            family?: "auto" | "poisson" | "quasipoisson";
+            forceLsd: boolean;
+            measureId: number;
+            method: components["schemas"]["SeparationMethod"];
+            roundId: number;
+            /** @description null = all sites combined. */
+            siteId: number | null;
+            /** @enum {string} */
+            sitesAre: "random" | "fixed";
+            transform: components["schemas"]["AnalysisTransform"];
         };
         /** @enum {string} */
         SeparationMethod: "lsd" | "tukey" | "dunnett" | "bonferroni" | "holm";

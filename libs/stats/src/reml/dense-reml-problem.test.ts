@@ -3,6 +3,8 @@ import { relativeError } from '../test-support/reference-files';
 import { oatsModel } from '../test-support/reml-models';
 import type { CovarianceStructure } from './covariance-structure';
 import { denseRemlProblem } from './dense-reml-problem';
+import { varianceComponentsStructure } from './variance-components';
+import { bilinearForm } from './symmetric-matrix';
 
 // The level-sum shortcut for random intercepts must give exactly what plain dense algebra gives: the same
 // structure written with dense derivatives (Z Z' as a matrix) is the reference.
@@ -42,6 +44,24 @@ describe('denseRemlProblem', () => {
     fast.traces!.forEach((value, i) => expect(relativeError(value, slow.traces![i]!)).toBeLessThan(1e-12));
   });
 
+  it("gives v'F_kl v (the optimizer's average information) as the second-order sums do, after an order-1 evaluation and without one", () => {
+    const problem = denseRemlProblem({ y, design: coding.design, groupOf, structure });
+    const full = problem.evaluate(theta, 2);
+    const m = coding.design.columns + 1;
+    const v = Float64Array.from({ length: m }, (_, i) => (i === m - 1 ? 1 : 0.3 * ((i % 3) - 1)));
+    const K = structure.parameters.length;
+    const cold = problem.responseInformation!(theta, v);
+    problem.evaluate(theta, 1);
+    const warm = problem.responseInformation!(theta, v);
+    for (let k = 0; k < K; k++) {
+      for (let l = 0; l < K; l++) {
+        const expected = bilinearForm(v, full.secondForms![k * K + l]!, v, m);
+        expect(relativeError(cold[k * K + l]!, expected)).toBeLessThan(1e-11);
+        expect(relativeError(warm[k * K + l]!, expected)).toBeLessThan(1e-11);
+      }
+    }
+  });
+
   it('solves V⁻¹v group by group', () => {
     const problem = denseRemlProblem({ y, design: coding.design, groupOf, structure });
     const v = Float64Array.from(y, (_, i) => (i % 5) - 2);
@@ -58,5 +78,16 @@ describe('denseRemlProblem', () => {
 
   it('refuses lengths that differ', () => {
     expect(() => denseRemlProblem({ y: y.subarray(1), design: coding.design, groupOf, structure })).toThrow(/unequal lengths/);
+  });
+
+  it('refuses in words a problem beyond its documented work per step (one group of 700 plots)', () => {
+    const n = 700;
+    const intercept = { columns: 1, rows: Float64Array.of(1), rowOf: new Int32Array(n) };
+    const values = Float64Array.from({ length: n }, (_, i) => (i * 7919) % 13);
+    const oneGroup = new Int32Array(n);
+    const halves = Int32Array.from({ length: n }, (_, i) => i % 2);
+    expect(() => denseRemlProblem({ y: values, design: intercept, groupOf: oneGroup, structure: varianceComponentsStructure([{ name: 'half', codes: halves }], oneGroup) })).toThrow(
+      /layout too large for a mixed model: the mixed-model \(REML\) fit of these 700 plots in 1 independent groups of up to 700 plots needs about 344 million operations a step/,
+    );
   });
 });

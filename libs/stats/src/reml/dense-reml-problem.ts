@@ -62,6 +62,25 @@ function crossLevelSums(fk: Factored, fl: Factored, inverse: Float64Array, size:
   return out;
 }
 
+/**
+ * The largest dense REML problem the engine attempts: Σ_g (n_g³ + n_g²·m) ≤ 3·10⁸ operations per evaluation
+ * (a fit takes ten to twenty), e.g. 20 sites of 100 plots or 3,000 blocks of 24. Beyond it the answer says
+ * so in words rather than running for minutes.
+ */
+export const REML_WORK_LIMIT = 3e8;
+
+function checkRemlSize(groups: readonly Int32Array[], m: number): void {
+  let work = 0;
+  for (const rows of groups) work += rows.length ** 3 + rows.length ** 2 * m;
+  if (work <= REML_WORK_LIMIT) return;
+  const plots = groups.reduce((sum, rows) => sum + rows.length, 0);
+  const largest = groups.reduce((most, rows) => Math.max(most, rows.length), 0);
+  throw new StatsInputError(
+    'layout too large for a mixed model',
+    `the mixed-model (REML) fit of these ${plots.toLocaleString('en')} plots in ${groups.length.toLocaleString('en')} independent groups of up to ${largest} plots needs about ${(work / 1e6).toFixed(0)} million operations a step; the engine's limit is ${REML_WORK_LIMIT / 1e6} million (for example 20 sites of 100 plots, or 3,000 blocks of 24). Complete layouts (every plot present) get the classical analysis at any size`,
+  );
+}
+
 function groupRows(groupOf: Int32Array): Int32Array[] {
   const counts = groupSizes(groupOf);
   const rows = Array.from(counts, (count) => new Int32Array(count));
@@ -173,6 +192,7 @@ export function denseRemlProblem(data: DenseRemlData): RemlProblem {
   const m = p + 1;
   const response = ols.residuals;
   const groups = groupRows(groupOf);
+  checkRemlSize(groups, m);
   const parameterCount = structure.parameters.length;
   const augmented = groups.map((rows) => {
     const values = new Float64Array(rows.length * m);
@@ -184,8 +204,16 @@ export function denseRemlProblem(data: DenseRemlData): RemlProblem {
     return values;
   });
 
+  // The last order-1 evaluation's V_g⁻¹, log|V_g| and V_g⁻¹A_g, which responseInformation, the order-2 sums at the
+  // optimum and solve() at the same θ reuse instead of inverting every V_g again.
+  type Kept = { theta: Float64Array; inverses: Float64Array[]; logDeterminants: number[]; solved: Float64Array[]; blocks: GroupCovarianceBlock[] };
+  let kept: Kept | null = null;
+  const keptAt = (theta: Float64Array): Kept | null => (kept !== null && kept.theta.length === theta.length && kept.theta.every((value, k) => value === theta[k]) ? kept : null);
   const evaluate = (theta: Float64Array, order: 0 | 1 | 2): RemlSums => {
     const K = parameterCount;
+    const reuse = order === 0 ? null : keptAt(theta);
+    const keep: Kept | null = order === 1 && !reuse ? { theta: Float64Array.from(theta), inverses: [], logDeterminants: [], solved: [], blocks: [] } : null;
+    if (!reuse) kept = null;
     const accumulator: Accumulator = {
       logDetV: 0,
       quadratic: new Float64Array(m * m),
@@ -199,16 +227,31 @@ export function denseRemlProblem(data: DenseRemlData): RemlProblem {
     for (let g = 0; g < groups.length; g++) {
       const rows = groups[g]!;
       const size = rows.length;
-      const block = structure.block(g, rows, theta);
-      const inverted = inverseOfPositiveDefinite(block.covariance, size);
+      const block = reuse ? reuse.blocks[g]! : structure.block(g, rows, theta);
+      const inverted = reuse ? { inverse: reuse.inverses[g]!, logDeterminant: reuse.logDeterminants[g]! } : inverseOfPositiveDefinite(block.covariance, size);
       if (!inverted) return { logDetV: Number.NaN, quadratic: accumulator.quadratic.fill(Number.NaN) };
       accumulator.logDetV += inverted.logDeterminant;
       const a = augmented[g]!;
-      const t = multiply(inverted.inverse, size, size, a, m);
+      const t = reuse ? reuse.solved[g]! : multiply(inverted.inverse, size, size, a, m);
       transposeMultiply(a, size, m, t, m, accumulator.quadratic);
       if (order === 0) continue;
+      if (keep) {
+        keep.inverses.push(inverted.inverse);
+        keep.logDeterminants.push(inverted.logDeterminant);
+        keep.solved.push(t);
+        keep.blocks.push(block);
+      }
       block.derivatives.forEach((derivative, k) => {
         accumulator.traces[k]! += traceWithDerivative(inverted.inverse, derivative, size);
+        if (derivative.kind === 'zero') return;
+        if (derivative.kind === 'indicator') {
+          // T'ZZ'T·scale = (Z'T)'(Z'T)·scale: levels × m² instead of n_g × m².
+          const sums = levelSums(derivative, t, size, m);
+          const form = accumulator.firstForms[k]!;
+          const scaled = derivative.scale === 1 ? sums : sums.map((value) => value * derivative.scale);
+          transposeMultiply(sums, derivative.levels, m, scaled, m, form);
+          return;
+        }
         transposeMultiply(t, size, m, applyDerivative(derivative, t, size, m), m, accumulator.firstForms[k]);
       });
       if (order === 2) {
@@ -216,14 +259,53 @@ export function denseRemlProblem(data: DenseRemlData): RemlProblem {
         if (!structure.linear) addHessianTerms(block, inverted.inverse, t, size, m, K, accumulator);
       }
     }
+    if (keep) kept = keep;
     return finish(accumulator, order, K, m, structure.linear);
+  };
+
+  const responseInformation = (theta: Float64Array, v: Float64Array): Float64Array => {
+    const K = parameterCount;
+    const same = keptAt(theta) !== null;
+    const out = new Float64Array(K * K);
+    for (let g = 0; g < groups.length; g++) {
+      const rows = groups[g]!;
+      const size = rows.length;
+      let inverse: Float64Array;
+      let t: Float64Array;
+      let block: GroupCovarianceBlock;
+      if (same) {
+        inverse = kept!.inverses[g]!;
+        t = kept!.solved[g]!;
+        block = kept!.blocks[g]!;
+      } else {
+        block = structure.block(g, rows, theta);
+        const inverted = inverseOfPositiveDefinite(block.covariance, size);
+        if (!inverted) return out.fill(Number.NaN);
+        inverse = inverted.inverse;
+        t = multiply(inverse, size, size, augmented[g]!, m);
+      }
+      const u = multiply(t, size, m, v, 1);
+      const applied = block.derivatives.map((d) => applyDerivative(d, u, size, 1));
+      const solved = applied.map((w) => multiply(inverse, size, size, w, 1));
+      for (let k = 0; k < K; k++) {
+        for (let l = k; l < K; l++) {
+          let sum = 0;
+          const wk = applied[k]!;
+          const sl = solved[l]!;
+          for (let i = 0; i < size; i++) sum += wk[i]! * sl[i]!;
+          out[k * K + l]! += sum;
+        }
+      }
+    }
+    for (let k = 0; k < K; k++) for (let l = 0; l < k; l++) out[k * K + l] = out[l * K + k]!;
+    return out;
   };
 
   const solve = (theta: Float64Array, vector: Float64Array): Float64Array => {
     const out = new Float64Array(n);
+    const reuse = keptAt(theta);
     groups.forEach((rows, g) => {
-      const block = structure.block(g, rows, theta);
-      const inverted = inverseOfPositiveDefinite(block.covariance, rows.length);
+      const inverted = reuse ? { inverse: reuse.inverses[g]! } : inverseOfPositiveDefinite(structure.block(g, rows, theta).covariance, rows.length);
       if (!inverted) throw new StatsInputError('covariance not positive definite', 'the fitted covariance matrix of a group is singular');
       const local = Float64Array.from(rows, (row) => vector[row]!);
       const solved = multiply(inverted.inverse, rows.length, rows.length, local, 1);
@@ -241,6 +323,7 @@ export function denseRemlProblem(data: DenseRemlData): RemlProblem {
     olsResidualVariance: ols.residualVariance,
     start: () => structure.start(ols.residualVariance),
     evaluate,
+    responseInformation,
     solve,
   });
 }

@@ -76,8 +76,11 @@ export function fitReml(problem: RemlProblem, options: RemlFitOptions = {}): Rem
   const releases = new Array<number>(K).fill(0);
   const steps = { averageInformation: 0, fisherScoring: 0, boundary: 0 };
 
-  const evaluate = (theta: Float64Array, order: 0 | 2): RemlQuantities => remlQuantities(problem, theta, order);
-  let current: WorkingPoint = { theta: start, quantities: evaluate(start, 2) };
+  // Steps need the gradient and the average information only ('steps'); the expected information (Fisher
+  // scoring) and the second-order forms are computed when a step needs them and once at the optimum.
+  const evaluate = (theta: Float64Array, order: 'steps' | 2): RemlQuantities => remlQuantities(problem, theta, order);
+  const complete = (point: WorkingPoint): WorkingPoint => (point.quantities.expectedInformation ? point : { theta: point.theta, quantities: evaluate(point.theta, 2) });
+  let current: WorkingPoint = { theta: start, quantities: evaluate(start, 'steps') };
   if (!Number.isFinite(current.quantities.logLikelihood)) {
     throw new StatsInputError('REML cannot start', 'the covariance matrix at the starting values is singular');
   }
@@ -90,7 +93,7 @@ export function fitReml(problem: RemlProblem, options: RemlFitOptions = {}): Rem
     iterations++;
     const active = Array.from({ length: K }, (_, k) => k).filter((k) => !atBoundary[k]);
     const size = active.length;
-    const q = current.quantities;
+    let q = current.quantities;
     const jacobian = active.map((k) => (isVariance[k] ? current.theta[k]! : 1));
     const gradient = Float64Array.from(active, (k, i) => q.gradient![k]! * jacobian[i]!);
     const informationOf = (matrix: Float64Array) => {
@@ -100,10 +103,12 @@ export function fitReml(problem: RemlProblem, options: RemlFitOptions = {}): Rem
     };
     let accepted = false;
     let decrement = 0;
-    for (const [kind, matrix] of [
-      ['averageInformation', q.averageInformation!],
-      ['fisherScoring', q.expectedInformation!],
-    ] as const) {
+    for (const kind of ['averageInformation', 'fisherScoring'] as const) {
+      if (kind === 'fisherScoring') {
+        current = complete(current);
+        q = current.quantities;
+      }
+      const matrix = kind === 'averageInformation' ? q.averageInformation! : q.expectedInformation!;
       const step = solveDamped(informationOf(matrix), gradient, size);
       if (!step) continue;
       decrement = step.reduce((sum, value, i) => sum + value * gradient[i]!, 0);
@@ -116,9 +121,9 @@ export function fitReml(problem: RemlProblem, options: RemlFitOptions = {}): Rem
         const next = Float64Array.from(working);
         active.forEach((k, i) => (next[k] = working[k]! + Math.max(-MAX_LOG_STEP, Math.min(MAX_LOG_STEP, t * step[i]!))));
         const theta = fromWorking(next);
-        const trial = evaluate(theta, 0);
+        const trial = evaluate(theta, 'steps');
         if (Number.isFinite(trial.logLikelihood) && trial.logLikelihood >= q.logLikelihood) {
-          current = { theta, quantities: evaluate(theta, 2) };
+          current = { theta, quantities: trial };
           steps[kind]++;
           accepted = true;
           break;
@@ -139,7 +144,7 @@ export function fitReml(problem: RemlProblem, options: RemlFitOptions = {}): Rem
       });
       if (moved) {
         const theta = Float64Array.from(current.theta, (value, k) => (atBoundary[k] ? 0 : value));
-        current = { theta, quantities: evaluate(theta, 2) };
+        current = { theta, quantities: evaluate(theta, 'steps') };
         steps.boundary++;
       }
       continue;
@@ -152,7 +157,7 @@ export function fitReml(problem: RemlProblem, options: RemlFitOptions = {}): Rem
       atBoundary[release] = false;
       const theta = Float64Array.from(current.theta);
       theta[release] = 1e-4 * Math.max(problem.olsResidualVariance, 1e-300);
-      const trial = evaluate(theta, 2);
+      const trial = evaluate(theta, 'steps');
       if (Number.isFinite(trial.logLikelihood)) current = { theta, quantities: trial };
       steps.boundary++;
       continue;
@@ -160,6 +165,7 @@ export function fitReml(problem: RemlProblem, options: RemlFitOptions = {}): Rem
     converged = true;
     break;
   }
+  current = complete(current);
   return Object.freeze({
     ...current.quantities,
     problem,

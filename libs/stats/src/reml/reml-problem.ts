@@ -78,6 +78,13 @@ export interface RemlProblem {
   /** Starting values of θ. */
   start(): Float64Array;
   evaluate(theta: Float64Array, order: 0 | 1 | 2): RemlSums;
+  /**
+   * Optional, for speed: the K × K matrix Σ_g w_gk' V_g⁻¹ w_gl with w_gk = D_gk V_g⁻¹ A_g v (A = [X | r]), which
+   * is v'(A'V⁻¹D_kV⁻¹D_lV⁻¹A)v without forming the m × m second-order sums. With it the optimizer's steps
+   * need only order-1 sums (the average information ½ y'PD_kPD_lPy is read from it); without it each step
+   * evaluates order 2.
+   */
+  responseInformation?(theta: Float64Array, v: Float64Array): Float64Array;
   /** V(θ)⁻¹ v for a vector of length n (observation order). */
   solve(theta: Float64Array, vector: Float64Array): Float64Array;
 }

@@ -40,6 +40,14 @@ describe('remlQuantities', () => {
     }
   });
 
+  it("gives the optimizer's steps the same gradient and average information as order 2, from order-1 sums", () => {
+    const steps = remlQuantities(problem, theta, 'steps');
+    expect(steps.secondForms).toBeUndefined();
+    expect(steps.logLikelihood).toBe(at.logLikelihood);
+    steps.gradient!.forEach((value, k) => expect(relativeError(value, at.gradient![k]!)).toBeLessThan(1e-12));
+    steps.averageInformation!.forEach((value, i) => expect(relativeError(value, at.averageInformation![i]!)).toBeLessThan(1e-10));
+  });
+
   it('says NaN rather than throwing when V is not positive definite', () => {
     expect(remlQuantities(problem, Float64Array.of(-500, 10, 1), 0).logLikelihood).toBeNaN();
   });

@@ -57,15 +57,18 @@ function invalid(theta: Float64Array, p: number): RemlQuantities {
  *   AI_kl = ½ y'PD_kPD_lPy; E_kl = ½ tr(PD_kPD_l); O = −E + 2·AI (+ second-derivative terms when V is not linear in θ).
  * Reference: Searle, Casella & McCulloch (1992), Variance Components, §6.6; Gilmour, Thompson & Cullis (1995),
  * Biometrics 51:1440; Kenward & Roger (1997), Biometrics 53:983.
+ * Order 'steps' is what the optimizer needs at each step — order 1 and the average information — from order-1
+ * sums and the problem's `responseInformation` (order 2 when the problem has none).
  * Returns logLikelihood NaN when V(θ) or X'V⁻¹X is not positive definite. @throws never.
  * @example remlQuantities(problem, Float64Array.of(2.5, 1.1), 1).gradient; // ∂ℓ/∂θ at θ = (2.5, 1.1)
  */
-export function remlQuantities(problem: RemlProblem, theta: Float64Array, order: 0 | 1 | 2): RemlQuantities {
+export function remlQuantities(problem: RemlProblem, theta: Float64Array, order: 0 | 1 | 2 | 'steps'): RemlQuantities {
   const p = problem.fixedColumns;
   const m = p + 1;
   const n = problem.observations;
   const K = problem.parameters.length;
-  const sums = problem.evaluate(theta, order);
+  if (order === 'steps' && !problem.responseInformation) order = 2;
+  const sums = problem.evaluate(theta, order === 'steps' ? 1 : order);
   if (!Number.isFinite(sums.logDetV)) return invalid(theta, p);
   const crossProduct = xBlock(sums.quadratic, m, p);
   const inverted = inverseOfPositiveDefinite(crossProduct, p);
@@ -88,14 +91,26 @@ export function remlQuantities(problem: RemlProblem, theta: Float64Array, order:
   const derivativeForms = sums.firstForms!.map((form) => xBlock(form, m, p));
   const responseColumns = sums.firstForms!.map((form) => xColumn(form, m, p, v));
   const gradient = new Float64Array(K);
-  const phiTimesForms = derivativeForms.map((form) => multiply(covariance, p, p, form, p));
   for (let k = 0; k < K; k++) {
-    let tracePhiB = 0;
-    for (let i = 0; i < p; i++) tracePhiB += phiTimesForms[k]![i * p + i]!;
-    const traceP = sums.traces![k]! - tracePhiB;
+    // tr(Φ B_k) element by element (Φ and B_k symmetric): O(p²), not the O(p³) product.
+    const traceP = sums.traces![k]! - traceOfProduct(covariance, derivativeForms[k]!, p);
     gradient[k] = -0.5 * traceP + 0.5 * bilinearForm(v, sums.firstForms![k]!, v, m);
   }
   if (order === 1) return { ...base, gradient, derivativeForms };
+  if (order === 'steps') {
+    // ½ y'PD_kPD_lPy = ½ (v'F_kl v − r_k'Φ r_l), F_kl = A'V⁻¹D_kV⁻¹D_lV⁻¹A, with v'F_kl v from the problem.
+    const products = problem.responseInformation!(theta, v);
+    const averageInformation = new Float64Array(K * K);
+    for (let k = 0; k < K; k++) {
+      for (let l = k; l < K; l++) {
+        const ai = 0.5 * (products[k * K + l]! - bilinearForm(responseColumns[k]!, covariance, responseColumns[l]!, p));
+        averageInformation[k * K + l] = ai;
+        averageInformation[l * K + k] = ai;
+      }
+    }
+    return { ...base, gradient, derivativeForms, averageInformation };
+  }
+  const phiTimesForms = derivativeForms.map((form) => multiply(covariance, p, p, form, p));
 
   const averageInformation = new Float64Array(K * K);
   const expectedInformation = new Float64Array(K * K);

@@ -70,7 +70,7 @@ export function varianceComponentsStructure(terms: readonly RandomInterceptTerm[
     ...terms.map((term) => Object.freeze({ name: term.name, kind: 'variance' as const, canBeZero: true })),
     Object.freeze({ name: residualName, kind: 'variance' as const, canBeZero: false }),
   ];
-  const cache = new Map<number, { local: LocalCodes[]; derivatives: CovarianceDerivative[] }>();
+  const cache = new Map<number, { local: LocalCodes[]; members: Int32Array[][]; derivatives: CovarianceDerivative[] }>();
   const K = terms.length;
   return Object.freeze({
     parameters: Object.freeze(parameters),
@@ -84,19 +84,23 @@ export function varianceComponentsStructure(terms: readonly RandomInterceptTerm[
           ...local.map((l) => (l.levels === 0 ? { kind: 'zero' as const } : { kind: 'indicator' as const, codes: l.codes, levels: l.levels, scale: 1 })),
           { kind: 'identity', scale: 1 },
         ];
-        entry = { local, derivatives };
+        const members = local.map((l) => {
+          const lists: number[][] = Array.from({ length: l.levels }, () => []);
+          l.codes.forEach((level, i) => level >= 0 && lists[level]!.push(i));
+          return lists.map((list) => Int32Array.from(list));
+        });
+        entry = { local, members, derivatives };
         cache.set(group, entry);
       }
       const size = rows.length;
       const covariance = new Float64Array(size * size);
       for (let i = 0; i < size; i++) covariance[i * size + i] = theta[K]!;
-      entry.local.forEach((local, k) => {
+      entry.members.forEach((levels, k) => {
         const variance = theta[k]!;
         if (variance === 0) return;
-        for (let i = 0; i < size; i++) {
-          const level = local.codes[i]!;
-          if (level < 0) continue;
-          for (let j = 0; j < size; j++) if (local.codes[j] === level) covariance[i * size + j]! += variance;
+        // Pairs within each level only: Σ (level size)² rather than n_g² per term.
+        for (const members of levels) {
+          for (const i of members) for (const j of members) covariance[i * size + j]! += variance;
         }
       });
       return { covariance, derivatives: entry.derivatives };

@@ -1,7 +1,13 @@
-import type { AnalysisSnapshot, AnalysisSnapshotSummary, SnapshotComment } from '@friable/contracts';
-import { ApiProperty } from '@nestjs/swagger';
+import type { AnalysisSnapshot, AnalysisSnapshotSummary, FindingsAnswer, SavedAnalysisChoices, SnapshotComment } from '@friable/contracts';
+import { ApiExtraModels, ApiProperty, getSchemaPath, IntersectionType, PickType } from '@nestjs/swagger';
 import { FindingsChoicesDto, FindingsDto } from '../../findings/dto/findings.dto';
+import { AncovaFindingsDto, CensoredFindingsDto, CountsFindingsDto, ModelChoicesDto, OrdinalFindingsDto, RepeatedFindingsDto } from '../../findings/dto/model-findings.dto';
 import { CommentRevisionDto, ReviewStatusDto, SignOffDto } from './review.dto';
+
+/** The choices of a saved analysis: the ANOVA's, the analysis and its model options. */
+export class SavedAnalysisChoicesDto
+  extends IntersectionType(FindingsChoicesDto, PickType(ModelChoicesDto, ['analysis', 'distribution', 'covariance', 'family', 'covariateMeasureId', 'covariateRoundId'] as const))
+  implements SavedAnalysisChoices {}
 
 export class AnalysisSnapshotSummaryDto implements AnalysisSnapshotSummary {
   @ApiProperty()
@@ -13,8 +19,11 @@ export class AnalysisSnapshotSummaryDto implements AnalysisSnapshotSummary {
   @ApiProperty()
   title: string;
 
-  @ApiProperty({ type: FindingsChoicesDto })
-  choices: FindingsChoicesDto;
+  @ApiProperty({ type: SavedAnalysisChoicesDto })
+  choices: SavedAnalysisChoicesDto;
+
+  @ApiProperty({ example: 'Not-drained curves and time ratios', description: 'Friable’s name of the analysis saved.' })
+  analysisLabel: string;
 
   @ApiProperty()
   measureName: string;
@@ -59,10 +68,13 @@ export class AnalysisSnapshotSummaryDto implements AnalysisSnapshotSummary {
   review: ReviewStatusDto;
 }
 
+const RESULTS = [FindingsDto, CensoredFindingsDto, RepeatedFindingsDto, AncovaFindingsDto, OrdinalFindingsDto, CountsFindingsDto];
+
 /** The stored result, never recomputed. */
+@ApiExtraModels(...RESULTS)
 export class AnalysisSnapshotDto extends AnalysisSnapshotSummaryDto implements AnalysisSnapshot {
-  @ApiProperty({ type: FindingsDto })
-  result: FindingsDto;
+  @ApiProperty({ anyOf: RESULTS.map((result) => ({ $ref: getSchemaPath(result) })), description: 'The Findings answer as it was saved: the classical ANOVA, or a model’s answer with `analysis`.' })
+  result: FindingsAnswer;
 
   @ApiProperty({ description: "True when the current data's hash differs from dataHash." })
   dataChanged: boolean;

@@ -1,9 +1,12 @@
-import { ApiProperty, OmitType } from '@nestjs/swagger';
+import { ApiProperty } from '@nestjs/swagger';
 import { IsString, Matches, MaxLength } from 'class-validator';
 import { FindingsQueryDto } from '../../findings/dto/findings-query.dto';
 
-/** POST /api/trials/:trialId/analyses — the choices of the analysis to save (the classical ANOVA), and a title. */
-export class CreateAnalysisDto extends OmitType(FindingsQueryDto, ['analysis', 'distribution', 'covariance', 'family', 'covariateMeasureId', 'covariateRoundId'] as const) {
+/**
+ * POST /api/trials/:trialId/analyses — the choices of the analysis to save, as GET /findings takes them (`analysis`
+ * left out: the model made for the measure; its options: distribution, covariance, family, covariate), and a title.
+ */
+export class CreateAnalysisDto extends FindingsQueryDto {
   @ApiProperty({ example: 'Drain time, Day 14, all sites' })
   @IsString({ message: 'title must be text of 1 to 200 characters' })
   @Matches(/\S/, { message: 'title must be text of 1 to 200 characters' })

@@ -8,8 +8,10 @@ function tidyRows(answer: FindingsAnswer): Array<Record<string, unknown>> {
   const { context } = answer;
   if (isModelFindings(answer)) return answer.context.engineObservations;
   const combined = answer.context.scope.siteNames.length > 1;
+  const factorNames = answer.context.engineRequest.factorNames ?? [];
   return context.observations.map((row) => ({
     treatment: row.treatment,
+    ...Object.fromEntries(factorNames.map((name) => [name, row.factors?.[name] ?? ''])),
     ...(answer.context.engineRequest.design === 'crd' ? {} : { block: String(row.block) }),
     ...(combined ? { site: row.siteName } : {}),
     value: row.value,
@@ -36,7 +38,8 @@ export async function findingsBundle(answer: FindingsAnswer): Promise<{ filename
   const title = `Friable ${context.trialCode} · ${context.measure.name} (${context.measure.unit}) · ${context.round.label} · ${context.scope.label}: ${label}`;
   const zip = new JSZip();
   zip.file('data.csv', `${csv}\n`);
-  zip.file('analysis.R', rScript({ analysis, request: context.engineRequest as Record<string, unknown>, title }));
+  const modelKind = isModelFindings(answer) ? undefined : answer.model?.kind;
+  zip.file('analysis.R', rScript({ analysis, request: context.engineRequest as Record<string, unknown>, title, ...(modelKind ? { modelKind } : {}) }));
   zip.file('friable.json', JSON.stringify(answer, null, 2));
   zip.file(
     'README.txt',

@@ -6,6 +6,8 @@ export interface ScriptInput {
   /** The stateless endpoint's body without observations (design, control, distribution, covariance, family, transform…). */
   request: Record<string, unknown>;
   title: string;
+  /** Factorial and split designs: the engine's model ('reml' for unbalanced data), from the answer. */
+  modelKind?: 'anova' | 'reml';
 }
 
 const rString = (text: string) => JSON.stringify(text);
@@ -89,6 +91,73 @@ ${
 print(means)
 results$means <- as.data.frame(summary(means))[, c("treatment", "emmean", "SE")]
 print(pairs(means, adjust = ${rString(adjust[method] ?? 'tukey')}))
+${finish}`;
+}
+
+const FACTOR_DESIGNS = ['factorial-crd', 'factorial-rcbd', 'split-plot', 'split-split-plot'];
+
+/**
+ * The classical ANOVA of a factorial (in blocks or not) or a split / split-split plot at one site, as R's aov gives it:
+ * a split plot's terms in their error strata (Error(block/A) or Error(block/A/B)), each stratum's residual named as
+ * Friable names it ('block', 'block:A', 'block:A:B', 'error'); each factor's level means by emmeans on the fixed model.
+ */
+function factorScript(input: ScriptInput): string {
+  const factorNames = (input.request.factorNames as string[] | undefined) ?? [];
+  const transform = String(input.request.transform ?? 'none');
+  // The control is a combination of levels here, not a treatment code of data.csv: no reference level to set.
+  return `${preamble({ ...input, request: { ...input.request, control: undefined } }, ['emmeans'])}factor_names <- c(${factorNames.map(rString).join(', ')})
+for (name in factor_names) d[[name]] <- factor(d[[name]], levels = unique(d[[name]]))
+if (!is.null(d$block)) d$block <- factor(d$block, levels = unique(d$block))
+quoted <- function(names) paste0("\`", names, "\`")
+plain <- function(labels) gsub("\`", "", trimws(labels))
+effects <- paste(quoted(factor_names), collapse = " * ")
+d$value <- switch(${rString(transform)}, none = d$value, log = log(d$value), sqrt = sqrt(d$value), "arcsine-sqrt" = asin(sqrt(d$value)))
+row_table <- function(tab, residual) {
+  terms <- plain(rownames(tab))
+  terms[terms == "Residuals"] <- residual
+  data.frame(term = terms, df = tab$Df, ss = tab[["Sum Sq"]], f = tab[["F value"]], p = tab[["Pr(>F)"]])
+}
+if (design %in% c("split-plot", "split-split-plot")) {
+  # Whole plots (and sub plots) are the error strata: Error(block/A) or Error(block/A/B).
+  nesting <- paste(c("block", quoted(factor_names[seq_len(if (design == "split-plot") 1 else 2)])), collapse = "/")
+  fit <- aov(as.formula(paste("value ~", effects, "+ Error(", nesting, ")")), data = d)
+  strata <- summary(fit)
+  print(strata)
+  tables <- lapply(names(strata), function(stratum) {
+    name <- plain(sub("^Error: ", "", stratum))
+    row_table(strata[[stratum]][[1]], if (name == "Within") "error" else name)
+  })
+  results$anova <- do.call(rbind, tables)
+  # Blocks tested against the whole-plot error, as the textbook table has it (aov leaves the block stratum untested).
+  mean_square <- function(name) { row <- results$anova[results$anova$term == name, ]; row$ss / row$df }
+  whole_plot_error <- paste0("block:", factor_names[1])
+  block_row <- results$anova$term == "block"
+  block_f <- mean_square("block") / mean_square(whole_plot_error)
+  results$anova$f[block_row] <- block_f
+  results$anova$p[block_row] <- pf(block_f, results$anova$df[block_row], results$anova$df[results$anova$term == whole_plot_error], lower.tail = FALSE)
+  fixed <- lm(as.formula(paste("value ~ block +", effects)), data = d)
+  if (design == "split-plot") {
+    # Standard errors of the four kinds of difference, as the agricultural-experiment textbooks give them (Gomez & Gomez 1984, 2nd ed., the split-plot design; section cited from memory): Ea whole-plot, Eb sub-plot error.
+    ea <- mean_square(whole_plot_error)
+    eb <- mean_square("error")
+    r <- nlevels(d$block); a <- nlevels(d[[factor_names[1]]]); b <- nlevels(d[[factor_names[2]]])
+    results$differences <- data.frame(
+      kind = c(factor_names[1], factor_names[2], paste(factor_names[2], "within", factor_names[1]), paste(factor_names[1], "within", factor_names[2])),
+      se = c(sqrt(2 * ea / (r * b)), sqrt(2 * eb / (r * a)), sqrt(2 * eb / r), sqrt(2 * ((b - 1) * eb + ea) / (r * b)))
+    )
+  }
+} else {
+  fixed <- lm(as.formula(paste("value ~", if (design == "factorial-rcbd") "block +" else "", effects)), data = d)
+  table <- anova(fixed)
+  print(table)
+  results$anova <- row_table(table, "error")
+}
+# Each factor's level means (balanced data: the same whatever the error strata).
+results$factorMeans <- do.call(rbind, lapply(factor_names, function(name) {
+  means <- as.data.frame(summary(emmeans(fixed, as.formula(paste("~", quoted(name))))))
+  data.frame(term = name, level = as.character(means[[1]]), emmean = means$emmean)
+}))
+print(results$factorMeans)
 ${finish}`;
 }
 
@@ -176,14 +245,18 @@ ${finish}`;
 /**
  * R script — the script in a Findings bundle that reproduces the analysis from its data.csv with R's standard
  * packages (stats, emmeans, survival, multcomp, nlme, MASS), printing the tables and writing r-results.json.
- * One-factor designs (crd, rcbd, several sites combined); a factorial or split design's ANOVA says it is not covered.
+ * One-factor designs (crd, rcbd, several sites combined) for every analysis; the classical ANOVA of a factorial or a
+ * split / split-split plot at one site; a combined factorial or split plot over sites, or one fitted by REML, says
+ * plainly that it is not covered.
  * Throws: nothing.
  * Example: rScript({ analysis: 'counts', request: { design: 'rcbd', control: 'C' }, title: '…' }) → "# …\nsuppressMessages({ library(jsonlite) })\n…"
  */
 export function rScript(input: ScriptInput): string {
   const design = String(input.request.design);
+  if (input.analysis === 'anova' && FACTOR_DESIGNS.includes(design) && input.modelKind !== 'reml') return factorScript(input);
   if (!['crd', 'rcbd', 'multisite-rcbd'].includes(design)) {
-    return `# ${input.title}\n# The ${design} design is analysed on its factors; this bundle's script covers one-factor designs only.\nstop("not covered: ${design}")\n`;
+    const why = input.modelKind === 'reml' ? 'fitted by REML (the data are unbalanced)' : 'combined over sites';
+    return `# ${input.title}\n# This ${design} analysis is ${why}; this bundle's script covers the classical ANOVA of factorials and split plots at one site. Download the bundle of each site.\nstop("not covered: ${design}, ${why}")\n`;
   }
   switch (input.analysis) {
     case 'anova':

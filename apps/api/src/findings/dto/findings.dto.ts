@@ -143,6 +143,9 @@ export class FindingsObservationRowDto implements FindingsObservationRow {
 
   @ApiProperty()
   censored: boolean;
+
+  @ApiPropertyOptional({ type: 'object', additionalProperties: { type: 'string' }, description: 'Factorial and split designs: the level code of each factor, by factor name.' })
+  factors?: Record<string, string>;
 }
 
 export class CensoredSummaryDto {

@@ -1,5 +1,6 @@
-import { SEPARATION_METHODS, type ReportMean, type ReportMeasure, type SeparationMethod, type TrialReport } from '@friable/contracts';
+import { FINDINGS_ANALYSES, SEPARATION_METHODS, type FindingsAnalysis, type ReportMean, type ReportMeasure, type ReportModel, type ReportTable, type SeparationMethod, type TrialReport } from '@friable/contracts';
 import { ApiProperty } from '@nestjs/swagger';
+import { SavedAnalysisChoicesDto } from '../../analyses/dto/analysis-snapshot.dto';
 import { ReportReviewDto } from '../../analyses/dto/review.dto';
 import { FindingsRankTestDto, RoundRefDto } from '../../findings/dto/findings.dto';
 import { MeasureDto } from '../../measures/dto/measure.dto';
@@ -13,6 +14,37 @@ export class ReportMeanDto extends LsMeanDto implements ReportMean {
 
   @ApiProperty({ type: Number, nullable: true })
   percentOfControl: number | null;
+}
+
+export class ReportTableDto implements ReportTable {
+  @ApiProperty({ example: 'Time ratios to CTL' })
+  title: string;
+
+  @ApiProperty({ type: [String] })
+  columns: string[];
+
+  @ApiProperty({ type: 'array', items: { type: 'array', items: { oneOf: [{ type: 'string' }, { type: 'number' }], nullable: true } }, description: 'Rows, each cell in the order of columns.' })
+  rows: Array<Array<string | number | null>>;
+}
+
+export class ReportModelDto implements ReportModel {
+  @ApiProperty({ enum: FINDINGS_ANALYSES, enumName: 'FindingsAnalysis' })
+  analysis: FindingsAnalysis;
+
+  @ApiProperty({ example: 'Not-drained curves and time ratios' })
+  label: string;
+
+  @ApiProperty({ description: 'Which model and why, in plain words.' })
+  why: string;
+
+  @ApiProperty({ type: SavedAnalysisChoicesDto, description: 'The choices it ran with: GET /findings with them gives the same numbers.' })
+  choices: SavedAnalysisChoicesDto;
+
+  @ApiProperty({ type: [ReportTableDto] })
+  tables: ReportTableDto[];
+
+  @ApiProperty({ type: [String] })
+  notices: string[];
 }
 
 export class ReportMeasureDto implements ReportMeasure {
@@ -48,6 +80,9 @@ export class ReportMeasureDto implements ReportMeasure {
 
   @ApiProperty({ type: String, nullable: true, description: "Why there is no analysis (no data yet, or the engine's sentence)." })
   unavailable: string | null;
+
+  @ApiProperty({ type: ReportModelDto, nullable: true, description: 'The model made for the measure (Findings’ default); null when that is the classical ANOVA above.' })
+  model: ReportModelDto | null;
 }
 
 /** GET /api/trials/:trialId/report — everything the printable report page needs. */

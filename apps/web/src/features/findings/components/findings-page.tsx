@@ -110,6 +110,8 @@ export function FindingsPage({ trial, meId }: { trial: TrialDetail; meId?: numbe
   // The exact choices of the analysis on screen, round included, for saving and for the per-site plots.
   const { analysis: _analysis, distribution: _distribution, covariance: _covariance, family: _family, covariateMeasureId: _cm, covariateRoundId: _cr, ...anovaQuery } = query ?? { measureId: 0 };
   const shownQuery: FindingsQuery | null = query && analysedRoundId ? { ...anovaQuery, roundId: analysedRoundId } : query && anovaQuery;
+  // What "Save this analysis" keeps: the analysis on screen with its model options, round included.
+  const savedQuery: FindingsModelsQuery | null = query && analysedRoundId ? { ...query, roundId: analysedRoundId, analysis: shownAnalysis } : null;
 
   const combined = query !== null && !query.siteId && combinable;
   // The per-site analyses feed only the interaction plot (ANOVA) and the per-site means over time (rounds over time):
@@ -289,10 +291,15 @@ export function FindingsPage({ trial, meId }: { trial: TrialDetail; meId?: numbe
           {isModelFindings(data) ? (
             <ModelFindingsView findings={data} treatmentNames={treatmentNames} siteRounds={siteRounds} />
           ) : (
-            <>
-              <FindingsResultView findings={data} treatmentNames={treatmentNames} interaction={interaction} />
-              {shownQuery && <SnapshotsPanel trial={trial} query={shownQuery} defaultTitle={`${data.context.measure.name}, ${data.context.round.label}, ${data.context.scope.label}`} onOpen={(id) => choose({ analysis: String(id) })} />}
-            </>
+            <FindingsResultView findings={data} treatmentNames={treatmentNames} interaction={interaction} />
+          )}
+          {savedQuery && (
+            <SnapshotsPanel
+              trial={trial}
+              query={savedQuery}
+              defaultTitle={`${data.context.measure.name}, ${data.context.round.label}, ${data.context.scope.label}${isModelFindings(data) ? ` (${data.context.modelChoice.options.find((o) => o.analysis === data.analysis)?.label.toLowerCase() ?? data.analysis})` : ''}`}
+              onOpen={(id) => choose({ analysis: String(id) })}
+            />
           )}
         </>
       ) : null}

@@ -8,6 +8,7 @@ import { designLabels, formatArea, formatDate, formatRate } from '../../../lib/f
 import { useReport } from '../api/get-report';
 import { AnovaTable } from './anova-table';
 import { RankTestPanel } from './rank-test-panel';
+import { ReportModelTables } from './report-model';
 import { SignOffLine } from './review-panel';
 import { formatMeasureValue, methodLabels } from './stat-format';
 import { inProtocolOrder } from './stat-format';
@@ -128,6 +129,7 @@ function ReportMeasureSection({ entry, treatmentOrder, control }: { entry: Repor
       <h3 id={`${headingId}-name`} className="fr-findings-heading">
         {measure.name} ({measure.unit}){entry.round ? ` — ${entry.round.label}, ${entry.scopeLabel}` : ''}
       </h3>
+      {entry.model && <ReportModelTables model={entry.model} measureName={measure.name} />}
       {entry.unavailable || !entry.anova || !entry.summary ? (
         <Callout icon="info-sign">{entry.unavailable ?? 'No analysis yet.'}</Callout>
       ) : (

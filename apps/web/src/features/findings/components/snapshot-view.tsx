@@ -1,10 +1,11 @@
 import { Button, Callout, Tag } from '@blueprintjs/core';
-import type { TrialDetail } from '@friable/contracts';
+import { isModelFindings, type TrialDetail } from '@friable/contracts';
 import { ErrorState, LoadingState } from '../../../components/states';
 import { formatDate } from '../../../lib/format';
 import { useAnalysis } from '../../../lib/api/get-analysis';
 import { CommentThreads } from './comment-threads';
 import { FindingsCaption, FindingsResultView } from './findings-result-view';
+import { ModelFindingsView } from './models/model-findings-view';
 import { ReviewPanel } from './review-panel';
 
 /** One saved analysis: its stored numbers (never recomputed), a notice when the data changed since, its review and comment threads. */
@@ -33,7 +34,7 @@ export function SnapshotView({
       </div>
       <h3 className="fr-findings-heading">Saved analysis: {s.title}</h3>
       <p className="fr-findings-caption">
-        <FindingsCaption findings={s.result} /> · saved by {s.createdBy ?? 'someone'} on {formatDate(s.createdAt)}
+        <FindingsCaption findings={s.result} /> · {s.analysisLabel} · saved by {s.createdBy ?? 'someone'} on {formatDate(s.createdAt)}
         {' '}
         <Tag intent={s.review.expected > 0 && s.review.signed >= s.review.expected ? 'success' : 'none'} minimal icon="endorsed">
           {s.review.label}
@@ -46,7 +47,14 @@ export function SnapshotView({
       ) : (
         <p className="fr-muted fr-small">The data have not changed since this analysis was saved.</p>
       )}
-      <FindingsResultView findings={s.result} treatmentNames={treatmentNames} />
+      {isModelFindings(s.result) ? (
+        <>
+          <p className="fr-muted fr-small">{s.result.context.modelChoice.why}</p>
+          <ModelFindingsView findings={s.result} treatmentNames={treatmentNames ?? Object.fromEntries(trial.treatments.map((t) => [t.code, t.name]))} />
+        </>
+      ) : (
+        <FindingsResultView findings={s.result} treatmentNames={treatmentNames} />
+      )}
       <ReviewPanel trial={trial} snapshot={s} meId={meId} />
       <CommentThreads trial={trial} analysisId={analysisId} meId={meId} />
     </div>

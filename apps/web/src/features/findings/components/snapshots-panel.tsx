@@ -1,13 +1,13 @@
 import { Button, InputGroup, Tag } from '@blueprintjs/core';
-import type { FindingsQuery, TrialDetail } from '@friable/contracts';
+import type { FindingsModelsQuery, TrialDetail } from '@friable/contracts';
 import { useState } from 'react';
 import { formatDate } from '../../../lib/format';
 import { useAnalyses } from '../../../lib/api/get-analyses';
 import { useSaveAnalysis } from '../api/save-analysis';
 import { DATA_CHANGED_WORDS } from './review-panel';
 
-/** "Save this analysis" (investigators and reviewers) and the list of saved analyses, each opened with its stored numbers. */
-export function SnapshotsPanel({ trial, query, defaultTitle, onOpen }: { trial: TrialDetail; query: FindingsQuery; defaultTitle: string; onOpen: (analysisId: number) => void }) {
+/** "Save this analysis" (investigators and reviewers) — the classical ANOVA or the model on screen, with its options — and the list of saved analyses, each opened with its stored numbers. */
+export function SnapshotsPanel({ trial, query, defaultTitle, onOpen }: { trial: TrialDetail; query: FindingsModelsQuery; defaultTitle: string; onOpen: (analysisId: number) => void }) {
   const analyses = useAnalyses(trial.id);
   const save = useSaveAnalysis(trial.id);
   const [title, setTitle] = useState('');
@@ -47,7 +47,7 @@ export function SnapshotsPanel({ trial, query, defaultTitle, onOpen }: { trial: 
             <li key={a.id}>
               <Button variant="minimal" intent="primary" text={a.title} onClick={() => onOpen(a.id)} aria-label={`Open the saved analysis ${a.title}`} />
               <span className="fr-muted fr-small">
-                {a.measureName} · {a.roundLabel} · {a.scopeLabel} · saved by {a.createdBy ?? 'someone'} on {formatDate(a.createdAt)}
+                {a.measureName} · {a.roundLabel} · {a.scopeLabel} · {a.analysisLabel} · saved by {a.createdBy ?? 'someone'} on {formatDate(a.createdAt)}
                 {a.commentCount > 0 ? ` · ${a.commentCount} comment${a.commentCount === 1 ? '' : 's'}` : ''}
               </span>
               <Tag intent={a.review.expected > 0 && a.review.signed >= a.review.expected ? 'success' : 'none'} minimal icon="endorsed">

@@ -1,5 +1,5 @@
 import { Callout, HTMLSelect } from '@blueprintjs/core';
-import type { TrialSummary } from '@friable/contracts';
+import { isModelFindings, type TrialSummary } from '@friable/contracts';
 import { useQueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
 import { analysisQueryOptions } from '../../../lib/api/get-analysis';
@@ -25,6 +25,10 @@ export function CvPicker({ trials, onPick }: { trials: TrialSummary[]; onPick: (
     try {
       const snapshot = await queryClient.fetchQuery({ ...analysisQueryOptions(trialId, analysisId), staleTime: Infinity });
       const transform = snapshot.choices.transform;
+      if (isModelFindings(snapshot.result)) {
+        setProblem(`“${snapshot.title}” is saved as ${snapshot.analysisLabel.toLowerCase()}, which gives no coefficient of variation: choose a saved classical ANOVA.`);
+        return;
+      }
       onPick({
         // One decimal, as a person would type it.
         cv: Math.round(snapshot.result.summary.cv * 10) / 10,

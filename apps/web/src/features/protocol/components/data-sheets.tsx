@@ -7,7 +7,8 @@ import { useQrCodes } from '../hooks/use-qr-codes';
 import { unitSymbol } from './measure-units';
 import type { TreatmentSwatch } from './treatment-palette';
 import { PlotLegend, PlotMap } from './plot-map';
-import { plotLevelAmountText, SheetLevelAmounts } from './sheet-level-amounts';
+import { plotLevelAmountText } from '../../../lib/level-amount-text';
+import { SheetLevelAmounts } from './sheet-level-amounts';
 
 /**
  * A column of a data sheet that says which plot a row is, beside the plot label, block and

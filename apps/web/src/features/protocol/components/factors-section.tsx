@@ -3,7 +3,7 @@ import type { FactorLevel, LevelAmount, TrialDetail } from '@friable/contracts';
 import { DESIGN_RULES } from '@friable/field';
 import { Fragment, useState } from 'react';
 import { formatDoseShort, formatRate } from '../../../lib/format';
-import { useLevelAmounts } from '../api/get-level-amounts';
+import { useLevelAmounts } from '../../../lib/api/get-level-amounts';
 import { FactorsDialog } from './factors-dialog';
 import { appliedToWords, factorRole, orderedFactors } from './factor-roles';
 

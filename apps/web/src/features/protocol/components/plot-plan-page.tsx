@@ -8,7 +8,7 @@ import { RoundPicker, SitePicker } from '../../../components/site-round-pickers'
 import { EmptyState, ErrorState, LoadingState } from '../../../components/states';
 import { formatArea, formatNumber } from '../../../lib/format';
 import { useAmounts } from '../api/get-amounts';
-import { useLevelAmounts } from '../api/get-level-amounts';
+import { useLevelAmounts } from '../../../lib/api/get-level-amounts';
 import { useSitePlots } from '../../../lib/api/get-site-plots';
 import { SiteSheets } from './data-sheets';
 import { PlotLegend, PlotMap } from './plot-map';

@@ -1,4 +1,4 @@
-import type { LevelAmount, Plot, Site, TrialDetail } from '@friable/contracts';
+import type { LevelAmount, Site, TrialDetail } from '@friable/contracts';
 import { formatArea, formatDoseShort, formatNumber, formatRate } from '../../../lib/format';
 import { orderedFactors } from './factor-roles';
 
@@ -42,13 +42,4 @@ export function SheetLevelAmounts({ trial, site, amounts }: { trial: TrialDetail
       </tbody>
     </table>
   );
-}
-
-/** What goes on one plot of a factorial or split plot, level by level: "C 90 L (23.8 gal) per whole plot · S 60 L (15.9 gal)". */
-export function plotLevelAmountText(trial: TrialDetail, site: Site, amounts: LevelAmount[], plot: Plot): string {
-  const levelIds = trial.treatments.find((t) => t.id === plot.treatmentId)?.factorLevelIds ?? [];
-  const parts = amounts
-    .filter((a) => a.siteId === site.id && levelIds.includes(a.levelId) && a.perUnit !== null)
-    .map((a) => `${a.levelCode} ${formatDoseShort(a.perUnit)}${a.plotsPerUnit > 1 ? ` per ${a.appliedTo}` : ''}`);
-  return parts.length ? parts.join(' · ') : 'nothing to apply';
 }

@@ -4,12 +4,15 @@ import { findUnit } from '@friable/field';
 import { useQueries, useQueryClient } from '@tanstack/react-query';
 import { useEffect, useMemo, useRef } from 'react';
 import { useSearchParams } from 'react-router-dom';
+import { SafetyCautions } from '../../../components/safety-cautions';
 import { RoundPicker, SitePicker } from '../../../components/site-round-pickers';
 import { EmptyState, ErrorState, LoadingState } from '../../../components/states';
 import { formatNumber } from '../../../lib/format';
 import { measureHeading } from '../../../lib/measure-heading';
 import { cellText } from '../../../lib/observation-text';
+import { useLevelAmounts } from '../../../lib/api/get-level-amounts';
 import { observationsQueryOptions, useObservations } from '../../../lib/api/get-observations';
+import { plotLevelAmountText } from '../../../lib/level-amount-text';
 import { useSitePlots } from '../../../lib/api/get-site-plots';
 import { onServiceWorkerControl } from '../../../lib/service-worker';
 import { valueAccess } from '../../../lib/value-access';
@@ -73,6 +76,8 @@ function SiteRoundWalk({
   setParams: ReturnType<typeof useSearchParams>[1];
 }) {
   const plots = useSitePlots(trial.id, site.randomizedAt ? site.id : undefined);
+  // Factorials and split plots: each level's amount per unit it goes on, as the Sheets print it.
+  const levelAmounts = useLevelAmounts(trial.id, trial.factors.length > 0);
   const observations = useObservations(trial.id, site.randomizedAt ? site.id : undefined, round.id);
   const measures = useMemo(() => trial.measures.filter((m) => round.measureIds.includes(m.id)).sort((a, b) => a.position - b.position), [trial.measures, round]);
   const previousRounds = useMemo(() => new Map(measures.map((m) => [m.id, previousRoundFor(rounds, round, m.id)])), [measures, rounds, round]);
@@ -232,6 +237,11 @@ function SiteRoundWalk({
                 </Tag>
               )}
             </div>
+            {trial.factors.length > 0 && levelAmounts.data && (
+              <p className="fr-walk-plot__amounts">
+                <span className="fr-muted">Goes on this plot:</span> {plotLevelAmountText(trial, site, levelAmounts.data, plot)}
+              </p>
+            )}
           </header>
           <WalkNavigation index={index} count={ordered.length} onGo={go} />
           {measures.map((measure) => {
@@ -257,6 +267,7 @@ function SiteRoundWalk({
           })}
           {access.canEdit && <PlotPhoto trialId={trial.id} siteId={site.id} roundId={round.id} plot={plot} queued={queue.photos.find((p) => p.plotId === plot.id)} />}
           <WalkNavigation index={index} count={ordered.length} onGo={go} />
+          {trial.factors.length > 0 && levelAmounts.data && <SafetyCautions />}
         </article>
       )}
     </div>

@@ -1,5 +1,5 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { api, unwrap } from '../../../lib/api-client';
+import { api, unwrap } from '../api-client';
 
 /** GET /api/trials/:trialId/level-amounts — each factor level's material per unit it goes on (a whole plot for a whole-plot factor), per site. */
 export function getLevelAmounts(trialId: number) {
