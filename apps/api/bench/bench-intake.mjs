@@ -33,7 +33,6 @@ const env = appEnvironment({
   PORT: base.BENCH_PORT || '3997',
   NODE_ENV: 'production',
   SCHEDULER_ENABLED: 'false',
-  INTAKE_MAX_BYTES: String(200 * 1_048_576),
   // No mail sink runs here; the receipt fails quietly after the commit, as it would with a relay down.
   SMTP_PORT: '9',
 });

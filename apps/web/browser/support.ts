@@ -30,7 +30,7 @@ export async function signIn(page: Page, email: string, password = demoPassword)
   await page.getByRole('button', { name: 'Sign in' }).click();
 }
 
-/** Calls the API as the signed-in person of this page (its session cookie, with the header writes need). */
+/** Calls the API as the signed-in person of this page (its session cookie, with the header writes need): JSON answers parsed, others as text. */
 export async function api<T>(page: Page, path: string, init?: { method: string; json: unknown }): Promise<T> {
   return page.evaluate(
     async ({ address, request }) => {
@@ -38,7 +38,8 @@ export async function api<T>(page: Page, path: string, init?: { method: string; 
       if (request) headers['Content-Type'] = 'application/json';
       const response = await fetch(`/api${address}`, { method: request?.method ?? 'GET', headers, body: request ? JSON.stringify(request.json) : undefined });
       if (!response.ok) throw new Error(`${address}: ${response.status} ${await response.text()}`);
-      return response.json();
+      // JSON answers as values; files (a CSV template) as their text.
+      return response.headers.get('Content-Type')?.includes('json') ? response.json() : response.text();
     },
     { address: path, request: init },
   ) as Promise<T>;

@@ -1,19 +1,11 @@
 import { EXPORT_CSV_COLUMNS, type Measure, type Observation, type TrialDetail } from '@friable/contracts';
 import ExcelJS from 'exceljs';
 import Papa from 'papaparse';
-import type { Response } from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { Trial } from '../../src/trials/models/trial.model';
 import { TrialMembership } from '../../src/trials/models/trial-membership.model';
 import { buildIntakeTrial, intakePath, upload, type IntakeTrial } from '../intake/intake-support';
-import { bearer, createPerson, createTestApp, tokenFor, type TestApp } from '../support/test-app';
-
-/** Collects a binary answer (supertest leaves unknown types unparsed otherwise). */
-const binary = (response: Response, callback: (error: Error | null, body: Buffer) => void) => {
-  const chunks: Buffer[] = [];
-  response.on('data', (chunk: Buffer) => chunks.push(chunk));
-  response.on('end', () => callback(null, Buffer.concat(chunks)));
-};
+import { bearer, binaryBody, createPerson, createTestApp, tokenFor, type TestApp } from '../support/test-app';
 
 const parseCsv = (text: string) => Papa.parse<Record<string, string>>(text, { header: true, skipEmptyLines: true });
 
@@ -102,7 +94,7 @@ describe('Exports: tidy CSV with its dictionary, and the workbook', () => {
       .set(bearer(built.tokens.investigator))
       .send({ measureId: built.measures.WR, roundId: built.roundId, siteId: built.siteId, title: '=HYPERLINK("x") water' });
     expect(snapshot.status).toBe(201);
-    const response = await t.http.get(`${base}/export.xlsx`).set(bearer(built.tokens.collaborator)).buffer(true).parse(binary);
+    const response = await t.http.get(`${base}/export.xlsx`).set(bearer(built.tokens.collaborator)).buffer(true).parse(binaryBody);
     expect(response.status).toBe(200);
     expect(response.headers['content-type']).toBe('application/vnd.openxmlformats-officedocument.spreadsheetml.sheet');
     const book = new ExcelJS.Workbook();

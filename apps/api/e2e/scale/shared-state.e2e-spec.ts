@@ -10,14 +10,9 @@ import { RemindersService } from '../../src/reminders/reminders.service';
 import { SchedulerLease } from '../../src/reminders/scheduler-lease';
 import { readStorageConfig } from '../../src/storage/storage.config';
 import { buildIntakeTrial, type IntakeTrial } from '../intake/intake-support';
-import { TEST_PASSWORD, bearer, createPerson, createTestApp, type TestApp } from '../support/test-app';
+import { TEST_PASSWORD, bearer, binaryBody, createPerson, createTestApp, type TestApp } from '../support/test-app';
 
 const jpeg = readFileSync(resolve(__dirname, '../photos/fixtures/jpeg-markers.jpg'));
-const binary = (res: NodeJS.ReadableStream, done: (error: Error | null, body: Buffer) => void) => {
-  const parts: Buffer[] = [];
-  res.on('data', (part: Buffer) => parts.push(part));
-  res.on('end', () => done(null, Buffer.concat(parts)));
-};
 
 /** Photos in object storage, reminders elected by a lease: two API instances on one database. */
 describe('Shared state: photos in object storage, one elected scheduler', () => {
@@ -39,7 +34,7 @@ describe('Shared state: photos in object storage, one elected scheduler', () => 
     const path = `/api/trials/${built.trialId}/plots/${built.plots['TG-B1-P01']}/rounds/${built.roundId}/photo`;
     const put = await one.http.put(path).set(bearer(built.tokens.collaborator)).attach('file', jpeg, { filename: 'bed.jpg', contentType: 'image/jpeg' });
     expect(put.status).toBe(200);
-    const back = await two.http.get(path).set(bearer(built.tokens.reviewer)).buffer(true).parse(binary);
+    const back = await two.http.get(path).set(bearer(built.tokens.reviewer)).buffer(true).parse(binaryBody);
     expect(back.status).toBe(200);
     expect(Buffer.compare(back.body as Buffer, jpeg)).toBe(0);
 

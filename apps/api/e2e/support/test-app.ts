@@ -70,6 +70,13 @@ export async function tokenFor(testApp: TestApp, user: Pick<User, 'email'>): Pro
 
 export const bearer = (token: string) => ({ Authorization: `Bearer ${token}` });
 
+/** A supertest parser that keeps a binary answer (a workbook, a photo) as its bytes: `.buffer(true).parse(binaryBody)`. */
+export function binaryBody(response: NodeJS.ReadableStream, done: (error: Error | null, body: Buffer) => void): void {
+  const chunks: Buffer[] = [];
+  response.on('data', (chunk: Buffer) => chunks.push(chunk));
+  response.on('end', () => done(null, Buffer.concat(chunks)));
+}
+
 const versionedPath = /^\/api\/trials\/(\d+)(?:\/(treatments|measures|rounds|sites)\/(\d+))?$/;
 
 /**

@@ -5,9 +5,8 @@ import type { TrialAccessContext } from '../common/auth-user';
 import { AnyTrialMember } from '../common/decorators/access.decorator';
 import { CurrentTrialAccess } from '../common/decorators/current-user.decorator';
 import { ExportsService } from './exports.service';
-import { ApiFileResponse } from '../common/openapi/file-response.decorator';
+import { ApiFileResponse, XLSX_MEDIA_TYPE } from '../common/openapi/file-response.decorator';
 
-const XLSX = 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet';
 
 @ApiTags('exports')
 @Controller('trials/:trialId')
@@ -39,9 +38,9 @@ export class ExportsController {
   @Get('export.xlsx')
   @AnyTrialMember()
   @ApiOperation({ summary: 'Workbook: Protocol, Plot plans, Data, Dictionary and one sheet per saved analysis ("Analysis <id>")' })
-  @ApiFileResponse([XLSX], 'The workbook, saved under the trial code and date.')
+  @ApiFileResponse([XLSX_MEDIA_TYPE], 'The workbook, saved under the trial code and date.')
   async workbook(@CurrentTrialAccess() access: TrialAccessContext) {
     const { filename, bytes } = await this.exports.workbook(access.trialId);
-    return new StreamableFile(bytes, { type: XLSX, length: bytes.length, disposition: `attachment; filename="${filename}"` });
+    return new StreamableFile(bytes, { type: XLSX_MEDIA_TYPE, length: bytes.length, disposition: `attachment; filename="${filename}"` });
   }
 }

@@ -271,9 +271,10 @@ export class IntakeService {
             const result = this.result(false, checked, { created: 0, updated: 0, unchanged: checked.values, listed: [] }, true, this.identicalMessage(resolved, previous!), progress.ticket);
             throw new RollBack({ result, rowsRead: checked.rows, warningsAccepted: 0 });
           }
-          return await this.commit(resolved, user, upload, checked, fresh, row, written, transaction, progress);
+          return await this.commit(resolved, user, upload, checked, fresh, row, written, transaction, progress, plots);
         } finally {
           if (!fresh) await this.bulk.dropStage(transaction);
+          else if (stream) await this.bulk.restoreKeyChecks(transaction);
         }
       });
     } catch (error) {
@@ -338,7 +339,9 @@ export class IntakeService {
     else if (stream) await stream.end();
     if (checked.errors.length > 0) {
       const rows = new Set(checked.errors.map((error) => error.row).filter((row) => row !== null)).size;
-      const where = rows > 0 ? ` in ${plural(rows, 'row', 'rows')}` : '';
+      // Only the first problems are listed; their rows would undercount a file with more.
+      const listedAll = checked.errors.length >= checked.errorCount;
+      const where = !listedAll ? `; the first ${count(rows)} rows with one are listed` : rows > 0 ? ` in ${plural(rows, 'row', 'rows')}` : '';
       throw refusal(`Nothing was written: the file has ${plural(checked.errorCount, 'problem', 'problems')}${where}. Correct them and upload the whole file again.`, checked.errors);
     }
     if (checked.valueWarnings > 0 && !options.dryRun && !options.acceptWarnings) {
@@ -382,13 +385,21 @@ export class IntakeService {
     context: BulkWriteContext,
     transaction: Transaction,
     progress: ImportProgress,
+    plots: SitePlotIndex,
   ): Promise<Outcome> {
     const { trial, site, round } = resolved;
     // The trial is locked for the rest of the transaction only now, so a long file does not hold up others while it is read.
     await this.gate.openForWrite(trial.id, transaction);
     let comparison: BulkComparison;
-    if (fresh) comparison = freshComparison(checked);
-    else {
+    if (fresh) {
+      const measureIds = resolved.measures.map((measure) => measure.id);
+      if (!(await this.bulk.referencesHold(transaction, context, plots.idSummary(), measureIds))) {
+        throw new ConflictException(
+          `Nothing was written: the plot plan or the round of ${site.name}, ${round.label} changed while your file was being read. Look at the plot plan, then send the file again.`,
+        );
+      }
+      comparison = freshComparison(checked);
+    } else {
       await this.bulk.lockStored(transaction, trial.id, site.id, round.id);
       await this.bulk.classify(transaction, context);
       comparison = await this.bulk.compareStaged(transaction, INTAKE_CHANGE_LIST_CAP);

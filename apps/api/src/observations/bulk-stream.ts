@@ -107,6 +107,9 @@ function infileStream(connection: Connection, target: BulkTarget, segmentBytes: 
 
   const open = () => {
     const input = new PassThrough({ highWaterMark: 1_048_576 });
+    // `abort` destroys the input with an error to end the statement; the statement's own rejection reports
+    // it, so the stream's 'error' event needs a listener, else Node takes it as uncaught and stops the API.
+    input.on('error', () => undefined);
     const name = registerLocalInfile(() => input);
     const loading = (connection.query(sql(name), Object.values(target.constants)) as Promise<UpsertResult>).catch((error: unknown) => {
       failure ??= error;

@@ -15,6 +15,13 @@ export interface BulkWriteContext {
   readonly method: BulkLoadMethod;
 }
 
+/** The plots a file was checked against: how many, and their lowest and highest id. */
+export interface PlotIdSummary {
+  readonly count: number;
+  readonly lowest: number;
+  readonly highest: number;
+}
+
 /** A value of the comparison, as the change list shows it (before and after as stored fields). */
 export interface ComparedValue {
   readonly kind: 'new' | 'changed' | 'unchanged';
@@ -114,6 +121,10 @@ export class ObservationBulkStore {
   async openFresh(transaction: Transaction, context: BulkWriteContext): Promise<BulkStream> {
     if (context.uploadId === null) throw new RangeError('openFresh: a dry run writes nothing to observations');
     const at = sqlTime(context.at);
+    // Every reference of these rows is known good (the site's plots, the round's measures, this trial,
+    // round, uploader and upload): checking each row's five keys would cost a quarter of the load, so the
+    // keys are checked once per upload by `referencesHold` under the trial's lock instead.
+    await connectionOf(transaction).query('SET SESSION foreign_key_checks = 0');
     return openBulkStream(
       transaction,
       {
@@ -232,6 +243,36 @@ export class ObservationBulkStore {
       [context.trialId, context.roundId, context.uploadId, context.userId, at, at, at],
     );
     await this.recordNewHistory(transaction, context);
+  }
+
+  /** Turns the per-row key checks back on (after `openFresh`; the connection goes back to the pool afterwards). */
+  async restoreKeyChecks(transaction: Transaction): Promise<void> {
+    await connectionOf(transaction).query('SET SESSION foreign_key_checks = 1');
+  }
+
+  /**
+   * Whether the rows of a fresh upload still point at existing records, checked once under the
+   * trial's lock (which every change to plots, rounds and measures also takes, so none can follow):
+   * the site has the very plots the file was checked against (same count, lowest and highest id:
+   * a re-randomized site has new ids), and the round, its measures and the uploader exist.
+   */
+  async referencesHold(transaction: Transaction, context: BulkWriteContext, plots: PlotIdSummary, measureIds: readonly number[]): Promise<boolean> {
+    const [row] = (await connectionOf(transaction).query(
+      `SELECT (SELECT COUNT(*) FROM plots WHERE site_id = ?) AS plots, (SELECT MIN(id) FROM plots WHERE site_id = ?) AS lowest,
+              (SELECT MAX(id) FROM plots WHERE site_id = ?) AS highest,
+              (SELECT COUNT(*) FROM assessment_rounds WHERE id = ? AND trial_id = ?) AS rounds,
+              (SELECT COUNT(*) FROM measures WHERE id IN (?) AND trial_id = ?) AS measures,
+              (SELECT COUNT(*) FROM users WHERE id = ?) AS users`,
+      [context.siteId, context.siteId, context.siteId, context.roundId, context.trialId, measureIds.length ? measureIds : [0], context.trialId, context.userId ?? 0],
+    )) as Array<Record<'plots' | 'lowest' | 'highest' | 'rounds' | 'measures' | 'users', number | bigint | null>>;
+    return (
+      Number(row!.plots) === plots.count &&
+      Number(row!.lowest) === plots.lowest &&
+      Number(row!.highest) === plots.highest &&
+      Number(row!.rounds) === 1 &&
+      Number(row!.measures) === new Set(measureIds).size &&
+      (context.userId === null || Number(row!.users) === 1)
+    );
   }
 
   /** Drops the staging table (it lives on the pooled connection, which outlives the transaction). */

@@ -1,4 +1,4 @@
-import { Controller, Get, Header, Param, ParseIntPipe, Query, Res } from '@nestjs/common';
+import { Controller, Get, Header, Param, ParseIntPipe, Query, Res, StreamableFile } from '@nestjs/common';
 import { ApiConflictResponse, ApiOkResponse, ApiTags } from '@nestjs/swagger';
 import type { Response } from 'express';
 import type { TrialAccessContext } from '../common/auth-user';
@@ -8,7 +8,7 @@ import { AmountsQueryDto, PlotsQueryDto } from './dto/plots-query.dto';
 import { PlotsService } from './plots.service';
 import { PlotDto } from './dto/plot.dto';
 import { LevelAmountDto, PlotAmountDto } from './dto/plot-amount.dto';
-import { ApiFileResponse } from '../common/openapi/file-response.decorator';
+import { ApiFileResponse, XLSX_MEDIA_TYPE } from '../common/openapi/file-response.decorator';
 
 @ApiTags('plot plans')
 @Controller('trials/:trialId')
@@ -54,5 +54,17 @@ export class PlotsController {
     const { filename, csv } = await this.plots.template(access.trialId, siteId, roundId);
     response.setHeader('Content-Disposition', `attachment; filename="${filename}"`);
     return csv;
+  }
+
+  @Get('sites/:siteId/rounds/:roundId/template.xlsx')
+  @AnyTrialMember()
+  @ApiFileResponse(
+    [XLSX_MEDIA_TYPE],
+    "The same data sheet as a workbook: the plots' label, block and treatment locked (sheet protection, no password), each measure's cells checked as they are typed (its limits, NA, >cut-off).",
+  )
+  @ApiConflictResponse({ description: 'The site is not randomized yet.' })
+  async templateWorkbook(@CurrentTrialAccess() access: TrialAccessContext, @Param('siteId', ParseIntPipe) siteId: number, @Param('roundId', ParseIntPipe) roundId: number): Promise<StreamableFile> {
+    const { filename, bytes } = await this.plots.templateWorkbook(access.trialId, siteId, roundId);
+    return new StreamableFile(bytes, { type: XLSX_MEDIA_TYPE, length: bytes.length, disposition: `attachment; filename="${filename}"` });
   }
 }

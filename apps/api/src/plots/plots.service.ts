@@ -11,7 +11,9 @@ import { SitesService } from '../sites/sites.service';
 import { TreatmentRow } from '../treatments/models/treatment.model';
 import { TreatmentsService } from '../treatments/treatments.service';
 import { Trial } from '../trials/models/trial.model';
+import { presentMeasure } from '../measures/measure.presenter';
 import { PlotRow } from './models/plot.model';
+import { templateWorkbook, type TemplateTable } from './template-workbook';
 import { levelDoseInput, plotAmount, unitAmount } from './plot-amount';
 
 /** A split plot's whole-plot label: its plot label up to the whole plot (`HL-B2-W3-S2` → `HL-B2-W3`); null for other designs. */
@@ -74,6 +76,19 @@ export class PlotsService {
 
   /** The data-entry CSV of one site and round: a row per plot, a column per measure of the round, then notes. */
   async template(trialId: number, siteId: number, roundId: number): Promise<{ filename: string; csv: string }> {
+    const { stem, table } = await this.templateTable(trialId, siteId, roundId);
+    const fields = [...table.fixedHeaders, ...table.measures.map((entry) => entry.header), 'notes'];
+    const data = table.fixedRows.map((cells) => [...cells.map(String), ...table.measures.map(() => ''), '']);
+    return { filename: `${stem}.csv`, csv: `${Papa.unparse({ fields, data }, { newline: '\r\n' })}\r\n` };
+  }
+
+  /** The same data sheet as a workbook: the plots' columns locked, each measure's cells checked as they are typed. */
+  async templateWorkbook(trialId: number, siteId: number, roundId: number): Promise<{ filename: string; bytes: Buffer }> {
+    const { stem, table } = await this.templateTable(trialId, siteId, roundId);
+    return { filename: `${stem}.xlsx`, bytes: await templateWorkbook(table) };
+  }
+
+  private async templateTable(trialId: number, siteId: number, roundId: number): Promise<{ stem: string; table: TemplateTable }> {
     const trial = await this.trials.findByPk(trialId);
     const site = await this.sites.findOne({ where: { id: siteId, trialId } });
     if (!trial || !site) throw new NotFoundException('No such site in this trial.');
@@ -83,11 +98,16 @@ export class PlotsService {
     if (!plots.length) throw new ConflictException(`Site ${site.name} is not randomized yet; randomize it to get its data sheet.`);
     const measures = [...(round.measures ?? [])].sort((a, b) => a.position - b.position || a.id - b.id);
     const units = plotUnitColumns(plots);
-    const fields = ['plot label', 'block', ...units.map((unit) => unit.header), 'treatment code', ...measures.map(measureHeader), 'notes'];
-    const data = plots.map((p) => [p.label, String(p.block), ...units.map((unit) => String(p[unit.key])), p.treatmentCode, ...measures.map(() => ''), '']);
-    const csv = `${Papa.unparse({ fields, data }, { newline: '\r\n' })}\r\n`;
     const slug = (text: string) => text.replace(/[^A-Za-z0-9]+/g, '-').replace(/^-|-$/g, '');
-    return { filename: `${slug(trial.code)}-${site.labelPrefix}-${slug(round.label)}.csv`, csv };
+    return {
+      stem: `${slug(trial.code)}-${site.labelPrefix}-${slug(round.label)}`,
+      table: {
+        sheetName: round.label,
+        fixedHeaders: ['plot label', 'block', ...units.map((unit) => unit.header), 'treatment code'],
+        fixedRows: plots.map((p) => [p.label, p.block, ...units.map((unit) => p[unit.key] ?? ''), p.treatmentCode]),
+        measures: measures.map((measure) => ({ measure: presentMeasure(measure), header: measureHeader(measure) })),
+      },
+    };
   }
 
   /**

@@ -48,13 +48,14 @@ export async function readRequest(input: RequestInfo | URL, init?: RequestInit):
 export const jsonReply = (status: number, body: unknown) =>
   status === 204 ? new Response(null, { status }) : new Response(JSON.stringify(body), { status, headers: { 'Content-Type': 'application/json' } });
 
-/** Answers the app's fetch calls by path ("GET /api/trials"), recording what was asked. */
-export function mockApi(replies: Record<string, Reply>) {
+/** Answers the app's fetch calls by path ("GET /api/trials"), recording what was asked; a function answers each call anew. */
+export function mockApi(replies: Record<string, Reply | (() => Reply)>) {
   const calls: SeenRequest[] = [];
   const fetchMock = vi.fn(async (input: RequestInfo | URL, init?: RequestInit) => {
     const seen = await readRequest(input, init);
     calls.push(seen);
-    const reply = replies[`${seen.method} ${seen.path}`];
+    const entry = replies[`${seen.method} ${seen.path}`];
+    const reply = typeof entry === 'function' ? entry() : entry;
     if (!reply) return jsonReply(404, { statusCode: 404, message: `no mock for ${seen.method} ${seen.path}` });
     return jsonReply(reply.status, reply.body);
   });

@@ -10,6 +10,8 @@ export type DecimalTextReading =
 
 const pointNumber = /^([+-]?)(\d*)(?:\.(\d*))?$/;
 const commaNumber = /^([+-]?)(\d*)(?:,(\d*))?$/;
+const plainPointNumber = /^(?:0|[1-9]\d{0,7})(?:\.(\d{1,7}))?$/;
+const plainCommaNumber = /^(?:0|[1-9]\d{0,7})(?:,(\d{1,7}))?$/;
 const exponentNumber = /^[+-]?(?:\d+\.?\d*|\.\d+)[eE][+-]?\d+$/;
 /** Whole cells that are plainly a number with a decimal point or a decimal comma (used to detect the file's convention). */
 export const POINT_DECIMAL_CELL = /^(?:>=|[>≥])?\s*[+-]?\d*\.\d+$/;
@@ -31,6 +33,10 @@ export const COMMA_DECIMAL_CELL = /^(?:>=|[>≥])?\s*[+-]?\d*,\d+$/;
  */
 export function readDecimalText(raw: string, decimalComma: boolean): DecimalTextReading {
   const text = raw.trim();
+  // Most cells are plain decimals already in canonical form: no sign, no leading zero, at most 15 digits,
+  // so far inside NUMBER_BOUNDS that the general checks below cannot refuse or change them.
+  const plain = (decimalComma ? plainCommaNumber : plainPointNumber).exec(text);
+  if (plain) return { ok: true, text: decimalComma ? text.replace(',', '.') : text, decimals: plain[1]?.length ?? 0 };
   const bound = checkNumberText(text, decimalComma);
   if (!bound.ok) return Object.freeze({ ok: false, problem: bound.problem });
   const match = (decimalComma ? commaNumber : pointNumber).exec(text);

@@ -32,6 +32,9 @@ const missingTokens = new Set(['', 'na', 'n/a', '-', '–', '—']);
 const censoredPrefix = /^(?:>=|>|≥)\s*/;
 const leftCensoredPrefix = /^(?:<=|<|≤)/;
 
+const BLANK: CellValue = Object.freeze({ kind: 'missing', blank: true });
+const NOT_RECORDED: CellValue = Object.freeze({ kind: 'missing', blank: false });
+const NO_WARNINGS: readonly string[] = Object.freeze([]);
 const freezeError = (message: string): CellValue => Object.freeze({ kind: 'error', message });
 
 function notANumber(typed: string, problem: DecimalTextProblem): string {
@@ -73,34 +76,50 @@ function isShortDecimal(text: string): boolean {
   return digits > 0 && digits <= 15;
 }
 
+/** A short decimal as a double: one small object per cell, compared without decimal objects. */
+class ShortDecimal implements Comparable {
+  constructor(private readonly number: number) {}
+
+  lt(other: Decimal.Value): boolean {
+    return this.number < Number(other);
+  }
+
+  gt(other: Decimal.Value): boolean {
+    return this.number > Number(other);
+  }
+
+  isInteger(): boolean {
+    return Number.isInteger(this.number);
+  }
+
+  isNegative(): boolean {
+    return this.number < 0 || Object.is(this.number, -0);
+  }
+}
+
 /**
  * The value for the checks: a double when the text has at most 15 digits (every comparison with
  * a limit is then exact, and a million cells cost no decimal objects), else a Decimal.
  */
 function comparableValue(valueText: string): Comparable {
-  if (!isShortDecimal(valueText)) return new MeasurementDecimal(valueText);
-  const number = Number(valueText);
-  return {
-    lt: (other) => number < Number(other),
-    gt: (other) => number > Number(other),
-    isInteger: () => Number.isInteger(number),
-    isNegative: () => number < 0 || Object.is(number, -0),
-  } as Comparable;
+  return isShortDecimal(valueText) ? new ShortDecimal(Number(valueText)) : new MeasurementDecimal(valueText);
 }
 
 /** Whole-number and scale rules of counts and scores. */
-function kindProblem(value: Comparable, shown: string, measure: Measure): string | null {
+function kindProblem(value: Comparable, shown: () => string, measure: Measure): string | null {
   if (measure.kind === 'count' && (!value.isInteger() || value.isNegative())) {
-    return `${shown} is not a count: ${measure.name} must be a whole number, 0 or more.`;
+    return `${shown()} is not a count: ${measure.name} must be a whole number, 0 or more.`;
   }
   if (measure.kind !== 'score') return null;
   const scale = measure.scaleMin !== null && measure.scaleMax !== null ? ` on the ${measure.scaleMin} to ${measure.scaleMax} scale` : '';
-  if (!value.isInteger()) return `${shown} is not a score: ${measure.name} is a whole number${scale}.`;
+  if (!value.isInteger()) return `${shown()} is not a score: ${measure.name} is a whole number${scale}.`;
   if ((measure.scaleMin !== null && value.lt(measure.scaleMin)) || (measure.scaleMax !== null && value.gt(measure.scaleMax))) {
-    return `${shown} is not on the scale: ${measure.name} is scored${scale}.`;
+    return `${shown()} is not on the scale: ${measure.name} is scored${scale}.`;
   }
   return null;
 }
+
+const NO_LIMIT_PROBLEM = Object.freeze({ error: null, warning: null });
 
 function rangeText(low: number | null, high: number | null, suffix: string): string {
   if (low !== null && high !== null) return `${low} to ${high}${suffix}`;
@@ -112,22 +131,22 @@ function outside(value: Comparable, low: number | null, high: number | null): bo
 }
 
 /** Cut-off, hard limits (errors) and the usual range (a warning). */
-function limitProblems(value: Comparable, censored: boolean, shown: string, measure: Measure): { error: string | null; warning: string | null } {
+function limitProblems(value: Comparable, censored: boolean, shown: () => string, measure: Measure): { error: string | null; warning: string | null } {
   const suffix = unitSuffix(measure.unit);
   if (measure.kind === 'time-with-cutoff' && measure.cutoff !== null && value.gt(String(measure.cutoff))) {
     const error = censored
-      ? `${shown} is beyond the ${measure.cutoff}${suffix} cut-off: a plot not drained by the cut-off is written >${measure.cutoff}.`
-      : `${shown} is above the ${measure.cutoff}${suffix} cut-off: write >${measure.cutoff} if the plot had not drained.`;
+      ? `${shown()} is beyond the ${measure.cutoff}${suffix} cut-off: a plot not drained by the cut-off is written >${measure.cutoff}.`
+      : `${shown()} is above the ${measure.cutoff}${suffix} cut-off: write >${measure.cutoff} if the plot had not drained.`;
     return { error, warning: null };
   }
   if (outside(value, measure.hardMin, measure.hardMax)) {
-    return { error: `${shown} is impossible for ${measure.name}, which must be ${rangeText(measure.hardMin, measure.hardMax, suffix)}.`, warning: null };
+    return { error: `${shown()} is impossible for ${measure.name}, which must be ${rangeText(measure.hardMin, measure.hardMax, suffix)}.`, warning: null };
   }
   if (outside(value, measure.plausibleMin, measure.plausibleMax)) {
     const usual = rangeText(measure.plausibleMin, measure.plausibleMax, suffix);
-    return { error: null, warning: `${shown} is outside the usual range of ${measure.name} (${usual}): check it, then accept the warning to keep it.` };
+    return { error: null, warning: `${shown()} is outside the usual range of ${measure.name} (${usual}): check it, then accept the warning to keep it.` };
   }
-  return { error: null, warning: null };
+  return NO_LIMIT_PROBLEM;
 }
 
 /**
@@ -149,7 +168,7 @@ function limitProblems(value: Comparable, censored: boolean, shown: string, meas
  */
 export function parseCellValue(text: string, measure: Measure, { decimalComma, headerUnit = null }: CellOptions): CellValue {
   const typed = text.trim();
-  if (missingTokens.has(typed.toLowerCase())) return Object.freeze({ kind: 'missing', blank: typed === '' });
+  if (typed.length <= 3 && missingTokens.has(typed.toLowerCase())) return typed === '' ? BLANK : NOT_RECORDED;
   if (leftCensoredPrefix.test(typed)) {
     return freezeError(`"${typed}": Friable records only values known to be above a bound (>${typed.replace(leftCensoredPrefix, '').trim()} is not the same); write the measured value or NA.`);
   }
@@ -164,11 +183,13 @@ export function parseCellValue(text: string, measure: Measure, { decimalComma, h
   const converted = headerUnit !== null && headerUnit !== measure.unit;
   const valueText = converted ? convertDecimalText(reading.text, headerUnit, measure.unit) : reading.text;
   const value = comparableValue(valueText);
-  const shown = `${censored ? '>' : ''}${valueText}${unitSuffix(measure.unit)}${converted ? ` (${typed}${unitSuffix(headerUnit)})` : ''}`;
+  // Only a message shows the value, so its text is made only for one.
+  const shown = () => `${censored ? '>' : ''}${valueText}${unitSuffix(measure.unit)}${converted ? ` (${typed}${unitSuffix(headerUnit)})` : ''}`;
   const kindError = kindProblem(value, shown, measure);
   if (kindError) return freezeError(kindError);
   const limits = limitProblems(value, censored, shown, measure);
   if (limits.error) return freezeError(limits.error);
+  if (limits.warning === null && (converted || reading.decimals <= measure.decimals)) return { kind: 'value', valueText, censored, warnings: NO_WARNINGS };
   const warnings = limits.warning ? [limits.warning] : [];
   if (!converted && reading.decimals > measure.decimals) {
     warnings.push(`${typed} has ${reading.decimals} decimal${reading.decimals === 1 ? '' : 's'}; ${measure.name} is usually recorded to ${measure.decimals}. It is kept as typed.`);

@@ -107,6 +107,17 @@ export class SitePlotIndex {
     return this.ids[position]!;
   }
 
+  /** How many plots, and their lowest and highest id (a re-randomized site has other ids). */
+  idSummary(): { count: number; lowest: number; highest: number } {
+    let lowest = Number.POSITIVE_INFINITY;
+    let highest = 0;
+    for (let position = 0; position < this.count; position += 1) {
+      lowest = Math.min(lowest, this.ids[position]!);
+      highest = Math.max(highest, this.ids[position]!);
+    }
+    return { count: this.count, lowest: this.count ? lowest : 0, highest };
+  }
+
   /** The label as the plot plan writes it. */
   label(position: number): string {
     return this.spellings.get(position) ?? this.keys.slice(this.offsets[position], this.offsets[position + 1]);

@@ -4,6 +4,8 @@ import { ApiError, problemOf, UNREACHABLE_MESSAGE } from '../../../lib/api-clien
 import type { paths } from '../../../lib/api-schema';
 import { trialQueryOptions } from '../../../lib/api/get-trial';
 import { session } from '../../../lib/session';
+import { intakeColumnsQueryOptions } from './get-intake-columns';
+import { intakeImportsQueryOptions } from './get-intake-imports';
 
 type IntakeRoute = paths['/api/trials/{trialId}/sites/{siteId}/rounds/{roundId}/intake']['post'];
 /** The 200 answer of the intake (also for a dry run), as the API documents it. */
@@ -23,6 +25,13 @@ export interface IntakeSubmission {
   dryRun: boolean;
   /** Share of the file sent so far, 0 to 1, from the browser's own upload progress events. */
   onProgress?: (fraction: number) => void;
+  /** This upload's name, to follow the server's stages at GET …/intake-imports while it runs. */
+  ticket?: string;
+}
+
+/** A fresh upload name: 32 hexadecimal digits (getRandomValues works on plain http too, unlike randomUUID). */
+export function newTicket(): string {
+  return Array.from(crypto.getRandomValues(new Uint8Array(16)), (byte) => byte.toString(16).padStart(2, '0')).join('');
 }
 
 /** The server's refusal of a file: nothing was written; `problems` name the row and column of each. */
@@ -48,11 +57,13 @@ function readBody(request: XMLHttpRequest): unknown {
  * it carries the session the same way (lib/session.ts).
  * Rejects with IntakeRefusedError (422, every problem listed) or ApiError (any other failure).
  */
-export function submitIntake({ trialId, siteId, roundId, file, mapping, acceptWarnings, dryRun, onProgress }: IntakeSubmission): Promise<IntakeAnswer> {
+export function submitIntake({ trialId, siteId, roundId, file, mapping, acceptWarnings, dryRun, onProgress, ticket }: IntakeSubmission): Promise<IntakeAnswer> {
   const form = new FormData();
-  form.append('file', file, file.name);
+  // The fields go before the file, so the server has them while the file is still arriving.
+  if (ticket) form.append('ticket', ticket);
   if (Object.keys(mapping).length > 0) form.append('mapping', JSON.stringify(mapping));
   form.append('acceptWarnings', acceptWarnings ? 'true' : 'false');
+  form.append('file', file, file.name);
   return new Promise((resolve, reject) => {
     const request = new XMLHttpRequest();
     request.open('POST', `/api/trials/${trialId}/sites/${siteId}/rounds/${roundId}/intake${dryRun ? '?dryRun=true' : ''}`);
@@ -77,13 +88,21 @@ export function submitIntake({ trialId, siteId, roundId, file, mapping, acceptWa
   });
 }
 
-/** A dry run or a commit; a commit loads the trial's observations (and the site's "has data" flag) again. */
+/**
+ * A dry run or a commit; a commit loads the trial's observations (and the site's "has data" flag) and
+ * its remembered column choices again. Either way the site and round's list of uploads is asked again.
+ */
 export function useSubmitIntake(trialId: number) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: submitIntake,
+    onSettled: async (_result, _error, submission) => {
+      await queryClient.invalidateQueries({ queryKey: intakeImportsQueryOptions(trialId, submission.siteId, submission.roundId).queryKey });
+    },
     onSuccess: async (result) => {
-      if (!result.dryRun) await queryClient.invalidateQueries({ queryKey: trialQueryOptions(trialId).queryKey });
+      if (result.dryRun) return;
+      await queryClient.invalidateQueries({ queryKey: trialQueryOptions(trialId).queryKey });
+      await queryClient.invalidateQueries({ queryKey: intakeColumnsQueryOptions(trialId).queryKey });
     },
   });
 }

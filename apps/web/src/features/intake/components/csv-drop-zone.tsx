@@ -1,7 +1,7 @@
 import { Icon } from '@blueprintjs/core';
 import { useRef, useState, type DragEvent } from 'react';
 
-/** A place to drop a CSV file, or to pick one with the file chooser. */
+/** A place to drop a CSV file or workbook, or to pick one with the file chooser. */
 export function CsvDropZone({ onFile, disabled }: { onFile: (file: File) => void; disabled?: boolean }) {
   const input = useRef<HTMLInputElement>(null);
   const [over, setOver] = useState(false);
@@ -23,11 +23,11 @@ export function CsvDropZone({ onFile, disabled }: { onFile: (file: File) => void
     >
       <Icon icon="cloud-upload" size={28} />
       <label className="fr-drop-zone__label">
-        <span>Drop the CSV file here, or choose it:</span>
+        <span>Drop the CSV file or .xlsx workbook here, or choose it:</span>
         <input
           ref={input}
           type="file"
-          accept=".csv,.tsv,.txt,text/csv,text/plain"
+          accept=".csv,.tsv,.txt,.xlsx,text/csv,text/plain,application/vnd.openxmlformats-officedocument.spreadsheetml.sheet"
           aria-label="CSV file"
           disabled={disabled}
           onChange={(event) => {

@@ -33,14 +33,23 @@ export function measureHeading(measure: Pick<Measure, 'name' | 'unit'>): string 
 /**
  * Guess columns — what each header of a file most likely holds: the plot label, block, treatment,
  * notes, missing reason, a measure of the round (by name or code, a unit in brackets allowed), or
- * nothing. The preview shows the guess; the person may change it, and only changes are sent.
+ * nothing; a header the trial's uploads were told before (`remembered`) keeps that choice. The preview shows the guess; the person may change it, and only changes are sent.
  * Throws nothing. Example: `guessColumns(['plot label', 'DRAIN (min)'], [drain])` → `['plotLabel', 'DRAIN']`.
  */
-export function guessColumns(headers: readonly string[], measures: readonly Measure[]): ColumnChoice[] {
+export function guessColumns(headers: readonly string[], measures: readonly Measure[], remembered: Readonly<Record<string, string | null>> = {}): ColumnChoice[] {
   const taken = new Set<string>();
   return headers.map((header) => {
     const key = normalise(header);
     if (key === '') return null;
+    // What the trial's earlier uploads chose for this very header comes first (the server reads it the same way).
+    if (Object.hasOwn(remembered, header.trim())) {
+      const choice = remembered[header.trim()] ?? null;
+      const known = choice === null || choice in columnRoleLabels || measures.some((measure) => measure.code === choice);
+      if (known && (choice === null || !taken.has(choice))) {
+        if (choice !== null) taken.add(choice);
+        return choice;
+      }
+    }
     const role = Object.keys(roleSpellings).find((candidate) => roleSpellings[candidate]!.includes(key));
     const measure = role ? undefined : (measureNamed(measures, key) ?? measureNamed(measures, normalise(parseUnitFromHeader(header).name)));
     const choice = role ?? measure?.code ?? null;

@@ -174,4 +174,43 @@ describe('IntakePage', () => {
     renderWithApp(<IntakePage trial={activeTrial({ status: 'locked' })} />);
     expect(screen.getByText('This trial is locked for analysis; the investigator can unlock it.')).toBeInTheDocument();
   });
+
+  it('follows an upload already running on the server for the site and round (after a reload), stage by stage with its count, to its end', async () => {
+    const running = {
+      ticket: 'earlier-upload-0001',
+      siteId: 31,
+      roundId: 21,
+      fileName: 'hollow-lane-week-2.csv',
+      sizeBytes: 2_000_000,
+      format: 'csv',
+      dryRun: false,
+      stage: 'checking',
+      rowsChecked: 12_000,
+      bytesRead: 500_000,
+      valuesTotal: null,
+      valuesDone: 0,
+      message: 'Checking every row…',
+      userName: 'Ada Field',
+      startedAt: '2026-12-02T10:00:00.000Z',
+      updatedAt: '2026-12-02T10:00:01.000Z',
+      finishedAt: null,
+      result: null,
+      refusal: null,
+    };
+    const imports = 'GET /api/trials/3/intake-imports?siteId=31&roundId=21';
+    const replies = [
+      [running],
+      [{ ...running, stage: 'writing', rowsChecked: 40_000, valuesTotal: 120_000, valuesDone: 60_000 }],
+      [{ ...running, stage: 'done', rowsChecked: 40_000, valuesDone: 120_000, finishedAt: '2026-12-02T10:00:09.000Z', message: 'Saved hollow-lane-week-2.csv for Hollow Lane, Week 2: 120,000 new values.' }],
+    ];
+    const calls = mockApi({ 'GET /api/auth/me': { status: 200, body: person }, 'GET /api/trials/3/intake-columns': { status: 200, body: [] }, [imports]: () => ({ status: 200, body: replies.length > 1 ? replies.shift() : replies[0] }) });
+    renderWithApp(<IntakePage trial={activeTrial()} />);
+    const server = await screen.findByRole('status', { name: 'hollow-lane-week-2.csv from Ada Field' });
+    expect(within(server).getByText('Checking rows: 12,000 rows checked so far')).toBeInTheDocument();
+    expect(within(server).getByText('Checking rows')).toHaveAttribute('aria-current', 'step');
+    expect(await screen.findByText('Writing 120,000 values and their history', {}, { timeout: 3000 })).toBeInTheDocument();
+    expect(screen.getByText('Writing')).toHaveAttribute('aria-current', 'step');
+    expect(await screen.findByText('Saved hollow-lane-week-2.csv for Hollow Lane, Week 2: 120,000 new values.', {}, { timeout: 3000 })).toBeInTheDocument();
+    expect(calls.filter((call) => call.path === '/api/trials/3/intake-imports?siteId=31&roundId=21').length).toBeGreaterThanOrEqual(3);
+  });
 });

@@ -1,27 +1,52 @@
 import { Button, Callout, Checkbox, ProgressBar, Section, SectionCard } from '@blueprintjs/core';
 import type { IntakeResult, Measure, TrialDetail } from '@friable/contracts';
-import { useMemo, useState } from 'react';
+import { useEffect, useMemo, useState } from 'react';
 import { Link, useSearchParams } from 'react-router-dom';
 import { IdPicker } from '../../../components/id-picker';
 import { SafetyCautions } from '../../../components/safety-cautions';
 import { paths } from '../../../config/paths';
 import { formatDate, formatNumber } from '../../../lib/format';
-import { IntakeRefusedError, useSubmitIntake, type ColumnChoice } from '../api/submit-intake';
+import { useRememberedColumns } from '../api/get-intake-columns';
+import { useIntakeImports } from '../api/get-intake-imports';
+import { IntakeRefusedError, newTicket, useSubmitIntake, type ColumnChoice } from '../api/submit-intake';
 import { ColumnMapping } from './column-mapping';
 import { CsvDropZone } from './csv-drop-zone';
 import { guessColumns, mappingOverrides } from './guess-columns';
 import { intakeAccess } from './intake-access';
+import { ImportProgress } from './import-progress';
 import { IntakeChanges } from './intake-changes';
 import { IntakeProblems } from './intake-problems';
 import { readFileText, readPreview, type CsvPreview } from './read-preview';
+
+/** The head of a file the browser reads for the preview; the whole file goes to the server, which reads it as a stream. */
+const PREVIEW_BYTES = 512 * 1024;
+const isWorkbook = (file: File) => /\.xlsx$/i.test(file.name);
 
 interface ChosenFile {
   file: File;
   preview: CsvPreview;
   guessed: ColumnChoice[];
+  /** Only the file's head was read for the preview (its rows are not all counted). */
+  partial: boolean;
 }
 
-/** Intake: pick site and round, drop a CSV, check the preview and columns, try it (dry run), then save it. */
+/** The ticket of this tab's upload for a site and round that had not answered when the page was left. */
+function readSent(key: string): string[] {
+  try {
+    const ticket = window.sessionStorage.getItem(key);
+    return ticket ? [ticket] : [];
+  } catch {
+    return [];
+  }
+}
+
+const fileSize = (bytes: number) => (bytes < 1_048_576 ? `${formatNumber(bytes / 1024, 0)} kB` : `${formatNumber(bytes / 1_048_576, 1)} MB`);
+
+/**
+ * Intake: pick site and round, drop a CSV file or workbook, check the preview and columns, try it (dry
+ * run), then save it. While the server works on it, its stages are shown with their counts; uploads
+ * already running for the site and round (sent before a reload, or by someone else) are followed too.
+ */
 export function IntakePage({ trial }: { trial: TrialDetail }) {
   const access = intakeAccess(trial);
   const [params, setParams] = useSearchParams();
@@ -35,8 +60,26 @@ export function IntakePage({ trial }: { trial: TrialDetail }) {
   const [progress, setProgress] = useState<number | null>(null);
   const [checked, setChecked] = useState<IntakeResult | null>(null);
   const [saved, setSaved] = useState<IntakeResult | null>(null);
+  const [ticket, setTicket] = useState<string | null>(null);
   const submit = useSubmitIntake(trial.id);
   const measures = measuresOf(round?.id);
+  const remembered = useRememberedColumns(trial.id);
+  const imports = useIntakeImports(trial.id, site?.id, round?.id, submit.isPending);
+  const mine = imports.data?.find((record) => record.ticket === ticket);
+  // This page's last upload, kept for the browser tab so that after a reload it is followed (or its end shown).
+  const sentKey = `friable.intake.${trial.id}.${site?.id}.${round?.id}`;
+  // Uploads of others, or of this page before a reload, that were seen running: followed to their end.
+  const [watched, setWatched] = useState<ReadonlySet<string>>(() => new Set(readSent(sentKey)));
+  useEffect(() => {
+    const running = (imports.data ?? []).filter((record) => record.finishedAt === null && record.ticket !== ticket && !watched.has(record.ticket));
+    if (running.length) setWatched(new Set([...watched, ...running.map((record) => record.ticket)]));
+  }, [imports.data, ticket, watched]);
+  const followed = (imports.data ?? []).filter((record) => record.ticket !== ticket && watched.has(record.ticket));
+  useEffect(() => {
+    // Shown now that it has ended: a later reload need not show it again.
+    const [sent] = readSent(sentKey);
+    if (sent && sent !== ticket && imports.data?.some((record) => record.ticket === sent && record.finishedAt !== null)) window.sessionStorage.removeItem(sentKey);
+  }, [imports.data, sentKey, ticket]);
 
   function startOver() {
     setChecked(null);
@@ -55,22 +98,35 @@ export function IntakePage({ trial }: { trial: TrialDetail }) {
     setParams({ site: String(next.site ?? site?.id ?? ''), round: String(next.round ?? round?.id ?? '') }, { replace: true });
     startOver();
     if (chosen) {
-      const guessed = guessColumns(chosen.preview.headers, measuresOf(next.round ?? round?.id));
+      const guessed = guessColumns(chosen.preview.headers, measuresOf(next.round ?? round?.id), remembered);
       setChosen({ ...chosen, guessed });
       setChoices(guessed);
     }
   }
 
   async function chooseFile(file: File) {
-    const preview = readPreview(await readFileText(file));
-    const guessed = guessColumns(preview.headers, measures);
-    setChosen({ file, preview, guessed });
+    if (isWorkbook(file)) {
+      // A workbook is read on the server only: its sheet, header row and columns are found there.
+      setChosen({ file, preview: { headers: [], rows: [], problem: null }, guessed: [], partial: true });
+      setChoices([]);
+      startOver();
+      return;
+    }
+    const partial = file.size > PREVIEW_BYTES;
+    const text = await readFileText(partial ? file.slice(0, PREVIEW_BYTES) : file);
+    // A head cut mid-line would end in half a row: the preview stops at the last whole line.
+    const preview = readPreview(partial ? text.slice(0, Math.max(0, text.lastIndexOf('\n'))) : text);
+    const guessed = guessColumns(preview.headers, measures, remembered);
+    setChosen({ file, preview, guessed, partial });
     setChoices(guessed);
     startOver();
   }
 
   function send(dryRun: boolean) {
     if (!chosen || !site || !round) return;
+    const next = newTicket();
+    setTicket(next);
+    window.sessionStorage.setItem(sentKey, next);
     setProgress(0);
     submit.mutate(
       {
@@ -82,10 +138,14 @@ export function IntakePage({ trial }: { trial: TrialDetail }) {
         acceptWarnings,
         dryRun,
         onProgress: setProgress,
+        ticket: next,
       },
       {
         onSuccess: (result) => (result.dryRun ? setChecked(result) : setSaved(result)),
-        onSettled: () => setProgress(null),
+        onSettled: () => {
+          setProgress(null);
+          window.sessionStorage.removeItem(sentKey);
+        },
       },
     );
   }
@@ -124,7 +184,7 @@ export function IntakePage({ trial }: { trial: TrialDetail }) {
             {site.name} is not randomized yet; once its plot plan exists, its data can be uploaded here.
           </Callout>
         ) : (
-          <Section title="Upload a CSV file" icon="cloud-upload" className="fr-section" subtitle={`${site?.name} · ${round.label}`}>
+          <Section title="Upload a CSV file or workbook" icon="cloud-upload" className="fr-section" subtitle={`${site?.name} · ${round.label}`}>
             <SectionCard>
               <p className="fr-muted">
                 The CSV template on the <Link to={paths.trialPlotPlan.href(trial.id, site?.id)}>Plot plan</Link> has every plot of the site and a column per measure;
@@ -134,7 +194,12 @@ export function IntakePage({ trial }: { trial: TrialDetail }) {
               <CsvDropZone onFile={chooseFile} disabled={submit.isPending} />
               {chosen && (
                 <p className="fr-intake__file">
-                  <strong>{chosen.file.name}</strong> · {formatNumber(chosen.preview.rows.length, 0)} rows · {formatNumber(chosen.preview.headers.length, 0)} columns
+                  <strong>{chosen.file.name}</strong> · {fileSize(chosen.file.size)}
+                  {isWorkbook(chosen.file)
+                    ? ' · a workbook: the server reads its first sheet, finds the header row by the plot label column and says what it found when you check it'
+                    : chosen.partial
+                      ? ` · the first ${formatNumber(chosen.preview.rows.length, 0)} rows shown · ${formatNumber(chosen.preview.headers.length, 0)} columns`
+                      : ` · ${formatNumber(chosen.preview.rows.length, 0)} rows · ${formatNumber(chosen.preview.headers.length, 0)} columns`}
                 </p>
               )}
               {chosen?.preview.problem && (
@@ -146,28 +211,45 @@ export function IntakePage({ trial }: { trial: TrialDetail }) {
           </Section>
         )}
 
+        {followed.length > 0 && (
+          <Section title="Uploads on the server" icon="cloud-upload" className="fr-section" subtitle="Sent earlier or by someone else for this site and round; followed here as they run">
+            <SectionCard>
+              {followed.map((record) => (
+                <ImportProgress
+                  key={record.ticket}
+                  record={record}
+                  title={`${record.fileName}${record.userName ? ` from ${record.userName}` : ''}${record.dryRun ? ' (a check only)' : ''}`}
+                />
+              ))}
+            </SectionCard>
+          </Section>
+        )}
+
         {chosen && site?.randomizedAt && (
           <Section title="Preview and columns" icon="th" className="fr-section" subtitle="Check what each column holds; change it where the guess is wrong">
             <SectionCard>
-              <ColumnMapping
-                preview={chosen.preview}
-                measures={measures}
-                choices={choices}
-                problemRows={problemRows}
-                disabled={submit.isPending}
-                onChoose={(index, choice) => {
-                  setChoices((before) => before.map((c, i) => (i === index ? choice : c)));
-                  startOver();
-                }}
-              />
+              {chosen.preview.headers.length > 0 && (
+                <ColumnMapping
+                  preview={chosen.preview}
+                  measures={measures}
+                  choices={choices}
+                  problemRows={problemRows}
+                  disabled={submit.isPending}
+                  onChoose={(index, choice) => {
+                    setChoices((before) => before.map((c, i) => (i === index ? choice : c)));
+                    startOver();
+                  }}
+                />
+              )}
               <div className="fr-intake__actions">
                 <Button icon="search-template" text={checked ? 'Check again' : 'Check the file'} onClick={() => send(true)} loading={submit.isPending && !checked} disabled={submit.isPending} />
                 {progress !== null && (
                   <div className="fr-intake__progress" role="progressbar" aria-label="Upload progress" aria-valuemin={0} aria-valuemax={100} aria-valuenow={Math.round(progress * 100)}>
                     <ProgressBar value={progress} intent="primary" stripes={progress < 1} />
-                    <span className="fr-small fr-muted">{progress < 1 ? `Sending… ${formatNumber(progress * 100, 0)}%` : 'Sent; the server is checking every row…'}</span>
+                    <span className="fr-small fr-muted">{progress < 1 ? `Sending… ${formatNumber(progress * 100, 0)}%` : 'Sent; the server is reading it…'}</span>
                   </div>
                 )}
+                {submit.isPending && progress === 1 && mine && <ImportProgress record={mine} />}
               </div>
             </SectionCard>
           </Section>

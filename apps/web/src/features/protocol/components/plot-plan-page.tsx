@@ -23,7 +23,7 @@ function chooseSite(trial: TrialDetail, requested: string | null): Site | undefi
   return (requested ? byId(Number(requested)) : undefined) ?? trial.mySiteIds.map(byId).find(Boolean) ?? trial.sites[0];
 }
 
-/** Plot plan: per site, the map of blocks and plots, the amounts per plot, Sheets to print and CSV templates. */
+/** Plot plan: per site, the map of blocks and plots, the amounts per plot, Sheets to print and templates (CSV and workbook). */
 export function PlotPlanPage({ trial }: { trial: TrialDetail }) {
   const [params, setParams] = useSearchParams();
   const site = chooseSite(trial, params.get('site'));
@@ -112,7 +112,7 @@ export function PlotPlanPage({ trial }: { trial: TrialDetail }) {
             <SafetyCautions />
           </SectionCard>
         </Section>
-        <Section title="CSV templates" icon="th" className="fr-section" subtitle="Plot identifiers filled in, one column per measure">
+        <Section title="Templates" icon="th" className="fr-section" subtitle="Plot identifiers filled in, one column per measure: a CSV file, or a workbook that checks each value as it is typed">
           <SectionCard>{site.randomizedAt ? <TemplateDownloads trial={trial} site={site} /> : <p className="fr-muted">Templates come once the site is randomized.</p>}</SectionCard>
         </Section>
       </div>

@@ -3,12 +3,12 @@ import type { Site, TrialDetail } from '@friable/contracts';
 import { formatDate } from '../../../lib/format';
 import { useDownloadTemplate } from '../api/download-template';
 
-function fileName(trial: TrialDetail, site: Site, label: string): string {
+function fileName(trial: TrialDetail, site: Site, label: string, format: 'csv' | 'xlsx'): string {
   const safe = (text: string) => text.replace(/[^A-Za-z0-9-]+/g, '-').replace(/^-|-$/g, '');
-  return `${safe(trial.code)}_${safe(site.labelPrefix || site.name)}_${safe(label)}.csv`;
+  return `${safe(trial.code)}_${safe(site.labelPrefix || site.name)}_${safe(label)}.${format}`;
 }
 
-/** One CSV template per round for this site: the plot identifiers filled in, a column per measure. */
+/** Per round for this site, the template as a CSV file and as a workbook: the plot identifiers filled in, a column per measure. */
 export function TemplateDownloads({ trial, site }: { trial: TrialDetail; site: Site }) {
   const download = useDownloadTemplate();
   const rounds = [...trial.rounds].sort((a, b) => a.dayOffset - b.dayOffset);
@@ -18,12 +18,16 @@ export function TemplateDownloads({ trial, site }: { trial: TrialDetail; site: S
       <ul className="fr-downloads">
         {rounds.map((round) => (
           <li key={round.id}>
-            <Button
-              icon="download"
-              text={`CSV template — ${round.label}`}
-              loading={download.isPending && download.variables?.roundId === round.id}
-              onClick={() => download.mutate({ trialId: trial.id, siteId: site.id, roundId: round.id, fileName: fileName(trial, site, round.label) })}
-            />
+            {(['csv', 'xlsx'] as const).map((format) => (
+              <Button
+                key={format}
+                icon="download"
+                text={`${format === 'csv' ? 'CSV template' : 'Workbook'} — ${round.label}`}
+                title={format === 'xlsx' ? 'The plot labels are locked; each measure’s cells take only what Intake accepts.' : undefined}
+                loading={download.isPending && download.variables?.roundId === round.id && download.variables.format === format}
+                onClick={() => download.mutate({ trialId: trial.id, siteId: site.id, roundId: round.id, fileName: fileName(trial, site, round.label, format), format })}
+              />
+            ))}
             <span className="fr-muted fr-small">{round.dueDate ? ` due ${formatDate(round.dueDate)}` : ` day ${round.dayOffset}`}</span>
           </li>
         ))}
