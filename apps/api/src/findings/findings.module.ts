@@ -5,12 +5,13 @@ import { TrialsModule } from '../trials/trials.module';
 import { FindingsCache } from './findings-cache';
 import { FindingsController } from './findings.controller';
 import { FindingsService } from './findings.service';
+import { FindingsSummaryService } from './findings-summary.service';
 
 /** Findings: one measure's analysis from the stored data, through the same engine as /api/stats. */
 @Module({
   imports: [TrialsModule, ObservationsModule, StatsModule],
   controllers: [FindingsController],
-  providers: [FindingsService, FindingsCache],
+  providers: [FindingsService, FindingsCache, FindingsSummaryService],
   exports: [FindingsService],
 })
 export class FindingsModule {}
