@@ -2,7 +2,7 @@ import { readFileSync } from 'node:fs';
 import type { TrialSummary } from '@friable/contracts';
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { baseUrl, launchBrowser, screenshot, signIn, watchContentSecurityPolicy } from './support';
+import { baseUrl, drawCharts, launchBrowser, screenshot, signIn, watchContentSecurityPolicy } from './support';
 
 async function trialId(page: Page, code: string): Promise<number> {
   const trials = await page.evaluate(async () => {
@@ -14,7 +14,7 @@ async function trialId(page: Page, code: string): Promise<number> {
 
 /** Waits until the charts of the view have drawn at least `count` traces, then checks nothing scrolls sideways. */
 async function chartsDrawn(page: Page, width: number, count = 1): Promise<void> {
-  await page.locator('.js-plotly-plot .trace').nth(count - 1).waitFor({ timeout: 30_000 });
+  await drawCharts(page, count);
   expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(width);
 }
 
@@ -75,7 +75,6 @@ describe('Findings: the model made for each measure', () => {
       expect(page.url()).toContain('model=repeated');
       await page.getByRole('figure', { name: 'All sites combined' }).waitFor();
       // The combined means over time, then each garden's beside it.
-      await page.getByRole('figure').nth(3).waitFor({ timeout: 30_000 });
       await chartsDrawn(page, viewport.width, 5);
       await screenshot(page, `findings-rounds-over-time-${viewport.name}`);
 
