@@ -114,16 +114,16 @@ export function everyPage(trialId: number, token = 'not-a-real-invitation-token'
 
 /**
  * Charts draw only when they come near the screen (ChartSlot): scrolls each chart's place into view in
- * turn, as a person would, until the page has drawn at least `traces` Plotly traces.
+ * turn, as a person reading down the page would, until every chart has drawn; then there are at least
+ * `traces` Plotly traces.
  */
 export async function drawCharts(page: Page, traces = 1, timeout = 30_000): Promise<void> {
   const slots = page.locator('.fr-chart-slot');
   await slots.first().waitFor({ state: 'attached', timeout });
-  const drawn = page.locator('.js-plotly-plot .trace');
   const total = await slots.count();
-  for (let index = 0; index < total && (await drawn.count()) < traces; index += 1) {
+  for (let index = 0; index < total; index += 1) {
     await slots.nth(index).scrollIntoViewIfNeeded();
     await slots.nth(index).locator('.js-plotly-plot .trace').first().waitFor({ timeout });
   }
-  await drawn.nth(traces - 1).waitFor({ state: 'attached', timeout });
+  await page.locator('.js-plotly-plot .trace').nth(traces - 1).waitFor({ state: 'attached', timeout });
 }

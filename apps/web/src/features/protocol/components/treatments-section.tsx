@@ -2,12 +2,12 @@ import { Button, HTMLTable, Section, SectionCard, Tag } from '@blueprintjs/core'
 import type { PlotAmount, Treatment, TrialDetail } from '@friable/contracts';
 import { isFactorDesign } from '@friable/field';
 import { useState } from 'react';
-import { ConfirmButton } from '../../../components/confirm-button';
 import { EmptyState } from '../../../components/states';
 import { formatDoseShort, formatNumber, formatRate } from '../../../lib/format';
 import { useDeleteProtocolItem } from '../api/delete-protocol-item';
 import { useAmounts } from '../api/get-amounts';
 import { appliedToWords } from './factor-roles';
+import { RowActions } from './row-actions';
 import { TreatmentDialog } from './treatment-dialog';
 
 /** The treatments, each with its rate and how much goes on one plot at every site. */
@@ -80,19 +80,20 @@ export function TreatmentsSection({ trial, canEdit }: { trial: TrialDetail; canE
                       )}
                     </td>
                     {canEdit && (
-                      <td className="fr-actions">
-                        <Button variant="minimal" size="small" icon="edit" text="Edit" aria-label={`Edit ${treatment.code}`} onClick={() => setEditing(treatment)} />
-                        {!factorial && (
-                          <ConfirmButton
-                            text="Remove"
-                            ariaLabel={`Remove ${treatment.code}`}
-                            confirmText="Remove treatment"
-                            question={`Remove treatment ${treatment.code} (${treatment.name}) from the protocol?`}
-                            loading={remove.isPending && remove.variables === treatment.id}
-                            onConfirm={() => remove.mutate(treatment.id)}
-                          />
-                        )}
-                      </td>
+                      <RowActions
+                        name={treatment.code}
+                        onEdit={() => setEditing(treatment)}
+                        remove={
+                          factorial
+                            ? undefined
+                            : {
+                                confirmText: 'Remove treatment',
+                                question: `Remove treatment ${treatment.code} (${treatment.name}) from the protocol?`,
+                                loading: remove.isPending && remove.variables === treatment.id,
+                                onConfirm: () => remove.mutate(treatment.id),
+                              }
+                        }
+                      />
                     )}
                   </tr>
                 ))}
