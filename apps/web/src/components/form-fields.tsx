@@ -1,4 +1,4 @@
-import { HTMLSelect, InputGroup, TextArea, type InputGroupProps } from '@blueprintjs/core';
+import { Checkbox, HTMLSelect, InputGroup, TextArea, type InputGroupProps } from '@blueprintjs/core';
 import type { ReactNode } from 'react';
 import { useController, type Control, type FieldValues, type Path } from 'react-hook-form';
 import { Field } from './field-errors';
@@ -51,4 +51,10 @@ export function SelectField<T extends FieldValues>({ control, name, label, field
       </HTMLSelect>
     </Field>
   );
+}
+
+/** A yes-or-no choice, its label beside the box. */
+export function CheckboxField<T extends FieldValues>({ control, name, label }: { control: Control<T>; name: Path<T>; label: string }) {
+  const { field: box } = useController({ control, name });
+  return <Checkbox name={box.name} label={label} checked={Boolean(box.value)} onChange={(e) => box.onChange(e.currentTarget.checked)} onBlur={box.onBlur} inputRef={box.ref} />;
 }

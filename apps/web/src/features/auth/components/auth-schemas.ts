@@ -22,3 +22,22 @@ export const newPasswordSchema = z
   })
   .refine((values) => values.password === values.again, { path: ['again'], message: 'The two passwords differ.' });
 export type NewPasswordValues = z.infer<typeof newPasswordSchema>;
+
+/** Changing one's password: the current one, then the new one twice. */
+export const changePasswordSchema = z
+  .object({
+    currentPassword: z.string().min(1, 'Type your current password.').max(200, 'A password is at most 200 characters.'),
+    newPassword: z.string().min(12, 'A password needs at least 12 characters.').max(64, 'A password is at most 64 characters.'),
+    again: z.string().min(1, 'Type the new password again.'),
+  })
+  .refine((values) => values.newPassword === values.again, { path: ['again'], message: 'The two new passwords differ.' });
+export type ChangePasswordValues = z.infer<typeof changePasswordSchema>;
+
+/** One's display name, locale and e-mail preferences. */
+export const settingsSchema = z.object({
+  name: z.string().trim().min(1, 'Type the name others see on the Team and in the Activity.').max(120, 'A display name is at most 120 characters.'),
+  locale: z.string(),
+  emailReminders: z.boolean(),
+  emailReceipts: z.boolean(),
+});
+export type SettingsValues = z.infer<typeof settingsSchema>;
