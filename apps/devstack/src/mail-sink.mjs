@@ -1,6 +1,6 @@
 // A local SMTP sink in place of a hosted mail service: it accepts every message on loopback and
 // writes it as JSON to the outbox folder, which the API's development-only Outbox page reads.
-import { mkdirSync, writeFileSync } from 'node:fs';
+import { mkdirSync, renameSync, writeFileSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import { repoRoot } from './env.mjs';
 import { log } from './run.mjs';
@@ -30,7 +30,10 @@ export async function startMailSink(env) {
             text: mail.text ?? '',
             html: typeof mail.html === 'string' ? mail.html : null,
           };
-          writeFileSync(join(outbox, `${id}.json`), JSON.stringify(message, null, 2));
+          // Written under another name, then renamed: a reader of *.json never sees half a message.
+          const path = join(outbox, `${id}.json`);
+          writeFileSync(`${path}.part`, JSON.stringify(message, null, 2));
+          renameSync(`${path}.part`, path);
           callback();
         })
         .catch(callback);
