@@ -4,7 +4,7 @@ import { afterEach, describe, expect, it, vi } from 'vitest';
 import { mockApi, renderWithApp } from '../../../test/render';
 import { AccountPage } from './account-page';
 
-const me = { id: 7, email: 'ines@example.org', name: 'Ines Marlow', isAdmin: false, isActive: true, createdAt: '2026-11-01T00:00:00.000Z', locale: null, emailReminders: true, emailReceipts: false };
+const me = { id: 7, email: 'ines@example.org', name: 'Ines Marlow', isAdmin: false, isActive: true, createdAt: '2026-11-01T00:00:00.000Z', locale: null, emailReminders: true, emailReceipts: false, lastSignInAt: null };
 
 describe('AccountPage', () => {
   afterEach(() => vi.unstubAllGlobals());
