@@ -33,18 +33,6 @@ describe('SignInForm', () => {
     expect(window.localStorage.getItem('friable.signedIn')).toBe('1');
   });
 
-  it('says in words what is wrong with the boxes before anything is sent', async () => {
-    const calls = mockApi({});
-    renderWithApp(<SignInForm onSignedIn={vi.fn()} />);
-    await userEvent.click(screen.getByRole('button', { name: 'Sign in' }));
-    expect(await screen.findByText('Type an e-mail address.')).toBeInTheDocument();
-    expect(screen.getByText('Type your password.')).toBeInTheDocument();
-    await userEvent.type(screen.getByLabelText('E-mail'), 'ines.example.org');
-    await userEvent.click(screen.getByRole('button', { name: 'Sign in' }));
-    expect(await screen.findByText('That does not look like an e-mail address, e.g. name@example.org.')).toBeInTheDocument();
-    expect(calls.filter((call) => call.path === '/api/auth/login')).toHaveLength(0);
-  });
-
   it('says so when the server cannot be reached', async () => {
     vi.stubGlobal('fetch', vi.fn(async () => Promise.reject(new TypeError('Failed to fetch'))));
     renderWithApp(<SignInForm onSignedIn={vi.fn()} />);

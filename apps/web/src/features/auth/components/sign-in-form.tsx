@@ -1,27 +1,29 @@
-import { zodResolver } from '@hookform/resolvers/zod';
-import { Button, Callout, Card, H1 } from '@blueprintjs/core';
-import { useForm } from 'react-hook-form';
+import { Button, Callout, Card, FormGroup, H1, InputGroup } from '@blueprintjs/core';
+import { useState, type FormEvent } from 'react';
 import { Link } from 'react-router-dom';
-import { TextField } from '../../../components/form-fields';
 import { paths } from '../../../config/paths';
 import { ApiError } from '../../../lib/api-client';
 import { useLogin } from '../api/login';
 import { useAuth } from '../hooks/auth-context';
-import { signInSchema, type SignInValues } from './auth-schemas';
 
 export function SignInForm({ onSignedIn }: { onSignedIn: () => void }) {
   const { signIn, endedReason } = useAuth();
   const login = useLogin();
-  const { control, handleSubmit } = useForm<SignInValues>({ resolver: zodResolver(signInSchema), defaultValues: { email: '', password: '' } });
+  const [email, setEmail] = useState('');
+  const [password, setPassword] = useState('');
 
-  const submit = handleSubmit((values) =>
-    login.mutate(values, {
-      onSuccess: (response) => {
-        signIn(response);
-        onSignedIn();
+  function submit(event: FormEvent) {
+    event.preventDefault();
+    login.mutate(
+      { email, password },
+      {
+        onSuccess: (response) => {
+          signIn(response);
+          onSignedIn();
+        },
       },
-    }),
-  );
+    );
+  }
 
   const error = login.error instanceof ApiError ? login.error : login.error ? new ApiError(0, login.error.message) : null;
 
@@ -40,8 +42,12 @@ export function SignInForm({ onSignedIn }: { onSignedIn: () => void }) {
         </Callout>
       )}
       <form onSubmit={submit} noValidate>
-        <TextField control={control} name="email" label="E-mail" type="email" autoComplete="username" large autoFocus />
-        <TextField control={control} name="password" label="Password" type="password" autoComplete="current-password" large />
+        <FormGroup label="E-mail" labelFor="sign-in-email">
+          <InputGroup id="sign-in-email" type="email" autoComplete="username" value={email} onValueChange={setEmail} large autoFocus />
+        </FormGroup>
+        <FormGroup label="Password" labelFor="sign-in-password">
+          <InputGroup id="sign-in-password" type="password" autoComplete="current-password" value={password} onValueChange={setPassword} large />
+        </FormGroup>
         <Button type="submit" intent="primary" large fill loading={login.isPending} text="Sign in" />
       </form>
       <p className="fr-gap">
