@@ -5,7 +5,8 @@
 //  - the demo trial's Findings page with an empty cache (a new browser context each run): when its first
 //    table and its first chart show, by the browser's own clock (performance.now() from the start of the
 //    navigation, read in the page at the first frame where they are there), against 1 s and 2 s; opened
-//    by its address (the whole app loads) and by its tab from the trial's Protocol page.
+//    by its address (the whole app loads) and by its tab from the trial's Protocol page; with, per run,
+//    when the values' summary, the analysis and the charting library arrived, and the machine's load.
 // Starts the built API (which serves the built app) on a free port against the test database, prints a
 // table of figures and exits 0: a benchmark, not a test.
 //
@@ -16,6 +17,7 @@
 import { spawn } from 'node:child_process';
 import { existsSync, readFileSync, statSync } from 'node:fs';
 import { createServer } from 'node:net';
+import { cpus, loadavg } from 'node:os';
 import { resolve } from 'node:path';
 import { setTimeout as sleep } from 'node:timers/promises';
 import { brotliCompressSync, constants } from 'node:zlib';
@@ -146,7 +148,21 @@ async function readMarks(page, timeoutMs = 30_000) {
   } catch {
     // reported as missing below
   }
-  return page.evaluate(() => ({ table: window.__friableMarks?.table ?? null, chart: window.__friableMarks?.chart ?? null }));
+  return page.evaluate(() => {
+    const marks = window.__friableMarks;
+    // When the values' summary, the analysis and the charting library arrived (responseEnd), on the same clock.
+    const arrived = (pattern) => {
+      const entry = performance.getEntriesByType('resource').find((e) => pattern.test(e.name) && e.startTime >= (marks?.from ?? 0));
+      return entry ? entry.responseEnd - (marks?.from ?? 0) : null;
+    };
+    return {
+      table: marks?.table ?? null,
+      chart: marks?.chart ?? null,
+      summary: arrived(/\/findings\/summary\?/),
+      analysis: arrived(/\/findings\?/),
+      plotly: arrived(/\/assets\/plotly[^/]*\.js$/),
+    };
+  });
 }
 
 /** A new context (empty cache) holding the signed-in session: its cookie and the page's marker (storageState). */
@@ -240,6 +256,8 @@ function printTable(table) {
 function report({ database, webDist, signIn, firstScreen, demo, runs }) {
   const encodings = [...new Set(firstScreen.map((asset) => asset.encoding))].join(', ');
   console.log(`bench:web — database ${database}, app ${webDist}; Chromium got the files with Content-Encoding: ${encodings}`);
+  // Timings on a shared machine depend on what else runs: the load average says how busy it was.
+  console.log(`Machine: ${cpus().length} cores, load average ${loadavg().map((value) => value.toFixed(2)).join(' / ')} (1 / 5 / 15 min) at the end of the runs`);
   const verdict = (value, target) => (value === null || value === undefined ? 'MISSED (not seen)' : value <= target ? 'met' : 'MISSED');
   const trialsAdded = firstScreen.filter((asset) => !signIn.some((seen) => seen.path === asset.path));
   const js = firstScreen.filter((asset) => asset.kind === 'JS');
@@ -276,6 +294,9 @@ function report({ database, webDist, signIn, firstScreen, demo, runs }) {
   if (demo) {
     console.log(`Each run by address (table / chart): ${runs.address.map((run) => `${ms(run.table)} / ${ms(run.chart)}`).join('; ')}`);
     console.log(`Each run by tab (table / chart): ${runs.tab.map((run) => `${ms(run.table)} / ${ms(run.chart)}`).join('; ')}`);
+    const arrivals = (list) => list.map((run) => `${ms(run.summary)} / ${ms(run.analysis)} / ${ms(run.plotly)}`).join('; ');
+    console.log(`Arrived by address (values' summary / analysis / charting library): ${arrivals(runs.address)}`);
+    console.log(`Arrived by tab (values' summary / analysis / charting library): ${arrivals(runs.tab)}`);
   }
 }
 

@@ -1,7 +1,7 @@
 import type { Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
 import { paths } from '../src/config/paths';
-import { baseUrl, demoTrialId, everyPage, screenshot, signIn, useBrowserSession } from './support';
+import { baseUrl, demoTrialId, drawCharts, everyPage, screenshot, signIn, useBrowserSession } from './support';
 
 /** Opens a page and lets it settle: its data fetched, lazy chunks (Plotly) loaded, charts drawn. */
 async function visit(page: Page, path: string): Promise<string | undefined> {
@@ -44,7 +44,7 @@ describe('every page under the Content-Security-Policy', () => {
       await visit(session.page, path);
       visited.push(path);
       if (name === 'trialFindings') {
-        await session.page.locator('.js-plotly-plot .trace').first().waitFor({ timeout: 60_000 });
+        await drawCharts(session.page, 1, 60_000);
         await screenshot(session.page, 'csp-findings');
       }
     }

@@ -2,7 +2,7 @@ import { readFileSync } from 'node:fs';
 import type { TrialSummary } from '@friable/contracts';
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { baseUrl, launchBrowser, screenshot, signIn, watchContentSecurityPolicy } from './support';
+import { baseUrl, drawCharts, launchBrowser, screenshot, signIn, watchContentSecurityPolicy } from './support';
 
 async function trialId(page: Page, code: string): Promise<number> {
   const trials = await page.evaluate(async () => {
@@ -14,7 +14,7 @@ async function trialId(page: Page, code: string): Promise<number> {
 
 /** Waits until the charts of the view have drawn at least `count` traces, then checks nothing scrolls sideways. */
 async function chartsDrawn(page: Page, width: number, count = 1): Promise<void> {
-  await page.locator('.js-plotly-plot .trace').nth(count - 1).waitFor({ timeout: 30_000 });
+  await drawCharts(page, count);
   expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(width);
 }
 
@@ -73,10 +73,9 @@ describe('Findings: the model made for each measure', () => {
       expect(byRound).toContain('Day 14');
       expect(await page.getByRole('table', { name: 'Covariance structures compared' }).innerText()).toMatch(/Compound symmetry/);
       expect(page.url()).toContain('model=repeated');
-      await page.getByRole('figure', { name: 'All sites combined' }).waitFor();
-      // The combined means over time, then each garden's beside it.
-      await page.getByRole('figure').nth(3).waitFor({ timeout: 30_000 });
+      // The combined means over time, then each garden's beside it (drawn as they are scrolled to).
       await chartsDrawn(page, viewport.width, 5);
+      expect(await page.getByRole('figure', { name: 'All sites combined' }).count()).toBe(1);
       await screenshot(page, `findings-rounds-over-time-${viewport.name}`);
 
       // The classical ANOVA, labelled as the biased fallback it is.

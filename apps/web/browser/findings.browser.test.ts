@@ -2,7 +2,7 @@ import { readFileSync } from 'node:fs';
 import type { TrialSummary } from '@friable/contracts';
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { baseUrl, launchBrowser, screenshot, signIn } from './support';
+import { baseUrl, drawCharts, launchBrowser, screenshot, signIn } from './support';
 
 // Montgomery, Design and Analysis of Experiments: hardness-testing tips (4 tips × 4 coupons as blocks),
 // datasets/reference/STATISTICS.md B.1. Expected: F(tips) = 14.44 (NDSU SAS listing; R: F = 14.438),
@@ -104,8 +104,7 @@ describe('Findings and Quick analysis', () => {
       const letters = await lettersByTreatment(page);
       expect(Object.values(letters).every((l) => /^[a-z]+$/.test(l))).toBe(true);
       // The plots load lazily and draw their traces as SVG.
-      await page.locator('.js-plotly-plot .trace').first().waitFor({ timeout: 30_000 });
-      expect(await page.locator('.js-plotly-plot .trace').count()).toBeGreaterThan(3);
+      await drawCharts(page, 4);
       await screenshot(page, `findings-combined-${viewport.name}`);
       const width = await page.evaluate(() => document.documentElement.scrollWidth);
       expect(width).toBeLessThanOrEqual(viewport.width);
@@ -122,7 +121,7 @@ describe('Findings and Quick analysis', () => {
       await page.locator('.fr-findings-caption').getByText(siteLabel).waitFor();
       await page.locator('.fr-findings-caption').getByText(options[1]!).waitFor();
       expect(await page.getByRole('table', { name: 'Analysis of variance' }).innerText()).not.toContain('Site × treatment');
-      await page.locator('.js-plotly-plot .trace').first().waitFor();
+      await drawCharts(page);
       await screenshot(page, `findings-site-${viewport.name}`);
 
       const downloading = page.waitForEvent('download');
@@ -151,7 +150,7 @@ describe('Findings and Quick analysis', () => {
       expect(await treatmentRow.innerText()).toContain('0.000871'); // p, R: 0.0008713
       // R's cld groups tips 1–3 together and tip 4 alone; Friable gives "a" to the highest mean, so the names swap.
       expect(await lettersByTreatment(page)).toEqual({ '1': 'b', '2': 'b', '3': 'b', '4': 'a' });
-      await page.locator('.js-plotly-plot .trace').first().waitFor({ timeout: 30_000 });
+      await drawCharts(page);
       await screenshot(page, `quick-analysis-${viewport.name}`);
       const width = await page.evaluate(() => document.documentElement.scrollWidth);
       expect(width).toBeLessThanOrEqual(viewport.width);

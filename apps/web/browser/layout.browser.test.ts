@@ -1,7 +1,7 @@
 import type { Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
 import { paths } from '../src/config/paths';
-import { baseUrl, screenshot, signIn, useBrowserSession } from './support';
+import { baseUrl, drawCharts, screenshot, signIn, useBrowserSession } from './support';
 
 const sizes = [
   { name: 'phone', viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true },
@@ -54,7 +54,7 @@ for (const size of sizes) {
       for (const [name, route] of Object.entries(paths)) {
         if (['signIn', 'acceptInvitation', 'people', 'outbox', 'home', 'trial'].includes(name)) continue;
         await page.goto(`${baseUrl()}${route.path.replace(':trialId', String(trialId))}`, { waitUntil: 'networkidle' });
-        if (name === 'trialFindings') await page.locator('.js-plotly-plot .trace').first().waitFor({ timeout: 60_000 });
+        if (name === 'trialFindings') await drawCharts(page, 1, 60_000);
         await page.locator('.fr-state').first().waitFor({ state: 'detached', timeout: 30_000 }).catch(() => undefined);
         if (name === 'trialFindings') await page.locator('figure.fr-findings-plot').first().hover();
         for (const problem of await layoutProblems(page, size.isMobile)) problems.push(`${name}: ${problem}`);

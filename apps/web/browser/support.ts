@@ -112,3 +112,19 @@ export async function demoTrialId(): Promise<number> {
 export function everyPage(trialId: number, token = 'not-a-real-invitation-token'): Array<{ name: string; path: string }> {
   return Object.entries(paths).map(([name, route]) => ({ name, path: route.path.replace(':trialId', String(trialId)).replace(':token', token) }));
 }
+
+/**
+ * Charts draw only when they come near the screen (ChartSlot): scrolls each chart's place into view in
+ * turn, as a person reading down the page would, until every chart has drawn; then there are at least
+ * `traces` Plotly traces.
+ */
+export async function drawCharts(page: Page, traces = 1, timeout = 30_000): Promise<void> {
+  const slots = page.locator('.fr-chart-slot');
+  await slots.first().waitFor({ state: 'attached', timeout });
+  const total = await slots.count();
+  for (let index = 0; index < total; index += 1) {
+    await slots.nth(index).scrollIntoViewIfNeeded();
+    await slots.nth(index).locator('.js-plotly-plot .trace').first().waitFor({ timeout });
+  }
+  await page.locator('.js-plotly-plot .trace').nth(traces - 1).waitFor({ state: 'attached', timeout });
+}

@@ -513,3 +513,34 @@ export interface TrialReport {
   /** Saved analyses with sign-offs or open comments, oldest first. */
   reviews: ReportReview[];
 }
+
+// ---------------------------------------------------------------- the recorded values at a glance
+
+/** One treatment's recorded values of the measure, round and scope, before any model. */
+export interface FindingsSummaryRow {
+  treatment: string;
+  /** Plots of the treatment in the scope (with or without a value). */
+  plots: number;
+  /** Values recorded (censored ones included, at their cut-off). */
+  values: number;
+  /** Values not reached by the cut-off (time-with-cutoff measures; 0 otherwise). */
+  censored: number;
+  /** Plots without a value (marked missing, or never recorded). */
+  missing: number;
+  /** Of the recorded values (censored ones at their cut-off); null without any value. */
+  mean: number | null;
+  /** Sample standard deviation; null with fewer than two values. */
+  sd: number | null;
+  median: number | null;
+  min: number | null;
+  max: number | null;
+}
+
+/** GET /api/trials/:trialId/findings/summary: the recorded values per treatment, read without the engine (Findings shows it first). */
+export interface FindingsSummary {
+  measure: FindingsContext['measure'];
+  round: FindingsContext['round'];
+  scope: FindingsContext['scope'];
+  /** In the protocol's treatment order. */
+  treatments: FindingsSummaryRow[];
+}

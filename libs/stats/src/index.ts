@@ -51,3 +51,4 @@ export {
   type RepeatedObservation,
   type RepeatedTermTest,
 } from './repeated-measures';
+export { summarizeValues, type ValueSummary } from './value-summary';

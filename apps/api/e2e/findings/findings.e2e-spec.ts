@@ -1,4 +1,4 @@
-import type { Findings, Observation, TrialDetail } from '@friable/contracts';
+import type { Findings, FindingsSummary, Observation, TrialDetail } from '@friable/contracts';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { bearer, createPerson, tokenFor, type TestApp } from '../support/test-app';
 import { openDemoTrial, type DemoTrial } from './demo-trial';
@@ -133,6 +133,35 @@ describe('Findings: the analysis of stored data through the engine', () => {
     const { context: askedContext, ...askedAnalysis } = asked.body as Findings;
     expect(latestAnalysis).toEqual(askedAnalysis);
     expect(latestContext.dataHash).toBe(askedContext.dataHash);
+  });
+
+  it('summarises the recorded values per treatment before any model, for the round GET /findings would analyse', async () => {
+    const site = protocol.sites[1]!;
+    const summary = await get(`${base}/findings/summary?measureId=${measure('DRAIN').id}&siteId=${site.id}`);
+    expect(summary.status).toBe(200);
+    const body = summary.body as FindingsSummary;
+    const analysed = (await get(`${base}/findings?analysis=anova&measureId=${measure('DRAIN').id}&siteId=${site.id}`)).body as Findings;
+    expect(body.round.id).toBe(analysed.context.choices.roundId);
+    expect(body.scope).toEqual(analysed.context.scope);
+    expect(body.treatments.map((row) => row.treatment)).toEqual(protocol.treatments.map((tr) => tr.code));
+    const observations = (await get(`${base}/observations?measureId=${measure('DRAIN').id}&roundId=${body.round.id}&siteId=${site.id}`)).body as Observation[];
+    for (const row of body.treatments) {
+      const values = observations.filter((o) => o.treatmentCode === row.treatment && o.valueText !== null);
+      const numbers = values.map((o) => Number(o.valueText));
+      expect(row.values).toBe(values.length);
+      expect(row.censored).toBe(values.filter((o) => o.censored).length);
+      // One plot per treatment in each block at this site (randomized complete block).
+      expect(row.plots).toBe(site.blocks);
+      expect(row.missing).toBe(site.blocks - values.length);
+      // Definitions: the arithmetic mean Σx/n and the range; SD and median are checked against R in libs/stats (value-summary.test.ts).
+      expect(row.mean).toBeCloseTo(numbers.reduce((a, b) => a + b, 0) / numbers.length, 9);
+      expect([row.min, row.max]).toEqual([Math.min(...numbers), Math.max(...numbers)]);
+    }
+    const unknownSite = await get(`${base}/findings/summary?measureId=${measure('DRAIN').id}&siteId=999999`);
+    expect(unknownSite.status).toBe(422);
+    const empty = await get(`${base}/findings/summary?measureId=${measure('CRUST').id}&roundId=${round('Day 28').id}`);
+    expect(empty.status).toBe(200);
+    expect((empty.body as FindingsSummary).treatments.every((row) => row.values === 0 && row.mean === null)).toBe(true);
   });
 
   it('refuses unknown choices by name, no data by a sentence, and non-members with 404', async () => {

@@ -7,7 +7,9 @@ import { CurrentTrialAccess } from '../common/decorators/current-user.decorator'
 import { ApiFileResponse } from '../common/openapi/file-response.decorator';
 import { findingsBundle } from './bundle/findings-bundle';
 import { FindingsQueryDto } from './dto/findings-query.dto';
+import { FindingsSummaryDto, FindingsSummaryQueryDto } from './dto/findings-summary.dto';
 import { FindingsCache } from './findings-cache';
+import { FindingsSummaryService } from './findings-summary.service';
 import { FindingsService } from './findings.service';
 import { FindingsDto } from './dto/findings.dto';
 import { AncovaFindingsDto, CensoredFindingsDto, CountsFindingsDto, OrdinalFindingsDto, RepeatedFindingsDto } from './dto/model-findings.dto';
@@ -21,6 +23,7 @@ export class FindingsController {
   constructor(
     private readonly findings: FindingsService,
     private readonly cache: FindingsCache,
+    private readonly summaries: FindingsSummaryService,
   ) {}
 
   @Get()
@@ -45,6 +48,20 @@ export class FindingsController {
     // The kept JSON text as it is, with its entity tag: a page asking again with If-None-Match gets 304.
     response.type('application/json').setHeader('ETag', etag);
     response.send(body);
+  }
+
+  @Get('summary')
+  @AnyTrialMember()
+  @ApiOperation({
+    summary: 'The recorded values of one measure and round per treatment, before any model: plots, values, not reached by the cut-off, missing, mean, SD, median, range',
+    description:
+      'Read without the engine, so it answers at once: Findings shows it while the analysis is computed. Takes measureId, roundId and siteId as GET /findings; ' +
+      'the round left out is the one GET /findings would analyse (the latest holding values of the measure in the scope). A censored value counts at its cut-off.',
+  })
+  @ApiOkResponse({ type: FindingsSummaryDto })
+  @ApiUnprocessableEntityResponse({ description: 'An unknown measure, round or site, or no values yet.' })
+  summary(@CurrentTrialAccess() access: TrialAccessContext, @Query() query: FindingsSummaryQueryDto) {
+    return this.summaries.summary(access.trialId, query);
   }
 
   @Get('bundle')

@@ -63,7 +63,7 @@ interface AnalysisScene {
   modelChoice: ModelChoice;
 }
 
-const measureRef = (measure: TrialDetail['measures'][number]): FindingsContext['measure'] => ({
+export const measureRef = (measure: TrialDetail['measures'][number]): FindingsContext['measure'] => ({
   id: measure.id,
   code: measure.code,
   name: measure.name,

@@ -1,4 +1,4 @@
-import { Navigate, useRoutes, type RouteObject } from 'react-router-dom';
+import { matchPath, Navigate, useRoutes, type RouteObject } from 'react-router-dom';
 import { paths } from '../config/paths';
 import { RequireAuth } from '../features/auth/components/require-auth';
 import { RouteBoundary } from './errors/route-boundary';
@@ -34,6 +34,25 @@ const PeopleRoute = lazyPage(() => import('./routes/people'), 'PeopleRoute');
 const RateCalculatorPage = lazyPage(() => import('../features/rates/components/rate-calculator-page'), 'RateCalculatorPage');
 const OutboxPage = lazyPage(() => import('../features/outbox/components/outbox-page'), 'OutboxPage');
 const NotFoundRoute = lazyPage(() => import('./routes/not-found'), 'NotFoundRoute');
+
+/** A trial's sections: each page's code loads with it, or earlier while the trial itself loads (preloadTrialSection). */
+const trialSections = [
+  [paths.trialProtocol.path, ProtocolRoute],
+  [paths.trialSites.path, SitesRoute],
+  [paths.trialPlotPlan.path, PlotPlanRoute],
+  [paths.trialTeam.path, TeamRoute],
+  [paths.trialIntake.path, IntakeRoute],
+  [paths.trialLedger.path, LedgerRoute],
+  [paths.trialWalk.path, WalkRoute],
+  [paths.trialFindings.path, FindingsRoute],
+  [paths.trialReport.path, ReportRoute],
+  [paths.trialActivity.path, ActivityRoute],
+] as const;
+
+/** Fetches the code of the trial section at this address, so it arrives with the trial rather than after it. */
+function preloadTrialSection(pathname: string) {
+  trialSections.find(([path]) => matchPath(path, pathname))?.[1].preload();
+}
 
 export const routes: RouteObject[] = [
   {
@@ -83,19 +102,10 @@ export const routes: RouteObject[] = [
       { path: paths.trials.path, element: <TrialsRoute /> },
       {
         path: paths.trial.path,
-        element: <TrialLayout />,
+        element: <TrialLayout preloadSection={preloadTrialSection} />,
         children: [
           { index: true, element: <Navigate to="protocol" replace /> },
-          { path: paths.trialProtocol.path, element: <ProtocolRoute /> },
-          { path: paths.trialSites.path, element: <SitesRoute /> },
-          { path: paths.trialPlotPlan.path, element: <PlotPlanRoute /> },
-          { path: paths.trialTeam.path, element: <TeamRoute /> },
-          { path: paths.trialIntake.path, element: <IntakeRoute /> },
-          { path: paths.trialLedger.path, element: <LedgerRoute /> },
-          { path: paths.trialWalk.path, element: <WalkRoute /> },
-          { path: paths.trialFindings.path, element: <FindingsRoute /> },
-          { path: paths.trialReport.path, element: <ReportRoute /> },
-          { path: paths.trialActivity.path, element: <ActivityRoute /> },
+          ...trialSections.map(([path, Section]) => ({ path, element: <Section /> })),
         ],
       },
       { path: paths.rateCalculator.path, element: <RateCalculatorPage /> },

@@ -13,12 +13,14 @@ export function fieldError(error: unknown, field: string): string | undefined {
 
 /**
  * A labelled field that shows the server's message for it, in the danger colour, under the input.
- * `field` is the request body's property name the API names in its 422 answer.
+ * `field` is the request body's property name the API names in its 422 answer; `message` is the
+ * form's own check of the field (it comes first).
  */
 export function Field({
   label,
   field,
   error,
+  message: own,
   help,
   children,
   inline,
@@ -26,11 +28,12 @@ export function Field({
   label: string;
   field: string;
   error: unknown;
+  message?: string;
   help?: ReactNode;
   children: ReactNode;
   inline?: boolean;
 }) {
-  const message = fieldError(error, field);
+  const message = own ?? fieldError(error, field);
   return (
     <FormGroup label={label} labelFor={`fr-field-${field}`} helperText={message ?? help} intent={message ? 'danger' : 'none'} inline={inline} className="fr-field">
       {children}

@@ -625,6 +625,26 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/trials/{trialId}/findings/summary": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /**
+         * The recorded values of one measure and round per treatment, before any model: plots, values, not reached by the cut-off, missing, mean, SD, median, range
+         * @description Read without the engine, so it answers at once: Findings shows it while the analysis is computed. Takes measureId, roundId and siteId as GET /findings; the round left out is the one GET /findings would analyse (the latest holding values of the measure in the scope). A censored value counts at its cut-off.
+         */
+        get: operations["FindingsController_summary"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/api/trials/{trialId}/intake-columns": {
         parameters: {
             query?: never;
@@ -2332,6 +2352,30 @@ export interface components {
             siteId: number | null;
             siteName: string | null;
             siteNames: string[];
+        };
+        FindingsSummaryDto: {
+            measure: components["schemas"]["FindingsMeasureDto"];
+            round: components["schemas"]["RoundRefDto"];
+            scope: components["schemas"]["FindingsScopeDto"];
+            /** @description In the protocol’s treatment order. */
+            treatments: components["schemas"]["FindingsSummaryRowDto"][];
+        };
+        FindingsSummaryRowDto: {
+            /** @description Values not reached by the cut-off. */
+            censored: number;
+            max: number | null;
+            mean: number | null;
+            median: number | null;
+            min: number | null;
+            /** @description Plots without a value (marked missing, or never recorded). */
+            missing: number;
+            /** @description Plots of the treatment in the scope. */
+            plots: number;
+            /** @description Sample standard deviation; null with fewer than two values. */
+            sd: number | null;
+            treatment: string;
+            /** @description Values recorded, censored ones included at their cut-off. */
+            values: number;
         };
         FTestDto: {
             df1: number;
@@ -6034,6 +6078,71 @@ export interface operations {
                 };
             };
             /** @description As GET /findings. */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+        };
+    };
+    FindingsController_summary: {
+        parameters: {
+            query: {
+                /** @description The measure to analyse. */
+                measureId: number;
+                /** @description The assessment round to analyse; leave out for the latest round holding values of the measure in this scope. */
+                roundId?: number;
+                /** @description One site; leave out for all sites combined. */
+                siteId?: number;
+            };
+            header?: never;
+            path: {
+                /** @description The trial. */
+                trialId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["FindingsSummaryDto"];
+                };
+            };
+            /** @description No valid token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description Needs one of these roles on the trial: investigator, collaborator, reviewer. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description No such trial, or you are not a member of it. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description An unknown measure, round or site, or no values yet. */
             422: {
                 headers: {
                     [name: string]: unknown;

@@ -1,6 +1,7 @@
 import type { TrialDetail } from '@friable/contracts';
 import { H2 } from '@blueprintjs/core';
-import { NavLink, Outlet, useOutletContext, useParams } from 'react-router-dom';
+import { useEffect } from 'react';
+import { NavLink, Outlet, useLocation, useOutletContext, useParams } from 'react-router-dom';
 import { ErrorState, LoadingState } from '../../components/states';
 import { TrialStatusTag } from '../../components/trial-status-tag';
 import { paths } from '../../config/paths';
@@ -32,9 +33,12 @@ const sections: Array<{ label: string; href: (id: number) => string; shownTo?: (
 ];
 
 /** A trial's header and section tabs around its pages. */
-export function TrialLayout() {
+export function TrialLayout({ preloadSection }: { preloadSection?: (pathname: string) => void }) {
   const trialId = Number(useParams().trialId);
   const trial = useTrial(trialId);
+  const { pathname } = useLocation();
+  // The section's code is fetched while the trial loads, not after.
+  useEffect(() => preloadSection?.(pathname), [preloadSection, pathname]);
   if (!Number.isInteger(trialId) || trialId < 1) return <ErrorState title="No such trial" error={new Error('The address does not name a trial.')} />;
   if (trial.isPending) return <LoadingState what="the trial" />;
   if (trial.isError) return <ErrorState title="This trial could not be opened" error={trial.error} onRetry={() => trial.refetch()} />;

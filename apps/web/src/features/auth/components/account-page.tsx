@@ -1,12 +1,14 @@
-import { Button, Callout, Card, Checkbox, H3, H4, HTMLSelect, InputGroup } from '@blueprintjs/core';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { Button, Callout, Card, H3, H4 } from '@blueprintjs/core';
 import type { PublicUser } from '@friable/contracts';
 import { useMutation } from '@tanstack/react-query';
-import { useState, type FormEvent } from 'react';
-import { Field, FormErrorCallout } from '../../../components/field-errors';
-import { ApiError } from '../../../lib/api-client';
+import { useForm } from 'react-hook-form';
+import { FormErrorCallout } from '../../../components/field-errors';
+import { CheckboxField, SelectField, TextField } from '../../../components/form-fields';
 import { formatDate } from '../../../lib/format';
 import { useChangePassword, useUpdateMySettings } from '../api/account';
 import { logoutEverywhere } from '../api/logout';
+import { changePasswordSchema, settingsSchema, type ChangePasswordValues, type SettingsValues } from './auth-schemas';
 
 /** Locales offered for numbers and dates; '' follows the browser. */
 const LOCALES: Array<[string, string]> = [
@@ -44,32 +46,26 @@ export function AccountPage({ me, onSignedOutEverywhere }: { me: Me; onSignedOut
 
 function SettingsCard({ me }: { me: Me }) {
   const update = useUpdateMySettings();
-  const [name, setName] = useState(me.name);
-  const [locale, setLocale] = useState(me.locale ?? '');
-  const [reminders, setReminders] = useState(me.emailReminders ?? true);
-  const [receipts, setReceipts] = useState(me.emailReceipts ?? true);
-  function submit(event: FormEvent) {
-    event.preventDefault();
-    update.mutate({ name: name.trim(), locale: locale || null, emailReminders: reminders, emailReceipts: receipts });
-  }
+  const { control, handleSubmit } = useForm<SettingsValues>({
+    resolver: zodResolver(settingsSchema),
+    defaultValues: { name: me.name, locale: me.locale ?? '', emailReminders: me.emailReminders ?? true, emailReceipts: me.emailReceipts ?? true },
+  });
+  const submit = handleSubmit((values) => update.mutate({ ...values, locale: values.locale || null }));
   return (
     <Card elevation={0} className="fr-account__card" aria-label="Name, numbers and e-mails">
       <H4>Name, numbers and e-mails</H4>
       <form onSubmit={submit} noValidate>
-        <Field label="Display name" field="name" error={update.error} help="Shown on the Team, in the Activity and on your sign-offs.">
-          <InputGroup id="fr-field-name" value={name} onValueChange={setName} maxLength={120} />
-        </Field>
-        <Field label="Numbers and dates" field="locale" error={update.error} help="How Friable writes and reads numbers and dates for you.">
-          <HTMLSelect id="fr-field-locale" value={locale} onChange={(e) => setLocale(e.currentTarget.value)} fill>
-            {LOCALES.map(([tag, label]) => (
-              <option key={tag} value={tag}>
-                {label}
-              </option>
-            ))}
-          </HTMLSelect>
-        </Field>
-        <Checkbox label="E-mail me when a round is due at my sites" checked={reminders} onChange={(e) => setReminders(e.currentTarget.checked)} />
-        <Checkbox label="E-mail me a receipt after each upload" checked={receipts} onChange={(e) => setReceipts(e.currentTarget.checked)} />
+        <TextField control={control} name="name" label="Display name" serverError={update.error} help="Shown on the Team, in the Activity and on your sign-offs." maxLength={120} />
+        <SelectField
+          control={control}
+          name="locale"
+          label="Numbers and dates"
+          serverError={update.error}
+          help="How Friable writes and reads numbers and dates for you."
+          options={LOCALES.map(([value, label]) => ({ value, label }))}
+        />
+        <CheckboxField control={control} name="emailReminders" label="E-mail me when a round is due at my sites" />
+        <CheckboxField control={control} name="emailReceipts" label="E-mail me a receipt after each upload" />
         <FormErrorCallout error={update.error} shownFields={['name', 'locale']} />
         {update.isSuccess && (
           <p role="status" className="fr-muted">
@@ -84,45 +80,23 @@ function SettingsCard({ me }: { me: Me }) {
 
 function PasswordCard() {
   const change = useChangePassword();
-  const [current, setCurrent] = useState('');
-  const [next, setNext] = useState('');
-  const [again, setAgain] = useState('');
-  const mismatch = again.length > 0 && next !== again;
-  function submit(event: FormEvent) {
-    event.preventDefault();
-    if (mismatch) return;
-    change.mutate(
-      { currentPassword: current, newPassword: next },
-      {
-        onSuccess: () => {
-          setCurrent('');
-          setNext('');
-          setAgain('');
-        },
-      },
-    );
-  }
+  const { control, handleSubmit, reset } = useForm<ChangePasswordValues>({ resolver: zodResolver(changePasswordSchema), defaultValues: { currentPassword: '', newPassword: '', again: '' } });
+  const submit = handleSubmit(({ currentPassword, newPassword }) => change.mutate({ currentPassword, newPassword }, { onSuccess: () => reset() }));
   return (
     <Card elevation={0} className="fr-account__card" aria-label="Password">
       <H4>Password</H4>
       <p className="fr-muted">At least 12 characters; a few unrelated words are easy to remember and hard to guess. Very common passwords are refused.</p>
       <form onSubmit={submit} noValidate>
-        <Field label="Current password" field="currentPassword" error={change.error}>
-          <InputGroup id="fr-field-currentPassword" type="password" autoComplete="current-password" value={current} onValueChange={setCurrent} />
-        </Field>
-        <Field label="New password" field="newPassword" error={change.error}>
-          <InputGroup id="fr-field-newPassword" type="password" autoComplete="new-password" value={next} onValueChange={setNext} />
-        </Field>
-        <Field label="New password again" field="again" error={mismatch ? new ApiError(422, 'The two new passwords differ.', [{ field: 'again', message: 'The two new passwords differ.' }]) : null}>
-          <InputGroup id="fr-field-again" type="password" autoComplete="new-password" value={again} onValueChange={setAgain} />
-        </Field>
+        <TextField control={control} name="currentPassword" label="Current password" serverError={change.error} type="password" autoComplete="current-password" />
+        <TextField control={control} name="newPassword" label="New password" serverError={change.error} type="password" autoComplete="new-password" />
+        <TextField control={control} name="again" label="New password again" type="password" autoComplete="new-password" />
         <FormErrorCallout error={change.error} shownFields={['currentPassword', 'newPassword']} />
         {change.isSuccess && (
           <Callout intent="success" role="status" className="fr-gap">
             {change.data.message}
           </Callout>
         )}
-        <Button type="submit" intent="primary" text="Change the password" loading={change.isPending} disabled={!current || !next || next !== again} />
+        <Button type="submit" intent="primary" text="Change the password" loading={change.isPending} />
       </form>
     </Card>
   );

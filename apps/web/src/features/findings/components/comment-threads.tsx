@@ -1,12 +1,18 @@
 import { Button, Tag, TextArea } from '@blueprintjs/core';
 import type { SnapshotComment, TrialDetail } from '@friable/contracts';
+import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
+import { Controller, useForm } from 'react-hook-form';
+import { z } from 'zod';
 import { ConfirmButton } from '../../../components/confirm-button';
 import { formatDate } from '../../../lib/format';
 import { useAddAnalysisComment, useChangeAnalysisComment, useDeleteAnalysisComment } from '../api/add-analysis-comment';
 import { useAnalysisComments } from '../api/get-analysis-comments';
 
 type Props = { trial: TrialDetail; analysisId: number; meId?: number };
+
+/** A comment as typed: some words, at most 4,000 characters (the server checks again). */
+const commentSchema = z.object({ body: z.string().trim().min(1, 'Write the comment first.').max(4000, 'A comment is at most 4,000 characters.') });
 
 /** A text box with its send button, for a new comment, a reply or an edit. */
 function CommentForm({
@@ -26,23 +32,24 @@ function CommentForm({
   onSubmit: (body: string, clear: () => void) => void;
   onCancel?: () => void;
 }) {
-  const [body, setBody] = useState(initial);
+  const { control, handleSubmit, reset, formState } = useForm<{ body: string }>({ resolver: zodResolver(commentSchema), defaultValues: { body: initial } });
+  const problem = formState.errors.body?.message ?? error?.message;
   return (
-    <form
-      className="fr-comment-form"
-      onSubmit={(event) => {
-        event.preventDefault();
-        if (body.trim()) onSubmit(body.trim(), () => setBody(''));
-      }}
-    >
-      <TextArea aria-label={label} value={body} onChange={(e) => setBody(e.target.value)} fill rows={2} maxLength={4000} />
-      {error && (
+    <form className="fr-comment-form" noValidate onSubmit={handleSubmit(({ body }) => onSubmit(body, () => reset({ body: '' })))}>
+      <Controller
+        control={control}
+        name="body"
+        render={({ field }) => (
+          <TextArea aria-label={label} name={field.name} value={field.value} onChange={(e) => field.onChange(e.target.value)} onBlur={field.onBlur} inputRef={field.ref} fill rows={2} maxLength={4000} />
+        )}
+      />
+      {problem && (
         <p className="fr-error-line" role="alert">
-          {error.message}
+          {problem}
         </p>
       )}
       <div className="fr-findings-actions">
-        <Button type="submit" icon="comment" text={submitText} loading={pending} disabled={!body.trim()} />
+        <Button type="submit" icon="comment" text={submitText} loading={pending} />
         {onCancel && <Button text="Cancel" onClick={onCancel} />}
       </div>
     </form>

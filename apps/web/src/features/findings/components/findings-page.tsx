@@ -22,6 +22,7 @@ import { ApiError } from '../../../lib/api-client';
 import { useDownloadBundle } from '../api/download-bundle';
 import { useDownloadExport } from '../api/download-export';
 import { findingsQueryOptions, getAnovaFindings, useFindings } from '../api/get-findings';
+import { useFindingsSummary } from '../api/get-findings-summary';
 import { useSiteRounds } from '../hooks/use-site-rounds';
 import { useSiteMeans } from '../hooks/use-site-means';
 import { AnalysisChoices, Choice, defaultAnalysisOptions, type AnalysisOptions } from './analysis-choices';
@@ -30,6 +31,7 @@ import { ModelFindingsView } from './models/model-findings-view';
 import { ModelPicker } from './models/model-picker';
 import { SnapshotView } from './snapshot-view';
 import { SnapshotsPanel } from './snapshots-panel';
+import { ValuesSummary } from './values-summary';
 
 const oneOf = <T extends string>(allowed: readonly T[], value: string | null): T | undefined => (allowed.includes(value as T) ? (value as T) : undefined);
 
@@ -103,6 +105,8 @@ export function FindingsPage({ trial, meId }: { trial: TrialDetail; meId?: numbe
         }
       : null;
   const findings = useFindings(trial.id, query);
+  // The values as recorded answer at once (no engine): the first table on screen while the analysis is computed.
+  const summary = useFindingsSummary(trial.id, query && { measureId: query.measureId, ...(query.roundId ? { roundId: query.roundId } : {}), ...(query.siteId ? { siteId: query.siteId } : {}) });
   const noData = findings.error instanceof ApiError && findings.error.status === 422 && /no values/i.test(findings.error.message);
   const analysedRoundId = findings.data?.context.choices.roundId;
   const round = chosenRound ?? rounds.find((r) => r.id === analysedRoundId) ?? rounds[0];
@@ -276,7 +280,17 @@ export function FindingsPage({ trial, meId }: { trial: TrialDetail; meId?: numbe
         </p>
       )}
       {findings.isPending ? (
-        <LoadingState what="the analysis" />
+        summary.data ? (
+          <>
+            <p className="fr-findings-caption">
+              <FindingsCaption findings={{ context: summary.data }} />
+            </p>
+            <ValuesSummary summary={summary.data} treatmentNames={treatmentNames} analysing />
+            <LoadingState what="the analysis" />
+          </>
+        ) : (
+          <LoadingState what="the analysis" />
+        )
       ) : findings.isError && !data ? (
         noData ? (
           <EmptyState title="No values to analyse yet" description={findings.error.message} />
@@ -310,6 +324,7 @@ export function FindingsPage({ trial, meId }: { trial: TrialDetail; meId?: numbe
               onOpen={(id) => choose({ analysis: String(id) })}
             />
           )}
+          {summary.data && summary.data.round.id === data.context.round.id && <ValuesSummary summary={summary.data} treatmentNames={treatmentNames} />}
         </>
       ) : null}
     </div>

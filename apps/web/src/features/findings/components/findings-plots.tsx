@@ -3,7 +3,7 @@ import { probit } from 'simple-statistics';
 import type { AnovaAnswer, SeparationMethod } from '@friable/contracts';
 import { styleOf, treatmentStyles, type TreatmentStyle } from '../../../lib/treatment-style';
 import type { FindingsPlotInputs, PlotSeries } from './plot-inputs';
-import { PlotlyChart } from './plotly-chart';
+import { LazyPlotlyChart } from './lazy-plotly-chart';
 
 // Friable's earth tones for what is not a treatment (sites, residuals); treatments keep their own style.
 const palette = ['#5b4332', '#b5603d', '#7d9470', '#c9a227', '#4f6d8a', '#8c5a7a', '#3f7f7a', '#a3785a', '#6b6b6b', '#d08c60'];
@@ -39,8 +39,8 @@ export interface FindingsPlotsProps extends FindingsPlotInputs {
   control?: string;
 }
 
-/** Every Findings plot: values by treatment, means with SEs and letters, interaction, residuals, Q–Q, drainage, time. */
-export default function FindingsPlots({ answer, method, only, measureName, unit, values, interaction, notDrained, overTime, treatmentOrder, control }: FindingsPlotsProps) {
+/** Every Findings plot (each loaded and drawn as it comes into view): values by treatment, means with SEs and letters, interaction, residuals, Q–Q, drainage, time. */
+export function FindingsPlots({ answer, method, only, measureName, unit, values, interaction, notDrained, overTime, treatmentOrder, control }: FindingsPlotsProps) {
   const treatments = answer.means.map((m) => m.treatment);
   const styles = treatmentStyles([...(treatmentOrder ?? []), ...treatments], control);
   const style = (code: string) => styleOf(styles, code);
@@ -59,7 +59,7 @@ export default function FindingsPlots({ answer, method, only, measureName, unit,
   return (
     <div className="fr-findings-plots">
       {shown('values') && (
-        <PlotlyChart
+        <LazyPlotlyChart
           label="Values by treatment"
           title="Values by treatment"
           data={[
@@ -96,7 +96,7 @@ export default function FindingsPlots({ answer, method, only, measureName, unit,
         />
       )}
       {shown('means') && (
-        <PlotlyChart
+        <LazyPlotlyChart
           label="Means with standard errors and letters"
           title={letters ? 'Means ± SE, with letters' : 'Means ± SE'}
           data={[
@@ -122,7 +122,7 @@ export default function FindingsPlots({ answer, method, only, measureName, unit,
         />
       )}
       {!only && interaction && interaction.length > 1 && (
-        <PlotlyChart
+        <LazyPlotlyChart
           label="Site by treatment interaction"
           title="Site × treatment: each site's means"
           data={seriesTraces(interaction)}
@@ -130,7 +130,7 @@ export default function FindingsPlots({ answer, method, only, measureName, unit,
         />
       )}
       {!only && (
-        <PlotlyChart
+        <LazyPlotlyChart
           label="Residuals against fitted values"
           title="Residuals against fitted values"
           data={[
@@ -151,7 +151,7 @@ export default function FindingsPlots({ answer, method, only, measureName, unit,
         />
       )}
       {!only && (
-        <PlotlyChart
+        <LazyPlotlyChart
           label="Normal quantile plot of the residuals"
           title="Normal quantile plot of the residuals"
           data={[
@@ -162,7 +162,7 @@ export default function FindingsPlots({ answer, method, only, measureName, unit,
         />
       )}
       {!only && notDrained && notDrained.series.length > 0 && (
-        <PlotlyChart
+        <LazyPlotlyChart
           label="Share of plots not yet drained"
           title="Share of plots not yet drained"
           data={seriesTraces(notDrained.series, styles).map((trace) => ({ ...trace, line: { ...(trace as { line?: object }).line, shape: 'hv' } }) as Data)}
@@ -170,7 +170,7 @@ export default function FindingsPlots({ answer, method, only, measureName, unit,
         />
       )}
       {!only && overTime && overTime.some((s) => s.points.length > 1) && (
-        <PlotlyChart
+        <LazyPlotlyChart
           label="Treatment means over time"
           title="Treatment means across rounds"
           data={seriesTraces(overTime, styles, true)}

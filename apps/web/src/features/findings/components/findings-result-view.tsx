@@ -28,8 +28,8 @@ export function FindingsResultView({ findings, treatmentNames, interaction }: { 
   );
 }
 
-/** "drain time (s) · Day 14 · all sites combined (…)", the line above an analysis (rounds over time: "Day 0 to Day 14"). */
-export function FindingsCaption({ findings }: { findings: FindingsAnswer }) {
+/** "drain time (s) · Day 14 · all sites combined (…)", the line above an analysis (rounds over time: "Day 0 to Day 14"); also from the values' summary. */
+export function FindingsCaption({ findings }: { findings: Pick<FindingsAnswer, 'context'> | { context: Pick<FindingsAnswer['context'], 'measure' | 'round' | 'scope'> } }) {
   const { measure, round, scope } = findings.context;
   const rounds = 'rounds' in findings.context && findings.context.rounds && findings.context.rounds.length > 1 ? findings.context.rounds : null;
   return (

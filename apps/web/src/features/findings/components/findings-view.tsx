@@ -4,7 +4,7 @@ import { AnalysisCautions } from './analysis-cautions';
 import { AnovaTable } from './anova-table';
 import { ComparisonsTable } from './comparisons-table';
 import { DesignAnalysisPanel } from './design-analysis-panel';
-import { LazyFindingsPlots } from './lazy-findings-plots';
+import { FindingsPlots } from './findings-plots';
 import { MeansTable } from './means-table';
 import type { FindingsPlotInputs } from './plot-inputs';
 import { RankTestPanel, type RankTestResult } from './rank-test-panel';
@@ -26,7 +26,7 @@ export interface FindingsViewProps {
   plots: FindingsPlotInputs;
 }
 
-/** The whole answer of one analysis: tables, the rank test, cautions and the plots (loaded lazily). */
+/** The whole answer of one analysis: tables, the rank test, cautions and the plots (each drawn as it comes into view). */
 export function FindingsView(props: FindingsViewProps) {
   const { answer, method, alpha, control, decimals, unit } = props;
   return (
@@ -52,7 +52,7 @@ export function FindingsView(props: FindingsViewProps) {
         <h3 id="fr-plots-title" className="fr-findings-heading">
           Plots
         </h3>
-        <LazyFindingsPlots answer={answer} method={method} {...props.plots} treatmentOrder={props.treatmentNames ? Object.keys(props.treatmentNames) : undefined} control={control} />
+        <FindingsPlots answer={answer} method={method} {...props.plots} treatmentOrder={props.treatmentNames ? Object.keys(props.treatmentNames) : undefined} control={control} />
       </section>
     </div>
   );

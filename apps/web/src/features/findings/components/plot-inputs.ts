@@ -25,3 +25,6 @@ export interface FindingsPlotInputs {
   /** Across rounds: treatment means per round. */
   overTime?: PlotSeries[];
 }
+
+/** The height a chart draws at unless its layout says otherwise (its place is kept at it before it loads). */
+export const CHART_HEIGHT = 320;

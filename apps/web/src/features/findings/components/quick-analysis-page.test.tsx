@@ -3,7 +3,7 @@ import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { mockApi, renderWithApp } from '../../../test/render';
 import { QuickAnalysisPage } from './quick-analysis-page';
 
-vi.mock('./lazy-findings-plots', () => ({ LazyFindingsPlots: () => <p>plots</p> }));
+vi.mock('./findings-plots', () => ({ FindingsPlots: () => <p>plots</p> }));
 
 const person = { id: 1, email: 'rafe@example.org', name: 'Rafe', isAdmin: false, isActive: true, createdAt: '2026-12-01T00:00:00.000Z' };
 // The answer shape of POST /api/stats/anova; the numbers are Montgomery's hardness tips (STATISTICS.md B.1, R 4.2.2).

@@ -4,7 +4,7 @@ import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { mockApi, renderWithApp } from '../../../test/render';
 import { SnapshotView } from './snapshot-view';
 
-vi.mock('./lazy-findings-plots', () => ({ LazyFindingsPlots: () => <p>plots</p> }));
+vi.mock('./findings-plots', () => ({ FindingsPlots: () => <p>plots</p> }));
 
 // Invented numbers: these tests check what the page shows of a stored answer, not the arithmetic.
 const person = { id: 7, email: 'ines@example.org', name: 'Ines', isAdmin: false, isActive: true, createdAt: '2026-11-01T00:00:00.000Z' };

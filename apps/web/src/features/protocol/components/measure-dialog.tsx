@@ -1,4 +1,5 @@
-import { HTMLSelect, InputGroup, Radio, RadioGroup } from '@blueprintjs/core';
+import { HTMLSelect, Radio, RadioGroup } from '@blueprintjs/core';
+import { CodeNameFields } from './code-name-fields';
 import { MEASURE_KINDS, type Measure, type MeasureKind, type TrialDetail } from '@friable/contracts';
 import { useState } from 'react';
 import { Field, parseNumberFields } from '../../../components/field-errors';
@@ -84,14 +85,7 @@ export function MeasureDialog({ trial, measure, onClose }: { trial: TrialDetail;
   return (
     <>
       <FormDialog title={measure ? `Edit measure ${measure.code}` : 'Add measure'} icon="timeline-line-chart" wide onClose={onClose} onSubmit={submit} submitText={measure ? 'Save measure' : 'Add measure'} pending={save.isPending} error={error} shownFields={shownFields}>
-            <div className="fr-form-row">
-              <Field label="Code" field="code" error={error} help="Short, heads the CSV column, e.g. DRAIN.">
-                <InputGroup id="fr-field-code" value={code} onChange={(e) => setCode(e.target.value)} autoFocus />
-              </Field>
-              <Field label="Name" field="name" error={error}>
-                <InputGroup id="fr-field-name" value={name} onChange={(e) => setName(e.target.value)} />
-              </Field>
-            </div>
+            <CodeNameFields code={code} name={name} onCode={setCode} onName={setName} codeHelp="Short, heads the CSV column, e.g. DRAIN." error={error} />
             <div className="fr-form-row">
               <Field label="Unit" field="unit" error={error}>
                 <HTMLSelect id="fr-field-unit" value={unit} onChange={(e) => setUnit(e.target.value as MeasureUnitId)} fill>

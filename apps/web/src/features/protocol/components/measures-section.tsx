@@ -1,11 +1,11 @@
 import { Button, HTMLTable, Section, SectionCard } from '@blueprintjs/core';
 import type { Measure, TrialDetail } from '@friable/contracts';
 import { useState } from 'react';
-import { ConfirmButton } from '../../../components/confirm-button';
 import { EmptyState } from '../../../components/states';
 import { formatNumber, measureKindLabels } from '../../../lib/format';
 import { useDeleteProtocolItem } from '../api/delete-protocol-item';
 import { MeasureDialog } from './measure-dialog';
+import { RowActions } from './row-actions';
 import { unitSymbol } from './measure-units';
 
 function range(min: number | null, max: number | null, unit: string): string {
@@ -68,16 +68,11 @@ export function MeasuresSection({ trial, canEdit }: { trial: TrialDetail; canEdi
                     <td>{range(measure.hardMin, measure.hardMax, measure.unit)}</td>
                     <td>{measure.higherIsBetter ? 'higher' : 'lower'}</td>
                     {canEdit && (
-                      <td className="fr-actions">
-                        <Button variant="minimal" size="small" icon="edit" text="Edit" aria-label={`Edit ${measure.code}`} onClick={() => setEditing(measure)} />
-                        <ConfirmButton
-                          text="Remove"
-                          ariaLabel={`Remove ${measure.code}`}
-                          confirmText="Remove measure"
-                          question={`Remove measure ${measure.code} (${measure.name})? It also leaves every round.`}
-                          onConfirm={() => remove.mutate(measure.id)}
-                        />
-                      </td>
+                      <RowActions
+                        name={measure.code}
+                        onEdit={() => setEditing(measure)}
+                        remove={{ confirmText: 'Remove measure', question: `Remove measure ${measure.code} (${measure.name})? It also leaves every round.`, onConfirm: () => remove.mutate(measure.id) }}
+                      />
                     )}
                   </tr>
                 ))}

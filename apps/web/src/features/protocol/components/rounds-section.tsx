@@ -1,7 +1,6 @@
 import { Button, Checkbox, HTMLTable, InputGroup, Section, SectionCard } from '@blueprintjs/core';
 import type { AssessmentRound, RoundInput, TrialDetail } from '@friable/contracts';
 import { useState } from 'react';
-import { ConfirmButton } from '../../../components/confirm-button';
 import { Field, parseNumberFields } from '../../../components/field-errors';
 import { FormDialog } from '../../../components/form-dialog';
 import { NumberText } from '../../../components/number-text';
@@ -9,6 +8,7 @@ import { EmptyState } from '../../../components/states';
 import { formatDate, formatNumber } from '../../../lib/format';
 import { useDeleteProtocolItem } from '../api/delete-protocol-item';
 import { useVersionedForm } from '../../../lib/edit-conflict';
+import { RowActions } from './row-actions';
 import { VersionConflict } from './version-conflict';
 import { useSaveRound } from '../api/save-round';
 
@@ -48,10 +48,11 @@ export function RoundsSection({ trial, canEdit }: { trial: TrialDetail; canEdit:
                     <td>{round.dueDate ? formatDate(round.dueDate) : <span className="fr-muted">set a start date</span>}</td>
                     <td>{round.measureIds.length ? round.measureIds.map(measureCode).join(', ') : <span className="fr-muted">none chosen</span>}</td>
                     {canEdit && (
-                      <td className="fr-actions">
-                        <Button variant="minimal" size="small" icon="edit" text="Edit" aria-label={`Edit ${round.label}`} onClick={() => setEditing(round)} />
-                        <ConfirmButton text="Remove" ariaLabel={`Remove ${round.label}`} confirmText="Remove round" question={`Remove the round “${round.label}”?`} onConfirm={() => remove.mutate(round.id)} />
-                      </td>
+                      <RowActions
+                        name={round.label}
+                        onEdit={() => setEditing(round)}
+                        remove={{ confirmText: 'Remove round', question: `Remove the round “${round.label}”?`, onConfirm: () => remove.mutate(round.id) }}
+                      />
                     )}
                   </tr>
                 ))}

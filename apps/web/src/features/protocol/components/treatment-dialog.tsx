@@ -1,4 +1,5 @@
 import { Checkbox, HTMLSelect, InputGroup, Radio, RadioGroup, TextArea } from '@blueprintjs/core';
+import { CodeNameFields } from './code-name-fields';
 import { type RateBasis, type RateUnitId, type Treatment, type TreatmentInput, type TrialDetail } from '@friable/contracts';
 import { useState } from 'react';
 import { Field, parseNumberFields } from '../../../components/field-errors';
@@ -73,14 +74,7 @@ export function TreatmentDialog({ trial, treatment, onClose }: { trial: TrialDet
   return (
     <>
       <FormDialog title={treatment ? `Edit treatment ${treatment.code}` : 'Add treatment'} icon="lab-test" wide onClose={onClose} onSubmit={submit} submitText={treatment ? 'Save treatment' : 'Add treatment'} pending={save.isPending} error={error} shownFields={shownFields}>
-            <div className="fr-form-row">
-              <Field label="Code" field="code" error={error} help="Short, printed on plot labels, e.g. G40.">
-                <InputGroup id="fr-field-code" value={code} onChange={(e) => setCode(e.target.value)} autoFocus />
-              </Field>
-              <Field label="Name" field="name" error={error}>
-                <InputGroup id="fr-field-name" value={name} onChange={(e) => setName(e.target.value)} />
-              </Field>
-            </div>
+            <CodeNameFields code={code} name={name} onCode={setCode} onName={setName} codeHelp="Short, printed on plot labels, e.g. G40." error={error} />
             <Field label="Description" field="description" error={error} help="How it is applied, optional.">
               <TextArea id="fr-field-description" value={description} onChange={(e) => setDescription(e.target.value)} fill autoResize />
             </Field>

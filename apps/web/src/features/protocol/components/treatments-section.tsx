@@ -8,6 +8,7 @@ import { useDeleteProtocolItem } from '../api/delete-protocol-item';
 import { useAmounts } from '../api/get-amounts';
 import { appliedToWords } from './factor-roles';
 import { LayoutChangeConfirm, type PendingLayoutChange } from './layout-change-confirm';
+import { RowActions } from './row-actions';
 import { TreatmentDialog } from './treatment-dialog';
 
 /** The treatments, each with its rate and how much goes on one plot at every site. */
@@ -81,20 +82,18 @@ export function TreatmentsSection({ trial, canEdit }: { trial: TrialDetail; canE
                       )}
                     </td>
                     {canEdit && (
-                      <td className="fr-actions">
-                        <Button variant="minimal" size="small" icon="edit" text="Edit" aria-label={`Edit ${treatment.code}`} onClick={() => setEditing(treatment)} />
-                        {!factorial && (
-                          <Button
-                            variant="minimal"
-                            size="small"
-                            intent="danger"
-                            text="Remove"
-                            aria-label={`Remove ${treatment.code}`}
-                            loading={remove.isPending && remove.variables === treatment.id}
-                            onClick={() => setPending({ what: `Remove treatment ${treatment.code} (${treatment.name})`, confirmText: 'Remove treatment', proceed: () => remove.mutate(treatment.id) })}
-                          />
-                        )}
-                      </td>
+                      <RowActions
+                        name={treatment.code}
+                        onEdit={() => setEditing(treatment)}
+                        remove={
+                          factorial
+                            ? undefined
+                            : {
+                                loading: remove.isPending && remove.variables === treatment.id,
+                                ask: () => setPending({ what: `Remove treatment ${treatment.code} (${treatment.name})`, confirmText: 'Remove treatment', proceed: () => remove.mutate(treatment.id) }),
+                              }
+                        }
+                      />
                     )}
                   </tr>
                 ))}

@@ -1,8 +1,13 @@
-import { Button, Callout, Card, H4, HTMLSelect, InputGroup, TextArea } from '@blueprintjs/core';
-import type { TrialDetail, TrialRole } from '@friable/contracts';
-import { useState, type FormEvent } from 'react';
-import { Field, FormErrorCallout } from '../../../components/field-errors';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { Button, Callout, Card, H4 } from '@blueprintjs/core';
+import { TRIAL_ROLES, type TrialDetail, type TrialRole } from '@friable/contracts';
+import { useState } from 'react';
+import { useForm, useWatch } from 'react-hook-form';
+import { z } from 'zod';
+import { FormErrorCallout } from '../../../components/field-errors';
+import { SelectField, TextAreaField, TextField } from '../../../components/form-fields';
 import { roleLabels } from '../../../lib/format';
+import { emailRule, optionalTextRule } from '../../../lib/form-rules';
 import { useCreateInvitation } from '../api/create-invitation';
 
 const roleHelp: Record<TrialRole, string> = {
@@ -11,29 +16,38 @@ const roleHelp: Record<TrialRole, string> = {
   investigator: 'Manages the protocol, the sites and the team, like you.',
 };
 
+/** An invitation as typed: a collaborator needs a site (they run one garden); the others get none. */
+const inviteSchema = z
+  .object({
+    email: emailRule,
+    role: z.enum(TRIAL_ROLES),
+    siteId: z.string(),
+    message: optionalTextRule('A personal note', 1000),
+  })
+  .refine((values) => values.role !== 'collaborator' || values.siteId !== '', { path: ['siteId'], message: 'Choose the site this collaborator will run.' });
+type InviteValues = z.infer<typeof inviteSchema>;
+
+const emptyInvitation: InviteValues = { email: '', role: 'collaborator', siteId: '', message: '' };
+
 /** The investigator's form to invite someone by e-mail, with a role and, for collaborators, a site. */
 export function InviteForm({ trial }: { trial: TrialDetail }) {
   const create = useCreateInvitation(trial.id);
-  const [email, setEmail] = useState('');
-  const [role, setRole] = useState<TrialRole>('collaborator');
-  const [siteId, setSiteId] = useState<string>('');
-  const [message, setMessage] = useState('');
   const [sentTo, setSentTo] = useState<string | null>(null);
+  const { control, handleSubmit, reset } = useForm<InviteValues>({ resolver: zodResolver(inviteSchema), defaultValues: emptyInvitation });
+  const role = useWatch({ control, name: 'role' });
 
-  function submit(event: FormEvent) {
-    event.preventDefault();
+  const submit = handleSubmit((values) => {
     setSentTo(null);
     create.mutate(
-      { email: email.trim(), role, siteId: role === 'collaborator' && siteId ? Number(siteId) : null, message: message.trim() || null },
+      { email: values.email, role: values.role, siteId: values.role === 'collaborator' ? Number(values.siteId) : null, message: values.message || null },
       {
         onSuccess: (invitation) => {
           setSentTo(invitation.email);
-          setEmail('');
-          setMessage('');
+          reset({ ...emptyInvitation, role: values.role, siteId: values.siteId });
         },
       },
     );
-  }
+  });
 
   return (
     <Card elevation={0} className="fr-team__invite" aria-label="Invite someone">
@@ -46,38 +60,26 @@ export function InviteForm({ trial }: { trial: TrialDetail }) {
       )}
       <FormErrorCallout error={create.error} shownFields={['email', 'role', 'siteId', 'message']} />
       <form onSubmit={submit} noValidate className="fr-team__form">
-        <Field label="E-mail" field="email" error={create.error}>
-          <InputGroup id="fr-field-email" type="email" value={email} onValueChange={setEmail} placeholder="name@example.org" />
-        </Field>
-        <Field label="Role" field="role" error={create.error} help={roleHelp[role]}>
-          <HTMLSelect id="fr-field-role" value={role} onChange={(e) => setRole(e.currentTarget.value as TrialRole)} fill>
-            {(['collaborator', 'reviewer', 'investigator'] as const).map((r) => (
-              <option key={r} value={r}>
-                {roleLabels[r]}
-              </option>
-            ))}
-          </HTMLSelect>
-        </Field>
+        <TextField control={control} name="email" label="E-mail" serverError={create.error} type="email" placeholder="name@example.org" />
+        <SelectField
+          control={control}
+          name="role"
+          label="Role"
+          serverError={create.error}
+          help={roleHelp[role]}
+          options={(['collaborator', 'reviewer', 'investigator'] as const).map((r) => ({ value: r, label: roleLabels[r] }))}
+        />
         {role === 'collaborator' && (
-          <Field
+          <SelectField
+            control={control}
+            name="siteId"
             label="Site"
-            field="siteId"
-            error={create.error}
+            serverError={create.error}
             help={trial.sites.length ? 'The garden this person will run.' : 'Add the trial’s sites first: a collaborator is invited to one site.'}
-          >
-            <HTMLSelect id="fr-field-siteId" value={siteId} onChange={(e) => setSiteId(e.currentTarget.value)} fill>
-              <option value="">Choose a site…</option>
-              {trial.sites.map((site) => (
-                <option key={site.id} value={site.id}>
-                  {site.name}
-                </option>
-              ))}
-            </HTMLSelect>
-          </Field>
+            options={[{ value: '', label: 'Choose a site…' }, ...trial.sites.map((site) => ({ value: String(site.id), label: site.name }))]}
+          />
         )}
-        <Field label="Personal note (optional)" field="message" error={create.error} help="Included in the e-mail.">
-          <TextArea id="fr-field-message" value={message} onChange={(e) => setMessage(e.currentTarget.value)} rows={2} fill maxLength={1000} />
-        </Field>
+        <TextAreaField control={control} name="message" label="Personal note (optional)" serverError={create.error} help="Included in the e-mail." maxLength={1000} />
         <Button type="submit" intent="primary" icon="envelope" text="Send invitation" loading={create.isPending} />
       </form>
     </Card>

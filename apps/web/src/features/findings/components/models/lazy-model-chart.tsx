@@ -1,16 +1,16 @@
-import { lazy, Suspense } from 'react';
+import { lazy } from 'react';
+import { ChartSlot } from '../../../../components/chart-slot';
 import type { TreatmentStyle } from '../../../../lib/treatment-style';
-import { LoadingState } from '../../../../components/states';
-import type { ModelChartSpec } from './model-chart-spec';
+import { modelChartHeight, type ModelChartSpec } from './model-chart-spec';
 
-// Plotly is large: it loads only when a model view draws a chart.
+// Plotly is large: it loads with the first model chart that comes into view.
 const ModelChart = lazy(() => import('./model-chart'));
 
-/** One model chart, loaded on first use with a loading line in its place. */
+/** One model chart, kept in its place and drawn when it comes near the screen, one chart at a time. */
 export function LazyModelChart(props: { spec: ModelChartSpec; styles: ReadonlyMap<string, TreatmentStyle> }) {
   return (
-    <Suspense fallback={<LoadingState what="the chart" />}>
+    <ChartSlot height={modelChartHeight(props.spec) + 32} label={props.spec.title}>
       <ModelChart {...props} />
-    </Suspense>
+    </ChartSlot>
   );
 }

@@ -18,3 +18,15 @@ export type ModelChartSpec =
       series: Array<{ treatment: string; name: string; points: Array<{ round: string; day: number; mean: number; se: number }> }>;
     }
   | { chart: 'shares'; title: string; categories: string[]; rows: Array<{ treatment: string; name: string; shares: number[] }> };
+
+/** The height each model chart draws at (its place is kept at it before Plotly loads). */
+export function modelChartHeight(spec: ModelChartSpec): number {
+  switch (spec.chart) {
+    case 'ratios':
+      return 120 + 36 * spec.ratios.length;
+    case 'shares':
+      return 170 + 36 * spec.rows.length;
+    default:
+      return 380;
+  }
+}

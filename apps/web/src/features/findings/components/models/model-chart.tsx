@@ -1,7 +1,7 @@
 import type { Data } from 'plotly.js-dist-min';
 import { styleOf, type TreatmentStyle } from '../../../../lib/treatment-style';
 import { PlotlyChart } from '../plotly-chart';
-import type { ModelChartSpec } from './model-chart-spec';
+import { modelChartHeight, type ModelChartSpec } from './model-chart-spec';
 
 const withAlpha = (hex: string, alpha: number) => {
   const n = Number.parseInt(hex.slice(1), 16);
@@ -9,7 +9,7 @@ const withAlpha = (hex: string, alpha: number) => {
 };
 
 // The legend sits under the axis title, not on it.
-const BELOW = { height: 380, margin: { l: 56, r: 16, t: 40, b: 64 }, legend: { orientation: 'h' as const, y: -0.3, yanchor: 'top' as const } };
+const BELOW = { margin: { l: 56, r: 16, t: 40, b: 64 }, legend: { orientation: 'h' as const, y: -0.3, yanchor: 'top' as const } };
 
 /** A step curve per treatment with its band shaded between the limits (hv steps, as the estimate is right-continuous). */
 function curveTraces(spec: Extract<ModelChartSpec, { chart: 'not-drained' }>, styles: ReadonlyMap<string, TreatmentStyle>): Data[] {
@@ -51,6 +51,7 @@ function curveTraces(spec: Extract<ModelChartSpec, { chart: 'not-drained' }>, st
 
 /** The model charts of Findings: not-drained curves, ratios with intervals, means over time, predicted shares. */
 export default function ModelChart({ spec, styles }: { spec: ModelChartSpec; styles: ReadonlyMap<string, TreatmentStyle> }) {
+  const height = modelChartHeight(spec);
   switch (spec.chart) {
     case 'not-drained':
       return (
@@ -58,7 +59,7 @@ export default function ModelChart({ spec, styles }: { spec: ModelChartSpec; sty
           label={spec.title}
           title={spec.title}
           data={curveTraces(spec, styles)}
-          layout={{ ...BELOW, xaxis: { title: { text: `Time (${spec.unit})` }, rangemode: 'tozero' }, yaxis: { title: { text: 'Share not yet drained' }, tickformat: '.0%', range: [0, 1.05] } }}
+          layout={{ ...BELOW, height, xaxis: { title: { text: `Time (${spec.unit})` }, rangemode: 'tozero' }, yaxis: { title: { text: 'Share not yet drained' }, tickformat: '.0%', range: [0, 1.05] } }}
         />
       );
     case 'ratios':
@@ -82,7 +83,7 @@ export default function ModelChart({ spec, styles }: { spec: ModelChartSpec; sty
             ),
           ]}
           layout={{
-            height: 120 + 36 * spec.ratios.length,
+            height,
             margin: { l: 120, r: 16, t: 40, b: 48 },
             xaxis: { type: 'log', title: { text: spec.axis } },
             yaxis: { type: 'category', autorange: 'reversed' },
@@ -109,7 +110,7 @@ export default function ModelChart({ spec, styles }: { spec: ModelChartSpec; sty
               error_y: { type: 'data', array: series.points.map((p) => p.se), visible: true, thickness: 1, color: style.colour },
             } as Data;
           })}
-          layout={{ ...BELOW, xaxis: { title: { text: 'Day' }, tickvals: spec.days, ticktext: spec.dayLabels }, yaxis: { title: { text: spec.axis } } }}
+          layout={{ ...BELOW, height, xaxis: { title: { text: 'Day' }, tickvals: spec.days, ticktext: spec.dayLabels }, yaxis: { title: { text: spec.axis } } }}
         />
       );
     case 'shares':
@@ -130,7 +131,7 @@ export default function ModelChart({ spec, styles }: { spec: ModelChartSpec; sty
           )}
           layout={{
             barmode: 'stack',
-            height: 170 + 36 * spec.rows.length,
+            height,
             margin: { l: 120, r: 16, t: 40, b: 64 },
             legend: { orientation: 'h', y: -0.35, yanchor: 'top', traceorder: 'normal' },
             xaxis: { tickformat: '.0%', range: [0, 1], title: { text: 'Predicted share of plots' } },
