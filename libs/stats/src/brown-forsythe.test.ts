@@ -34,4 +34,10 @@ describe('brownForsythe', () => {
     expect(() => brownForsythe([[1, 2, 3]])).toThrow(/at least 2 groups, got 1/);
     expect(() => brownForsythe([[1], [2]])).toThrow(/more values than groups/);
   });
+
+  it('refuses in words when the distances from the medians do not vary within any group (no F of 0/0 or x/0)', () => {
+    // Pairs: each value lies exactly 1 (or 2) from its pair's median, so every within-group distance equals its mean.
+    expect(() => brownForsythe([[1, 3], [5, 7], [2, 4]])).toThrow(/do not vary within any treatment/);
+    expect(() => brownForsythe([[1, 3], [5, 9], [2, 4]])).toThrow(/do not vary within any treatment/);
+  });
 });

@@ -23,7 +23,7 @@ export interface BrownForsytheResult {
  * R's car::leveneTest default).
  *
  * @throws StatsInputError (a RangeError) for fewer than 2 groups, an empty group, a
- *   non-finite value, or no more values than groups.
+ *   non-finite value, no more values than groups, or distances that do not vary within any group.
  * @example brownForsythe(gearBatches) // NIST gear data: { f: 1.705918, dfBetween: 9, dfWithin: 90, p: 0.099083 }
  */
 export function brownForsythe(groups: readonly (readonly number[])[]): BrownForsytheResult {
@@ -53,6 +53,15 @@ export function brownForsythe(groups: readonly (readonly number[])[]): BrownFors
     (sum, group, i) => sum + group.reduce((inner, z) => inner + (z - groupMeans[i]) ** 2, 0),
     0,
   );
+  // Every distance equal to its group's mean distance (pairs of plots, say, with the same spread in every group):
+  // F would be 0/0 or x/0, which is no answer.
+  const scale = deviations.flat().reduce((sum, z) => sum + z * z, 0);
+  if (withinSumOfSquares <= 1e-20 * scale) {
+    throw new StatsInputError(
+      'no variation',
+      'the distances from each treatment’s median do not vary within any treatment, so there is nothing to compare the spreads against',
+    );
+  }
   const f = betweenSumOfSquares / dfBetween / (withinSumOfSquares / dfWithin);
   return Object.freeze({ f, dfBetween, dfWithin, p: fUpperTailProbability(f, dfBetween, dfWithin) });
 }
