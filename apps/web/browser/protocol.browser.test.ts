@@ -121,7 +121,7 @@ describe('an investigator designs a two-site trial in the browser', () => {
     const download = await downloading;
     expect(download.suggestedFilename()).toMatch(new RegExp(`^${code}-HB-Day-0\\.csv$`));
     const csv = readFileSync((await download.path())!, 'utf8').split('\r\n').filter(Boolean);
-    expect(csv[0]).toBe('plot label,block,treatment code,drain time (s),notes');
+    expect(csv[0]).toBe('plot label,block,treatment code,drain time (s),missing reason,notes');
     expect(csv).toHaveLength(13);
     const rows = csv.slice(1).map((line) => line.split(','));
     expect(rows.every((cells) => /^HB-/.test(cells[0]) && ['CTL', 'GYP', 'CMP'].includes(cells[2]) && cells.slice(3).every((c) => c === ''))).toBe(true);

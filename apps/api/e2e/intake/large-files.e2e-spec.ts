@@ -10,13 +10,13 @@ import { buildIntakeTrial, upload, type IntakeTrial } from './intake-support';
 
 const ROWS = 50_000;
 const PLOTS_PER_BLOCK = 100;
-const HEADERS = ['plot label', 'drain time (min)', 'crumble score (score)', 'water retained (mL)'];
+const HEADERS = ['plot label', 'drain time (min)', 'crumble score (score)', 'water retained (mL)', 'missing reason'];
 const labelOf = (index: number) => `LF-B${Math.floor(index / PLOTS_PER_BLOCK) + 1}-P${String((index % PLOTS_PER_BLOCK) + 1).padStart(3, '0')}`;
 
-/** A row's cells as typed: drain time in minutes (converted to seconds on the way in), ">10" not drained by the 10-minute cut-off, NA not measured. */
-function cellsOf(index: number): [string, string | number, number, number] {
+/** A row's cells as typed: drain time in minutes (converted to seconds on the way in), ">10" not drained by the 10-minute cut-off, NA not measured (with its reason). */
+function cellsOf(index: number): [string, string | number, number, number, string] {
   const drain = index % 50 === 0 ? '>10' : index % 97 === 0 ? 'NA' : Number(`${1 + (index % 9)}.${1 + (index % 8)}`);
-  return [labelOf(index), drain, 1 + (index % 5), Number(`${60 + (index % 300)}.${1 + (index % 9)}`)];
+  return [labelOf(index), drain, 1 + (index % 5), Number(`${60 + (index % 300)}.${1 + (index % 9)}`), drain === 'NA' ? 'bed flooded' : ''];
 }
 
 function csvOf(cells: (index: number) => ReadonlyArray<string | number>): Buffer {
@@ -133,7 +133,7 @@ describe('Intake: files of 50,000 rows', () => {
         WHERE o.round_id = ? AND p.label IN ('LF-B1-P001', 'LF-B1-P002', 'LF-B1-P098') ORDER BY p.label, m.code`,
       [rounds.workbook],
     );
-    // Row 1: ">10" min is not drained by the 600 s cut-off; row 2: 2.2 min is 132 s; row 98 (index 97): NA.
+    // Row 1: ">10" min is not drained by the 600 s cut-off; row 2: 2.2 min is 132 s; row 98 (index 97): NA, with its reason.
     expect(firstRows).toEqual([
       { label: 'LF-B1-P001', code: 'CS', valueText: '1', censored: 0, missingReason: null },
       { label: 'LF-B1-P001', code: 'DT', valueText: '600', censored: 1, missingReason: null },
@@ -142,7 +142,7 @@ describe('Intake: files of 50,000 rows', () => {
       { label: 'LF-B1-P002', code: 'DT', valueText: '132', censored: 0, missingReason: null },
       { label: 'LF-B1-P002', code: 'WR', valueText: '61.2', censored: 0, missingReason: null },
       { label: 'LF-B1-P098', code: 'CS', valueText: '3', censored: 0, missingReason: null },
-      { label: 'LF-B1-P098', code: 'DT', valueText: null, censored: 0, missingReason: null },
+      { label: 'LF-B1-P098', code: 'DT', valueText: null, censored: 0, missingReason: 'bed flooded' },
       { label: 'LF-B1-P098', code: 'WR', valueText: '157.8', censored: 0, missingReason: null },
     ]);
 
@@ -164,7 +164,7 @@ describe('Intake: files of 50,000 rows', () => {
     // Every water value changed, and row 49,999 (index 49,997) holds a word.
     const changed = csvOf((index) => {
       const cells = cellsOf(index);
-      return index === 49_997 ? [cells[0], cells[1], cells[2], 'about 80'] : [cells[0], cells[1], cells[2], Number(cells[3]) + 1];
+      return index === 49_997 ? [cells[0], cells[1], cells[2], 'about 80', cells[4]] : [cells[0], cells[1], cells[2], Number(cells[3]) + 1, cells[4]];
     });
     for (const roundId of [rounds.csv, rounds.fresh]) {
       const response = await upload(t, built.tokens.investigator, path(roundId), changed, 'changed.csv');

@@ -28,7 +28,7 @@ describe('Intake: the data sheet as a workbook', () => {
     const sheet = book.worksheets[0]!;
     expect(sheet.name).toBe('Day 0');
     const headers = (sheet.getRow(1).values as unknown[]).slice(1);
-    expect(headers).toEqual(['plot label', 'block', 'treatment code', 'drain time (s)', 'crumble score (score)', 'water retained (mL)', 'notes']);
+    expect(headers).toEqual(['plot label', 'block', 'treatment code', 'drain time (s)', 'crumble score (score)', 'water retained (mL)', 'missing reason', 'notes']);
     const labels = Object.keys(built.plots).filter((label) => label.startsWith('TG-')).sort();
     expect(sheet.rowCount).toBe(labels.length + 1);
     expect((sheet as unknown as { sheetProtection: { sheet: boolean } | null }).sheetProtection?.sheet).toBe(true);

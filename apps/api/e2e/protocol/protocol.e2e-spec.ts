@@ -153,7 +153,7 @@ describe('a full protocol built through the API', () => {
     expect(response.headers['content-disposition']).toMatch(/^attachment; filename="FP-[A-Z0-9]+-HL-Day-0\.csv"$/);
     const plots = (await t.http.get(`${base}/plots?siteId=${site.HL.id}`).set(auth)).body as Plot[];
     const expected =
-      'plot label,block,treatment code,drain time (s),crumble score (score),earthworms (count),crust resistance (kgf/cm2),notes\r\n' +
+      'plot label,block,treatment code,drain time (s),crumble score (score),earthworms (count),crust resistance (kgf/cm2),missing reason,notes\r\n' +
       plots.map((p) => `${p.label},${p.block},${p.treatmentCode},,,,,\r\n`).join('');
     expect(response.text).toBe(expected);
     // The upload reads each measure column's unit back from its header.

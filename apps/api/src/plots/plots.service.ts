@@ -74,11 +74,11 @@ export class PlotsService {
     }));
   }
 
-  /** The data-entry CSV of one site and round: a row per plot, a column per measure of the round, then notes. */
+  /** The data-entry CSV of one site and round: a row per plot, a column per measure of the round, then the reason for a value left NA and notes. */
   async template(trialId: number, siteId: number, roundId: number): Promise<{ filename: string; csv: string }> {
     const { stem, table } = await this.templateTable(trialId, siteId, roundId);
-    const fields = [...table.fixedHeaders, ...table.measures.map((entry) => entry.header), 'notes'];
-    const data = table.fixedRows.map((cells) => [...cells.map(String), ...table.measures.map(() => ''), '']);
+    const fields = [...table.fixedHeaders, ...table.measures.map((entry) => entry.header), 'missing reason', 'notes'];
+    const data = table.fixedRows.map((cells) => [...cells.map(String), ...table.measures.map(() => ''), '', '']);
     return { filename: `${stem}.csv`, csv: `${Papa.unparse({ fields, data }, { newline: '\r\n' })}\r\n` };
   }
 

@@ -56,7 +56,7 @@ describe('the data sheet as a workbook', () => {
     const book = new ExcelJS.Workbook();
     await book.xlsx.load(bytes as unknown as ArrayBuffer);
     const sheet = book.getWorksheet('Day 0')!;
-    expect(sheet.getRow(1).values).toEqual([undefined, 'plot label', 'block', 'treatment code', 'drain time (s)', 'crumble score (score)', 'notes']);
+    expect(sheet.getRow(1).values).toEqual([undefined, 'plot label', 'block', 'treatment code', 'drain time (s)', 'crumble score (score)', 'missing reason', 'notes']);
     expect(sheet.getRow(3).values).toEqual([undefined, 'HL-B1-P02', 1, 'G']);
     expect((sheet as unknown as { sheetProtection: { sheet: boolean } | null }).sheetProtection?.sheet).toBe(true);
     expect(sheet.getCell('A2').protection?.locked).not.toBe(false);

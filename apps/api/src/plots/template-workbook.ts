@@ -69,7 +69,7 @@ const column = (index: number) => {
  * Template workbook — the data sheet of one site and round as an .xlsx workbook: a row per plot
  * with its label, block and treatment written in and locked (sheet protection without a password,
  * so nobody retypes a label by accident), a column per measure open for typing with a rule on its
- * whole range (`measureRule`) and a note saying what it takes, then notes.
+ * whole range (`measureRule`) and a note saying what it takes, then the reason for a value left NA (Intake asks for one) and notes.
  *
  * Purpose: collaborators who keep their values in a spreadsheet fill in the same sheet Intake
  * reads; the rules catch a typing slip in the spreadsheet already. Written with exceljs's
@@ -85,11 +85,11 @@ export async function templateWorkbook(table: TemplateTable): Promise<Buffer> {
   const book = new ExcelJS.stream.xlsx.WorkbookWriter({ stream: output, useStyles: true, useSharedStrings: false });
   book.creator = 'Friable';
   const sheet = book.addWorksheet(sheetNameOf(table.sheetName), { views: [{ state: 'frozen', ySplit: 1, xSplit: 1 }] });
-  const headers = [...table.fixedHeaders, ...table.measures.map((entry) => entry.header), 'notes'];
+  const headers = [...table.fixedHeaders, ...table.measures.map((entry) => entry.header), 'missing reason', 'notes'];
   sheet.columns = headers.map((header, index) => ({
     header,
     width: Math.max(12, Math.min(40, header.length + 2)),
-    // Typing goes in the measure and notes columns; the plot's own columns stay as the plot plan has them.
+    // Typing goes in the measure, missing reason and notes columns; the plot's own columns stay as the plot plan has them.
     style: index >= table.fixedHeaders.length ? { protection: { locked: false } } : { protection: { locked: true } },
   }));
   sheet.getRow(1).font = { bold: true };
@@ -113,7 +113,7 @@ export async function templateWorkbook(table: TemplateTable): Promise<Buffer> {
     });
   });
   for (const cells of table.fixedRows) {
-    const row = sheet.addRow([...cells, ...table.measures.map(() => null), null]);
+    const row = sheet.addRow([...cells, ...table.measures.map(() => null), null, null]);
     for (let index = table.fixedHeaders.length; index < headers.length; index += 1) row.getCell(index + 1).protection = { locked: false };
     row.commit();
   }
