@@ -86,6 +86,8 @@ describe('an investigator designs a split plot in the browser', () => {
     await page.getByRole('button', { name: 'Add measure' }).click();
     await fillIn(page.getByRole('dialog'), 'Code', 'CRUST');
     await fillIn(page.getByRole('dialog'), 'Name', 'crust resistance');
+    // A softer crust is the aim: the dialog asks which way is better and picks neither.
+    await page.getByRole('dialog').getByText('Lower is better', { exact: true }).click();
     await submitDialog(page, 'Add measure');
     await page.getByRole('button', { name: 'Add round' }).click();
     await fillIn(page.getByRole('dialog'), 'Label', 'Day 30');

@@ -147,7 +147,7 @@ describe('split-plot and factorial designs through the API', () => {
     const plots = await expectStatus<Plot[]>(t.http.get(`${split.base}/plots?siteId=${siteId}`).set(split.auth), 200);
     const expected = [
       'plot label,block,whole plot,sub plot,treatment code,crust resistance (kgf/cm2),missing reason,notes',
-      ...plots.map((p) => `${p.label},${p.block},${p.wholePlot},${p.subPlot},${p.treatmentCode},,`),
+      ...plots.map((p) => `${p.label},${p.block},${p.wholePlot},${p.subPlot},${p.treatmentCode},,,`),
     ];
     expect(response.text).toBe(`${expected.join('\r\n')}\r\n`);
   });

@@ -154,7 +154,7 @@ describe('a full protocol built through the API', () => {
     const plots = (await t.http.get(`${base}/plots?siteId=${site.HL.id}`).set(auth)).body as Plot[];
     const expected =
       'plot label,block,treatment code,drain time (s),crumble score (score),earthworms (count),crust resistance (kgf/cm2),missing reason,notes\r\n' +
-      plots.map((p) => `${p.label},${p.block},${p.treatmentCode},,,,,\r\n`).join('');
+      plots.map((p) => `${p.label},${p.block},${p.treatmentCode},,,,,,\r\n`).join('');
     expect(response.text).toBe(expected);
     // The upload reads each measure column's unit back from its header.
     const headers = response.text.split('\r\n')[0].split(',').slice(3, 7);
