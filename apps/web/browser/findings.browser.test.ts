@@ -118,8 +118,11 @@ describe('Findings and Quick analysis', () => {
       const scope = page.getByLabel('Scope');
       const siteLabel = (await scope.locator('option').allInnerTexts())[1]!;
       await scope.selectOption({ label: siteLabel });
-      await page.locator('.fr-findings-caption').getByText(siteLabel).waitFor();
-      await page.locator('.fr-findings-caption').getByText(options[1]!).waitFor();
+      // The caption names the answer on screen; while a new choice is analysed the previous answer stays, marked
+      // "updating…", and a combined caption lists every site, so wait for the one-site answer itself.
+      const literal = (text: string) => text.replace(/[.*+?^${}()|[\]\\]/g, '\\$&');
+      const oneSite = new RegExp(`^${literal(options[1]!)}.*· ${literal(siteLabel)}$`, 's');
+      await expect.poll(() => page.locator('.fr-findings-caption').first().innerText(), { timeout: 30_000 }).toMatch(oneSite);
       expect(await page.getByRole('table', { name: 'Analysis of variance' }).innerText()).not.toContain('Site × treatment');
       await drawCharts(page);
       await screenshot(page, `findings-site-${viewport.name}`);
