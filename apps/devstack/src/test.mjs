@@ -17,6 +17,10 @@ ensureDebianPackages(['r-base-core', 'r-cran-emmeans', 'r-cran-multcomp', 'r-cra
   reason: 'R with emmeans, multcomp and car (the statistics reference implementation)',
   probe: () => commandExists('Rscript') && spawnSync('Rscript', ['-e', 'suppressMessages({library(emmeans); library(multcomp); library(jsonlite)})'], { stdio: 'ignore' }).status === 0,
 });
+ensureDebianPackages(['r-cran-survival', 'r-cran-nlme', 'r-cran-mass'], {
+  reason: 'R with survival, nlme and MASS (the reference for censored times, rounds over time, scores and counts)',
+  probe: () => commandExists('Rscript') && spawnSync('Rscript', ['-e', 'suppressMessages({library(survival); library(nlme); library(MASS)})'], { stdio: 'ignore' }).status === 0,
+});
 ensureDebianPackages(['r-cran-lme4', 'r-cran-pbkrtest', 'r-cran-lmertest'], {
   reason: 'R with lme4, pbkrtest and lmerTest (the mixed-model reference for factorials and split plots: Kenward–Roger and Satterthwaite)',
   probe: () => commandExists('Rscript') && spawnSync('Rscript', ['-e', 'suppressMessages({library(lme4); library(pbkrtest); library(lmerTest)})'], { stdio: 'ignore' }).status === 0,

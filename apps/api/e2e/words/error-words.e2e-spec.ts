@@ -61,6 +61,27 @@ describe('every error answer of the API names things as people see them', () => 
     expect(seen.length).toBeGreaterThan(operations.length);
   }, 120_000);
 
+  it('walks every route that reads choices from its address, with a wrong value in each', async () => {
+    const document = JSON.parse(JSON.stringify(createOpenApiDocument(t.app))) as {
+      paths: Record<string, Record<string, { parameters?: Array<{ in: string; name: string }> }>>;
+    };
+    const ids: Record<string, number> = { trialId: built.trialId, siteId: built.siteId, roundId: built.roundId, measureId: built.measures.DT };
+    let routes = 0;
+    for (const [path, methods] of Object.entries(document.paths)) {
+      const operation = methods.get;
+      const names = (operation?.parameters ?? []).filter((p) => p.in === 'query').map((p) => p.name);
+      if (!operation || names.length === 0 || path.startsWith('/api/auth') || path.includes('/dev/')) continue;
+      routes += 1;
+      const address = path.replace(/\{(\w+)\}/g, (_, name: string) => String(ids[name] ?? 1));
+      for (const name of names) {
+        const response = await t.http.get(address).query({ measureId: built.measures.DT, [name]: 'not-this' }).set(bearer(built.tokens.investigator));
+        if (response.status >= 400 && response.status < 500) record(`GET ${path}?${name}`, response.body);
+      }
+    }
+    expect(routes).toBeGreaterThan(5);
+    expect(seen.some(({ where }) => where.includes('/findings?'))).toBe(true);
+  }, 120_000);
+
   it('counts an upload’s rows as people do: the first row under the header is row 2 of the file', async () => {
     const csv = 'plot label,drain time (s)\nTG-B1-P01,abc\n';
     const response = await upload(t, built.tokens.collaborator, intakePath(built), Buffer.from(csv), 'bad.csv');

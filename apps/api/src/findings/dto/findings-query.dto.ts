@@ -22,27 +22,27 @@ const booleanText = ({ value }: { value: unknown }) => (value === 'true' || valu
 export class FindingsQueryDto {
   @ApiProperty({ description: 'The measure to analyse.' })
   @Type(() => Number)
-  @IsInt({ message: 'measureId must be a whole number' })
-  @Min(1, { message: 'measureId must be a whole number' })
+  @IsInt({ message: 'measure must be a whole number' })
+  @Min(1, { message: 'measure must be a whole number' })
   measureId: number;
 
   @ApiPropertyOptional({ description: 'The assessment round to analyse; leave out for the latest round holding values of the measure in this scope.' })
   @IsOptional()
   @Type(() => Number)
-  @IsInt({ message: 'roundId must be a whole number' })
-  @Min(1, { message: 'roundId must be a whole number' })
+  @IsInt({ message: 'round must be a whole number' })
+  @Min(1, { message: 'round must be a whole number' })
   roundId?: number;
 
-  @ApiPropertyOptional({ description: 'One site; leave out for all sites combined.' })
+  @ApiPropertyOptional({ description: 'One site; leave out for all sites combined (a trial with one site: that site).' })
   @IsOptional()
   @Type(() => Number)
-  @IsInt({ message: 'siteId must be a whole number' })
-  @Min(1, { message: 'siteId must be a whole number' })
+  @IsInt({ message: 'site must be a whole number' })
+  @Min(1, { message: 'site must be a whole number' })
   siteId?: number;
 
   @ApiPropertyOptional({ enum: ['random', 'fixed'], default: 'random', description: 'With all sites combined: random tests treatment against site × treatment.' })
   @IsOptional()
-  @IsIn(['random', 'fixed'], { message: 'sitesAre must be random or fixed' })
+  @IsIn(['random', 'fixed'], { message: 'sites must be random or fixed' })
   sitesAre?: 'random' | 'fixed';
 
   @ApiPropertyOptional({ enum: ANALYSIS_TRANSFORMS, default: 'none' })
@@ -52,21 +52,21 @@ export class FindingsQueryDto {
 
   @ApiPropertyOptional({ enum: SEPARATION_METHODS, default: 'tukey', description: 'Mean separation method.' })
   @IsOptional()
-  @IsIn(SEPARATION_METHODS, { message: `method must be one of ${SEPARATION_METHODS.join(', ')}` })
+  @IsIn(SEPARATION_METHODS, { message: `mean separation must be one of ${SEPARATION_METHODS.join(', ')}` })
   method?: SeparationMethod;
 
   @ApiPropertyOptional({ default: 0.05, minimum: 0.0001, maximum: 0.5 })
   @IsOptional()
   @Type(() => Number)
-  @IsNumber({}, { message: 'alpha must be a number' })
-  @Min(0.0001, { message: 'alpha must be at least 0.0001' })
-  @Max(0.5, { message: 'alpha must be at most 0.5' })
+  @IsNumber({}, { message: 'significance level must be a number' })
+  @Min(0.0001, { message: 'significance level must be at least 0.0001' })
+  @Max(0.5, { message: 'significance level must be at most 0.5' })
   alpha?: number;
 
   @ApiPropertyOptional({ default: false, description: 'Compute Fisher’s LSD even when the treatment F test is not significant.' })
   @IsOptional()
   @Transform(booleanText)
-  @IsBoolean({ message: 'forceLsd must be true or false' })
+  @IsBoolean({ message: 'LSD whatever the F test must be true or false' })
   forceLsd?: boolean;
 
   @ApiPropertyOptional({
@@ -96,14 +96,14 @@ export class FindingsQueryDto {
   @ApiPropertyOptional({ description: 'ancova: the measure whose values are the covariate; default the analysed measure.' })
   @IsOptional()
   @Type(() => Number)
-  @IsInt({ message: 'covariateMeasureId must be a whole number' })
-  @Min(1, { message: 'covariateMeasureId must be a whole number' })
+  @IsInt({ message: 'baseline measure must be a whole number' })
+  @Min(1, { message: 'baseline measure must be a whole number' })
   covariateMeasureId?: number;
 
   @ApiPropertyOptional({ description: 'ancova: the round whose values are the covariate; default the day-0 round (else the earliest earlier round with values).' })
   @IsOptional()
   @Type(() => Number)
-  @IsInt({ message: 'covariateRoundId must be a whole number' })
-  @Min(1, { message: 'covariateRoundId must be a whole number' })
+  @IsInt({ message: 'baseline round must be a whole number' })
+  @Min(1, { message: 'baseline round must be a whole number' })
   covariateRoundId?: number;
 }
