@@ -1,6 +1,8 @@
 // Benchmark of analyseTrial on large layouts: a multisite RCBD with Tukey and letters, and RCBDs up to
 // 1,000,000 plots. Run by `npm run bench -w libs/stats` (node --expose-gc) after `npx tsc -b libs/stats`.
-// Targets: multisite 50 sites × 10 blocks × 20 treatments < 100 ms; RCBD of 1,000,000 plots < 3 s and < 1 GB.
+// Targets: multisite 50 sites × 10 blocks × 20 treatments < 100 ms; RCBD of 1,000,000 plots < 3 s and < 1 GB;
+// Tukey on 100 treatments × 100 blocks (4,950 pairs) ≤ 150 ms; RCBD of 1,000,000 plots with one plot missing
+// (10,000 blocks × 100 treatments, its blocks absorbed) ≤ 10 s and < 1 GB.
 import { createRequire } from 'node:module';
 
 const require = createRequire(import.meta.url);
@@ -79,8 +81,16 @@ for (const [blocks, treatments] of [
   const request = { design: 'rcbd', meanSeparation: ['tukey'], observations: observations(1, blocks, treatments) };
   rows.push(measure(`rcbd ${blocks} blocks × ${treatments}, Tukey + letters`, request, blocks * treatments >= 1e6 ? 3 : 5));
 }
+const million = rows[rows.length - 1];
+const tukey = measure('rcbd 100 blocks × 100, Tukey (4,950 pairs) + letters', { design: 'rcbd', meanSeparation: ['tukey'], observations: observations(1, 100, 100) }, 5);
+rows.push(tukey);
+const incomplete = observations(1, 10000, 100);
+incomplete.splice(123457, 1);
+const missing = measure('rcbd 10000 blocks × 100, one plot missing, Tukey + letters', { design: 'rcbd', meanSeparation: ['tukey'], observations: incomplete }, 3);
+rows.push(missing);
 console.table(rows);
 const multisite = rows[3];
-const million = rows[rows.length - 1];
 console.log(`multisite 50×10×20: ${multisite['median ms']} ms (target < 100 ms)`);
 console.log(`rcbd 1,000,000 plots: ${million['median ms']} ms, peak RSS ${million['peak RSS MB']} MB (targets < 3000 ms, < 1024 MB)`);
+console.log(`Tukey 100 treatments × 100 blocks: ${tukey['median ms']} ms (target ≤ 150 ms)`);
+console.log(`rcbd 999,999 plots (one missing, blocks absorbed): ${missing['median ms']} ms, peak RSS ${missing['peak RSS MB']} MB (targets ≤ 10000 ms, < 1024 MB)`);

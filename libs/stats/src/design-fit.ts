@@ -1,4 +1,6 @@
-import { fitLinearModel, type ModelFactor, type ModelTerm, type SequentialTermRow } from './linear-model';
+import { fitAbsorbedLinearModel } from './absorbed-linear-model';
+import { StatsInputError } from './errors';
+import { fitLinearModel, type LinearModelFit, type ModelFactor, type ModelTerm, type SequentialTermRow } from './linear-model';
 
 /** The trial designs the engine analyses. */
 export type TrialDesign = 'crd' | 'rcbd' | 'factorial-rcbd' | 'multisite-rcbd';
@@ -245,6 +247,8 @@ function classicalFactorial(layout: TrialLayout): DesignFit {
 interface GridSpec {
   readonly factors: ModelFactor[];
   readonly terms: ModelTerm[];
+  /** How many leading terms are blocks (and the sites holding them), which a large layout absorbs. */
+  readonly blocking: number;
   /** Grid points (a level code per factor) and weights whose average gives treatment j's mean. */
   readonly treatmentGrid: (j: number) => { points: number[][]; weights: number[] };
 }
@@ -264,6 +268,7 @@ function leastSquaresSpec(layout: TrialLayout): GridSpec {
       return {
         factors: [layout.treatment],
         terms: [{ name: 'treatment', factors: [0] }],
+        blocking: 0,
         treatmentGrid: (j) => ({ points: [[j]], weights: [1] }),
       };
     case 'rcbd':
@@ -273,6 +278,7 @@ function leastSquaresSpec(layout: TrialLayout): GridSpec {
           { name: 'block', factors: [0] },
           { name: 'treatment', factors: [1] },
         ],
+        blocking: 1,
         treatmentGrid: (j) => ({ points: Array.from({ length: blockCount }, (_, b) => [b, j]), weights: uniform(blockCount) }),
       };
     case 'factorial-rcbd': {
@@ -287,6 +293,7 @@ function leastSquaresSpec(layout: TrialLayout): GridSpec {
           { name: b.name, factors: [2] },
           { name: `${a.name}:${b.name}`, factors: [1, 2] },
         ],
+        blocking: 1,
         treatmentGrid: (j) => ({
           points: Array.from({ length: blockCount }, (_, k) => [k, Math.floor(j / levelsB), j % levelsB]),
           weights: uniform(blockCount),
@@ -304,6 +311,7 @@ function leastSquaresSpec(layout: TrialLayout): GridSpec {
           { name: 'treatment', factors: [2] },
           { name: 'site:treatment', factors: [0, 2] },
         ],
+        blocking: 2,
         treatmentGrid: (j) => ({
           points: siteBlocks.flatMap((blocks, s) => blocks.map((block) => [s, block, j])),
           weights: siteBlocks.flatMap((blocks) => blocks.map(() => 1 / (sites * blocks.length))),
@@ -313,9 +321,24 @@ function leastSquaresSpec(layout: TrialLayout): GridSpec {
   }
 }
 
-function leastSquaresFit(layout: TrialLayout): DesignFit {
+/**
+ * The design matrix with every block as a column, or — when that is too large for QR, or when asked — the blocks
+ * absorbed (the same answer; the work then grows with the treatments, not the blocks).
+ */
+function linearFit(layout: TrialLayout, spec: GridSpec, absorbBlocks: boolean | undefined): LinearModelFit {
+  if (spec.blocking > 0 && absorbBlocks) return fitAbsorbedLinearModel(layout.y, spec.factors, spec.terms, spec.blocking);
+  try {
+    return fitLinearModel(layout.y, spec.factors, spec.terms);
+  } catch (error) {
+    const tooLarge = error instanceof StatsInputError && error.message.startsWith('layout too large');
+    if (!tooLarge || spec.blocking === 0 || absorbBlocks === false) throw error;
+    return fitAbsorbedLinearModel(layout.y, spec.factors, spec.terms, spec.blocking);
+  }
+}
+
+function leastSquaresFit(layout: TrialLayout, absorbBlocks: boolean | undefined): DesignFit {
   const spec = leastSquaresSpec(layout);
-  const fit = fitLinearModel(layout.y, spec.factors, spec.terms);
+  const fit = linearFit(layout, spec, absorbBlocks);
   const k = layout.treatment.levels.length;
   const contrasts = Array.from({ length: k }, (_, j) => {
     const grid = spec.treatmentGrid(j);
@@ -376,18 +399,19 @@ function leastSquaresFit(layout: TrialLayout): DesignFit {
  * multisite-rcbd — site, block:site, treatment, site:treatment. Complete balanced layouts (and every
  * one-way layout) use the classical closed-form sums of squares about cell means, which are exact for
  * them and need no design matrix (a million plots fit in well under a second). Any other layout — missing
- * plots, unequal blocks per site — is fitted by Householder QR (`fitLinearModel`), and its least-squares
- * means average the fitted cell values over blocks (and over sites with equal weight), as R's emmeans does.
+ * plots, unequal blocks per site — is fitted by Householder QR (`fitLinearModel`), or with its blocks absorbed
+ * (`fitAbsorbedLinearModel`) when the design matrix would be too large for QR (`absorbBlocks`: true always
+ * absorbs, false never does); its least-squares means average the fitted cell values over blocks (and over sites with equal weight), as R's emmeans does.
  *
  * Reference: Steel, Torrie & Dickey (1997), Principles and Procedures of Statistics, 3rd ed., ch. 9 and 15;
  * Searle, Speed & Milliken (1980), Population marginal means, Am. Stat. 34:216.
  * @throws StatsInputError (from fitLinearModel) when a least-squares mean needs an empty cell.
  * @example fitTrialDesign(layout).rows; // [{ term: 'block', df: 3, ss: 0.825 }, { term: 'treatment', df: 3, ss: 0.385 }]
  */
-export function fitTrialDesign(layout: TrialLayout, options: { forceLeastSquares?: boolean } = {}): DesignFit {
+export function fitTrialDesign(layout: TrialLayout, options: { forceLeastSquares?: boolean; absorbBlocks?: boolean } = {}): DesignFit {
   if (!options.forceLeastSquares) {
     if (layout.design === 'crd') return classicalOneWay(layout);
     if (isCompleteBlocked(layout)) return layout.design === 'factorial-rcbd' ? classicalFactorial(layout) : classicalBlocked(layout);
   }
-  return leastSquaresFit(layout);
+  return leastSquaresFit(layout, options.absorbBlocks);
 }

@@ -1,6 +1,7 @@
 export { StatsInputError } from './errors';
 export { centreDecimalValues, type CentredValues } from './decimal-values';
 export { fUpperTailProbability, regularizedIncompleteBeta, studentTTwoSidedPValue, studentTQuantile } from './distributions';
+export { ABSORBED_LIMITS, fitAbsorbedLinearModel } from './absorbed-linear-model';
 export { fitLinearModel, type LinearEstimate, type LinearModelFit, type ModelFactor, type ModelTerm, type SequentialTermRow } from './linear-model';
 export { fitTrialDesign, type DesignFit, type FactorLevelMeans, type TrialDesign, type TrialLayout } from './design-fit';
 export { codeFactor, prepareTrialLayout, type PreparedLayout, type TrialObservation } from './trial-layout';
