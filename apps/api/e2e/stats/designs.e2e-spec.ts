@@ -21,7 +21,11 @@ interface FixtureCase {
   design: string;
   factorNames: string[];
   observations: unknown[];
-  expected: { tests?: { term: string; numDf: number; denDf: number; f: number; p: number }[]; rows?: { term: string; df: number; ss: number; f: number | null; p?: number }[] };
+  expected: {
+    tests?: { term: string; numDf: number; denDf: number; f: number; p: number }[];
+    rows?: { term: string; df: number; ss: number; f: number | null; p?: number }[];
+    satterthwaite?: { call: string; tests: { term: string; numDf: number; denDf: number; f: number; p: number }[] };
+  };
 }
 const fixtures: FixtureCase[] = JSON.parse(readFileSync(resolve(reference, 'r-design-fixtures.json'), 'utf8')).cases;
 const fixture = (id: string) => fixtures.find((c) => c.id === id)!;
@@ -96,6 +100,33 @@ describe('POST /api/stats/anova for factorials and split plots', () => {
       }
       expect(response.body.varianceComponents.length).toBeGreaterThan(1);
     }
+  });
+
+  it('ddf: satterthwaite gives lmerTest’s denominator degrees of freedom on the same unbalanced split plot', async () => {
+    const entry = fixture('design-08');
+    const response = await analyse({ design: entry.design, factorNames: entry.factorNames, observations: entry.observations, ddf: 'satterthwaite' });
+    expect(response.status).toBe(200);
+    expect(response.body.model.reason).toMatch(/Satterthwaite/);
+    // The fixture's call: anova(lmerTest::as_lmerModLmerTest(m), type = 3, ddf = "Satterthwaite") (R, lmerTest 3.1.3).
+    for (const test of entry.expected.satterthwaite!.tests) {
+      const row = rowOf(response.body, test.term);
+      expect(row.numDf).toBe(test.numDf);
+      expect(relative(row.denDf, test.denDf), `${test.term} denDf`).toBeLessThan(1e-5);
+      expect(relative(row.f, test.f), `${test.term} F`).toBeLessThan(1e-5);
+    }
+    const refused = await analyse({ design: entry.design, factorNames: entry.factorNames, observations: entry.observations, ddf: 'containment' });
+    expect(refused.status).toBe(422);
+    expect(JSON.stringify(refused.body)).toContain('ddf must be kenward-roger or satterthwaite');
+  });
+
+  it('a value of null is a plot not measured: left out, counted in a warning, the same answer as without the row', async () => {
+    const entry = fixture('design-08');
+    const withNull = (entry.observations as Array<{ value: unknown }>).map((o, i) => (i === 0 ? { ...o, value: null } : o));
+    const left = await analyse({ design: entry.design, factorNames: entry.factorNames, observations: withNull });
+    const without = await analyse({ design: entry.design, factorNames: entry.factorNames, observations: entry.observations.slice(1) });
+    expect([left.status, without.status]).toEqual([200, 200]);
+    expect(left.body.warnings.join(' ')).toMatch(/1 missing value \(null\) was left out/);
+    expect(left.body.anova).toEqual(without.body.anova);
   });
 
   it('a block left with a single plot is analysed, with a warning, never refused', async () => {

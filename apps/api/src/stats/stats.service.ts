@@ -28,7 +28,8 @@ function requireLabel(value: string | undefined, row: number, field: string): st
 /** The engine's frozen result as plain JSON data (NaN and ±Infinity become null, as JSON writes them). */
 const plain = <T>(value: unknown): T => JSON.parse(JSON.stringify(value)) as T;
 
-const toNumber = (value: number | string) => (typeof value === 'number' ? value : Number(value));
+/** A rank test's value (its observation list refuses null, so none reaches here). */
+const toNumber = (value: number | string | null) => (typeof value === 'number' ? value : Number(value));
 
 @Injectable()
 export class StatsService {

@@ -1395,6 +1395,12 @@ export interface components {
              * @example CTRL
              */
             control?: string;
+            /**
+             * @description REML fits: the denominator degrees of freedom of the F tests and comparisons (as pbkrtest or lmerTest give them).
+             * @default kenward-roger
+             * @enum {string}
+             */
+            ddf?: "kenward-roger" | "satterthwaite";
             /** @enum {string} */
             design: "crd" | "rcbd" | "factorial-crd" | "factorial-rcbd" | "split-plot" | "split-split-plot" | "multisite-rcbd" | "multisite-factorial-rcbd" | "multisite-split-plot";
             /**
@@ -1573,10 +1579,10 @@ export interface components {
             /** @example GYP */
             treatment: string;
             /**
-             * @description The drain time, or the cut-off the plot had not drained by.
+             * @description The drain time, or the cut-off the plot had not drained by; null for a plot not timed, left out (the answer says how many were).
              * @example 212.5
              */
-            value: number | string;
+            value: (number | string) | null;
         };
         CensoredRequestDto: {
             /**
@@ -1811,7 +1817,7 @@ export interface components {
             method?: "lsd" | "tukey" | "dunnett" | "bonferroni" | "holm";
             /** @description The assessment round to analyse; leave out for the latest round holding values of the measure in this scope. */
             roundId?: number;
-            /** @description One site; leave out for all sites combined. */
+            /** @description One site; leave out for all sites combined (a trial with one site: that site). */
             siteId?: number;
             /**
              * @description With all sites combined: random tests treatment against site × treatment.
@@ -2894,10 +2900,10 @@ export interface components {
             /** @example CTRL */
             treatment?: string;
             /**
-             * @description A JSON number, or decimal text (analysed exactly).
+             * @description A JSON number, or decimal text (analysed exactly); null for a plot not measured, left out (the answer says how many were).
              * @example 12.3
              */
-            value: number | string;
+            value: (number | string) | null;
         };
         ObservationHistoryEntryDto: {
             after: string | null;
@@ -3256,8 +3262,11 @@ export interface components {
             time: number | string;
             /** @example GYP */
             treatment: string;
-            /** @example 212.5 */
-            value: number | string;
+            /**
+             * @description null for a plot not measured at that round, left out (the answer says how many were).
+             * @example 212.5
+             */
+            value: (number | string) | null;
         };
         RepeatedRequestDto: {
             /**
@@ -5940,7 +5949,7 @@ export interface operations {
                 method?: "lsd" | "tukey" | "dunnett" | "bonferroni" | "holm";
                 /** @description The assessment round to analyse; leave out for the latest round holding values of the measure in this scope. */
                 roundId?: number;
-                /** @description One site; leave out for all sites combined. */
+                /** @description One site; leave out for all sites combined (a trial with one site: that site). */
                 siteId?: number;
                 /** @description With all sites combined: random tests treatment against site × treatment. */
                 sitesAre?: "random" | "fixed";
@@ -6026,7 +6035,7 @@ export interface operations {
                 method?: "lsd" | "tukey" | "dunnett" | "bonferroni" | "holm";
                 /** @description The assessment round to analyse; leave out for the latest round holding values of the measure in this scope. */
                 roundId?: number;
-                /** @description One site; leave out for all sites combined. */
+                /** @description One site; leave out for all sites combined (a trial with one site: that site). */
                 siteId?: number;
                 /** @description With all sites combined: random tests treatment against site × treatment. */
                 sitesAre?: "random" | "fixed";
@@ -6095,7 +6104,7 @@ export interface operations {
                 measureId: number;
                 /** @description The assessment round to analyse; leave out for the latest round holding values of the measure in this scope. */
                 roundId?: number;
-                /** @description One site; leave out for all sites combined. */
+                /** @description One site; leave out for all sites combined (a trial with one site: that site). */
                 siteId?: number;
             };
             header?: never;
@@ -7673,9 +7682,9 @@ export interface operations {
                 alpha?: number;
                 /** @description Mean separation method. */
                 method?: "lsd" | "tukey" | "dunnett" | "bonferroni" | "holm";
-                /** @description The assessment round to report; leave out for each measure’s latest round with values. */
+                /** @description The assessment round to analyse; leave out for the latest round holding values of the measure in this scope. */
                 roundId?: number;
-                /** @description One site; leave out for all sites combined (a trial with one site reports that site). */
+                /** @description One site; leave out for all sites combined (a trial with one site: that site). */
                 siteId?: number;
                 /** @description With all sites combined: random tests treatment against site × treatment. */
                 sitesAre?: "random" | "fixed";

@@ -17,8 +17,8 @@ export class ObservationDto {
   block?: string;
   @ApiPropertyOptional({ example: 'North' })
   site?: string;
-  @ApiProperty({ oneOf: [{ type: 'number' }, { type: 'string' }], example: '12.3', description: 'A JSON number, or decimal text (analysed exactly).' })
-  value: number | string;
+  @ApiProperty({ oneOf: [{ type: 'number' }, { type: 'string' }], nullable: true, example: '12.3', description: 'A JSON number, or decimal text (analysed exactly); null for a plot not measured, left out (the answer says how many were).' })
+  value: number | string | null;
   @ApiPropertyOptional({ oneOf: [{ type: 'number' }, { type: 'string' }], example: '10.8', description: 'A baseline covariate (e.g. the plot’s day-0 value): the answer becomes an analysis of covariance (covariate row, adjusted means, slopes).' })
   covariate?: number | string;
 }
@@ -51,6 +51,15 @@ export class AnovaRequestDto {
   @IsOptional()
   @IsIn(['anova', 'reml'], { message: 'model must be anova or reml' })
   model?: 'anova' | 'reml';
+
+  @ApiPropertyOptional({
+    enum: ['kenward-roger', 'satterthwaite'],
+    default: 'kenward-roger',
+    description: 'REML fits: the denominator degrees of freedom of the F tests and comparisons (as pbkrtest or lmerTest give them).',
+  })
+  @IsOptional()
+  @IsIn(['kenward-roger', 'satterthwaite'], { message: 'ddf must be kenward-roger or satterthwaite' })
+  ddf?: 'kenward-roger' | 'satterthwaite';
 
   @ApiPropertyOptional({ default: 0.05, minimum: 0.0001, maximum: 0.5 })
   @IsOptional()
@@ -89,6 +98,6 @@ export class AnovaRequestDto {
 
   @ApiProperty({ type: [ObservationDto] })
   @ArrayMaxSize(MAX_OBSERVATIONS, { message: `observations must hold at most ${MAX_OBSERVATIONS} rows` })
-  @IsObservationList(undefined, { covariate: 'decimal' })
+  @IsObservationList(undefined, { covariate: 'decimal' }, 'left-out')
   observations: ObservationDto[];
 }

@@ -11,8 +11,8 @@ export class CensoredObservationDto {
   block?: string;
   @ApiPropertyOptional({ example: 'Hollow Lane' })
   site?: string;
-  @ApiProperty({ oneOf: [{ type: 'number' }, { type: 'string' }], example: '212.5', description: 'The drain time, or the cut-off the plot had not drained by.' })
-  value: number | string;
+  @ApiProperty({ oneOf: [{ type: 'number' }, { type: 'string' }], nullable: true, example: '212.5', description: 'The drain time, or the cut-off the plot had not drained by; null for a plot not timed, left out (the answer says how many were).' })
+  value: number | string | null;
   @ApiProperty({ example: false, description: 'True when the plot had not drained by `value` (right-censored).' })
   censored: boolean;
 }
@@ -35,6 +35,6 @@ export class CensoredRequestDto {
 
   @ApiProperty({ type: [CensoredObservationDto] })
   @ArrayMaxSize(MAX_OBSERVATIONS, { message: `observations must hold at most ${MAX_OBSERVATIONS} rows` })
-  @IsObservationList(undefined, { censored: 'required-boolean' })
+  @IsObservationList(undefined, { censored: 'required-boolean' }, 'left-out')
   observations: CensoredObservationDto[];
 }

@@ -20,8 +20,11 @@ function decimalProblem(row: number, field: string, v: unknown): string | null {
 /** Fields some analyses add to an observation, and what each must hold. */
 export type ExtraObservationFields = Readonly<Record<string, 'boolean' | 'label' | 'decimal' | 'required-boolean' | 'required-label' | 'required-decimal'>>;
 
+/** Whether a `value` of null (a plot not measured) is left out by the analysis or refused. */
+export type MissingValues = 'left-out' | 'refused';
+
 /** The problems of an observation list, each naming the row and field (at most a few, then a count). */
-export function observationProblems(value: unknown, extra: ExtraObservationFields = {}): string[] {
+export function observationProblems(value: unknown, extra: ExtraObservationFields = {}, missing: MissingValues = 'refused'): string[] {
   if (!Array.isArray(value)) return ['observations must be a list'];
   if (value.length === 0) return ['observations must not be empty'];
   const problems: string[] = [];
@@ -60,7 +63,7 @@ export function observationProblems(value: unknown, extra: ExtraObservationField
       else if (Object.keys(o.factors).length > 4) problems.push(`observations[${row}].factors must name at most 4 factors`);
       else for (const [name, level] of Object.entries(o.factors)) label(row, `factors.${name}`, level);
     }
-    const valueProblem = decimalProblem(row, 'value', o.value);
+    const valueProblem = o.value === null && missing === 'left-out' ? null : decimalProblem(row, 'value', o.value);
     if (valueProblem) problems.push(valueProblem);
   });
   if (problems.length > MAX_REPORTED) return [...problems.slice(0, MAX_REPORTED), `and more problems after observations[${MAX_REPORTED}]`];
@@ -68,7 +71,7 @@ export function observationProblems(value: unknown, extra: ExtraObservationField
 }
 
 /** Checks a (possibly very long) list of observations in one pass, faster than nested DTO classes. */
-export function IsObservationList(options?: ValidationOptions, extra: ExtraObservationFields = {}) {
+export function IsObservationList(options?: ValidationOptions, extra: ExtraObservationFields = {}, missing: MissingValues = 'refused') {
   return (target: object, propertyName: string) =>
     registerDecorator({
       name: 'isObservationList',
@@ -76,8 +79,8 @@ export function IsObservationList(options?: ValidationOptions, extra: ExtraObser
       propertyName,
       options,
       validator: {
-        validate: (value: unknown) => observationProblems(value, extra).length === 0,
-        defaultMessage: (args: ValidationArguments) => observationProblems(args.value, extra).join('; '),
+        validate: (value: unknown) => observationProblems(value, extra, missing).length === 0,
+        defaultMessage: (args: ValidationArguments) => observationProblems(args.value, extra, missing).join('; '),
       },
     });
 }

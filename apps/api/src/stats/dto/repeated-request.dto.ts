@@ -15,8 +15,8 @@ export class RepeatedObservationDto {
   round: string;
   @ApiProperty({ oneOf: [{ type: 'number' }, { type: 'string' }], example: 14, description: 'The round’s day offset.' })
   time: number | string;
-  @ApiProperty({ oneOf: [{ type: 'number' }, { type: 'string' }], example: '212.5' })
-  value: number | string;
+  @ApiProperty({ oneOf: [{ type: 'number' }, { type: 'string' }], nullable: true, example: '212.5', description: 'null for a plot not measured at that round, left out (the answer says how many were).' })
+  value: number | string | null;
 }
 
 /** POST /api/stats/repeated — one measure over several rounds on the same plots. */
@@ -37,6 +37,6 @@ export class RepeatedRequestDto {
 
   @ApiProperty({ type: [RepeatedObservationDto] })
   @ArrayMaxSize(MAX_OBSERVATIONS, { message: `observations must hold at most ${MAX_OBSERVATIONS} rows` })
-  @IsObservationList(undefined, { round: 'required-label', time: 'required-decimal' })
+  @IsObservationList(undefined, { round: 'required-label', time: 'required-decimal' }, 'left-out')
   observations: RepeatedObservationDto[];
 }
