@@ -105,6 +105,38 @@ describe('Findings of factorial and split-plot trials, from the filled-in templa
     sameMeans(r.factorMeans as FactorMeanRow[], answer.marginalMeans!, ['Amendment', 'Mulch']);
   }, 240_000);
 
+  it('a split plot with a plot not measured is fitted by REML, and the bundle’s lme4 + pbkrtest script gives its Kenward–Roger tests and means', async () => {
+    const trial = await buildFactorTrial(t, { design: 'split-plot', seed: 'findings-split-reml', factors: amendmentByMulch, sites: [{ name: 'Gap Garden', labelPrefix: 'GG', blocks: 4 }] });
+    await expectStatus(patchCurrent(t, trial.base, trial.auth, { noControlReason: 'Comparing amendments only.' }), 200);
+    await expectStatus(patchCurrent(t, trial.base, trial.auth, { status: 'active' }), 200);
+    // Invented values (test data only), one plot left blank (not measured).
+    const codes = trial.detail.treatments.map((tr) => tr.code);
+    await fillTemplate(trial, trial.siteIds['Gap Garden']!, (row, i) => (i === 5 ? '' : (4 - codes.indexOf(row['treatment code']!) * 0.3 + ((Number(row.block) * 13 + i * 5) % 7) * 0.05).toFixed(2)));
+    const response = await t.http.get(`${trial.base}/findings?measureId=${trial.measureId}`).set(trial.auth);
+    if (response.status !== 200) expect.fail(`findings answered ${response.status}: ${JSON.stringify(response.body)}`);
+    const answer = response.body as Findings;
+    expect(answer.model!.kind).toBe('reml');
+    const token = trial.auth.Authorization.replace(/^Bearer /, '');
+    const { friable, r } = await runBundle<Findings>(t, token, `${trial.base}/findings/bundle?measureId=${trial.measureId}`);
+    expect(friable).toEqual(response.body);
+    // R: KRmodcomp(lmer(value ~ Amendment * Mulch + (1 | block) + (1 | block:Amendment)), L)$test per term, contr.sum —
+    // F and denominator df 1e-5 relative (both iterate REML to convergence), as e2e/stats/designs checks on its fixtures.
+    const tests = answer.anova.filter((row) => row.numDf !== undefined && row.numDf !== null);
+    expect(tests.map((row) => row.term)).toEqual(['Amendment', 'Mulch', 'Amendment:Mulch']);
+    for (const row of tests) {
+      const fromR = (r.anova as Array<{ term: string; numDf: number; denDf: number; f: number }>).find((rRow) => rRow.term === row.term)!;
+      expect(fromR.numDf, row.term).toBe(row.numDf);
+      close(fromR.denDf, row.denDf!, 1e-5);
+      close(fromR.f, row.f!, 1e-5);
+    }
+    // emmeans(fit, ~ factor) on the same fit — 1e-6 relative (the means weigh the plots by the fitted variances).
+    for (const name of ['Amendment', 'Mulch']) {
+      for (const mean of answer.marginalMeans!.find((m) => m.term === name)!.means) {
+        close((r.factorMeans as FactorMeanRow[]).find((row) => row.term === name && row.level === mean.levels[name])!.emmean, mean.mean, 1e-6);
+      }
+    }
+  }, 240_000);
+
   it('a three-factor factorial in blocks: the template filled in and uploaded, then R’s anova(lm) on the bundle gives every main effect and interaction', async () => {
     const factors = [...amendmentByMulch, { name: 'Depth', levels: [{ code: 'S', name: 'Shallow' }, { code: 'D', name: 'Deep' }] }];
     const trial = await buildFactorTrial(t, { design: 'factorial-rcbd', seed: 'findings-three', factors, sites: [{ name: 'Three Garden', labelPrefix: 'THG', blocks: 3 }] });

@@ -50,7 +50,7 @@ export async function findingsBundle(answer: FindingsAnswer): Promise<{ filename
       'analysis.R    reproduces the tables with R: Rscript analysis.R (writes r-results.json)',
       'friable.json  Friable\'s own answer, to compare with r-results.json',
       '',
-      'R packages: jsonlite, emmeans, survival, multcomp, nlme, MASS (Debian: r-cran-jsonlite, r-cran-emmeans, r-cran-survival, r-cran-multcomp, r-cran-nlme, r-cran-mass).',
+      'R packages: jsonlite, emmeans, survival, multcomp, nlme, MASS; for REML fits lme4, pbkrtest and lmerTest (Debian: r-cran-jsonlite, r-cran-emmeans, r-cran-survival, r-cran-multcomp, r-cran-nlme, r-cran-mass, r-cran-lme4, r-cran-pbkrtest, r-cran-lmertest).',
       'Statistics are decision support, not advice.',
       '',
     ].join('\n'),

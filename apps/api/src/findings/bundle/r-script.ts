@@ -161,6 +161,66 @@ print(results$factorMeans)
 ${finish}`;
 }
 
+const MULTISITE_FACTOR_DESIGNS = ['multisite-factorial-rcbd', 'multisite-split-plot'];
+
+/**
+ * A factorial or split plot fitted by REML (unbalanced data, or several sites with sites random), as lme4 fits it:
+ * blocks, whole plots and sub plots random, and with several sites the site and its interaction with every factor term
+ * random; Kenward–Roger type III tests (pbkrtest::KRmodcomp on sum-to-zero contrasts) or Satterthwaite's (lmerTest),
+ * and each factor's least-squares means by emmeans.
+ */
+function remlScript(input: ScriptInput): string {
+  const factorNames = (input.request.factorNames as string[] | undefined) ?? [];
+  const transform = String(input.request.transform ?? 'none');
+  const satterthwaite = input.request.ddf === 'satterthwaite';
+  return `${preamble({ ...input, request: { ...input.request, control: undefined } }, ['lme4', 'pbkrtest', 'lmerTest', 'emmeans'])}options(contrasts = c("contr.sum", "contr.poly"))
+emm_options(lmer.df = ${rString(satterthwaite ? 'satterthwaite' : 'kenward-roger')}, pbkrtest.limit = 1e6, lmerTest.limit = 1e6)
+factor_names <- c(${factorNames.map(rString).join(', ')})
+for (name in factor_names) d[[name]] <- factor(d[[name]], levels = unique(d[[name]]))
+if (!is.null(d$block)) d$block <- factor(d$block, levels = unique(d$block))
+multisite <- !is.null(d$site) && length(unique(d$site)) > 1
+if (multisite) d$site <- factor(d$site, levels = unique(d$site))
+quoted <- function(names) paste0("\`", names, "\`")
+plain <- function(labels) gsub("\`", "", trimws(labels))
+d$value <- switch(${rString(transform)}, none = d$value, log = log(d$value), sqrt = sqrt(d$value), "arcsine-sqrt" = asin(sqrt(d$value)))
+split <- switch(design, "split-plot" = 1, "multisite-split-plot" = 1, "split-split-plot" = 2, 0)
+# Random terms: sites and site × every factor term (several sites), blocks (within sites), whole plots, sub plots.
+random <- c()
+if (multisite) {
+  sets <- unlist(lapply(seq_along(factor_names), function(k) combn(factor_names, k, simplify = FALSE)), recursive = FALSE)
+  random <- c("(1 | site)", sapply(sets, function(set) paste0("(1 | site:", paste(quoted(set), collapse = ":"), ")")))
+}
+if (!is.null(d$block)) random <- c(random, if (multisite) "(1 | site:block)" else "(1 | block)")
+if (split >= 1) random <- c(random, paste0("(1 | ", if (multisite) "site:" else "", "block:", quoted(factor_names[1]), ")"))
+if (split >= 2) random <- c(random, paste0("(1 | block:", quoted(factor_names[1]), ":", quoted(factor_names[2]), ")"))
+model_formula <- as.formula(paste("value ~", paste(quoted(factor_names), collapse = " * "), "+", paste(random, collapse = " + ")))
+fit <- lmer(model_formula, data = d, control = lmerControl(optimizer = "bobyqa", optCtrl = list(maxfun = 1e5), check.conv.singular = "ignore"))
+print(summary(fit))
+${
+  satterthwaite
+    ? `table <- anova(as_lmerModLmerTest(fit), type = 3, ddf = "Satterthwaite")
+print(table)
+results$anova <- data.frame(term = plain(rownames(table)), numDf = table$NumDF, denDf = table$DenDF, f = table[["F value"]], p = table[["Pr(>F)"]])
+`
+    : `# Type III with sum-to-zero contrasts: a term's hypothesis is "its coefficients are 0", tested by Kenward–Roger.
+X <- getME(fit, "X")
+assign <- attr(X, "assign")
+labels <- attr(terms(fit), "term.labels")
+results$anova <- do.call(rbind, lapply(seq_along(labels), function(k) {
+  test <- KRmodcomp(fit, diag(ncol(X))[assign == k, , drop = FALSE])$test
+  data.frame(term = plain(labels[k]), numDf = test["Ftest", "ndf"], denDf = test["Ftest", "ddf"], f = test["Ftest", "stat"], p = test["Ftest", "p.value"])
+}))
+print(results$anova)
+`
+}results$varianceComponents <- as.data.frame(VarCorr(fit))[, c("grp", "vcov")]
+results$factorMeans <- do.call(rbind, lapply(factor_names, function(name) {
+  means <- as.data.frame(summary(emmeans(fit, as.formula(paste("~", quoted(name))))))
+  data.frame(term = name, level = as.character(means[[1]]), emmean = means$emmean, se = means$SE)
+}))
+print(results$factorMeans)
+${finish}`;
+}
+
 function censoredScript(input: ScriptInput): string {
   return `${preamble(input, ['survival', 'multcomp'])}d$drained <- d$censored != "true"
 # Not-drained curves (product-limit, log-scale 95 % limits) and medians.
@@ -246,17 +306,22 @@ ${finish}`;
  * R script — the script in a Findings bundle that reproduces the analysis from its data.csv with R's standard
  * packages (stats, emmeans, survival, multcomp, nlme, MASS), printing the tables and writing r-results.json.
  * One-factor designs (crd, rcbd, several sites combined) for every analysis; the classical ANOVA of a factorial or a
- * split / split-split plot at one site; a combined factorial or split plot over sites, or one fitted by REML, says
- * plainly that it is not covered.
+ * split / split-split plot at one site; their REML fits (unbalanced data, or several sites taken as random) with lme4
+ * and Kenward–Roger or Satterthwaite tests; a combined factorial or split plot whose blocks are fixed, or whose sites
+ * are fixed, says plainly that it is not covered.
  * Throws: nothing.
  * Example: rScript({ analysis: 'counts', request: { design: 'rcbd', control: 'C' }, title: '…' }) → "# …\nsuppressMessages({ library(jsonlite) })\n…"
  */
 export function rScript(input: ScriptInput): string {
   const design = String(input.request.design);
+  const sitesRandom = input.request.sitesAre !== 'fixed';
   if (input.analysis === 'anova' && FACTOR_DESIGNS.includes(design) && input.modelKind !== 'reml') return factorScript(input);
+  if (input.analysis === 'anova' && input.modelKind === 'reml' && (FACTOR_DESIGNS.includes(design) || (MULTISITE_FACTOR_DESIGNS.includes(design) && sitesRandom)) && design !== 'factorial-crd') {
+    return remlScript(input);
+  }
   if (!['crd', 'rcbd', 'multisite-rcbd'].includes(design)) {
-    const why = input.modelKind === 'reml' ? 'fitted by REML (the data are unbalanced)' : 'combined over sites';
-    return `# ${input.title}\n# This ${design} analysis is ${why}; this bundle's script covers the classical ANOVA of factorials and split plots at one site. Download the bundle of each site.\nstop("not covered: ${design}, ${why}")\n`;
+    const why = sitesRandom ? 'combined over sites with its blocks fixed (every plot present)' : 'combined over sites taken as fixed';
+    return `# ${input.title}\n# This ${design} analysis is ${why}; this bundle's script covers factorials and split plots at one site, and their REML fits (also over sites taken as random). Download the bundle of each site.\nstop("not covered: ${design}, ${why}")\n`;
   }
   switch (input.analysis) {
     case 'anova':
