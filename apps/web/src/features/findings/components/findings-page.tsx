@@ -14,11 +14,12 @@ import {
   type SeparationMethod,
   type TrialDetail,
 } from '@friable/contracts';
-import { useMemo } from 'react';
+import { useEffect, useMemo } from 'react';
 import { Link, useSearchParams } from 'react-router-dom';
 import { EmptyState, ErrorState, LoadingState } from '../../../components/states';
 import { paths } from '../../../config/paths';
 import { ApiError } from '../../../lib/api-client';
+import { preloadPlotly } from '../../../lib/preload-plotly';
 import { useDownloadBundle } from '../api/download-bundle';
 import { useDownloadExport } from '../api/download-export';
 import { findingsQueryOptions, getAnovaFindings, useFindings } from '../api/get-findings';
@@ -73,6 +74,7 @@ function readChoices(params: URLSearchParams): Partial<FindingsModelsQuery> & An
 
 /** Findings: one measure and round analysed at one site or all sites combined, with plots, saved analyses and exports. */
 export function FindingsPage({ trial, meId }: { trial: TrialDetail; meId?: number }) {
+  useEffect(preloadPlotly, []);
   const [params, setParams] = useSearchParams();
   const choices = readChoices(params);
   const measures = useMemo(() => [...trial.measures].sort((a, b) => a.position - b.position), [trial.measures]);
