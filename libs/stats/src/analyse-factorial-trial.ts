@@ -220,6 +220,14 @@ export function analyseFactorialTrial(request: FactorialRequest): FactorialTrial
     const covariance = new Float64Array(k * k);
     for (let i = 0; i < k; i++) for (let j = i; j < k; j++) covariance[i * k + j] = covariance[j * k + i] = by.covariance(entries[i]!.contrast, entries[j]!.contrast);
     const df = firstEstimate.df;
+    // Kenward–Roger can leave a stratum less than one degree of freedom (two sites, a plot missing): no t or
+    // studentized range exists there, so these means are given without tests, and the answer says why.
+    if (!(df >= 1)) {
+      const which = Object.keys(entries[0]!.levels).join(' × ');
+      const why = `The ${which} means are not compared: their differences have ${df.toFixed(3)} degrees of freedom (${by.errorOf(first)}), fewer than one, too few for any test (more sites or blocks give more).`;
+      if (!warnings.includes(why)) warnings.push(why);
+      return Object.freeze({ comparisons: Object.freeze({}), letters: Object.freeze({}), errorTerm: by.errorOf(first), df });
+    }
     const separation = separateMeans({
       treatments: entries.map((e) => e.treatment),
       // Centred means: at 1e12 the shifted means have lost the digits their differences need.

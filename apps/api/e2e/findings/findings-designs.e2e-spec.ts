@@ -137,6 +137,47 @@ describe('Findings of factorial and split-plot trials, from the filled-in templa
     }
   }, 240_000);
 
+  it('a split plot at two sites (sites random, a plot not measured): the bundle’s lme4 script with site × factor terms gives Findings’ tests', async () => {
+    const trial = await buildFactorTrial(t, {
+      design: 'split-plot',
+      seed: 'findings-split-sites',
+      factors: amendmentByMulch,
+      sites: [
+        { name: 'East Plot Garden', labelPrefix: 'EP', blocks: 3 },
+        { name: 'West Plot Garden', labelPrefix: 'WP', blocks: 3 },
+      ],
+    });
+    await expectStatus(patchCurrent(t, trial.base, trial.auth, { noControlReason: 'Comparing amendments only.' }), 200);
+    await expectStatus(patchCurrent(t, trial.base, trial.auth, { status: 'active' }), 200);
+    // Invented values (test data only): the west garden runs higher; one east plot left blank.
+    const codes = trial.detail.treatments.map((tr) => tr.code);
+    for (const [site, shift] of [['East Plot Garden', 0], ['West Plot Garden', 0.6]] as const) {
+      await fillTemplate(trial, trial.siteIds[site]!, (row, i) =>
+        shift === 0 && i === 4 ? '' : (4 + shift - codes.indexOf(row['treatment code']!) * 0.25 + ((Number(row.block) * 11 + i * 7) % 5) * 0.06).toFixed(2),
+      );
+    }
+    const response = await t.http.get(`${trial.base}/findings?measureId=${trial.measureId}&analysis=anova`).set(trial.auth);
+    if (response.status !== 200) expect.fail(`findings answered ${response.status}: ${JSON.stringify(response.body)}`);
+    const answer = response.body as Findings;
+    expect(answer.context.engineRequest).toMatchObject({ design: 'multisite-split-plot' });
+    expect(answer.model!.kind).toBe('reml');
+    // Two sites leave the whole-plot comparisons under one Kenward–Roger degree of freedom: given without tests, said in words.
+    expect(answer.warnings.join(' ')).toMatch(/The [^.]+ means are not compared: their differences have 0\.\d+ degrees of freedom \(.+\), fewer than one/);
+    const token = trial.auth.Authorization.replace(/^Bearer /, '');
+    const { r, csv } = await runBundle<Findings>(t, token, `${trial.base}/findings/bundle?measureId=${trial.measureId}&analysis=anova`);
+    expect(csv.split('\n')[0]).toContain('site');
+    // R: KRmodcomp(lmer(value ~ Amendment * Mulch + (1 | site) + (1 | site:Amendment) + (1 | site:Mulch) +
+    // (1 | site:Amendment:Mulch) + (1 | site:block) + (1 | site:block:Amendment)), L)$test — 1e-4 relative (a fit with
+    // variance components at the boundary converges less tightly).
+    const tests = answer.anova.filter((row) => row.numDf !== undefined && row.numDf !== null);
+    expect(tests.map((row) => row.term)).toEqual(['Amendment', 'Mulch', 'Amendment:Mulch']);
+    for (const row of tests) {
+      const fromR = (r.anova as Array<{ term: string; numDf: number; denDf: number; f: number }>).find((rRow) => rRow.term === row.term)!;
+      expect(fromR.numDf, row.term).toBe(row.numDf);
+      close(fromR.f, row.f!, 1e-4);
+    }
+  }, 240_000);
+
   it('a three-factor factorial in blocks: the template filled in and uploaded, then R’s anova(lm) on the bundle gives every main effect and interaction', async () => {
     const factors = [...amendmentByMulch, { name: 'Depth', levels: [{ code: 'S', name: 'Shallow' }, { code: 'D', name: 'Deep' }] }];
     const trial = await buildFactorTrial(t, { design: 'factorial-rcbd', seed: 'findings-three', factors, sites: [{ name: 'Three Garden', labelPrefix: 'THG', blocks: 3 }] });
