@@ -175,4 +175,24 @@ describe('Editable sign-offs and comments: versions, amending, withdrawing, stal
       'Resolved a comment on the analysis "Water retained, versions".',
     ]);
   });
+
+  it('lets the investigator sign off once the trial has no reviewer, and still no collaborator', async () => {
+    for (const userId of [built.ids.reviewer, second.id]) {
+      expect((await t.http.delete(`${base}/members/${userId}`).set(bearer(built.tokens.investigator))).status).toBe(204);
+    }
+    expect((await patchCurrent(t, base, bearer(built.tokens.investigator), { status: 'locked' })).status).toBe(200);
+    const fresh = await t.http
+      .post(`${base}/analyses`)
+      .set(bearer(built.tokens.investigator))
+      .send({ measureId: built.measures.WR, roundId: built.roundId, siteId: built.siteId, title: 'Water retained, no reviewer' });
+    expect(fresh.status).toBe(201);
+    expect(fresh.body.review).toMatchObject({ expectedRole: 'investigator', expected: 1, signed: 0, label: 'Awaiting 1 investigator' });
+    const path = `${base}/analyses/${fresh.body.id}/sign-offs`;
+    expect((await t.http.post(path).set(bearer(built.tokens.collaborator)).send({ statement: 'Not mine to sign.' })).status).toBe(403);
+    const signed = await t.http.post(path).set(bearer(built.tokens.investigator)).send({ statement: 'Checked by the investigator; the trial has no reviewer.' });
+    expect(signed.status).toBe(201);
+    expect(signed.body).toMatchObject({ role: 'investigator', name: 'Intake investigator', version: 1, state: 'current' });
+    const after = (await t.http.get(`${base}/analyses/${fresh.body.id}`).set(bearer(built.tokens.collaborator))).body as AnalysisSnapshot;
+    expect(after.review).toMatchObject({ signed: 1, label: 'Signed by the investigator' });
+  });
 });
