@@ -113,4 +113,50 @@ describe('a reviewer reviews a saved analysis from the e-mailed request', () => 
     await screenshot(page, 'review-phone');
     await phone.close();
   });
+
+  it('lets the reviewer amend the statement and then withdraw the sign-off with a reason; the report shows it withdrawn', async () => {
+    const amended = `${statement} Block 2 checked against the plot notes.`;
+    const reason = `The drainage notes for ${title} came after I signed.`;
+    await session.page.setViewportSize({ width: 1280, height: 800 });
+    await signIn(session.page, 'reviewer@example.org');
+    await session.page.getByRole('heading', { name: 'Trials', exact: true }).waitFor();
+    await session.page.goto(`${baseUrl()}/trials/${trialId}/findings?analysis=${analysisId}`);
+    const signOffs = session.page.getByRole('list', { name: 'Sign-offs' });
+    await signOffs.getByText(statement).waitFor();
+    await signOffs.getByRole('button', { name: 'Amend my statement' }).click();
+    const box = session.page.getByRole('textbox', { name: 'Your amended statement' });
+    await box.fill(amended);
+    await session.page.getByRole('button', { name: 'Save the amended statement' }).click();
+    await signOffs.getByText(amended).waitFor();
+    await signOffs.getByText(/^Statement amended on /).waitFor();
+
+    // Withdrawing asks why; an empty reason is refused in words before anything is sent.
+    await signOffs.getByRole('button', { name: 'Withdraw my sign-off' }).click();
+    await session.page.getByRole('button', { name: 'Withdraw my sign-off' }).click();
+    await session.page.getByText('Say why you withdraw it.').waitFor();
+    await session.page.getByRole('textbox', { name: 'Why you withdraw your sign-off' }).fill(reason);
+    await session.page.getByRole('button', { name: 'Withdraw my sign-off' }).click();
+    await signOffs.getByText(`Why withdrawn: ${reason}`).waitFor();
+    await expect(signOffs.getByText(/^Withdrawn on /).isVisible()).resolves.toBe(true);
+    await session.page.getByRole('heading', { name: /^Review/ }).getByText(/^Awaiting \d+ reviewers?$/).waitFor();
+    // Withdrawn, the reviewer may sign again.
+    await expect(session.page.getByRole('button', { name: 'Sign off with this statement' }).isVisible()).resolves.toBe(true);
+    await screenshot(session.page, 'review-withdrawn');
+
+    await session.page.goto(`${baseUrl()}/trials/${trialId}/report`);
+    const inReport = session.page.getByRole('list', { name: `Sign-offs of ${title}` });
+    await inReport.getByText(`Why withdrawn: ${reason}`).waitFor();
+    await expect(inReport.getByText(amended).isVisible()).resolves.toBe(true);
+
+    const phone = await session.browser.newContext({ viewport: { width: 390, height: 844 }, isMobile: true });
+    const page = await phone.newPage();
+    await signIn(page, 'reviewer@example.org');
+    await page.getByRole('heading', { name: 'Trials', exact: true }).waitFor();
+    await page.goto(`${baseUrl()}/trials/${trialId}/findings?analysis=${analysisId}`);
+    await page.getByRole('list', { name: 'Sign-offs' }).getByText(`Why withdrawn: ${reason}`).waitFor();
+    expect(await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth)).toBeLessThanOrEqual(0);
+    await screenshot(page, 'review-withdrawn-phone');
+    await phone.close();
+    expect(session.outside).toEqual([]);
+  });
 });

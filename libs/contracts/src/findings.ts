@@ -413,6 +413,8 @@ export interface SnapshotComment {
   resolvedByName: string | null;
   /** Earlier texts, oldest first: one per edit, and the deletion. */
   revisions: CommentRevision[];
+  /** The edit version: sent back with an edit, a resolution or the deletion. */
+  version: number;
 }
 
 /** POST /api/trials/:trialId/analyses/:analysisId/comments body. */

@@ -1,8 +1,11 @@
 // Review of a saved analysis: requests, sign-offs and comment threads.
 import type { TrialRole } from './index';
 
-export const SIGN_OFF_STATES = ['current', 'data-changed'] as const;
-/** `data-changed`: the trial's data moved on after this sign-off (its data hash no longer matches). */
+export const SIGN_OFF_STATES = ['current', 'data-changed', 'withdrawn'] as const;
+/**
+ * `data-changed`: the trial's data moved on after this sign-off (its data hash no longer matches);
+ * `withdrawn`: its author took it back (kept on the record with the reason; it no longer counts).
+ */
 export type SignOffState = (typeof SIGN_OFF_STATES)[number];
 
 export interface SignOff {
@@ -16,6 +19,24 @@ export interface SignOff {
   dataHash: string;
   engineVersion: string;
   state: SignOffState;
+  /** The edit version: sent back with an amendment or the withdrawal; another one answers 409 with this record. */
+  version: number;
+  /** When the statement was last amended by its author; null if never. */
+  amendedAt: string | null;
+  withdrawnAt: string | null;
+  withdrawalReason: string | null;
+}
+
+/** PATCH /api/trials/:trialId/analyses/:analysisId/sign-offs/:signOffId — the author amends the statement. */
+export interface SignOffAmendInput {
+  version: number;
+  statement: string;
+}
+
+/** DELETE /api/trials/:trialId/analyses/:analysisId/sign-offs/:signOffId — the author withdraws it, saying why. */
+export interface SignOffWithdrawInput {
+  version: number;
+  reason: string;
 }
 
 /** POST /api/trials/:trialId/analyses/:analysisId/sign-offs. */
@@ -55,8 +76,15 @@ export interface CommentInput {
 
 /** PATCH /api/trials/:trialId/analyses/:analysisId/comments/:commentId. */
 export interface CommentUpdateInput {
+  /** The comment's version as read; another one answers 409 with the comment as it is now. */
+  version: number;
   body?: string;
   resolved?: boolean;
+}
+
+/** DELETE /api/trials/:trialId/analyses/:analysisId/comments/:commentId. */
+export interface CommentDeleteInput {
+  version: number;
 }
 
 export interface CommentRevision {

@@ -2,9 +2,10 @@ import type { AnalysisSnapshot, Observation, SignOff, SnapshotComment, TrialRepo
 import { QueryTypes } from 'sequelize';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { TrialMembership } from '../../src/trials/models/trial-membership.model';
-import { buildIntakeTrial, intakePath, upload, type IntakeTrial } from '../intake/intake-support';
+import type { IntakeTrial } from '../intake/intake-support';
 import { bearer, createPerson, createTestApp, tokenFor, type TestApp, patchCurrent } from '../support/test-app';
 import { waitForMessages } from '../team/team-support';
+import { buildReviewTrial } from './review-support';
 
 describe('Review: sign-offs with statements, review requests, unlocking with a reason, comment threads, the report', () => {
   let t: TestApp;
@@ -23,23 +24,9 @@ describe('Review: sign-offs with statements, review requests, unlocking with a r
 
   beforeAll(async () => {
     t = await createTestApp();
-    built = await buildIntakeTrial(t);
-    base = `/api/trials/${built.trialId}`;
-    const labels = Object.keys(built.plots).filter((label) => label.startsWith('TG-')).sort();
     // Invented water-retained values for the nine Test Garden plots (test data only).
     const values = ['120.5', '98.0', '143.2', '110.0', '101.5', '150.1', '125.3', '96.4', '139.9'];
-    const csv = `plot label,water retained (mL)\n${labels.map((label, i) => `${label},${values[i]}`).join('\n')}\n`;
-    const loaded = await upload(t, built.tokens.collaborator, intakePath(built), Buffer.from(csv), 'day0.csv');
-    if (loaded.status !== 200) throw new Error(JSON.stringify(loaded.body));
-    const person = await createPerson({ name: 'Second reviewer' });
-    await TrialMembership.create({ trialId: built.trialId, userId: person.id, role: 'reviewer', siteId: null });
-    secondReviewer = { token: await tokenFor(t, person), email: person.email, id: person.id };
-    const response = await t.http
-      .post(`${base}/analyses`)
-      .set(bearer(built.tokens.investigator))
-      .send({ measureId: built.measures.WR, roundId: built.roundId, siteId: built.siteId, title: 'Water retained, Day 0, Test Garden' });
-    expect(response.status).toBe(201);
-    saved = response.body;
+    ({ built, base, saved, second: secondReviewer } = await buildReviewTrial(t, { values, title: 'Water retained, Day 0, Test Garden', secondReviewerName: 'Second reviewer' }));
   });
   afterAll(() => t.close());
 
@@ -141,10 +128,10 @@ describe('Review: sign-offs with statements, review requests, unlocking with a r
     const opened = await t.http.post(path).set(bearer(built.tokens.reviewer)).send({ body: 'Block 2 looks wetter.' });
     expect(opened.status).toBe(201);
     const id = opened.body.id as number;
-    expect((await t.http.patch(`${path}/${id}`).set(bearer(built.tokens.collaborator)).send({ body: 'Not mine to edit.' })).status).toBe(403);
-    const edited = await t.http.patch(`${path}/${id}`).set(bearer(built.tokens.reviewer)).send({ body: 'Block 2 looks much wetter than blocks 1 and 3.' });
+    expect((await t.http.patch(`${path}/${id}`).set(bearer(built.tokens.collaborator)).send({ version: 1, body: 'Not mine to edit.' })).status).toBe(403);
+    const edited = await t.http.patch(`${path}/${id}`).set(bearer(built.tokens.reviewer)).send({ version: 1, body: 'Block 2 looks much wetter than blocks 1 and 3.' });
     expect(edited.status).toBe(200);
-    expect(edited.body).toMatchObject({ body: 'Block 2 looks much wetter than blocks 1 and 3.', editedAt: expect.any(String) });
+    expect(edited.body).toMatchObject({ body: 'Block 2 looks much wetter than blocks 1 and 3.', editedAt: expect.any(String), version: 2 });
     expect(edited.body.revisions).toEqual([{ kind: 'edited', body: 'Block 2 looks wetter.', at: expect.any(String), byName: 'Intake reviewer' }]);
 
     const reply = await t.http.post(path).set(bearer(built.tokens.collaborator)).send({ body: 'It rained there the night before.', parentId: id });
@@ -159,14 +146,14 @@ describe('Review: sign-offs with statements, review requests, unlocking with a r
     expect(badParent.body.errors[0].field).toBe('parentId');
 
     const second = await t.http.post(path).set(bearer(built.tokens.collaborator)).send({ body: 'A typo, ignore me.' });
-    expect((await t.http.delete(`${path}/${second.body.id}`).set(bearer(built.tokens.reviewer))).status).toBe(403);
-    expect((await t.http.delete(`${path}/${second.body.id}`).set(bearer(built.tokens.collaborator))).status).toBe(204);
-    expect((await t.http.delete(`${path}/${second.body.id}`).set(bearer(built.tokens.collaborator))).status).toBe(409);
-    expect((await t.http.patch(`${path}/${second.body.id}`).set(bearer(built.tokens.collaborator)).send({ body: 'back' })).status).toBe(409);
+    expect((await t.http.delete(`${path}/${second.body.id}`).set(bearer(built.tokens.reviewer)).send({ version: 1 })).status).toBe(403);
+    expect((await t.http.delete(`${path}/${second.body.id}`).set(bearer(built.tokens.collaborator)).send({ version: 1 })).status).toBe(204);
+    expect((await t.http.delete(`${path}/${second.body.id}`).set(bearer(built.tokens.collaborator)).send({ version: 2 })).status).toBe(409);
+    expect((await t.http.patch(`${path}/${second.body.id}`).set(bearer(built.tokens.collaborator)).send({ version: 2, body: 'back' })).status).toBe(409);
 
     const third = await t.http.post(path).set(bearer(built.tokens.investigator)).send({ body: 'The report should say which round this is.' });
-    expect((await t.http.patch(`${path}/${third.body.id}`).set(bearer(built.tokens.collaborator)).send({ resolved: true })).status).toBe(403);
-    const resolved = await t.http.patch(`${path}/${third.body.id}`).set(bearer(built.tokens.reviewer)).send({ resolved: true });
+    expect((await t.http.patch(`${path}/${third.body.id}`).set(bearer(built.tokens.collaborator)).send({ version: 1, resolved: true })).status).toBe(403);
+    const resolved = await t.http.patch(`${path}/${third.body.id}`).set(bearer(built.tokens.reviewer)).send({ version: 1, resolved: true });
     expect(resolved.body).toMatchObject({ resolvedAt: expect.any(String), resolvedByName: 'Intake reviewer' });
 
     const list = (await t.http.get(path).set(bearer(built.tokens.collaborator))).body as SnapshotComment[];

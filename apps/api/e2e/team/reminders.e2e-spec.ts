@@ -80,4 +80,25 @@ describe('round reminders', () => {
     expect(messagesTo(people.hollow.email)).toHaveLength(before);
     await Trial.update({ status: 'active' }, { where: { id: trialId } });
   });
+
+  it('honours each collaborator’s settings: none with reminders off, the due date in their own locale', async () => {
+    const [quiet, german] = [people.millbrookA, people.millbrookB];
+    expect((await t.http.patch('/api/users/me').set(bearer(await tokenFor(t, quiet))).send({ emailReminders: false })).body.emailReminders).toBe(false);
+    expect((await t.http.patch('/api/users/me').set(bearer(await tokenFor(t, german))).send({ locale: 'de-DE' })).body.locale).toBe('de-DE');
+    const counts = { quiet: messagesTo(quiet.email).length, german: messagesTo(german.email).length, hollow: messagesTo(people.hollow.email).length };
+    const dayBeforeWeek4 = new Date(now.getFullYear(), now.getMonth(), now.getDate() + 14, 7);
+    const run = await t.app.get(RemindersService).sendDueReminders(dayBeforeWeek4);
+    const [year, month, day] = run.dueDate.split('-').map(Number);
+    expect(messagesTo(quiet.email)).toHaveLength(counts.quiet);
+    const [toGerman] = messagesTo(german.email).slice(counts.german);
+    const [toHollow] = messagesTo(people.hollow.email).slice(counts.hollow);
+    // CLDR month names: German for the de-DE account, English (day month year) for an account without a locale.
+    const deMonths = ['Januar', 'Februar', 'März', 'April', 'Mai', 'Juni', 'Juli', 'August', 'September', 'Oktober', 'November', 'Dezember'];
+    const enMonths = ['January', 'February', 'March', 'April', 'May', 'June', 'July', 'August', 'September', 'October', 'November', 'December'];
+    expect(toGerman.subject).toMatch(/^Tomorrow: Week 4 at Millbrook/);
+    expect(toGerman.text).toContain(`is due tomorrow, ${['Sonntag', 'Montag', 'Dienstag', 'Mittwoch', 'Donnerstag', 'Freitag', 'Samstag'][new Date(Date.UTC(year, month - 1, day)).getUTCDay()]}, ${day}. ${deMonths[month - 1]} ${year}, at Millbrook.`);
+    expect(toHollow.text).toContain(`, ${day} ${enMonths[month - 1]} ${year}, at Hollow Lane.`);
+    const quietRows = await RoundReminder.count({ where: { userId: quiet.id, dueDate: run.dueDate } });
+    expect(quietRows).toBe(0);
+  });
 });

@@ -15,7 +15,18 @@ import { AnalysesService } from './analyses.service';
 import { CommentsService } from './comments.service';
 import { CreateAnalysisDto } from './dto/create-analysis.dto';
 import { AnalysisSnapshotDto, AnalysisSnapshotSummaryDto, SnapshotCommentDto } from './dto/analysis-snapshot.dto';
-import { CommentInputDto, CommentUpdateDto, ReviewRequestAnswerDto, ReviewRequestInputDto, SignOffDto, SignOffInputDto } from './dto/review.dto';
+import {
+  CommentDeleteDto,
+  CommentInputDto,
+  CommentUpdateDto,
+  ReviewRequestAnswerDto,
+  ReviewRequestInputDto,
+  SignOffAmendDto,
+  SignOffDto,
+  SignOffInputDto,
+  SignOffWithdrawDto,
+} from './dto/review.dto';
+import { StaleEditAnswers } from '../protocol-gate/edit-version';
 import { ReviewService } from './review.service';
 
 @ApiTags('analyses')
@@ -64,6 +75,36 @@ export class AnalysesController {
     return this.review.signOff(access, analysisId, user, body.statement);
   }
 
+  @Patch(':analysisId/sign-offs/:signOffId')
+  @TrialAccess('investigator', 'reviewer')
+  @ApiOperation({ summary: 'The signer amends the statement of their standing sign-off, sending the version they read (the earlier text stays in the activity trail)' })
+  @ApiOkResponse({ type: SignOffDto })
+  @StaleEditAnswers(SignOffDto, 'a sentence: the sign-off was withdrawn, or the data changed after it.')
+  amendSignOff(
+    @CurrentTrialAccess() access: TrialAccessContext,
+    @CurrentUser() user: AuthUser,
+    @Param('analysisId', ParseIntPipe) analysisId: number,
+    @Param('signOffId', ParseIntPipe) signOffId: number,
+    @Body() body: SignOffAmendDto,
+  ) {
+    return this.review.amend(access.trialId, analysisId, signOffId, user, body);
+  }
+
+  @Delete(':analysisId/sign-offs/:signOffId')
+  @TrialAccess('investigator', 'reviewer')
+  @ApiOperation({ summary: 'The signer withdraws their sign-off with a reason and the version they read: it stays on the record as withdrawn and no longer counts' })
+  @ApiOkResponse({ type: SignOffDto, description: 'The sign-off, now withdrawn.' })
+  @StaleEditAnswers(SignOffDto, 'a sentence: it was already withdrawn.')
+  withdrawSignOff(
+    @CurrentTrialAccess() access: TrialAccessContext,
+    @CurrentUser() user: AuthUser,
+    @Param('analysisId', ParseIntPipe) analysisId: number,
+    @Param('signOffId', ParseIntPipe) signOffId: number,
+    @Body() body: SignOffWithdrawDto,
+  ) {
+    return this.review.withdraw(access.trialId, analysisId, signOffId, user, body);
+  }
+
   @Post(':analysisId/review-requests')
   @TrialAccess('investigator')
   @ApiOperation({ summary: 'Ask the trial’s reviewers to review a saved analysis: each gets an e-mail with a link to it' })
@@ -100,9 +141,9 @@ export class AnalysesController {
 
   @Patch(':analysisId/comments/:commentId')
   @AnyTrialMember()
-  @ApiOperation({ summary: 'Edit one’s own comment (the old text kept as "edited"), or mark a thread resolved / open again' })
+  @ApiOperation({ summary: 'Edit one’s own comment (the old text kept as "edited"), or mark a thread resolved / open again, sending the version read' })
   @ApiOkResponse({ type: SnapshotCommentDto })
-  @ApiConflictResponse({ description: 'The comment was deleted.' })
+  @StaleEditAnswers(SnapshotCommentDto, 'a sentence: the comment was deleted.')
   updateComment(
     @CurrentTrialAccess() access: TrialAccessContext,
     @CurrentUser() user: AuthUser,
@@ -116,15 +157,16 @@ export class AnalysesController {
   @Delete(':analysisId/comments/:commentId')
   @AnyTrialMember()
   @HttpCode(204)
-  @ApiOperation({ summary: 'Delete one’s own comment: it shows as deleted, its text kept in history; replies stay' })
+  @ApiOperation({ summary: 'Delete one’s own comment, sending the version read: it shows as deleted, its text kept in history; replies stay' })
   @ApiNoContentResponse({ description: 'Deleted.' })
-  @ApiConflictResponse({ description: 'Already deleted.' })
+  @StaleEditAnswers(SnapshotCommentDto, 'a sentence: it was already deleted.')
   async deleteComment(
     @CurrentTrialAccess() access: TrialAccessContext,
     @CurrentUser() user: AuthUser,
     @Param('analysisId', ParseIntPipe) analysisId: number,
     @Param('commentId', ParseIntPipe) commentId: number,
+    @Body() body: CommentDeleteDto,
   ): Promise<void> {
-    await this.comments.remove(access.trialId, analysisId, commentId, user);
+    await this.comments.remove(access.trialId, analysisId, commentId, user, body.version);
   }
 }

@@ -15,6 +15,7 @@ import type { CommentInputDto, CommentUpdateDto } from './dto/review.dto';
 import { AnalysisSnapshotRow } from './models/analysis-snapshot.model';
 import { SnapshotCommentRevisionRow } from './models/snapshot-comment-revision.model';
 import { SnapshotCommentRow } from './models/snapshot-comment.model';
+import { refuseStaleEdit } from '../protocol-gate/edit-version';
 import { TrialMemberGuard } from '../protocol-gate/trial-member-guard.service';
 
 const withPeople = () => [
@@ -38,6 +39,7 @@ function present(row: SnapshotCommentRow): SnapshotComment {
     resolvedAt: row.resolvedAt ? row.resolvedAt.toISOString() : null,
     resolvedByName: row.resolver?.name ?? null,
     revisions: revisions.map((r) => ({ kind: r.kind, body: r.body, at: r.createdAt.toISOString(), byName: r.changer?.name ?? null })),
+    version: row.version,
   };
 }
 
@@ -107,6 +109,7 @@ export class CommentsService {
     await this.sequelize.transaction(async (transaction) => {
       const row = await this.comments.findOne({ where: { id: commentId, snapshotId: snapshot.id }, transaction, lock: transaction.LOCK.UPDATE });
       if (!row) throw new NotFoundException('No such comment on this analysis.');
+      await this.refuseStale(row, input.version);
       if (row.deletedAt) throw new ConflictException('This comment was deleted, so it cannot be changed.');
       const changed: string[] = [];
       if (input.body !== undefined && input.body.trim() !== row.body) {
@@ -125,6 +128,7 @@ export class CommentsService {
         changed.push(input.resolved ? 'resolved' : 'reopened');
       }
       if (changed.length === 0) return;
+      row.version += 1;
       await row.save({ transaction });
       await this.activity.record(transaction, {
         trialId: access.trialId,
@@ -138,16 +142,18 @@ export class CommentsService {
   }
 
   /** Deletes one's own comment: its text is emptied and kept as a revision "deleted"; replies stay. */
-  async remove(trialId: number, analysisId: number, commentId: number, user: AuthUser): Promise<void> {
+  async remove(trialId: number, analysisId: number, commentId: number, user: AuthUser, version: number): Promise<void> {
     const snapshot = await this.snapshot(trialId, analysisId);
     await this.sequelize.transaction(async (transaction) => {
       const row = await this.comments.findOne({ where: { id: commentId, snapshotId: snapshot.id }, transaction, lock: transaction.LOCK.UPDATE });
       if (!row) throw new NotFoundException('No such comment on this analysis.');
-      if (row.deletedAt) throw new ConflictException('This comment was already deleted.');
       if (row.authorId !== user.id) throw new ForbiddenException('Only its author can delete a comment.');
+      await this.refuseStale(row, version);
+      if (row.deletedAt) throw new ConflictException('This comment was already deleted.');
       await this.revisions.create({ commentId: row.id, kind: 'deleted', body: row.body, changedById: user.id }, { transaction });
       row.deletedAt = new Date();
       row.body = '';
+      row.version += 1;
       await row.save({ transaction });
       await this.activity.record(transaction, {
         trialId,
@@ -179,6 +185,11 @@ export class CommentsService {
         }),
       );
     }
+  }
+
+  /** A change made from an older copy of the comment: 409 with the comment as stored now, nothing written. */
+  private async refuseStale(row: SnapshotCommentRow, version: number): Promise<void> {
+    await refuseStaleEdit('this comment', row.version, version, async () => present((await this.comments.findByPk(row.id, { include: withPeople() }))!));
   }
 
   private async snapshot(trialId: number, analysisId: number): Promise<AnalysisSnapshotRow> {

@@ -16,10 +16,31 @@ import { AnalysisSnapshotRow } from './models/analysis-snapshot.model';
 import { ReviewRequestRow } from './models/review-request.model';
 import { SignOffRefusedException } from './sign-off-refused.exception';
 import { savedChoicesOf } from './saved-choices';
+import { refuseStaleEdit } from '../protocol-gate/edit-version';
 import { TrialMemberGuard, type TrialMemberPerson } from '../protocol-gate/trial-member-guard.service';
 
 /** A person expected to sign: the trial's reviewers, or its investigators when it has none. */
 type Signer = TrialMemberPerson;
+
+/** A sign-off as answered; `current` is today's data hash of its analysis (undefined: not computed). */
+function presentSignOff(s: AnalysisSignOffRow, current: string | null | undefined): SignOff {
+  return {
+    id: s.id,
+    analysisId: s.snapshotId,
+    userId: s.userId,
+    name: s.signerName,
+    role: s.role,
+    statement: s.statement,
+    signedAt: s.createdAt.toISOString(),
+    dataHash: s.dataHash,
+    engineVersion: s.engineVersion,
+    state: s.withdrawnAt ? 'withdrawn' : current !== undefined && current !== s.dataHash ? 'data-changed' : 'current',
+    version: s.version,
+    amendedAt: s.amendedAt ? s.amendedAt.toISOString() : null,
+    withdrawnAt: s.withdrawnAt ? s.withdrawnAt.toISOString() : null,
+    withdrawalReason: s.withdrawalReason,
+  };
+}
 
 const plural = (n: number, word: string) => `${n} ${word}${n === 1 ? '' : 's'}`;
 
@@ -68,21 +89,8 @@ export class ReviewService {
     const answer = new Map<number, { signOffs: SignOff[]; review: ReviewStatus }>();
     for (const row of rows) {
       const current = currentHashes.get(row.id);
-      const mine = signOffs
-        .filter((s) => s.snapshotId === row.id)
-        .map((s): SignOff => ({
-          id: s.id,
-          analysisId: s.snapshotId,
-          userId: s.userId,
-          name: s.signerName,
-          role: s.role,
-          statement: s.statement,
-          signedAt: s.createdAt.toISOString(),
-          dataHash: s.dataHash,
-          engineVersion: s.engineVersion,
-          state: current !== undefined && current !== s.dataHash ? 'data-changed' : 'current',
-        }));
-      const signedIds = new Set(mine.map((s) => s.userId));
+      const mine = signOffs.filter((s) => s.snapshotId === row.id).map((s) => presentSignOff(s, current));
+      const signedIds = new Set(mine.filter((s) => s.state !== 'withdrawn').map((s) => s.userId));
       const signed = expected.people.filter((p) => signedIds.has(p.id)).length;
       const last = requests.filter((r) => r.snapshotId === row.id).at(-1);
       answer.set(row.id, {
@@ -118,7 +126,7 @@ export class ReviewService {
       const trial = await this.trials.findByPk(trialId, { transaction, lock: transaction.LOCK.UPDATE });
       if (trial?.status !== 'locked') throw new SignOffRefusedException('not-locked');
       const role = await this.signingRole(access, transaction);
-      const earlier = await this.signOffs.findOne({ where: { snapshotId: snapshot.id, userId: user.id }, transaction });
+      const earlier = await this.signOffs.findOne({ where: { snapshotId: snapshot.id, userId: user.id, withdrawnAt: null }, transaction });
       if (earlier) throw new SignOffRefusedException('already', 'you', earlier.createdAt);
       if (current !== snapshot.dataHash) throw new SignOffRefusedException('stale');
       const row = await this.signOffs.create(
@@ -136,6 +144,74 @@ export class ReviewService {
     });
     const state = (await this.forSnapshots(trialId, [snapshot], new Map([[snapshot.id, current]]))).get(snapshot.id)!;
     return state.signOffs.find((s) => s.id === id)!;
+  }
+
+  /**
+   * The author amends the statement of a standing sign-off (the earlier text kept in the activity trail). Only a
+   * sign-off whose data still match: one marked "data changed" is withdrawn and the new analysis signed instead.
+   */
+  async amend(trialId: number, analysisId: number, signOffId: number, user: AuthUser, input: { version: number; statement: string }): Promise<SignOff> {
+    return this.changeOwn(trialId, analysisId, signOffId, user, input.version, async (row, snapshot, current, transaction) => {
+      if (row.withdrawnAt) throw new ConflictException('This sign-off was withdrawn, so its statement cannot change; sign the analysis again instead.');
+      if (current !== row.dataHash) {
+        throw new ConflictException('The data changed after this sign-off, so its statement cannot be amended: withdraw it, and sign the analysis saved from today’s data.');
+      }
+      const before = row.statement;
+      const statement = input.statement.trim();
+      if (statement === before) return;
+      row.statement = statement;
+      row.amendedAt = new Date();
+      row.version += 1;
+      await row.save({ transaction });
+      await this.activity.record(transaction, {
+        trialId,
+        userId: user.id,
+        kind: 'analysis.sign-off-amended',
+        summary: `Amended the statement of their sign-off of the analysis "${snapshot.title}".`,
+        details: { analysisId: snapshot.id, signOffId: row.id, changed: ['statement'], before: { statement: before }, after: { statement } },
+      });
+    });
+  }
+
+  /** The author withdraws a sign-off, saying why: kept on the record as withdrawn, it no longer counts; they may sign again. */
+  async withdraw(trialId: number, analysisId: number, signOffId: number, user: AuthUser, input: { version: number; reason: string }): Promise<SignOff> {
+    return this.changeOwn(trialId, analysisId, signOffId, user, input.version, async (row, snapshot, _current, transaction) => {
+      if (row.withdrawnAt) throw new ConflictException('This sign-off was already withdrawn.');
+      row.withdrawnAt = new Date();
+      row.withdrawalReason = input.reason.trim();
+      row.version += 1;
+      await row.save({ transaction });
+      await this.activity.record(transaction, {
+        trialId,
+        userId: user.id,
+        kind: 'analysis.sign-off-withdrawn',
+        summary: `Withdrew their sign-off of the analysis "${snapshot.title}".`,
+        details: { analysisId: snapshot.id, signOffId: row.id, reason: row.withdrawalReason, statement: row.statement, dataHash: row.dataHash },
+      });
+    });
+  }
+
+  /** Locks one's own sign-off, refuses another person's (403) and a stale version (409 with the sign-off as stored), then applies the change. */
+  private async changeOwn(
+    trialId: number,
+    analysisId: number,
+    signOffId: number,
+    user: AuthUser,
+    version: number,
+    change: (row: AnalysisSignOffRow, snapshot: AnalysisSnapshotRow, current: string | null, transaction: Transaction) => Promise<void>,
+  ): Promise<SignOff> {
+    const snapshot = await this.snapshots.findOne({ where: { id: analysisId, trialId } });
+    if (!snapshot) throw new NotFoundException('No such saved analysis in this trial.');
+    const current = await this.currentHash(trialId, snapshot);
+    await this.sequelize.transaction(async (transaction) => {
+      const row = await this.signOffs.findOne({ where: { id: signOffId, snapshotId: snapshot.id }, transaction, lock: transaction.LOCK.UPDATE });
+      if (!row) throw new NotFoundException('No such sign-off on this analysis.');
+      if (row.userId !== user.id) throw new ForbiddenException('Only the person who signed can amend or withdraw a sign-off.');
+      await refuseStaleEdit(`the sign-off by ${row.signerName}`, row.version, version, () => presentSignOff(row, current));
+      await change(row, snapshot, current, transaction);
+    });
+    const row = (await this.signOffs.findByPk(signOffId))!;
+    return presentSignOff(row, current);
   }
 
   /** E-mails each reviewer of the trial a link to the saved analysis. */

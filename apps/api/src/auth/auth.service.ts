@@ -103,7 +103,7 @@ export class AuthService {
       const link = `${this.mailSettings.appUrl}/reset-password/${token}`;
       // Sent without waiting, so the answer takes no longer for an account's address than for any other and
       // so does not tell whether the account exists; a mail failure is logged by MailService.
-      void this.mail.send(passwordResetEmail({ to: user.email, name: user.name, link, expiresAt, ttlMinutes: ttl })).catch(() => undefined);
+      void this.mail.send(passwordResetEmail({ to: user.email, name: user.name, link, expiresAt, ttlMinutes: ttl, locale: user.locale })).catch(() => undefined);
     }
     return { message: RESET_ANSWER(ttl) };
   }

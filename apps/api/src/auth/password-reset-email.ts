@@ -1,7 +1,7 @@
 import { escapeHtml } from '../mail/html-escape';
 import type { OutgoingMail } from '../mail/mail.service';
+import { personFormats } from '../mail/person-formats';
 
-const expiryFormat = new Intl.DateTimeFormat('en-GB', { dateStyle: 'full', timeStyle: 'short', timeZone: 'UTC' });
 
 /**
  * Password-reset e-mail — the link to choose a new password, when it stops working, and what to do if
@@ -9,8 +9,8 @@ const expiryFormat = new Intl.DateTimeFormat('en-GB', { dateStyle: 'full', timeS
  * @example passwordResetEmail({ to: 'a@example.org', name: 'Robin', link: 'https://…/reset-password/x', expiresAt }).subject
  *   // → 'Choose a new Friable password'
  */
-export function passwordResetEmail(facts: { to: string; name: string; link: string; expiresAt: Date; ttlMinutes: number }): OutgoingMail {
-  const expires = `${expiryFormat.format(facts.expiresAt)} UTC`;
+export function passwordResetEmail(facts: { to: string; name: string; link: string; expiresAt: Date; ttlMinutes: number; locale: string | null }): OutgoingMail {
+  const expires = personFormats(facts.locale).moment(facts.expiresAt);
   const lines = [
     `Hello ${facts.name},`,
     '',

@@ -97,7 +97,9 @@ export class ExportsService {
         ['review', snapshot.review.label],
         ...snapshot.signOffs.map((s, i): [string, string] => [
           `sign-off ${i + 1}`,
-          `${s.name} (${s.role}), ${s.signedAt}: "${s.statement}"${s.state === 'data-changed' ? ' — data changed after sign-off' : ''}`,
+          `${s.name} (${s.role}), ${s.signedAt}: "${s.statement}"${s.amendedAt ? ` (amended ${s.amendedAt})` : ''}${
+            s.state === 'withdrawn' ? ` — withdrawn ${s.withdrawnAt}: ${s.withdrawalReason}` : s.state === 'data-changed' ? ' — data changed after sign-off' : ''
+          }`,
         ]),
       ]);
       this.analysisTables(sheet, snapshot.result);

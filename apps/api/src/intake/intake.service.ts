@@ -473,7 +473,10 @@ export class IntakeService {
   /** The receipt goes after the commit, unless the uploader turned receipts off; a mail server that is down does not undo the upload. */
   private async sendReceipt(resolved: Resolved, user: AuthUser, upload: IntakeUpload, outcome: Outcome): Promise<void> {
     const { result } = outcome;
-    const [wanted] = await this.sequelize.query<{ receipts: number }>('SELECT email_receipts AS receipts FROM users WHERE id = ?', { replacements: [user.id], type: QueryTypes.SELECT });
+    const [wanted] = await this.sequelize.query<{ receipts: number; locale: string | null }>('SELECT email_receipts AS receipts, locale FROM users WHERE id = ?', {
+      replacements: [user.id],
+      type: QueryTypes.SELECT,
+    });
     if (!wanted || !Number(wanted.receipts)) return;
     try {
       await this.mail.send(
@@ -491,6 +494,7 @@ export class IntakeService {
           warningsAccepted: outcome.warningsAccepted,
           committedAt: new Date(),
           link: `${this.mailSettings.appUrl}/trials/${resolved.trial.id}/ledger?site=${resolved.site.id}&round=${resolved.round.id}`,
+          locale: wanted.locale,
         }),
       );
     } catch (error) {

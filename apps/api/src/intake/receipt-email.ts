@@ -1,5 +1,6 @@
 import { escapeHtml } from '../mail/html-escape';
 import type { OutgoingMail } from '../mail/mail.service';
+import { personFormats } from '../mail/person-formats';
 
 export interface IntakeReceiptFacts {
   to: string;
@@ -16,11 +17,10 @@ export interface IntakeReceiptFacts {
   committedAt: Date;
   /** Where the uploader sees the values (the trial's Ledger). */
   link: string;
+  /** The uploader's locale for the counts and the time (their account's setting); null: the plain forms. */
+  locale: string | null;
 }
 
-const whenFormat = new Intl.DateTimeFormat('en-GB', { dateStyle: 'full', timeStyle: 'short', timeZone: 'UTC' });
-const count = (value: number) => new Intl.NumberFormat('en').format(value);
-const plural = (value: number, one: string, many: string) => `${count(value)} ${value === 1 ? one : many}`;
 
 /**
  * Intake receipt e-mail — the message an uploader gets after a file was committed: which file,
@@ -30,7 +30,9 @@ const plural = (value: number, one: string, many: string) => `${count(value)} ${
  *   // → 'Received: FW-CLAY-26, Hollow Lane, Day 0'
  */
 export function intakeReceiptEmail(facts: IntakeReceiptFacts): OutgoingMail {
-  const when = `${whenFormat.format(facts.committedAt)} UTC`;
+  const formats = personFormats(facts.locale);
+  const plural = (value: number, one: string, many: string) => `${formats.count(value)} ${value === 1 ? one : many}`;
+  const when = formats.moment(facts.committedAt);
   const lines = [
     `${plural(facts.created, 'new value', 'new values')}`,
     `${plural(facts.updated, 'changed value', 'changed values')}`,

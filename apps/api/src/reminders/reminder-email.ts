@@ -1,6 +1,7 @@
 import { COLLABORATOR_SAFETY_LINE } from '../invitations/invitation-email';
 import { escapeHtml } from '../mail/html-escape';
 import type { OutgoingMail } from '../mail/mail.service';
+import { personFormats } from '../mail/person-formats';
 
 export interface ReminderEmailFacts {
   to: string;
@@ -14,9 +15,9 @@ export interface ReminderEmailFacts {
   sites: Array<{ name: string; link: string }>;
   measures: string[];
   safetyNotes: string | null;
+  /** The reader's locale for dates (their account's setting); null: day-month-year. */
+  locale: string | null;
 }
-
-const dueFormat = new Intl.DateTimeFormat('en-GB', { weekday: 'long', day: 'numeric', month: 'long', year: 'numeric', timeZone: 'UTC' });
 
 /**
  * Round reminder e-mail — tells a site collaborator that an assessment round is due tomorrow at their site(s),
@@ -25,7 +26,7 @@ const dueFormat = new Intl.DateTimeFormat('en-GB', { weekday: 'long', day: 'nume
  *   // → 'Tomorrow: Week 2 at Millbrook (CLAY)'
  */
 export function reminderEmail(facts: ReminderEmailFacts): OutgoingMail {
-  const due = dueFormat.format(new Date(`${facts.dueDate}T12:00:00Z`));
+  const due = personFormats(facts.locale).day(new Date(`${facts.dueDate}T12:00:00Z`));
   const siteNames = facts.sites.map((s) => s.name).join(' and ');
   const measures = facts.measures.length ? facts.measures.join(', ') : 'the measures in the protocol';
   const text = [

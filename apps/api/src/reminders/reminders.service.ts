@@ -28,6 +28,7 @@ interface DueRow {
   userId: number;
   userName: string;
   email: string;
+  locale: string | null;
 }
 
 export interface ReminderRun {
@@ -41,7 +42,7 @@ export interface ReminderRun {
 // Collaborators of active trials whose site has a round due on the date and who have not had this reminder yet.
 const DUE_SQL = `
   SELECT r.id AS roundId, r.label AS roundLabel, t.id AS trialId, t.code AS trialCode, t.title AS trialTitle,
-         t.safety_notes AS safetyNotes, s.id AS siteId, s.name AS siteName, u.id AS userId, u.name AS userName, u.email AS email
+         t.safety_notes AS safetyNotes, s.id AS siteId, s.name AS siteName, u.id AS userId, u.name AS userName, u.email AS email, u.locale AS locale
     FROM assessment_rounds r
     JOIN trials t ON t.id = r.trial_id AND t.status = 'active' AND t.start_date IS NOT NULL
     JOIN sites s ON s.trial_id = t.id AND s.deleted_at IS NULL
@@ -125,6 +126,7 @@ export class RemindersService implements OnApplicationBootstrap {
               sites: group.map((row) => ({ name: row.siteName, link: `${this.mailSettings.appUrl}/trials/${row.trialId}/plot-plan?site=${row.siteId}` })),
               measures: measures.get(Number(first.roundId)) ?? [],
               safetyNotes: first.safetyNotes,
+              locale: first.locale,
             }),
           );
         });

@@ -205,7 +205,7 @@ export class TrialsService {
 
   /** Sign-offs of the trial's saved analyses (the review feature owns the table). */
   private async signOffCount(trialId: number, transaction: Transaction): Promise<number> {
-    const [row] = await this.sequelize.query<{ n: number | string }>('SELECT COUNT(*) AS n FROM analysis_sign_offs WHERE trial_id = ?', {
+    const [row] = await this.sequelize.query<{ n: number | string }>('SELECT COUNT(*) AS n FROM analysis_sign_offs WHERE trial_id = ? AND withdrawn_at IS NULL', {
       replacements: [trialId],
       type: QueryTypes.SELECT,
       transaction,

@@ -476,11 +476,11 @@ export interface paths {
         get?: never;
         put?: never;
         post?: never;
-        /** Delete one’s own comment: it shows as deleted, its text kept in history; replies stay */
+        /** Delete one’s own comment, sending the version read: it shows as deleted, its text kept in history; replies stay */
         delete: operations["AnalysesController_deleteComment"];
         options?: never;
         head?: never;
-        /** Edit one’s own comment (the old text kept as "edited"), or mark a thread resolved / open again */
+        /** Edit one’s own comment (the old text kept as "edited"), or mark a thread resolved / open again, sending the version read */
         patch: operations["AnalysesController_updateComment"];
         trace?: never;
     };
@@ -516,6 +516,24 @@ export interface paths {
         options?: never;
         head?: never;
         patch?: never;
+        trace?: never;
+    };
+    "/api/trials/{trialId}/analyses/{analysisId}/sign-offs/{signOffId}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post?: never;
+        /** The signer withdraws their sign-off with a reason and the version they read: it stays on the record as withdrawn and no longer counts */
+        delete: operations["AnalysesController_withdrawSignOff"];
+        options?: never;
+        head?: never;
+        /** The signer amends the statement of their standing sign-off, sending the version they read (the earlier text stays in the activity trail) */
+        patch: operations["AnalysesController_amendSignOff"];
         trace?: never;
     };
     "/api/trials/{trialId}/export-dictionary.csv": {
@@ -1606,6 +1624,13 @@ export interface components {
             count: number;
             cutoff: number | null;
         };
+        CommentDeleteDto: {
+            /**
+             * @description The version the editor saw (from the GET answer); another one answers 409 with the current record.
+             * @example 1
+             */
+            version: number;
+        };
         CommentInputDto: {
             /** @example The gypsum plots at Quarry Hill drained oddly fast; worth a look at the plot notes. */
             body: string;
@@ -1626,6 +1651,11 @@ export interface components {
             body?: string;
             /** @description Mark the thread resolved, or open it again. */
             resolved?: boolean;
+            /**
+             * @description The version the editor saw (from the GET answer); another one answers 409 with the current record.
+             * @example 1
+             */
+            version: number;
         };
         ComparisonsByMethodDto: {
             bonferroni?: components["schemas"]["MethodComparisonSetDto"];
@@ -3443,7 +3473,29 @@ export interface components {
             p: number;
             w: number;
         };
+        SignOffAmendDto: {
+            /** @example I checked the layout, the data at both sites and the model again after the plot notes were added. */
+            statement: string;
+            /**
+             * @description The version the editor saw (from the GET answer); another one answers 409 with the current record.
+             * @example 1
+             */
+            version: number;
+        };
+        SignOffConflict: {
+            /** @description The record as it is stored now, with its version. */
+            current: components["schemas"]["SignOffDto"];
+            error: string;
+            message: string;
+            /** @enum {number} */
+            statusCode: 409;
+        };
         SignOffDto: {
+            /**
+             * Format: date-time
+             * @description When its author last amended the statement.
+             */
+            amendedAt: string | null;
             analysisId: number;
             /** @description SHA-256 of the data the analysis used when signed. */
             dataHash: string;
@@ -3454,20 +3506,37 @@ export interface components {
             role: components["schemas"]["TrialRole"];
             /** Format: date-time */
             signedAt: string;
-            /** @description `data-changed`: the trial’s data moved on after this sign-off. */
+            /** @description `data-changed`: the trial’s data moved on after this sign-off; `withdrawn`: its author took it back (it no longer counts). */
             state: components["schemas"]["SignOffState"];
             statement: string;
             userId: number | null;
+            /**
+             * @description The edit version: sent back with an amendment or the withdrawal.
+             * @example 1
+             */
+            version: number;
+            withdrawalReason: string | null;
+            /** Format: date-time */
+            withdrawnAt: string | null;
         };
         SignOffInputDto: {
             /** @example I checked the layout, the data at both sites and the model; the conclusions follow from them. */
             statement: string;
         };
         /**
-         * @description `data-changed`: the trial’s data moved on after this sign-off.
+         * @description `data-changed`: the trial’s data moved on after this sign-off; `withdrawn`: its author took it back (it no longer counts).
          * @enum {string}
          */
-        SignOffState: "current" | "data-changed";
+        SignOffState: "current" | "data-changed" | "withdrawn";
+        SignOffWithdrawDto: {
+            /** @example The drainage notes for block 2 arrived after I signed; I want to read them first. */
+            reason: string;
+            /**
+             * @description The version the editor saw (from the GET answer); another one answers 409 with the current record.
+             * @example 1
+             */
+            version: number;
+        };
         SiteConflict: {
             /** @description The record as it is stored now, with its version. */
             current: components["schemas"]["SiteDto"];
@@ -3537,6 +3606,14 @@ export interface components {
             /** @description The factor whose level is held. */
             within: string;
         };
+        SnapshotCommentConflict: {
+            /** @description The record as it is stored now, with its version. */
+            current: components["schemas"]["SnapshotCommentDto"];
+            error: string;
+            message: string;
+            /** @enum {number} */
+            statusCode: 409;
+        };
         SnapshotCommentDto: {
             analysisId: number;
             authorId: number | null;
@@ -3557,6 +3634,11 @@ export interface components {
             resolvedByName: string | null;
             /** @description Earlier texts, oldest first. */
             revisions: components["schemas"]["CommentRevisionDto"][];
+            /**
+             * @description The edit version: sent back with an edit, a resolution or the deletion.
+             * @example 1
+             */
+            version: number;
         };
         SphericityDto: {
             chiSquare: number | null;
@@ -5415,7 +5497,11 @@ export interface operations {
             };
             cookie?: never;
         };
-        requestBody?: never;
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["CommentDeleteDto"];
+            };
+        };
         responses: {
             /** @description Deleted. */
             204: {
@@ -5451,13 +5537,13 @@ export interface operations {
                     "application/json": components["schemas"]["ProblemDto"];
                 };
             };
-            /** @description Already deleted. */
+            /** @description The version is stale: VersionConflict with the current record, nothing written. Or a sentence: it was already deleted. */
             409: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": components["schemas"]["ProblemDto"];
+                    "application/json": components["schemas"]["SnapshotCommentConflict"] | components["schemas"]["ProblemDto"];
                 };
             };
         };
@@ -5515,13 +5601,13 @@ export interface operations {
                     "application/json": components["schemas"]["ProblemDto"];
                 };
             };
-            /** @description The comment was deleted. */
+            /** @description The version is stale: VersionConflict with the current record, nothing written. Or a sentence: the comment was deleted. */
             409: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": components["schemas"]["ProblemDto"];
+                    "application/json": components["schemas"]["SnapshotCommentConflict"] | components["schemas"]["ProblemDto"];
                 };
             };
         };
@@ -5649,6 +5735,135 @@ export interface operations {
                 };
                 content: {
                     "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+        };
+    };
+    AnalysesController_withdrawSignOff: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                analysisId: number;
+                signOffId: number;
+                /** @description The trial. */
+                trialId: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["SignOffWithdrawDto"];
+            };
+        };
+        responses: {
+            /** @description The sign-off, now withdrawn. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["SignOffDto"];
+                };
+            };
+            /** @description No valid token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description Needs one of these roles on the trial: investigator, reviewer. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description No such trial, or you are not a member of it. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description The version is stale: VersionConflict with the current record, nothing written. Or a sentence: it was already withdrawn. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["SignOffConflict"] | components["schemas"]["ProblemDto"];
+                };
+            };
+        };
+    };
+    AnalysesController_amendSignOff: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                analysisId: number;
+                signOffId: number;
+                /** @description The trial. */
+                trialId: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["SignOffAmendDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["SignOffDto"];
+                };
+            };
+            /** @description No valid token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description Needs one of these roles on the trial: investigator, reviewer. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description No such trial, or you are not a member of it. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description The version is stale: VersionConflict with the current record, nothing written. Or a sentence: the sign-off was withdrawn, or the data changed after it. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["SignOffConflict"] | components["schemas"]["ProblemDto"];
                 };
             };
         };

@@ -1,5 +1,5 @@
 import { numberOrNull, writeNumber } from './number-reading';
-import { personLocale } from './person-locale';
+import { personDateFormat, personLocale } from './person-locale';
 
 /** "rcbd" → "Randomized complete block", for people rather than machines. */
 export const designLabels: Record<string, string> = {
@@ -34,10 +34,9 @@ export const roleLabels: Record<string, string> = {
   reviewer: 'Reviewer',
 };
 
-const dateFormat = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short', year: 'numeric' });
-
+/** A day for people, in their account's locale: "3 Dec 2026" (no locale set, or en-GB), "3. Dez. 2026" (de-DE). */
 export function formatDate(iso: string): string {
-  return dateFormat.format(new Date(iso));
+  return personDateFormat('day', { day: 'numeric', month: 'short', year: 'numeric' }).format(new Date(iso));
 }
 
 const numberFormats = new Map<string, Intl.NumberFormat>();

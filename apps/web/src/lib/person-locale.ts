@@ -25,6 +25,27 @@ export function personLocale(): string {
   return accountLocale ?? browserLocale();
 }
 
+/**
+ * The locale dates are written in: the account's own setting, else day-month-year ("3 Dec 2026"), the form
+ * Friable has always shown — a browser's language alone does not turn dates around under someone's feet.
+ */
+export function dateLocale(): string {
+  return accountLocale ?? 'en-GB';
+}
+
+const dateFormats = new Map<string, Intl.DateTimeFormat>();
+
+/** A date format in the person's date locale, made once per locale and `shape` (a name for the options). */
+export function personDateFormat(shape: string, options: Intl.DateTimeFormatOptions): Intl.DateTimeFormat {
+  const key = `${dateLocale()}|${shape}`;
+  let format = dateFormats.get(key);
+  if (!format) {
+    format = new Intl.DateTimeFormat(dateLocale(), options);
+    dateFormats.set(key, format);
+  }
+  return format;
+}
+
 /** Set from the account (`/api/auth/me`); null falls back to the browser's language. */
 export function setAccountLocale(locale: string | null | undefined): void {
   const next = usable(locale) ? locale : null;

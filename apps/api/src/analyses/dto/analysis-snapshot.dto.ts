@@ -119,4 +119,7 @@ export class SnapshotCommentDto implements SnapshotComment {
 
   @ApiProperty({ type: [CommentRevisionDto], description: 'Earlier texts, oldest first.' })
   revisions: CommentRevisionDto[];
+
+  @ApiProperty({ example: 1, description: 'The edit version: sent back with an edit, a resolution or the deletion.' })
+  version: number;
 }

@@ -1,6 +1,7 @@
 import {
   SIGN_OFF_STATES,
   TRIAL_ROLES,
+  type CommentDeleteInput,
   type CommentInput,
   type CommentRevision,
   type CommentUpdateInput,
@@ -9,11 +10,14 @@ import {
   type ReviewRequestInput,
   type ReviewStatus,
   type SignOff,
+  type SignOffAmendInput,
   type SignOffInput,
+  type SignOffWithdrawInput,
   type SignOffState,
   type TrialRole,
 } from '@friable/contracts';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
+import { EditVersionDto } from '../../protocol-gate/edit-version';
 import { IsBoolean, IsInt, IsOptional, IsString, Matches, MaxLength, Min } from 'class-validator';
 
 export class SignOffDto implements SignOff {
@@ -44,8 +48,24 @@ export class SignOffDto implements SignOff {
   @ApiProperty()
   engineVersion: string;
 
-  @ApiProperty({ enum: SIGN_OFF_STATES, enumName: 'SignOffState', description: '`data-changed`: the trial’s data moved on after this sign-off.' })
+  @ApiProperty({
+    enum: SIGN_OFF_STATES,
+    enumName: 'SignOffState',
+    description: '`data-changed`: the trial’s data moved on after this sign-off; `withdrawn`: its author took it back (it no longer counts).',
+  })
   state: SignOffState;
+
+  @ApiProperty({ example: 1, description: 'The edit version: sent back with an amendment or the withdrawal.' })
+  version: number;
+
+  @ApiProperty({ type: String, format: 'date-time', nullable: true, description: 'When its author last amended the statement.' })
+  amendedAt: string | null;
+
+  @ApiProperty({ type: String, format: 'date-time', nullable: true })
+  withdrawnAt: string | null;
+
+  @ApiProperty({ type: String, nullable: true })
+  withdrawalReason: string | null;
 }
 
 export class ReviewStatusDto implements ReviewStatus {
@@ -145,6 +165,26 @@ export class SignOffInputDto implements SignOffInput {
   statement: string;
 }
 
+/** PATCH /api/trials/:trialId/analyses/:analysisId/sign-offs/:signOffId — the author's new statement. */
+export class SignOffAmendDto extends EditVersionDto implements SignOffAmendInput {
+  @ApiProperty({ example: 'I checked the layout, the data at both sites and the model again after the plot notes were added.' })
+  @IsString({ message: STATEMENT })
+  @Matches(/\S/, { message: STATEMENT })
+  @MaxLength(1000, { message: STATEMENT })
+  statement: string;
+}
+
+const REASON = 'reason must be text of 1 to 1000 characters';
+
+/** DELETE /api/trials/:trialId/analyses/:analysisId/sign-offs/:signOffId — why the author takes it back. */
+export class SignOffWithdrawDto extends EditVersionDto implements SignOffWithdrawInput {
+  @ApiProperty({ example: 'The drainage notes for block 2 arrived after I signed; I want to read them first.' })
+  @IsString({ message: REASON })
+  @Matches(/\S/, { message: REASON })
+  @MaxLength(1000, { message: REASON })
+  reason: string;
+}
+
 /** POST /api/trials/:trialId/analyses/:analysisId/review-requests. */
 export class ReviewRequestInputDto implements ReviewRequestInput {
   @ApiPropertyOptional({ type: String, nullable: true, description: 'A note for the reviewers, included in the e-mail.' })
@@ -170,7 +210,7 @@ export class CommentInputDto implements CommentInput {
 }
 
 /** PATCH /api/trials/:trialId/analyses/:analysisId/comments/:commentId. */
-export class CommentUpdateDto implements CommentUpdateInput {
+export class CommentUpdateDto extends EditVersionDto implements CommentUpdateInput {
   @ApiPropertyOptional({ description: 'New text (the author only); the old text is kept as "edited".' })
   @IsOptional()
   @IsString({ message: BODY })
@@ -183,3 +223,6 @@ export class CommentUpdateDto implements CommentUpdateInput {
   @IsBoolean({ message: 'resolved must be true or false' })
   resolved?: boolean;
 }
+
+/** DELETE /api/trials/:trialId/analyses/:analysisId/comments/:commentId — the version the author saw. */
+export class CommentDeleteDto extends EditVersionDto implements CommentDeleteInput {}

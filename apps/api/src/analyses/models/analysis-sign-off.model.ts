@@ -4,7 +4,10 @@ import { Trial } from '../../trials/models/trial.model';
 import { User } from '../../users/models/user.model';
 import { AnalysisSnapshotRow } from './analysis-snapshot.model';
 
-/** One person's sign-off of a saved analysis: name and role at the time, statement, and the data hash and engine version signed. */
+/**
+ * One person's sign-off of a saved analysis: name and role at the time, statement, and the data hash and engine version
+ * signed. Its author may amend the statement or withdraw it (kept, with the reason); `version` guards both.
+ */
 @Table({ tableName: 'analysis_sign_offs', updatedAt: false })
 export class AnalysisSignOffRow extends Model {
   @Column({ type: DataType.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true })
@@ -36,6 +39,19 @@ export class AnalysisSignOffRow extends Model {
 
   @Column({ type: DataType.STRING(40), allowNull: false, field: 'engine_version' })
   declare engineVersion: string;
+
+  /** Bumped by each amendment and by the withdrawal; an edit sent with another version is refused. */
+  @Column({ type: DataType.INTEGER.UNSIGNED, allowNull: false, defaultValue: 1 })
+  declare version: number;
+
+  @Column({ type: DataType.DATE(3), allowNull: true, field: 'amended_at' })
+  declare amendedAt: Date | null;
+
+  @Column({ type: DataType.DATE(3), allowNull: true, field: 'withdrawn_at' })
+  declare withdrawnAt: Date | null;
+
+  @Column({ type: DataType.STRING(1000), allowNull: true, field: 'withdrawal_reason' })
+  declare withdrawalReason: string | null;
 
   declare createdAt: Date;
 }

@@ -47,6 +47,10 @@ export class SnapshotCommentRow extends Model {
   @BelongsTo(() => User, 'resolved_by')
   declare resolver?: User | null;
 
+  /** Bumped by each edit, resolution, reopening and the deletion; a change sent with another version is refused. */
+  @Column({ type: DataType.INTEGER.UNSIGNED, allowNull: false, defaultValue: 1 })
+  declare version: number;
+
   @HasMany(() => SnapshotCommentRevisionRow, 'comment_id')
   declare revisions?: SnapshotCommentRevisionRow[];
 

@@ -32,6 +32,7 @@ import * as createIntakeColumnChoices from './20261217090200-create-intake-colum
 import * as factorLevelRates from './20261218090000-factor-level-rates';
 import * as fourFactorTreatments from './20261218090100-four-factor-treatments';
 import * as plotUnits from './20261218090200-plot-units';
+import * as signOffAndCommentVersions from './20261220110000-sign-off-and-comment-versions';
 import * as createDataStamps from './20261215090000-create-data-stamps';
 import * as createSchedulerLeases from './20261215090100-create-scheduler-leases';
 import * as protocolVersions from './20261214090000-protocol-versions';
@@ -79,4 +80,5 @@ export const migrations: ReadonlyArray<readonly [name: string, module: Migration
   ['20261215090000-create-data-stamps', createDataStamps],
   ['20261215090100-create-scheduler-leases', createSchedulerLeases],
   ['20261214090000-protocol-versions', protocolVersions],
+  ['20261220110000-sign-off-and-comment-versions', signOffAndCommentVersions],
 ];

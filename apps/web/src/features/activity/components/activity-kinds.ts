@@ -26,6 +26,8 @@ export const activityGroups: ReadonlyArray<{ prefix: string; label: string; kind
       'analysis.saved': 'Analysis saved',
       'analysis.review-requested': 'Review requested',
       'analysis.signed-off': 'Analysis signed off',
+      'analysis.sign-off-amended': 'Sign-off statement amended',
+      'analysis.sign-off-withdrawn': 'Sign-off withdrawn',
       'analysis.commented': 'Comment added',
       'analysis.comment-replied': 'Reply added',
       'analysis.comment-changed': 'Comment edited or resolved',

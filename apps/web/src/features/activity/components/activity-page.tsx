@@ -3,10 +3,10 @@ import type { ActivityEntry, TrialDetail } from '@friable/contracts';
 import { useSearchParams } from 'react-router-dom';
 import { EmptyState, ErrorState, LoadingState } from '../../../components/states';
 import { formatNumber } from '../../../lib/format';
+import { personDateFormat } from '../../../lib/person-locale';
 import { useActivity } from '../api/get-activity';
 import { activityGroups, activityKindLabel, kindMatches } from './activity-kinds';
 
-const momentFormat = new Intl.DateTimeFormat('en-GB', { weekday: 'short', day: 'numeric', month: 'short', year: 'numeric', hour: '2-digit', minute: '2-digit' });
 
 /** The most entries the API answers at once. */
 const LIST_LIMIT = 1000;
@@ -110,7 +110,7 @@ export function ActivityPage({ trial, people }: { trial: TrialDetail; people: Ac
             {entries.map((entry) => (
               <li key={entry.id} className="fr-activity__entry">
                 <time className="fr-activity__when" dateTime={entry.at}>
-                  {momentFormat.format(new Date(entry.at))}
+                  {personDateFormat('weekday-moment', { weekday: 'short', day: 'numeric', month: 'short', year: 'numeric', hour: '2-digit', minute: '2-digit' }).format(new Date(entry.at))}
                 </time>
                 <div className="fr-activity__what">
                   <p className="fr-activity__summary">{entry.summary}</p>

@@ -1,4 +1,4 @@
-import type { CommentInput, CommentUpdateInput } from '@friable/contracts';
+import type { CommentDeleteInput, CommentInput, CommentUpdateInput } from '@friable/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api, unwrap } from '../../../lib/api-client';
 import { analysesQueryOptions } from '../../../lib/api/get-analyses';
@@ -15,15 +15,18 @@ export function changeAnalysisComment(trialId: number, analysisId: number, comme
   return unwrap(api.PATCH(commentPath, { params: { path: { trialId, analysisId, commentId } }, body }));
 }
 
-/** DELETE …/comments/:commentId — delete one's own comment (its text stays in the history). */
-export function deleteAnalysisComment(trialId: number, analysisId: number, commentId: number) {
-  return unwrap(api.DELETE(commentPath, { params: { path: { trialId, analysisId, commentId } } }));
+/** DELETE …/comments/:commentId — delete one's own comment (its text stays in the history), with the version read. */
+export function deleteAnalysisComment(trialId: number, analysisId: number, commentId: number, body: CommentDeleteInput) {
+  return unwrap(api.DELETE(commentPath, { params: { path: { trialId, analysisId, commentId } }, body }));
 }
 
-/** Every comment change reloads the comments and the list's counts (both under the analyses key). */
+/**
+ * Every comment change reloads the comments and the list's counts (both under the analyses key) — after a
+ * refusal too, so a change made from an old copy (409) shows the comment as it is now beside the message.
+ */
 function useCommentMutation<T>(trialId: number, run: (input: T) => Promise<unknown>) {
   const queryClient = useQueryClient();
-  return useMutation({ mutationFn: run, onSuccess: () => queryClient.invalidateQueries({ queryKey: analysesQueryOptions(trialId).queryKey }) });
+  return useMutation({ mutationFn: run, onSettled: () => queryClient.invalidateQueries({ queryKey: analysesQueryOptions(trialId).queryKey }) });
 }
 
 export function useAddAnalysisComment(trialId: number, analysisId: number) {
@@ -35,5 +38,5 @@ export function useChangeAnalysisComment(trialId: number, analysisId: number) {
 }
 
 export function useDeleteAnalysisComment(trialId: number, analysisId: number) {
-  return useCommentMutation(trialId, (commentId: number) => deleteAnalysisComment(trialId, analysisId, commentId));
+  return useCommentMutation(trialId, ({ commentId, ...body }: CommentDeleteInput & { commentId: number }) => deleteAnalysisComment(trialId, analysisId, commentId, body));
 }

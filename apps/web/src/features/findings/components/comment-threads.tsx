@@ -1,59 +1,21 @@
-import { Button, Tag, TextArea } from '@blueprintjs/core';
+import { Button, Tag } from '@blueprintjs/core';
 import type { SnapshotComment, TrialDetail } from '@friable/contracts';
-import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
-import { Controller, useForm } from 'react-hook-form';
 import { z } from 'zod';
 import { ConfirmButton } from '../../../components/confirm-button';
 import { formatDate } from '../../../lib/format';
 import { useAddAnalysisComment, useChangeAnalysisComment, useDeleteAnalysisComment } from '../api/add-analysis-comment';
 import { useAnalysisComments } from '../api/get-analysis-comments';
+import { TextAreaForm } from './text-area-form';
 
 type Props = { trial: TrialDetail; analysisId: number; meId?: number };
 
 /** A comment as typed: some words, at most 4,000 characters (the server checks again). */
-const commentSchema = z.object({ body: z.string().trim().min(1, 'Write the comment first.').max(4000, 'A comment is at most 4,000 characters.') });
+const commentSchema = z.object({ text: z.string().trim().min(1, 'Write the comment first.').max(4000, 'A comment is at most 4,000 characters.') });
 
 /** A text box with its send button, for a new comment, a reply or an edit. */
-function CommentForm({
-  label,
-  submitText,
-  initial = '',
-  pending,
-  error,
-  onSubmit,
-  onCancel,
-}: {
-  label: string;
-  submitText: string;
-  initial?: string;
-  pending: boolean;
-  error: Error | null;
-  onSubmit: (body: string, clear: () => void) => void;
-  onCancel?: () => void;
-}) {
-  const { control, handleSubmit, reset, formState } = useForm<{ body: string }>({ resolver: zodResolver(commentSchema), defaultValues: { body: initial } });
-  const problem = formState.errors.body?.message ?? error?.message;
-  return (
-    <form className="fr-comment-form" noValidate onSubmit={handleSubmit(({ body }) => onSubmit(body, () => reset({ body: '' })))}>
-      <Controller
-        control={control}
-        name="body"
-        render={({ field }) => (
-          <TextArea aria-label={label} name={field.name} value={field.value} onChange={(e) => field.onChange(e.target.value)} onBlur={field.onBlur} inputRef={field.ref} fill rows={2} maxLength={4000} />
-        )}
-      />
-      {problem && (
-        <p className="fr-error-line" role="alert">
-          {problem}
-        </p>
-      )}
-      <div className="fr-findings-actions">
-        <Button type="submit" icon="comment" text={submitText} loading={pending} />
-        {onCancel && <Button text="Cancel" onClick={onCancel} />}
-      </div>
-    </form>
-  );
+function CommentForm(props: { label: string; submitText: string; initial?: string; pending: boolean; error: Error | null; onSubmit: (body: string, clear: () => void) => void; onCancel?: () => void }) {
+  return <TextAreaForm {...props} schema={commentSchema} maxLength={4000} icon="comment" />;
 }
 
 function History({ comment }: { comment: SnapshotComment }) {
@@ -115,7 +77,7 @@ function CommentItem({ trial, analysisId, meId, comment, replies }: Props & { co
           initial={comment.body}
           pending={change.isPending}
           error={change.error}
-          onSubmit={(body) => change.mutate({ commentId: comment.id, body }, { onSuccess: () => setEditing(false) })}
+          onSubmit={(body) => change.mutate({ commentId: comment.id, version: comment.version, body }, { onSuccess: () => setEditing(false) })}
           onCancel={() => setEditing(false)}
         />
       ) : (
@@ -132,7 +94,7 @@ function CommentItem({ trial, analysisId, meId, comment, replies }: Props & { co
               ariaLabel="Delete this comment"
               loading={remove.isPending}
               question="Delete this comment? It will show as deleted; its text stays in the analysis history, and replies stay."
-              onConfirm={() => remove.mutate(comment.id)}
+              onConfirm={() => remove.mutate({ commentId: comment.id, version: comment.version })}
             />
           )}
           {thread && mayResolve && !deleted && (
@@ -142,7 +104,7 @@ function CommentItem({ trial, analysisId, meId, comment, replies }: Props & { co
               icon={comment.resolvedAt ? 'refresh' : 'tick'}
               text={comment.resolvedAt ? 'Reopen' : 'Mark resolved'}
               loading={change.isPending}
-              onClick={() => change.mutate({ commentId: comment.id, resolved: !comment.resolvedAt })}
+              onClick={() => change.mutate({ commentId: comment.id, version: comment.version, resolved: !comment.resolvedAt })}
             />
           )}
           <History comment={comment} />

@@ -1,19 +1,25 @@
 import { Button, Callout, Tag, TextArea } from '@blueprintjs/core';
 import type { AnalysisSnapshot, SignOff, TrialDetail } from '@friable/contracts';
-import { useState } from 'react';
+import { useState, type ReactNode } from 'react';
 import { formatDate, roleLabels } from '../../../lib/format';
 import { useRequestReview, useSignOffAnalysis } from '../api/sign-off-analysis';
+import { OwnSignOffActions } from './own-sign-off-actions';
 
 /** The words beside a sign-off whose data moved on after it. */
 export const DATA_CHANGED_WORDS = 'Data changed after sign-off';
 
-/** One sign-off: who, in which role, when, their statement, and whether the data changed since. */
-export function SignOffLine({ signOff }: { signOff: SignOff }) {
+/** One sign-off: who, in which role, when, their statement (and whether amended), and whether the data changed since or it was withdrawn. */
+export function SignOffLine({ signOff, children }: { signOff: SignOff; children?: ReactNode }) {
+  const withdrawn = signOff.state === 'withdrawn';
   return (
-    <li className="fr-sign-off">
+    <li className={`fr-sign-off${withdrawn ? ' fr-sign-off--withdrawn' : ''}`}>
       <span>
         <strong>{signOff.name}</strong> <span className="fr-muted">({roleLabels[signOff.role]}), {formatDate(signOff.signedAt)}</span>{' '}
-        {signOff.state === 'data-changed' ? (
+        {withdrawn ? (
+          <Tag minimal icon="undo">
+            Withdrawn on {formatDate(signOff.withdrawnAt!)}
+          </Tag>
+        ) : signOff.state === 'data-changed' ? (
           <Tag intent="warning" minimal icon="history">
             {DATA_CHANGED_WORDS}
           </Tag>
@@ -24,9 +30,12 @@ export function SignOffLine({ signOff }: { signOff: SignOff }) {
         )}
       </span>
       <q className="fr-sign-off__statement">{signOff.statement}</q>
+      {signOff.amendedAt && <span className="fr-muted fr-small">Statement amended on {formatDate(signOff.amendedAt)}.</span>}
+      {withdrawn && <span className="fr-small">Why withdrawn: {signOff.withdrawalReason}</span>}
       <span className="fr-muted fr-small">
         Data {signOff.dataHash.slice(0, 12)}…, engine {signOff.engineVersion}
       </span>
+      {children}
     </li>
   );
 }
@@ -39,7 +48,7 @@ export function ReviewPanel({ trial, snapshot, meId }: { trial: TrialDetail; sna
   const { review, signOffs } = snapshot;
   const investigator = trial.myRoles.includes('investigator');
   const mayRole = trial.myRoles.includes('reviewer') || (investigator && review.expectedRole === 'investigator');
-  const signedByMe = meId !== undefined && signOffs.some((s) => s.userId === meId);
+  const signedByMe = meId !== undefined && signOffs.some((s) => s.userId === meId && s.state !== 'withdrawn');
   return (
     <section className="fr-snapshots fr-review" aria-labelledby="fr-review-title">
       <h3 id="fr-review-title" className="fr-findings-heading">
@@ -55,7 +64,9 @@ export function ReviewPanel({ trial, snapshot, meId }: { trial: TrialDetail; sna
       {signOffs.length > 0 && (
         <ul className="fr-sign-offs" aria-label="Sign-offs">
           {signOffs.map((s) => (
-            <SignOffLine key={s.id} signOff={s} />
+            <SignOffLine key={s.id} signOff={s}>
+              {meId !== undefined && s.userId === meId && s.state !== 'withdrawn' && <OwnSignOffActions trialId={trial.id} signOff={s} />}
+            </SignOffLine>
           ))}
         </ul>
       )}
