@@ -45,7 +45,7 @@ describe('PeoplePage', () => {
       'GET /api/users': { status: 200, body: [admin] },
       'POST /api/users': {
         status: 422,
-        body: { statusCode: 422, error: 'Unprocessable Entity', message: 'Please correct: password must be at least 10 characters long.', errors: [{ field: 'password', message: 'password must be at least 10 characters long' }] },
+        body: { statusCode: 422, error: 'Unprocessable Entity', message: 'Please correct: password must be at least 12 characters long.', errors: [{ field: 'password', message: 'password must be at least 12 characters long' }] },
       },
     });
     renderWithApp(<PeoplePage me={admin} />);
@@ -53,7 +53,7 @@ describe('PeoplePage', () => {
     await userEvent.type(screen.getByLabelText('E-mail'), 'new@example.org');
     await userEvent.type(screen.getByLabelText('Password'), 'short');
     await userEvent.click(screen.getByRole('button', { name: 'Add account' }));
-    expect(await screen.findByText('password must be at least 10 characters long')).toBeInTheDocument();
+    expect(await screen.findByText('password must be at least 12 characters long')).toBeInTheDocument();
     expect(calls.find((c) => c.method === 'POST')?.body).toEqual({ email: 'new@example.org', name: 'New Grower', password: 'short', isAdmin: false });
   });
 

@@ -47,9 +47,9 @@ export function PeoplePage({ me }: { me: PublicUser }) {
           <tbody>
             {people.data.map((person) => (
               <tr key={person.id}>
-                <td>{person.name}</td>
-                <td>{person.email}</td>
-                <td>
+                <td data-label="Name">{person.name}</td>
+                <td data-label="E-mail">{person.email}</td>
+                <td data-label="Account">
                   {person.isAdmin && (
                     <Tag minimal className="fr-people__tag">
                       Administrator
@@ -65,8 +65,8 @@ export function PeoplePage({ me }: { me: PublicUser }) {
                     </Tag>
                   )}
                 </td>
-                <td>{formatDate(person.createdAt)}</td>
-                <td>{person.lastSignInAt ? formatDate(person.lastSignInAt) : <span className="fr-muted">never</span>}</td>
+                <td data-label="Since">{formatDate(person.createdAt)}</td>
+                <td data-label="Last sign-in">{person.lastSignInAt ? formatDate(person.lastSignInAt) : <span className="fr-muted">never</span>}</td>
                 <td className="fr-people__actions">
                   {person.id === me.id ? (
                     <span className="fr-muted">you</span>
@@ -147,7 +147,7 @@ function NewPersonForm() {
         <Field label="E-mail" field="email" error={create.error}>
           <InputGroup id="fr-field-email" type="email" value={email} onValueChange={setEmail} autoComplete="off" />
         </Field>
-        <Field label="Password" field="password" error={create.error} help="At least 10 characters; tell the person to change it.">
+        <Field label="Password" field="password" error={create.error} help="At least 12 characters; tell the person to change it.">
           <InputGroup id="fr-field-password" type="password" value={password} onValueChange={setPassword} autoComplete="new-password" />
         </Field>
         <Checkbox label="Instance administrator (manages accounts, reads every trial)" checked={isAdmin} onChange={(e) => setIsAdmin(e.currentTarget.checked)} />

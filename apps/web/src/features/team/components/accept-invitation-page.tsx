@@ -79,7 +79,7 @@ export function AcceptInvitationPage({ token, onJoined = openTrial }: { token: s
               <Field label="Your name" field="name" error={accept.error} help="As the team will see it.">
                 <InputGroup id="fr-field-name" autoComplete="name" value={name} onValueChange={setName} large />
               </Field>
-              <Field label="Choose a password" field="password" error={accept.error} help="At least 10 characters.">
+              <Field label="Choose a password" field="password" error={accept.error} help="At least 12 characters; very common passwords are refused.">
                 <InputGroup id="fr-field-password" type="password" autoComplete="new-password" value={password} onValueChange={setPassword} large />
               </Field>
             </>
