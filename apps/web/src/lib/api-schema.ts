@@ -2439,7 +2439,7 @@ export interface components {
         };
         IntakeColumnChoiceDto: {
             /**
-             * @description plotLabel, block, treatment, notes, missingReason, a measure code, or null (not read).
+             * @description plotLabel, block, treatment, notes, missingReason, a measure code, notes:<measure code> (that measure’s own notes), or null (not read).
              * @example DRAIN
              */
             choice: string | null;
@@ -8497,6 +8497,8 @@ export interface operations {
                 dryRun?: "true" | "false" | "1" | "0";
                 /** @description JSON object from a column header to what it holds — plotLabel, block, treatment, notes, missingReason, a measure code — or null to ignore the column. Headers not named are matched automatically. */
                 mapping?: string;
+                /** @description The reason for every value written NA (missing) in a row whose missing reason cell is empty, or in a file without that column. */
+                missingReason?: string;
                 /** @description For a workbook: the sheet to read (its tab name). The first visible sheet when left out. */
                 sheet?: string;
                 /** @description A name of your choosing for this upload (8 to 64 letters, digits or dashes), to follow it at GET /api/trials/:trialId/intake-imports/:ticket while it runs. */
@@ -8524,7 +8526,7 @@ export interface operations {
                      * @description The CSV file (UTF-8; comma, semicolon or tab) or .xlsx workbook, as the site and round template. Up to INTAKE_MAX_BYTES (100 MB by default).
                      */
                     file: string;
-                    /** @description JSON: column header → plotLabel, block, treatment, notes, missingReason, a measure code, or null. */
+                    /** @description JSON: column header → plotLabel, block, treatment, notes, missingReason, a measure code, notes:<measure code> (that measure’s own notes), or null. */
                     mapping?: string;
                     /** @description For a workbook: the sheet to read; the first visible one by default. */
                     sheet?: string;
