@@ -5,6 +5,14 @@ import { mockApi, renderWithApp } from '../../../test/render';
 import { amounts, makeTrial, person } from '../../../test/trial-fixture';
 import { ProtocolPage } from './protocol-page';
 
+/** Clicks Activate trial and answers its one question. */
+async function activate() {
+  await userEvent.click(screen.getByRole('button', { name: 'Activate trial' }));
+  const question = await screen.findByRole('alertdialog');
+  expect(question).toHaveTextContent('Activate trial CLAY-T? Collaborators can then record values at their sites.');
+  await userEvent.click(within(question).getByRole('button', { name: 'Activate now' }));
+}
+
 const base = { 'GET /api/auth/me': { status: 200, body: person }, 'GET /api/trials/3/amounts': { status: 200, body: amounts } };
 /** The fixture trial before any site is randomized: adding a treatment clears nothing, so nothing is asked. */
 const unrandomized = () => {
@@ -44,7 +52,7 @@ describe('ProtocolPage', () => {
     });
     renderWithApp(<ProtocolPage trial={makeTrial()} />);
     expect(within(screen.getByRole('list', { name: 'What stops activation' })).getByText('Site Millbrook is not randomized yet.')).toBeInTheDocument();
-    await userEvent.click(screen.getByRole('button', { name: 'Activate trial' }));
+    await activate();
     expect(await screen.findByText('The trial cannot be activated yet.')).toBeInTheDocument();
     expect(calls.find((c) => c.method === 'PATCH')?.body).toEqual({ status: 'active', version: 1 });
   });
@@ -59,7 +67,7 @@ describe('ProtocolPage', () => {
     };
     const calls = mockApi(api);
     renderWithApp(<ProtocolPage trial={makeTrial()} />);
-    await userEvent.click(screen.getByRole('button', { name: 'Activate trial' }));
+    await activate();
     const conflict = await screen.findByRole('dialog', { name: 'Someone else changed trial CLAY-T' });
     const status = within(conflict).getByRole('group', { name: 'Status' });
     expect(status).toHaveTextContent('Yoursactive');
