@@ -78,6 +78,37 @@ describe('Safety rails and words at laptop and phone size', () => {
         expect((await api<LayoutImpact>(page, `/trials/${trial.id}/layout-impact`)).layouts).toBe(0);
       }, 120_000);
 
+      it('removing a measure with values says how many it archives and waits for the trial code to be typed', async () => {
+        const { page } = session;
+        const { trial } = await signedInWithTrial(page, `RV${size.name[0]}`, true);
+        const base = `/trials/${trial.id}`;
+        // A second measure in the round, so drain time is not the round's only measure.
+        const crumble = await api<{ id: number }>(page, `${base}/measures`, { method: 'POST', json: { code: 'CRUMB', name: 'crumble score', unit: 'score', kind: 'score', scaleMin: 1, scaleMax: 5, decimals: 0, higherIsBetter: true } });
+        const round = trial.rounds[0]!;
+        await api(page, `${base}/rounds/${round.id}`, { method: 'PATCH', json: { version: round.version, measureIds: [trial.measures[0]!.id, crumble.id] } });
+        await page.goto(`${baseUrl()}${base}/protocol`);
+        await page.getByRole('button', { name: 'Remove DRAIN' }).click();
+        const dialog = page.getByRole('dialog', { name: 'Remove measure DRAIN (drain time)' });
+        await dialog
+          .getByText('Removes 12 recorded values of drain time at Quarry Lane. They are archived: kept on record, but no longer shown in the Ledger, Findings, exports or reports.')
+          .waitFor();
+        expect(await dialog.getByRole('list', { name: 'What it archives, site by site' }).innerText()).toBe('Quarry Lane: 12 values');
+        const confirm = dialog.getByRole('button', { name: 'Remove measure' });
+        expect(await confirm.isDisabled()).toBe(true);
+        await dialog.getByLabel(`Type the trial code ${trial.code} to confirm`).fill('BR-WRONG');
+        expect(await confirm.isDisabled()).toBe(true);
+        await screenshot(page, `remove-measure-confirm-${size.name}`);
+        expect(await sideways(page)).toBeLessThanOrEqual(0);
+        await dialog.getByLabel(`Type the trial code ${trial.code} to confirm`).fill(trial.code.toLowerCase());
+        await confirm.click();
+        await page.getByRole('button', { name: 'Remove DRAIN' }).waitFor({ state: 'detached' });
+        const after = await api<TrialDetail>(page, base);
+        expect(after.measures.map((m) => m.code)).toEqual(['CRUMB']);
+        expect(await api<unknown[]>(page, `${base}/observations`)).toEqual([]);
+        const log = await api<Array<{ kind: string; summary: string }>>(page, `${base}/activity`);
+        expect(log.find((entry) => entry.kind === 'measure.archived')?.summary).toBe('Archived measure DRAIN (drain time) with its 12 recorded values at Quarry Lane; it leaves the protocol and stays on record.');
+      }, 120_000);
+
       it('the round walk asks why a value is missing, offers the common reasons, and stores the one tapped', async () => {
         const { page } = session;
         const { trial, plots } = await signedInWithTrial(page, `WK${size.name[0]}`, false, true);

@@ -141,6 +141,8 @@ describe('an investigator designs a two-site trial in the browser', () => {
     // Activation: every check passes now.
     await session.page.getByRole('link', { name: 'Protocol', exact: true }).click();
     await session.page.getByRole('button', { name: 'Activate trial' }).click();
+    // It asks once, saying what changes with it.
+    await session.page.getByRole('alertdialog').getByRole('button', { name: 'Activate now', exact: true }).click();
     await session.page.getByText('Active', { exact: true }).first().waitFor();
     const status = await session.page.evaluate(async (id) => {
       const response = await fetch(`/api/trials/${id}`, { headers: { 'X-Friable-CSRF': '1' } });

@@ -355,3 +355,39 @@ export interface LayoutImpact {
   /** When values exist the change is refused, and this says why; null otherwise. */
   refusal: string | null;
 }
+
+/** One site holding data that removing a measure or a round would archive. */
+export interface RemovalImpactSite {
+  siteId: number;
+  siteName: string;
+  /** Values recorded (censored ones and missing ones with their reason included). */
+  values: number;
+  censored: number;
+  missing: number;
+  /** Values that carry a note. */
+  notes: number;
+  /** Plot photos of the round (always 0 for a measure: photos belong to a plot and round). */
+  photos: number;
+}
+
+/**
+ * GET /trials/:id/measures/:measureId/removal-impact and /trials/:id/rounds/:roundId/removal-impact — what removing
+ * it would take out of the Ledger, Findings and exports, asked before the removal. The rows are archived, not erased.
+ */
+export interface RemovalImpact {
+  /** "measure DT (Drain time)", "round Week 2". */
+  item: string;
+  /** The sites holding its data, in the trial's order. */
+  sites: RemovalImpactSite[];
+  values: number;
+  censored: number;
+  missing: number;
+  notes: number;
+  photos: number;
+  /** "Removes 240 recorded values and 12 notes of Drain time across 3 sites (…). They are archived: …". */
+  summary: string;
+  /** True when data would be archived: the removal then needs the trial's code typed (sent as `confirm`). */
+  confirmationNeeded: boolean;
+  /** Why the removal would be refused whatever is typed (the only measure of a round), or null. */
+  refusal: string | null;
+}

@@ -27,6 +27,8 @@ export interface CheckUploadInput {
   /** The person's mapping step, then the trial's remembered choices (header → role, measure code or null). */
   readonly overrides: Readonly<Record<string, string | null>>;
   readonly remembered: Readonly<Record<string, string | null>>;
+  /** The reason for NA values of rows that give none (chosen for the whole file), or null. */
+  readonly missingReason: string | null;
   /** Which other sites have these labels (for "plot QH-B1-P03 belongs to Quarry Hill Garden"). */
   readonly otherSites: (labels: readonly string[]) => Promise<ReadonlyMap<string, string>>;
   /** Takes each value while the file has no error so far (the database loads them as they come). */
@@ -106,6 +108,7 @@ export async function checkUpload(input: CheckUploadInput): Promise<CheckedUploa
         siteName,
         decimalComma: opened.decimalComma,
         storage: storageChecks,
+        missingReason: input.missingReason,
         onValue: (value) => {
           // Once the file has an error nothing will be written: keep checking, stop handing values on.
           if (checker!.errorCount > 0) return;

@@ -33,7 +33,7 @@ export class IntakeController {
           description: 'The CSV file (UTF-8; comma, semicolon or tab) or .xlsx workbook, as the site and round template. Up to INTAKE_MAX_BYTES (100 MB by default).',
         },
         acceptWarnings: { type: 'string', enum: ['true', 'false'], description: 'Keep values outside the usual range as typed.' },
-        mapping: { type: 'string', description: 'JSON: column header → plotLabel, block, treatment, notes, missingReason, a measure code, or null.' },
+        mapping: { type: 'string', description: 'JSON: column header → plotLabel, block, treatment, notes, missingReason, a measure code, notes:<measure code> (that measure’s own notes), or null.' },
         ticket: { type: 'string', description: 'Your name for this upload, to follow its progress at /api/trials/:trialId/intake-imports/:ticket.' },
         sheet: { type: 'string', description: 'For a workbook: the sheet to read; the first visible one by default.' },
       },
@@ -61,6 +61,7 @@ export class IntakeController {
       dryRun: flagIsSet(query.dryRun ?? body.dryRun),
       acceptWarnings: flagIsSet(query.acceptWarnings ?? body.acceptWarnings),
       columnOverrides: mapping,
+      missingReason: body.missingReason?.trim() || null,
       ticket: body.ticket ?? query.ticket,
       sheet: body.sheet ?? query.sheet ?? null,
     });

@@ -39,6 +39,8 @@ export interface IntakeOptions {
   acceptWarnings: boolean;
   /** From the mapping step: column header → role, measure code, or null to ignore the column. */
   columnOverrides?: Readonly<Record<string, string | null>>;
+  /** The reason for NA values of rows that give none (the upload dialog's choice for the whole file). */
+  missingReason?: string | null;
   /** False to send no receipt e-mail (the demo loader); true by default. */
   receipt?: boolean;
   /** The browser's name for this upload, to follow its progress; one is made up when absent. */
@@ -69,6 +71,11 @@ class RollBack {
 const count = (value: number) => new Intl.NumberFormat('en').format(value);
 const plural = (value: number, one: string, many: string) => `${count(value)} ${value === 1 ? one : many}`;
 const PLOT_PAGE = 50_000;
+
+/** The measures whose notes a file gives: all of its measures with a notes column for the whole row, else those with their own. */
+function notedMeasures(mapping: CheckedUpload['mapping']): number[] {
+  return mapping.notes !== null ? mapping.measures.map((column) => column.measureId) : mapping.measureNotes.map((column) => column.measureId);
+}
 
 function refusalBody(message: string, errors: readonly IntakeProblem[]): IntakeRefusal {
   return { statusCode: 422, error: 'Unprocessable Entity', message, errors: [...errors] };
@@ -257,13 +264,13 @@ export class IntakeService {
           userId: user.id,
           uploadId: row?.id ?? null,
           at: new Date(),
-          withNotes: false,
+          notedMeasureIds: [],
           method: this.config.bulkLoad,
         };
         const stream: BulkStream | null = fresh ? (row ? await this.bulk.openFresh(transaction, context) : null) : await this.bulk.openStaging(transaction, context);
         try {
           const checked = await this.check(resolved, opened, options, plots, remembered, progress, stream, fresh);
-          const written = { ...context, withNotes: checked.mapping.notes !== null };
+          const written = { ...context, notedMeasureIds: notedMeasures(checked.mapping) };
           await progress.stage('comparing', { rowsChecked: checked.rows, message: 'Comparing with the values already stored…', valuesTotal: checked.values });
           const identical = previous?.sha256 === checked.reading.sha256;
           if (!row) throw new RollBack(await this.dryRunOutcome(resolved, checked, fresh, identical, previous, written, transaction, progress));
@@ -321,6 +328,7 @@ export class IntakeService {
       measures: resolved.measures,
       siteName: resolved.site.name,
       overrides: options.columnOverrides ?? {},
+      missingReason: options.missingReason ?? null,
       remembered,
       otherSites: (labels) => this.otherSites(resolved.trial.id, labels),
       // Where nothing is stored, an empty cell without a reason records nothing.

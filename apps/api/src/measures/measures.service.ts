@@ -1,4 +1,4 @@
-import type { Measure } from '@friable/contracts';
+import type { Measure, RemovalImpact } from '@friable/contracts';
 import { ConflictException, Injectable, NotFoundException } from '@nestjs/common';
 import { InjectConnection, InjectModel } from '@nestjs/sequelize';
 import type { Transaction } from 'sequelize';
@@ -10,6 +10,7 @@ import type { AuthUser } from '../common/auth-user';
 import { takenInTrial } from '../common/taken-in-trial';
 import { throwIfProblems } from '../common/exceptions/field-problems.exception';
 import { ProtocolGateService } from '../protocol-gate/protocol-gate.service';
+import { lossInWords, RemovalImpactService, whereInWords } from '../protocol-gate/removal-impact.service';
 import { AssessmentRoundRow } from '../rounds/models/assessment-round.model';
 import { RoundMeasure } from '../rounds/models/round-measure.model';
 import type { CreateMeasureDto } from './dto/create-measure.dto';
@@ -28,6 +29,7 @@ export class MeasuresService {
     @InjectModel(AssessmentRoundRow) private readonly rounds: typeof AssessmentRoundRow,
     @InjectConnection() private readonly sequelize: Sequelize,
     private readonly gate: ProtocolGateService,
+    private readonly removal: RemovalImpactService,
     private readonly activity: ActivityService,
   ) {}
 
@@ -122,28 +124,54 @@ export class MeasuresService {
     });
   }
 
-  async remove(trialId: number, id: number, user: AuthUser): Promise<void> {
-    await this.sequelize.transaction(async (transaction) => {
-      await this.gate.openForWrite(trialId, transaction);
-      const row = await this.find(trialId, id, transaction);
-      await this.gate.refuseIfObserved(trialId, 'all', `Deleting measure ${row.code}`, transaction);
-      const links = await this.roundMeasures.findAll({ where: { measureId: id }, transaction });
-      for (const link of links) {
-        const others = await this.roundMeasures.count({ where: { roundId: link.roundId }, transaction });
-        if (others === 1) {
-          const round = await this.rounds.findByPk(link.roundId, { transaction });
-          throw new ConflictException(`Measure ${row.code} is the only measure of round ${round?.label ?? link.roundId}; give that round another measure or delete it first.`);
-        }
+  /** Why the measure cannot go whatever is typed: it is the only measure of a round. Null when it can. */
+  private async onlyMeasureOf(row: MeasureRow, transaction?: Transaction): Promise<string | null> {
+    const links = await this.roundMeasures.findAll({ where: { measureId: row.id }, transaction });
+    for (const link of links) {
+      if ((await this.roundMeasures.count({ where: { roundId: link.roundId }, transaction })) === 1) {
+        const round = await this.rounds.findByPk(link.roundId, { transaction });
+        return `Measure ${row.code} is the only measure of round ${round?.label ?? link.roundId}; give that round another measure or delete it first.`;
       }
-      // Archived, not deleted (a paranoid model): the row stays for the record; the rounds no longer list it.
+    }
+    return null;
+  }
+
+  /** What removing the measure would archive (its values in every round still shown), asked before the removal. */
+  async removalImpact(trialId: number, id: number, transaction?: Transaction): Promise<RemovalImpact> {
+    const row = await this.measures.findOne({ where: { id, trialId }, transaction });
+    if (!row) throw new NotFoundException('No such measure in this trial.');
+    return this.removal.of(trialId, { kind: 'measure', id, code: row.code, name: row.name }, await this.onlyMeasureOf(row, transaction), transaction);
+  }
+
+  /**
+   * Archives the measure (a paranoid model: the row stays for the record and the rounds no longer list it). Its
+   * recorded values stay stored but leave the Ledger, Findings and exports; when there are any, the trial code
+   * must have been typed (`confirm`).
+   */
+  async remove(trialId: number, id: number, user: AuthUser, confirm?: string): Promise<void> {
+    await this.sequelize.transaction(async (transaction) => {
+      const trial = await this.gate.openForWrite(trialId, transaction);
+      const row = await this.find(trialId, id, transaction);
+      const impact = await this.removalImpact(trialId, id, transaction);
+      if (impact.refusal) throw new ConflictException(impact.refusal);
+      this.removal.checkConfirmation(impact, trial.code, confirm);
+      const links = await this.roundMeasures.findAll({ where: { measureId: id }, transaction });
       await this.roundMeasures.destroy({ where: { measureId: id }, transaction });
       await row.destroy({ transaction });
+      const archived = impact.confirmationNeeded ? ` with its ${lossInWords(impact)} ${whereInWords(impact.sites)}` : '';
       await this.activity.record(transaction, {
         trialId,
         userId: user.id,
         kind: 'measure.archived',
-        summary: `Archived measure ${row.code} (${row.name}); it leaves the protocol and stays on record.`,
-        details: { measureId: row.id, code: row.code, archived: presentMeasure(row), roundIds: links.map((link) => link.roundId) },
+        summary: `Archived measure ${row.code} (${row.name})${archived}; it leaves the protocol and stays on record.`,
+        details: {
+          measureId: row.id,
+          code: row.code,
+          archived: presentMeasure(row),
+          roundIds: links.map((link) => link.roundId),
+          values: { recorded: impact.values, censored: impact.censored, missing: impact.missing, notes: impact.notes, sites: impact.sites },
+          confirmed: impact.confirmationNeeded,
+        },
       });
     });
   }

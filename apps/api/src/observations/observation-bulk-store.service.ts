@@ -10,8 +10,11 @@ export interface BulkWriteContext {
   /** The intake_uploads row of a commit; null for a dry run (then nothing may be written to observations). */
   readonly uploadId: number | null;
   readonly at: Date;
-  /** False when the file has no notes column: stored notes are kept and not compared. */
-  readonly withNotes: boolean;
+  /**
+   * The measures whose notes the file gives (every measure of the file when it has a notes column for the whole row,
+   * else those with a notes column of their own): the stored notes of the others are kept and not compared.
+   */
+  readonly notedMeasureIds: readonly number[];
   readonly method: BulkLoadMethod;
 }
 
@@ -178,9 +181,9 @@ export class ObservationBulkStore {
                 WHEN o.id IS NULL THEN IF(s.blank, ${KIND.skipped}, ${KIND.new})
                 WHEN ${same('o.value_text', 's.value_text')} AND o.censored = s.censored
                      AND (s.value_text IS NOT NULL OR ${same('o.missing_reason', 's.missing_reason')})
-                     AND (? = 0 OR ${same('o.notes', 's.notes')}) THEN ${KIND.unchanged}
+                     AND (FIND_IN_SET(s.measure_id, ?) = 0 OR ${same('o.notes', 's.notes')}) THEN ${KIND.unchanged}
                 ELSE ${KIND.changed} END`,
-      [context.trialId, context.roundId, context.withNotes ? 1 : 0],
+      [context.trialId, context.roundId, context.notedMeasureIds.join(',')],
     );
   }
 
@@ -230,10 +233,10 @@ export class ObservationBulkStore {
     await connection.query(
       `UPDATE observations o JOIN intake_staging s ON o.id = s.observation_id
           SET o.value_text = s.value_text, o.value_decimal = s.value_decimal, o.censored = s.censored, o.missing_reason = s.missing_reason,
-              o.notes = IF(?, s.notes, o.notes), o.version = o.version + 1, o.source = 'upload', o.upload_id = ?,
+              o.notes = IF(FIND_IN_SET(s.measure_id, ?) > 0, s.notes, o.notes), o.version = o.version + 1, o.source = 'upload', o.upload_id = ?,
               o.recorded_by = ?, o.recorded_at = ?, o.updated_at = ?
         WHERE s.kind = ${KIND.changed}`,
-      [context.withNotes ? 1 : 0, context.uploadId, context.userId, at, at],
+      [context.notedMeasureIds.join(','), context.uploadId, context.userId, at, at],
     );
     await connection.query(
       `INSERT INTO observations (trial_id, plot_id, round_id, measure_id, value_text, value_decimal, censored, missing_reason, notes,

@@ -87,7 +87,8 @@ export class ObservationQueryService {
 
   /** The trial's observations, by site, round, block, plot position and measure order. */
   async list(trialId: number, filter: ObservationFilter = {}, transaction?: Transaction): Promise<Observation[]> {
-    const conditions = ['o.trial_id = :trialId'];
+    // Values of an archived measure or round stay stored for the record; they leave every reading.
+    const conditions = ['o.trial_id = :trialId', 'r.deleted_at IS NULL', 'm.deleted_at IS NULL'];
     if (filter.siteId !== undefined) conditions.push('p.site_id = :siteId');
     if (filter.roundId !== undefined) conditions.push('o.round_id = :roundId');
     if (filter.measureId !== undefined) conditions.push('o.measure_id = :measureId');

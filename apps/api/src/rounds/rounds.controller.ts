@@ -1,8 +1,10 @@
-import { Body, Controller, Delete, Get, HttpCode, Param, ParseIntPipe, Patch, Post } from '@nestjs/common';
-import { ApiConflictResponse, ApiCreatedResponse, ApiNoContentResponse, ApiOkResponse, ApiTags, ApiUnprocessableEntityResponse } from '@nestjs/swagger';
+import { Body, Controller, Delete, Get, HttpCode, Param, ParseIntPipe, Patch, Post, Query } from '@nestjs/common';
+import { ApiConflictResponse, ApiCreatedResponse, ApiNoContentResponse, ApiOkResponse, ApiOperation, ApiTags, ApiUnprocessableEntityResponse } from '@nestjs/swagger';
 import type { AuthUser, TrialAccessContext } from '../common/auth-user';
 import { AnyTrialMember, TrialAccess } from '../common/decorators/access.decorator';
 import { StaleEditAnswers } from '../protocol-gate/edit-version';
+import { RemovalConfirmQueryDto } from '../protocol-gate/dto/removal-confirm-query.dto';
+import { RemovalImpactDto } from '../protocol-gate/dto/removal-impact.dto';
 import { CurrentTrialAccess, CurrentUser } from '../common/decorators/current-user.decorator';
 import { CreateRoundDto } from './dto/create-round.dto';
 import { UpdateRoundDto } from './dto/update-round.dto';
@@ -39,12 +41,21 @@ export class RoundsController {
     return this.rounds.update(access.trialId, id, user, body);
   }
 
+  @Get(':id/removal-impact')
+  @TrialAccess('investigator')
+  @ApiOperation({ summary: 'What removing the round would archive (its values of every measure and its photos), per site and in words, asked before removing it' })
+  @ApiOkResponse({ type: RemovalImpactDto, description: 'RemovalImpact: values, notes and photos per site, a sentence, whether the trial code must be typed, and a refusal if any.' })
+  removalImpact(@CurrentTrialAccess() access: TrialAccessContext, @Param('id', ParseIntPipe) id: number) {
+    return this.rounds.removalImpact(access.trialId, id);
+  }
+
   @Delete(':id')
   @HttpCode(204)
   @TrialAccess('investigator')
-  @ApiConflictResponse({ description: 'The trial is locked, or a site has observations.' })
-  @ApiNoContentResponse({ description: 'The round was deleted.' })
-  remove(@CurrentTrialAccess() access: TrialAccessContext, @CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number) {
-    return this.rounds.remove(access.trialId, id, user);
+  @ApiUnprocessableEntityResponse({ description: 'Values or photos are recorded for it and the trial code was not typed as confirm (or was mistyped); nothing written.' })
+  @ApiConflictResponse({ description: 'The trial is locked.' })
+  @ApiNoContentResponse({ description: 'The round was archived, with its recorded values and photos.' })
+  remove(@CurrentTrialAccess() access: TrialAccessContext, @CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number, @Query() query: RemovalConfirmQueryDto) {
+    return this.rounds.remove(access.trialId, id, user, query.confirm);
   }
 }

@@ -1,4 +1,4 @@
-import type { AssessmentRound } from '@friable/contracts';
+import type { AssessmentRound, RemovalImpact } from '@friable/contracts';
 import { Injectable, NotFoundException } from '@nestjs/common';
 import { InjectConnection, InjectModel } from '@nestjs/sequelize';
 import type { Transaction } from 'sequelize';
@@ -10,6 +10,7 @@ import type { AuthUser } from '../common/auth-user';
 import { throwIfProblems, type FieldProblem } from '../common/exceptions/field-problems.exception';
 import { takenInTrial } from '../common/taken-in-trial';
 import { ProtocolGateService } from '../protocol-gate/protocol-gate.service';
+import { lossInWords, RemovalImpactService, whereInWords } from '../protocol-gate/removal-impact.service';
 import { MeasureRow } from '../measures/models/measure.model';
 import { Trial } from '../trials/models/trial.model';
 import type { CreateRoundDto } from './dto/create-round.dto';
@@ -27,6 +28,7 @@ export class RoundsService {
     @InjectModel(Trial) private readonly trials: typeof Trial,
     @InjectConnection() private readonly sequelize: Sequelize,
     private readonly gate: ProtocolGateService,
+    private readonly removal: RemovalImpactService,
     private readonly activity: ActivityService,
   ) {}
 
@@ -108,19 +110,37 @@ export class RoundsService {
     });
   }
 
-  async remove(trialId: number, id: number, user: AuthUser): Promise<void> {
+  /** What removing the round would archive (its values of every measure still shown, its photos), asked before. */
+  async removalImpact(trialId: number, id: number, transaction?: Transaction): Promise<RemovalImpact> {
+    const row = await this.rounds.findOne({ where: { id, trialId }, transaction });
+    if (!row) throw new NotFoundException('No such assessment round in this trial.');
+    return this.removal.of(trialId, { kind: 'round', id, label: row.label }, null, transaction);
+  }
+
+  /**
+   * Archives the round (a paranoid model: the round and its measure list stay for the record). Its recorded values
+   * and photos stay stored but leave the Ledger, Findings and exports; when there are any, the trial code must have
+   * been typed (`confirm`).
+   */
+  async remove(trialId: number, id: number, user: AuthUser, confirm?: string): Promise<void> {
     await this.sequelize.transaction(async (transaction) => {
       const trial = await this.gate.openForWrite(trialId, transaction);
       const before = await this.one(trial, id, transaction);
-      await this.gate.refuseIfObserved(trialId, 'all', `Deleting round ${before.label}`, transaction);
-      // Archived, not deleted (a paranoid model): the round and its measure list stay for the record.
+      const impact = await this.removalImpact(trialId, id, transaction);
+      this.removal.checkConfirmation(impact, trial.code, confirm);
       await this.rounds.destroy({ where: { id }, transaction });
+      const archived = impact.confirmationNeeded ? ` with its ${lossInWords(impact)} ${whereInWords(impact.sites)}` : '';
       await this.activity.record(transaction, {
         trialId,
         userId: user.id,
         kind: 'round.archived',
-        summary: `Archived assessment round ${before.label}; it leaves the protocol and stays on record.`,
-        details: { roundId: id, archived: before },
+        summary: `Archived assessment round ${before.label}${archived}; it leaves the protocol and stays on record.`,
+        details: {
+          roundId: id,
+          archived: before,
+          values: { recorded: impact.values, censored: impact.censored, missing: impact.missing, notes: impact.notes, photos: impact.photos, sites: impact.sites },
+          confirmed: impact.confirmationNeeded,
+        },
       });
     });
   }

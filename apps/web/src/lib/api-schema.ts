@@ -824,6 +824,23 @@ export interface paths {
         patch: operations["MeasuresController_update"];
         trace?: never;
     };
+    "/api/trials/{trialId}/measures/{id}/removal-impact": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** What removing the measure would archive (its values in every round), per site and in words, asked before removing it */
+        get: operations["MeasuresController_removalImpact"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/api/trials/{trialId}/members": {
         parameters: {
             query?: never;
@@ -985,6 +1002,23 @@ export interface paths {
         options?: never;
         head?: never;
         patch: operations["RoundsController_update"];
+        trace?: never;
+    };
+    "/api/trials/{trialId}/rounds/{id}/removal-impact": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** What removing the round would archive (its values of every measure and its photos), per site and in words, asked before removing it */
+        get: operations["RoundsController_removalImpact"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
         trace?: never;
     };
     "/api/trials/{trialId}/sites": {
@@ -2441,7 +2475,7 @@ export interface components {
         };
         IntakeColumnChoiceDto: {
             /**
-             * @description plotLabel, block, treatment, notes, missingReason, a measure code, or null (not read).
+             * @description plotLabel, block, treatment, notes, missingReason, a measure code, notes:<measure code> (that measure’s own notes), or null (not read).
              * @example DRAIN
              */
             choice: string | null;
@@ -3237,6 +3271,37 @@ export interface components {
             /** @description Exactly as typed and stored (decimal text); null when missing. */
             valueText: string | null;
             version: number;
+        };
+        RemovalImpactDto: {
+            censored: number;
+            /** @description True when data would be archived: the DELETE then needs the trial code typed, sent as confirm. */
+            confirmationNeeded: boolean;
+            /** @example measure DT (Drain time) */
+            item: string;
+            missing: number;
+            notes: number;
+            photos: number;
+            /** @description Why the removal is refused whatever is typed (the only measure of a round), or null. */
+            refusal: string | null;
+            /** @description The sites holding its data. */
+            sites: components["schemas"]["RemovalImpactSiteDto"][];
+            /** @example Removes 240 recorded values and 12 notes of Drain time across 3 sites (30 censored). They are archived: kept on record, but no longer shown in the Ledger, Findings, exports or reports. */
+            summary: string;
+            values: number;
+        };
+        RemovalImpactSiteDto: {
+            censored: number;
+            /** @description Values recorded as missing, with their reason. */
+            missing: number;
+            /** @description Values that carry a note. */
+            notes: number;
+            /** @description Plot photos of the round (0 for a measure). */
+            photos: number;
+            siteId: number;
+            /** @example Hollow Lane */
+            siteName: string;
+            /** @description Values recorded (censored ones and missing ones with their reason included). */
+            values: number;
         };
         RepeatedAnswerDto: {
             anova: components["schemas"]["TermTestDto"][];
@@ -7066,7 +7131,10 @@ export interface operations {
     };
     MeasuresController_remove: {
         parameters: {
-            query?: never;
+            query?: {
+                /** @description The trial code typed to confirm (any case); needed when the removal archives values or photos. */
+                confirm?: string;
+            };
             header?: never;
             path: {
                 id: number;
@@ -7077,7 +7145,7 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
-            /** @description The measure was deleted. */
+            /** @description The measure was archived, with its recorded values. */
             204: {
                 headers: {
                     [name: string]: unknown;
@@ -7111,8 +7179,17 @@ export interface operations {
                     "application/json": components["schemas"]["ProblemDto"];
                 };
             };
-            /** @description The trial is locked, a site has observations of it, or it is the only measure of a round. */
+            /** @description The trial is locked, or it is the only measure of a round. */
             409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description Values are recorded for it and the trial code was not typed as confirm (or was mistyped); nothing written. */
+            422: {
                 headers: {
                     [name: string]: unknown;
                 };
@@ -7186,6 +7263,57 @@ export interface operations {
             };
             /** @description A field is wrong; nothing written. */
             422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+        };
+    };
+    MeasuresController_removalImpact: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: number;
+                /** @description The trial. */
+                trialId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description RemovalImpact: values, notes and photos per site, a sentence, whether the trial code must be typed, and a refusal if any. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["RemovalImpactDto"];
+                };
+            };
+            /** @description No valid token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description Needs one of these roles on the trial: investigator. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description No such trial, or you are not a member of it. */
+            404: {
                 headers: {
                     [name: string]: unknown;
                 };
@@ -8075,7 +8203,10 @@ export interface operations {
     };
     RoundsController_remove: {
         parameters: {
-            query?: never;
+            query?: {
+                /** @description The trial code typed to confirm (any case); needed when the removal archives values or photos. */
+                confirm?: string;
+            };
             header?: never;
             path: {
                 id: number;
@@ -8086,7 +8217,7 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
-            /** @description The round was deleted. */
+            /** @description The round was archived, with its recorded values and photos. */
             204: {
                 headers: {
                     [name: string]: unknown;
@@ -8120,8 +8251,17 @@ export interface operations {
                     "application/json": components["schemas"]["ProblemDto"];
                 };
             };
-            /** @description The trial is locked, or a site has observations. */
+            /** @description The trial is locked. */
             409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description Values or photos are recorded for it and the trial code was not typed as confirm (or was mistyped); nothing written. */
+            422: {
                 headers: {
                     [name: string]: unknown;
                 };
@@ -8195,6 +8335,57 @@ export interface operations {
             };
             /** @description A field is wrong; nothing written. */
             422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+        };
+    };
+    RoundsController_removalImpact: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: number;
+                /** @description The trial. */
+                trialId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description RemovalImpact: values, notes and photos per site, a sentence, whether the trial code must be typed, and a refusal if any. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["RemovalImpactDto"];
+                };
+            };
+            /** @description No valid token. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description Needs one of these roles on the trial: investigator. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProblemDto"];
+                };
+            };
+            /** @description No such trial, or you are not a member of it. */
+            404: {
                 headers: {
                     [name: string]: unknown;
                 };
@@ -8530,6 +8721,8 @@ export interface operations {
                 dryRun?: "true" | "false" | "1" | "0";
                 /** @description JSON object from a column header to what it holds — plotLabel, block, treatment, notes, missingReason, a measure code — or null to ignore the column. Headers not named are matched automatically. */
                 mapping?: string;
+                /** @description The reason for every value written NA (missing) in a row whose missing reason cell is empty, or in a file without that column. */
+                missingReason?: string;
                 /** @description For a workbook: the sheet to read (its tab name). The first visible sheet when left out. */
                 sheet?: string;
                 /** @description A name of your choosing for this upload (8 to 64 letters, digits or dashes), to follow it at GET /api/trials/:trialId/intake-imports/:ticket while it runs. */
@@ -8557,7 +8750,7 @@ export interface operations {
                      * @description The CSV file (UTF-8; comma, semicolon or tab) or .xlsx workbook, as the site and round template. Up to INTAKE_MAX_BYTES (100 MB by default).
                      */
                     file: string;
-                    /** @description JSON: column header → plotLabel, block, treatment, notes, missingReason, a measure code, or null. */
+                    /** @description JSON: column header → plotLabel, block, treatment, notes, missingReason, a measure code, notes:<measure code> (that measure’s own notes), or null. */
                     mapping?: string;
                     /** @description For a workbook: the sheet to read; the first visible one by default. */
                     sheet?: string;

@@ -33,6 +33,15 @@ export class IntakeOptionsDto {
   @Matches(/^[A-Za-z0-9-]{8,64}$/, { message: 'ticket must be 8 to 64 letters, digits or dashes' })
   ticket?: string;
 
+  @ApiPropertyOptional({
+    description: 'The reason for every value written NA (missing) in a row whose missing reason cell is empty, or in a file without that column.',
+    example: 'plot flooded',
+  })
+  @IsOptional()
+  @IsString({ message: 'the missing reason for the file must be text' })
+  @MaxLength(200, { message: 'the missing reason for the file must be at most 200 characters' })
+  missingReason?: string;
+
   @ApiPropertyOptional({ description: 'For a workbook: the sheet to read (its tab name). The first visible sheet when left out.', example: 'Day 14' })
   @IsOptional()
   @IsString({ message: 'sheet must be text' })

@@ -140,6 +140,6 @@ export class IntakeColumnChoiceDto implements IntakeColumnChoice {
   @ApiProperty({ example: 'secs to drain' })
   header!: string;
 
-  @ApiProperty({ type: String, nullable: true, example: 'DRAIN', description: 'plotLabel, block, treatment, notes, missingReason, a measure code, or null (not read).' })
+  @ApiProperty({ type: String, nullable: true, example: 'DRAIN', description: 'plotLabel, block, treatment, notes, missingReason, a measure code, notes:<measure code> (that measure’s own notes), or null (not read).' })
   choice!: string | null;
 }

@@ -22,6 +22,27 @@ describe('mapColumns', () => {
     ]);
   });
 
+  it('reads a column named after a measure and “note” as the notes of that measure alone, by name, code or template header', () => {
+    const headers = ['plot label', 'drain time (s)', 'crumb score (score)', 'drain time note', 'CRUMB notes', 'earthworms (count) comments', 'notes'];
+    const mapping = mapColumns(headers, roundMeasures);
+    expect(mapping.problems).toEqual([]);
+    expect(mapping.notes).toBe(6);
+    expect(mapping.measureNotes).toEqual([
+      { measureId: 1, index: 3, header: 'drain time note' },
+      { measureId: 2, index: 4, header: 'CRUMB notes' },
+      { measureId: 3, index: 5, header: 'earthworms (count) comments' },
+    ]);
+    expect(mapping.choices).toMatchObject({ 'drain time note': 'notes:DRAIN', 'CRUMB notes': 'notes:CRUMB' });
+    // The same choice given by the person (or remembered) maps a header of their own; two columns for one measure's notes are refused.
+    expect(mapColumns(['plot label', 'drain time (s)', 'remarks on drainage'], roundMeasures, { 'remarks on drainage': 'notes:DRAIN' }).measureNotes).toEqual([{ measureId: 1, index: 2, header: 'remarks on drainage' }]);
+    expect(mapColumns(['plot label', 'drain time (s)', 'DRAIN note', 'drain time notes'], roundMeasures).problems.map((p) => p.message)).toEqual([
+      'Columns "DRAIN note" and "drain time notes" both give the notes of drain time: remove one or map it to nothing.',
+    ]);
+    expect(mapColumns(['plot label', 'drain time (s)', 'x'], roundMeasures, { x: 'notes:NOPE' }).problems.map((p) => p.message)).toEqual([
+      'Column "x" is mapped to the notes of "NOPE", which is not a measure of this round.',
+    ]);
+  });
+
   it('reads the unit of every measure unit Friable knows, by id or symbol, without converting', () => {
     for (const unit of MEASURE_UNITS) {
       const measure = { ...measures[0]!, unit: unit.id, name: 'reading' };

@@ -28,6 +28,16 @@ export interface IdentityColumnAt {
   readonly header: string;
 }
 
+/** A column of notes that belong to one measure's values ("drain time note", "DRAIN notes"), not to the whole row. */
+export interface MeasureNoteColumn {
+  readonly measureId: number;
+  readonly index: number;
+  readonly header: string;
+}
+
+/** The mapping's name for a measure's own notes column: "notes:DRAIN". */
+export const measureNoteChoice = (code: string) => `notes:${code}`;
+
 export interface ColumnMapping {
   readonly plotLabel: number | null;
   readonly block: number | null;
@@ -37,6 +47,8 @@ export interface ColumnMapping {
   /** Every identity column the file has besides the plot label, in file order. */
   readonly identity: readonly IdentityColumnAt[];
   readonly measures: readonly MeasureColumn[];
+  /** Notes columns of single measures: their text goes to that measure's value of the row only. */
+  readonly measureNotes: readonly MeasureNoteColumn[];
   /** Headers of the columns nothing reads (empty headers left out). */
   readonly unmapped: readonly string[];
   /** Every mapping problem, those of the measure columns included. They are errors: nothing is written while any remain. */
@@ -63,21 +75,35 @@ export function templateHeader(measure: Pick<Measure, 'name' | 'unit'>): string 
   return `${measure.name} (${findUnit(measure.unit)?.id ?? measure.unit})`;
 }
 
-type Target = { role: ColumnRole } | { measure: Measure; unitText: string | null } | null;
+type Target = { role: ColumnRole } | { measure: Measure; unitText: string | null } | { notesOf: Measure } | null;
 
-function matchHeader(header: string, measures: readonly Measure[]): Target {
-  const key = normaliseHeader(header);
-  const role = dataColumnOfHeader(header)?.role;
-  if (role) return { role };
-  const whole = measureNamed(measures, key);
+/** "drain time note", "DRAIN notes", "drain time (s) comments": the measure whose notes the header names, if any. */
+const NOTE_SUFFIX = /^(.+?)\s*(?:notes?|comments?|remarks?)$/;
+
+function measureOfHeader(header: string, measures: readonly Measure[]): { measure: Measure; unitText: string | null } | null {
+  const whole = measureNamed(measures, normaliseHeader(header));
   if (whole) return { measure: whole, unitText: null };
   const parsed = parseUnitFromHeader(header);
   const named = parsed.unitText === null ? undefined : measureNamed(measures, normaliseHeader(parsed.name));
   return named ? { measure: named, unitText: parsed.unitText } : null;
 }
 
+function matchHeader(header: string, measures: readonly Measure[]): Target {
+  const role = dataColumnOfHeader(header)?.role;
+  if (role) return { role };
+  const measure = measureOfHeader(header, measures);
+  if (measure) return measure;
+  const noted = NOTE_SUFFIX.exec(normaliseHeader(header));
+  const notesOf = noted ? measureOfHeader(noted[1]!, measures) : null;
+  return notesOf ? { notesOf: notesOf.measure } : null;
+}
+
 function overrideTarget(header: string, target: string, measures: readonly Measure[]): Target | string {
   if (COLUMN_ROLES.includes(target)) return { role: target };
+  if (target.startsWith('notes:')) {
+    const noted = measures.find((candidate) => measureNoteChoice(candidate.code).toLowerCase() === target.trim().toLowerCase());
+    return noted ? { notesOf: noted } : `Column "${header}" is mapped to the notes of "${target.slice('notes:'.length)}", which is not a measure of this round.`;
+  }
   const measure = measures.find((candidate) => candidate.code.toLowerCase() === target.trim().toLowerCase());
   if (!measure) return `Column "${header}" is mapped to "${target}", which is not a measure of this round.`;
   const wholeHeaderIsTheMeasure = measureNamed([measure], normaliseHeader(header)) !== undefined;
@@ -90,7 +116,8 @@ function overrideTarget(header: string, target: string, measures: readonly Measu
  *
  * Purpose: the template's headers ("plot label", "block", "treatment code", "drain time (s)",
  * "notes") match without help, and so do the measure's code ("DRAIN"), other cases and spacing,
- * and the unit in parentheses or brackets. A unit Friable knows is converted ("drain time (min)"
+ * and the unit in parentheses or brackets. A header naming a measure followed by "note", "notes" or
+ * "comments" ("drain time note") holds notes of that measure's values alone. A unit Friable knows is converted ("drain time (min)"
  * for a measure in s); a unit it does not know, or one of another kind, is a problem naming the
  * column. `overrides` (header → role, measure code, or null to ignore) come from the browser's
  * mapping step and win over the matching; `remembered` choices (the trial's earlier uploads) come
@@ -111,6 +138,7 @@ export function mapColumns(
   const identity: IdentityColumnAt[] = [];
   const roles = new Map<ColumnRole, number>();
   const measureColumns: MeasureColumn[] = [];
+  const measureNotes: MeasureNoteColumn[] = [];
   const unmapped: string[] = [];
   const claimedBy = new Map<string, string>();
 
@@ -131,9 +159,11 @@ export function mapColumns(
       problems.push({ row: null, column: header, message: target });
       return;
     }
-    choices[header] = target === null ? null : 'role' in target ? target.role : target.measure.code;
+    choices[header] = target === null ? null : 'role' in target ? target.role : 'notesOf' in target ? measureNoteChoice(target.notesOf.code) : target.measure.code;
     if (target === null) {
       unmapped.push(header);
+    } else if ('notesOf' in target) {
+      if (claim(`notes:${target.notesOf.id}`, header, `the notes of ${target.notesOf.name}`)) measureNotes.push(Object.freeze({ measureId: target.notesOf.id, index, header }));
     } else if ('role' in target) {
       if (claim(target.role, header, roleWords[target.role]!)) {
         roles.set(target.role, index);
@@ -172,6 +202,7 @@ export function mapColumns(
     missingReason: roles.get('missingReason') ?? null,
     identity: Object.freeze(identity),
     measures: Object.freeze(measureColumns),
+    measureNotes: Object.freeze(measureNotes),
     unmapped: Object.freeze(unmapped),
     problems: Object.freeze(problems.map((problem) => Object.freeze(problem))),
     choices: Object.freeze(choices),

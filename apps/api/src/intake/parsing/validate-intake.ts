@@ -139,6 +139,8 @@ export interface IntakeCheckerOptions {
   readonly roundMeasures: readonly Measure[];
   readonly siteName: string;
   readonly decimalComma: boolean;
+  /** The reason for NA values of rows that give none (chosen for the whole file); absent or null: each row must. */
+  readonly missingReason?: string | null;
   /** Every value of every row that has a plot, in file order (blank cells included). */
   readonly onValue: (value: IntakeValue) => void;
   readonly storage?: StorageChecks;
@@ -174,6 +176,8 @@ export class IntakeChecker {
   private readonly firstRowOf: Int32Array;
   private readonly unknownPlots: PendingPlotProblem[] = [];
   private readonly readableColumns: readonly MeasureColumn[];
+  /** Measure id → the column of that measure's own notes. */
+  private readonly noteColumnOf: ReadonlyMap<number, number>;
   private readonly columnNoteCount: number;
   private rowsChecked = 0;
   private valuesRead = 0;
@@ -186,6 +190,7 @@ export class IntakeChecker {
     this.measuresById = new Map(options.roundMeasures.map((measure) => [measure.id, measure]));
     this.firstRowOf = new Int32Array(options.plots.size);
     this.readableColumns = options.mapping.measures.filter((column) => column.problems.length === 0);
+    this.noteColumnOf = new Map(options.mapping.measureNotes.map((column) => [column.measureId, column.index]));
   }
 
   get rows(): number {
@@ -279,8 +284,14 @@ export class IntakeChecker {
       const text = index === null ? '' : row.cells[index]!.trim();
       return text === '' ? null : text;
     };
-    const notes = textAt(mapping.notes);
-    const missingReason = textAt(mapping.missingReason);
+    const rowNotes = textAt(mapping.notes);
+    // A measure's own note goes to its value alone; the row's notes go to every value of the row (both: own note first).
+    const notesOf = (measureId: number): string | null => {
+      const own = textAt(this.noteColumnOf.get(measureId) ?? null);
+      return own !== null && rowNotes !== null ? `${own}; ${rowNotes}` : (own ?? rowNotes);
+    };
+    const ownReason = textAt(mapping.missingReason);
+    const missingReason = ownReason ?? this.options.missingReason ?? null;
     let reasonChecked = false;
     for (const column of this.readableColumns) {
       const cellProblem = row.cellProblems?.get(column.index);
@@ -306,9 +317,9 @@ export class IntakeChecker {
         const where = mapping.missingReason === null ? 'add a “missing reason” column saying why' : `write why in the ${this.options.headers[mapping.missingReason]} column`;
         this.errors.add(this.problemAt(row, column.index, `${measure.name} is NA (missing) without a reason: ${where} (for example “bed flooded”).`));
         continue;
-      } else if (missingReason !== null && !reasonChecked && storage) {
+      } else if (ownReason !== null && !reasonChecked && storage) {
         reasonChecked = true;
-        const tooLong = storage.reason(missingReason);
+        const tooLong = storage.reason(ownReason);
         if (tooLong) this.errors.add(this.problemAt(row, mapping.missingReason, tooLong));
       }
       if (position < 0) continue;
@@ -322,7 +333,7 @@ export class IntakeChecker {
         censored: cell.kind === 'value' && cell.censored,
         missingReason: cell.kind === 'missing' ? missingReason : null,
         blank: cell.kind === 'missing' && cell.blank,
-        notes,
+        notes: notesOf(column.measureId),
         row: row.rowNumber,
       });
     }

@@ -22,6 +22,8 @@ export interface IntakeSubmission {
   /** Only the columns the person mapped differently from the automatic matching (header → choice). */
   mapping: Record<string, ColumnChoice>;
   acceptWarnings: boolean;
+  /** The reason for NA values of rows that give none, for the whole file. */
+  missingReason?: string;
   dryRun: boolean;
   /** Share of the file sent so far, 0 to 1, from the browser's own upload progress events. */
   onProgress?: (fraction: number) => void;
@@ -52,17 +54,18 @@ function readBody(request: XMLHttpRequest): unknown {
 
 /**
  * POST /api/trials/:trialId/sites/:siteId/rounds/:roundId/intake (multipart: `file`, `mapping` JSON when
- * the person changed it, `acceptWarnings`), with `?dryRun=true` for the check before the commit.
+ * the person changed it, `acceptWarnings`, `missingReason` for the whole file when chosen), with `?dryRun=true` for the check before the commit.
  * XMLHttpRequest rather than the typed client's fetch, because only it reports real upload progress;
  * it carries the session the same way (lib/session.ts).
  * Rejects with IntakeRefusedError (422, every problem listed) or ApiError (any other failure).
  */
-export function submitIntake({ trialId, siteId, roundId, file, mapping, acceptWarnings, dryRun, onProgress, ticket }: IntakeSubmission): Promise<IntakeAnswer> {
+export function submitIntake({ trialId, siteId, roundId, file, mapping, acceptWarnings, missingReason, dryRun, onProgress, ticket }: IntakeSubmission): Promise<IntakeAnswer> {
   const form = new FormData();
   // The fields go before the file, so the server has them while the file is still arriving.
   if (ticket) form.append('ticket', ticket);
   if (Object.keys(mapping).length > 0) form.append('mapping', JSON.stringify(mapping));
   form.append('acceptWarnings', acceptWarnings ? 'true' : 'false');
+  if (missingReason) form.append('missingReason', missingReason);
   form.append('file', file, file.name);
   return new Promise((resolve, reject) => {
     const request = new XMLHttpRequest();

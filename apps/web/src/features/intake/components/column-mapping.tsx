@@ -1,7 +1,7 @@
 import { HTMLSelect, HTMLTable } from '@blueprintjs/core';
 import type { Measure } from '@friable/contracts';
 import type { ColumnChoice } from '../api/submit-intake';
-import { columnRoleLabels, measureHeading } from './guess-columns';
+import { columnRoleLabels, measureHeading, measureNoteChoice } from './guess-columns';
 import type { CsvPreview } from './read-preview';
 
 const NOT_READ = '';
@@ -63,6 +63,13 @@ export function ColumnMapping({
                     {measures.map((measure) => (
                       <option key={measure.id} value={measure.code}>
                         {measureHeading(measure)} — {measure.code}
+                      </option>
+                    ))}
+                  </optgroup>
+                  <optgroup label="Notes of one measure">
+                    {measures.map((measure) => (
+                      <option key={measure.id} value={measureNoteChoice(measure.code)}>
+                        Notes of {measure.name} — {measure.code}
                       </option>
                     ))}
                   </optgroup>

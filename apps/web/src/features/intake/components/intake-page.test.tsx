@@ -1,5 +1,5 @@
 import type { IntakeResult } from '@friable/contracts';
-import { screen, within } from '@testing-library/react';
+import { screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { mockApi, renderWithApp } from '../../../test/render';
@@ -96,6 +96,16 @@ describe('IntakePage', () => {
     expect(screen.getByText('hollow-lane-week-2.csv')).toBeInTheDocument();
   });
 
+  it('reads a column named after a measure and “note” as that measure’s own notes, and offers that choice for any column', async () => {
+    renderWithApp(<IntakePage trial={activeTrial()} />);
+    await chooseFile('plot label,drain time (s),drain time note,remarks on drainage\nHL-101,412,poured twice,\n');
+    expect(screen.getByLabelText('Column “drain time note” holds')).toHaveValue('notes:DRAIN');
+    expect(within(screen.getByLabelText('Column “drain time note” holds')).getByRole('option', { selected: true })).toHaveTextContent('Notes of Drain time — DRAIN');
+    const other = screen.getByLabelText('Column “remarks on drainage” holds');
+    expect(other).toHaveValue('');
+    expect(within(within(other).getByRole('group', { name: 'Notes of one measure' })).getAllByRole('option').map((o) => o.textContent)).toEqual(['Notes of Drain time — DRAIN']);
+  });
+
   it('lists every problem of a refused file by row and column and marks those rows in the preview', async () => {
     FakeUpload.replies.push({
       status: 422,
@@ -154,6 +164,20 @@ describe('IntakePage', () => {
     expect(second.url).toBe('/api/trials/3/sites/31/rounds/21/intake');
     expect(second.form?.get('acceptWarnings')).toBe('true');
     expect(screen.getByRole('link', { name: 'Open these values in the Ledger' })).toHaveAttribute('href', '/trials/3/ledger?site=31&round=21');
+  });
+
+  it('sends the missing reason chosen for the whole file, tapped from the common reasons, only when one is chosen', async () => {
+    FakeUpload.replies.push({ status: 200, body: dryRun() }, { status: 200, body: dryRun() });
+    renderWithApp(<IntakePage trial={activeTrial()} />, { route: '/trials/3/intake?site=31&round=21' });
+    await chooseFile('plot label,drain time (s)\nHL-101,NA\n');
+    await userEvent.click(screen.getByRole('button', { name: 'Check the file' }));
+    await screen.findByText('values would be saved.', { exact: false });
+    expect(FakeUpload.sent[0]!.form?.has('missingReason')).toBe(false);
+    await userEvent.click(within(screen.getByRole('group', { name: 'Missing reason for the whole file: common reasons' })).getByRole('button', { name: 'plot flooded' }));
+    expect(screen.getByLabelText('Missing reason for the whole file')).toHaveValue('plot flooded');
+    await userEvent.click(screen.getByRole('button', { name: 'Check the file' }));
+    await waitFor(() => expect(FakeUpload.sent).toHaveLength(2));
+    expect(FakeUpload.sent[1]!.form?.get('missingReason')).toBe('plot flooded');
   });
 
   it('says a byte-identical file changes nothing and offers no save', async () => {

@@ -1,8 +1,9 @@
-import { Button, Callout, Checkbox, ProgressBar, Section, SectionCard } from '@blueprintjs/core';
+import { Button, Callout, Checkbox, FormGroup, ProgressBar, Section, SectionCard } from '@blueprintjs/core';
 import type { IntakeResult, Measure, TrialDetail } from '@friable/contracts';
 import { useEffect, useMemo, useState } from 'react';
 import { Link, useSearchParams } from 'react-router-dom';
 import { IdPicker } from '../../../components/id-picker';
+import { MissingReasonInput } from '../../../components/missing-reason-input';
 import { SafetyCautions } from '../../../components/safety-cautions';
 import { paths } from '../../../config/paths';
 import { formatDate, formatNumber } from '../../../lib/format';
@@ -57,6 +58,8 @@ export function IntakePage({ trial }: { trial: TrialDetail }) {
   const [chosen, setChosen] = useState<ChosenFile | null>(null);
   const [choices, setChoices] = useState<ColumnChoice[]>([]);
   const [acceptWarnings, setAcceptWarnings] = useState(false);
+  // The reason for NA values of rows that give none: one choice for the whole file.
+  const [fileReason, setFileReason] = useState('');
   const [progress, setProgress] = useState<number | null>(null);
   const [checked, setChecked] = useState<IntakeResult | null>(null);
   const [saved, setSaved] = useState<IntakeResult | null>(null);
@@ -136,6 +139,7 @@ export function IntakePage({ trial }: { trial: TrialDetail }) {
         file: chosen.file,
         mapping: mappingOverrides(chosen.preview.headers, chosen.guessed, choices),
         acceptWarnings,
+        missingReason: fileReason.trim() || undefined,
         dryRun,
         onProgress: setProgress,
         ticket: next,
@@ -241,6 +245,23 @@ export function IntakePage({ trial }: { trial: TrialDetail }) {
                   }}
                 />
               )}
+              <FormGroup
+                label="Why values written NA are missing, where a row gives no reason"
+                labelFor="fr-intake-file-reason"
+                helperText="For the whole file; a row’s own missing reason cell comes first. Leave empty when every NA has its reason in the file."
+                className="fr-gap"
+              >
+                <MissingReasonInput
+                  id="fr-intake-file-reason"
+                  label="Missing reason for the whole file"
+                  value={fileReason}
+                  disabled={submit.isPending}
+                  onChange={(reason) => {
+                    setFileReason(reason);
+                    startOver();
+                  }}
+                />
+              </FormGroup>
               <div className="fr-intake__actions">
                 <Button icon="search-template" text={checked ? 'Check again' : 'Check the file'} onClick={() => send(true)} loading={submit.isPending && !checked} disabled={submit.isPending} />
                 {progress !== null && (

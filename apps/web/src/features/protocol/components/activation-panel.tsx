@@ -1,4 +1,5 @@
-import { Button, Callout } from '@blueprintjs/core';
+import { Alert, Button, Callout } from '@blueprintjs/core';
+import { useState } from 'react';
 import type { TrialDetail, TrialUpdateInput } from '@friable/contracts';
 import { ApiError } from '../../../lib/api-client';
 import { useVersionedForm } from '../../../lib/edit-conflict';
@@ -9,9 +10,11 @@ import { VersionConflict } from './version-conflict';
  * Activation: a draft trial becomes active (collaborators may record data) once every check passes.
  * The checks come with the trial; a refusal from the server lists its own problems too. Activating a trial
  * someone else saved since the page read it shows the edit conflict dialog, as any edit of the trial does.
+ * Activating asks once, saying what changes with it.
  */
 export function ActivationPanel({ trial, canEdit }: { trial: TrialDetail; canEdit: boolean }) {
   const update = useUpdateTrial(trial.id);
+  const [asking, setAsking] = useState(false);
   const activation = useVersionedForm<{ status: 'active' }, TrialDetail, TrialUpdateInput>(update, (mine, version) => ({ ...mine, version: version ?? trial.version }), trial, () => undefined);
   if (trial.status !== 'draft') return null;
   const refusal = update.error instanceof ApiError ? update.error : null;
@@ -47,9 +50,26 @@ export function ActivationPanel({ trial, canEdit }: { trial: TrialDetail; canEdi
           icon="play"
           text="Activate trial"
           loading={update.isPending}
-          onClick={() => activation.send({ status: 'active' })}
+          onClick={() => setAsking(true)}
         />
       )}
+      <Alert
+        isOpen={asking}
+        intent="success"
+        icon="play"
+        confirmButtonText="Activate now"
+        cancelButtonText="Cancel"
+        onCancel={() => setAsking(false)}
+        onConfirm={() => {
+          setAsking(false);
+          activation.send({ status: 'active' });
+        }}
+      >
+        <p>
+          Activate trial {trial.code}? Collaborators can then record values at their sites. Once values are recorded, layouts cannot be cleared (no
+          re-randomizing, no treatment added or removed), and removing a measure or round archives its values.
+        </p>
+      </Alert>
       <VersionConflict what={`trial ${trial.code}`} conflict={activation.conflict} onKeepMine={activation.keepMine} onTakeStored={activation.takeStored} />
     </Callout>
   );

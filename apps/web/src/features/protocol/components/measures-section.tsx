@@ -5,6 +5,7 @@ import { EmptyState } from '../../../components/states';
 import { formatNumber, measureKindLabels } from '../../../lib/format';
 import { useDeleteProtocolItem } from '../api/delete-protocol-item';
 import { MeasureDialog } from './measure-dialog';
+import { RemovalConfirm, type PendingRemoval } from './removal-confirm';
 import { RowActions } from './row-actions';
 import { unitSymbol } from './measure-units';
 
@@ -26,6 +27,7 @@ function kindLine(measure: Measure): string {
 /** What is measured on every plot, with its unit, kind and the ranges readings are checked against. */
 export function MeasuresSection({ trial, canEdit }: { trial: TrialDetail; canEdit: boolean }) {
   const [editing, setEditing] = useState<Measure | 'new' | null>(null);
+  const [pending, setPending] = useState<PendingRemoval | null>(null);
   const remove = useDeleteProtocolItem(trial.id, 'measures');
   return (
     <Section
@@ -71,7 +73,11 @@ export function MeasuresSection({ trial, canEdit }: { trial: TrialDetail; canEdi
                       <RowActions
                         name={measure.code}
                         onEdit={() => setEditing(measure)}
-                        remove={{ confirmText: 'Remove measure', question: `Remove measure ${measure.code} (${measure.name})? It also leaves every round.`, onConfirm: () => remove.mutate(measure.id) }}
+                        remove={{
+                          loading: remove.isPending && remove.variables?.id === measure.id,
+                          ask: () =>
+                            setPending({ id: measure.id, what: `Remove measure ${measure.code} (${measure.name})`, confirmText: 'Remove measure', proceed: (confirm) => remove.mutate({ id: measure.id, confirm }) }),
+                        }}
                       />
                     )}
                   </tr>
@@ -83,6 +89,7 @@ export function MeasuresSection({ trial, canEdit }: { trial: TrialDetail; canEdi
         {remove.error && <p className="fr-error-line">{remove.error.message}</p>}
       </SectionCard>
       {editing && <MeasureDialog trial={trial} measure={editing === 'new' ? null : editing} onClose={() => setEditing(null)} />}
+      <RemovalConfirm trial={trial} collection="measures" removal={pending} onClose={() => setPending(null)} />
     </Section>
   );
 }

@@ -5,6 +5,14 @@ import { mockApi, renderWithApp } from '../../../test/render';
 import { amounts, makeTrial, person } from '../../../test/trial-fixture';
 import { ProtocolPage } from './protocol-page';
 
+/** Clicks Activate trial and answers its one question. */
+async function activate() {
+  await userEvent.click(screen.getByRole('button', { name: 'Activate trial' }));
+  const question = await screen.findByRole('alertdialog');
+  expect(question).toHaveTextContent('Activate trial CLAY-T? Collaborators can then record values at their sites.');
+  await userEvent.click(within(question).getByRole('button', { name: 'Activate now' }));
+}
+
 const base = { 'GET /api/auth/me': { status: 200, body: person }, 'GET /api/trials/3/amounts': { status: 200, body: amounts } };
 /** The fixture trial before any site is randomized: adding a treatment clears nothing, so nothing is asked. */
 const unrandomized = () => {
@@ -44,7 +52,7 @@ describe('ProtocolPage', () => {
     });
     renderWithApp(<ProtocolPage trial={makeTrial()} />);
     expect(within(screen.getByRole('list', { name: 'What stops activation' })).getByText('Site Millbrook is not randomized yet.')).toBeInTheDocument();
-    await userEvent.click(screen.getByRole('button', { name: 'Activate trial' }));
+    await activate();
     expect(await screen.findByText('The trial cannot be activated yet.')).toBeInTheDocument();
     expect(calls.find((c) => c.method === 'PATCH')?.body).toEqual({ status: 'active', version: 1 });
   });
@@ -59,7 +67,7 @@ describe('ProtocolPage', () => {
     };
     const calls = mockApi(api);
     renderWithApp(<ProtocolPage trial={makeTrial()} />);
-    await userEvent.click(screen.getByRole('button', { name: 'Activate trial' }));
+    await activate();
     const conflict = await screen.findByRole('dialog', { name: 'Someone else changed trial CLAY-T' });
     const status = within(conflict).getByRole('group', { name: 'Status' });
     expect(status).toHaveTextContent('Yoursactive');
@@ -137,6 +145,40 @@ describe('ProtocolPage', () => {
     expect(calls.some((c) => c.method === 'POST')).toBe(false);
     await userEvent.click(go);
     await waitFor(() => expect(calls.find((c) => c.method === 'POST')?.body).toMatchObject({ code: 'G20', name: 'Gypsum, half rate' }));
+  });
+
+  it('removing a measure with values says what it archives, site by site, and sends the typed trial code with the removal', async () => {
+    const impact = {
+      item: 'measure DRAIN (Drain time)',
+      sites: [
+        { siteId: 31, siteName: 'Hollow Lane', values: 40, censored: 3, missing: 1, notes: 2, photos: 0 },
+        { siteId: 32, siteName: 'Quarry Path', values: 20, censored: 0, missing: 0, notes: 0, photos: 0 },
+      ],
+      values: 60,
+      censored: 3,
+      missing: 1,
+      notes: 2,
+      photos: 0,
+      summary: 'Removes 60 recorded values and 2 notes of Drain time across 2 sites (3 censored and 1 missing with a reason). They are archived: kept on record, but no longer shown in the Ledger, Findings, exports or reports.',
+      confirmationNeeded: true,
+      refusal: null,
+    };
+    const calls = mockApi({ ...base, 'GET /api/trials/3/measures/11/removal-impact': { status: 200, body: impact }, 'DELETE /api/trials/3/measures/11?confirm=clay-t': { status: 204, body: null }, 'GET /api/trials/3': { status: 200, body: makeTrial() } });
+    const trial = makeTrial();
+    renderWithApp(<ProtocolPage trial={trial} />);
+    await userEvent.click(screen.getByRole('button', { name: 'Remove DRAIN' }));
+    const confirm = await screen.findByRole('dialog', { name: 'Remove measure DRAIN (Drain time)' });
+    expect(await within(confirm).findByText(impact.summary)).toBeInTheDocument();
+    expect(within(within(confirm).getByRole('list', { name: 'What it archives, site by site' })).getAllByRole('listitem').map((item) => item.textContent)).toEqual([
+      'Hollow Lane: 40 values (3 censored, 1 missing), 2 notes',
+      'Quarry Path: 20 values',
+    ]);
+    const go = within(confirm).getByRole('button', { name: 'Remove measure' });
+    expect(go).toBeDisabled();
+    await userEvent.type(within(confirm).getByLabelText(`Type the trial code ${trial.code} to confirm`), 'clay-t');
+    expect(calls.some((c) => c.method === 'DELETE')).toBe(false);
+    await userEvent.click(go);
+    await waitFor(() => expect(calls.filter((c) => c.method === 'DELETE').map((c) => c.path)).toEqual(['/api/trials/3/measures/11?confirm=clay-t']));
   });
 
   /** Renames G40 in its dialog while the server holds a newer version (2): answers the conflict dialog. */

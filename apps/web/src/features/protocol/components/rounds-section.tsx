@@ -8,6 +8,7 @@ import { EmptyState } from '../../../components/states';
 import { formatDate, formatNumber } from '../../../lib/format';
 import { useDeleteProtocolItem } from '../api/delete-protocol-item';
 import { useVersionedForm } from '../../../lib/edit-conflict';
+import { RemovalConfirm, type PendingRemoval } from './removal-confirm';
 import { RowActions } from './row-actions';
 import { VersionConflict } from './version-conflict';
 import { useSaveRound } from '../api/save-round';
@@ -15,6 +16,7 @@ import { useSaveRound } from '../api/save-round';
 /** When the plots are assessed: day offsets from the start date, and which measures each round reads. */
 export function RoundsSection({ trial, canEdit }: { trial: TrialDetail; canEdit: boolean }) {
   const [editing, setEditing] = useState<AssessmentRound | 'new' | null>(null);
+  const [pending, setPending] = useState<PendingRemoval | null>(null);
   const remove = useDeleteProtocolItem(trial.id, 'rounds');
   const measureCode = (id: number) => trial.measures.find((m) => m.id === id)?.code ?? `#${id}`;
   const rounds = [...trial.rounds].sort((a, b) => a.dayOffset - b.dayOffset);
@@ -51,7 +53,10 @@ export function RoundsSection({ trial, canEdit }: { trial: TrialDetail; canEdit:
                       <RowActions
                         name={round.label}
                         onEdit={() => setEditing(round)}
-                        remove={{ confirmText: 'Remove round', question: `Remove the round “${round.label}”?`, onConfirm: () => remove.mutate(round.id) }}
+                        remove={{
+                          loading: remove.isPending && remove.variables?.id === round.id,
+                          ask: () => setPending({ id: round.id, what: `Remove round ${round.label}`, confirmText: 'Remove round', proceed: (confirm) => remove.mutate({ id: round.id, confirm }) }),
+                        }}
                       />
                     )}
                   </tr>
@@ -63,6 +68,7 @@ export function RoundsSection({ trial, canEdit }: { trial: TrialDetail; canEdit:
         {remove.error && <p className="fr-error-line">{remove.error.message}</p>}
       </SectionCard>
       {editing && <RoundDialog trial={trial} round={editing === 'new' ? null : editing} onClose={() => setEditing(null)} />}
+      <RemovalConfirm trial={trial} collection="rounds" removal={pending} onClose={() => setPending(null)} />
     </Section>
   );
 }

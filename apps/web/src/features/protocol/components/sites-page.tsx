@@ -40,7 +40,7 @@ export function SitesPage({ trial }: { trial: TrialDetail }) {
                 canEdit={access.canEdit}
                 onEdit={() => setEditing(site)}
                 onRandomize={() => setRandomizing(site)}
-                onRemove={() => setPending({ what: `Remove the site ${site.name}`, siteId: site.id, confirmText: 'Remove site', proceed: () => remove.mutate(site.id) })}
+                onRemove={() => setPending({ what: `Remove the site ${site.name}`, siteId: site.id, confirmText: 'Remove site', proceed: () => remove.mutate({ id: site.id }) })}
               />
             </li>
           ))}

@@ -89,8 +89,8 @@ export function TreatmentsSection({ trial, canEdit }: { trial: TrialDetail; canE
                           factorial
                             ? undefined
                             : {
-                                loading: remove.isPending && remove.variables === treatment.id,
-                                ask: () => setPending({ what: `Remove treatment ${treatment.code} (${treatment.name})`, confirmText: 'Remove treatment', proceed: () => remove.mutate(treatment.id) }),
+                                loading: remove.isPending && remove.variables?.id === treatment.id,
+                                ask: () => setPending({ what: `Remove treatment ${treatment.code} (${treatment.name})`, confirmText: 'Remove treatment', proceed: () => remove.mutate({ id: treatment.id }) }),
                               }
                         }
                       />
