@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { readNumber } from './number-reading';
 import { personLocale } from './person-locale';
+import { numberInputText } from './format';
 
 // Checks several forms share, in people's words (each form's schema builds on them; the server checks again).
 
@@ -35,4 +36,9 @@ export function checkNumberTexts<V extends Record<string, unknown>>(values: V, l
     const problem = numberProblem(label, String(values[field] ?? ''));
     if (problem) ctx.addIssue({ code: 'custom', path: [field], message: problem });
   }
+}
+
+/** The texts a form's number boxes start with: each of `fields` of the record as the person writes numbers, '' when absent. */
+export function numberTexts<R extends object, K extends keyof R & string>(record: R | null, fields: readonly K[]): Record<K, string> {
+  return Object.fromEntries(fields.map((field) => [field, numberInputText(record?.[field] as number | null | undefined)])) as Record<K, string>;
 }

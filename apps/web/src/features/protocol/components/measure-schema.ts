@@ -1,7 +1,7 @@
 import { MEASURE_KINDS, type Measure, type MeasureKind } from '@friable/contracts';
 import { z } from 'zod';
 import { parseNumberInput, numberInputText } from '../../../lib/format';
-import { checkNumberTexts } from '../../../lib/form-rules';
+import { checkNumberTexts, numberTexts } from '../../../lib/form-rules';
 import type { MeasureBody, MeasureUnitId } from '../api/save-measure';
 
 const numberLabels = {
@@ -67,13 +67,7 @@ export function measureValues(measure: Measure | null): MeasureValues {
     name: measure?.name ?? '',
     unit: measure?.unit ?? 's',
     kind: measure?.kind ?? 'continuous',
-    scaleMin: numberInputText(measure?.scaleMin),
-    scaleMax: numberInputText(measure?.scaleMax),
-    cutoff: numberInputText(measure?.cutoff),
-    plausibleMin: numberInputText(measure?.plausibleMin),
-    plausibleMax: numberInputText(measure?.plausibleMax),
-    hardMin: numberInputText(measure?.hardMin),
-    hardMax: numberInputText(measure?.hardMax),
+    ...numberTexts(measure, ['scaleMin', 'scaleMax', 'cutoff', 'plausibleMin', 'plausibleMax', 'hardMin', 'hardMax']),
     decimals: numberInputText(measure?.decimals ?? 1),
     higherIsBetter: direction === true ? 'higher' : direction === false ? 'lower' : '',
   };

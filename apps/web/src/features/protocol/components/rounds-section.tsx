@@ -1,11 +1,14 @@
-import { Button, Checkbox, HTMLTable, InputGroup, Section, SectionCard } from '@blueprintjs/core';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { Button, Checkbox, HTMLTable, Section, SectionCard } from '@blueprintjs/core';
 import type { AssessmentRound, RoundInput, TrialDetail } from '@friable/contracts';
 import { useState } from 'react';
-import { Field, parseNumberFields } from '../../../components/field-errors';
+import { useForm, useWatch } from 'react-hook-form';
+import { z } from 'zod';
 import { FormDialog } from '../../../components/form-dialog';
-import { NumberText } from '../../../components/number-text';
+import { CustomField, NumberField, TextField } from '../../../components/form-fields';
 import { EmptyState } from '../../../components/states';
-import { formatDate, formatNumber } from '../../../lib/format';
+import { formatDate, formatNumber, parseNumberInput } from '../../../lib/format';
+import { checkNumberTexts } from '../../../lib/form-rules';
 import { useDeleteProtocolItem } from '../api/delete-protocol-item';
 import { useVersionedForm } from '../../../lib/edit-conflict';
 import { RowActions } from './row-actions';
@@ -67,6 +70,12 @@ export function RoundsSection({ trial, canEdit }: { trial: TrialDetail; canEdit:
   );
 }
 
+/** A round as its dialog holds it (the day as typed), read into the body the API takes. */
+const roundSchema = z
+  .object({ label: z.string(), dayOffset: z.string(), measureIds: z.array(z.number()) })
+  .superRefine((values, ctx) => checkNumberTexts(values, { dayOffset: 'Day' }, ctx))
+  .transform((v): RoundInput => ({ label: v.label.trim(), dayOffset: parseNumberInput(v.dayOffset) ?? 0, measureIds: v.measureIds }));
+
 function RoundDialog({ trial, round, onClose }: { trial: TrialDetail; round: AssessmentRound | null; onClose: () => void }) {
   const save = useSaveRound(trial.id);
   const form = useVersionedForm<RoundInput, AssessmentRound, Parameters<typeof save.mutate>[0]>(
@@ -75,49 +84,40 @@ function RoundDialog({ trial, round, onClose }: { trial: TrialDetail; round: Ass
     round,
     onClose,
   );
-  const [localError, setLocalError] = useState<Error | null>(null);
-  const [label, setLabel] = useState(round?.label ?? '');
-  const [dayOffset, setDayOffset] = useState(round ? String(round.dayOffset) : '');
-  const [measureIds, setMeasureIds] = useState<number[]>(round?.measureIds ?? trial.measures.map((m) => m.id));
-  const error = localError ?? save.error;
+  const { control, handleSubmit } = useForm({
+    resolver: zodResolver(roundSchema),
+    defaultValues: { label: round?.label ?? '', dayOffset: round ? String(round.dayOffset) : '', measureIds: round?.measureIds ?? trial.measures.map((m) => m.id) },
+  });
+  const [label, dayOffset] = useWatch({ control, name: ['label', 'dayOffset'] });
+  const error = save.error;
+  const common = { control, serverError: error };
   const parsedDay = Number(dayOffset);
   const due = trial.startDate && dayOffset !== '' && Number.isInteger(parsedDay) ? formatDate(new Date(Date.parse(trial.startDate.slice(0, 10)) + parsedDay * 86_400_000).toISOString()) : null;
-
-  function submit() {
-    const parsed = parseNumberFields({ dayOffset }, { dayOffset: 'Day' });
-    setLocalError(parsed.error);
-    if (parsed.error) return;
-    form.send({ label: label.trim(), dayOffset: parsed.values.dayOffset ?? 0, measureIds });
-  }
+  const submit = handleSubmit((input) => form.send(input));
 
   return (
     <>
-      <FormDialog title={round ? `Edit round ${round.label}` : 'Add round'} icon="calendar" onClose={onClose} onSubmit={submit} submitText={round ? 'Save round' : 'Add round'} pending={save.isPending} error={error} shownFields={['label', 'dayOffset', 'measureIds']}>
-            <div className="fr-form-row">
-              <Field label="Label" field="label" error={error} help="e.g. Week 2">
-                <InputGroup id="fr-field-label" value={label} onChange={(e) => setLabel(e.target.value)} autoFocus />
-              </Field>
-              <Field label="Day" field="dayOffset" error={error} help={due ? `Due ${due}` : 'Days after the start date (0 = the start).'}>
-                <NumberText id="fr-field-dayOffset" value={dayOffset} onChange={setDayOffset} unit="days" />
-              </Field>
-            </div>
-            <Field label="Measures read in this round" field="measureIds" error={error}>
-              {trial.measures.length === 0 ? (
-                <p className="fr-muted">Add measures first.</p>
-              ) : (
-                trial.measures.map((measure) => (
-                  <Checkbox
-                    key={measure.id}
-                    label={`${measure.code} — ${measure.name}`}
-                    checked={measureIds.includes(measure.id)}
-                    onChange={(e) => {
-                      const on = e.currentTarget.checked;
-                      setMeasureIds((ids) => (on ? [...ids, measure.id] : ids.filter((id) => id !== measure.id)));
-                    }}
-                  />
-                ))
-              )}
-            </Field>
+      <FormDialog title={round ? `Edit round ${round.label}` : 'Add round'} icon="calendar" onClose={onClose} onSubmit={() => void submit()} submitText={round ? 'Save round' : 'Add round'} pending={save.isPending} error={error} shownFields={['label', 'dayOffset', 'measureIds']}>
+        <div className="fr-form-row">
+          <TextField {...common} name="label" label="Label" help="e.g. Week 2" autoFocus />
+          <NumberField {...common} name="dayOffset" label="Day" help={due ? `Due ${due}` : 'Days after the start date (0 = the start).'} unit="days" />
+        </div>
+        <CustomField {...common} name="measureIds" label="Measures read in this round">
+          {(box) =>
+            trial.measures.length === 0 ? (
+              <p className="fr-muted">Add measures first.</p>
+            ) : (
+              trial.measures.map((measure) => (
+                <Checkbox
+                  key={measure.id}
+                  label={`${measure.code} — ${measure.name}`}
+                  checked={box.value.includes(measure.id)}
+                  onChange={(e) => box.onChange(e.currentTarget.checked ? [...box.value, measure.id] : box.value.filter((id) => id !== measure.id))}
+                />
+              ))
+            )
+          }
+        </CustomField>
       </FormDialog>
       <VersionConflict what={`round ${round?.label ?? label}`} conflict={form.conflict} onKeepMine={form.keepMine} onTakeStored={form.takeStored} />
     </>
