@@ -5,7 +5,7 @@ import { designLabels } from '../../../lib/format';
 import { anovaQueryOptions, runAnova, useAnova, type AnovaRequest, type QuickDesign } from '../api/run-anova';
 import { useRankTest } from '../api/run-rank-test';
 import { useSiteMeans } from '../hooks/use-site-means';
-import { AnalysisChoices, Choice, defaultAnalysisOptions, type AnalysisOptions } from './analysis-choices';
+import { AnalysisChoices, OptionChoice, defaultAnalysisOptions, type AnalysisOptions } from './analysis-choices';
 import { FindingsView } from './findings-view';
 import { columnRoleLabels, guessColumnRoles, guessDesign, missingColumns, quickObservations, readQuickTable, typedDecimals, type ColumnRole } from './quick-data';
 
@@ -156,26 +156,26 @@ export function QuickAnalysisPage() {
             dunnettAllowed={control !== ''}
             before={
               <>
-                <Choice label="Design">
-                  <HTMLSelect aria-label="Design" value={design} onChange={(event) => { setDesign(event.target.value as QuickDesign); setRequest(null); }}>
-                    {DESIGNS.map((d) => (
-                      <option key={d} value={d}>
-                        {quickDesignLabels[d]}
-                      </option>
-                    ))}
-                  </HTMLSelect>
-                </Choice>
+                <OptionChoice
+                  label="Design"
+                  value={design}
+                  options={DESIGNS.map((d) => ({ value: d, label: quickDesignLabels[d] }))}
+                  onChange={(value) => {
+                    setDesign(value as QuickDesign);
+                    setRequest(null);
+                  }}
+                />
                 {design !== 'factorial-rcbd' && (
-                  <Choice label="Control">
-                    <HTMLSelect aria-label="Control" value={control} onChange={(event) => { setControl(event.target.value); setRequest(null); if (!event.target.value && options.method === 'dunnett') setOptions({ ...options, method: 'tukey' }); }}>
-                      <option value="">None</option>
-                      {treatments.map((t) => (
-                        <option key={t} value={t}>
-                          {t}
-                        </option>
-                      ))}
-                    </HTMLSelect>
-                  </Choice>
+                  <OptionChoice
+                    label="Control"
+                    value={control}
+                    options={[{ value: '', label: 'None' }, ...treatments.map((t) => ({ value: t, label: t }))]}
+                    onChange={(value) => {
+                      setControl(value);
+                      setRequest(null);
+                      if (!value && options.method === 'dunnett') setOptions({ ...options, method: 'tukey' });
+                    }}
+                  />
                 )}
               </>
             }
