@@ -1,16 +1,16 @@
 import { zodResolver } from '@hookform/resolvers/zod';
-import { Button, Checkbox, HTMLTable, Section, SectionCard } from '@blueprintjs/core';
+import { Checkbox } from '@blueprintjs/core';
 import type { AssessmentRound, RoundInput, TrialDetail } from '@friable/contracts';
 import { useState } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
 import { z } from 'zod';
 import { FormDialog } from '../../../components/form-dialog';
 import { CustomField, NumberField, TextField } from '../../../components/form-fields';
-import { EmptyState } from '../../../components/states';
 import { formatDate, formatNumber, parseNumberInput } from '../../../lib/format';
 import { checkNumberTexts } from '../../../lib/form-rules';
 import { useDeleteProtocolItem } from '../api/delete-protocol-item';
 import { useVersionedForm } from '../../../lib/edit-conflict';
+import { ProtocolTableSection } from './protocol-table-section';
 import { RowActions } from './row-actions';
 import { VersionConflict } from './version-conflict';
 import { useSaveRound } from '../api/save-round';
@@ -22,51 +22,33 @@ export function RoundsSection({ trial, canEdit }: { trial: TrialDetail; canEdit:
   const measureCode = (id: number) => trial.measures.find((m) => m.id === id)?.code ?? `#${id}`;
   const rounds = [...trial.rounds].sort((a, b) => a.dayOffset - b.dayOffset);
   return (
-    <Section
+    <ProtocolTableSection
       title="Assessment rounds"
       icon="calendar"
-      className="fr-section"
-      rightElement={canEdit ? <Button icon="add" text="Add round" size="small" onClick={() => setEditing('new')} /> : undefined}
+      addText="Add round"
+      onAdd={canEdit ? () => setEditing('new') : undefined}
+      empty={rounds.length === 0 ? { title: 'No rounds yet', description: 'Add when the plots are read, e.g. “Day 0”, “Week 2”, with the measures taken then.' } : null}
+      heads={['Round', 'Day', 'Due', 'Measures']}
+      withActions={canEdit}
+      removeError={remove.error}
+      after={editing && <RoundDialog trial={trial} round={editing === 'new' ? null : editing} onClose={() => setEditing(null)} />}
     >
-      <SectionCard padded={rounds.length === 0}>
-        {rounds.length === 0 ? (
-          <EmptyState title="No rounds yet" description="Add when the plots are read, e.g. “Day 0”, “Week 2”, with the measures taken then." />
-        ) : (
-          <div className="fr-table-scroll">
-            <HTMLTable compact striped className="fr-table">
-              <thead>
-                <tr>
-                  <th>Round</th>
-                  <th>Day</th>
-                  <th>Due</th>
-                  <th>Measures</th>
-                  {canEdit && <th aria-label="Actions" />}
-                </tr>
-              </thead>
-              <tbody>
-                {rounds.map((round) => (
-                  <tr key={round.id}>
-                    <td>{round.label}</td>
-                    <td>day {formatNumber(round.dayOffset, 0)}</td>
-                    <td>{round.dueDate ? formatDate(round.dueDate) : <span className="fr-muted">set a start date</span>}</td>
-                    <td>{round.measureIds.length ? round.measureIds.map(measureCode).join(', ') : <span className="fr-muted">none chosen</span>}</td>
-                    {canEdit && (
-                      <RowActions
-                        name={round.label}
-                        onEdit={() => setEditing(round)}
-                        remove={{ confirmText: 'Remove round', question: `Remove the round “${round.label}”?`, onConfirm: () => remove.mutate(round.id) }}
-                      />
-                    )}
-                  </tr>
-                ))}
-              </tbody>
-            </HTMLTable>
-          </div>
-        )}
-        {remove.error && <p className="fr-error-line">{remove.error.message}</p>}
-      </SectionCard>
-      {editing && <RoundDialog trial={trial} round={editing === 'new' ? null : editing} onClose={() => setEditing(null)} />}
-    </Section>
+        {rounds.map((round) => (
+          <tr key={round.id}>
+            <td>{round.label}</td>
+            <td>day {formatNumber(round.dayOffset, 0)}</td>
+            <td>{round.dueDate ? formatDate(round.dueDate) : <span className="fr-muted">set a start date</span>}</td>
+            <td>{round.measureIds.length ? round.measureIds.map(measureCode).join(', ') : <span className="fr-muted">none chosen</span>}</td>
+            {canEdit && (
+              <RowActions
+                name={round.label}
+                onEdit={() => setEditing(round)}
+                remove={{ confirmText: 'Remove round', question: `Remove the round “${round.label}”?`, onConfirm: () => remove.mutate(round.id) }}
+              />
+            )}
+          </tr>
+        ))}
+    </ProtocolTableSection>
   );
 }
 
