@@ -2,7 +2,7 @@ import { useEffect, useState } from 'react';
 import { useIntakeImports } from '../api/get-intake-imports';
 
 /** The ticket of this tab's upload for a site and round that had not answered when the page was left. */
-export function readSent(key: string): string[] {
+function readSent(key: string): string[] {
   try {
     const ticket = window.sessionStorage.getItem(key);
     return ticket ? [ticket] : [];
