@@ -1,4 +1,5 @@
 import { Button, Callout, H2, HTMLSelect, HTMLTable, TextArea } from '@blueprintjs/core';
+import { FilePick } from '../../../components/file-pick';
 import { useMemo, useState } from 'react';
 import { ErrorState, LoadingState } from '../../../components/states';
 import { designLabels } from '../../../lib/format';
@@ -79,21 +80,16 @@ export function QuickAnalysisPage() {
             placeholder={'treatment,block,value\nCTRL,1,9.3\nGYP,1,9.4\n…'}
           />
         </label>
-        <label className="fr-findings-choice">
-          <span>Or a CSV file</span>
-          <input
-            type="file"
-            accept=".csv,.tsv,.txt,text/csv,text/plain"
-            aria-label="CSV file"
-            onChange={(event) => {
-              const file = event.target.files?.[0];
-              event.target.value = '';
-              if (!file) return;
-              setFileProblem(null);
-              readFile(file).then(take, (error: Error) => setFileProblem(error.message));
-            }}
-          />
-        </label>
+        <FilePick
+          className="fr-findings-choice"
+          label="Or a CSV file"
+          accept=".csv,.tsv,.txt,text/csv,text/plain"
+          ariaLabel="CSV file"
+          onFile={(file) => {
+            setFileProblem(null);
+            readFile(file).then(take, (error: Error) => setFileProblem(error.message));
+          }}
+        />
       </div>
       {fileProblem && <p className="fr-error-line" role="alert">{fileProblem}</p>}
       {text.trim() !== '' && table.problem && (
