@@ -1,6 +1,7 @@
 import { Callout, FormGroup } from '@blueprintjs/core';
 import type { ReactNode } from 'react';
 import { ApiError } from '../lib/api-client';
+import { numberProblem } from '../lib/form-rules';
 import { readNumber } from '../lib/number-reading';
 import { personLocale } from '../lib/person-locale';
 
@@ -77,8 +78,8 @@ export function parseNumberFields<K extends string>(texts: Record<K, string>, la
   const details: Array<{ field: string; message: string }> = [];
   for (const field of Object.keys(texts) as K[]) {
     const reading = readNumber(texts[field], personLocale());
-    if (reading.kind === 'invalid') details.push({ field, message: `${labels[field]} must be a number, e.g. 12.5` });
-    if (reading.kind === 'ambiguous') details.push({ field, message: `${labels[field]}: say which number “${texts[field].trim()}” means (choose under the box)` });
+    const problem = numberProblem(labels[field], texts[field]);
+    if (problem) details.push({ field, message: problem });
     values[field] = reading.kind === 'number' ? reading.value : reading.kind === 'empty' ? null : Number.NaN;
   }
   return { values, error: details.length ? new ApiError(422, 'Some numbers could not be read; see the fields marked below.', details) : null };

@@ -1,21 +1,10 @@
-import { HTMLSelect } from '@blueprintjs/core';
 import type { AssessmentRound, TrialDetail } from '@friable/contracts';
+import { LabelledSelect } from './labelled-select';
 
 /** The site select of a page that shows one site at a time; the person's own sites are marked. */
 export function SitePicker({ trial, value, onChange }: { trial: TrialDetail; value: number; onChange: (siteId: number) => void }) {
-  return (
-    <label className="fr-site-picker">
-      <span>Site</span>
-      <HTMLSelect aria-label="Site" value={value} onChange={(event) => onChange(Number(event.target.value))}>
-        {trial.sites.map((s) => (
-          <option key={s.id} value={s.id}>
-            {s.name}
-            {trial.mySiteIds.includes(s.id) ? ' (your site)' : ''}
-          </option>
-        ))}
-      </HTMLSelect>
-    </label>
-  );
+  const options = trial.sites.map((s) => ({ value: s.id, label: `${s.name}${trial.mySiteIds.includes(s.id) ? ' (your site)' : ''}` }));
+  return <LabelledSelect label="Site" value={value} options={options} onChange={(id) => onChange(Number(id))} />;
 }
 
 /** The round select; with `every`, a first choice meaning all rounds (value null). */
@@ -32,17 +21,6 @@ export function RoundPicker({
   label?: string;
   every?: string;
 }) {
-  return (
-    <label className="fr-site-picker">
-      <span>{label}</span>
-      <HTMLSelect aria-label={label} value={value ?? ''} onChange={(event) => onChange(event.target.value ? Number(event.target.value) : null)}>
-        {every && <option value="">{every}</option>}
-        {rounds.map((r) => (
-          <option key={r.id} value={r.id}>
-            {r.label}
-          </option>
-        ))}
-      </HTMLSelect>
-    </label>
-  );
+  const options = [...(every ? [{ value: '', label: every }] : []), ...rounds.map((r) => ({ value: r.id, label: r.label }))];
+  return <LabelledSelect label={label} value={value ?? ''} options={options} onChange={(id) => onChange(id ? Number(id) : null)} />;
 }

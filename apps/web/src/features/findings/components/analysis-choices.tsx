@@ -1,6 +1,6 @@
-import { HTMLSelect } from '@blueprintjs/core';
 import { ANALYSIS_TRANSFORMS, SEPARATION_METHODS, type AnalysisTransform, type SeparationMethod } from '@friable/contracts';
 import type { ReactNode } from 'react';
+import { LabelledSelect, type SelectOption } from '../../../components/labelled-select';
 import { methodLabels, transformLabels } from './stat-format';
 
 export interface AnalysisOptions {
@@ -14,14 +14,9 @@ export const defaultAnalysisOptions: AnalysisOptions = { method: 'tukey', transf
 
 const ALPHAS = [0.01, 0.05, 0.1];
 
-/** A labelled select in the choices bar. */
-export function Choice({ label, children }: { label: string; children: ReactNode }) {
-  return (
-    <label className="fr-findings-choice">
-      <span>{label}</span>
-      {children}
-    </label>
-  );
+/** A labelled list of choices in the Findings bar. */
+export function OptionChoice(props: { label: string; ariaLabel?: string; value: string | number; options: SelectOption[]; onChange: (value: string) => void }) {
+  return <LabelledSelect className="fr-findings-choice" {...props} />;
 }
 
 /** The analysis choices every Findings view shares; `before` holds the page's own (measure, round, scope). */
@@ -51,44 +46,33 @@ export function AnalysisChoices({
     <div className="fr-findings-choices" role="group" aria-label="Analysis choices">
       {before}
       {showSites && (
-        <Choice label="Sites are">
-          <HTMLSelect aria-label="Sites are" value={options.sitesAre} onChange={(e) => onChange({ ...options, sitesAre: e.target.value as 'random' | 'fixed' })}>
-            <option value="random">Random (a sample of gardens)</option>
-            <option value="fixed">Fixed (only these gardens)</option>
-          </HTMLSelect>
-        </Choice>
+        <OptionChoice
+          label="Sites are"
+          value={options.sitesAre}
+          options={[
+            { value: 'random', label: 'Random (a sample of gardens)' },
+            { value: 'fixed', label: 'Fixed (only these gardens)' },
+          ]}
+          onChange={(value) => onChange({ ...options, sitesAre: value as 'random' | 'fixed' })}
+        />
       )}
       {showTransform && (
-        <Choice label="Transform">
-          <HTMLSelect aria-label="Transform" value={options.transform} onChange={(e) => onChange({ ...options, transform: e.target.value as AnalysisTransform })}>
-            {ANALYSIS_TRANSFORMS.map((t) => (
-              <option key={t} value={t}>
-                {transformLabels[t]}
-              </option>
-            ))}
-          </HTMLSelect>
-        </Choice>
+        <OptionChoice
+          label="Transform"
+          value={options.transform}
+          options={ANALYSIS_TRANSFORMS.map((t) => ({ value: t, label: transformLabels[t] }))}
+          onChange={(value) => onChange({ ...options, transform: value as AnalysisTransform })}
+        />
       )}
       {showSeparation && (
         <>
-          <Choice label="Mean separation">
-            <HTMLSelect aria-label="Mean separation" value={options.method} onChange={(e) => onChange({ ...options, method: e.target.value as SeparationMethod })}>
-              {SEPARATION_METHODS.filter((m) => m !== 'dunnett' || dunnettAllowed).map((m) => (
-                <option key={m} value={m}>
-                  {methodLabels[m]}
-                </option>
-              ))}
-            </HTMLSelect>
-          </Choice>
-          <Choice label="α">
-            <HTMLSelect aria-label="Significance level α" value={options.alpha} onChange={(e) => onChange({ ...options, alpha: Number(e.target.value) })}>
-              {ALPHAS.map((a) => (
-                <option key={a} value={a}>
-                  {a}
-                </option>
-              ))}
-            </HTMLSelect>
-          </Choice>
+          <OptionChoice
+            label="Mean separation"
+            value={options.method}
+            options={SEPARATION_METHODS.filter((m) => m !== 'dunnett' || dunnettAllowed).map((m) => ({ value: m, label: methodLabels[m] }))}
+            onChange={(value) => onChange({ ...options, method: value as SeparationMethod })}
+          />
+          <OptionChoice label="α" ariaLabel="Significance level α" value={options.alpha} options={ALPHAS.map((a) => ({ value: a, label: String(a) }))} onChange={(value) => onChange({ ...options, alpha: Number(value) })} />
         </>
       )}
       {after}

@@ -1,6 +1,6 @@
-import { HTMLTable } from '@blueprintjs/core';
 import type { AnovaAnswer, SeparationMethod } from '@friable/contracts';
 import { SignificanceLegend } from './anova-table';
+import { FindingsTable, numeric } from './findings-table';
 import { formatMeasureValue, formatP, formatStatistic, methodLabels, significanceMark } from './stat-format';
 
 /** The line under the table naming the smallest difference that counts; "least significant difference" only for LSD. */
@@ -43,36 +43,23 @@ export function ComparisonsTable({
       <h3 id="fr-pairs-title" className="fr-findings-heading">
         Comparisons ({methodLabels[method]})
       </h3>
-      <div className="fr-table-scroll">
-        <HTMLTable compact striped className="fr-findings-table" aria-label="Comparisons">
-          <thead>
-            <tr>
-              <th scope="col">Pair</th>
-              <th scope="col" className="fr-num">Difference</th>
-              <th scope="col" className="fr-num">{confidence} interval</th>
-              <th scope="col" className="fr-num">p</th>
-              <th scope="col">Verdict</th>
-            </tr>
-          </thead>
-          <tbody>
-            {comparisons.pairs.map((pair) => (
-              <tr key={`${pair.a}|${pair.b}`}>
-                <th scope="row" className="fr-findings-pair">
-                  <span className="fr-code">{pair.a}</span> − <span className="fr-code">{pair.b}</span>
-                </th>
-                <td className="fr-num">{formatMeasureValue(pair.diff, decimals)}</td>
-                <td className="fr-num">
-                  {formatMeasureValue(pair.lower, decimals)} to {formatMeasureValue(pair.upper, decimals)}
-                </td>
-                <td className="fr-num">
-                  {formatP(pair.p)} <span className="fr-findings-mark">{significanceMark(pair.p)}</span>
-                </td>
-                <td>{pairVerdict(pair, higherIsBetter)}</td>
-              </tr>
-            ))}
-          </tbody>
-        </HTMLTable>
-      </div>
+      <FindingsTable label="Comparisons" columns={['Pair', numeric('Difference'), numeric(`${confidence} interval`), numeric('p'), 'Verdict']}>
+        {comparisons.pairs.map((pair) => (
+          <tr key={`${pair.a}|${pair.b}`}>
+            <th scope="row" className="fr-findings-pair">
+              <span className="fr-code">{pair.a}</span> − <span className="fr-code">{pair.b}</span>
+            </th>
+            <td className="fr-num">{formatMeasureValue(pair.diff, decimals)}</td>
+            <td className="fr-num">
+              {formatMeasureValue(pair.lower, decimals)} to {formatMeasureValue(pair.upper, decimals)}
+            </td>
+            <td className="fr-num">
+              {formatP(pair.p)} <span className="fr-findings-mark">{significanceMark(pair.p)}</span>
+            </td>
+            <td>{pairVerdict(pair, higherIsBetter)}</td>
+          </tr>
+        ))}
+      </FindingsTable>
       <SignificanceLegend />
       {higherIsBetter !== undefined && <p className="fr-muted fr-small">{higherIsBetter ? 'Higher values are better for this measure.' : 'Lower values are better for this measure.'}</p>}
       {comparisons.leastSignificantDifference !== null && SMALLEST_DIFFERENCE[method] && (

@@ -1,6 +1,7 @@
 import { HTMLTable } from '@blueprintjs/core';
 import type { AnovaAnswer, LetterMethod, SeparationMethod, SliceTest } from '@friable/contracts';
 import { formatMeasureValue, formatP, formatStatistic, significanceMark, termLabel } from './stat-format';
+import { FindingsTable, numeric } from './findings-table';
 import { TestCells, TestHeadings } from './test-cells';
 
 type DesignAnswer = Pick<AnovaAnswer, 'anova' | 'model' | 'strata' | 'differences' | 'slices' | 'varianceComponents'>;
@@ -28,89 +29,50 @@ function ModelLine({ answer }: { answer: DesignAnswer }) {
 function TestedAgainst({ answer }: { answer: DesignAnswer }) {
   const tested = answer.anova.filter((row) => row.errorTerm && row.f !== null);
   return (
-    <div className="fr-table-scroll">
-      <HTMLTable compact striped className="fr-findings-table" aria-label="Each term and the error it is tested against">
-        <thead>
-          <tr>
-            <th scope="col">Source</th>
-            <th scope="col">Tested against</th>
-            <th scope="col" className="fr-num">df</th>
-            <TestHeadings />
-          </tr>
-        </thead>
-        <tbody>
-          {tested.map((row) => (
-            <tr key={row.term}>
-              <th scope="row">{termLabel(row.term)}</th>
-              <td>{errorLabel(row.errorTerm, answer.strata)}</td>
-              <td className="fr-num">{row.denDf !== undefined ? `${row.numDf ?? row.df}, ${formatStatistic(row.denDf)}` : row.df}</td>
-              <TestCells f={row.f} p={row.p} />
-            </tr>
-          ))}
-        </tbody>
-      </HTMLTable>
-    </div>
+    <FindingsTable label="Each term and the error it is tested against" columns={['Source', 'Tested against', numeric('df')]} extraHeads={<TestHeadings />}>
+      {tested.map((row) => (
+        <tr key={row.term}>
+          <th scope="row">{termLabel(row.term)}</th>
+          <td>{errorLabel(row.errorTerm, answer.strata)}</td>
+          <td className="fr-num">{row.denDf !== undefined ? `${row.numDf ?? row.df}, ${formatStatistic(row.denDf)}` : row.df}</td>
+          <TestCells f={row.f} p={row.p} />
+        </tr>
+      ))}
+    </FindingsTable>
   );
 }
 
 function StrataTable({ strata }: { strata: NonNullable<DesignAnswer['strata']> }) {
   return (
-    <div className="fr-table-scroll">
-      <HTMLTable compact striped className="fr-findings-table" aria-label="Error strata">
-        <thead>
-          <tr>
-            <th scope="col">Stratum</th>
-            <th scope="col">Error</th>
-            <th scope="col" className="fr-num">df</th>
-            <th scope="col" className="fr-num">MS</th>
-            <th scope="col">Terms tested in it</th>
-          </tr>
-        </thead>
-        <tbody>
-          {strata.map((stratum) => (
-            <tr key={stratum.errorTerm}>
-              <th scope="row">{stratum.stratum}</th>
-              <td>{STRATUM_ERRORS[stratum.stratum] ?? termLabel(stratum.errorTerm)}</td>
-              <td className="fr-num">{stratum.df}</td>
-              <td className="fr-num">{formatStatistic(stratum.ms)}</td>
-              <td>{stratum.terms.map(termLabel).join(', ')}</td>
-            </tr>
-          ))}
-        </tbody>
-      </HTMLTable>
-    </div>
+    <FindingsTable label="Error strata" columns={['Stratum', 'Error', numeric('df'), numeric('MS'), 'Terms tested in it']}>
+      {strata.map((stratum) => (
+        <tr key={stratum.errorTerm}>
+          <th scope="row">{stratum.stratum}</th>
+          <td>{STRATUM_ERRORS[stratum.stratum] ?? termLabel(stratum.errorTerm)}</td>
+          <td className="fr-num">{stratum.df}</td>
+          <td className="fr-num">{formatStatistic(stratum.ms)}</td>
+          <td>{stratum.terms.map(termLabel).join(', ')}</td>
+        </tr>
+      ))}
+    </FindingsTable>
   );
 }
 
 /** The standard errors of a difference per stratum; the LSD column only when the LSD is the chosen method. */
 function DifferencesTable({ differences, decimals, showLsd }: { differences: NonNullable<DesignAnswer['differences']>; decimals: number; showLsd: boolean }) {
   return (
-    <div className="fr-table-scroll">
-      <HTMLTable compact striped className="fr-findings-table" aria-label="Standard errors of a difference">
-        <thead>
-          <tr>
-            <th scope="col">Difference between</th>
-            <th scope="col" className="fr-num">SE of difference</th>
-            <th scope="col" className="fr-num">df</th>
-            <th scope="col" className="fr-num">t</th>
-            {showLsd && <th scope="col" className="fr-num">LSD</th>}
-            <th scope="col">Error</th>
-          </tr>
-        </thead>
-        <tbody>
-          {differences.map((d) => (
-            <tr key={d.kind}>
-              <th scope="row">{d.description}</th>
-              <td className="fr-num">{formatMeasureValue(d.se, decimals)}</td>
-              <td className="fr-num">{formatStatistic(d.df)}</td>
-              <td className="fr-num">{formatStatistic(d.critical)}</td>
-              {showLsd && <td className="fr-num">{formatMeasureValue(d.lsd, decimals)}</td>}
-              <td>{d.errorTerm.includes('(Satterthwaite)') ? 'mixed strata: weighted t, Satterthwaite df' : errorLabel(d.errorTerm, undefined)}</td>
-            </tr>
-          ))}
-        </tbody>
-      </HTMLTable>
-    </div>
+    <FindingsTable label="Standard errors of a difference" columns={['Difference between', numeric('SE of difference'), numeric('df'), numeric('t'), ...(showLsd ? [numeric('LSD')] : []), 'Error']}>
+      {differences.map((d) => (
+        <tr key={d.kind}>
+          <th scope="row">{d.description}</th>
+          <td className="fr-num">{formatMeasureValue(d.se, decimals)}</td>
+          <td className="fr-num">{formatStatistic(d.df)}</td>
+          <td className="fr-num">{formatStatistic(d.critical)}</td>
+          {showLsd && <td className="fr-num">{formatMeasureValue(d.lsd, decimals)}</td>}
+          <td>{d.errorTerm.includes('(Satterthwaite)') ? 'mixed strata: weighted t, Satterthwaite df' : errorLabel(d.errorTerm, undefined)}</td>
+        </tr>
+      ))}
+    </FindingsTable>
   );
 }
 

@@ -1,6 +1,6 @@
-import { HTMLTable } from '@blueprintjs/core';
 import type { AnovaAnswer, PercentOfControl, SeparationMethod } from '@friable/contracts';
 import { formatMeasureValue, methodLabels } from './stat-format';
+import { FindingsTable, numeric } from './findings-table';
 
 const percent = new Intl.NumberFormat('en-US', { maximumFractionDigits: 0 });
 
@@ -35,51 +35,37 @@ export function MeansTable({
       <h3 id="fr-means-title" className="fr-findings-heading">
         Treatment means
       </h3>
-      <div className="fr-table-scroll">
-        <HTMLTable compact striped className="fr-findings-table" aria-label="Treatment means">
-          <thead>
-            <tr>
-              <th scope="col">Treatment</th>
-              <th scope="col" className="fr-num">n</th>
-              <th scope="col" className="fr-num">Mean ± SE{unit ? ` (${unit})` : ''}</th>
-              {transformed && <th scope="col" className="fr-num">Back on the original scale</th>}
-              <th scope="col">{method === 'dunnett' ? 'Differs from the control' : 'Letters'}</th>
-              {percents && <th scope="col" className="fr-num">% of control</th>}
+      <FindingsTable label="Treatment means" columns={['Treatment', numeric('n'), numeric(`Mean ± SE${unit ? ` (${unit})` : ''}`), ...(transformed ? [numeric('Back on the original scale')] : []), { head: method === 'dunnett' ? 'Differs from the control' : 'Letters' }, ...(percents ? [numeric('% of control')] : [])]}>
+        {answer.means.map((mean) => {
+          const versusControl = dunnett?.find((pair) => pair.a === mean.treatment || pair.b === mean.treatment);
+          return (
+            <tr key={mean.treatment}>
+              <th scope="row">
+                <span className="fr-code">{mean.treatment}</span>
+                {treatmentNames?.[mean.treatment] && <span className="fr-muted fr-findings-name"> {treatmentNames[mean.treatment]}</span>}
+                {mean.treatment === control && <span className="fr-muted"> (control)</span>}
+              </th>
+              <td className="fr-num">{mean.n}</td>
+              <td className="fr-num">
+                {formatMeasureValue(mean.mean, decimals)} ± {formatMeasureValue(mean.se, decimals)}
+              </td>
+              {transformed && <td className="fr-num">{formatMeasureValue(mean.backTransformedMean, decimals)}</td>}
+              <td className="fr-findings-letters">
+                {method === 'dunnett'
+                  ? mean.treatment === control
+                    ? '—'
+                    : versusControl
+                      ? versusControl.significant
+                        ? 'yes'
+                        : 'no'
+                      : ''
+                  : (letters?.[mean.treatment] ?? '')}
+              </td>
+              {percents && <td className="fr-num">{percents.get(mean.treatment) != null ? `${percent.format(percents.get(mean.treatment)!)} %` : '—'}</td>}
             </tr>
-          </thead>
-          <tbody>
-            {answer.means.map((mean) => {
-              const versusControl = dunnett?.find((pair) => pair.a === mean.treatment || pair.b === mean.treatment);
-              return (
-                <tr key={mean.treatment}>
-                  <th scope="row">
-                    <span className="fr-code">{mean.treatment}</span>
-                    {treatmentNames?.[mean.treatment] && <span className="fr-muted fr-findings-name"> {treatmentNames[mean.treatment]}</span>}
-                    {mean.treatment === control && <span className="fr-muted"> (control)</span>}
-                  </th>
-                  <td className="fr-num">{mean.n}</td>
-                  <td className="fr-num">
-                    {formatMeasureValue(mean.mean, decimals)} ± {formatMeasureValue(mean.se, decimals)}
-                  </td>
-                  {transformed && <td className="fr-num">{formatMeasureValue(mean.backTransformedMean, decimals)}</td>}
-                  <td className="fr-findings-letters">
-                    {method === 'dunnett'
-                      ? mean.treatment === control
-                        ? '—'
-                        : versusControl
-                          ? versusControl.significant
-                            ? 'yes'
-                            : 'no'
-                          : ''
-                      : (letters?.[mean.treatment] ?? '')}
-                  </td>
-                  {percents && <td className="fr-num">{percents.get(mean.treatment) != null ? `${percent.format(percents.get(mean.treatment)!)} %` : '—'}</td>}
-                </tr>
-              );
-            })}
-          </tbody>
-        </HTMLTable>
-      </div>
+          );
+        })}
+      </FindingsTable>
       <p className="fr-muted fr-small">
         {method === 'dunnett'
           ? `${methodLabels[method]}: each treatment against ${control ?? 'the control'}.`

@@ -1,11 +1,12 @@
 import { Button, Callout, H2, HTMLSelect, HTMLTable, TextArea } from '@blueprintjs/core';
+import { FilePick } from '../../../components/file-pick';
 import { useMemo, useState } from 'react';
 import { ErrorState, LoadingState } from '../../../components/states';
 import { designLabels } from '../../../lib/format';
 import { anovaQueryOptions, runAnova, useAnova, type AnovaRequest, type QuickDesign } from '../api/run-anova';
 import { useRankTest } from '../api/run-rank-test';
 import { useSiteMeans } from '../hooks/use-site-means';
-import { AnalysisChoices, Choice, defaultAnalysisOptions, type AnalysisOptions } from './analysis-choices';
+import { AnalysisChoices, OptionChoice, defaultAnalysisOptions, type AnalysisOptions } from './analysis-choices';
 import { FindingsView } from './findings-view';
 import { columnRoleLabels, guessColumnRoles, guessDesign, missingColumns, quickObservations, readQuickTable, typedDecimals, type ColumnRole } from './quick-data';
 
@@ -79,21 +80,16 @@ export function QuickAnalysisPage() {
             placeholder={'treatment,block,value\nCTRL,1,9.3\nGYP,1,9.4\n…'}
           />
         </label>
-        <label className="fr-findings-choice">
-          <span>Or a CSV file</span>
-          <input
-            type="file"
-            accept=".csv,.tsv,.txt,text/csv,text/plain"
-            aria-label="CSV file"
-            onChange={(event) => {
-              const file = event.target.files?.[0];
-              event.target.value = '';
-              if (!file) return;
-              setFileProblem(null);
-              readFile(file).then(take, (error: Error) => setFileProblem(error.message));
-            }}
-          />
-        </label>
+        <FilePick
+          className="fr-findings-choice"
+          label="Or a CSV file"
+          accept=".csv,.tsv,.txt,text/csv,text/plain"
+          ariaLabel="CSV file"
+          onFile={(file) => {
+            setFileProblem(null);
+            readFile(file).then(take, (error: Error) => setFileProblem(error.message));
+          }}
+        />
       </div>
       {fileProblem && <p className="fr-error-line" role="alert">{fileProblem}</p>}
       {text.trim() !== '' && table.problem && (
@@ -156,26 +152,26 @@ export function QuickAnalysisPage() {
             dunnettAllowed={control !== ''}
             before={
               <>
-                <Choice label="Design">
-                  <HTMLSelect aria-label="Design" value={design} onChange={(event) => { setDesign(event.target.value as QuickDesign); setRequest(null); }}>
-                    {DESIGNS.map((d) => (
-                      <option key={d} value={d}>
-                        {quickDesignLabels[d]}
-                      </option>
-                    ))}
-                  </HTMLSelect>
-                </Choice>
+                <OptionChoice
+                  label="Design"
+                  value={design}
+                  options={DESIGNS.map((d) => ({ value: d, label: quickDesignLabels[d] }))}
+                  onChange={(value) => {
+                    setDesign(value as QuickDesign);
+                    setRequest(null);
+                  }}
+                />
                 {design !== 'factorial-rcbd' && (
-                  <Choice label="Control">
-                    <HTMLSelect aria-label="Control" value={control} onChange={(event) => { setControl(event.target.value); setRequest(null); if (!event.target.value && options.method === 'dunnett') setOptions({ ...options, method: 'tukey' }); }}>
-                      <option value="">None</option>
-                      {treatments.map((t) => (
-                        <option key={t} value={t}>
-                          {t}
-                        </option>
-                      ))}
-                    </HTMLSelect>
-                  </Choice>
+                  <OptionChoice
+                    label="Control"
+                    value={control}
+                    options={[{ value: '', label: 'None' }, ...treatments.map((t) => ({ value: t, label: t }))]}
+                    onChange={(value) => {
+                      setControl(value);
+                      setRequest(null);
+                      if (!value && options.method === 'dunnett') setOptions({ ...options, method: 'tukey' });
+                    }}
+                  />
                 )}
               </>
             }

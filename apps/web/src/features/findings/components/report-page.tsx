@@ -1,4 +1,4 @@
-import { Button, Callout, H2, HTMLTable } from '@blueprintjs/core';
+import { Button, Callout, H2 } from '@blueprintjs/core';
 import { SEPARATION_METHODS, type ReportMeasure, type ReportReview, type SeparationMethod, type TrialDetail, type TrialReport } from '@friable/contracts';
 import { lazy, Suspense } from 'react';
 import { Link, useSearchParams } from 'react-router-dom';
@@ -7,6 +7,7 @@ import { paths } from '../../../config/paths';
 import { designLabels, formatArea, formatDate, formatRate } from '../../../lib/format';
 import { useReport, type ReportChoices } from '../api/get-report';
 import { AnovaTable } from './anova-table';
+import { FindingsTable, numeric } from './findings-table';
 import { RankTestPanel } from './rank-test-panel';
 import { ReportModelTables } from './report-model';
 import { SignOffLine } from './review-panel';
@@ -62,54 +63,31 @@ export function ReportPage({ trial }: { trial: TrialDetail }) {
         {p.startDate ? ` · started ${formatDate(p.startDate)}` : ''}
       </p>
       <h3 className="fr-findings-heading">Treatments</h3>
-      <div className="fr-table-scroll">
-        <HTMLTable compact striped className="fr-findings-table" aria-label="Treatments">
-          <thead>
-            <tr>
-              <th scope="col">Code</th>
-              <th scope="col">Name</th>
-              <th scope="col">Rate</th>
-            </tr>
-          </thead>
-          <tbody>
-            {p.treatments.map((t) => (
-              <tr key={t.id}>
-                <th scope="row" className="fr-code">
-                  {t.code}
-                </th>
-                <td>
-                  {t.name}
-                  {t.isControl ? ' (control)' : ''}
-                </td>
-                <td>{formatRate(t.rateValue, t.rateUnit)}</td>
-              </tr>
-            ))}
-          </tbody>
-        </HTMLTable>
-      </div>
+      <FindingsTable label="Treatments" columns={['Code', 'Name', 'Rate']}>
+        {p.treatments.map((t) => (
+          <tr key={t.id}>
+            <th scope="row" className="fr-code">
+              {t.code}
+            </th>
+            <td>
+              {t.name}
+              {t.isControl ? ' (control)' : ''}
+            </td>
+            <td>{formatRate(t.rateValue, t.rateUnit)}</td>
+          </tr>
+        ))}
+      </FindingsTable>
       <h3 className="fr-findings-heading">Sites</h3>
-      <div className="fr-table-scroll">
-        <HTMLTable compact striped className="fr-findings-table" aria-label="Sites">
-          <thead>
-            <tr>
-              <th scope="col">Site</th>
-              <th scope="col">Soil</th>
-              <th scope="col" className="fr-num">Blocks</th>
-              <th scope="col">Plot size</th>
-            </tr>
-          </thead>
-          <tbody>
-            {r.sites.map((s) => (
-              <tr key={s.id}>
-                <th scope="row">{s.name}</th>
-                <td>{s.soilDescription ?? '—'}</td>
-                <td className="fr-num">{s.blocks}</td>
-                <td>{formatArea(s.areaM2)}</td>
-              </tr>
-            ))}
-          </tbody>
-        </HTMLTable>
-      </div>
+      <FindingsTable label="Sites" columns={['Site', 'Soil', numeric('Blocks'), 'Plot size']}>
+        {r.sites.map((s) => (
+          <tr key={s.id}>
+            <th scope="row">{s.name}</th>
+            <td>{s.soilDescription ?? '—'}</td>
+            <td className="fr-num">{s.blocks}</td>
+            <td>{formatArea(s.areaM2)}</td>
+          </tr>
+        ))}
+      </FindingsTable>
       {r.measures.map((m) => (
         <ReportMeasureSection key={m.measure.id} entry={m} treatmentOrder={p.treatments.map((t) => t.code)} control={p.treatments.find((t) => t.isControl)?.code} />
       ))}
@@ -152,34 +130,21 @@ function ReportMeasureSection({ entry, treatmentOrder, control }: { entry: Repor
       ) : (
         <>
           <AnovaTable answer={{ anova: entry.anova, summary: entry.summary }} decimals={measure.decimals} unit={measure.unit} headingId={`${headingId}-anova`} />
-          <div className="fr-table-scroll">
-            <HTMLTable compact striped className="fr-findings-table" aria-label={`Means of ${measure.name}`}>
-              <thead>
-                <tr>
-                  <th scope="col">Treatment</th>
-                  <th scope="col" className="fr-num">n</th>
-                  <th scope="col" className="fr-num">Mean ± SE</th>
-                  <th scope="col">{entry.method === 'dunnett' ? 'Differs from the control' : 'Letters'}</th>
-                  <th scope="col" className="fr-num">% of control</th>
-                </tr>
-              </thead>
-              <tbody>
-                {means.map((mean) => (
-                  <tr key={mean.treatment}>
-                    <th scope="row" className="fr-code">
-                      {mean.treatment}
-                    </th>
-                    <td className="fr-num">{mean.n}</td>
-                    <td className="fr-num">
-                      {formatMeasureValue(mean.mean, measure.decimals)} ± {formatMeasureValue(mean.se, measure.decimals)}
-                    </td>
-                    <td className="fr-findings-letters">{entry.method === 'dunnett' ? (mean.differsFromControl === null ? '—' : mean.differsFromControl ? 'yes' : 'no') : (mean.letters ?? '')}</td>
-                    <td className="fr-num">{mean.percentOfControl === null ? '—' : `${percent.format(mean.percentOfControl)} %`}</td>
-                  </tr>
-                ))}
-              </tbody>
-            </HTMLTable>
-          </div>
+          <FindingsTable label={`Means of ${measure.name}`} columns={['Treatment', numeric('n'), numeric('Mean ± SE'), { head: entry.method === 'dunnett' ? 'Differs from the control' : 'Letters' }, numeric('% of control')]}>
+            {means.map((mean) => (
+              <tr key={mean.treatment}>
+                <th scope="row" className="fr-code">
+                  {mean.treatment}
+                </th>
+                <td className="fr-num">{mean.n}</td>
+                <td className="fr-num">
+                  {formatMeasureValue(mean.mean, measure.decimals)} ± {formatMeasureValue(mean.se, measure.decimals)}
+                </td>
+                <td className="fr-findings-letters">{entry.method === 'dunnett' ? (mean.differsFromControl === null ? '—' : mean.differsFromControl ? 'yes' : 'no') : (mean.letters ?? '')}</td>
+                <td className="fr-num">{mean.percentOfControl === null ? '—' : `${percent.format(mean.percentOfControl)} %`}</td>
+              </tr>
+            ))}
+          </FindingsTable>
           <p className="fr-muted fr-small">
             {methodLabels[entry.method]} at α = {entry.alpha}
             {entry.method === 'dunnett' ? `: each treatment against ${control ?? 'the control'}.` : ': means sharing a letter do not differ significantly.'}

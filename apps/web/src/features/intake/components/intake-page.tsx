@@ -1,6 +1,6 @@
-import { Button, Callout, Checkbox, FormGroup, ProgressBar, Section, SectionCard } from '@blueprintjs/core';
+import { Button, Callout, FormGroup, ProgressBar, Section, SectionCard } from '@blueprintjs/core';
 import type { IntakeResult, Measure, TrialDetail } from '@friable/contracts';
-import { useEffect, useMemo, useState } from 'react';
+import { useMemo, useState } from 'react';
 import { Link, useSearchParams } from 'react-router-dom';
 import { IdPicker } from '../../../components/id-picker';
 import { MissingReasonInput } from '../../../components/missing-reason-input';
@@ -8,20 +8,20 @@ import { SafetyCautions } from '../../../components/safety-cautions';
 import { paths } from '../../../config/paths';
 import { formatDate, formatNumber } from '../../../lib/format';
 import { useRememberedColumns } from '../api/get-intake-columns';
-import { useIntakeImports } from '../api/get-intake-imports';
 import { IntakeRefusedError, newTicket, useSubmitIntake, type ColumnChoice } from '../api/submit-intake';
 import { ColumnMapping } from './column-mapping';
-import { CsvDropZone } from './csv-drop-zone';
+import { CheckResult } from './check-result';
 import { guessColumns, mappingOverrides } from './guess-columns';
 import { intakeAccess } from './intake-access';
 import { ImportProgress } from './import-progress';
 import { IntakeChanges } from './intake-changes';
+import { isWorkbook, UploadSection } from './upload-section';
+import { useFollowedImports } from '../hooks/use-followed-imports';
 import { IntakeProblems } from './intake-problems';
 import { readFileText, readPreview, type CsvPreview } from './read-preview';
 
 /** The head of a file the browser reads for the preview; the whole file goes to the server, which reads it as a stream. */
 const PREVIEW_BYTES = 512 * 1024;
-const isWorkbook = (file: File) => /\.xlsx$/i.test(file.name);
 
 interface ChosenFile {
   file: File;
@@ -30,18 +30,6 @@ interface ChosenFile {
   /** Only the file's head was read for the preview (its rows are not all counted). */
   partial: boolean;
 }
-
-/** The ticket of this tab's upload for a site and round that had not answered when the page was left. */
-function readSent(key: string): string[] {
-  try {
-    const ticket = window.sessionStorage.getItem(key);
-    return ticket ? [ticket] : [];
-  } catch {
-    return [];
-  }
-}
-
-const fileSize = (bytes: number) => (bytes < 1_048_576 ? `${formatNumber(bytes / 1024, 0)} kB` : `${formatNumber(bytes / 1_048_576, 1)} MB`);
 
 /**
  * Intake: pick site and round, drop a CSV file or workbook, check the preview and columns, try it (dry
@@ -67,22 +55,9 @@ export function IntakePage({ trial }: { trial: TrialDetail }) {
   const submit = useSubmitIntake(trial.id);
   const measures = measuresOf(round?.id);
   const remembered = useRememberedColumns(trial.id);
-  const imports = useIntakeImports(trial.id, site?.id, round?.id, submit.isPending);
-  const mine = imports.data?.find((record) => record.ticket === ticket);
   // This page's last upload, kept for the browser tab so that after a reload it is followed (or its end shown).
   const sentKey = `friable.intake.${trial.id}.${site?.id}.${round?.id}`;
-  // Uploads of others, or of this page before a reload, that were seen running: followed to their end.
-  const [watched, setWatched] = useState<ReadonlySet<string>>(() => new Set(readSent(sentKey)));
-  useEffect(() => {
-    const running = (imports.data ?? []).filter((record) => record.finishedAt === null && record.ticket !== ticket && !watched.has(record.ticket));
-    if (running.length) setWatched(new Set([...watched, ...running.map((record) => record.ticket)]));
-  }, [imports.data, ticket, watched]);
-  const followed = (imports.data ?? []).filter((record) => record.ticket !== ticket && watched.has(record.ticket));
-  useEffect(() => {
-    // Shown now that it has ended: a later reload need not show it again.
-    const [sent] = readSent(sentKey);
-    if (sent && sent !== ticket && imports.data?.some((record) => record.ticket === sent && record.finishedAt !== null)) window.sessionStorage.removeItem(sentKey);
-  }, [imports.data, sentKey, ticket]);
+  const { mine, followed } = useFollowedImports(trial.id, site?.id, round?.id, ticket, submit.isPending, sentKey);
 
   function startOver() {
     setChecked(null);
@@ -167,7 +142,6 @@ export function IntakePage({ trial }: { trial: TrialDetail }) {
 
   const problems = submit.error instanceof IntakeRefusedError ? submit.error.problems : [];
   const problemRows = new Set(problems.flatMap((problem) => (problem.row === null ? [] : [problem.row])));
-  const warnings = checked?.warnings ?? [];
   const otherError = submit.error && !(submit.error instanceof IntakeRefusedError) ? submit.error : null;
 
   return (
@@ -188,31 +162,7 @@ export function IntakePage({ trial }: { trial: TrialDetail }) {
             {site.name} is not randomized yet; once its plot plan exists, its data can be uploaded here.
           </Callout>
         ) : (
-          <Section title="Upload a CSV file or workbook" icon="cloud-upload" className="fr-section" subtitle={`${site?.name} · ${round.label}`}>
-            <SectionCard>
-              <p className="fr-muted">
-                The CSV template on the <Link to={paths.trialPlotPlan.href(trial.id, site?.id)}>Plot plan</Link> has every plot of the site and a column per measure;
-                your own file works too when its headings name the plot label and the measures. Write “NA” for a missing value (and why, in the missing reason
-                column) and “&gt;600” for a drain that had not finished by the cut-off.
-              </p>
-              <CsvDropZone onFile={chooseFile} disabled={submit.isPending} />
-              {chosen && (
-                <p className="fr-intake__file">
-                  <strong>{chosen.file.name}</strong> · {fileSize(chosen.file.size)}
-                  {isWorkbook(chosen.file)
-                    ? ' · a workbook: the server reads its first sheet, finds the header row by the plot label column and says what it found when you check it'
-                    : chosen.partial
-                      ? ` · the first ${formatNumber(chosen.preview.rows.length, 0)} rows shown · ${formatNumber(chosen.preview.headers.length, 0)} columns`
-                      : ` · ${formatNumber(chosen.preview.rows.length, 0)} rows · ${formatNumber(chosen.preview.headers.length, 0)} columns`}
-                </p>
-              )}
-              {chosen?.preview.problem && (
-                <Callout intent="warning" compact icon="warning-sign">
-                  {chosen.preview.problem}
-                </Callout>
-              )}
-            </SectionCard>
-          </Section>
+          <UploadSection trial={trial} site={site} round={round} chosen={chosen} disabled={submit.isPending} onFile={chooseFile} />
         )}
 
         {followed.length > 0 && (
@@ -288,35 +238,7 @@ export function IntakePage({ trial }: { trial: TrialDetail }) {
           </Callout>
         )}
 
-        {checked && !saved && (
-          <Section title="What this upload would do" icon="changes" className="fr-section">
-            <SectionCard>
-              {checked.identicalToPrevious ? (
-                <Callout icon="tick" intent="success">
-                  This file is byte for byte the one uploaded last time for this site and round: nothing would change.
-                </Callout>
-              ) : (
-                <IntakeChanges result={checked} />
-              )}
-              {warnings.length > 0 && (
-                <Callout intent="warning" icon="warning-sign" title={`${formatNumber(warnings.length, 0)} values look unusual`} className="fr-gap">
-                  <IntakeProblems problems={warnings} caption="Warnings about the file" />
-                  <Checkbox checked={acceptWarnings} onChange={(event) => setAcceptWarnings(event.currentTarget.checked)} label="I have checked these values against the field sheets and they are right." />
-                </Callout>
-              )}
-              <div className="fr-intake__actions">
-                <Button
-                  intent="primary"
-                  icon="floppy-disk"
-                  text="Save these values"
-                  disabled={submit.isPending || (warnings.length > 0 && !acceptWarnings) || checked.identicalToPrevious}
-                  loading={submit.isPending}
-                  onClick={() => send(false)}
-                />
-              </div>
-            </SectionCard>
-          </Section>
-        )}
+        {checked && !saved && <CheckResult checked={checked} acceptWarnings={acceptWarnings} onAcceptWarnings={setAcceptWarnings} saving={submit.isPending} onSave={() => send(false)} />}
 
         {saved && (
           <Callout intent="success" icon="tick-circle" title="Saved" role="status" className="fr-gap">

@@ -1,4 +1,5 @@
 import { Button, Callout, Dialog, DialogBody } from '@blueprintjs/core';
+import { FilePick } from '../../../components/file-pick';
 import type { Plot } from '@friable/contracts';
 import { ErrorState, LoadingState } from '../../../components/states';
 import { usePlotPhoto, usePutPlotPhoto } from '../../../lib/api/plot-photo';
@@ -20,19 +21,13 @@ export function PhotoDialog({ trialId, roundId, roundLabel, plot, canEdit, onClo
           <p className="fr-muted">No photo of this plot for {roundLabel} yet.</p>
         )}
         {canEdit && plot && (
-          <label className="fr-ledger-photo__pick">
-            <span>{photo.data ? 'Replace the photo' : 'Add a photo'} (JPEG or PNG)</span>
-            <input
-              type="file"
-              accept="image/jpeg,image/png"
-              aria-label="Photo file"
-              onChange={(event) => {
-                const file = event.target.files?.[0];
-                if (file) put.mutate({ trialId, plotId: plot.id, roundId, file });
-                event.target.value = '';
-              }}
-            />
-          </label>
+          <FilePick
+            className="fr-ledger-photo__pick"
+            label={`${photo.data ? 'Replace the photo' : 'Add a photo'} (JPEG or PNG)`}
+            accept="image/jpeg,image/png"
+            ariaLabel="Photo file"
+            onFile={(file) => put.mutate({ trialId, plotId: plot.id, roundId, file })}
+          />
         )}
         {put.isPending && <p className="fr-muted">Sending the photo…</p>}
         {put.error && (

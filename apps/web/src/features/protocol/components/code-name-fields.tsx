@@ -1,16 +1,12 @@
-import { InputGroup } from '@blueprintjs/core';
-import { Field } from '../../../components/field-errors';
+import type { FieldValues, Path } from 'react-hook-form';
+import { TextField, type FormControl } from '../../../components/form-fields';
 
 /** The Code and Name boxes that open a treatment's or a measure's dialog, side by side. */
-export function CodeNameFields({ code, name, onCode, onName, codeHelp, error }: { code: string; name: string; onCode: (text: string) => void; onName: (text: string) => void; codeHelp: string; error: unknown }) {
+export function CodeNameFields<T extends FieldValues & { code: string; name: string }>({ control, codeHelp, error }: { control: FormControl<T>; codeHelp: string; error: unknown }) {
   return (
     <div className="fr-form-row">
-      <Field label="Code" field="code" error={error} help={codeHelp}>
-        <InputGroup id="fr-field-code" value={code} onChange={(e) => onCode(e.target.value)} autoFocus />
-      </Field>
-      <Field label="Name" field="name" error={error}>
-        <InputGroup id="fr-field-name" value={name} onChange={(e) => onName(e.target.value)} />
-      </Field>
+      <TextField control={control} name={'code' as Path<T>} label="Code" serverError={error} help={codeHelp} autoFocus />
+      <TextField control={control} name={'name' as Path<T>} label="Name" serverError={error} />
     </div>
   );
 }

@@ -1,4 +1,5 @@
-import { Button, Callout, Card, H3 } from '@blueprintjs/core';
+import { Button, Card, H3 } from '@blueprintjs/core';
+import { WarningList } from '../../../components/warning-list';
 import type { Site, TrialDetail } from '@friable/contracts';
 import { useState } from 'react';
 import { Link } from 'react-router-dom';
@@ -130,15 +131,7 @@ function SiteCard({
       </dl>
       {site.strata.length > 0 && <StrataList site={site} />}
       {site.hasObservations && canEdit && <p className="fr-muted fr-small">Data have been recorded here, so the plot plan can no longer be randomized again.</p>}
-      {site.warnings.length > 0 && (
-        <Callout intent="warning" icon="warning-sign" compact className="fr-site-warnings" title="Worth a second look">
-          <ul>
-            {site.warnings.map((warning) => (
-              <li key={warning}>{warning}</li>
-            ))}
-          </ul>
-        </Callout>
-      )}
+      <WarningList title="Worth a second look" warnings={site.warnings} className="fr-site-warnings" />
     </Card>
   );
 }

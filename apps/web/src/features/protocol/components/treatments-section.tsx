@@ -1,13 +1,13 @@
-import { Button, HTMLTable, Section, SectionCard, Tag } from '@blueprintjs/core';
+import { Tag } from '@blueprintjs/core';
 import type { PlotAmount, Treatment, TrialDetail } from '@friable/contracts';
 import { isFactorDesign } from '@friable/field';
 import { useState } from 'react';
-import { EmptyState } from '../../../components/states';
 import { formatDoseShort, formatNumber, formatRate } from '../../../lib/format';
 import { useDeleteProtocolItem } from '../api/delete-protocol-item';
 import { useAmounts } from '../api/get-amounts';
 import { appliedToWords } from './factor-roles';
 import { LayoutChangeConfirm, type PendingLayoutChange } from './layout-change-confirm';
+import { ProtocolTableSection } from './protocol-table-section';
 import { RowActions } from './row-actions';
 import { TreatmentDialog } from './treatment-dialog';
 
@@ -21,94 +21,80 @@ export function TreatmentsSection({ trial, canEdit }: { trial: TrialDetail; canE
   const hasControl = trial.treatments.some((t) => t.isControl);
 
   return (
-    <Section
+    <ProtocolTableSection
       title="Treatments"
       subtitle={factorial ? 'Every combination of the factors’ levels' : undefined}
       icon="lab-test"
-      className="fr-section"
-      rightElement={canEdit && !factorial ? <Button icon="add" text="Add treatment" size="small" onClick={() => setEditing('new')} /> : undefined}
+      addText="Add treatment"
+      onAdd={canEdit && !factorial ? () => setEditing('new') : undefined}
+      empty={
+        trial.treatments.length === 0
+          ? { title: 'No treatments yet', description: factorial ? 'Name the factors and their levels above; the treatments follow.' : 'Add an untreated control and the amendments to compare, each with its rate.' }
+          : null
+      }
+      heads={['Code', 'Treatment', 'Rate', 'Amount per plot']}
+      withActions={canEdit}
+      tableClassName="fr-table fr-treatments"
+      removeError={remove.error}
+      notice={trial.treatments.length > 0 && !hasControl && <p className="fr-warning-line">There is no untreated control: an effect can only be claimed against one.</p>}
+      after={
+        <>
+          {editing && <TreatmentDialog trial={trial} treatment={editing === 'new' ? null : editing} onClose={() => setEditing(null)} />}
+          <LayoutChangeConfirm trial={trial} change={pending} onClose={() => setPending(null)} />
+        </>
+      }
     >
-      <SectionCard padded={trial.treatments.length === 0}>
-        {trial.treatments.length === 0 ? (
-          <EmptyState
-            title="No treatments yet"
-            description={factorial ? 'Name the factors and their levels above; the treatments follow.' : 'Add an untreated control and the amendments to compare, each with its rate.'}
-          />
-        ) : (
-          <div className="fr-table-scroll">
-            <HTMLTable compact striped className="fr-table fr-treatments">
-              <thead>
-                <tr>
-                  <th>Code</th>
-                  <th>Treatment</th>
-                  <th>Rate</th>
-                  <th>Amount per plot</th>
-                  {canEdit && <th aria-label="Actions" />}
-                </tr>
-              </thead>
-              <tbody>
-                {trial.treatments.map((treatment) => (
-                  <tr key={treatment.id}>
-                    <td className="fr-code">{treatment.code}</td>
-                    <td>
-                      <div>
-                        {treatment.name}{' '}
-                        {treatment.isControl && (
-                          <Tag minimal intent="success" className="fr-control-tag">
-                            control
-                          </Tag>
-                        )}
-                      </div>
-                      {treatment.product && <div className="fr-muted fr-small">{productLine(treatment)}</div>}
-                      {treatment.description && <div className="fr-muted fr-small">{treatment.description}</div>}
-                    </td>
-                    <td>
-                      {factorial ? (
-                        <LevelRates trial={trial} treatment={treatment} />
-                      ) : treatment.rateValue === null ? (
-                        <span className="fr-muted">none</span>
-                      ) : (
-                        formatRate(treatment.rateValue, treatment.rateUnit)
-                      )}
-                      {treatment.rateValue !== null && treatment.rateBasis === 'concentration' && (
-                        <div className="fr-muted fr-small">mixed through {formatNumber(treatment.incorporationDepthCm ?? 0, 1)} cm of soil</div>
-                      )}
-                    </td>
-                    <td>
-                      {factorial ? (
-                        <span className="fr-muted">per unit each level goes on: see the Plot plan</span>
-                      ) : (
-                        <PerSiteAmounts trial={trial} treatment={treatment} amounts={amounts.data} pending={amounts.isPending} failed={amounts.isError} />
-                      )}
-                    </td>
-                    {canEdit && (
-                      <RowActions
-                        name={treatment.code}
-                        onEdit={() => setEditing(treatment)}
-                        remove={
-                          factorial
-                            ? undefined
-                            : {
-                                loading: remove.isPending && remove.variables?.id === treatment.id,
-                                ask: () => setPending({ what: `Remove treatment ${treatment.code} (${treatment.name})`, confirmText: 'Remove treatment', proceed: () => remove.mutate({ id: treatment.id }) }),
-                              }
-                        }
-                      />
-                    )}
-                  </tr>
-                ))}
-              </tbody>
-            </HTMLTable>
-          </div>
-        )}
-        {trial.treatments.length > 0 && !hasControl && (
-          <p className="fr-warning-line">There is no untreated control: an effect can only be claimed against one.</p>
-        )}
-        {remove.error && <p className="fr-error-line">{remove.error.message}</p>}
-      </SectionCard>
-      {editing && <TreatmentDialog trial={trial} treatment={editing === 'new' ? null : editing} onClose={() => setEditing(null)} />}
-      <LayoutChangeConfirm trial={trial} change={pending} onClose={() => setPending(null)} />
-    </Section>
+        {trial.treatments.map((treatment) => (
+          <tr key={treatment.id}>
+            <td className="fr-code">{treatment.code}</td>
+            <td>
+              <div>
+                {treatment.name}{' '}
+                {treatment.isControl && (
+                  <Tag minimal intent="success" className="fr-control-tag">
+                    control
+                  </Tag>
+                )}
+              </div>
+              {treatment.product && <div className="fr-muted fr-small">{productLine(treatment)}</div>}
+              {treatment.description && <div className="fr-muted fr-small">{treatment.description}</div>}
+            </td>
+            <td>
+              {factorial ? (
+                <LevelRates trial={trial} treatment={treatment} />
+              ) : treatment.rateValue === null ? (
+                <span className="fr-muted">none</span>
+              ) : (
+                formatRate(treatment.rateValue, treatment.rateUnit)
+              )}
+              {treatment.rateValue !== null && treatment.rateBasis === 'concentration' && (
+                <div className="fr-muted fr-small">mixed through {formatNumber(treatment.incorporationDepthCm ?? 0, 1)} cm of soil</div>
+              )}
+            </td>
+            <td>
+              {factorial ? (
+                <span className="fr-muted">per unit each level goes on: see the Plot plan</span>
+              ) : (
+                <PerSiteAmounts trial={trial} treatment={treatment} amounts={amounts.data} pending={amounts.isPending} failed={amounts.isError} />
+              )}
+            </td>
+            {canEdit && (
+              <RowActions
+                name={treatment.code}
+                onEdit={() => setEditing(treatment)}
+                remove={
+                  factorial
+                    ? undefined
+                    : {
+                        loading: remove.isPending && remove.variables?.id === treatment.id,
+                        ask: () => setPending({ what: `Remove treatment ${treatment.code} (${treatment.name})`, confirmText: 'Remove treatment', proceed: () => remove.mutate({ id: treatment.id }) }),
+                      }
+                }
+              />
+            )}
+          </tr>
+        ))}
+    </ProtocolTableSection>
   );
 }
 

@@ -1,9 +1,13 @@
-import { Button, HTMLSelect, InputGroup, Section, SectionCard, TextArea } from '@blueprintjs/core';
-import { TRIAL_DESIGNS, type TrialDesign, type TrialDetail, type TrialUpdateInput } from '@friable/contracts';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { Button, Section, SectionCard } from '@blueprintjs/core';
+import { TRIAL_DESIGNS, type TrialDetail, type TrialUpdateInput } from '@friable/contracts';
 import { useState } from 'react';
-import { Field } from '../../../components/field-errors';
+import { useForm } from 'react-hook-form';
+import { z } from 'zod';
+import { DesignField } from '../../../components/design-field';
 import { FormDialog } from '../../../components/form-dialog';
-import { designHelp, designLabels, formatDate, statusLabels } from '../../../lib/format';
+import { TextAreaField, TextField } from '../../../components/form-fields';
+import { designLabels, formatDate, statusLabels } from '../../../lib/format';
 import { useUpdateTrial } from '../api/update-trial';
 import { useVersionedForm } from '../../../lib/edit-conflict';
 import { LayoutChangeConfirm, type PendingLayoutChange } from './layout-change-confirm';
@@ -54,73 +58,64 @@ export function TrialFieldsSection({ trial, canEdit }: { trial: TrialDetail; can
   );
 }
 
+/** The trial's fields as typed, read into the body the API takes (empty texts become null). */
+const trialFieldsSchema = z
+  .object({ title: z.string(), question: z.string(), design: z.enum(TRIAL_DESIGNS), startDate: z.string(), seed: z.string(), safetyNotes: z.string(), noControlReason: z.string() })
+  .transform(
+    (v): Omit<TrialUpdateInput, 'version'> => ({
+      title: v.title.trim(),
+      question: v.question.trim() || null,
+      design: v.design,
+      startDate: v.startDate || null,
+      seed: v.seed.trim(),
+      safetyNotes: v.safetyNotes.trim() || null,
+      noControlReason: v.noControlReason.trim() || null,
+    }),
+  );
+
 function TrialFieldsDialog({ trial, onClose }: { trial: TrialDetail; onClose: () => void }) {
   const update = useUpdateTrial(trial.id);
-  const [title, setTitle] = useState(trial.title);
-  const [question, setQuestion] = useState(trial.question ?? '');
-  const [design, setDesign] = useState<TrialDesign>(trial.design);
-  const [startDate, setStartDate] = useState(trial.startDate?.slice(0, 10) ?? '');
-  const [seed, setSeed] = useState(trial.seed);
-  const [safetyNotes, setSafetyNotes] = useState(trial.safetyNotes ?? '');
-  const [noControlReason, setNoControlReason] = useState(trial.noControlReason ?? '');
+  const { control, handleSubmit } = useForm({
+    resolver: zodResolver(trialFieldsSchema),
+    defaultValues: {
+      title: trial.title,
+      question: trial.question ?? '',
+      design: trial.design,
+      startDate: trial.startDate?.slice(0, 10) ?? '',
+      seed: trial.seed,
+      safetyNotes: trial.safetyNotes ?? '',
+      noControlReason: trial.noControlReason ?? '',
+    },
+  });
   const hasControl = trial.treatments.some((t) => t.isControl);
-
+  const common = { control, serverError: update.error };
   const form = useVersionedForm<Omit<TrialUpdateInput, 'version'>, TrialDetail, TrialUpdateInput>(update, (input, version) => ({ ...input, version: version ?? trial.version }), trial, onClose);
-
   const [pendingDesign, setPendingDesign] = useState<PendingLayoutChange | null>(null);
 
-  function submit() {
-    const input = {
-        title: title.trim(),
-        question: question.trim() || null,
-        design,
-        startDate: startDate || null,
-        seed: seed.trim(),
-        safetyNotes: safetyNotes.trim() || null,
-        noControlReason: noControlReason.trim() || null,
-      };
+  const submit = handleSubmit((input) => {
+    const design = input.design ?? trial.design;
     // A new design clears every site's layout: once a site is randomized, that is confirmed first.
     if (design !== trial.design && trial.sites.some((site) => site.plotCount > 0)) {
       setPendingDesign({ what: `Change the design to ${designLabels[design] ?? design}`, confirmText: 'Change the design', proceed: () => form.send(input) });
       return;
     }
     form.send(input);
-  }
+  });
 
   return (
     <>
-      <FormDialog title="Edit trial" icon="edit" onClose={onClose} onSubmit={submit} submitText="Save trial" pending={update.isPending} error={update.error} shownFields={shownFields}>
-            <Field label="Title" field="title" error={update.error}>
-              <InputGroup id="fr-field-title" value={title} onChange={(e) => setTitle(e.target.value)} />
-            </Field>
-            <Field label="Question" field="question" error={update.error} help="What the trial should find out, e.g. “Does gypsum at 40 lb/1,000 ft² shorten drain time on heavy clay?”">
-              <TextArea id="fr-field-question" value={question} onChange={(e) => setQuestion(e.target.value)} fill autoResize />
-            </Field>
-            <Field label="Design" field="design" error={update.error} help={designHelp[design]}>
-              <HTMLSelect id="fr-field-design" value={design} onChange={(e) => setDesign(e.target.value as TrialDesign)} fill>
-                {TRIAL_DESIGNS.map((d) => (
-                  <option key={d} value={d}>
-                    {designLabels[d]}
-                  </option>
-                ))}
-              </HTMLSelect>
-            </Field>
-            <div className="fr-form-row">
-              <Field label="Start date" field="startDate" error={update.error} help="Day 0 of the assessment rounds.">
-                <InputGroup id="fr-field-startDate" type="date" value={startDate} onChange={(e) => setStartDate(e.target.value)} />
-              </Field>
-              <Field label="Seed" field="seed" error={update.error} help="Any text; it fixes the randomization.">
-                <InputGroup id="fr-field-seed" value={seed} onChange={(e) => setSeed(e.target.value)} />
-              </Field>
-            </div>
-            <Field label="Safety notes" field="safetyNotes" error={update.error} help="Printed on every site’s sheets: masks for powders, gloves for compost and manure, lifting.">
-              <TextArea id="fr-field-safetyNotes" value={safetyNotes} onChange={(e) => setSafetyNotes(e.target.value)} fill autoResize />
-            </Field>
-            {!hasControl && (
-              <Field label="Why there is no untreated control" field="noControlReason" error={update.error} help="Without a control no effect can be claimed; say why it is left out.">
-                <TextArea id="fr-field-noControlReason" value={noControlReason} onChange={(e) => setNoControlReason(e.target.value)} fill autoResize />
-              </Field>
-            )}
+      <FormDialog title="Edit trial" icon="edit" onClose={onClose} onSubmit={() => void submit()} submitText="Save trial" pending={update.isPending} error={update.error} shownFields={shownFields}>
+        <TextField {...common} name="title" label="Title" />
+        <TextAreaField {...common} name="question" label="Question" help="What the trial should find out, e.g. “Does gypsum at 40 lb/1,000 ft² shorten drain time on heavy clay?”" autoResize />
+        <DesignField {...common} />
+        <div className="fr-form-row">
+          <TextField {...common} name="startDate" label="Start date" help="Day 0 of the assessment rounds." type="date" />
+          <TextField {...common} name="seed" label="Seed" help="Any text; it fixes the randomization." />
+        </div>
+        <TextAreaField {...common} name="safetyNotes" label="Safety notes" help="Printed on every site’s sheets: masks for powders, gloves for compost and manure, lifting." autoResize />
+        {!hasControl && (
+          <TextAreaField {...common} name="noControlReason" label="Why there is no untreated control" help="Without a control no effect can be claimed; say why it is left out." autoResize />
+        )}
       </FormDialog>
       <VersionConflict what={`trial ${trial.code}`} conflict={form.conflict} onKeepMine={form.keepMine} onTakeStored={form.takeStored} />
       <LayoutChangeConfirm trial={trial} change={pendingDesign} onClose={() => setPendingDesign(null)} />

@@ -1,7 +1,8 @@
-import { Card, H3, HTMLSelect, Radio, RadioGroup } from '@blueprintjs/core';
+import { Card, H3 } from '@blueprintjs/core';
 import type { ReactNode } from 'react';
-import { Controller, useController, type Control, type FieldPathByValue } from 'react-hook-form';
+import { useController, type Control, type FieldPathByValue } from 'react-hook-form';
 import { Field } from '../../../components/field-errors';
+import { CustomField, RadioField, SelectField } from '../../../components/form-fields';
 import { NumberText } from '../../../components/number-text';
 import { RateUnitSelect } from '../../../components/rate-unit-select';
 import type { DoseFormState } from './dose-form-state';
@@ -21,14 +22,18 @@ const areaUnits = [
   { value: 'ft2', label: 'ft²' },
 ];
 
-const basisOptions: Array<[string, string]> = [
-  ['area', 'Per area: spread over the surface'],
-  ['concentration', 'Concentration: mixed through a container, matching a field rate worked in to a depth'],
+const basisOptions = [
+  { value: 'area', label: 'Per area: spread over the surface' },
+  { value: 'concentration', label: 'Concentration: mixed through a container, matching a field rate worked in to a depth' },
 ];
-const geometryOptions: Array<[string, string]> = [
-  ['rectangle', 'Length × width'],
-  ['round', 'Round (inside diameter)'],
-  ['area', 'Known area'],
+const geometryOptions = [
+  { value: 'rectangle', label: 'Length × width' },
+  { value: 'round', label: 'Round (inside diameter)' },
+  { value: 'area', label: 'Known area' },
+];
+const materialOptions = [
+  { value: 'gypsum', label: 'Gypsum' },
+  { value: 'other', label: 'Other material' },
 ];
 
 interface FieldProps {
@@ -58,25 +63,6 @@ function NumberWithUnit({ control, id, box, choice }: { control: Control<DoseFor
   return <NumberText id={id} value={box.value} onChange={box.onChange} unitChoice={{ label: choice.label, options: choice.options, value: unitBox.value, onChange: unitBox.onChange }} />;
 }
 
-/** A choice among a few, as radio buttons. */
-function ChoiceField({ control, name, field, label, error, options, inline }: FieldProps & { name: 'basis' | 'geometry'; options: Array<[string, string]>; inline?: boolean }) {
-  return (
-    <Field label={label} field={field} error={error}>
-      <Controller
-        control={control}
-        name={name}
-        render={({ field: choice }) => (
-          <RadioGroup inline={inline} selectedValue={choice.value} onChange={(e) => choice.onChange(e.currentTarget.value)}>
-            {options.map(([value, text]) => (
-              <Radio key={value} value={value} label={text} />
-            ))}
-          </RadioGroup>
-        )}
-      />
-    </Field>
-  );
-}
-
 /** The Rate calculator's boxes (react-hook-form); what they hold is read by the page as it changes. */
 export function RateForm({ control, form, volume, error }: { control: Control<DoseFormState>; form: DoseFormState; volume: boolean; error: unknown }) {
   const common = { control, error };
@@ -85,33 +71,12 @@ export function RateForm({ control, form, volume, error }: { control: Control<Do
       <H3>Rate</H3>
       <div className="fr-form-row">
         <NumberField {...common} name="rate" field="rate" label="Rate" />
-        <Field label="Unit" field="unit" error={error}>
-          <Controller
-            control={control}
-            name="unit"
-            render={({ field }) => <RateUnitSelect id="fr-field-unit" value={field.value} onChange={field.onChange} />}
-          />
-        </Field>
+        <CustomField control={control} serverError={error} name="unit" label="Unit">
+          {(box, id) => <RateUnitSelect id={id} value={box.value} onChange={box.onChange} />}
+        </CustomField>
       </div>
-      <Field label="Material" field="materialKind" error={error} help="Gypsum rates are compared with common garden rates.">
-        <Controller
-          control={control}
-          name="materialKind"
-          render={({ field }) => (
-            <HTMLSelect id="fr-field-materialKind" value={field.value} onChange={(e) => field.onChange(e.target.value)} fill>
-              <option value="gypsum">Gypsum</option>
-              <option value="other">Other material</option>
-            </HTMLSelect>
-          )}
-        />
-      </Field>
-      <ChoiceField
-        {...common}
-        name="basis"
-        field="basis"
-        label="Basis"
-        options={basisOptions}
-      />
+      <SelectField control={control} serverError={error} name="materialKind" label="Material" help="Gypsum rates are compared with common garden rates." options={materialOptions} />
+      <RadioField control={control} serverError={error} name="basis" label="Basis" options={basisOptions} />
       {form.basis === 'concentration' && (
         <div className="fr-form-row">
           <NumberField {...common} name="depthCm" field="depthCm" label="Incorporation depth" help="How deep the field rate is mixed in." unit="cm" />
@@ -119,14 +84,7 @@ export function RateForm({ control, form, volume, error }: { control: Control<Do
         </div>
       )}
       <H3>Plot or container</H3>
-      <ChoiceField
-        {...common}
-        inline
-        name="geometry"
-        field="geometry"
-        label="Size given as"
-        options={geometryOptions}
-      />
+      <RadioField control={control} serverError={error} inline name="geometry" label="Size given as" options={geometryOptions} />
       {form.geometry === 'rectangle' && (
         <div className="fr-form-row">
           <NumberField {...common} name="length" field="lengthM" label="Length" unitChoice={{ name: 'lengthUnit', label: 'Length unit', options: lengthUnits }} />

@@ -1,4 +1,5 @@
-import { Callout, Card, H3 } from '@blueprintjs/core';
+import { Card, H3 } from '@blueprintjs/core';
+import { WarningList } from '../../../components/warning-list';
 import type { DoseAnswer } from '@friable/contracts';
 import { useController, type Control } from 'react-hook-form';
 import { NumberText } from '../../../components/number-text';
@@ -96,15 +97,7 @@ export function RateResult({ control, answer, problem, net, plots, allowancePerc
           </tbody>
         </table>
       )}
-      {answer.warnings.length > 0 && (
-        <Callout intent="warning" icon="warning-sign" compact title="Check this rate" className="fr-gap">
-          <ul>
-            {answer.warnings.map((w) => (
-              <li key={w}>{w}</li>
-            ))}
-          </ul>
-        </Callout>
-      )}
+      <WarningList title="Check this rate" warnings={answer.warnings} />
       <p className="fr-muted fr-small">{serverIsCurrent ? 'Checked with Friable’s server.' : 'Worked out in your browser; checking with the server…'}</p>
     </Card>
   );

@@ -9,18 +9,22 @@ export interface SeenValue {
   text: string;
 }
 
-/**
- * A value recorded on the Round walk and kept in the browser until the server has it. It carries the
- * version it was based on, so a change made meanwhile (at the desk, by someone else) comes back as a
- * conflict for the person to settle, never overwritten in silence.
- */
-export interface QueuedValue {
+/** Where a queued item was taken on the walk: the trial, site, round and plot (with its label, for the person). */
+interface QueuedAtPlot {
   id?: number;
   trialId: number;
   siteId: number;
   roundId: number;
   plotId: number;
   plotLabel: string;
+}
+
+/**
+ * A value recorded on the Round walk and kept in the browser until the server has it. It carries the
+ * version it was based on, so a change made meanwhile (at the desk, by someone else) comes back as a
+ * conflict for the person to settle, never overwritten in silence.
+ */
+export interface QueuedValue extends QueuedAtPlot {
   measureId: number;
   measureName: string;
   /** Canonical text for the server: "412", "12.5", ">600", "NA". */
@@ -41,13 +45,7 @@ export interface QueuedValue {
 }
 
 /** A plot photo taken on the walk, kept until it is uploaded. */
-export interface QueuedPhoto {
-  id?: number;
-  trialId: number;
-  siteId: number;
-  roundId: number;
-  plotId: number;
-  plotLabel: string;
+export interface QueuedPhoto extends QueuedAtPlot {
   /** The picture's bytes and type (kept as bytes, which every browser's IndexedDB stores). */
   bytes: ArrayBuffer;
   contentType: string;

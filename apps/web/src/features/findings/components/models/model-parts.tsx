@@ -1,7 +1,8 @@
-import { Callout, HTMLTable } from '@blueprintjs/core';
+import { Callout } from '@blueprintjs/core';
 import type { ControlRatio, LikelihoodRatioTest } from '@friable/contracts';
 import type { ReactNode } from 'react';
 import { SignificanceLegend } from '../anova-table';
+import { FindingsTable } from '../findings-table';
 import { formatP, formatStatistic, significanceMark } from '../stat-format';
 
 /** A titled part of a model's answer. */
@@ -16,23 +17,12 @@ export function ModelSection({ id, title, children }: { id: string; title: strin
   );
 }
 
-/** A compact table in Friable's look, scrolling inside its own box on a phone. */
+/** A compact table in Friable's look, scrolling inside its own box on a phone: the first column names the row, the others are numbers. */
 export function ModelTable({ label, head, children }: { label: string; head: ReactNode[]; children: ReactNode }) {
   return (
-    <div className="fr-table-scroll">
-      <HTMLTable compact striped className="fr-findings-table" aria-label={label}>
-        <thead>
-          <tr>
-            {head.map((cell, index) => (
-              <th key={index} scope="col" className={index === 0 ? undefined : 'fr-num'}>
-                {cell}
-              </th>
-            ))}
-          </tr>
-        </thead>
-        <tbody>{children}</tbody>
-      </HTMLTable>
-    </div>
+    <FindingsTable label={label} columns={head.map((cell, index) => (index === 0 && typeof cell === 'string' ? cell : { head: cell, num: index > 0 }))}>
+      {children}
+    </FindingsTable>
   );
 }
 

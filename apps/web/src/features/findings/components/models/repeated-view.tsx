@@ -65,25 +65,13 @@ export function RepeatedView({ findings, names, styles, sites }: { findings: Rep
         <ModelSection id="fr-repeated-tests-title" title="Tests (Kenward–Roger)">
           <ModelTable label="Tests of treatment, round and their interaction" head={['Source', 'num df', 'den df', 'F', 'p', '']}>
             {findings.anova.map((row) => (
-              <tr key={row.term}>
-                <th scope="row">{modelTermLabel(row.term)}</th>
-                <td className="fr-num">{row.numDf}</td>
-                <td className="fr-num">{formatStatistic(row.denDf)}</td>
-                <td className="fr-num">{formatStatistic(row.f)}</td>
-                <PCells p={row.p} />
-              </tr>
+              <FTestRow key={row.term} name={modelTermLabel(row.term)} test={row} />
             ))}
           </ModelTable>
           <h4 className="fr-small">Treatment within each round</h4>
           <ModelTable label="Tests of treatment within each round" head={['Round', 'num df', 'den df', 'F', 'p', '']}>
             {findings.byRound.map((row) => (
-              <tr key={row.round}>
-                <th scope="row">{row.round}</th>
-                <td className="fr-num">{row.numDf}</td>
-                <td className="fr-num">{formatStatistic(row.denDf)}</td>
-                <td className="fr-num">{formatStatistic(row.f)}</td>
-                <PCells p={row.p} />
-              </tr>
+              <FTestRow key={row.round} name={row.round} test={row} />
             ))}
           </ModelTable>
           <SignificanceLegend />
@@ -158,5 +146,18 @@ export function RepeatedView({ findings, names, styles, sites }: { findings: Rep
       )}
       <ModelWarnings warnings={findings.warnings} />
     </div>
+  );
+}
+
+/** One F test as a row: what is tested, its numerator and denominator df, F and p with its mark. */
+function FTestRow({ name, test }: { name: string; test: { numDf: number; denDf: number | null; f: number | null; p: number | null } }) {
+  return (
+    <tr>
+      <th scope="row">{name}</th>
+      <td className="fr-num">{test.numDf}</td>
+      <td className="fr-num">{formatStatistic(test.denDf)}</td>
+      <td className="fr-num">{formatStatistic(test.f)}</td>
+      <PCells p={test.p} />
+    </tr>
   );
 }
