@@ -1,4 +1,4 @@
-import { Button, Callout, Checkbox, ProgressBar, Section, SectionCard } from '@blueprintjs/core';
+import { Button, Callout, Checkbox, HTMLSelect, ProgressBar, Section, SectionCard } from '@blueprintjs/core';
 import type { IntakeResult, Measure, TrialDetail } from '@friable/contracts';
 import { useEffect, useMemo, useState } from 'react';
 import { Link, useSearchParams } from 'react-router-dom';
@@ -17,6 +17,7 @@ import { ImportProgress } from './import-progress';
 import { IntakeChanges } from './intake-changes';
 import { IntakeProblems } from './intake-problems';
 import { readFileText, readPreview, type CsvPreview } from './read-preview';
+import { openWorkbook, WORKBOOK_PREVIEW_MAX_BYTES, type OpenedWorkbook, type SheetPreview } from './read-workbook';
 
 /** The head of a file the browser reads for the preview; the whole file goes to the server, which reads it as a stream. */
 const PREVIEW_BYTES = 512 * 1024;
@@ -28,6 +29,8 @@ interface ChosenFile {
   guessed: ColumnChoice[];
   /** Only the file's head was read for the preview (its rows are not all counted). */
   partial: boolean;
+  /** A workbook the browser opened: its sheets, the one chosen and that sheet's preview. */
+  workbook: { opened: OpenedWorkbook; sheet: string; preview: SheetPreview } | null;
 }
 
 /** The ticket of this tab's upload for a site and round that had not answered when the page was left. */
@@ -40,6 +43,7 @@ function readSent(key: string): string[] {
   }
 }
 
+const rowCount = (rows: number) => `${formatNumber(rows, 0)} ${rows === 1 ? 'row' : 'rows'}`;
 const fileSize = (bytes: number) => (bytes < 1_048_576 ? `${formatNumber(bytes / 1024, 0)} kB` : `${formatNumber(bytes / 1_048_576, 1)} MB`);
 
 /**
@@ -104,20 +108,44 @@ export function IntakePage({ trial }: { trial: TrialDetail }) {
     }
   }
 
-  async function chooseFile(file: File) {
-    if (isWorkbook(file)) {
-      // A workbook is read on the server only: its sheet, header row and columns are found there.
-      setChosen({ file, preview: { headers: [], rows: [], problem: null }, guessed: [], partial: true });
+  /** A row is the header row when the guess finds the plot label in it (the server's rule, with its spellings). */
+  const isHeaderRow = (cells: readonly string[]) => guessColumns(cells, measures, remembered).includes('plotLabel');
+
+  function showSheet(file: File, opened: OpenedWorkbook, sheet: string) {
+    const preview = opened.preview(sheet, isHeaderRow);
+    const guessed = guessColumns(preview.headers, measures, remembered);
+    setChosen({ file, preview, guessed, partial: preview.rows.length < preview.dataRows, workbook: { opened, sheet, preview } });
+    setChoices(guessed);
+    startOver();
+  }
+
+  async function chooseWorkbook(file: File) {
+    if (file.size > WORKBOOK_PREVIEW_MAX_BYTES) {
+      // Too large to open in the browser: the server reads its first visible sheet and says what it found.
+      setChosen({ file, preview: { headers: [], rows: [], problem: null }, guessed: [], partial: true, workbook: null });
       setChoices([]);
       startOver();
       return;
     }
+    try {
+      const opened = await openWorkbook(file);
+      showSheet(file, opened, opened.defaultSheet(isHeaderRow));
+    } catch {
+      const problem = 'The browser could not open this workbook for a preview; check it, and the server will say what it finds.';
+      setChosen({ file, preview: { headers: [], rows: [], problem }, guessed: [], partial: true, workbook: null });
+      setChoices([]);
+      startOver();
+    }
+  }
+
+  async function chooseFile(file: File) {
+    if (isWorkbook(file)) return chooseWorkbook(file);
     const partial = file.size > PREVIEW_BYTES;
     const text = await readFileText(partial ? file.slice(0, PREVIEW_BYTES) : file);
     // A head cut mid-line would end in half a row: the preview stops at the last whole line.
     const preview = readPreview(partial ? text.slice(0, Math.max(0, text.lastIndexOf('\n'))) : text);
     const guessed = guessColumns(preview.headers, measures, remembered);
-    setChosen({ file, preview, guessed, partial });
+    setChosen({ file, preview, guessed, partial, workbook: null });
     setChoices(guessed);
     startOver();
   }
@@ -139,6 +167,7 @@ export function IntakePage({ trial }: { trial: TrialDetail }) {
         dryRun,
         onProgress: setProgress,
         ticket: next,
+        sheet: chosen.workbook?.sheet,
       },
       {
         onSuccess: (result) => (result.dryRun ? setChecked(result) : setSaved(result)),
@@ -195,12 +224,21 @@ export function IntakePage({ trial }: { trial: TrialDetail }) {
               {chosen && (
                 <p className="fr-intake__file">
                   <strong>{chosen.file.name}</strong> · {fileSize(chosen.file.size)}
-                  {isWorkbook(chosen.file)
-                    ? ' · a workbook: the server reads its first sheet, finds the header row by the plot label column and says what it found when you check it'
+                  {chosen.workbook
+                    ? ` · sheet “${chosen.workbook.sheet}” · header in row ${chosen.workbook.preview.headerRow} · ${rowCount(chosen.workbook.preview.dataRows)} · ${formatNumber(chosen.preview.headers.length, 0)} columns`
+                    : isWorkbook(chosen.file)
+                    ? ' · a workbook too large to preview here: the server reads its first visible sheet, finds the header row by the plot label column and says what it found when you check it'
                     : chosen.partial
                       ? ` · the first ${formatNumber(chosen.preview.rows.length, 0)} rows shown · ${formatNumber(chosen.preview.headers.length, 0)} columns`
                       : ` · ${formatNumber(chosen.preview.rows.length, 0)} rows · ${formatNumber(chosen.preview.headers.length, 0)} columns`}
                 </p>
+              )}
+              {chosen?.workbook && (
+                <SheetPicker
+                  workbook={chosen.workbook}
+                  disabled={submit.isPending}
+                  onPick={(sheet) => showSheet(chosen.file, chosen.workbook!.opened, sheet)}
+                />
               )}
               {chosen?.preview.problem && (
                 <Callout intent="warning" compact icon="warning-sign">
@@ -309,5 +347,21 @@ export function IntakePage({ trial }: { trial: TrialDetail }) {
         <SafetyCautions title="While you measure" />
       </aside>
     </div>
+  );
+}
+
+/** Which sheet of a workbook to read: every sheet by its tab name (the chosen one's rows are counted above it). */
+function SheetPicker({ workbook, disabled, onPick }: { workbook: NonNullable<ChosenFile['workbook']>; disabled: boolean; onPick: (sheet: string) => void }) {
+  return (
+    <label className="fr-site-picker fr-intake__sheet">
+      <span>Sheet</span>
+      <HTMLSelect aria-label="Sheet" value={workbook.sheet} disabled={disabled} onChange={(event) => onPick(event.target.value)}>
+        {workbook.opened.sheets.map((sheet) => (
+          <option key={sheet.name} value={sheet.name}>
+            {[sheet.name, sheet.rows === 0 ? 'empty' : null, sheet.hidden ? 'hidden' : null].filter(Boolean).join(' · ')}
+          </option>
+        ))}
+      </HTMLSelect>
+    </label>
   );
 }
