@@ -135,6 +135,29 @@ describe('IntakePage', () => {
     expect((FakeUpload.sent[0]!.form?.get('file') as File).name).toBe('hollow-lane.xlsx');
   });
 
+  it('lists the sheets of a workbook too large to open here, and sends the one chosen without a preview', async () => {
+    const book = new ExcelJS.Workbook();
+    book.addWorksheet('Lists', { state: 'hidden' }).addRow(['plot label']);
+    book.addWorksheet('Week 1').addRow(['plot label', 'drain time (s)']);
+    book.addWorksheet('Week 2').addRow(['plot label', 'drain time (s)']);
+    const file = new File([await book.xlsx.writeBuffer()], 'whole-season.xlsx');
+    // Counted as 30 MB, over the 20 MB the browser opens whole: only its list of sheets is read.
+    Object.defineProperty(file, 'size', { value: 30 * 1_048_576 });
+    FakeUpload.replies.push({ status: 200, body: dryRun() });
+    renderWithApp(<IntakePage trial={activeTrial()} />);
+    await userEvent.upload(screen.getByLabelText('CSV file'), file);
+
+    const sheet = await screen.findByLabelText('Sheet');
+    expect(within(sheet).getAllByRole('option').map((o) => o.textContent)).toEqual(['Lists · hidden', 'Week 1', 'Week 2']);
+    expect(sheet).toHaveValue('Week 1');
+    await userEvent.selectOptions(sheet, 'Week 2');
+    expect(screen.getByText(/too large to preview here: the server reads the sheet “Week 2”/)).toBeInTheDocument();
+    expect(screen.queryByRole('table', { name: 'Preview of the file' })).not.toBeInTheDocument();
+    await userEvent.click(screen.getByRole('button', { name: 'Check the file' }));
+    await screen.findByText('values would be saved.', { exact: false });
+    expect(FakeUpload.sent[0]!.form?.get('sheet')).toBe('Week 2');
+  });
+
   it('lists every problem of a refused file by row and column and marks those rows in the preview', async () => {
     FakeUpload.replies.push({
       status: 422,

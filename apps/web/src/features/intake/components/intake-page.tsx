@@ -17,11 +17,18 @@ import { ImportProgress } from './import-progress';
 import { IntakeChanges } from './intake-changes';
 import { IntakeProblems } from './intake-problems';
 import { readFileText, readPreview, type CsvPreview } from './read-preview';
-import { openWorkbook, WORKBOOK_PREVIEW_MAX_BYTES, type OpenedWorkbook, type SheetPreview } from './read-workbook';
+import { openWorkbook, workbookSheets, WORKBOOK_PREVIEW_MAX_BYTES, type OpenedWorkbook, type SheetPreview, type WorkbookSheetSummary } from './read-workbook';
 
 /** The head of a file the browser reads for the preview; the whole file goes to the server, which reads it as a stream. */
 const PREVIEW_BYTES = 512 * 1024;
 const isWorkbook = (file: File) => /\.xlsx$/i.test(file.name);
+
+interface ChosenWorkbook {
+  sheets: readonly WorkbookSheetSummary[];
+  sheet: string;
+  opened: OpenedWorkbook | null;
+  preview: SheetPreview | null;
+}
 
 interface ChosenFile {
   file: File;
@@ -29,8 +36,8 @@ interface ChosenFile {
   guessed: ColumnChoice[];
   /** Only the file's head was read for the preview (its rows are not all counted). */
   partial: boolean;
-  /** A workbook the browser opened: its sheets, the one chosen and that sheet's preview. */
-  workbook: { opened: OpenedWorkbook; sheet: string; preview: SheetPreview } | null;
+  /** A workbook: its sheets and the one chosen; opened whole (with the sheet's preview) when it is small enough. */
+  workbook: ChosenWorkbook | null;
 }
 
 /** The ticket of this tab's upload for a site and round that had not answered when the page was left. */
@@ -114,27 +121,30 @@ export function IntakePage({ trial }: { trial: TrialDetail }) {
   function showSheet(file: File, opened: OpenedWorkbook, sheet: string) {
     const preview = opened.preview(sheet, isHeaderRow);
     const guessed = guessColumns(preview.headers, measures, remembered);
-    setChosen({ file, preview, guessed, partial: preview.rows.length < preview.dataRows, workbook: { opened, sheet, preview } });
+    setChosen({ file, preview, guessed, partial: preview.rows.length < preview.dataRows, workbook: { sheets: opened.sheets, sheet, opened, preview } });
     setChoices(guessed);
     startOver();
   }
 
+  /** A workbook without a preview (too large to open whole, or not readable here): the server reads it and says what it found. */
+  function showUnopened(file: File, workbook: ChosenWorkbook | null, problem: string | null = null) {
+    setChosen({ file, preview: { headers: [], rows: [], problem }, guessed: [], partial: true, workbook });
+    setChoices([]);
+    startOver();
+  }
+
   async function chooseWorkbook(file: File) {
-    if (file.size > WORKBOOK_PREVIEW_MAX_BYTES) {
-      // Too large to open in the browser: the server reads its first visible sheet and says what it found.
-      setChosen({ file, preview: { headers: [], rows: [], problem: null }, guessed: [], partial: true, workbook: null });
-      setChoices([]);
-      startOver();
-      return;
-    }
     try {
+      if (file.size > WORKBOOK_PREVIEW_MAX_BYTES) {
+        const sheets = await workbookSheets(file);
+        const first = sheets.find((sheet) => !sheet.hidden) ?? sheets[0];
+        showUnopened(file, first ? { sheets, sheet: first.name, opened: null, preview: null } : null);
+        return;
+      }
       const opened = await openWorkbook(file);
       showSheet(file, opened, opened.defaultSheet(isHeaderRow));
     } catch {
-      const problem = 'The browser could not open this workbook for a preview; check it, and the server will say what it finds.';
-      setChosen({ file, preview: { headers: [], rows: [], problem }, guessed: [], partial: true, workbook: null });
-      setChoices([]);
-      startOver();
+      showUnopened(file, null, 'The browser could not open this workbook for a preview; check it, and the server will say what it finds.');
     }
   }
 
@@ -224,10 +234,10 @@ export function IntakePage({ trial }: { trial: TrialDetail }) {
               {chosen && (
                 <p className="fr-intake__file">
                   <strong>{chosen.file.name}</strong> · {fileSize(chosen.file.size)}
-                  {chosen.workbook
+                  {chosen.workbook?.preview
                     ? ` · sheet “${chosen.workbook.sheet}” · header in row ${chosen.workbook.preview.headerRow} · ${rowCount(chosen.workbook.preview.dataRows)} · ${formatNumber(chosen.preview.headers.length, 0)} columns`
                     : isWorkbook(chosen.file)
-                    ? ' · a workbook too large to preview here: the server reads its first visible sheet, finds the header row by the plot label column and says what it found when you check it'
+                    ? ` · a workbook too large to preview here: the server reads ${chosen.workbook ? `the sheet “${chosen.workbook.sheet}”` : 'its first visible sheet'}, finds the header row by the plot label column and says what it found when you check it`
                     : chosen.partial
                       ? ` · the first ${formatNumber(chosen.preview.rows.length, 0)} rows shown · ${formatNumber(chosen.preview.headers.length, 0)} columns`
                       : ` · ${formatNumber(chosen.preview.rows.length, 0)} rows · ${formatNumber(chosen.preview.headers.length, 0)} columns`}
@@ -237,7 +247,11 @@ export function IntakePage({ trial }: { trial: TrialDetail }) {
                 <SheetPicker
                   workbook={chosen.workbook}
                   disabled={submit.isPending}
-                  onPick={(sheet) => showSheet(chosen.file, chosen.workbook!.opened, sheet)}
+                  onPick={(sheet) => {
+                    const { opened } = chosen.workbook!;
+                    if (opened) showSheet(chosen.file, opened, sheet);
+                    else showUnopened(chosen.file, { ...chosen.workbook!, sheet });
+                  }}
                 />
               )}
               {chosen?.preview.problem && (
@@ -351,12 +365,12 @@ export function IntakePage({ trial }: { trial: TrialDetail }) {
 }
 
 /** Which sheet of a workbook to read: every sheet by its tab name (the chosen one's rows are counted above it). */
-function SheetPicker({ workbook, disabled, onPick }: { workbook: NonNullable<ChosenFile['workbook']>; disabled: boolean; onPick: (sheet: string) => void }) {
+function SheetPicker({ workbook, disabled, onPick }: { workbook: ChosenWorkbook; disabled: boolean; onPick: (sheet: string) => void }) {
   return (
     <label className="fr-site-picker fr-intake__sheet">
       <span>Sheet</span>
       <HTMLSelect aria-label="Sheet" value={workbook.sheet} disabled={disabled} onChange={(event) => onPick(event.target.value)}>
-        {workbook.opened.sheets.map((sheet) => (
+        {workbook.sheets.map((sheet) => (
           <option key={sheet.name} value={sheet.name}>
             {[sheet.name, sheet.rows === 0 ? 'empty' : null, sheet.hidden ? 'hidden' : null].filter(Boolean).join(' · ')}
           </option>

@@ -12,8 +12,8 @@ const PREVIEW_ROWS = 2000;
 export interface WorkbookSheetSummary {
   readonly name: string;
   readonly hidden: boolean;
-  /** Rows holding at least one value. */
-  readonly rows: number;
+  /** Rows holding at least one value (null when the workbook was too large to open whole). */
+  readonly rows: number | null;
 }
 
 export interface SheetPreview extends CsvPreview {
@@ -84,10 +84,31 @@ export async function openWorkbook(file: Blob): Promise<OpenedWorkbook> {
     defaultSheet(isHeader) {
       const visible = sheets.filter((sheet) => !sheet.hidden);
       const named = visible.find((sheet) => rowsBySheet.get(sheet.name)!.slice(0, HEADER_SEARCH_ROWS).some((row) => isHeader(row.cells)));
-      return (named ?? visible.find((sheet) => sheet.rows > 0) ?? visible[0] ?? sheets[0])?.name ?? '';
+      return (named ?? visible.find((sheet) => sheet.rows! > 0) ?? visible[0] ?? sheets[0])?.name ?? '';
     },
     preview(sheetName, isHeader) {
       return previewOf(rowsBySheet.get(sheetName) ?? [], isHeader, sheetName);
     },
   };
+}
+
+/**
+ * Workbook sheets — the tabs of a workbook too large to open whole in the browser, in their order:
+ * only the zip's table of contents and xl/workbook.xml are unpacked (JSZip unpacks an entry only
+ * when asked), so a workbook of any size the upload takes is listed at once; rows are not counted.
+ * Reference: ECMA-376 Part 1, §18.2.19 (sheet); JSZip, https://stuk.github.io/jszip/documentation/api_jszip/load_async.html.
+ * Throws: an Error for a file that is not an .xlsx workbook (the caller says so in words).
+ * Example: `await workbookSheets(file)` → `[{ name: 'Day 0', hidden: false, rows: null }, { name: 'Day 14', hidden: false, rows: null }]`
+ */
+export async function workbookSheets(file: Blob): Promise<WorkbookSheetSummary[]> {
+  const { default: JSZip } = await import('jszip');
+  const zip = await JSZip.loadAsync(await readFileBytes(file));
+  const xml = await zip.file('xl/workbook.xml')?.async('string');
+  if (xml === undefined) throw new Error('The zip file is not an .xlsx workbook.');
+  const document = new DOMParser().parseFromString(xml, 'application/xml');
+  return Array.from(document.getElementsByTagNameNS('*', 'sheet'), (sheet) => ({
+    name: sheet.getAttribute('name') ?? '',
+    hidden: ['hidden', 'veryHidden'].includes(sheet.getAttribute('state') ?? ''),
+    rows: null,
+  }));
 }
