@@ -64,6 +64,30 @@ describe('Intake: workbooks with several sheets and typed cells', () => {
     expect(await rowCounts(t.sequelize, built.trialId)).toEqual(before);
   });
 
+  it('without a sheet named reads the first visible one, and when that one holds no values says which other sheets there are', async () => {
+    const before = await rowCounts(t.sequelize, built.trialId);
+    const response = await upload(t, built.tokens.collaborator, intakePath(built), await twoSheets(), 'weeks.xlsx');
+    expect(response.status).toBe(422);
+    expect(response.body.message).toBe(
+      'The file has a header row but no data rows (read as the sheet "Instructions"). The workbook also has "Week 1", "Week 2": choose the one that holds the values as "Sheet" when you upload.',
+    );
+    // A first sheet with rows but no plot label column: the same advice beside the missing column.
+    const notes = await workbookOf((book) => {
+      book.addWorksheet('Notes').addRow(['site', 'weather']);
+      book.getWorksheet('Notes')!.addRow(['Test Garden', 'dry']);
+      addDataSheet(book, 'Week 1', ['plot label', 'drain time (s)'], [[labels[0]!, 111]]);
+    });
+    const second = await upload(t, built.tokens.collaborator, intakePath(built), notes, 'notes.xlsx');
+    expect(second.status).toBe(422);
+    expect(second.body.errors).toEqual(
+      expect.arrayContaining([
+        { row: null, column: null, message: 'The file has no plot label column: the first column of the template is called "plot label".' },
+        { row: null, column: null, message: 'The sheet "Notes" was read. The workbook also has "Week 1": choose the one that holds the values as "Sheet" when you upload.' },
+      ]),
+    );
+    expect(await rowCounts(t.sequelize, built.trialId)).toEqual(before);
+  });
+
   it('refuses a sheet name longer than a spreadsheet allows, naming the field', async () => {
     const response = await upload(t, built.tokens.collaborator, intakePath(built), await twoSheets(), 'weeks.xlsx', { sheet: 'x'.repeat(101) });
     expect(response.status).toBe(422);
