@@ -1,7 +1,6 @@
-import type { TrialDetail, TrialSummary } from '@friable/contracts';
 import type { Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
-import { api, baseUrl, screenshot, signIn, useBrowserSession } from './support';
+import { api, openHollowLaneIntake, screenshot, useBrowserSession } from './support';
 
 const ROWS = 300_000;
 
@@ -25,16 +24,7 @@ describe('Intake shows a long upload’s progress: sending, then the server’s 
   async function openIntake(viewport: { width: number; height: number }) {
     const { page } = session;
     await page.setViewportSize(viewport);
-    await signIn(page, 'hollow.lane@example.org');
-    await page.getByRole('heading', { name: 'Trials', exact: true }).waitFor();
-    const trials = await api<TrialSummary[]>(page, '/trials');
-    const trialId = trials.find((t) => t.code === 'FW-CLAY-26')!.id;
-    const trial = await api<TrialDetail>(page, `/trials/${trialId}`);
-    const site = trial.sites.find((s) => s.name === 'Hollow Lane Community Garden')!;
-    const round = trial.rounds.find((r) => r.label === 'Day 28')!;
-    const template = await api<string>(page, `/trials/${trialId}/sites/${site.id}/rounds/${round.id}/template.csv`);
-    await page.goto(`${baseUrl()}/trials/${trialId}/intake?site=${site.id}&round=${round.id}`);
-    await page.getByLabel('CSV file', { exact: true }).waitFor({ state: 'attached' });
+    const { template } = await openHollowLaneIntake(page);
     const file = longFile(template.split(/\r?\n/)[0]!);
     await page.getByLabel('CSV file', { exact: true }).setInputFiles({ name: 'whole-season.csv', mimeType: 'text/csv', buffer: file });
     await page.getByRole('table', { name: 'Preview of the file' }).waitFor();

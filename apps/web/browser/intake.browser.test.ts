@@ -1,16 +1,7 @@
-import type { Observation, TrialDetail, TrialSummary } from '@friable/contracts';
+import type { Observation } from '@friable/contracts';
 import type { Browser, BrowserContext, Page } from 'playwright-core';
 import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
-import { baseUrl, forbidOutsideRequests, launchBrowser, screenshot, signIn } from './support';
-
-/** Calls the API as the signed-in person of this page (the token the app keeps). */
-async function api<T>(page: Page, path: string): Promise<T> {
-  return page.evaluate(async (address) => {
-    const response = await fetch(`/api${address}`, { headers: { 'X-Friable-CSRF': '1' } });
-    if (!response.ok) throw new Error(`${address}: ${response.status}`);
-    return response.headers.get('Content-Type')?.includes('json') ? response.json() : response.text();
-  }, path) as Promise<T>;
-}
+import { api, baseUrl, forbidOutsideRequests, launchBrowser, openHollowLaneIntake, screenshot } from './support';
 
 /** Fills the template's measure cells: plausible values that differ on every run, so each commit changes something. */
 function fillTemplate(template: string, seed: number): string {
@@ -49,22 +40,12 @@ describe('a site collaborator uploads a round of data through Intake', () => {
     context = await browser.newContext({ viewport: { width: 1280, height: 800 } });
     page = await context.newPage();
     forbidOutsideRequests(page, outside);
-    await signIn(page, 'hollow.lane@example.org');
-    await page.getByRole('heading', { name: 'Trials', exact: true }).waitFor();
-
-    const trials = await api<TrialSummary[]>(page, '/trials');
-    const trialId = trials.find((t) => t.code === 'FW-CLAY-26')!.id;
-    const trial = await api<TrialDetail>(page, `/trials/${trialId}`);
-    const site = trial.sites.find((s) => s.name === 'Hollow Lane Community Garden')!;
-    const round = trial.rounds.find((r) => r.label === 'Day 28')!;
-    const template = await api<string>(page, `/trials/${trialId}/sites/${site.id}/rounds/${round.id}/template.csv`);
+    const { trialId, site, round, template } = await openHollowLaneIntake(page);
     const good = fillTemplate(template, Date.now() % 997);
     const lines = good.trim().split('\n');
     const firstCells = lines[1]!.split(',');
     const broken = [lines[0], ['HL-ZZ-P99', ...firstCells.slice(1)].join(','), lines[2]!.replace(/^([^,]*,[^,]*,[^,]*,)[^,]*/, '$1abc'), ...lines.slice(3)].join('\n');
 
-    await page.goto(`${baseUrl()}/trials/${trialId}/intake?site=${site.id}&round=${round.id}`);
-    await page.getByLabel('CSV file', { exact: true }).waitFor({ state: 'attached' });
     expect(await page.getByLabel('Site', { exact: true }).locator('option').allTextContents()).toEqual(['Hollow Lane Community Garden']);
 
     await page.getByLabel('CSV file', { exact: true }).setInputFiles({ name: 'hollow-lane-day-28.csv', mimeType: 'text/csv', buffer: Buffer.from(broken) });

@@ -1,3 +1,4 @@
+import type { TrialDetail, TrialSummary } from '@friable/contracts';
 import { mkdirSync } from 'node:fs';
 import { resolve } from 'node:path';
 import { chromium, type Browser, type BrowserContext, type BrowserContextOptions, type Page } from 'playwright-core';
@@ -43,6 +44,24 @@ export async function api<T>(page: Page, path: string, init?: { method: string; 
     },
     { address: path, request: init },
   ) as Promise<T>;
+}
+
+/**
+ * Signs in as Hollow Lane's collaborator and opens Intake on the demo trial's (FW-CLAY-26) Day 28
+ * round for Hollow Lane Community Garden; answers the ids and the round's CSV template.
+ */
+export async function openHollowLaneIntake(page: Page): Promise<{ trialId: number; site: TrialDetail['sites'][number]; round: TrialDetail['rounds'][number]; template: string }> {
+  await signIn(page, 'hollow.lane@example.org');
+  await page.getByRole('heading', { name: 'Trials', exact: true }).waitFor();
+  const trials = await api<TrialSummary[]>(page, '/trials');
+  const trialId = trials.find((t) => t.code === 'FW-CLAY-26')!.id;
+  const trial = await api<TrialDetail>(page, `/trials/${trialId}`);
+  const site = trial.sites.find((s) => s.name === 'Hollow Lane Community Garden')!;
+  const round = trial.rounds.find((r) => r.label === 'Day 28')!;
+  const template = await api<string>(page, `/trials/${trialId}/sites/${site.id}/rounds/${round.id}/template.csv`);
+  await page.goto(`${baseUrl()}/trials/${trialId}/intake?site=${site.id}&round=${round.id}`);
+  await page.getByLabel('CSV file', { exact: true }).waitFor({ state: 'attached' });
+  return { trialId, site, round, template };
 }
 
 /** Fails the test on any request to a host other than the app's own (no CDN, fonts or analytics). */

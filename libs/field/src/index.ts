@@ -52,3 +52,4 @@ export {
 export { criticalFAt05, errorStrata, factorialTerms, type ErrorStratum, type StrataInput, type StratumFactor } from './design-strata';
 export { DESIGN_MINIMUMS, designWarnings, type DesignCheckInput } from './design-checks';
 export { DATA_COLUMNS, IDENTITY_COLUMNS, RECORD_COLUMNS, dataColumnOfHeader, normaliseHeader, type DataColumn } from './data-columns';
+export { workbookCellText } from './workbook-cell-text';

@@ -79,6 +79,13 @@ function mergedProblems(reading: UploadReading, header: TableHeader): IntakeProb
     });
 }
 
+/** For a workbook with sheets besides the one read: which they are, and how to choose one ('' otherwise). */
+function otherSheetsHint(reading: UploadReading): string {
+  const others = reading.sheets.filter((sheet) => sheet.name !== reading.sheet);
+  if (reading.sheet === null || others.length === 0) return '';
+  return ` The workbook also has ${others.map((sheet) => `"${sheet.name}"`).join(', ')}: choose the one that holds the values as "Sheet" when you upload.`;
+}
+
 /**
  * Check upload — reads an opened upload row by row, finds its header row, maps its columns and
  * checks every row (`IntakeChecker`), handing each value on at once while the file is error-free.
@@ -128,12 +135,14 @@ export async function checkUpload(input: CheckUploadInput): Promise<CheckedUploa
     (bytesRead) => input.onProgress(table.rowsRead, bytesRead),
     input.pause,
   );
-  table.finish(`The file has a header row but no data rows (read as ${reading.readAs}).`);
+  table.finish(`The file has a header row but no data rows (read as ${reading.readAs}).${otherSheetsHint(reading)}`);
   const found = header as TableHeader | null;
   const done = checker as IntakeChecker | null;
   if (!found || !done) throw new Error('checkUpload: a table with rows has a header');
   for (const problem of mergedProblems(reading, found)) done.addRowProblem(problem);
   const mapping = mapColumns(found.headers, measures, overrides, remembered);
+  const hint = mapping.plotLabel === null ? otherSheetsHint(reading) : '';
+  if (hint) done.addRowProblem({ row: null, column: null, message: `The sheet "${reading.sheet}" was read.${hint}` });
   const { errors, warnings } = done.finish(await input.otherSites(done.labelsToLookUp()));
   return {
     header: found,

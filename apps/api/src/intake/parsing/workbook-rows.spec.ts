@@ -2,7 +2,7 @@ import ExcelJS from 'exceljs';
 import { describe, expect, it } from 'vitest';
 import { IntakeFileError } from './intake-file.error';
 import type { SourceRow } from './table-rows';
-import { readWorkbookRows, workbookCellText } from './workbook-rows';
+import { readWorkbookRows } from './workbook-rows';
 
 async function workbook(build: (book: ExcelJS.Workbook) => void): Promise<Buffer> {
   const book = new ExcelJS.Workbook();
@@ -89,16 +89,5 @@ describe('readWorkbookRows', () => {
 
   it('refuses a zip that is not a workbook, and a damaged file, in words', async () => {
     expect((await refusal(Buffer.from([0x50, 0x4b, 0x03, 0x04, 0x14, 0x00, 0x00]))).message).toMatch(/cannot be opened as one/);
-  });
-
-  it('turns each kind of cell value into text', () => {
-    expect(workbookCellText(0.1 + 0.2)).toEqual({ text: '0.3' });
-    expect(workbookCellText(1e-7)).toEqual({ text: '1e-7' });
-    expect(workbookCellText({ text: 'link', hyperlink: 'http://example.org' })).toEqual({ text: 'link' });
-    expect(workbookCellText({ error: '#N/A' })).toEqual({ text: '#N/A' });
-    expect(workbookCellText({ sharedFormula: 'B2', result: 'text result' })).toEqual({ text: 'text result' });
-    expect(workbookCellText(Number.NaN).problem).toMatch(/could not compute/);
-    // A spreadsheet saves an error result as <v>#DIV/0!</v>; the streaming reader turns it into NaN.
-    expect(workbookCellText({ formula: 'B2/0', result: Number.NaN }).problem).toBe('a formula whose result is a spreadsheet error.');
   });
 });

@@ -2,6 +2,7 @@ import ExcelJS from 'exceljs';
 import { createReadStream } from 'node:fs';
 import { Readable } from 'node:stream';
 import { Open, type CentralDirectory } from 'unzipper';
+import { workbookCellText } from '@friable/field';
 import { INTAKE_MAX_CELL_CHARACTERS } from './csv-reader';
 import { IntakeFileError } from './intake-file.error';
 import type { SourceRow } from './table-rows';
@@ -11,8 +12,6 @@ import { INTAKE_MAX_COLUMNS } from './table-rows';
 export const WORKBOOK_MAX_UNPACKED_BYTES = 1024 * 1_048_576;
 /** Largest shared-string table (kept in memory while the sheet is read). */
 const MAX_SHARED_STRINGS_BYTES = 128 * 1_048_576;
-/** Excel shows numbers to 15 significant digits; a cached result such as 435.00000000000006 reads as 435. */
-const SIGNIFICANT_DIGITS = 15;
 
 export type WorkbookInput = { readonly path: string } | { readonly bytes: Buffer };
 
@@ -99,52 +98,6 @@ function chooseSheet(sheets: readonly WorkbookSheet[], wanted: string | null): W
     return found;
   }
   return sheets.find((sheet) => !sheet.hidden) ?? sheets[0]!;
-}
-
-function numberText(value: number): string | null {
-  if (!Number.isFinite(value)) return null;
-  return String(Number(value.toPrecision(SIGNIFICANT_DIGITS)));
-}
-
-const pad = (value: number, width = 2) => String(value).padStart(width, '0');
-
-/** A date cell as people write it: 2026-05-14, or 2026-05-14 07:30 when it has a time of day. */
-function dateText(date: Date): string {
-  const day = `${pad(date.getUTCFullYear(), 4)}-${pad(date.getUTCMonth() + 1)}-${pad(date.getUTCDate())}`;
-  const seconds = date.getUTCSeconds();
-  if (date.getUTCHours() === 0 && date.getUTCMinutes() === 0 && seconds === 0) return day;
-  return `${day} ${pad(date.getUTCHours())}:${pad(date.getUTCMinutes())}${seconds ? `:${pad(seconds)}` : ''}`;
-}
-
-type CellReading = { text: string; problem?: undefined } | { text: string; problem: string };
-
-/** One cell's typed value as text: numbers to 15 significant digits, dates as ISO dates, formulas by their saved result. */
-export function workbookCellText(value: unknown): CellReading {
-  if (value === null || value === undefined) return { text: '' };
-  if (typeof value === 'string') return { text: value };
-  if (typeof value === 'number') {
-    const text = numberText(value);
-    return text === null ? { text: '', problem: 'the cell holds a number the spreadsheet could not compute.' } : { text };
-  }
-  if (typeof value === 'boolean') return { text: value ? 'TRUE' : 'FALSE' };
-  if (value instanceof Date) return { text: dateText(value) };
-  if (typeof value === 'object') {
-    const cell = value as Record<string, unknown>;
-    if ('formula' in cell || 'sharedFormula' in cell) {
-      if (cell.result === undefined || cell.result === null) {
-        return { text: '', problem: 'a formula without a saved result. Open the file in your spreadsheet program, save it, and upload it again (or type the value).' };
-      }
-      if (typeof cell.result === 'number' && Number.isNaN(cell.result)) return { text: '', problem: 'a formula whose result is a spreadsheet error.' };
-      if (typeof cell.result === 'object' && cell.result !== null && 'error' in cell.result) {
-        return { text: String((cell.result as { error: unknown }).error) };
-      }
-      return workbookCellText(cell.result);
-    }
-    if (Array.isArray(cell.richText)) return { text: (cell.richText as Array<{ text?: string }>).map((run) => run.text ?? '').join('') };
-    if ('error' in cell) return { text: String(cell.error) };
-    if ('text' in cell) return workbookCellText(cell.text);
-  }
-  return { text: String(value) };
 }
 
 /** Watches a sheet's XML go by for `<mergeCell ref="…"/>`, which the streaming reader does not report. */

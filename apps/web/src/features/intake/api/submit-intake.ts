@@ -29,6 +29,8 @@ export interface IntakeSubmission {
   onProgress?: (fraction: number) => void;
   /** This upload's name, to follow the server's stages at GET …/intake-imports while it runs. */
   ticket?: string;
+  /** For a workbook: the sheet to read (the server reads the first visible one without it). */
+  sheet?: string;
 }
 
 /** A fresh upload name: 32 hexadecimal digits (getRandomValues works on plain http too, unlike randomUUID). */
@@ -54,15 +56,16 @@ function readBody(request: XMLHttpRequest): unknown {
 
 /**
  * POST /api/trials/:trialId/sites/:siteId/rounds/:roundId/intake (multipart: `file`, `mapping` JSON when
- * the person changed it, `acceptWarnings`, `missingReason` for the whole file when chosen), with `?dryRun=true` for the check before the commit.
+ * the person changed it, `acceptWarnings`, `missingReason` for the whole file when chosen, a workbook's `sheet`), with `?dryRun=true` for the check before the commit.
  * XMLHttpRequest rather than the typed client's fetch, because only it reports real upload progress;
  * it carries the session the same way (lib/session.ts).
  * Rejects with IntakeRefusedError (422, every problem listed) or ApiError (any other failure).
  */
-export function submitIntake({ trialId, siteId, roundId, file, mapping, acceptWarnings, missingReason, dryRun, onProgress, ticket }: IntakeSubmission): Promise<IntakeAnswer> {
+export function submitIntake({ trialId, siteId, roundId, file, mapping, acceptWarnings, missingReason, dryRun, onProgress, ticket, sheet }: IntakeSubmission): Promise<IntakeAnswer> {
   const form = new FormData();
   // The fields go before the file, so the server has them while the file is still arriving.
   if (ticket) form.append('ticket', ticket);
+  if (sheet) form.append('sheet', sheet);
   if (Object.keys(mapping).length > 0) form.append('mapping', JSON.stringify(mapping));
   form.append('acceptWarnings', acceptWarnings ? 'true' : 'false');
   if (missingReason) form.append('missingReason', missingReason);

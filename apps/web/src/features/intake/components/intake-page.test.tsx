@@ -1,6 +1,7 @@
 import type { IntakeResult } from '@friable/contracts';
 import { screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
+import ExcelJS from 'exceljs';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { mockApi, renderWithApp } from '../../../test/render';
 import { makeTrial, person } from '../../../test/trial-fixture';
@@ -104,6 +105,67 @@ describe('IntakePage', () => {
     const other = screen.getByLabelText('Column “remarks on drainage” holds');
     expect(other).toHaveValue('');
     expect(within(within(other).getByRole('group', { name: 'Notes of one measure' })).getAllByRole('option').map((o) => o.textContent)).toEqual(['Notes of Drain time — DRAIN']);
+  });
+
+  it('opens a workbook: lists its sheets, starts on the first one with a plot label column, previews the sheet chosen and sends its name', async () => {
+    const book = new ExcelJS.Workbook();
+    book.addWorksheet('Instructions').addRow(['Type one value a cell.']);
+    const week1 = book.addWorksheet('Week 1');
+    week1.addRow(['Hollow Lane, week 1']);
+    week1.addRow([]);
+    week1.addRow(['plot label', 'drain time (s)']);
+    week1.addRow(['HL-101', 412]);
+    const week2 = book.addWorksheet('Week 2');
+    week2.addRow(['plot label', 'drain time (s)', 'sampled on']);
+    week2.addRow(['HL-101', { formula: '200+12', result: 212 }, new Date(Date.UTC(2026, 4, 14))]);
+    week2.addRow(['HL-102', 305.5, null]);
+    book.addWorksheet('Lists', { state: 'hidden' }).addRow(['plot label']);
+    book.addWorksheet('Spare');
+    const file = new File([await book.xlsx.writeBuffer()], 'hollow-lane.xlsx', { type: 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet' });
+    FakeUpload.replies.push({ status: 200, body: dryRun() });
+    renderWithApp(<IntakePage trial={activeTrial()} />);
+    await userEvent.upload(screen.getByLabelText('CSV file'), file);
+
+    const sheet = await screen.findByLabelText('Sheet');
+    expect(within(sheet).getAllByRole('option').map((o) => o.textContent)).toEqual(['Instructions', 'Week 1', 'Week 2', 'Lists · hidden', 'Spare · empty']);
+    expect(sheet).toHaveValue('Week 1');
+    // Week 1's header row is row 3, below a title: its one plot is on row 4.
+    let preview = screen.getByRole('table', { name: 'Preview of the file' });
+    expect(within(preview).getAllByRole('row').slice(1).map((row) => within(row).getByRole('rowheader').textContent)).toEqual(['4']);
+    expect(screen.getByText(/sheet “Week 1” · header in row 3 · 1 row ·/)).toBeInTheDocument();
+
+    await userEvent.selectOptions(sheet, 'Week 2');
+    preview = screen.getByRole('table', { name: 'Preview of the file' });
+    const rows = within(preview).getAllByRole('row').slice(1);
+    expect(rows.map((row) => row.textContent)).toEqual(['2HL-1012122026-05-14', '3HL-102305.5']);
+    expect(screen.getByLabelText('Column “drain time (s)” holds')).toHaveValue('DRAIN');
+    await userEvent.click(screen.getByRole('button', { name: 'Check the file' }));
+    await screen.findByText('values would be saved.', { exact: false });
+    expect(FakeUpload.sent[0]!.form?.get('sheet')).toBe('Week 2');
+    expect((FakeUpload.sent[0]!.form?.get('file') as File).name).toBe('hollow-lane.xlsx');
+  });
+
+  it('lists the sheets of a workbook too large to open here, and sends the one chosen without a preview', async () => {
+    const book = new ExcelJS.Workbook();
+    book.addWorksheet('Lists', { state: 'hidden' }).addRow(['plot label']);
+    book.addWorksheet('Week 1').addRow(['plot label', 'drain time (s)']);
+    book.addWorksheet('Week 2').addRow(['plot label', 'drain time (s)']);
+    const file = new File([await book.xlsx.writeBuffer()], 'whole-season.xlsx');
+    // Counted as 30 MB, over the 20 MB the browser opens whole: only its list of sheets is read.
+    Object.defineProperty(file, 'size', { value: 30 * 1_048_576 });
+    FakeUpload.replies.push({ status: 200, body: dryRun() });
+    renderWithApp(<IntakePage trial={activeTrial()} />);
+    await userEvent.upload(screen.getByLabelText('CSV file'), file);
+
+    const sheet = await screen.findByLabelText('Sheet');
+    expect(within(sheet).getAllByRole('option').map((o) => o.textContent)).toEqual(['Lists · hidden', 'Week 1', 'Week 2']);
+    expect(sheet).toHaveValue('Week 1');
+    await userEvent.selectOptions(sheet, 'Week 2');
+    expect(screen.getByText(/too large to preview here: the server reads the sheet “Week 2”/)).toBeInTheDocument();
+    expect(screen.queryByRole('table', { name: 'Preview of the file' })).not.toBeInTheDocument();
+    await userEvent.click(screen.getByRole('button', { name: 'Check the file' }));
+    await screen.findByText('values would be saved.', { exact: false });
+    expect(FakeUpload.sent[0]!.form?.get('sheet')).toBe('Week 2');
   });
 
   it('lists every problem of a refused file by row and column and marks those rows in the preview', async () => {

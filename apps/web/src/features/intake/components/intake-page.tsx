@@ -15,10 +15,11 @@ import { guessColumns, mappingOverrides } from './guess-columns';
 import { intakeAccess } from './intake-access';
 import { ImportProgress } from './import-progress';
 import { IntakeChanges } from './intake-changes';
-import { isWorkbook, UploadSection } from './upload-section';
+import { isWorkbook, UploadSection, type ChosenWorkbook } from './upload-section';
 import { useFollowedImports } from '../hooks/use-followed-imports';
 import { IntakeProblems } from './intake-problems';
 import { readFileText, readPreview, type CsvPreview } from './read-preview';
+import { openWorkbook, workbookSheets, WORKBOOK_PREVIEW_MAX_BYTES, type OpenedWorkbook } from './read-workbook';
 
 /** The head of a file the browser reads for the preview; the whole file goes to the server, which reads it as a stream. */
 const PREVIEW_BYTES = 512 * 1024;
@@ -29,6 +30,8 @@ interface ChosenFile {
   guessed: ColumnChoice[];
   /** Only the file's head was read for the preview (its rows are not all counted). */
   partial: boolean;
+  /** A workbook: its sheets and the one chosen; opened whole (with the sheet's preview) when it is small enough. */
+  workbook: ChosenWorkbook | null;
 }
 
 /**
@@ -82,20 +85,47 @@ export function IntakePage({ trial }: { trial: TrialDetail }) {
     }
   }
 
-  async function chooseFile(file: File) {
-    if (isWorkbook(file)) {
-      // A workbook is read on the server only: its sheet, header row and columns are found there.
-      setChosen({ file, preview: { headers: [], rows: [], problem: null }, guessed: [], partial: true });
-      setChoices([]);
-      startOver();
-      return;
+  /** A row is the header row when the guess finds the plot label in it (the server's rule, with its spellings). */
+  const isHeaderRow = (cells: readonly string[]) => guessColumns(cells, measures, remembered).includes('plotLabel');
+
+  function showSheet(file: File, opened: OpenedWorkbook, sheet: string) {
+    const preview = opened.preview(sheet, isHeaderRow);
+    const guessed = guessColumns(preview.headers, measures, remembered);
+    setChosen({ file, preview, guessed, partial: preview.rows.length < preview.dataRows, workbook: { sheets: opened.sheets, sheet, opened, preview } });
+    setChoices(guessed);
+    startOver();
+  }
+
+  /** A workbook without a preview (too large to open whole, or not readable here): the server reads it and says what it found. */
+  function showUnopened(file: File, workbook: ChosenWorkbook | null, problem: string | null = null) {
+    setChosen({ file, preview: { headers: [], rows: [], problem }, guessed: [], partial: true, workbook });
+    setChoices([]);
+    startOver();
+  }
+
+  async function chooseWorkbook(file: File) {
+    try {
+      if (file.size > WORKBOOK_PREVIEW_MAX_BYTES) {
+        const sheets = await workbookSheets(file);
+        const first = sheets.find((sheet) => !sheet.hidden) ?? sheets[0];
+        showUnopened(file, first ? { sheets, sheet: first.name, opened: null, preview: null } : null);
+        return;
+      }
+      const opened = await openWorkbook(file);
+      showSheet(file, opened, opened.defaultSheet(isHeaderRow));
+    } catch {
+      showUnopened(file, null, 'The browser could not open this workbook for a preview; check it, and the server will say what it finds.');
     }
+  }
+
+  async function chooseFile(file: File) {
+    if (isWorkbook(file)) return chooseWorkbook(file);
     const partial = file.size > PREVIEW_BYTES;
     const text = await readFileText(partial ? file.slice(0, PREVIEW_BYTES) : file);
     // A head cut mid-line would end in half a row: the preview stops at the last whole line.
     const preview = readPreview(partial ? text.slice(0, Math.max(0, text.lastIndexOf('\n'))) : text);
     const guessed = guessColumns(preview.headers, measures, remembered);
-    setChosen({ file, preview, guessed, partial });
+    setChosen({ file, preview, guessed, partial, workbook: null });
     setChoices(guessed);
     startOver();
   }
@@ -118,6 +148,7 @@ export function IntakePage({ trial }: { trial: TrialDetail }) {
         dryRun,
         onProgress: setProgress,
         ticket: next,
+        sheet: chosen.workbook?.sheet,
       },
       {
         onSuccess: (result) => (result.dryRun ? setChecked(result) : setSaved(result)),
@@ -162,7 +193,19 @@ export function IntakePage({ trial }: { trial: TrialDetail }) {
             {site.name} is not randomized yet; once its plot plan exists, its data can be uploaded here.
           </Callout>
         ) : (
-          <UploadSection trial={trial} site={site} round={round} chosen={chosen} disabled={submit.isPending} onFile={chooseFile} />
+          <UploadSection
+            trial={trial}
+            site={site}
+            round={round}
+            chosen={chosen}
+            disabled={submit.isPending}
+            onFile={chooseFile}
+            onPickSheet={(sheet) => {
+              const { opened } = chosen!.workbook!;
+              if (opened) showSheet(chosen!.file, opened, sheet);
+              else showUnopened(chosen!.file, { ...chosen!.workbook!, sheet });
+            }}
+          />
         )}
 
         {followed.length > 0 && (

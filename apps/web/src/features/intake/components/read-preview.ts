@@ -38,12 +38,21 @@ export function readPreview(text: string): CsvPreview {
   };
 }
 
-/** The text of a chosen file, as UTF-8 (FileReader, which every browser and jsdom have). */
-export function readFileText(file: Blob): Promise<string> {
+function readFile<T>(read: (reader: FileReader) => void, result: (reader: FileReader) => T): Promise<T> {
   return new Promise((resolve, reject) => {
     const reader = new FileReader();
-    reader.onload = () => resolve(String(reader.result ?? ''));
+    reader.onload = () => resolve(result(reader));
     reader.onerror = () => reject(reader.error ?? new Error('The file could not be read.'));
-    reader.readAsText(file, 'utf-8');
+    read(reader);
   });
+}
+
+/** The text of a chosen file, as UTF-8 (FileReader, which every browser and jsdom have). */
+export function readFileText(file: Blob): Promise<string> {
+  return readFile((reader) => reader.readAsText(file, 'utf-8'), (reader) => String(reader.result ?? ''));
+}
+
+/** The bytes of a chosen file (a workbook), by FileReader as well. */
+export function readFileBytes(file: Blob): Promise<ArrayBuffer> {
+  return readFile((reader) => reader.readAsArrayBuffer(file), (reader) => reader.result as ArrayBuffer);
 }
