@@ -116,6 +116,8 @@ describe('protocol input checks, locking and factorial treatments', () => {
     const before = await counts(trial.trialId);
     const writes = [
       patchCurrent(t, at, lockAuth, { title: 'Changed while locked' }),
+      // Made from an old copy as well: the lock is what the person needs to hear.
+      t.http.patch(at).set(lockAuth).send({ title: 'Changed from an old copy', version: 1 }),
       t.http.post(`${at}/treatments`).set(lockAuth).send({ code: 'N', name: 'New' }),
       patchCurrent(t, `${at}/treatments/${trial.treatments.G}`, lockAuth, { name: 'Renamed' }),
       t.http.delete(`${at}/treatments/${trial.treatments.K}`).set(lockAuth),

@@ -87,6 +87,8 @@ export async function currentVersion(testApp: TestApp, path: string, auth: Recor
   const match = versionedPath.exec(path);
   if (!match) throw new Error(`${path} is not a versioned protocol record`);
   const detail = await testApp.http.get(`/api/trials/${match[1]}`).set(auth);
+  // A trial the reader may not see has no version to read (the PATCH is refused for that anyway); a failing read must not pass for version 1.
+  if (detail.status >= 500) throw new Error(`reading the version of ${path} answered ${detail.status}: ${JSON.stringify(detail.body)}`);
   if (detail.status !== 200) return 1;
   if (!match[2]) return detail.body.version as number;
   const row = (detail.body[match[2]] as Array<{ id: number; version: number }>).find((r) => r.id === Number(match[3]));

@@ -10,7 +10,7 @@ import { definedOnly } from '../common/defined-only';
 import { changeDetails, refuseStaleEdit } from '../protocol-gate/edit-version';
 import type { AuthUser, TrialAccessContext } from '../common/auth-user';
 import { FieldProblemsException } from '../common/exceptions/field-problems.exception';
-import { TrialLockedException } from '../common/exceptions/trial-locked.exception';
+import { refuseIfClosed, TrialLockedException } from '../common/exceptions/trial-locked.exception';
 import { ObservationsGuardService } from '../protocol-gate/observations-guard.service';
 import { ProtocolGateService } from '../protocol-gate/protocol-gate.service';
 import { FactorsService } from '../factors/factors.service';
@@ -139,9 +139,11 @@ export class TrialsService {
     return this.sequelize.transaction(async (transaction) => {
       const trial = await this.trials.findByPk(access.trialId, { transaction, lock: transaction.LOCK.UPDATE });
       if (!trial) throw new NotFoundException('No such trial.');
-      await refuseStaleEdit(`trial ${trial.code}`, trial.version, sent.version, () => this.get(access, transaction));
       const { status, reason, ...fields } = input;
       const fieldNames = (Object.keys(fields) as Array<keyof typeof fields>).filter((key) => fields[key] !== undefined);
+      // A locked trial takes no edit whatever copy it was made from: say so before any talk of versions.
+      if (fieldNames.length) refuseIfClosed(trial);
+      await refuseStaleEdit(`trial ${trial.code}`, trial.version, sent.version, () => this.get(access, transaction));
       if (fieldNames.length) {
         await this.gate.openForWrite(trial.id, transaction);
         if (fields.design !== undefined && fields.design !== trial.design) {
