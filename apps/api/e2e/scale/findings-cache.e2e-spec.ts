@@ -32,7 +32,7 @@ describe('Findings cache: kept until the next write, through any instance', () =
     const response = await upload(one, built.tokens.collaborator, intakePath(built), Buffer.from(csv), 'day0.csv');
     if (response.status !== 200) throw new Error(JSON.stringify(response.body));
     findingsPath = `/api/trials/${built.trialId}/findings?measureId=${built.measures.WR}&roundId=${built.roundId}&siteId=${built.siteId}`;
-  });
+  }, 120_000); // two API instances and two trials: over a minute on a busy two-core machine
   afterAll(async () => {
     await one.close();
     await two.close();
