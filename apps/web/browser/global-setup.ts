@@ -23,6 +23,12 @@ export async function setup(): Promise<void> {
   if (!existsSync(main) || !existsSync(resolve(repoRoot, 'apps/web/dist/index.html'))) {
     throw new Error('Build the API and the web app first (npm test does this).');
   }
+  // A server already answering there (an API left over from an interrupted run) would be tested in place of this build.
+  const leftover = await fetch(`http://127.0.0.1:${port}/api/health`).then(
+    () => true,
+    () => false,
+  );
+  if (leftover) throw new Error(`port ${port} already has a server (an API left over from an interrupted run?); stop it, or set TEST_PORT, and run again`);
   api = spawn(process.execPath, [main], { env, stdio: ['ignore', 'ignore', 'inherit'] });
   process.env.FRIABLE_BROWSER_BASE_URL = `http://127.0.0.1:${port}`;
   for (let attempt = 0; attempt < 120; attempt += 1) {
